@@ -1,0 +1,88 @@
+/**
+ * The one error type of the calculation core.
+ *
+ * Every core function that rejects its input throws a {@link SunpaneError} naming the argument,
+ * the value it was given and the allowed range. Only the adapters (Excel, CLI, pane) turn it into
+ * something a user sees; they show {@link SunpaneError.message} unchanged.
+ */
+export class SunpaneError extends Error {
+  /** The argument's name, as in the registry and the glossary (e.g. `latitude`). */
+  readonly argument: string;
+  /** The value that was refused (as given). */
+  readonly value: unknown;
+  /** The allowed values in words, e.g. `from -90 to 90 °`. */
+  readonly allowed: string;
+
+  constructor(argument: string, value: unknown, allowed: string, detail?: string) {
+    super(`${argument} = ${describeValue(value)} is not allowed: ${allowed}${detail ? ` (${detail})` : ''}`);
+    this.name = 'SunpaneError';
+    this.argument = argument;
+    this.value = value;
+    this.allowed = allowed;
+  }
+}
+
+/** A short, readable rendering of a refused value for messages. */
+export function describeValue(value: unknown): string {
+  if (value === null || value === undefined) return 'blank';
+  if (typeof value === 'string') return value === '' ? 'blank' : JSON.stringify(value.length > 40 ? `${value.slice(0, 37)}...` : value);
+  if (typeof value === 'number') {
+    if (Number.isNaN(value)) return 'NaN';
+    if (!Number.isFinite(value)) return value > 0 ? 'Infinity' : '-Infinity';
+    return String(Number(value.toPrecision(10)));
+  }
+  if (Array.isArray(value)) return `a list of ${value.length}`;
+  return String(value);
+}
+
+function unitSuffix(unit: string | undefined): string {
+  return unit ? ` ${unit}` : '';
+}
+
+/** Returns `value` if it is a finite number, else throws naming `argument`. */
+export function requireFinite(argument: string, value: unknown, unit?: string): number {
+  if (typeof value !== 'number' || !Number.isFinite(value)) {
+    throw new SunpaneError(argument, value, `must be a finite number${unit ? ` in ${unit}` : ''}`);
+  }
+  return value;
+}
+
+/**
+ * Returns `value` if it is a finite number within [min, max] (bounds optional and inclusive unless
+ * `exclusiveMin` / `exclusiveMax`), else throws a {@link SunpaneError} stating the allowed range.
+ */
+export function requireRange(
+  argument: string,
+  value: unknown,
+  min: number | undefined,
+  max: number | undefined,
+  unit?: string,
+  options: { exclusiveMin?: boolean; exclusiveMax?: boolean; integer?: boolean } = {},
+): number {
+  const allowed = rangeText(min, max, unit, options);
+  if (typeof value !== 'number' || !Number.isFinite(value)) throw new SunpaneError(argument, value, allowed);
+  if (options.integer && !Number.isInteger(value)) throw new SunpaneError(argument, value, allowed);
+  if (min !== undefined && (options.exclusiveMin ? value <= min : value < min)) throw new SunpaneError(argument, value, allowed);
+  if (max !== undefined && (options.exclusiveMax ? value >= max : value > max)) throw new SunpaneError(argument, value, allowed);
+  return value;
+}
+
+/** The words for an allowed range, used in every range message so they read alike. */
+export function rangeText(
+  min: number | undefined,
+  max: number | undefined,
+  unit?: string,
+  options: { exclusiveMin?: boolean; exclusiveMax?: boolean; integer?: boolean } = {},
+): string {
+  const kind = options.integer ? 'a whole number' : 'a number';
+  const u = unitSuffix(unit);
+  if (min !== undefined && max !== undefined) {
+    if (options.exclusiveMin || options.exclusiveMax) {
+      return `must be ${kind} ${options.exclusiveMin ? 'above' : 'from'} ${min} and ${options.exclusiveMax ? 'below' : 'up to'} ${max}${u}`;
+    }
+    return `must be ${kind} from ${min} to ${max}${u}`;
+  }
+  if (min !== undefined) return `must be ${kind} ${options.exclusiveMin ? 'above' : 'of at least'} ${min}${u}`;
+  if (max !== undefined) return `must be ${kind} ${options.exclusiveMax ? 'below' : 'of at most'} ${max}${u}`;
+  return `must be ${kind}${u ? ` in${u}` : ''}`;
+}

@@ -1,0 +1,4 @@
+/** Worksheet-function descriptors: gain. */
+import type { FunctionDescriptor } from './types';
+
+export const GAIN_FUNCTIONS: readonly FunctionDescriptor[] = [];

@@ -1,0 +1,4 @@
+/** Worksheet-function descriptors: glazing. */
+import type { FunctionDescriptor } from './types';
+
+export const GLAZING_FUNCTIONS: readonly FunctionDescriptor[] = [];

@@ -1,0 +1,4 @@
+/** Worksheet-function descriptors: shading. */
+import type { FunctionDescriptor } from './types';
+
+export const SHADING_FUNCTIONS: readonly FunctionDescriptor[] = [];

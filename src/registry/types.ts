@@ -1,0 +1,106 @@
+/**
+ * The shape of a worksheet-function descriptor: the single description of each function, from which
+ * Excel's functions.json, the CLI's `call` and `list`, the README reference and the fuzz tests are
+ * all derived.
+ */
+import type { SunpaneError } from '../core/errors';
+
+/** One value as it comes from a cell or a CLI argument. `null` is a blank cell. */
+export type Scalar = number | string | boolean | null;
+/** A range: rows of cells. */
+export type Matrix = Scalar[][];
+/** One argument as given: a single value or a range. */
+export type RawArg = Scalar | Matrix;
+
+/**
+ * A cell that has no value for a documented reason that is not bad input (no sunrise during polar
+ * day, for example). Excel shows it as #N/A with the message; the CLI prints `#N/A` and the message.
+ */
+export class NotAvailable {
+  constructor(readonly message: string) {}
+}
+
+/** One result cell: a number, a text, a per-cell input error, or a documented "no value". */
+export type OutCell = number | string | SunpaneError | NotAvailable;
+/** A result: rows of cells (a single value is a 1 × 1 table). */
+export type OutTable = OutCell[][];
+
+/**
+ * How a parameter is read.
+ * - `number`: a finite number, checked against min/max/integer.
+ * - `dateTime`: a spreadsheet serial in local standard time, or an ISO 8601 local date-time text.
+ * - `choice`: one of `choices` (case-insensitive text), passed on in the spelling of `choices`.
+ * - `flag`: TRUE/FALSE (also 1/0).
+ * - `numberList`: the whole range, read row by row into a list of numbers (not broadcast).
+ * - `table`: the whole range as given, rows of cells (not broadcast).
+ */
+export type ParamKind = 'number' | 'dateTime' | 'choice' | 'flag' | 'numberList' | 'table';
+
+export interface ParamDescriptor {
+  /** The glossary name, camelCase, e.g. `latitude`. Shown as the parameter name in Excel. */
+  name: string;
+  /** One line saying what it is, without unit or range (those are added where it is shown). */
+  description: string;
+  kind: ParamKind;
+  /** Unit as printed, e.g. `°`, `h`, `m`, `W/m²`; omit for pure numbers. */
+  unit?: string;
+  min?: number;
+  max?: number;
+  exclusiveMin?: boolean;
+  exclusiveMax?: boolean;
+  integer?: boolean;
+  /** Allowed texts for `choice`. */
+  choices?: readonly string[];
+  /** Default for a blank or omitted argument. A parameter with a default is optional. */
+  default?: number | string | boolean;
+  /** Optional without a default value: the function works something out itself (documented in `description`). */
+  optional?: boolean;
+  /** For `numberList`: allowed count of numbers. Element bounds use min/max. */
+  length?: { min?: number; max?: number; exact?: number };
+  /** For `numberList`: numbers must be strictly ascending. */
+  ascending?: boolean;
+}
+
+/** A parameter's value after reading: what `evaluate` receives under the parameter's name. */
+export type ArgValue = number | string | boolean | number[] | Matrix | undefined;
+export type Args = Record<string, ArgValue>;
+
+export interface ResultDescriptor {
+  /** `value`: one number per (broadcast) cell. `spill`: a table from single-value arguments. */
+  shape: 'value' | 'spill';
+  unit?: string;
+  /** What the value is; for spills, what rows and columns hold. */
+  description: string;
+  /** For spills: column headings, when fixed. */
+  columns?: readonly string[];
+  /** Bounds a valid result always keeps (checked by the fuzz tests). */
+  min?: number;
+  max?: number;
+  /** `dateTime`: the number is a local serial date-time (the CLI also shows it as ISO 8601). */
+  kind?: 'number' | 'dateTime' | 'text';
+}
+
+export interface FunctionDescriptor {
+  /** Worksheet name without the namespace: uppercase letters and digits, e.g. `SUNALTITUDE`. */
+  name: string;
+  /** One line, shown in formula autocomplete and `sunpane list`. */
+  summary: string;
+  /** Reference section. */
+  category: 'Time and sun' | 'Surface angles' | 'Shading' | 'Sky and irradiance' | 'Glazing' | 'Gain and load';
+  params: readonly ParamDescriptor[];
+  result: ResultDescriptor;
+  /**
+   * Computes one result from read and checked arguments (defaults already applied). Returns a
+   * number, a {@link NotAvailable}, or for spills a table. Throws {@link SunpaneError} on bad input.
+   */
+  evaluate(args: Args): number | NotAvailable | OutTable;
+  /**
+   * For the fuzz tests and docs: combinations of individually valid arguments that the function
+   * still refuses with a SunpaneError (e.g. overhang extensions that leave it a negative width).
+   * Returns the reason, or undefined when the combination is valid. The fuzz tests expect a
+   * SunpaneError exactly when this returns a reason.
+   */
+  refuses?(args: Args): string | undefined;
+  /** Worked examples for the reference: arguments as typed in a cell (text), and what they show. */
+  examples?: readonly { args: readonly string[]; note: string }[];
+}
