@@ -1,0 +1,49 @@
+/**
+ * Benchmark harness: median wall time of repeated runs, in one process, so that ratios against peer
+ * libraries measured in the same run are comparable. Each bench/<area>.ts exports a
+ * `BenchSection` factory; bench/run.ts prints them all and ends with one JSON line of ratios.
+ */
+import { performance } from 'node:perf_hooks';
+
+export interface Timing {
+  /** What was timed, e.g. "sun position, direct SPA (8760 instants)". */
+  label: string;
+  /** Median time of one run of the work [ms]. */
+  medianMs: number;
+  /** Evaluations per run, to print µs per evaluation. */
+  operations: number;
+}
+
+export interface BenchSection {
+  title: string;
+  timings: Timing[];
+  /** Named ratios ours / theirs (median times), merged into the final JSON line. */
+  ratios: Record<string, number>;
+}
+
+/** Sink that keeps results alive so the optimiser cannot drop the timed work. */
+export let blackhole = 0;
+export function consume(x: number): void {
+  blackhole += x;
+}
+
+/**
+ * Times `work` (one whole run, e.g. 8760 evaluations) `repeats` times after `warmup` untimed runs and
+ * returns the median.
+ */
+export function timeIt(label: string, operations: number, work: () => void, repeats = 21, warmup = 5): Timing {
+  for (let i = 0; i < warmup; i++) work();
+  const times: number[] = [];
+  for (let i = 0; i < repeats; i++) {
+    const t0 = performance.now();
+    work();
+    times.push(performance.now() - t0);
+  }
+  times.sort((a, b) => a - b);
+  return { label, medianMs: times[Math.floor(times.length / 2)], operations };
+}
+
+/** ratio = ours / theirs of median times, rounded to 3 significant digits. */
+export function ratio(ours: Timing, theirs: Timing): number {
+  return Number((ours.medianMs / theirs.medianMs).toPrecision(3));
+}
