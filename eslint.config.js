@@ -27,6 +27,10 @@ module.exports = tseslint.config(
     rules: restrict(['../functions/*', '../taskpane/*', '../cli/*', ...nodeBuiltinPatterns], 'src/registry depends only on src/core.'),
   },
   {
+    files: ['src/demo/**/*.ts'],
+    rules: restrict(['../functions/*', '../taskpane/*', '../cli/*', ...nodeBuiltinPatterns], 'src/demo is invented data on top of src/core only.'),
+  },
+  {
     files: ['src/functions/**/*.ts'],
     rules: restrict(['../taskpane/*', '../cli/*', ...nodeBuiltinPatterns], 'Adapters never import each other (DESIGN.md).'),
   },
