@@ -1,0 +1,87 @@
+/**
+ * The broadcasting rules of src/registry/evaluate.ts, on a toy descriptor (plumbing only: no
+ * calculation is checked here, so no outside source applies).
+ */
+import { SunpaneError, requireRange } from '../../src/core/errors';
+import { applyFunction } from '../../src/registry/evaluate';
+import { type FunctionDescriptor, NotAvailable } from '../../src/registry/types';
+
+const ADD: FunctionDescriptor = {
+  name: 'TOYADD',
+  summary: 'a + b × scale',
+  category: 'Time and sun',
+  params: [
+    { name: 'a', kind: 'number', min: 0, max: 10, description: 'first' },
+    { name: 'b', kind: 'number', min: -5, max: 5, description: 'second' },
+    { name: 'scale', kind: 'number', min: 0, max: 100, default: 1, description: 'scale' },
+  ],
+  result: { shape: 'value', description: 'sum' },
+  evaluate: (args) => {
+    if ((args.a as number) === 7) return new NotAvailable('seven has no value');
+    return (args.a as number) + (args.b as number) * (args.scale as number);
+  },
+};
+
+const LIST: FunctionDescriptor = {
+  name: 'TOYSUM',
+  summary: 'sum of a list',
+  category: 'Time and sun',
+  params: [{ name: 'values', kind: 'numberList', min: 0, max: 90, length: { min: 2, max: 4 }, ascending: true, description: 'values' }],
+  result: { shape: 'spill', description: 'the list and its sum' },
+  evaluate: (args) => [[...(args.values as number[]), (args.values as number[]).reduce((s, v) => s + v, 0)]],
+};
+
+describe('broadcasting over ranges', () => {
+  test('single values give a 1 × 1 result and blanks take the default', () => {
+    expect(applyFunction(ADD, [1, 2])).toEqual([[3]]);
+    expect(applyFunction(ADD, [1, 2, null])).toEqual([[3]]);
+    expect(applyFunction(ADD, [[[1]], 2, 10])).toEqual([[21]]);
+  });
+
+  test('ranges of equal shape pair element by element and single values pair with all', () => {
+    expect(applyFunction(ADD, [[[1, 2], [3, 4]], [[1, 1], [2, 2]], 10])).toEqual([[11, 12], [23, 24]]);
+    expect(applyFunction(ADD, [[[1], [2], [3]], 1])).toEqual([[2], [3], [4]]);
+  });
+
+  test('mismatched shapes are refused naming the argument and both shapes', () => {
+    expect(() => applyFunction(ADD, [[[1, 2]], [[1], [2]]])).toThrow(/b = "a 2 × 1 range" is not allowed: must be a single value or a range of the same shape as a \(1 × 2\)/);
+  });
+
+  test('a bad element makes only its own cell an error, naming argument, value and range', () => {
+    const out = applyFunction(ADD, [[[1], [11], ['x'], [null]], 1]);
+    expect(out[0][0]).toBe(2);
+    expect(out[1][0]).toBeInstanceOf(SunpaneError);
+    expect((out[1][0] as SunpaneError).message).toBe('a = 11 is not allowed: must be a number from 0 to 10');
+    expect((out[2][0] as SunpaneError).message).toBe('a = "x" is not allowed: must be a number from 0 to 10');
+    expect((out[3][0] as SunpaneError).message).toMatch(/^a = blank is not allowed: is required/);
+  });
+
+  test('a documented no-value result passes through as NotAvailable', () => {
+    expect(applyFunction(ADD, [7, 0])[0][0]).toBeInstanceOf(NotAvailable);
+  });
+
+  test('too many arguments are refused', () => {
+    expect(() => applyFunction(ADD, [1, 2, 3, 4])).toThrow(/TOYADD takes at most 3 arguments/);
+  });
+
+  test('number lists take the whole range, skip blanks, and check count, bounds and order', () => {
+    expect(applyFunction(LIST, [[[10, 20], [null, 30]]])).toEqual([[10, 20, 30, 60]]);
+    expect(() => applyFunction(LIST, [[[10]]])).toThrow(/values = a list of 1 is not allowed: must hold 2 to 4 numbers/);
+    expect(() => applyFunction(LIST, [[[10, 95]]])).toThrow(/values \(value 2\) = 95 is not allowed: must be a number from 0 to 90/);
+    expect(() => applyFunction(LIST, [[[20, 10]]])).toThrow(/must be strictly ascending/);
+  });
+
+  test('a spilling function refuses a range for a broadcast argument', () => {
+    const spill: FunctionDescriptor = { ...ADD, name: 'TOYSPILL', result: { shape: 'spill', description: 'x' }, evaluate: (a) => [[a.a as number]] };
+    expect(() => applyFunction(spill, [[[1], [2]], 0])).toThrow(/must be a single value: TOYSPILL spills a table of its own/);
+  });
+
+  test('a non-finite number never leaves the registry', () => {
+    const broken: FunctionDescriptor = { ...ADD, name: 'TOYBROKEN', evaluate: () => Number.NaN };
+    expect(() => applyFunction(broken, [1, 1])).toThrow(/non-finite/);
+  });
+
+  test('core range messages read like the registry ones', () => {
+    expect(() => requireRange('latitude', 95, -90, 90, '°')).toThrow('latitude = 95 is not allowed: must be a number from -90 to 90 °');
+  });
+});

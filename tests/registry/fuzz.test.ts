@@ -1,0 +1,163 @@
+/**
+ * Property tests driven by the registry (fast-check): for EVERY registered worksheet function,
+ * random valid arguments (inside each parameter's declared range) give finite results inside the
+ * declared result range, and one random invalid argument gives the typed error naming that
+ * argument. The descriptors' ranges are the contract; this test holds the core to it.
+ */
+import fc from 'fast-check';
+import { SunpaneError } from '../../src/core/errors';
+import { MAX_SERIAL_EXCLUSIVE, MIN_SERIAL } from '../../src/core/time';
+import { applyFunction, readRange, readScalar } from '../../src/registry/evaluate';
+import { FUNCTIONS, isOptional } from '../../src/registry';
+import { type Args, type FunctionDescriptor, NotAvailable, type OutTable, type ParamDescriptor, type RawArg } from '../../src/registry/types';
+
+const RUNS = Number(process.env.SUNPANE_FUZZ_RUNS ?? 40);
+
+function numberArb(p: ParamDescriptor): fc.Arbitrary<number> {
+  const min = p.min ?? -1e6;
+  const max = p.max ?? 1e6;
+  if (p.integer) return fc.integer({ min: Math.ceil(min + (p.exclusiveMin ? 1 : 0)), max: Math.floor(max - (p.exclusiveMax ? 1 : 0)) });
+  const lo = p.exclusiveMin ? min + Math.max(1e-9, Math.abs(min) * 1e-9) : min;
+  const hi = p.exclusiveMax ? max - Math.max(1e-9, Math.abs(max) * 1e-9) : max;
+  // Edge values are where formulas break: give them a fair chance besides the random interior.
+  return fc.oneof(
+    { weight: 6, arbitrary: fc.double({ min: lo, max: hi, noNaN: true, noDefaultInfinity: true }) },
+    { weight: 1, arbitrary: fc.constantFrom(lo, hi, Math.min(Math.max(0, lo), hi)) },
+  );
+}
+
+function validArb(p: ParamDescriptor): fc.Arbitrary<RawArg> {
+  let arb: fc.Arbitrary<RawArg>;
+  switch (p.kind) {
+    case 'number':
+      arb = numberArb(p);
+      break;
+    case 'dateTime':
+      arb = fc.double({ min: MIN_SERIAL, max: MAX_SERIAL_EXCLUSIVE - 1, noNaN: true });
+      break;
+    case 'choice':
+      arb = fc.constantFrom(...(p.choices ?? []));
+      break;
+    case 'flag':
+      arb = fc.boolean();
+      break;
+    case 'numberList': {
+      const minLen = p.length?.exact ?? p.length?.min ?? 1;
+      const maxLen = p.length?.exact ?? Math.min(p.length?.max ?? 48, 48);
+      arb = fc
+        .array(numberArb({ ...p, kind: 'number' }), { minLength: minLen, maxLength: maxLen })
+        .map((xs) => (p.ascending ? [...new Set(xs)].sort((a, b) => a - b) : xs))
+        .filter((xs) => xs.length >= minLen)
+        .map((xs) => [xs]);
+      break;
+    }
+    default:
+      throw new Error(`fuzz: no generator for ${p.kind} parameter ${p.name}: add one here`);
+  }
+  return isOptional(p) ? fc.oneof({ weight: 4, arbitrary: arb }, { weight: 1, arbitrary: fc.constant(null) }) : arb;
+}
+
+function invalidArb(p: ParamDescriptor): fc.Arbitrary<RawArg> {
+  const bad: RawArg[] = [];
+  switch (p.kind) {
+    case 'number':
+      bad.push(Number.NaN, Number.POSITIVE_INFINITY, 'text');
+      if (p.min !== undefined) bad.push(p.exclusiveMin ? p.min : p.min - 1 - Math.abs(p.min));
+      if (p.max !== undefined) bad.push(p.exclusiveMax ? p.max : p.max + 1 + Math.abs(p.max));
+      if (p.integer) bad.push((p.min ?? 0) + 0.5);
+      break;
+    case 'dateTime':
+      bad.push(60, 0, -1, MAX_SERIAL_EXCLUSIVE, Number.NaN, 'yesterday');
+      break;
+    case 'choice':
+      bad.push('no-such-choice', 3);
+      break;
+    case 'flag':
+      bad.push('maybe', 2);
+      break;
+    case 'numberList':
+      bad.push([['text']], [[Number.NaN]]);
+      if (p.max !== undefined) bad.push([[p.max + 1 + Math.abs(p.max)]]);
+      if (p.min !== undefined) bad.push([[p.min - 1 - Math.abs(p.min)]]);
+      break;
+    default:
+      break;
+  }
+  return fc.constantFrom(...bad);
+}
+
+/** The arguments as `evaluate` would see them, to ask the descriptor's `refuses`. */
+function readArgs(fn: FunctionDescriptor, raw: RawArg[]): Args {
+  const args: Args = {};
+  fn.params.forEach((p, k) => {
+    args[p.name] = p.kind === 'numberList' || p.kind === 'table' ? readRange(p, raw[k]) : readScalar(p, raw[k] as never);
+  });
+  return args;
+}
+
+function checkValid(fn: FunctionDescriptor, out: OutTable): void {
+  for (const row of out) {
+    for (const cell of row) {
+      if (cell instanceof SunpaneError) throw new Error(`${fn.name}: valid arguments gave an error: ${cell.message}`);
+      if (cell instanceof NotAvailable || typeof cell === 'string') continue;
+      expect(Number.isFinite(cell)).toBe(true);
+      if (fn.result.shape === 'value') {
+        if (fn.result.min !== undefined) expect(cell).toBeGreaterThanOrEqual(fn.result.min - 1e-9);
+        if (fn.result.max !== undefined) expect(cell).toBeLessThanOrEqual(fn.result.max + 1e-9);
+      }
+    }
+  }
+}
+
+function errorOf(fn: FunctionDescriptor, raw: RawArg[]): SunpaneError | undefined {
+  try {
+    const out = applyFunction(fn, raw);
+    const cell = out.flat().find((c) => c instanceof SunpaneError);
+    return cell as SunpaneError | undefined;
+  } catch (err) {
+    if (err instanceof SunpaneError) return err;
+    throw err;
+  }
+}
+
+test('the registry lists functions with unique names of uppercase letters', () => {
+  expect(FUNCTIONS.length).toBeGreaterThan(0);
+  const names = FUNCTIONS.map((f) => f.name);
+  expect(new Set(names).size).toBe(names.length);
+  for (const n of names) expect(n).toMatch(/^[A-Z]+$/);
+});
+
+describe.each(FUNCTIONS.map((f) => [f.name, f] as const))('%s', (_name: string, fn: FunctionDescriptor) => {
+  const spillRuns = fn.result.shape === 'spill' ? Math.max(5, Math.floor(RUNS / 4)) : RUNS;
+
+  test('random valid arguments give finite results in the declared range', () => {
+    fc.assert(
+      fc.property(fc.tuple(...fn.params.map(validArb)), (raw) => {
+        const reason = fn.refuses?.(readArgs(fn, raw));
+        if (reason !== undefined) {
+          expect(errorOf(fn, raw)).toBeInstanceOf(SunpaneError);
+          return;
+        }
+        checkValid(fn, applyFunction(fn, raw));
+      }),
+      { numRuns: spillRuns, seed: 20261201 },
+    );
+  });
+
+  test('one invalid argument gives the typed error naming that argument', () => {
+    const arb = fc
+      .tuple(fc.tuple(...fn.params.map(validArb)), fc.integer({ min: 0, max: fn.params.length - 1 }))
+      .chain(([raw, k]) => invalidArb(fn.params[k]).map((bad) => ({ raw, k, bad })))
+      .filter(({ raw, k }) => ['number', 'dateTime', 'choice', 'flag', 'numberList'].includes(fn.params[k].kind) && fn.refuses?.(readArgs(fn, raw)) === undefined);
+    fc.assert(
+      fc.property(arb, ({ raw, k, bad }) => {
+        const args = [...raw];
+        args[k] = bad;
+        const err = errorOf(fn, args);
+        expect(err).toBeInstanceOf(SunpaneError);
+        expect(err!.argument.startsWith(fn.params[k].name)).toBe(true);
+      }),
+      { numRuns: spillRuns, seed: 20261201 },
+    );
+  });
+});
