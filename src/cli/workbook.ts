@@ -1,0 +1,218 @@
+/**
+ * Writing real spreadsheet workbooks with ExcelJS: sheets holding Excel tables with number formats
+ * and frozen header rows, summary cells as native formulas (SUM, MAX ...) carrying their cached
+ * results, and a day × hour colour-scale heat map. The command line's only spreadsheet writer.
+ */
+import ExcelJS from 'exceljs';
+import { writeFileAtomic } from './atomicWrite';
+
+/** Number formats used across Sunpane workbooks. */
+export const NUMBER_FORMATS = Object.freeze({
+  dateTime: 'yyyy-mm-dd hh:mm',
+  angle: '0.0',
+  fraction: '0.000',
+  irradiance: '0.0',
+  watts: '#,##0',
+  kwh: '#,##0.0',
+  area: '0.00',
+  length: '0.00',
+  percent: '0.0%',
+  shgc: '0.000',
+  integer: '0',
+});
+
+/** One column of a data table. */
+export interface TableColumn {
+  /** Header text (units in brackets), unique within the table. */
+  header: string;
+  /** Excel number format for the body cells; none for text. */
+  numFmt?: string;
+  /** Column width in characters; default from the header length. */
+  width?: number;
+}
+
+/** A cell value in a data table: number, text, a date, or blank. */
+export type TableCell = number | string | Date | null;
+
+/** Our own colours (ARGB). Header fill and heat-map stops are Sunpane's: deep slate → amber → ember. */
+export const COLOURS = Object.freeze({
+  headerFill: 'FF2F4858',
+  headerText: 'FFFFFFFF',
+  heatLow: 'FFF4F1E8',
+  heatMid: 'FFF2B134',
+  heatHigh: 'FFB23A1E',
+  note: 'FF5A6470',
+});
+
+const TABLE_STYLE = 'TableStyleMedium2';
+
+/**
+ * Excel table names: letters, digits and underscores, starting with a letter, unique in a workbook;
+ * Sunpane tables are named after their sheet.
+ */
+export function tableName(text: string): string {
+  const cleaned = text.replace(/[^A-Za-z0-9_]/g, '_').replace(/^([^A-Za-z])/, 'T_$1');
+  return cleaned.length > 0 ? cleaned.slice(0, 250) : 'Table';
+}
+
+/** Column letters of a 1-based column number (1 → A, 27 → AA). */
+export function columnLetter(column: number): string {
+  let n = column;
+  let s = '';
+  while (n > 0) {
+    const r = (n - 1) % 26;
+    s = String.fromCharCode(65 + r) + s;
+    n = Math.floor((n - 1) / 26);
+  }
+  return s;
+}
+
+/** An A1 address from 1-based row and column. */
+export function address(row: number, column: number): string {
+  return `${columnLetter(column)}${row}`;
+}
+
+/** Sheet names: ≤ 31 characters, none of `: \ / ? * [ ]`. */
+export function sheetName(text: string): string {
+  return text.replace(/[:\\/?*[\]]/g, '-').slice(0, 31);
+}
+
+/** Where a data table sits on its sheet (1-based), for formulas that refer to it. */
+export interface TablePlacement {
+  firstRow: number;
+  /** Row of the header. */
+  headerRow: number;
+  /** Last body row. */
+  lastRow: number;
+  firstColumn: number;
+  /** 1-based column of each header. */
+  columnOf: (header: string) => number;
+  /** A1 range of one column's body cells, e.g. `D3:D14`. */
+  bodyRange: (header: string) => string;
+}
+
+/**
+ * Adds an Excel table (with filter buttons, banded rows and our number formats) to a sheet.
+ * @param sheet - the worksheet
+ * @param name - table name (made valid by {@link tableName})
+ * @param topLeft - 1-based row and column of the header cell
+ * @param columns - the columns
+ * @param rows - the body, one array per row, as long as `columns`
+ * @returns where the table sits
+ */
+export function addDataTable(
+  sheet: ExcelJS.Worksheet,
+  name: string,
+  topLeft: { row: number; column: number },
+  columns: readonly TableColumn[],
+  rows: readonly (readonly TableCell[])[],
+): TablePlacement {
+  sheet.addTable({
+    name: tableName(name),
+    ref: address(topLeft.row, topLeft.column),
+    headerRow: true,
+    totalsRow: false,
+    style: { theme: TABLE_STYLE, showRowStripes: true },
+    columns: columns.map((c) => ({ name: c.header, filterButton: true })),
+    rows: rows.map((r) => r.map((v) => (v === null ? undefined : v))) as unknown[][],
+  });
+  columns.forEach((c, k) => {
+    const col = sheet.getColumn(topLeft.column + k);
+    const width = c.width ?? Math.max(10, Math.min(40, c.header.length + 2));
+    col.width = Math.max(col.width ?? 0, width);
+    if (c.numFmt) {
+      for (let i = 0; i < rows.length; i++) sheet.getCell(topLeft.row + 1 + i, topLeft.column + k).numFmt = c.numFmt;
+    }
+  });
+  const headers = columns.map((c) => c.header);
+  const columnOf = (header: string): number => {
+    const k = headers.indexOf(header);
+    if (k < 0) throw new Error(`internal error: table ${name} has no column "${header}"`);
+    return topLeft.column + k;
+  };
+  const lastRow = topLeft.row + Math.max(rows.length, 1);
+  return {
+    firstRow: topLeft.row,
+    headerRow: topLeft.row,
+    lastRow,
+    firstColumn: topLeft.column,
+    columnOf,
+    bodyRange: (header) => `${address(topLeft.row + 1, columnOf(header))}:${address(lastRow, columnOf(header))}`,
+  };
+}
+
+/** Freezes the rows above `row` and the columns left of `column` (both 1-based; 1 freezes none). */
+export function freezeAt(sheet: ExcelJS.Worksheet, row: number, column = 1): void {
+  sheet.views = [{ state: 'frozen', xSplit: column - 1, ySplit: row - 1, topLeftCell: address(row, column), activeCell: address(row, column) }];
+}
+
+/**
+ * Writes a native formula with its cached result, so that the file shows the value before any
+ * recalculation and a spreadsheet program can check it by recalculating.
+ */
+export function setFormula(sheet: ExcelJS.Worksheet, cell: string, formula: string, result: number | string, numFmt?: string): void {
+  const c = sheet.getCell(cell);
+  c.value = { formula: formula.replace(/^=/, ''), result } as ExcelJS.CellFormulaValue;
+  if (numFmt) c.numFmt = numFmt;
+}
+
+/** A bold label cell (optionally with a note in grey beside it). */
+export function setLabel(sheet: ExcelJS.Worksheet, cell: string, text: string): void {
+  const c = sheet.getCell(cell);
+  c.value = text;
+  c.font = { bold: true };
+}
+
+/** Styles a header row of plain (non-table) cells with our header colours. */
+export function styleHeader(sheet: ExcelJS.Worksheet, row: number, fromColumn: number, toColumn: number): void {
+  for (let col = fromColumn; col <= toColumn; col++) {
+    const c = sheet.getCell(row, col);
+    c.font = { bold: true, color: { argb: COLOURS.headerText } };
+    c.fill = { type: 'pattern', pattern: 'solid', fgColor: { argb: COLOURS.headerFill } };
+    c.alignment = { horizontal: 'center', vertical: 'middle', wrapText: true };
+  }
+}
+
+/**
+ * Adds a three-stop colour scale (lowest → median → highest) over a range: the heat map.
+ * @param range - A1 range, e.g. `B3:Y367`
+ */
+export function addColourScale(sheet: ExcelJS.Worksheet, range: string): void {
+  sheet.addConditionalFormatting({
+    ref: range,
+    rules: [
+      {
+        type: 'colorScale',
+        priority: 1,
+        cfvo: [{ type: 'min' }, { type: 'percentile', value: 50 }, { type: 'max' }],
+        color: [{ argb: COLOURS.heatLow }, { argb: COLOURS.heatMid }, { argb: COLOURS.heatHigh }],
+      } as ExcelJS.ConditionalFormattingRule,
+    ],
+  });
+}
+
+/** A new workbook with Sunpane's document properties. */
+export function newWorkbook(title: string): ExcelJS.Workbook {
+  const wb = new ExcelJS.Workbook();
+  wb.creator = 'Sunpane';
+  wb.title = title;
+  wb.created = new Date(0);
+  wb.modified = new Date(0);
+  return wb;
+}
+
+/** Serialises a workbook and writes it atomically (temporary file, then rename). */
+export async function saveWorkbook(wb: ExcelJS.Workbook, file: string): Promise<void> {
+  const buffer = await wb.xlsx.writeBuffer();
+  await writeFileAtomic(file, new Uint8Array(buffer as ArrayBuffer));
+}
+
+/** A Date in UTC that shows a local standard-time serial's wall-clock time in a spreadsheet cell. */
+export function serialToCellDate(serial: number): Date {
+  // Spreadsheet programs show date cells by their serial; ExcelJS converts a Date via its UTC
+  // fields, so the UTC fields must carry the local wall-clock time. Round to the second.
+  const ms = Math.round(((serial - 25_569) * 86_400_000) / 1000) * 1000;
+  return new Date(ms);
+}
+
+export type { ExcelJS };
