@@ -1,0 +1,99 @@
+/**
+ * Excel's custom-function metadata (functions.json), generated from the registry so that the
+ * worksheet names, parameter help and optional flags can never drift from the descriptors.
+ *
+ * Every parameter and every result is declared `type: "any"`, `dimensionality: "matrix"`: any
+ * argument may be a single cell or a range (the registry's broadcast helper pairs them), and any
+ * result may spill. Units and ranges go into the descriptions, because formula autocomplete shows
+ * nothing else (OFFICE.md).
+ */
+import { isOptional, paramHelp } from '../registry';
+import type { FunctionDescriptor } from '../registry/types';
+
+/** One parameter entry of functions.json. */
+export interface ParameterMetadata {
+  name: string;
+  description: string;
+  type: 'any';
+  dimensionality: 'matrix';
+  optional: boolean;
+}
+
+/** One function entry of functions.json. */
+export interface FunctionMetadata {
+  id: string;
+  name: string;
+  description: string;
+  parameters: ParameterMetadata[];
+  result: { type: 'any'; dimensionality: 'matrix' };
+}
+
+/** The whole functions.json document. */
+export interface FunctionsMetadata {
+  functions: FunctionMetadata[];
+}
+
+/** Excel's limits on metadata text (OFFICE.md). */
+export const MAX_PARAMETER_NAME = 64;
+export const MAX_DESCRIPTION = 512;
+
+/**
+ * Worksheet ids we accept: uppercase letters only, so that no id can look like a cell reference
+ * (`DOY1`) and every id reads the same in every locale.
+ */
+const ID_PATTERN = /^[A-Z]+$/;
+
+/**
+ * The description Excel shows for a function: its summary, then what the result is and its unit.
+ *
+ * @param fn - a registered function
+ * @returns at most {@link MAX_DESCRIPTION} characters
+ */
+export function functionDescription(fn: FunctionDescriptor): string {
+  const unit = fn.result.unit ? ` [${fn.result.unit}]` : '';
+  const spill = fn.result.shape === 'spill' ? ' Spills a table.' : '';
+  const summary = fn.summary.trim().replace(/\.$/, '');
+  return `${summary}${unit}.${spill}`.slice(0, MAX_DESCRIPTION);
+}
+
+/**
+ * Builds functions.json from registered descriptors.
+ *
+ * @param functions - the registry (src/registry/index.ts FUNCTIONS)
+ * @returns the metadata document; a parameter is marked optional only when it and every later
+ *   parameter are optional (Excel lists optional arguments last; a blank argument in the middle is
+ *   still read as its default by the adapter)
+ * @throws Error naming the function when an id is not uppercase letters, is repeated, or a
+ *   parameter name is too long — the build fails rather than ship metadata Excel refuses
+ */
+export function functionsMetadata(functions: readonly FunctionDescriptor[]): FunctionsMetadata {
+  const seen = new Set<string>();
+  const out: FunctionMetadata[] = [];
+  for (const fn of functions) {
+    if (!ID_PATTERN.test(fn.name)) {
+      throw new Error(`functions.json: the worksheet name ${JSON.stringify(fn.name)} must be uppercase letters only (A-Z)`);
+    }
+    if (seen.has(fn.name)) throw new Error(`functions.json: the worksheet name ${fn.name} is registered twice`);
+    seen.add(fn.name);
+    const parameters = fn.params.map((p, k): ParameterMetadata => {
+      if (p.name.length === 0 || p.name.length > MAX_PARAMETER_NAME) {
+        throw new Error(`functions.json: ${fn.name} parameter ${JSON.stringify(p.name)} must have 1 to ${MAX_PARAMETER_NAME} characters`);
+      }
+      return {
+        name: p.name,
+        description: paramHelp(p).slice(0, MAX_DESCRIPTION),
+        type: 'any',
+        dimensionality: 'matrix',
+        optional: fn.params.slice(k).every(isOptional),
+      };
+    });
+    out.push({
+      id: fn.name,
+      name: fn.name,
+      description: functionDescription(fn),
+      parameters,
+      result: { type: 'any', dimensionality: 'matrix' },
+    });
+  }
+  return { functions: out };
+}

@@ -1,0 +1,165 @@
+'use strict';
+/**
+ * Builds the one shared-runtime bundle of the add-in into dist/:
+ *   taskpane.js    src/addin.ts (worksheet functions + task pane), minified with a source map
+ *   taskpane.html  from src/taskpane/pane.html, loading office.js from Microsoft's CDN first
+ *   functions.json generated from the registry (src/functions/metadata.ts)
+ *   manifest.xml   manifest.xml with its host replaced by SUNPANE_HOST (default https://localhost:3000)
+ *   assets/        icons
+ * A production build fails when the JavaScript (excluding office.js) exceeds the size budget.
+ * `webpack serve` (npm run dev-server / npm start) serves the same over HTTPS on port 3000.
+ */
+const fs = require('node:fs');
+const path = require('node:path');
+const HtmlWebpackPlugin = require('html-webpack-plugin');
+const CopyWebpackPlugin = require('copy-webpack-plugin');
+const { resolveHost, manifestForHost } = require('./scripts/manifest-host');
+
+const ROOT = __dirname;
+const SRC = path.join(ROOT, 'src');
+const OFFICE_JS = 'https://appsforoffice.microsoft.com/lib/1/hosted/office.js';
+/** Functions + pane JavaScript, minified, excluding office.js [bytes]. */
+const BUDGET_BYTES = 150 * 1024;
+const DEV_PORT = 3000;
+
+/**
+ * The plugins' option validation (schema-utils) needs ajv 8, but this install hoists ajv-keywords
+ * next to eslint's ajv 6 (legacy-peer-deps), so the validator itself cannot load. Probe it once and,
+ * only when it cannot load, build without option validation (and say so) rather than fail.
+ */
+function ensureOptionValidation() {
+  const schemaUtils = require('schema-utils');
+  try {
+    schemaUtils.validate({ type: 'object' }, {}, { name: 'Sunpane build probe' });
+  } catch (err) {
+    if (!err || err.code !== 'MODULE_NOT_FOUND') throw err;
+    schemaUtils.disableValidation();
+    console.warn(`warning: webpack plugin option validation is off: ${String(err.message).split('\n')[0]} (ajv 8 is not where ajv-keywords looks; see the add-in report)`);
+  }
+}
+ensureOptionValidation();
+
+/** Loads the TypeScript registry in this Node process (fresh on every compilation, for watch mode). */
+function loadFunctionsMetadata() {
+  require('ts-node').register({ transpileOnly: true, compilerOptions: { module: 'commonjs' } });
+  for (const id of Object.keys(require.cache)) if (id.startsWith(SRC + path.sep)) delete require.cache[id];
+  const { FUNCTIONS } = require('./src/registry/index.ts');
+  const { functionsMetadata } = require('./src/functions/metadata.ts');
+  return functionsMetadata(FUNCTIONS);
+}
+
+/** Emits functions.json and manifest.xml, and checks the bundle size. */
+class SunpaneAddinPlugin {
+  constructor(options) {
+    this.options = options;
+  }
+
+  apply(compiler) {
+    const { sources, Compilation } = compiler.webpack;
+    compiler.hooks.thisCompilation.tap('SunpaneAddinPlugin', (compilation) => {
+      compilation.hooks.processAssets.tap({ name: 'SunpaneAddinPlugin', stage: Compilation.PROCESS_ASSETS_STAGE_ADDITIONAL }, () => {
+        try {
+          const metadata = loadFunctionsMetadata();
+          compilation.emitAsset('functions.json', new sources.RawSource(`${JSON.stringify(metadata, null, 2)}\n`));
+        } catch (err) {
+          compilation.errors.push(new compiler.webpack.WebpackError(`functions.json: ${err && err.stack ? err.stack : err}`));
+        }
+        try {
+          const manifestPath = path.join(ROOT, 'manifest.xml');
+          compilation.fileDependencies.add(manifestPath);
+          const xml = manifestForHost(fs.readFileSync(manifestPath, 'utf8'), resolveHost(process.env.SUNPANE_HOST));
+          compilation.emitAsset('manifest.xml', new sources.RawSource(xml));
+        } catch (err) {
+          compilation.errors.push(new compiler.webpack.WebpackError(`manifest.xml: ${err && err.message ? err.message : err}`));
+        }
+      });
+      // office.js from Microsoft's CDN, as a blocking script ahead of the (deferred) bundle.
+      HtmlWebpackPlugin.getHooks(compilation).alterAssetTagGroups.tap('SunpaneAddinPlugin', (data) => {
+        const already = [...data.headTags, ...data.bodyTags].some((t) => t.attributes && t.attributes.src === OFFICE_JS);
+        if (!already) data.headTags.unshift(HtmlWebpackPlugin.createHtmlTagObject('script', { src: OFFICE_JS }));
+        return data;
+      });
+    });
+    compiler.hooks.afterEmit.tap('SunpaneAddinPlugin', (compilation) => {
+      const scripts = Object.keys(compilation.assets).filter((name) => name.endsWith('.js')).sort();
+      let total = 0;
+      const lines = scripts.map((name) => {
+        const bytes = compilation.assets[name].size();
+        total += bytes;
+        return `  ${name.padEnd(24)} ${(bytes / 1024).toFixed(1).padStart(8)} KB`;
+      });
+      const budget = this.options.budget;
+      const verdict = budget ? ` (budget ${(BUDGET_BYTES / 1024).toFixed(0)} KB, minified, office.js excluded)` : ' (development build, not minified: no budget)';
+      console.log(`Sunpane bundle sizes:\n${lines.join('\n')}\n  ${'total JavaScript'.padEnd(24)} ${(total / 1024).toFixed(1).padStart(8)} KB${verdict}`);
+      if (budget && total > BUDGET_BYTES) {
+        compilation.errors.push(new compiler.webpack.WebpackError(`bundle size budget exceeded: ${(total / 1024).toFixed(1)} KB of JavaScript > ${BUDGET_BYTES / 1024} KB`));
+      }
+    });
+    // The size check runs after emit; make its error fail the run (and the process exit code).
+    compiler.hooks.done.tap('SunpaneAddinPlugin', (stats) => {
+      if (this.options.budget && stats.hasErrors()) process.exitCode = 1;
+    });
+  }
+}
+
+/**
+ * The dev server's HTTPS settings: on Windows and macOS the Office development certificate (trusted
+ * by desktop Excel) when it can be had; otherwise webpack-dev-server's own self-signed certificate,
+ * which the browser must accept once (Linux, CI: see OFFICE.md — the trusted-store install needs sudo).
+ */
+async function devServerHttps() {
+  if (process.platform !== 'win32' && process.platform !== 'darwin') return 'https';
+  try {
+    const devCerts = require('office-addin-dev-certs');
+    return { type: 'https', options: await devCerts.getHttpsServerOptions() };
+  } catch (err) {
+    console.warn(`Office development certificate unavailable (${err && err.message ? err.message : err}); using a self-signed certificate.`);
+    return 'https';
+  }
+}
+
+module.exports = async (_env, argv) => {
+  const production = argv.mode !== 'development';
+  const serving = process.argv.some((a) => a === 'serve');
+  return {
+    mode: production ? 'production' : 'development',
+    context: ROOT,
+    entry: { taskpane: path.join(SRC, 'addin.ts') },
+    output: { path: path.join(ROOT, 'dist'), filename: '[name].js', clean: true },
+    devtool: 'source-map',
+    target: ['web', 'es2020'],
+    resolve: { extensions: ['.ts', '.js'] },
+    module: {
+      rules: [
+        {
+          test: /\.ts$/,
+          include: SRC,
+          use: {
+            loader: 'ts-loader',
+            options: {
+              configFile: path.join(ROOT, 'tsconfig.json'),
+              transpileOnly: true,
+              onlyCompileBundledFiles: true,
+              compilerOptions: { module: 'es2020', sourceMap: true },
+            },
+          },
+        },
+      ],
+    },
+    performance: { hints: false },
+    plugins: [
+      new HtmlWebpackPlugin({ template: path.join(SRC, 'taskpane', 'pane.html'), filename: 'taskpane.html', chunks: ['taskpane'], scriptLoading: 'defer' }),
+      new CopyWebpackPlugin({ patterns: [{ from: path.join(ROOT, 'assets'), to: 'assets', globOptions: { ignore: ['**/*.md'] } }] }),
+      new SunpaneAddinPlugin({ budget: production }),
+    ],
+    devServer: {
+      port: DEV_PORT,
+      server: serving ? await devServerHttps() : 'https',
+      headers: { 'Access-Control-Allow-Origin': '*' },
+      hot: false,
+      liveReload: true,
+      client: { overlay: false },
+      static: false,
+    },
+  };
+};
