@@ -1,0 +1,118 @@
+/**
+ * The window JSON reader: fields map onto WindowSpec, defaults are applied, and every bad field is
+ * refused with an error naming its path. (Format of our own; nothing outside to compare with.)
+ */
+import * as fs from 'node:fs';
+import * as os from 'node:os';
+import * as path from 'node:path';
+import { SunpaneError } from '../../src/core/errors';
+import { validateWindowSpec } from '../../src/core/windowSpec';
+import { CliInputError } from '../../src/cli/cliError';
+import { readWindowFile, windowFromJson, WINDOW_DEFAULTS } from '../../src/cli/windowJson';
+import { findExampleSite } from '../../src/demo/sites';
+
+const MINIMAL = {
+  name: 'Test window',
+  year: 2026,
+  site: { latitude: 52.2, longitude: 4.9, utcOffset: 1 },
+  surfaceAzimuth: 180,
+  width: 1.2,
+  height: 1.5,
+  glazing: { shgc: 0.4 },
+  weather: { kind: 'ineichenClearSky', linkeTurbidity: 3 },
+};
+
+function refusal(json: unknown): SunpaneError {
+  try {
+    windowFromJson(json);
+  } catch (err) {
+    if (err instanceof SunpaneError) return err;
+    throw err;
+  }
+  throw new Error('expected the window to be refused');
+}
+
+describe('window JSON', () => {
+  it('fills every omitted optional field with its documented default', () => {
+    const { spec, hasWeather } = windowFromJson(MINIMAL);
+    expect(hasWeather).toBe(true);
+    expect(spec.surfaceTilt).toBe(WINDOW_DEFAULTS.surfaceTilt);
+    expect(spec.frameFraction).toBe(WINDOW_DEFAULTS.frameFraction);
+    expect(spec.glazing).toEqual({ shgc: 0.4, panes: 2, interiorAttenuation: 1 });
+    expect(spec.shading).toEqual({});
+    expect(spec.groundAlbedo).toBe(0.2);
+    expect(spec.skyModel).toBe('perez1990');
+    expect(() => validateWindowSpec(spec)).not.toThrow();
+  });
+
+  it('reads every shading device with gap and extensions defaulting to zero', () => {
+    const { spec } = windowFromJson({
+      ...MINIMAL,
+      shading: { overhang: { projection: 0.6 }, leftFin: { projection: 0.3, gap: 0.1 }, rightFin: { projection: 0.3, extensionAbove: 0.2 }, revealDepth: 0.1, skyline: [0, 10, 20, 5] },
+    });
+    expect(spec.shading).toEqual({
+      overhang: { projection: 0.6, gap: 0, extensionLeft: 0, extensionRight: 0 },
+      leftFin: { projection: 0.3, gap: 0.1, extensionAbove: 0, extensionBelow: 0 },
+      rightFin: { projection: 0.3, gap: 0, extensionAbove: 0.2, extensionBelow: 0 },
+      revealDepth: 0.1,
+      skyline: [0, 10, 20, 5],
+    });
+  });
+
+  it('takes an example site by id with its invented clear-sky turbidity and albedo', () => {
+    const { spec, hasWeather } = windowFromJson({ ...MINIMAL, site: 'kestrelHeads', weather: undefined });
+    const example = findExampleSite('kestrelHeads')!;
+    expect(hasWeather).toBe(true);
+    expect(spec.site.latitude).toBe(example.site.latitude);
+    expect(spec.weather).toEqual({ kind: 'ineichenClearSky', linkeTurbidity: [...example.linkeTurbidity] });
+    expect(spec.groundAlbedo).toBe(example.groundAlbedo);
+  });
+
+  it('reports that weather must still be supplied when the file has none', () => {
+    expect(windowFromJson({ ...MINIMAL, weather: undefined }).hasWeather).toBe(false);
+  });
+
+  it.each([
+    [{ ...MINIMAL, name: undefined }, 'name'],
+    [{ ...MINIMAL, site: { latitude: 52, longitude: 4.9 } }, 'site.utcOffset'],
+    [{ ...MINIMAL, site: 'atlantis' }, 'site'],
+    [{ ...MINIMAL, width: '1.2' }, 'width'],
+    [{ ...MINIMAL, glazing: {} }, 'glazing.shgc'],
+    [{ ...MINIMAL, glazing: undefined }, 'glazing'],
+    [{ ...MINIMAL, shading: { overhang: { gap: 0.2 } } }, 'shading.overhang.projection'],
+    [{ ...MINIMAL, shading: { overhang: { projection: 0.5, projecton: 1 } } }, 'shading.overhang.projecton'],
+    [{ ...MINIMAL, shading: { skyline: [10, 'x'] } }, 'shading.skyline[1]'],
+    [{ ...MINIMAL, weather: { kind: 'measured' } }, 'weather.kind'],
+    [{ ...MINIMAL, weather: { kind: 'ashraeClearSky', tauB: 0.3 } }, 'weather.tauD'],
+    [{ ...MINIMAL, skyModel: 'fancy' }, 'skyModel'],
+    [{ ...MINIMAL, year: 2026.5 }, 'year'],
+    [{ ...MINIMAL, colour: 'blue' }, 'colour'],
+  ])('refuses a missing, mistyped or unknown field naming its path (%#: %s)', (json, field) => {
+    expect(refusal(json).argument).toBe(field);
+  });
+
+  it('ignores note fields starting with an underscore or named comment', () => {
+    expect(() => windowFromJson({ ...MINIMAL, _note: 'x', comment: 'y' })).not.toThrow();
+  });
+
+  it('leaves range checks to the core validator, which names the same paths', () => {
+    const { spec } = windowFromJson({ ...MINIMAL, glazing: { shgc: 1.4 } });
+    expect(() => validateWindowSpec(spec)).toThrow(expect.objectContaining({ argument: 'glazing.shgc' }));
+  });
+
+  it('names the file and the parser position when the file is not JSON', () => {
+    const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'sunpane-json-'));
+    const file = path.join(dir, 'broken.json');
+    fs.writeFileSync(file, '{ "name": "x", }');
+    expect(() => readWindowFile(file)).toThrow(CliInputError);
+    expect(() => readWindowFile(file)).toThrow(/broken\.json is not valid JSON/);
+    expect(() => readWindowFile(path.join(dir, 'absent.json'))).toThrow(/cannot read the window file .*absent\.json: the folder does not exist|cannot read the window file/);
+  });
+
+  it('adds the file name to a field error from a file', () => {
+    const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'sunpane-json-'));
+    const file = path.join(dir, 'w.json');
+    fs.writeFileSync(file, JSON.stringify({ ...MINIMAL, height: undefined }));
+    expect(() => readWindowFile(file)).toThrow(/^height = blank is not allowed: is required: must be a number in m \(in .*w\.json\)$/);
+  });
+});
