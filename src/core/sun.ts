@@ -1,0 +1,539 @@
+/**
+ * Sun position by the NREL Solar Position Algorithm (SPA), and sunrise, solar noon and sunset.
+ *
+ * Source: Reda, I. & Andreas, A., *Solar Position Algorithm for Solar Radiation Applications*,
+ * NREL/TP-560-34302, National Renewable Energy Laboratory (revised January 2008). Equation numbers
+ * in `// Eq. n` comments are that report's (section 3.1–3.15, equations 1–47; the equation of time is
+ * its Appendix A.1, Eq. A1–A4). Stated uncertainty ±0.0003° in zenith and azimuth for the years
+ * −2000…6000.
+ *
+ * Conventions (DESIGN.md): degrees in and out; azimuth clockwise from true north (N 0, E 90, S 180,
+ * W 270); altitude is topocentric (seen from the site, with parallax) and includes refraction; hour
+ * angle negative in the morning. Time in is a UTC instant [ms since 1970-01-01]; ΔT = TT − UT from
+ * {@link deltaTAt} unless given.
+ */
+import { DEG, RAD, asinClamped, wrap180, wrap360 } from './angles';
+import { SunpaneError, requireRange } from './errors';
+import { B_TERMS, L_TERMS, NUTATION_TERMS, R_TERMS, type EarthTerm } from './spaTerms';
+import { deltaTAt, julianDay, requireSerial, requireUtcOffset, serialToUtcMs, utcMsToSerial } from './time';
+
+export { annualSunPath, type SunPathYear, type SunPathOptions } from './sunPath';
+
+const { sin, cos, tan, atan, atan2 } = Math;
+
+const MS_PER_DAY = 86_400_000;
+/** Julian day of the J2000.0 epoch. */
+const JD_J2000 = 2_451_545;
+/** Semi-diameter of the sun used by the SPA for rise and set [°]. */
+export const SUN_RADIUS = 0.26667;
+/** Refraction at the horizon assumed for rise and set [°] (the SPA's default). */
+export const HORIZON_REFRACTION = 0.5667;
+/** Geometric altitude of the sun's centre at rise and set: the upper limb on the refracted horizon [°]. */
+export const RISE_SET_ALTITUDE = -(SUN_RADIUS + HORIZON_REFRACTION);
+/** Earliest and latest instants accepted: 1 January −2000 and 2 January 10000, UT [ms]. */
+const UTC_MS_MIN = Date.UTC(-2000, 0, 1);
+const UTC_MS_MAX = Date.UTC(10000, 0, 2);
+/** ΔT polynomials (time.ts) start in 1860; before that the caller must give ΔT. */
+const DEFAULT_DELTA_T_FROM = Date.UTC(1860, 0, 1);
+
+/** Observer and atmosphere; every field optional. */
+export interface SunOptions {
+  /** Site elevation above sea level [m], −500…9000; default 0. */
+  elevation?: number;
+  /** Mean air pressure [hPa], above 0 up to 1200; default: standard atmosphere at the elevation ({@link standardPressure}). */
+  pressure?: number;
+  /** Mean air temperature [°C], −90…60; default 12. */
+  temperature?: number;
+  /** ΔT = TT − UT [s], −100…10000; default {@link deltaTAt} (Espenak & Meeus 2006). */
+  deltaT?: number;
+}
+
+/** Where the sun is, seen from the site. */
+export interface SunPosition {
+  /** Topocentric altitude of the sun's centre above the horizon, with refraction [°], −90…90. */
+  altitude: number;
+  /** Topocentric azimuth clockwise from true north [°], [0, 360). */
+  azimuth: number;
+  /** Topocentric zenith angle with refraction, 90 − altitude [°], 0…180. */
+  zenith: number;
+  /** Geocentric declination [°], about −23.44…23.44. */
+  declination: number;
+  /** Observer's local hour angle (geocentric) [°], (−180, 180], negative before solar noon. */
+  hourAngle: number;
+  /** Equation of time, apparent minus mean solar time [min], about −14.3…16.4. */
+  equationOfTime: number;
+  /** Geocentric apparent right ascension [°], [0, 360). */
+  rightAscension: number;
+  /** Topocentric altitude without refraction [°]. */
+  altitudeUnrefracted: number;
+  /** Apparent solar time at the site [h], [0, 24): 12 at solar noon. */
+  solarTime: number;
+  /** Earth–sun distance [AU]. */
+  earthSunDistance: number;
+}
+
+/** Every intermediate value of the SPA for one instant and site (names and units as in the report). */
+export interface SpaSteps {
+  /** Julian day (UT) and Julian ephemeris day (TT). Eq. 4, 5. */
+  jd: number;
+  jde: number;
+  /** Julian century (UT), Julian ephemeris century and millennium. Eq. 6–8. */
+  jc: number;
+  jce: number;
+  jme: number;
+  /** Earth heliocentric longitude [°], latitude [°], radius vector [AU]. Eq. 9–12. */
+  L: number;
+  B: number;
+  R: number;
+  /** Geocentric longitude and latitude [°]. Eq. 13, 14. */
+  theta: number;
+  beta: number;
+  /** Nutation in longitude and obliquity [°]. Eq. 15–22. */
+  deltaPsi: number;
+  deltaEpsilon: number;
+  /** Mean and true obliquity of the ecliptic [°]. Eq. 23, 24. */
+  epsilon0: number;
+  epsilon: number;
+  /** Aberration correction [°]. Eq. 25. */
+  deltaTau: number;
+  /** Apparent sun longitude [°]. Eq. 26. */
+  lambda: number;
+  /** Mean and apparent sidereal time at Greenwich [°]. Eq. 27, 28. */
+  nu0: number;
+  nu: number;
+  /** Geocentric right ascension and declination [°]. Eq. 29, 30. */
+  alpha: number;
+  delta: number;
+  /** Observer local hour angle [°], [0, 360). Eq. 31. */
+  H: number;
+  /** Equatorial horizontal parallax [°] and parallax in right ascension [°]. Eq. 32–37. */
+  xi: number;
+  deltaAlpha: number;
+  /** Topocentric right ascension, declination and local hour angle [°]. Eq. 38–40. */
+  alphaPrime: number;
+  deltaPrime: number;
+  HPrime: number;
+  /** Topocentric elevation without refraction, refraction correction, elevation with refraction [°]. Eq. 41–43. */
+  e0: number;
+  deltaE: number;
+  e: number;
+  /** Topocentric zenith angle [°]. Eq. 44. */
+  zenith: number;
+  /** Topocentric astronomers' azimuth (from south, westward) [°] and azimuth from north [°]. Eq. 45, 46. */
+  gamma: number;
+  phi: number;
+  /** Sun's mean longitude [°] and equation of time [min]. Eq. A1–A4. */
+  M: number;
+  E: number;
+}
+
+/** Earth terms flattened for speed: per series, a Float64Array of A, B, C triples. */
+function flatten(series: readonly (readonly EarthTerm[])[]): Float64Array[] {
+  return series.map((rows) => Float64Array.from(rows.flat()));
+}
+const L_FLAT = flatten(L_TERMS);
+const B_FLAT = flatten(B_TERMS);
+const R_FLAT = flatten(R_TERMS);
+const NUT_Y = Float64Array.from(NUTATION_TERMS.flatMap((r) => r.slice(0, 5)));
+const NUT_ABCD = Float64Array.from(NUTATION_TERMS.flatMap((r) => r.slice(5)));
+const NUT_ROWS = NUTATION_TERMS.length;
+
+/** Σ over series i of τ^i · Σ A cos(B + C τ), scaled by 1e-8. Eq. 9–11. */
+function earthSeries(series: Float64Array[], jme: number): number {
+  let total = 0;
+  let power = 1;
+  for (let i = 0; i < series.length; i++) {
+    const s = series[i];
+    let sum = 0;
+    for (let k = 0; k < s.length; k += 3) sum += s[k] * cos(s[k + 1] + s[k + 2] * jme); // Eq. 9
+    total += sum * power; // Eq. 10
+    power *= jme;
+  }
+  return total / 1e8; // Eq. 11
+}
+
+/**
+ * The Earth-fixed part of the SPA: every quantity that does not depend on the observer, for one
+ * instant. Used directly by {@link sunPosition} and once a day by the annual fast path.
+ * @param jd - Julian day (UT)
+ * @param deltaT - TT − UT [s]
+ * @param out - object to fill (no allocation when given)
+ * @returns `out` with jd…delta, nu0, nu, M and E filled in (the observer fields untouched)
+ * @remarks Reda & Andreas (2008), Eq. 4–30 and A1–A4.
+ */
+export function spaGeocentric(jd: number, deltaT: number, out: SpaSteps = emptySteps()): SpaSteps {
+  const jde = jd + deltaT / 86_400; // Eq. 5
+  const jc = (jd - JD_J2000) / 36_525; // Eq. 6
+  const jce = (jde - JD_J2000) / 36_525; // Eq. 7
+  const jme = jce / 10; // Eq. 8
+
+  const L = wrap360(earthSeries(L_FLAT, jme) * DEG); // Eq. 12
+  const B = earthSeries(B_FLAT, jme) * DEG;
+  const R = earthSeries(R_FLAT, jme);
+  const theta = wrap360(L + 180); // Eq. 13
+  const beta = -B; // Eq. 14
+
+  // Fundamental arguments of nutation [°], Eq. 15–19.
+  const x0 = 297.85036 + 445_267.11148 * jce - 0.0019142 * jce * jce + (jce * jce * jce) / 189_474;
+  const x1 = 357.52772 + 35_999.05034 * jce - 0.0001603 * jce * jce - (jce * jce * jce) / 300_000;
+  const x2 = 134.96298 + 477_198.867398 * jce + 0.0086972 * jce * jce + (jce * jce * jce) / 56_250;
+  const x3 = 93.27191 + 483_202.017538 * jce - 0.0036825 * jce * jce + (jce * jce * jce) / 327_270;
+  const x4 = 125.04452 - 1934.136261 * jce + 0.0020708 * jce * jce + (jce * jce * jce) / 450_000;
+  let psiSum = 0;
+  let epsSum = 0;
+  for (let i = 0; i < NUT_ROWS; i++) {
+    const y = i * 5;
+    const c = i * 4;
+    const argRad = (x0 * NUT_Y[y] + x1 * NUT_Y[y + 1] + x2 * NUT_Y[y + 2] + x3 * NUT_Y[y + 3] + x4 * NUT_Y[y + 4]) * RAD; // Eq. 20 argument
+    psiSum += (NUT_ABCD[c] + NUT_ABCD[c + 1] * jce) * sin(argRad); // Eq. 20
+    epsSum += (NUT_ABCD[c + 2] + NUT_ABCD[c + 3] * jce) * cos(argRad); // Eq. 21
+  }
+  const deltaPsi = psiSum / 36_000_000; // Eq. 22
+  const deltaEpsilon = epsSum / 36_000_000;
+
+  const u = jme / 10;
+  const epsilon0 =
+    84_381.448 +
+    u * (-4680.93 + u * (-1.55 + u * (1999.25 + u * (-51.38 + u * (-249.67 + u * (-39.05 + u * (7.12 + u * (27.87 + u * (5.79 + u * 2.45))))))))); // Eq. 23 [″]
+  const epsilon = epsilon0 / 3600 + deltaEpsilon; // Eq. 24
+  const deltaTau = -20.4898 / (3600 * R); // Eq. 25
+  const lambda = theta + deltaPsi + deltaTau; // Eq. 26
+
+  const nu0 = wrap360(280.46061837 + 360.98564736629 * (jd - JD_J2000) + jc * jc * (0.000387933 - jc / 38_710_000)); // Eq. 27
+  const epsilonRad = epsilon * RAD;
+  const nu = nu0 + deltaPsi * cos(epsilonRad); // Eq. 28
+
+  const lambdaRad = lambda * RAD;
+  const betaRad = beta * RAD;
+  const alpha = wrap360(atan2(sin(lambdaRad) * cos(epsilonRad) - tan(betaRad) * sin(epsilonRad), cos(lambdaRad)) * DEG); // Eq. 29
+  const delta = asinClamped(sin(betaRad) * cos(epsilonRad) + cos(betaRad) * sin(epsilonRad) * sin(lambdaRad)) * DEG; // Eq. 30
+
+  const M = wrap360(280.4664567 + jme * (360_007.6982779 + jme * (0.03032028 + jme * (1 / 49_931 + jme * (-1 / 15_300 - jme / 2_000_000))))); // Eq. A2
+  const E = 4 * wrap180(M - 0.0057183 - alpha + deltaPsi * cos(epsilonRad)); // Eq. A1, A3, A4 [min]
+
+  out.jd = jd;
+  out.jde = jde;
+  out.jc = jc;
+  out.jce = jce;
+  out.jme = jme;
+  out.L = L;
+  out.B = B;
+  out.R = R;
+  out.theta = theta;
+  out.beta = beta;
+  out.deltaPsi = deltaPsi;
+  out.deltaEpsilon = deltaEpsilon;
+  out.epsilon0 = epsilon0;
+  out.epsilon = epsilon;
+  out.deltaTau = deltaTau;
+  out.lambda = lambda;
+  out.nu0 = nu0;
+  out.nu = nu;
+  out.alpha = alpha;
+  out.delta = delta;
+  out.M = M;
+  out.E = E;
+  return out;
+}
+
+/** Earth's flattening term b/a of the SPA (1 − 1/298.257). Eq. 34. */
+const POLAR_RATIO = 0.99664719;
+/** Earth's equatorial radius used by the SPA [m]. Eq. 35. */
+const EARTH_RADIUS_M = 6_378_140;
+
+/**
+ * Atmospheric refraction of the SPA [°] for a true (unrefracted) altitude.
+ * @param e0 - topocentric altitude without refraction [°]
+ * @param pressure - [hPa] > 0
+ * @param temperature - [°C]
+ * @returns the lift [°]; 0 when the sun is below −(0.26667 + 0.5667)° (no refraction applied, as in the SPA)
+ * @remarks Reda & Andreas (2008) Eq. 42: Δe = (P/1010)(283/(273 + T))·1.02 / (60 tan(e0 + 10.3/(e0 + 5.11))).
+ */
+export function refractionSpa(e0: number, pressure: number, temperature: number): number {
+  if (e0 < RISE_SET_ALTITUDE) return 0;
+  return ((pressure / 1010) * (283 / (273 + temperature)) * 1.02) / (60 * tan((e0 + 10.3 / (e0 + 5.11)) * RAD)); // Eq. 42
+}
+
+/**
+ * Mean air pressure of the standard atmosphere at an elevation [hPa].
+ * @param elevation - above sea level [m], −500…9000
+ * @returns pressure [hPa]
+ * @remarks Barometric formula of the U.S. Standard Atmosphere 1976 troposphere (ICAO standard
+ * atmosphere): p = 1013.25 (1 − 2.25577·10⁻⁵ h)^5.25588.
+ */
+export function standardPressure(elevation: number): number {
+  return 1013.25 * (1 - 2.25577e-5 * elevation) ** 5.25588;
+}
+
+/**
+ * The observer part of the SPA (Eq. 31–46), filling `steps` from its geocentric fields.
+ * @remarks Reda & Andreas (2008) Eq. 31–46.
+ */
+export function spaTopocentric(
+  steps: SpaSteps,
+  latitude: number,
+  longitude: number,
+  elevation: number,
+  pressure: number,
+  temperature: number,
+): SpaSteps {
+  const H = wrap360(steps.nu + longitude - steps.alpha); // Eq. 31
+  const xi = 8.794 / (3600 * steps.R); // Eq. 32
+  const latRad = latitude * RAD;
+  const uRad = atan(POLAR_RATIO * tan(latRad)); // Eq. 33
+  const x = cos(uRad) + (elevation / EARTH_RADIUS_M) * cos(latRad); // Eq. 34
+  const y = POLAR_RATIO * sin(uRad) + (elevation / EARTH_RADIUS_M) * sin(latRad); // Eq. 35
+  const HRad = H * RAD;
+  const deltaRad = steps.delta * RAD;
+  const sinXi = sin(xi * RAD);
+  const denom = cos(deltaRad) - x * sinXi * cos(HRad);
+  const deltaAlphaRad = atan2(-x * sinXi * sin(HRad), denom); // Eq. 36
+  const deltaPrimeRad = atan2((sin(deltaRad) - y * sinXi) * cos(deltaAlphaRad), denom); // Eq. 37
+  const deltaAlpha = deltaAlphaRad * DEG;
+  const HPrime = H - deltaAlpha; // Eq. 39
+  const HPrimeRad = HPrime * RAD;
+  const e0 = asinClamped(sin(latRad) * sin(deltaPrimeRad) + cos(latRad) * cos(deltaPrimeRad) * cos(HPrimeRad)) * DEG; // Eq. 41
+  const deltaE = refractionSpa(e0, pressure, temperature); // Eq. 42
+  const e = e0 + deltaE; // Eq. 43
+  const gamma = wrap360(atan2(sin(HPrimeRad), cos(HPrimeRad) * sin(latRad) - tan(deltaPrimeRad) * cos(latRad)) * DEG); // Eq. 45
+  steps.H = H;
+  steps.xi = xi;
+  steps.deltaAlpha = deltaAlpha;
+  steps.alphaPrime = wrap360(steps.alpha + deltaAlpha); // Eq. 38
+  steps.deltaPrime = deltaPrimeRad * DEG;
+  steps.HPrime = HPrime;
+  steps.e0 = e0;
+  steps.deltaE = deltaE;
+  steps.e = e;
+  steps.zenith = 90 - e; // Eq. 44
+  steps.gamma = gamma;
+  steps.phi = wrap360(gamma + 180); // Eq. 46
+  return steps;
+}
+
+function emptySteps(): SpaSteps {
+  return {
+    jd: 0, jde: 0, jc: 0, jce: 0, jme: 0, L: 0, B: 0, R: 0, theta: 0, beta: 0, deltaPsi: 0, deltaEpsilon: 0,
+    epsilon0: 0, epsilon: 0, deltaTau: 0, lambda: 0, nu0: 0, nu: 0, alpha: 0, delta: 0, H: 0, xi: 0,
+    deltaAlpha: 0, alphaPrime: 0, deltaPrime: 0, HPrime: 0, e0: 0, deltaE: 0, e: 0, zenith: 0, gamma: 0,
+    phi: 0, M: 0, E: 0,
+  };
+}
+
+/** Options after validation and defaults. */
+export interface ResolvedSunOptions {
+  elevation: number;
+  pressure: number;
+  temperature: number;
+  /** undefined: ΔT from {@link deltaTAt} at each instant. */
+  deltaT: number | undefined;
+}
+
+/**
+ * Validates observer options and fills in defaults; errors name the field (`elevation`, `pressure`,
+ * `temperature`, `deltaT`), the first three after `prefix` (e.g. `site.`).
+ */
+export function resolveSunOptions(options: SunOptions | undefined, prefix = ''): ResolvedSunOptions {
+  const o = options ?? {};
+  const elevation = o.elevation === undefined ? 0 : requireRange(`${prefix}elevation`, o.elevation, -500, 9000, 'm');
+  const pressure =
+    o.pressure === undefined
+      ? standardPressure(elevation)
+      : requireRange(`${prefix}pressure`, o.pressure, 0, 1200, 'hPa', { exclusiveMin: true });
+  const temperature = o.temperature === undefined ? 12 : requireRange(`${prefix}temperature`, o.temperature, -90, 60, '°C');
+  const deltaT = o.deltaT === undefined ? undefined : requireRange('deltaT', o.deltaT, -100, 10_000, 's');
+  return { elevation, pressure, temperature, deltaT };
+}
+
+/** Validates latitude and longitude by their glossary names (after `prefix`, e.g. `site.`). */
+export function requireSite(latitude: number, longitude: number, prefix = ''): void {
+  requireRange(`${prefix}latitude`, latitude, -90, 90, '°');
+  requireRange(`${prefix}longitude`, longitude, -180, 180, '°');
+}
+
+function requireInstant(utcMs: number, deltaTGiven: boolean): void {
+  if (typeof utcMs !== 'number' || !Number.isFinite(utcMs) || utcMs < UTC_MS_MIN || utcMs > UTC_MS_MAX) {
+    throw new SunpaneError('utcMs', utcMs, 'must be an instant from the year −2000 to 9999 [ms since 1970-01-01 UT]');
+  }
+  if (!deltaTGiven && utcMs < DEFAULT_DELTA_T_FROM) {
+    throw new SunpaneError('deltaT', undefined, 'must be given for instants before 1860 (the default ΔT polynomials start in 1860)');
+  }
+}
+
+const scratch = emptySteps();
+
+/** All SPA steps for one instant and site, options already resolved (no validation). */
+function stepsAt(utcMs: number, latitude: number, longitude: number, o: ResolvedSunOptions, out: SpaSteps): SpaSteps {
+  spaGeocentric(julianDay(utcMs), o.deltaT ?? deltaTAt(utcMs), out);
+  return spaTopocentric(out, latitude, longitude, o.elevation, o.pressure, o.temperature);
+}
+
+/**
+ * Every intermediate value of the SPA for one instant and site (for checks and teaching).
+ * @param utcMs - UTC instant [ms since 1970-01-01], years −2000…9999 (before 1860 give `deltaT`)
+ * @param latitude - [°] −90…90, north positive
+ * @param longitude - [°] −180…180, east positive
+ * @param options - elevation, pressure, temperature, ΔT
+ * @returns the report's quantities, named as in it
+ * @remarks Reda & Andreas (2008), Eq. 4–46 and A1–A4.
+ */
+export function spaSteps(utcMs: number, latitude: number, longitude: number, options?: SunOptions): SpaSteps {
+  const o = resolveSunOptions(options);
+  requireSite(latitude, longitude);
+  requireInstant(utcMs, o.deltaT !== undefined);
+  return stepsAt(utcMs, latitude, longitude, o, emptySteps());
+}
+
+/**
+ * Topocentric sun position at an instant by the NREL SPA.
+ * @param utcMs - UTC instant [ms since 1970-01-01], years −2000…9999 (the SPA's stated accuracy
+ *   holds for −2000…6000; before 1860 `options.deltaT` is required)
+ * @param latitude - site latitude [°] −90…90, north positive
+ * @param longitude - site longitude [°] −180…180, east positive
+ * @param options - elevation [m] (default 0), pressure [hPa] (default: standard atmosphere at the
+ *   elevation), temperature [°C] (default 12), ΔT [s] (default Espenak & Meeus 2006)
+ * @returns altitude/zenith with refraction, azimuth clockwise from north, geocentric declination,
+ *   right ascension and hour angle, equation of time [min], apparent solar time [h]. At night the
+ *   altitude is simply negative (refraction is added only above −0.8334°, as in the SPA).
+ * @remarks Reda & Andreas (2008), NREL/TP-560-34302, Eq. 4–46 and A1–A4; uncertainty ±0.0003°.
+ */
+export function sunPosition(utcMs: number, latitude: number, longitude: number, options?: SunOptions): SunPosition {
+  const o = resolveSunOptions(options);
+  requireSite(latitude, longitude);
+  requireInstant(utcMs, o.deltaT !== undefined);
+  const s = stepsAt(utcMs, latitude, longitude, o, scratch);
+  const hourAngle = wrap180(s.H);
+  return {
+    altitude: s.e,
+    azimuth: s.phi,
+    zenith: s.zenith,
+    declination: s.delta,
+    hourAngle,
+    equationOfTime: s.E,
+    rightAscension: s.alpha,
+    altitudeUnrefracted: s.e0,
+    solarTime: wrap360(180 + hourAngle) / 15,
+    earthSunDistance: s.R,
+  };
+}
+
+/** Sunrise, solar noon and sunset of one local day. */
+export interface SunEvents {
+  /** `polarDay`: the sun stays above the rise/set altitude all local day; `polarNight`: below it all day. */
+  condition: 'normal' | 'polarDay' | 'polarNight';
+  /** Local standard-time serial of sunrise, or null when the sun does not rise during the local day. */
+  sunrise: number | null;
+  /** Local serial of the upper transit (the sun due south or north); also given in polar day and night. */
+  solarNoon: number;
+  /** Local serial of sunset, or null when the sun does not set during the local day. */
+  sunset: number | null;
+}
+
+/**
+ * Geocentric altitude of the sun's centre without refraction [°] and the geocentric local hour angle
+ * H [°] at an instant: the quantities the SPA's rise/transit/set routine (Appendix A.2) works with.
+ */
+function eventProbe(utcMs: number, latitude: number, longitude: number, o: ResolvedSunOptions): { altitude: number; hourAngle: number } {
+  const s = spaGeocentric(julianDay(utcMs), o.deltaT ?? deltaTAt(utcMs), scratch);
+  const hourAngle = s.nu + longitude - s.alpha; // Eq. 31
+  const latRad = latitude * RAD;
+  const deltaRad = s.delta * RAD;
+  const altitude = asinClamped(sin(latRad) * sin(deltaRad) + cos(latRad) * cos(deltaRad) * cos(hourAngle * RAD)) * DEG; // as Eq. 41 with geocentric δ, H (Appendix A.2)
+  return { altitude, hourAngle };
+}
+
+/** Instant near `guessMs` when the geocentric hour angle is `target` (0 upper, 180 lower transit). */
+function transitNear(guessMs: number, target: number, latitude: number, longitude: number, o: ResolvedSunOptions): number {
+  let t = guessMs;
+  for (let i = 0; i < 8; i++) {
+    // The hour angle advances about 360° per day (sidereal rate less the sun's motion).
+    const offset = wrap180(eventProbe(t, latitude, longitude, o).hourAngle - target);
+    t -= (offset / 360) * MS_PER_DAY;
+    if (Math.abs(offset) < 1e-8) break;
+  }
+  return t;
+}
+
+/** Root of altitude − RISE_SET_ALTITUDE between a and b (opposite signs) by the Illinois method. */
+function crossing(a: number, fa: number, b: number, fb: number, latitude: number, longitude: number, o: ResolvedSunOptions): number {
+  let side = 0;
+  for (let i = 0; i < 60 && b - a > 1; i++) {
+    const c = (a * fb - b * fa) / (fb - fa);
+    const fc = eventProbe(c, latitude, longitude, o).altitude - RISE_SET_ALTITUDE;
+    if (fc === 0) return c;
+    if (fc * fb > 0) {
+      b = c;
+      fb = fc;
+      if (side === -1) fa /= 2;
+      side = -1;
+    } else {
+      a = c;
+      fa = fc;
+      if (side === 1) fb /= 2;
+      side = 1;
+    }
+    if (Math.abs(fc) < 1e-7) return c;
+  }
+  return (a + b) / 2;
+}
+
+/**
+ * Sunrise, solar noon and sunset on a local calendar day.
+ * @param localDate - spreadsheet serial in local standard time; only its calendar day is used
+ * @param latitude - [°] −90…90, north positive
+ * @param longitude - [°] −180…180, east positive
+ * @param utcOffset - standard-time offset from UTC [h], −12…14, east positive
+ * @param options - elevation, pressure, temperature (these do not change the rise/set definition), ΔT
+ * @returns local serials. Sunrise/sunset: the sun's upper limb on the horizon, i.e. geocentric
+ *   geometric altitude of the centre −(0.26667° + 0.5667°), the SPA's convention (Appendix A.2,
+ *   h′0); pressure and temperature do not change it. Solar noon: the upper transit (geocentric
+ *   local hour angle 0, as in Appendix A.2) inside the local day, or the one nearest the day's
+ *   middle in the rare day without one. `condition` is `polarDay` / `polarNight` with null rise and
+ *   set when the sun stays above / below that altitude all day. On a day when only one of the two
+ *   events happens (near the polar circles, or when an event falls just across midnight) the other
+ *   is null and the condition is `normal`; if an event happens twice in one day, the first is given.
+ * @remarks Events are found on the full SPA: transits by Newton iteration on the hour angle, rise
+ *   and set by the Illinois method between consecutive transits (altitude is monotonic there). This
+ *   replaces the SPA's Appendix A.2 interpolation, which works on the UT day.
+ */
+export function sunEvents(localDate: number, latitude: number, longitude: number, utcOffset: number, options?: SunOptions): SunEvents {
+  requireSerial('date', localDate);
+  requireSite(latitude, longitude);
+  requireUtcOffset(utcOffset);
+  const o = resolveSunOptions(options);
+  const dayStart = serialToUtcMs(Math.floor(localDate), utcOffset);
+  const dayEnd = dayStart + MS_PER_DAY;
+  requireInstant(dayStart - MS_PER_DAY, o.deltaT !== undefined);
+
+  // Upper transit nearest local noon, then alternating lower/upper transits half a day apart.
+  const noon = transitNear(dayStart + MS_PER_DAY / 2, 0, latitude, longitude, o);
+  const transits: number[] = [];
+  for (let k = -4; k <= 4; k++) transits.push(k === 0 ? noon : transitNear(noon + (k * MS_PER_DAY) / 2, k % 2 === 0 ? 0 : 180, latitude, longitude, o));
+  const f = transits.map((t) => eventProbe(t, latitude, longitude, o).altitude - RISE_SET_ALTITUDE);
+
+  let sunrise: number | null = null;
+  let sunset: number | null = null;
+  let solarNoon: number | null = null;
+  for (let k = 0; k < transits.length; k++) {
+    const isUpper = (k - 4) % 2 === 0;
+    if (isUpper && transits[k] >= dayStart && transits[k] < dayEnd && solarNoon === null) solarNoon = transits[k];
+    if (k + 1 === transits.length) break;
+    const [a, b] = [transits[k], transits[k + 1]];
+    if (b < dayStart || a >= dayEnd || f[k] * f[k + 1] >= 0) continue;
+    const t = crossing(a, f[k], b, f[k + 1], latitude, longitude, o);
+    if (t < dayStart || t >= dayEnd) continue;
+    if (isUpper) sunset ??= t;
+    else sunrise ??= t;
+  }
+  if (solarNoon === null) {
+    const middle = dayStart + MS_PER_DAY / 2;
+    solarNoon = transits.filter((_, k) => (k - 4) % 2 === 0).reduce((best, t) => (Math.abs(t - middle) < Math.abs(best - middle) ? t : best));
+  }
+  let condition: SunEvents['condition'] = 'normal';
+  if (sunrise === null && sunset === null) {
+    const probeAt = solarNoon >= dayStart && solarNoon < dayEnd ? solarNoon : dayStart;
+    condition = eventProbe(probeAt, latitude, longitude, o).altitude > RISE_SET_ALTITUDE ? 'polarDay' : 'polarNight';
+  }
+  const toSerial = (t: number | null) => (t === null ? null : utcMsToSerial(t, utcOffset));
+  return { condition, sunrise: toSerial(sunrise), solarNoon: utcMsToSerial(solarNoon, utcOffset), sunset: toSerial(sunset) };
+}
