@@ -1,0 +1,119 @@
+/**
+ * Shading options compared: the form's window with up to six sets of outside shading, each run for
+ * the year, against the same window with no overhang, fins or set-back (the skyline, being the
+ * surroundings, stays). Figures per option: annual gain, peak gain, the cut in annual gain against
+ * the unshaded window, and the mean shaded share of the glass over the hours the sun is in front
+ * of the wall (1 − mean sunlit fraction, from the core's annual summary).
+ */
+import { SunpaneError } from '../core/errors';
+import type { Shading, WindowSpec } from '../core/window';
+import { readNumberText } from './spec';
+
+/** Most options compared at once. */
+export const MAX_OPTIONS = 6;
+
+/** One shading option as edited in the pane (texts as typed; blank = 0). */
+export interface ShadingOption {
+  label: string;
+  overhangDepth: string;
+  overhangGap: string;
+  overhangReach: string;
+  leftFinDepth: string;
+  rightFinDepth: string;
+  finGap: string;
+  setBack: string;
+}
+
+/** The option boxes, in table order, with our column titles. */
+export const OPTION_FIELDS: readonly { key: keyof ShadingOption; title: string }[] = [
+  { key: 'label', title: 'Option' },
+  { key: 'overhangDepth', title: 'Overhang depth m' },
+  { key: 'overhangGap', title: 'Overhang gap m' },
+  { key: 'overhangReach', title: 'Overhang reach m' },
+  { key: 'leftFinDepth', title: 'Left fin m' },
+  { key: 'rightFinDepth', title: 'Right fin m' },
+  { key: 'finGap', title: 'Fin gap m' },
+  { key: 'setBack', title: 'Set-back m' },
+];
+
+/** Starting options for a new workbook (edit freely). */
+export function starterOptions(): ShadingOption[] {
+  return [
+    { label: 'Short overhang', overhangDepth: '0.5', overhangGap: '0.2', overhangReach: '0.3', leftFinDepth: '0', rightFinDepth: '0', finGap: '0', setBack: '0' },
+    { label: 'Deep overhang', overhangDepth: '1.0', overhangGap: '0.2', overhangReach: '0.5', leftFinDepth: '0', rightFinDepth: '0', finGap: '0', setBack: '0' },
+    { label: 'Overhang and fins', overhangDepth: '0.6', overhangGap: '0.2', overhangReach: '0.3', leftFinDepth: '0.4', rightFinDepth: '0.4', finGap: '0.1', setBack: '0' },
+  ];
+}
+
+function n(text: string): number {
+  return (text ?? '').trim() === '' ? 0 : (readNumberText(text) as number);
+}
+
+/** The shading set of an option (devices of depth 0 left out), keeping the base window's skyline. */
+export function optionShading(option: ShadingOption, skyline?: number[]): Shading {
+  const s: Shading = {};
+  if (n(option.overhangDepth) !== 0) s.overhang = { projection: n(option.overhangDepth), gap: n(option.overhangGap), extensionLeft: n(option.overhangReach), extensionRight: n(option.overhangReach) };
+  if (n(option.leftFinDepth) !== 0) s.leftFin = { projection: n(option.leftFinDepth), gap: n(option.finGap), extensionAbove: 0, extensionBelow: 0 };
+  if (n(option.rightFinDepth) !== 0) s.rightFin = { projection: n(option.rightFinDepth), gap: n(option.finGap), extensionAbove: 0, extensionBelow: 0 };
+  if (n(option.setBack) !== 0) s.revealDepth = n(option.setBack);
+  if (skyline) s.skyline = skyline;
+  return s;
+}
+
+/** The column title an option's validation message belongs to. */
+export function optionColumnFor(argument: string): string | undefined {
+  if (argument.startsWith('shading.overhang.projection')) return 'Overhang depth m';
+  if (argument.startsWith('shading.overhang.gap')) return 'Overhang gap m';
+  if (argument.startsWith('shading.overhang')) return 'Overhang reach m';
+  if (argument.startsWith('shading.leftFin.projection')) return 'Left fin m';
+  if (argument.startsWith('shading.rightFin.projection')) return 'Right fin m';
+  if (argument.startsWith('shading.leftFin') || argument.startsWith('shading.rightFin')) return 'Fin gap m';
+  if (argument.startsWith('shading.revealDepth')) return 'Set-back m';
+  return undefined;
+}
+
+/** The specs to run: the unshaded window first, then each option. Throws naming the option. */
+export function optionSpecs(base: WindowSpec, options: readonly ShadingOption[], validate: (s: WindowSpec) => void): { label: string; spec: WindowSpec }[] {
+  if (options.length > MAX_OPTIONS) throw new SunpaneError('options', options.length, `must be at most ${MAX_OPTIONS} shading options`);
+  const skyline = base.shading.skyline;
+  const out = [{ label: 'No outside shading', spec: { ...base, shading: skyline ? { skyline } : {} } }];
+  options.forEach((o, i) => {
+    const label = o.label.trim() || `Option ${i + 1}`;
+    out.push({ label, spec: { ...base, name: `${base.name} – ${label}`, shading: optionShading(o, skyline) } });
+  });
+  out.forEach((o, i) => {
+    try {
+      validate(o.spec);
+    } catch (err) {
+      if (!(err instanceof SunpaneError) || i === 0) throw err;
+      const column = optionColumnFor(err.argument);
+      throw new SunpaneError(err.argument, err.value, err.allowed, `option ${i} "${o.label}"${column ? `, column "${column}"` : ''}`);
+    }
+  });
+  return out;
+}
+
+/** Figures of one option. */
+export interface OptionFigures {
+  annualKWh: number;
+  peakW: number;
+  meanSunlitFraction: number;
+}
+
+/** Header of the comparison table (our own wording). */
+export const COMPARE_HEADER = ['Shading option', 'Solar gain kWh/yr', 'Peak gain W', 'Cut vs no shading %', 'Shaded share of sun-on-wall hours'] as const;
+
+/** The comparison rows: reference first. Cut = 1 − annual / annual of the unshaded window. */
+export function comparisonRows(results: readonly { label: string; figures: OptionFigures }[]): (number | string)[][] {
+  const ref = results[0]?.figures.annualKWh ?? 0;
+  const round = (x: number, d: number) => Math.round(x * 10 ** d) / 10 ** d;
+  return results.map((r) => [
+    r.label,
+    round(r.figures.annualKWh, 1),
+    round(r.figures.peakW, 1),
+    round(ref > 0 ? (1 - r.figures.annualKWh / ref) * 100 : 0, 1),
+    round(1 - r.figures.meanSunlitFraction, 3),
+  ]);
+}
+
+export const COMPARE_FORMATS = ['@', '0.0', '0.0', '0.0', '0.000'];

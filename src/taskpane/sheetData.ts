@@ -1,0 +1,103 @@
+/**
+ * Reads what the form points at on the user's sheets: the glazing angle table, the skyline and the
+ * hourly weather columns, and a schedule table by name. Reading only; errors name the form field
+ * (by its WindowSpec path) in the core's words.
+ */
+import { SunpaneError } from '../core/errors';
+import { RANGE_ADDRESS_HELP, type RangeRef, parseRangeAddress } from './addresses';
+import type { FormValues } from './fields';
+import type { RunBatch } from './resultSheets';
+import { type SheetData, neededAddresses } from './spec';
+
+type Cell = string | number | boolean | null;
+
+function rangeOf(ctx: Excel.RequestContext, ref: RangeRef): Excel.Range {
+  const sheet = ref.sheet === undefined ? ctx.workbook.worksheets.getActiveWorksheet() : ctx.workbook.worksheets.getItem(ref.sheet);
+  return sheet.getRange(ref.range);
+}
+
+/** A cell as a number for the core, a blank as NaN (a missing hour in a weather column). */
+function cellNumber(v: Cell): number | string {
+  if (typeof v === 'number') return v;
+  if (v === null || v === '' || (typeof v === 'string' && v.trim() === '')) return NaN;
+  const n = Number(String(v).trim());
+  return Number.isFinite(n) ? n : String(v);
+}
+
+/** A column of numbers from a range (row by row); blank cells become NaN. */
+export function columnValues(values: readonly (readonly Cell[])[]): (number | string)[] {
+  const out: (number | string)[] = [];
+  for (const row of values) for (const cell of row) out.push(cellNumber(cell));
+  return out;
+}
+
+/** Weather columns: blank or text cells are marked missing (NaN) — the core counts them. */
+export function weatherColumn(values: readonly (readonly Cell[])[]): number[] {
+  return columnValues(values).map((v) => (typeof v === 'number' ? v : NaN));
+}
+
+/** A two-column angle table (angle, SHGC), skipping blank rows and a text header row. */
+export function angleTableOf(values: readonly (readonly Cell[])[]): { angles: number[]; values: number[] } {
+  const rows = values.filter((r) => r.some((c) => c !== '' && c !== null));
+  const body = rows.length > 0 && typeof rows[0][0] === 'string' && !Number.isFinite(Number(rows[0][0])) ? rows.slice(1) : rows;
+  if (body.length > 0 && body[0].length < 2) throw new SunpaneError('glazing.angleTable', `a range ${body[0].length} column wide`, 'must be two columns: incidence angle ° and SHGC');
+  return { angles: body.map((r) => cellNumber(r[0]) as number), values: body.map((r) => cellNumber(r[1]) as number) };
+}
+
+/** Reads every range the form needs (by its address boxes) in one request. */
+export async function readSheetData(run: RunBatch, form: FormValues): Promise<SheetData> {
+  const wanted = neededAddresses(form).map((f) => {
+    const ref = parseRangeAddress(form[f.id] ?? '');
+    if (!ref) throw new SunpaneError(f.paths?.[0] ?? f.id, (form[f.id] ?? '').trim() === '' ? null : form[f.id], RANGE_ADDRESS_HELP);
+    return { field: f, ref };
+  });
+  if (wanted.length === 0) return {};
+  return run(async (ctx) => {
+    const ranges = wanted.map((w) => {
+      const r = rangeOf(ctx, w.ref);
+      r.load('values');
+      return r;
+    });
+    try {
+      await ctx.sync();
+    } catch (err) {
+      const path = wanted[0].field.paths?.[0] ?? wanted[0].field.id;
+      throw new SunpaneError(path, wanted.map((w) => `${w.ref.sheet ? `${w.ref.sheet}!` : ''}${w.ref.range}`).join(', '), 'must point at cells that exist (check the sheet names)', (err as Error).message);
+    }
+    const data: SheetData = {};
+    wanted.forEach((w, i) => {
+      const values = ranges[i].values as Cell[][];
+      switch (w.field.id) {
+        case 'angleTableAddress':
+          data.angleTable = angleTableOf(values);
+          break;
+        case 'skylineAddress':
+          data.skyline = columnValues(values).filter((v) => !(typeof v === 'number' && Number.isNaN(v))) as number[];
+          break;
+        case 'dniAddress':
+          data.dni = weatherColumn(values);
+          break;
+        case 'dhiAddress':
+          data.dhi = weatherColumn(values);
+          break;
+        case 'ghiAddress':
+          data.ghi = weatherColumn(values);
+          break;
+      }
+    });
+    return data;
+  });
+}
+
+/** Reads a table's values (header row first) by the table's name; a clear message if missing. */
+export async function readNamedTable(run: RunBatch, name: string): Promise<Cell[][]> {
+  return run(async (ctx) => {
+    const table = ctx.workbook.tables.getItemOrNullObject(name.trim());
+    await ctx.sync();
+    if (table.isNullObject) throw new SunpaneError('table', name, 'must be the name of an Excel table in this workbook (Insert → Table, then Table Design → Table Name)');
+    const range = table.getRange();
+    range.load('values');
+    await ctx.sync();
+    return range.values as Cell[][];
+  });
+}

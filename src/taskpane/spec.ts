@@ -1,0 +1,189 @@
+/**
+ * From the form's text boxes (and the ranges they point at) to a WindowSpec, and back to messages
+ * beside the boxes. The pane does no physics and no range checks of its own: numbers go to the
+ * core's validator as typed, so the messages are the core's, word for word the same as the
+ * worksheet functions show.
+ */
+import { SunpaneError } from '../core/errors';
+import type { AngleTable, Shading, Weather, WindowSpec } from '../core/window';
+import { RANGE_ADDRESS_HELP, parseRangeAddress } from './addresses';
+import { FIELDS, FIELD_BY_ID, type FieldDef, type FormValues, fieldForArgument } from './fields';
+
+/** Data the form refers to on sheets, once read. */
+export interface SheetData {
+  angleTable?: AngleTable;
+  skyline?: number[];
+  dni?: number[];
+  dhi?: number[];
+  ghi?: number[];
+}
+
+/** Checks a WindowSpec; throws SunpaneError naming the field path (the core's validateWindowSpec). */
+export type SpecValidator = (spec: WindowSpec) => void;
+
+/** Boxes where blank means the box's initial value (no device, sea level, no blind). */
+const BLANK_MEANS_INITIAL = new Set(
+  FIELDS.filter((f) => f.section === 'shade' && f.kind === 'number').map((f) => f.id).concat(['elevation', 'interiorAttenuation']),
+);
+
+/**
+ * A number box's text as a value for the core: a number when it reads as one, `null` when blank
+ * (the core then says "blank is not allowed"), else the text itself, so the core's message quotes
+ * what was typed.
+ */
+export function readNumberText(text: string | undefined): number | string | null {
+  const t = (text ?? '').trim();
+  if (t === '') return null;
+  const n = Number(t);
+  return Number.isFinite(n) ? n : t;
+}
+
+/** A list box (`3.1, 3.3; 3.6`) as values for the core, each read like a number box. */
+export function readListText(text: string | undefined): (number | string | null)[] {
+  const t = (text ?? '').trim();
+  if (t === '') return [];
+  return t.split(/[;,\s]+/).filter((s) => s !== '').map(readNumberText);
+}
+
+function num(values: FormValues, id: string): number {
+  const raw = values[id];
+  if (BLANK_MEANS_INITIAL.has(id) && (raw ?? '').trim() === '') return readNumberText(FIELD_BY_ID.get(id)?.initial) as number;
+  // The core validates: a text or null here is reported by it with the field's path.
+  return readNumberText(raw) as number;
+}
+
+function isZero(values: FormValues, id: string): boolean {
+  return num(values, id) === 0;
+}
+
+/** Which sheet ranges the form needs read before a run, by field id. */
+export function neededAddresses(values: FormValues): FieldDef[] {
+  return FIELDS.filter((f) => f.kind === 'address' && (f.visible ? f.visible(values) : true) && (f.id !== 'skylineAddress' || (values[f.id] ?? '').trim() !== ''));
+}
+
+/**
+ * Checks the address boxes the form needs; throws SunpaneError naming the spec path
+ * (`weather.dni`, `shading.skyline`…) in the same words as the core's messages.
+ */
+export function checkAddresses(values: FormValues): void {
+  for (const f of neededAddresses(values)) {
+    const text = values[f.id] ?? '';
+    if (!parseRangeAddress(text)) throw new SunpaneError(f.paths?.[0] ?? f.id, text.trim() === '' ? null : text, RANGE_ADDRESS_HELP);
+  }
+}
+
+function weatherOf(values: FormValues, data: SheetData): Weather {
+  switch (values.weatherSource) {
+    case 'ashraeClearSky':
+      return { kind: 'ashraeClearSky', tauB: readListText(values.tauB) as number[], tauD: readListText(values.tauD) as number[] };
+    case 'measured':
+      return { kind: 'measured', dni: data.dni ?? [], dhi: data.dhi ?? [] };
+    case 'globalHorizontal':
+      return { kind: 'globalHorizontal', ghi: data.ghi ?? [] };
+    case 'ineichenClearSky':
+      return { kind: 'ineichenClearSky', linkeTurbidity: readListText(values.linkeTurbidity) as number[] };
+    default:
+      return { kind: values.weatherSource } as unknown as Weather;
+  }
+}
+
+/**
+ * The WindowSpec the form describes. Devices of depth 0 are left out; the skyline, angle table and
+ * hourly weather come from `data` (read from the sheets beforehand).
+ */
+export function buildWindowSpec(values: FormValues, data: SheetData = {}): WindowSpec {
+  const shading: Shading = {};
+  if (!isZero(values, 'overhangProjection')) {
+    shading.overhang = {
+      projection: num(values, 'overhangProjection'),
+      gap: num(values, 'overhangGap'),
+      extensionLeft: num(values, 'overhangExtensionLeft'),
+      extensionRight: num(values, 'overhangExtensionRight'),
+    };
+  }
+  for (const side of ['left', 'right'] as const) {
+    if (isZero(values, `${side}FinProjection`)) continue;
+    shading[side === 'left' ? 'leftFin' : 'rightFin'] = {
+      projection: num(values, `${side}FinProjection`),
+      gap: num(values, `${side}FinGap`),
+      extensionAbove: num(values, `${side}FinAbove`),
+      extensionBelow: num(values, `${side}FinBelow`),
+    };
+  }
+  if (!isZero(values, 'revealDepth')) shading.revealDepth = num(values, 'revealDepth');
+  if (data.skyline) shading.skyline = data.skyline;
+
+  const table = values.glassModel === 'table';
+  return {
+    name: (values.windowName ?? '').trim() || 'Window',
+    site: {
+      latitude: num(values, 'latitude'),
+      longitude: num(values, 'longitude'),
+      utcOffset: num(values, 'utcOffset'),
+      elevation: num(values, 'elevation'),
+    },
+    surfaceAzimuth: num(values, 'surfaceAzimuth'),
+    surfaceTilt: num(values, 'surfaceTilt'),
+    width: num(values, 'width'),
+    height: num(values, 'height'),
+    frameFraction: num(values, 'frameFraction'),
+    glazing: {
+      shgc: num(values, 'shgc'),
+      panes: table ? 2 : num(values, 'panes'),
+      ...(table && data.angleTable ? { angleTable: data.angleTable } : {}),
+      interiorAttenuation: num(values, 'interiorAttenuation'),
+    },
+    shading,
+    groundAlbedo: num(values, 'groundAlbedo'),
+    skyModel: values.skyModel as WindowSpec['skyModel'],
+    weather: weatherOf(values, data),
+    year: num(values, 'year'),
+  };
+}
+
+/** Problems found in the form: field id → message, plus messages that belong to no one field. */
+export interface FormProblems {
+  byField: Record<string, string>;
+  general: string[];
+}
+
+/** Stand-in weather for checking the form before the hourly columns are read. */
+const STAND_IN_WEATHER: Weather = { kind: 'ineichenClearSky', linkeTurbidity: [3] };
+
+/**
+ * Every problem in the form, each with the core's own message. The validator stops at the first
+ * bad field, so the check is repeated with that field set back to its initial value until the
+ * form passes (each field is reported once).
+ * @param values - the form as typed
+ * @param validate - the core's WindowSpec validator
+ * @param data - sheet data already read; without it, hourly weather is not checked here
+ */
+export function findProblems(values: FormValues, validate: SpecValidator, data?: SheetData): FormProblems {
+  const problems: FormProblems = { byField: {}, general: [] };
+  const work: FormValues = { ...values };
+  for (let round = 0; round < FIELDS.length + 2; round++) {
+    try {
+      checkAddresses(work);
+      const spec = buildWindowSpec(work, data ?? {});
+      if (!data && (spec.weather.kind === 'measured' || spec.weather.kind === 'globalHorizontal')) spec.weather = STAND_IN_WEATHER;
+      validate(spec);
+      return problems;
+    } catch (err) {
+      if (!(err instanceof SunpaneError)) throw err;
+      const field = fieldForArgument(err.argument);
+      if (!field || problems.byField[field.id] !== undefined) {
+        problems.general.push(err.message);
+        return problems;
+      }
+      problems.byField[field.id] = err.message;
+      work[field.id] = field.kind === 'address' ? 'A1' : field.initial;
+      if (field.kind === 'address' && data) return problems;
+    }
+  }
+  return problems;
+}
+
+/** True when there is nothing to report. */
+export function isClean(p: FormProblems): boolean {
+  return p.general.length === 0 && Object.keys(p.byField).length === 0;
+}

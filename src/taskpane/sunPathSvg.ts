@@ -1,0 +1,168 @@
+/**
+ * The sun-path diagram: an equidistant polar projection of the sky (zenith at the centre, horizon
+ * on the rim, north up, bearings clockwise), with the sun's tracks for chosen days, whole-hour
+ * marks, the skyline, and the window's shading mask laid under them in bands: sun fully shaded,
+ * partly shaded, not shaded, and behind the wall. Pure text out (an SVG string), so it can be
+ * drawn in the pane and checked in node alike.
+ */
+import type { MaskGrid, SunTrack } from './engine';
+
+/** Our colours for the diagram. */
+export const SUN_PATH_COLOURS = {
+  open: '#FFFFFF',
+  part: '#F4C979',
+  full: '#B6552F',
+  behind: '#D9DDE1',
+  grid: '#9AA5AE',
+  rim: '#38434C',
+  window: '#1F5C66',
+  skyline: '#4E5B31',
+  tracks: ['#C2410C', '#B08900', '#2563A8'],
+};
+
+const SIZE = 320;
+const CX = 160;
+const CY = 160;
+const R = 136;
+
+/** Centre-relative position of a sun direction in the projection [px]. */
+export function project(altitude: number, azimuth: number): { x: number; y: number } {
+  const r = (R * (90 - Math.max(0, Math.min(90, altitude)))) / 90;
+  const a = (azimuth * Math.PI) / 180;
+  return { x: CX + r * Math.sin(a), y: CY - r * Math.cos(a) };
+}
+
+const f = (n: number) => n.toFixed(1);
+
+function sector(az0: number, az1: number, alt0: number, alt1: number): string {
+  const p1 = project(alt0, az0);
+  const p2 = project(alt0, az1);
+  const p3 = project(alt1, az1);
+  const p4 = project(alt1, az0);
+  const r0 = (R * (90 - alt0)) / 90;
+  const r1 = (R * (90 - alt1)) / 90;
+  return `M${f(p1.x)} ${f(p1.y)}A${f(r0)} ${f(r0)} 0 0 1 ${f(p2.x)} ${f(p2.y)}L${f(p3.x)} ${f(p3.y)}A${f(r1)} ${f(r1)} 0 0 0 ${f(p4.x)} ${f(p4.y)}Z`;
+}
+
+const MONTH_NAMES = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
+
+/** What to draw. */
+export interface SunPathDrawing {
+  tracks: readonly SunTrack[];
+  /** Labels of the tracks, e.g. "21 Jun"; default from month and day. */
+  trackLabels?: readonly string[];
+  mask?: MaskGrid;
+  /** Direction the glass faces [°]. */
+  surfaceAzimuth: number;
+  /** Skyline elevations for equal sectors clockwise from north [°]. */
+  skyline?: readonly number[];
+  /** Text under the title, e.g. which mask is shown. */
+  caption: string;
+}
+
+function escapeXml(text: string): string {
+  return text.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;');
+}
+
+/** The diagram as an SVG document fragment (`<svg>…</svg>`). */
+export function sunPathSvg(d: SunPathDrawing): string {
+  const c = SUN_PATH_COLOURS;
+  const parts: string[] = [];
+  const legendTop = SIZE + 8;
+  const height = legendTop + 58;
+  parts.push(`<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 ${SIZE} ${height}" width="100%" role="img" aria-labelledby="sp-title sp-desc" class="sun-path">`);
+  parts.push(`<title id="sp-title">Sun path and shading mask</title><desc id="sp-desc">${escapeXml(d.caption)}</desc>`);
+  parts.push(`<circle cx="${CX}" cy="${CY}" r="${R}" fill="${c.open}"/>`);
+
+  // Mask bands.
+  if (d.mask) {
+    const byKind: Record<string, string[]> = { part: [], full: [], behind: [] };
+    for (const cell of d.mask.cells) {
+      if (cell.kind === 'open') continue;
+      byKind[cell.kind].push(sector(cell.azimuth, cell.azimuth + d.mask.azimuthStep, cell.altitude, Math.min(90, cell.altitude + d.mask.altitudeStep)));
+    }
+    for (const kind of ['behind', 'part', 'full'] as const) {
+      if (byKind[kind].length) parts.push(`<path class="mask-${kind}" d="${byKind[kind].join('')}" fill="${c[kind]}" stroke="${c[kind]}" stroke-width="0.4"/>`);
+    }
+  }
+
+  // Skyline: filled from the horizon up to its elevation in each sector.
+  if (d.skyline && d.skyline.length > 0) {
+    const n = d.skyline.length;
+    const paths: string[] = [];
+    d.skyline.forEach((e, k) => {
+      if (e > 0) paths.push(sector((k * 360) / n, ((k + 1) * 360) / n, 0, e));
+    });
+    if (paths.length) parts.push(`<path class="skyline" d="${paths.join('')}" fill="${c.skyline}" fill-opacity="0.45" stroke="${c.skyline}" stroke-width="0.6"/>`);
+  }
+
+  // Altitude rings and bearing spokes.
+  for (const alt of [15, 30, 45, 60, 75]) {
+    const r = (R * (90 - alt)) / 90;
+    parts.push(`<circle cx="${CX}" cy="${CY}" r="${f(r)}" fill="none" stroke="${c.grid}" stroke-width="0.5" stroke-dasharray="${alt % 30 === 0 ? '' : '2 3'}"/>`);
+    if (alt % 30 === 0) parts.push(`<text x="${CX + 2}" y="${f(CY - r - 2)}" font-size="8" fill="${c.grid}">${alt}°</text>`);
+  }
+  for (let az = 0; az < 360; az += 30) {
+    const p = project(0, az);
+    parts.push(`<line x1="${CX}" y1="${CY}" x2="${f(p.x)}" y2="${f(p.y)}" stroke="${c.grid}" stroke-width="0.4"/>`);
+  }
+  parts.push(`<circle cx="${CX}" cy="${CY}" r="${R}" fill="none" stroke="${c.rim}" stroke-width="1.2"/>`);
+  const compass: [string, number][] = [['N', 0], ['E', 90], ['S', 180], ['W', 270]];
+  for (const [label, az] of compass) {
+    const a = (az * Math.PI) / 180;
+    const x = CX + (R + 11) * Math.sin(a);
+    const y = CY - (R + 11) * Math.cos(a) + 4;
+    parts.push(`<text x="${f(x)}" y="${f(y)}" font-size="11" font-weight="600" text-anchor="middle" fill="${c.rim}">${label}</text>`);
+  }
+
+  // The window's facing direction.
+  const w0 = project(90, d.surfaceAzimuth);
+  const w1 = project(0, d.surfaceAzimuth);
+  parts.push(`<line class="facing" x1="${f(w0.x)}" y1="${f(w0.y)}" x2="${f(w1.x)}" y2="${f(w1.y)}" stroke="${c.window}" stroke-width="2" stroke-dasharray="6 3"/>`);
+
+  // Tracks with whole-hour marks.
+  d.tracks.forEach((t, i) => {
+    const colour = c.tracks[i % c.tracks.length];
+    const runs: string[][] = [];
+    let current: string[] = [];
+    for (const p of t.points) {
+      if (p.altitude > 0) {
+        const q = project(p.altitude, p.azimuth);
+        current.push(`${f(q.x)},${f(q.y)}`);
+      } else if (current.length) {
+        runs.push(current);
+        current = [];
+      }
+    }
+    if (current.length) runs.push(current);
+    for (const run of runs) if (run.length > 1) parts.push(`<polyline class="track" points="${run.join(' ')}" fill="none" stroke="${colour}" stroke-width="1.8"/>`);
+    for (const p of t.points) {
+      if (p.altitude <= 0 || Math.abs(p.hour - Math.round(p.hour)) > 1e-9 || p.hour >= 24) continue;
+      const q = project(p.altitude, p.azimuth);
+      parts.push(`<circle class="hour" cx="${f(q.x)}" cy="${f(q.y)}" r="2.2" fill="${colour}"/>`);
+      if (i === 0) parts.push(`<text x="${f(q.x + 3)}" y="${f(q.y - 3)}" font-size="7" fill="${c.rim}">${p.hour}</text>`);
+    }
+  });
+
+  // Legend.
+  const labels = d.trackLabels ?? d.tracks.map((t) => `${t.day} ${MONTH_NAMES[t.month - 1]}`);
+  labels.forEach((label, i) => {
+    const x = 8 + i * 104;
+    parts.push(`<line x1="${x}" y1="${legendTop + 6}" x2="${x + 16}" y2="${legendTop + 6}" stroke="${c.tracks[i % c.tracks.length]}" stroke-width="2"/>`);
+    parts.push(`<text x="${x + 20}" y="${legendTop + 9}" font-size="9" fill="${c.rim}">${escapeXml(label)}</text>`);
+  });
+  const keys: [string, string][] = [
+    ['not shaded', c.open],
+    ['partly shaded', c.part],
+    ['fully shaded', c.full],
+    ['behind the wall', c.behind],
+  ];
+  keys.forEach(([label, colour], i) => {
+    const x = 8 + i * 78;
+    parts.push(`<rect x="${x}" y="${legendTop + 18}" width="10" height="10" fill="${colour}" stroke="${c.rim}" stroke-width="0.5"/>`);
+    parts.push(`<text x="${x + 14}" y="${legendTop + 27}" font-size="8.5" fill="${c.rim}">${label}</text>`);
+  });
+  parts.push(`<text x="8" y="${legendTop + 46}" font-size="8.5" fill="${c.rim}">${escapeXml(d.caption)}</text>`);
+  parts.push('</svg>');
+  return parts.join('');
+}
