@@ -1,0 +1,82 @@
+/**
+ * Summary of a window's annual hourly series: monthly and annual energy, the peak hour, sunlit
+ * hours, mean sunlit fraction while the sun is on the wall, and the count of missing hours.
+ */
+import { type AnnualSeries, monthOfDay } from './annual';
+
+/** What one year of a window adds up to. */
+export interface AnnualSummary {
+  /** Solar gain per month, January first [kWh] (12 values; missing hours add nothing). */
+  monthlyKWh: number[];
+  /** Solar gain over the year [kWh]: the sum of `monthlyKWh`. */
+  annualKWh: number;
+  /** Largest hourly gain [W] (0 for a year without sun). */
+  peakW: number;
+  /** Local serial at the end of the peak hour (the first such hour on ties). */
+  peakStamp: number;
+  /** Hours with beam on the glass: beam on the plane > 0 and sunlit fraction > 0 [h]. */
+  sunlitHours: number;
+  /**
+   * Mean sunlit fraction over the hours with the sun above the horizon and in front of the wall
+   * (incidence < 90°), 0…1; 0 when the sun never reaches the wall.
+   */
+  meanSunlitFraction: number;
+  /** Hours the sun is above the horizon and in front of the window [h]. */
+  sunOnWallHours: number;
+  /** Hours without weather values [h]; their gain is not in the totals. */
+  missingHours: number;
+  /** Missing hours per month, January first [h]. */
+  monthlyMissingHours: number[];
+}
+
+/**
+ * Adds up an annual series. Each row is one hour, so its gain in W is its energy in Wh.
+ * @param series - from {@link annualSeries}
+ * @returns monthly and annual kWh, peak W and its stamp, sunlit hours, mean sunlit fraction with
+ *   the sun on the wall, and missing hours (overall and by month) so that a total with gaps is
+ *   never mistaken for a complete one
+ * @remarks The month of a row is the month of the middle of its hour (the stamp of the hour ending
+ *   at midnight on the 31st belongs to that 31st).
+ */
+export function summarizeAnnual(series: AnnualSeries): AnnualSummary {
+  const monthlyWh = new Array<number>(12).fill(0);
+  const monthlyMissingHours = new Array<number>(12).fill(0);
+  let peakW = 0;
+  let peakIndex = 0;
+  let sunlitHours = 0;
+  let sunOnWallHours = 0;
+  let sunlitSum = 0;
+  let missingHours = 0;
+  const months = monthOfDay(series.year);
+  for (let i = 0; i < series.hours; i++) {
+    const month = months[(i / 24) | 0];
+    if (series.missing[i] === 1) {
+      missingHours++;
+      monthlyMissingHours[month - 1]++;
+    } else {
+      const q = series.gain[i];
+      monthlyWh[month - 1] += q;
+      if (q > peakW) {
+        peakW = q;
+        peakIndex = i;
+      }
+      if (series.beam[i] > 0 && series.sunlitFraction[i] > 0) sunlitHours++;
+    }
+    if (series.sunAltitude[i] > 0 && series.incidence[i] < 90) {
+      sunOnWallHours++;
+      sunlitSum += series.sunlitFraction[i];
+    }
+  }
+  const monthlyKWh = monthlyWh.map((wh) => wh / 1000);
+  return {
+    monthlyKWh,
+    annualKWh: monthlyKWh.reduce((a, b) => a + b, 0),
+    peakW,
+    peakStamp: series.stampSerial[peakIndex],
+    sunlitHours,
+    meanSunlitFraction: sunOnWallHours > 0 ? sunlitSum / sunOnWallHours : 0,
+    sunOnWallHours,
+    missingHours,
+    monthlyMissingHours,
+  };
+}

@@ -1,0 +1,186 @@
+/**
+ * Validation of a {@link WindowSpec}: every field checked, errors naming the field by its path
+ * (`glazing.shgc`, `shading.overhang.projection`, `weather.dni`, `site.latitude` ...), and the
+ * defaults of the optional fields in one place.
+ */
+import { SunpaneError, requireRange } from './errors';
+import { LINKE_MAX, LINKE_MIN, TAU_B_MAX, TAU_D_MAX } from './sky';
+import { hoursInYear, requireYear } from './time';
+import type { Fin, Glazing, Shading, Site, SkyModel, Weather, WindowSpec } from './window';
+
+/**
+ * Default radiant fraction of the window gain: 1, all transmitted solar gain treated as radiant
+ * (reaching the floor and furnishings before the air), the usual treatment of unshaded glazing in
+ * the radiant time series method (Spitler, Fisher & Pedersen 1997 — from memory; set
+ * `glazing.radiantFraction` when the room or an interior shade calls for another split).
+ */
+export const DEFAULT_RADIANT_FRACTION = 1;
+/** Largest window dimension and shading length accepted [m]. */
+export const MAX_LENGTH = 1000;
+/** Largest irradiance value accepted in a weather series [W/m²] (above any solar constant estimate). */
+export const MAX_IRRADIANCE = 2000;
+
+const SKY_MODELS: readonly SkyModel[] = ['isotropic', 'hayDavies', 'perez1990'];
+const WEATHER_KINDS: readonly Weather['kind'][] = ['ashraeClearSky', 'ineichenClearSky', 'measured', 'globalHorizontal'];
+
+function requireObject(path: string, value: unknown): Record<string, unknown> {
+  if (value === null || typeof value !== 'object' || Array.isArray(value)) throw new SunpaneError(path, value, 'must be given (an object)');
+  return value as Record<string, unknown>;
+}
+
+function optionalRange(path: string, value: unknown, min: number | undefined, max: number | undefined, unit?: string, options?: { exclusiveMin?: boolean; integer?: boolean }): void {
+  if (value !== undefined) requireRange(path, value, min, max, unit, options);
+}
+
+function validateSite(site: Site): void {
+  requireObject('site', site);
+  requireRange('site.latitude', site.latitude, -90, 90, '°');
+  requireRange('site.longitude', site.longitude, -180, 180, '°');
+  requireRange('site.utcOffset', site.utcOffset, -12, 14, 'h');
+  optionalRange('site.elevation', site.elevation, -500, 9000, 'm');
+  optionalRange('site.pressure', site.pressure, 0, 1200, 'hPa', { exclusiveMin: true });
+  optionalRange('site.temperature', site.temperature, -90, 60, '°C');
+}
+
+function validateGlazing(glazing: Glazing): void {
+  requireObject('glazing', glazing);
+  requireRange('glazing.shgc', glazing.shgc, 0, 1);
+  requireRange('glazing.panes', glazing.panes, 1, 4, undefined, { integer: true });
+  optionalRange('glazing.interiorAttenuation', glazing.interiorAttenuation, 0, 1);
+  optionalRange('glazing.radiantFraction', glazing.radiantFraction, 0, 1);
+  const table = glazing.angleTable;
+  if (table === undefined) return;
+  requireObject('glazing.angleTable', table);
+  const { angles, values } = table;
+  if (!Array.isArray(angles) || angles.length < 1) throw new SunpaneError('glazing.angleTable.angles', angles, 'must be a list of at least one angle');
+  if (!Array.isArray(values) || values.length !== angles.length) {
+    throw new SunpaneError('glazing.angleTable.values', values, `must be a list of ${angles.length} values, one per angle`);
+  }
+  for (let i = 0; i < angles.length; i++) {
+    requireRange(`glazing.angleTable.angles[${i}]`, angles[i], 0, 90, '°');
+    if (i > 0 && !(angles[i] > angles[i - 1])) throw new SunpaneError(`glazing.angleTable.angles[${i}]`, angles[i], `must be above the angle before it (${angles[i - 1]} °): angles strictly ascending`);
+    requireRange(`glazing.angleTable.values[${i}]`, values[i], 0, 1);
+  }
+}
+
+function validateFin(path: string, fin: Fin, height: number): void {
+  requireObject(path, fin);
+  requireRange(`${path}.projection`, fin.projection, 0, MAX_LENGTH, 'm');
+  requireRange(`${path}.gap`, fin.gap, 0, MAX_LENGTH, 'm');
+  requireRange(`${path}.extensionAbove`, fin.extensionAbove, -MAX_LENGTH, MAX_LENGTH, 'm');
+  requireRange(`${path}.extensionBelow`, fin.extensionBelow, -MAX_LENGTH, MAX_LENGTH, 'm');
+  if (height + fin.extensionAbove + fin.extensionBelow < 0) {
+    throw new SunpaneError(`${path}.extensionBelow`, fin.extensionBelow, `must leave the fin a length of at least 0 (height + extensionAbove + extensionBelow ≥ 0, here ${height} + ${fin.extensionAbove} + ${fin.extensionBelow})`);
+  }
+}
+
+/** True when the shading set holds any device or a skyline. */
+export function hasShading(shading: Shading): boolean {
+  return shading.overhang !== undefined || shading.leftFin !== undefined || shading.rightFin !== undefined || (shading.revealDepth ?? 0) > 0 || shading.skyline !== undefined;
+}
+
+function validateShading(shading: Shading, width: number, height: number, surfaceTilt: number): void {
+  requireObject('shading', shading);
+  const o = shading.overhang;
+  if (o !== undefined) {
+    requireObject('shading.overhang', o);
+    requireRange('shading.overhang.projection', o.projection, 0, MAX_LENGTH, 'm');
+    requireRange('shading.overhang.gap', o.gap, 0, MAX_LENGTH, 'm');
+    requireRange('shading.overhang.extensionLeft', o.extensionLeft, -MAX_LENGTH, MAX_LENGTH, 'm');
+    requireRange('shading.overhang.extensionRight', o.extensionRight, -MAX_LENGTH, MAX_LENGTH, 'm');
+    if (width + o.extensionLeft + o.extensionRight < 0) {
+      throw new SunpaneError('shading.overhang.extensionRight', o.extensionRight, `must leave the overhang a width of at least 0 (width + extensionLeft + extensionRight ≥ 0, here ${width} + ${o.extensionLeft} + ${o.extensionRight})`);
+    }
+  }
+  if (shading.leftFin !== undefined) validateFin('shading.leftFin', shading.leftFin, height);
+  if (shading.rightFin !== undefined) validateFin('shading.rightFin', shading.rightFin, height);
+  optionalRange('shading.revealDepth', shading.revealDepth, 0, MAX_LENGTH, 'm');
+  if (shading.skyline !== undefined) {
+    const s = shading.skyline;
+    if (!Array.isArray(s) || s.length < 1) throw new SunpaneError('shading.skyline', s, 'must be a list of at least one elevation angle');
+    for (let i = 0; i < s.length; i++) requireRange(`shading.skyline[${i}]`, s[i], 0, 90, '°');
+  }
+  if (hasShading(shading) && surfaceTilt !== 90) {
+    throw new SunpaneError('surfaceTilt', surfaceTilt, 'must be 90 (a vertical window) when shading devices or a skyline are given');
+  }
+}
+
+function validateMonthly(path: string, values: unknown, min: number, max: number, exclusiveMin: boolean): void {
+  if (!Array.isArray(values) || (values.length !== 1 && values.length !== 12)) {
+    throw new SunpaneError(path, values, 'must be a list of 12 monthly values (January first) or of one value for the whole year');
+  }
+  for (let i = 0; i < values.length; i++) requireRange(`${path}[${i}]`, values[i], min, max, undefined, { exclusiveMin });
+}
+
+function validateSeries(path: string, values: unknown, hours: number, year: number): void {
+  const ok = Array.isArray(values) || values instanceof Float64Array || values instanceof Float32Array;
+  if (!ok) throw new SunpaneError(path, values, `must be a list of ${hours} hourly values`);
+  const v = values as ArrayLike<number>;
+  if (v.length !== hours) {
+    throw new SunpaneError(path, Array.from(v), `must hold one value per hour of ${year}: ${hours} values`);
+  }
+  for (let i = 0; i < hours; i++) {
+    const x = v[i];
+    if (typeof x !== 'number') throw new SunpaneError(`${path}[${i}]`, x, `must be a number from 0 to ${MAX_IRRADIANCE} W/m², or NaN for a missing hour`);
+    // Non-finite values mark missing hours (documented); finite ones must be physical.
+    if (Number.isFinite(x) && (x < 0 || x > MAX_IRRADIANCE)) {
+      throw new SunpaneError(`${path}[${i}]`, x, `must be a number from 0 to ${MAX_IRRADIANCE} W/m², or NaN for a missing hour`);
+    }
+  }
+}
+
+function validateWeather(weather: Weather, year: number): void {
+  const w = requireObject('weather', weather);
+  const kind = w.kind as Weather['kind'];
+  if (!WEATHER_KINDS.includes(kind)) throw new SunpaneError('weather.kind', w.kind, `must be one of ${WEATHER_KINDS.map((k) => `"${k}"`).join(', ')}`);
+  const hours = hoursInYear(year);
+  switch (weather.kind) {
+    case 'ashraeClearSky':
+      validateMonthly('weather.tauB', weather.tauB, 0, TAU_B_MAX, true);
+      validateMonthly('weather.tauD', weather.tauD, 0, TAU_D_MAX, true);
+      if (weather.tauB.length !== weather.tauD.length) throw new SunpaneError('weather.tauD', weather.tauD, `must hold as many values as weather.tauB (${weather.tauB.length})`);
+      break;
+    case 'ineichenClearSky':
+      validateMonthly('weather.linkeTurbidity', weather.linkeTurbidity, LINKE_MIN, LINKE_MAX, false);
+      break;
+    case 'measured':
+      validateSeries('weather.dni', weather.dni, hours, year);
+      validateSeries('weather.dhi', weather.dhi, hours, year);
+      break;
+    case 'globalHorizontal':
+      validateSeries('weather.ghi', weather.ghi, hours, year);
+      break;
+  }
+}
+
+/**
+ * Checks every field of a window description.
+ * @param spec - the window, its site, glazing, shading, ground, sky model, weather and year
+ * @returns the same spec (for chaining)
+ * @throws SunpaneError naming the first bad field by its path, e.g. `glazing.shgc`,
+ *   `shading.overhang.projection`, `weather.dni` (wrong length) or `weather.dni[17]` (bad value).
+ *   Shading devices or a skyline on a window whose tilt is not 90° are refused naming `surfaceTilt`.
+ *   A non-finite value in a measured series is not an error: it marks that hour as missing.
+ */
+export function validateWindowSpec(spec: WindowSpec): WindowSpec {
+  requireObject('spec', spec);
+  if (typeof spec.name !== 'string') throw new SunpaneError('name', spec.name, 'must be a text');
+  validateSite(spec.site);
+  requireRange('surfaceAzimuth', spec.surfaceAzimuth, 0, 360, '°');
+  requireRange('surfaceTilt', spec.surfaceTilt, 0, 180, '°');
+  requireRange('width', spec.width, 0, MAX_LENGTH, 'm', { exclusiveMin: true });
+  requireRange('height', spec.height, 0, MAX_LENGTH, 'm', { exclusiveMin: true });
+  requireRange('frameFraction', spec.frameFraction, 0, 1, undefined, { exclusiveMax: true });
+  validateGlazing(spec.glazing);
+  validateShading(spec.shading, spec.width, spec.height, spec.surfaceTilt);
+  requireRange('groundAlbedo', spec.groundAlbedo, 0, 1);
+  if (!SKY_MODELS.includes(spec.skyModel)) throw new SunpaneError('skyModel', spec.skyModel, `must be one of ${SKY_MODELS.map((m) => `"${m}"`).join(', ')}`);
+  const year = requireYear(spec.year, 'year');
+  validateWeather(spec.weather, year);
+  return spec;
+}
+
+/** The radiant fraction of a glazing's gain, default applied. */
+export function radiantFractionOf(glazing: Glazing): number {
+  return glazing.radiantFraction ?? DEFAULT_RADIANT_FRACTION;
+}
