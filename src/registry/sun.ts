@@ -1,4 +1,203 @@
-/** Worksheet-function descriptors: sun. */
-import type { FunctionDescriptor } from './types';
+/**
+ * Worksheet-function descriptors: sun position (NREL SPA), sunrise / solar noon / sunset, and the
+ * angles between the sun and a surface. Every descriptor reads its arguments and calls the core
+ * (src/core/sun.ts, src/core/surface.ts); none computes by itself.
+ */
+import { MAX_SERIAL_EXCLUSIVE, MIN_SERIAL, serialToUtcMs } from '../core/time';
+import { type SunOptions, type SunPosition, sunEvents, sunPosition } from '../core/sun';
+import { incidenceAngle, profileAngle, wallSolarAzimuth } from '../core/surface';
+import { GLOSSARY } from './glossary';
+import { type Args, type FunctionDescriptor, NotAvailable, type ParamDescriptor } from './types';
 
-export const SUN_FUNCTIONS: readonly FunctionDescriptor[] = [];
+/** When and where, then the optional atmosphere and ΔT: the shared head of the sun-position functions. */
+const WHEN_WHERE: readonly ParamDescriptor[] = [GLOSSARY.dateTime, GLOSSARY.latitude, GLOSSARY.longitude, GLOSSARY.utcOffset];
+const ATMOSPHERE: readonly ParamDescriptor[] = [GLOSSARY.elevation, GLOSSARY.pressure, GLOSSARY.temperature, GLOSSARY.deltaT];
+const SUN_PARAMS: readonly ParamDescriptor[] = [...WHEN_WHERE, ...ATMOSPHERE];
+/** Rise and set follow the SPA's fixed horizon convention: only ΔT changes them. */
+const EVENT_PARAMS: readonly ParamDescriptor[] = [GLOSSARY.date, GLOSSARY.latitude, GLOSSARY.longitude, GLOSSARY.utcOffset, GLOSSARY.deltaT];
+
+/** surfaceAzimuth comes before the optional tilt so that required arguments come first. */
+const SURFACE_AZIMUTH: ParamDescriptor = { ...GLOSSARY.surfaceAzimuth };
+const SURFACE_TILT: ParamDescriptor = { ...GLOSSARY.surfaceTilt };
+
+const EXAMPLE_SPA = ['2003-10-17T12:30:30', '39.742476', '-105.1786', '-7', '1830.14', '820', '11', '67'];
+
+function optionsOf(a: Args): SunOptions {
+  return {
+    elevation: a.elevation as number,
+    pressure: a.pressure as number | undefined,
+    temperature: a.temperature as number,
+    deltaT: a.deltaT as number | undefined,
+  };
+}
+
+function positionOf(a: Args): SunPosition {
+  const utcMs = serialToUtcMs(a.dateTime as number, a.utcOffset as number);
+  return sunPosition(utcMs, a.latitude as number, a.longitude as number, optionsOf(a));
+}
+
+function eventsOf(a: Args) {
+  return sunEvents(a.date as number, a.latitude as number, a.longitude as number, a.utcOffset as number, { deltaT: a.deltaT as number | undefined });
+}
+
+const DEGREES = '°';
+
+export const SUN_FUNCTIONS: readonly FunctionDescriptor[] = [
+  {
+    name: 'SUNALTITUDE',
+    summary: 'Sun altitude above the horizon seen from the site, with refraction (NREL SPA)',
+    category: 'Time and sun',
+    params: SUN_PARAMS,
+    result: { shape: 'value', unit: DEGREES, min: -90, max: 90, description: 'topocentric altitude of the sun centre with refraction; negative at night' },
+    evaluate: (a) => positionOf(a).altitude,
+    examples: [
+      { args: EXAMPLE_SPA, note: '39.888378: the NREL SPA worked example (Golden, Colorado)' },
+      { args: ['2026-06-21T12:00', '51.5', '0', '0'], note: 'London at midsummer noon: about 62' },
+    ],
+  },
+  {
+    name: 'SUNAZIMUTH',
+    summary: 'Sun azimuth clockwise from true north, seen from the site (NREL SPA)',
+    category: 'Time and sun',
+    params: SUN_PARAMS,
+    result: { shape: 'value', unit: DEGREES, min: 0, max: 360, description: 'topocentric azimuth: N 0, E 90, S 180, W 270' },
+    evaluate: (a) => positionOf(a).azimuth,
+    examples: [{ args: EXAMPLE_SPA, note: '194.340241: the NREL SPA worked example' }],
+  },
+  {
+    name: 'SUNZENITH',
+    summary: 'Sun zenith angle seen from the site, with refraction (90 minus the altitude)',
+    category: 'Time and sun',
+    params: SUN_PARAMS,
+    result: { shape: 'value', unit: DEGREES, min: 0, max: 180, description: 'topocentric zenith angle; above 90 at night' },
+    evaluate: (a) => positionOf(a).zenith,
+    examples: [{ args: EXAMPLE_SPA, note: '50.111622: the NREL SPA worked example' }],
+  },
+  {
+    name: 'SOLARDECLINATION',
+    summary: 'Declination of the sun (geocentric), by the NREL SPA',
+    category: 'Time and sun',
+    params: SUN_PARAMS,
+    result: { shape: 'value', unit: DEGREES, min: -24.5, max: 24.5, description: 'geocentric declination of the sun, north positive' },
+    evaluate: (a) => positionOf(a).declination,
+    examples: [{ args: EXAMPLE_SPA, note: '-9.314340: the NREL SPA worked example' }],
+  },
+  {
+    name: 'EQUATIONOFTIME',
+    summary: 'Equation of time: apparent minus mean solar time',
+    category: 'Time and sun',
+    params: SUN_PARAMS,
+    result: { shape: 'value', unit: 'min', min: -20, max: 20, description: 'equation of time in minutes; positive when the sundial is ahead of the clock' },
+    evaluate: (a) => positionOf(a).equationOfTime,
+    examples: [{ args: EXAMPLE_SPA, note: '14.641511: the NREL SPA worked example' }],
+  },
+  {
+    name: 'SOLARTIME',
+    summary: 'Apparent solar time at the site, in hours (12 at solar noon)',
+    category: 'Time and sun',
+    params: SUN_PARAMS,
+    result: { shape: 'value', unit: 'h', min: 0, max: 24, description: 'apparent (sundial) time of day in hours, 0 up to 24' },
+    evaluate: (a) => positionOf(a).solarTime,
+    examples: [{ args: EXAMPLE_SPA, note: 'about 12.74: 12:44 by the sundial at 12:30:30 local standard time' }],
+  },
+  {
+    name: 'SUNRISE',
+    summary: 'Sunrise on a local day (upper limb on the horizon with standard refraction)',
+    category: 'Time and sun',
+    params: EVENT_PARAMS,
+    result: { shape: 'value', kind: 'dateTime', min: MIN_SERIAL - 1, max: MAX_SERIAL_EXCLUSIVE, description: 'local standard date-time of sunrise; #N/A when the sun does not rise that day' },
+    evaluate: (a) => {
+      const e = eventsOf(a);
+      if (e.sunrise !== null) return e.sunrise;
+      return new NotAvailable(noEventMessage('rise', e.condition));
+    },
+    examples: [
+      { args: ['2003-10-17', '39.742476', '-105.1786', '-7', '67'], note: '06:12:43 local: the NREL SPA worked example' },
+      { args: ['2026-06-21', '78', '15', '1'], note: '#N/A: midnight sun at 78° N' },
+    ],
+  },
+  {
+    name: 'SOLARNOON',
+    summary: 'Solar noon on a local day: when the sun crosses the meridian',
+    category: 'Time and sun',
+    params: EVENT_PARAMS,
+    result: { shape: 'value', kind: 'dateTime', min: MIN_SERIAL - 1, max: MAX_SERIAL_EXCLUSIVE, description: 'local standard date-time of the upper transit (also during polar day and night)' },
+    evaluate: (a) => eventsOf(a).solarNoon,
+    examples: [{ args: ['2003-10-17', '39.742476', '-105.1786', '-7', '67'], note: '11:46:05 local: the NREL SPA worked example' }],
+  },
+  {
+    name: 'SUNSET',
+    summary: 'Sunset on a local day (upper limb on the horizon with standard refraction)',
+    category: 'Time and sun',
+    params: EVENT_PARAMS,
+    result: { shape: 'value', kind: 'dateTime', min: MIN_SERIAL - 1, max: MAX_SERIAL_EXCLUSIVE, description: 'local standard date-time of sunset; #N/A when the sun does not set that day' },
+    evaluate: (a) => {
+      const e = eventsOf(a);
+      if (e.sunset !== null) return e.sunset;
+      return new NotAvailable(noEventMessage('set', e.condition));
+    },
+    examples: [
+      { args: ['2003-10-17', '39.742476', '-105.1786', '-7', '67'], note: 'about 17:18:52 local on 17 October' },
+      { args: ['2026-12-21', '78', '15', '1'], note: '#N/A: polar night at 78° N' },
+    ],
+  },
+  {
+    name: 'INCIDENCEANGLE',
+    summary: 'Angle between the sun and the normal of a surface, from sun altitude and azimuth',
+    category: 'Surface angles',
+    params: [GLOSSARY.sunAltitude, GLOSSARY.sunAzimuth, SURFACE_AZIMUTH, SURFACE_TILT],
+    result: { shape: 'value', unit: DEGREES, min: 0, max: 180, description: 'incidence angle; above 90 the sun is behind the surface' },
+    evaluate: (a) => incidenceAngle(a.sunAltitude as number, a.sunAzimuth as number, a.surfaceTilt as number, a.surfaceAzimuth as number),
+    examples: [
+      { args: ['39.888378', '194.340241', '170', '30'], note: '25.187: the NREL SPA worked example (30° slope facing 170°)' },
+      { args: ['30', '90', '270'], note: '150: the sun in the east is behind a west wall' },
+    ],
+  },
+  {
+    name: 'INCIDENCEAT',
+    summary: 'Incidence angle of the sun on a surface at a date-time and site (NREL SPA)',
+    category: 'Surface angles',
+    params: [...WHEN_WHERE, SURFACE_AZIMUTH, SURFACE_TILT, ...ATMOSPHERE],
+    result: { shape: 'value', unit: DEGREES, min: 0, max: 180, description: 'incidence angle; above 90 the sun is behind the surface (check the altitude for night)' },
+    evaluate: (a) => {
+      const s = positionOf(a);
+      return incidenceAngle(s.altitude, s.azimuth, a.surfaceTilt as number, a.surfaceAzimuth as number);
+    },
+    examples: [{ args: ['2003-10-17T12:30:30', '39.742476', '-105.1786', '-7', '170', '30', '1830.14', '820', '11', '67'], note: '25.187: the NREL SPA worked example' }],
+  },
+  {
+    name: 'PROFILEANGLE',
+    summary: 'Vertical shadow angle on a vertical wall: sun altitude projected onto the plane normal to the wall',
+    category: 'Surface angles',
+    params: [GLOSSARY.sunAltitude, GLOSSARY.sunAzimuth, SURFACE_AZIMUTH],
+    result: { shape: 'value', unit: DEGREES, min: -90, max: 90, description: 'profile angle; #N/A when the sun is in or behind the wall plane' },
+    evaluate: (a) => {
+      const azimuth = a.sunAzimuth as number;
+      const facing = a.surfaceAzimuth as number;
+      if (Math.abs(wallSolarAzimuth(azimuth, facing)) >= 90) return new NotAvailable('the sun is in or behind the wall plane, so it casts no shadow on the window');
+      return profileAngle(a.sunAltitude as number, azimuth, facing);
+    },
+    examples: [
+      { args: ['45', '120', '180'], note: '63.43: tan Ω = tan 45° / cos 60°' },
+      { args: ['45', '0', '180'], note: '#N/A: the sun in the north is behind a south wall' },
+    ],
+  },
+  {
+    name: 'SHADOWANGLE',
+    summary: 'Horizontal shadow angle: sun azimuth relative to the wall normal, positive to the right seen from outside',
+    category: 'Surface angles',
+    params: [GLOSSARY.sunAzimuth, SURFACE_AZIMUTH],
+    result: { shape: 'value', unit: DEGREES, min: -180, max: 180, description: 'horizontal shadow angle; beyond ±90 the sun is behind the wall' },
+    evaluate: (a) => wallSolarAzimuth(a.sunAzimuth as number, a.surfaceAzimuth as number),
+    examples: [
+      { args: ['120', '180'], note: '60: morning sun to the right of a south window seen from outside' },
+      { args: ['240', '180'], note: '-60: afternoon sun to the left' },
+    ],
+  },
+];
+
+function noEventMessage(event: 'rise' | 'set', condition: 'normal' | 'polarDay' | 'polarNight'): string {
+  if (condition === 'polarDay') return `the sun does not ${event} on this day: it stays above the horizon all day (polar day)`;
+  if (condition === 'polarNight') return `the sun does not ${event} on this day: it stays below the horizon all day (polar night)`;
+  return `the sun does not ${event} during this local day (it ${event === 'rise' ? 'rises' : 'sets'} just before or after it)`;
+}
