@@ -176,3 +176,33 @@ function polygonArea(p: Float64Array, n: number): number {
   }
   return Math.abs(twice) / 2;
 }
+
+const unionStarts = new Int32Array(3);
+const unionCounts = new Int32Array([4, 4, 4]);
+
+/**
+ * Area of the part of the rectangle [x0, x1] × [y0, y1] covered by the UNION of up to three convex
+ * quadrilaterals (overlaps counted once).
+ *
+ * @param planes - the quadrilaterals as written by {@link writeQuadHalfPlanes}: quadrilateral i at
+ *   triple index 4·i
+ * @param count - number of quadrilaterals, 0…3
+ * @returns the covered area [square of the length unit], 0 … rectangle area
+ * @remarks Inclusion–exclusion, |S1 ∪ S2 ∪ S3| = Σ|Si| − Σ|Si ∩ Sj| + |S1 ∩ S2 ∩ S3| (each term within
+ * the rectangle), every term an exact convex clip by {@link clippedRectangleArea}.
+ */
+export function unionAreaInRectangle(x0: number, y0: number, x1: number, y1: number, planes: Float64Array, count: number): number {
+  if (count < 0 || count > 3) throw new RangeError(`unionAreaInRectangle: ${count} quadrilaterals, at most 3`);
+  let covered = 0;
+  for (let mask = 1; mask < 1 << count; mask++) {
+    let groups = 0;
+    for (let i = 0; i < count; i++) {
+      if (mask & (1 << i)) unionStarts[groups++] = i * 4;
+    }
+    const area = clippedRectangleArea(x0, y0, x1, y1, planes, unionStarts, unionCounts, groups);
+    covered += groups % 2 === 1 ? area : -area;
+  }
+  const full = (x1 - x0) * (y1 - y0);
+  return covered < 0 ? 0 : covered > full ? full : covered;
+}
+

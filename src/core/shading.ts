@@ -27,7 +27,8 @@
  * A glass point is sunlit when its wall-plane point is in the lit rectangle and in no shadow
  * parallelogram, so the sunlit area = area(lit rectangle) − area(lit rectangle ∩ (S1 ∪ S2 ∪ S3)),
  * the union taken by inclusion–exclusion over the ≤ 7 intersections of convex polygons, each exact
- * by convex clipping (src/core/polygon.ts). Shadows overlap counted once; never summed.
+ * by convex clipping ({@link unionAreaInRectangle}, src/core/polygon.ts). Overlapping shadows are
+ * counted once, never summed.
  *
  * Choice of union method (measured, `npm run bench`, this machine, 8760 hourly sun positions, window
  * with overhang + two fins + reveal): the own convex clipper with inclusion–exclusion takes about
@@ -46,7 +47,7 @@
  */
 import { RAD, wrap180 } from './angles';
 import { SunpaneError, requireFinite, requireRange } from './errors';
-import { clippedRectangleArea, writeQuadHalfPlanes } from './polygon';
+import { unionAreaInRectangle, writeQuadHalfPlanes } from './polygon';
 import { requireSkyline, skylineElevationUnchecked } from './skyline';
 import type { Fin, Overhang, Shading } from './window';
 
@@ -166,8 +167,6 @@ function sunSlopes(sunAltitude: number, sunAzimuth: number, surfaceAzimuth: numb
 
 // Per-call scratch (no allocation on the hourly path): up to 3 shadow quadrilaterals × 4 half-planes.
 const planes = new Float64Array(3 * 4 * 3);
-const activeStart = new Int32Array(3);
-const fourCounts = new Int32Array([4, 4, 4]);
 let lit0x = 0;
 let lit0y = 0;
 let lit1x = 0;
@@ -221,16 +220,7 @@ function sunlitFractionFromSlopes(width: number, height: number, shading: Shadin
   const m = buildShadows(width, height, shading);
   const litArea = lit1x > lit0x && lit1y > lit0y ? (lit1x - lit0x) * (lit1y - lit0y) : 0;
   if (litArea === 0) return 0;
-  let shaded = 0;
-  // Inclusion–exclusion: |∪Si| = Σ|Si| − Σ|Si∩Sj| + |S1∩S2∩S3|, each within the lit rectangle.
-  for (let mask = 1; mask < 1 << m; mask++) {
-    let groups = 0;
-    for (let i = 0; i < m; i++) {
-      if (mask & (1 << i)) activeStart[groups++] = i * 4;
-    }
-    const area = clippedRectangleArea(lit0x, lit0y, lit1x, lit1y, planes, activeStart, fourCounts, groups);
-    shaded += groups % 2 === 1 ? area : -area;
-  }
+  const shaded = unionAreaInRectangle(lit0x, lit0y, lit1x, lit1y, planes, m);
   const f = (litArea - shaded) / (width * height);
   return f < 0 ? 0 : f > 1 ? 1 : f;
 }
