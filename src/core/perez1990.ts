@@ -11,7 +11,7 @@
  */
 import { RAD } from './angles';
 import { requireRange } from './errors';
-import { cosIncidence } from './skyGeometry';
+import { incidenceAngle } from './surface';
 import { COS_85, DNI_EXTRA_MAX, DNI_EXTRA_MIN, requireIrradiance } from './transposition';
 
 const { cos, sin } = Math;
@@ -99,7 +99,7 @@ export function perezParts(
   const f1Raw = f11 + f12 * delta + f13 * zRad; // Eq. 9
   const f1 = f1Raw > 0 ? f1Raw : 0;
   const f2 = f21 + f22 * delta + f23 * zRad; // Eq. 9
-  const cosTheta = cosIncidence(90 - sunZenith, sunAzimuth, surfaceTilt, surfaceAzimuth);
+  const cosTheta = cos(incidenceAngle(90 - sunZenith, sunAzimuth, surfaceTilt, surfaceAzimuth) * RAD);
   const a = cosTheta > 0 ? cosTheta : 0;
   const cosZ = cos(zRad);
   const b = cosZ > COS_85 ? cosZ : COS_85;

@@ -3,11 +3,11 @@
  * diffuse (isotropic, Hay–Davies or Perez 1990) and ground-reflected parts.
  */
 import { airMassKastenYoung } from './airMass';
-import { DEG, RAD, acosClamped } from './angles';
+import { RAD } from './angles';
 import { SunpaneError, requireRange } from './errors';
 import { extraterrestrialSpencer, requireDayOfYear } from './extraterrestrial';
 import { perezParts } from './perez1990';
-import { cosIncidence } from './skyGeometry';
+import { incidenceAngle } from './surface';
 import { COS_85, requireIrradiance } from './transposition';
 import type { SkyModel } from './window';
 
@@ -82,8 +82,8 @@ export function planeIrradiance(input: PlaneIrradianceInput): PlaneIrradiance {
   }
   const svf = input.skyViewFactor === undefined ? 1 : requireRange('skyViewFactor', input.skyViewFactor, 0, 1);
 
-  const cosTheta = cosIncidence(altitude, sunAzimuth, tilt, surfaceAzimuth);
-  const incidence = acosClamped(cosTheta) * DEG;
+  const incidence = incidenceAngle(altitude, sunAzimuth, tilt, surfaceAzimuth);
+  const cosTheta = cos(incidence * RAD);
   const tiltRad = tilt * RAD;
   const isotropicView = (1 + cos(tiltRad)) / 2;
   const sunUp = altitude > 0;
