@@ -17,7 +17,7 @@ import { type PreparedWindow, monthlyValue, prepareWindow } from './gain';
 import { ashraeClearSky, decomposeErbs, ineichenPerezClearSky, planeIrradiance } from './sky';
 import { sunlitFraction } from './shading';
 import { annualSunPath } from './sun';
-import { incidenceAngle, profileAngle } from './surface';
+import { DEG, RAD, acosClamped } from './angles';
 import { daysInMonth } from './time';
 import type { WindowSpec } from './window';
 
@@ -129,6 +129,8 @@ export function annualOfPrepared(w: PreparedWindow): AnnualSeries {
   const alt = path.altitude;
   const az = path.azimuth;
   const zen = path.zenith;
+  const cosTilt = Math.cos(tilt * RAD);
+  const sinTilt = Math.sin(tilt * RAD);
 
   for (let i = 0; i < n; i++) {
     const day = (i / 24) | 0;
@@ -137,13 +139,21 @@ export function annualOfPrepared(w: PreparedWindow): AnnualSeries {
     const a = alt[i];
     const s = az[i];
     const sunUp = a > 0;
-    const theta = incidenceAngle(a, s, tilt, surfAz);
+    // Incidence and profile angles with the surface's trig worked out once (same formulas as
+    // src/core/surface.ts incidenceAngle / profileAngle — D&B Eq. 1.6.3, 1.9.1a — without the
+    // per-call argument checks; the agreement tests with windowGainAt hold them together).
+    const betaRad = a * RAD;
+    const sinBeta = Math.sin(betaRad);
+    const cosBeta = Math.cos(betaRad);
+    const cosGamma = Math.cos((s - surfAz) * RAD);
+    const theta = acosClamped(sinBeta * cosTilt + cosBeta * sinTilt * cosGamma) * DEG; // D&B Eq. 1.6.3
+    const omega = Math.atan2(sinBeta, cosBeta * cosGamma) * DEG; // D&B Eq. 1.9.1a
     const front = sunUp && theta < 90;
     // Geometry first, for every row (missing weather does not hide where the sun is).
     const lit = !front ? 0 : vertical ? sunlitFraction(opening, shading, a, s, surfAz) : 1;
     const g = theta < 90 ? curve.atAngle(theta) : 0;
     out.incidence[i] = theta;
-    out.profileAngle[i] = profileAngle(a, s, surfAz);
+    out.profileAngle[i] = omega === -180 ? 180 : omega;
     out.sunlitFraction[i] = lit;
     out.shgc[i] = g;
 
