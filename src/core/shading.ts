@@ -154,8 +154,11 @@ const slopes: ShadowSlopes = { a: 0, b: 0 };
  */
 function sunSlopes(sunAltitude: number, sunAzimuth: number, surfaceAzimuth: number): boolean {
   if (!(sunAltitude > 0)) return false;
+  const gamma = wrap180(sunAzimuth - surfaceAzimuth);
+  // Decide "in the wall plane" on the degrees: cos(90° in radians) is 6e-17, not 0.
+  if (gamma <= -90 || gamma >= 90) return false;
   const betaRad = sunAltitude * RAD;
-  const gammaRad = wrap180(sunAzimuth - surfaceAzimuth) * RAD;
+  const gammaRad = gamma * RAD;
   const cosBeta = cos(betaRad);
   const cosGamma = cos(gammaRad);
   const sz = cosBeta * cosGamma;
