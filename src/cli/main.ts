@@ -1,16 +1,48 @@
 /**
  * The `sunpane` command line: the same engine as the worksheet functions, without Excel.
  */
+import { SunpaneError } from '../core/errors';
 import { callCommand, listCommand, type Output } from './call';
+import { CliInputError, CliUsageError, EXIT_BAD_INPUT, EXIT_USAGE } from './cliError';
+import { DEMO_HELP, demoCommand } from './demo';
+import { SCHEDULE_HELP, scheduleCommand } from './schedule';
+import { TABLE_HELP, tableCommand } from './table';
 
 interface Command {
   summary: string;
   run(argv: readonly string[], io: Output): number | Promise<number>;
 }
 
+/**
+ * Runs a file command, turning its errors into messages and exit codes: bad input (a core
+ * SunpaneError naming the field, or a file/row/line problem) → 1; wrong usage → 2 with the usage
+ * line. Anything else is a programming error and propagates.
+ */
+function guarded(run: (argv: readonly string[], io: Output) => Promise<number>, help: string): Command['run'] {
+  return async (argv, io) => {
+    try {
+      return await run(argv, io);
+    } catch (err) {
+      if (err instanceof SunpaneError || err instanceof CliInputError) {
+        io.err(`sunpane: ${err.message}`);
+        return EXIT_BAD_INPUT;
+      }
+      if (err instanceof CliUsageError) {
+        io.err(`sunpane: ${err.message}`);
+        io.err(help.split('\n')[0]);
+        return EXIT_USAGE;
+      }
+      throw err;
+    }
+  };
+}
+
 const COMMANDS: Record<string, Command> = {
   list: { summary: 'print every worksheet function with its signature', run: (_argv, io) => listCommand(io) },
   call: { summary: 'call NAME ARG...: evaluate a function as in a cell (ranges as {1,2;3,4}; --iso prints date-times as text)', run: callCommand },
+  table: { summary: "one window's hourly year from a window file (+ hourly weather CSV) to .csv or .xlsx", run: guarded(tableCommand, TABLE_HELP) },
+  schedule: { summary: 'annual summary of many windows, one per row of a .csv or .xlsx schedule', run: guarded(scheduleCommand, SCHEDULE_HELP) },
+  demo: { summary: 'write the demo workbook of an invented building (default folder out/demo)', run: guarded(demoCommand, DEMO_HELP) },
 };
 
 /** Registers a further command (used by the table / schedule / demo modules). */

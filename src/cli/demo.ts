@@ -1,0 +1,371 @@
+/**
+ * `sunpane demo`: the demo workbook of the invented building (src/demo) — window schedule and
+ * summary, monthly gains, one window's hourly year and heat map, a shading option comparison and a
+ * sheet of example Sunpane worksheet formulas with their results cached — and a short text summary.
+ */
+import * as path from 'node:path';
+import { annualSeries } from '../core/annual';
+import { summarizeAnnual } from '../core/annualSummary';
+import { SunpaneError } from '../core/errors';
+import { glassArea } from '../core/glazing';
+import type { Shading } from '../core/window';
+import { validateWindowSpec } from '../core/windowSpec';
+import { DEMO_BUILDING, DEMO_HOURLY_TAG, DEMO_YEAR, type DemoWindow, SHADING_OPTIONS, demoWindows } from '../demo/building';
+import { EXAMPLE_SITES, findExampleSite } from '../demo/sites';
+import type { Output } from './call';
+import { MONTHS, addHeatMapSheet, addHourlySheet, addMonthlySheet } from './annualSheets';
+import { ensureFolder } from './atomicWrite';
+import { type Flags, parseFlags } from './flags';
+import { type DemoFormulaSet, addFormulaSheet, demoFormulas } from './demoFormulas';
+import { ProgressBar } from './progress';
+import { type SummaryTotals, type WindowResult, addSummaryTable, windowResult } from './schedule';
+import { type ExcelJS, NUMBER_FORMATS, type TableCell, addDataTable, address, freezeAt, newWorkbook, saveWorkbook, setFormula, setLabel } from './workbook';
+
+export const DEMO_HELP = `usage: sunpane demo [--out DIR]
+
+Writes DIR/sunpane-demo.xlsx (default DIR: out/demo) for an invented building, ${DEMO_BUILDING.name},
+on two invented example sites (one in each hemisphere) under a clear sky, and prints a summary.
+
+Sheets: Overview (the building, annual gain by site and facing, best shading option),
+Schedule (the windows), Summary (each window's year, SUM/MAX totals), Monthly (gain by month
+and window), Options (shading options compared on the equator-facing office window),
+Hourly ${DEMO_HOURLY_TAG} (8760 hours), Year ${DEMO_HOURLY_TAG} (monthly, peak), Heat map ${DEMO_HOURLY_TAG} (day × hour),
+Formulas (example SUNPANE.* worksheet formulas with cached results; they recalculate in Excel
+once the add-in is installed).
+
+  --out DIR   output folder (created if needed)
+  --help      this text
+
+Every number in the demo building is invented; results are estimates by published methods.
+Exit codes: 0 done, 1 bad input (e.g. an unwritable folder), 2 wrong usage.`;
+
+const DEMO_FLAGS = { out: true, help: false } as const;
+
+/** Name of the demo workbook file. */
+export const DEMO_FILE = 'sunpane-demo.xlsx';
+
+/** One row of the shading option comparison. */
+export interface OptionResult {
+  tag: string;
+  option: string;
+  result: WindowResult;
+}
+
+/** Everything the demo computed: for the workbook, the text summary and the tests. */
+export interface DemoResults {
+  windows: (DemoWindow & WindowResult)[];
+  options: OptionResult[];
+  formulas: DemoFormulaSet;
+}
+
+/** The option comparison windows: the first equator-facing office window on each site. */
+function optionWindows(windows: readonly DemoWindow[]): DemoWindow[] {
+  return DEMO_BUILDING.siteIds.map((id) => {
+    const equator = (findExampleSite(id)?.site.latitude ?? 0) >= 0 ? 'S' : 'N';
+    const w = windows.find((x) => x.siteId === id && x.facing === equator && x.room === 'office');
+    if (!w) throw new Error(`internal error: no equator-facing office window on ${id}`);
+    return w;
+  });
+}
+
+/** Works out every window's year, the option comparison and the example formulas. */
+export function computeDemo(onStep: () => void = () => undefined): DemoResults {
+  const schedule = demoWindows();
+  const windows = schedule.map((w) => {
+    validateWindowSpec(w.spec);
+    const r = windowResult(w.spec);
+    onStep();
+    return { ...w, ...r };
+  });
+  const options: OptionResult[] = [];
+  for (const w of optionWindows(schedule)) {
+    for (const o of SHADING_OPTIONS) {
+      const spec = { ...w.spec, name: `${w.tag} ${o.option}`, shading: o.shading as Shading };
+      options.push({ tag: w.tag, option: o.option, result: windowResult(validateWindowSpec(spec)) });
+      onStep();
+    }
+  }
+  return { windows, options, formulas: demoFormulas(schedule.find((w) => w.tag === DEMO_HOURLY_TAG) ?? schedule[0]) };
+}
+
+/** Steps {@link computeDemo} reports (for the progress bar). */
+export function demoSteps(): number {
+  return demoWindows().length + DEMO_BUILDING.siteIds.length * SHADING_OPTIONS.length;
+}
+
+const FACINGS = ['N', 'E', 'S', 'W'] as const;
+
+/** Annual gain [kWh] by site and facing. */
+export function gainBySiteAndFacing(results: DemoResults): { siteId: string; byFacing: Record<string, number> }[] {
+  return DEMO_BUILDING.siteIds.map((siteId) => {
+    const byFacing: Record<string, number> = {};
+    for (const f of FACINGS) byFacing[f] = results.windows.filter((w) => w.siteId === siteId && w.facing === f).reduce((a, w) => a + w.summary.annualKWh, 0);
+    return { siteId, byFacing };
+  });
+}
+
+/** The option with the least annual gain for each compared window, and its saving against no shading. */
+export function bestOptions(results: DemoResults): { tag: string; option: string; kwh: number; saving: number }[] {
+  const tags = [...new Set(results.options.map((o) => o.tag))];
+  return tags.map((tag) => {
+    const rows = results.options.filter((o) => o.tag === tag);
+    const none = rows.find((o) => o.option === 'none')?.result.summary.annualKWh ?? 0;
+    const best = rows.reduce((a, b) => (b.result.summary.annualKWh < a.result.summary.annualKWh ? b : a));
+    return { tag, option: best.option, kwh: best.result.summary.annualKWh, saving: none > 0 ? 1 - best.result.summary.annualKWh / none : 0 };
+  });
+}
+
+function siteLabel(siteId: string): string {
+  const s = findExampleSite(siteId);
+  if (!s) return siteId;
+  const lat = s.site.latitude;
+  return `${s.label}, ${Math.abs(lat).toFixed(1)}° ${lat >= 0 ? 'N' : 'S'}`;
+}
+
+/** The text summary printed to stdout. */
+export function demoSummaryText(results: DemoResults, file: string): string[] {
+  const lines = [`${DEMO_BUILDING.name}: ${DEMO_BUILDING.description}; clear-sky year ${DEMO_YEAR}.`];
+  for (const { siteId, byFacing } of gainBySiteAndFacing(results)) {
+    lines.push(`  ${siteLabel(siteId)}: annual solar gain ${FACINGS.map((f) => `${f} ${Math.round(byFacing[f])}`).join(', ')} kWh`);
+  }
+  for (const b of bestOptions(results)) {
+    lines.push(`  least gain on ${b.tag}: ${b.option} (${Math.round(b.kwh)} kWh, ${Math.round(b.saving * 100)} % below no shading)`);
+  }
+  lines.push(`wrote ${file}`);
+  return lines;
+}
+
+function describeShading(s: Shading): string {
+  const parts: string[] = [];
+  if (s.overhang) parts.push(`overhang ${s.overhang.projection} m`);
+  if (s.leftFin || s.rightFin) parts.push(`fins ${(s.leftFin ?? s.rightFin)!.projection} m`);
+  if (s.revealDepth) parts.push(`reveal ${s.revealDepth} m`);
+  if (s.skyline) parts.push('neighbouring block (skyline)');
+  return parts.length > 0 ? parts.join(' + ') : 'none';
+}
+
+/** Formula cells whose values a spreadsheet program must reproduce (for the LibreOffice check). */
+export interface DemoCheckCells {
+  summary: SummaryTotals;
+  monthly: { cell: string; expected: number }[];
+  options: { cell: string; expected: number }[];
+  overview: { cell: string; expected: number }[];
+  hourly: { cell: string; expected: number }[];
+}
+
+function addOverview(wb: ExcelJS.Workbook, results: DemoResults): { cell: string; expected: number }[] {
+  const ws = wb.addWorksheet('Overview');
+  ws.getCell('A1').value = `${DEMO_BUILDING.name} — Sunpane demo`;
+  ws.getCell('A1').font = { bold: true, size: 14 };
+  ws.getCell('A2').value = `An invented building (${DEMO_BUILDING.description}) on invented example sites, clear-sky year ${DEMO_YEAR}. Every input is made up for the demonstration.`;
+  ws.getCell('A3').value = 'Results are estimates by published methods; design decisions need a qualified engineer and the local energy code.';
+  ws.getCell('A3').font = { italic: true };
+  const top = 5;
+  const rows: TableCell[][] = gainBySiteAndFacing(results).map(({ siteId, byFacing }) => {
+    const s = findExampleSite(siteId)!;
+    return [s.label, s.site.latitude, s.site.longitude, s.site.utcOffset, ...FACINGS.map((f) => byFacing[f])];
+  });
+  const t = addDataTable(
+    ws,
+    'GainBySite',
+    { row: top, column: 1 },
+    [
+      { header: 'site', width: 26 },
+      { header: 'latitude [°]', numFmt: NUMBER_FORMATS.angle, width: 13 },
+      { header: 'longitude [°]', numFmt: NUMBER_FORMATS.angle, width: 14 },
+      { header: 'UTC offset [h]', numFmt: '0.0#', width: 14 },
+      ...FACINGS.map((f) => ({ header: `${f}-facing [kWh]`, numFmt: NUMBER_FORMATS.kwh, width: 15 })),
+    ],
+    rows,
+  );
+  const checks: { cell: string; expected: number }[] = [];
+  const totalCol = 5 + FACINGS.length;
+  ws.getCell(top, totalCol).value = 'all facings [kWh]';
+  ws.getCell(top, totalCol).font = { bold: true };
+  ws.getColumn(totalCol).width = 18;
+  rows.forEach((r, k) => {
+    const row = top + 1 + k;
+    const expected = (r.slice(4) as number[]).reduce((a, b) => a + b, 0);
+    const cell = address(row, totalCol);
+    setFormula(ws, cell, `SUM(${address(row, 5)}:${address(row, 4 + FACINGS.length)})`, expected, NUMBER_FORMATS.kwh);
+    checks.push({ cell: `Overview!${cell}`, expected });
+  });
+  let row = t.lastRow + 2;
+  setLabel(ws, address(row, 1), 'Least annual gain by shading option (Options sheet)');
+  for (const b of bestOptions(results)) {
+    row++;
+    ws.getCell(row, 1).value = b.tag;
+    ws.getCell(row, 2).value = b.option;
+    ws.getCell(row, 3).value = b.saving;
+    ws.getCell(row, 3).numFmt = NUMBER_FORMATS.percent;
+    ws.getCell(row, 4).value = 'below no shading';
+  }
+  row += 2;
+  setLabel(ws, address(row, 1), 'Sites (examples, not a climate database)');
+  for (const s of EXAMPLE_SITES.filter((x) => DEMO_BUILDING.siteIds.includes(x.id))) {
+    row++;
+    ws.getCell(row, 1).value = s.label;
+    ws.getCell(row, 2).value = s.description;
+  }
+  freezeAt(ws, top + 1);
+  ws.pageSetup = { orientation: 'landscape', fitToPage: true, fitToWidth: 1, fitToHeight: 1 };
+  return checks;
+}
+
+function addSchedule(wb: ExcelJS.Workbook, results: DemoResults): void {
+  const ws = wb.addWorksheet('Schedule');
+  const rows: TableCell[][] = results.windows.map((w) => [
+    w.tag,
+    findExampleSite(w.siteId)?.label ?? w.siteId,
+    w.room,
+    w.spec.surfaceAzimuth,
+    w.spec.width,
+    w.spec.height,
+    w.spec.frameFraction,
+    glassArea(w.spec.width, w.spec.height, w.spec.frameFraction),
+    w.spec.glazing.shgc,
+    w.spec.glazing.panes,
+    describeShading(w.spec.shading),
+  ]);
+  addDataTable(
+    ws,
+    'Schedule',
+    { row: 1, column: 1 },
+    [
+      { header: 'window', width: 10 },
+      { header: 'site', width: 24 },
+      { header: 'room', width: 14 },
+      { header: 'facing [°]', numFmt: NUMBER_FORMATS.angle, width: 11 },
+      { header: 'width [m]', numFmt: NUMBER_FORMATS.length, width: 11 },
+      { header: 'height [m]', numFmt: NUMBER_FORMATS.length, width: 11 },
+      { header: 'frame share', numFmt: NUMBER_FORMATS.fraction, width: 12 },
+      { header: 'glass area [m²]', numFmt: NUMBER_FORMATS.area, width: 15 },
+      { header: 'SHGC', numFmt: NUMBER_FORMATS.shgc, width: 8 },
+      { header: 'panes', numFmt: NUMBER_FORMATS.integer, width: 8 },
+      { header: 'shading', width: 44 },
+    ],
+    rows,
+  );
+  freezeAt(ws, 2, 2);
+}
+
+function addMonthlyMatrix(wb: ExcelJS.Workbook, results: DemoResults): { cell: string; expected: number }[] {
+  const ws = wb.addWorksheet('Monthly');
+  const rows: TableCell[][] = MONTHS.map((m, k) => [m, ...results.windows.map((w) => w.summary.monthlyKWh[k])]);
+  const t = addDataTable(
+    ws,
+    'MonthlyByWindow',
+    { row: 1, column: 1 },
+    [{ header: 'month', width: 9 }, ...results.windows.map((w) => ({ header: `${w.tag} [kWh]`, numFmt: NUMBER_FORMATS.kwh, width: 13 }))],
+    rows,
+  );
+  const sumRow = t.lastRow + 1;
+  const maxRow = t.lastRow + 2;
+  setLabel(ws, address(sumRow, 1), 'year');
+  setLabel(ws, address(maxRow, 1), 'top month');
+  const checks: { cell: string; expected: number }[] = [];
+  results.windows.forEach((w) => {
+    const h = `${w.tag} [kWh]`;
+    const col = t.columnOf(h);
+    const top = Math.max(...w.summary.monthlyKWh);
+    setFormula(ws, address(sumRow, col), `SUM(${t.bodyRange(h)})`, w.summary.annualKWh, NUMBER_FORMATS.kwh);
+    setFormula(ws, address(maxRow, col), `MAX(${t.bodyRange(h)})`, top, NUMBER_FORMATS.kwh);
+    checks.push({ cell: `Monthly!${address(sumRow, col)}`, expected: w.summary.annualKWh }, { cell: `Monthly!${address(maxRow, col)}`, expected: top });
+  });
+  freezeAt(ws, 2, 2);
+  return checks;
+}
+
+function addOptions(wb: ExcelJS.Workbook, results: DemoResults): { cell: string; expected: number }[] {
+  const ws = wb.addWorksheet('Options');
+  const rows: TableCell[][] = results.options.map((o) => [
+    o.tag,
+    o.option,
+    o.result.summary.annualKWh,
+    o.result.summary.peakW,
+    o.result.summary.sunlitHours,
+    o.result.summary.meanSunlitFraction,
+    null,
+  ]);
+  const t = addDataTable(
+    ws,
+    'ShadingOptions',
+    { row: 1, column: 1 },
+    [
+      { header: 'window', width: 10 },
+      { header: 'shading option', width: 20 },
+      { header: 'annual gain [kWh]', numFmt: NUMBER_FORMATS.kwh, width: 18 },
+      { header: 'peak gain [W]', numFmt: NUMBER_FORMATS.watts, width: 14 },
+      { header: 'sunlit hours', numFmt: NUMBER_FORMATS.integer, width: 13 },
+      { header: 'mean sunlit fraction', numFmt: NUMBER_FORMATS.fraction, width: 20 },
+      { header: 'below no shading', numFmt: NUMBER_FORMATS.percent, width: 17 },
+    ],
+    rows,
+  );
+  const checks: { cell: string; expected: number }[] = [];
+  const gainCol = t.columnOf('annual gain [kWh]');
+  const savingCol = t.columnOf('below no shading');
+  results.options.forEach((o, k) => {
+    const row = t.headerRow + 1 + k;
+    const noneIndex = results.options.findIndex((x) => x.tag === o.tag && x.option === 'none');
+    const noneRow = t.headerRow + 1 + noneIndex;
+    const none = results.options[noneIndex].result.summary.annualKWh;
+    const expected = none > 0 ? 1 - o.result.summary.annualKWh / none : 0;
+    const cell = address(row, savingCol);
+    setFormula(ws, cell, `1-${address(row, gainCol)}/${address(noneRow, gainCol)}`, expected, NUMBER_FORMATS.percent);
+    checks.push({ cell: `Options!${cell}`, expected });
+  });
+  freezeAt(ws, 2, 3);
+  return checks;
+}
+
+/** Builds the whole demo workbook; returns it with the formula cells a spreadsheet must reproduce. */
+export function buildDemoWorkbook(results: DemoResults): { workbook: ExcelJS.Workbook; checks: DemoCheckCells } {
+  const wb = newWorkbook(`Sunpane demo: ${DEMO_BUILDING.name}`);
+  const overview = addOverview(wb, results);
+  addSchedule(wb, results);
+  const summarySheet = wb.addWorksheet('Summary');
+  const summary = addSummaryTable(summarySheet, 'WindowSummary', 1, results.windows);
+  freezeAt(summarySheet, 2, 2);
+  const monthly = addMonthlyMatrix(wb, results);
+  const options = addOptions(wb, results);
+  const hourlyWindow = results.windows.find((w) => w.tag === DEMO_HOURLY_TAG) ?? results.windows[0];
+  const series = annualSeries(hourlyWindow.spec);
+  const hourlySheet = `Hourly ${hourlyWindow.tag}`;
+  const placement = addHourlySheet(wb, hourlySheet, `Hourly_${hourlyWindow.tag}`, series);
+  const yearCells = addMonthlySheet(wb, `Year ${hourlyWindow.tag}`, `Year_${hourlyWindow.tag}`, summarizeAnnual(series), { sheet: hourlySheet, placement });
+  addHeatMapSheet(wb, `Heat map ${hourlyWindow.tag}`, series, `${hourlyWindow.spec.name}: solar gain [W] by day and hour ending, clear-sky ${DEMO_YEAR}`);
+  addFormulaSheet(wb, 'Formulas', results.formulas);
+  const hourly = [yearCells.annualKWh, yearCells.maxMonthKWh, ...(yearCells.peakW ? [yearCells.peakW] : [])];
+  return { workbook: wb, checks: { summary, monthly, options, overview, hourly } };
+}
+
+/** Reads `--out` (default out/demo). */
+function outDir(flags: Flags): string {
+  return flags.get('out') ?? path.join('out', 'demo');
+}
+
+/** Runs `sunpane demo`. */
+export async function demoCommand(argv: readonly string[], io: Output): Promise<number> {
+  const flags = parseFlags(argv, DEMO_FLAGS);
+  if (flags.has('help')) {
+    io.out(DEMO_HELP);
+    return 0;
+  }
+  const dir = outDir(flags);
+  await ensureFolder(dir);
+  const bar = new ProgressBar('demo windows', demoSteps());
+  let results: DemoResults;
+  try {
+    results = computeDemo(() => bar.tick());
+  } catch (err) {
+    if (err instanceof SunpaneError) throw new Error(`internal error: the demo data was refused: ${err.message}`);
+    throw err;
+  }
+  bar.finish();
+  const { workbook } = buildDemoWorkbook(results);
+  const file = path.join(dir, DEMO_FILE);
+  await saveWorkbook(workbook, file);
+  for (const line of demoSummaryText(results, path.normalize(file))) io.out(line);
+  return 0;
+}

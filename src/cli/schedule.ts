@@ -1,0 +1,383 @@
+/**
+ * `sunpane schedule`: the annual summary of many windows, one per row of a CSV file or of the
+ * first sheet of a workbook, written as CSV or as a workbook table with SUM/MAX totals.
+ */
+import * as fs from 'node:fs';
+import * as path from 'node:path';
+import ExcelJS from 'exceljs';
+import { annualSeries } from '../core/annual';
+import { type AnnualSummary, summarizeAnnual } from '../core/annualSummary';
+import { SunpaneError } from '../core/errors';
+import { formatSerialIso } from '../core/time';
+import type { Weather, WindowSpec } from '../core/window';
+import { validateWindowSpec } from '../core/windowSpec';
+import type { Output } from './call';
+import { MONTHS } from './annualSheets';
+import { describeFsError, writeFileAtomic } from './atomicWrite';
+import { CliInputError } from './cliError';
+import { csvLine, formatFixed, parseCsv } from './csv';
+import { outputKind, parseFlags, requireFlag } from './flags';
+import { ProgressBar } from './progress';
+import { weatherColumns } from './table';
+import { describeMissing, readWeatherFile } from './weatherCsv';
+import { windowFromJson } from './windowJson';
+import { NUMBER_FORMATS, type TableCell, addDataTable, address, freezeAt, newWorkbook, saveWorkbook, serialToCellDate, setFormula, setLabel } from './workbook';
+
+/** One schedule column: header (matched case-insensitively), where it goes in the window JSON, and its help line. */
+interface ScheduleColumn {
+  header: string;
+  /** JSON path in the window file format (see windowJson.ts). */
+  path: string;
+  kind: 'text' | 'number' | 'list';
+  help: string;
+}
+
+/** The schedule's columns, in the order `--help` lists them. */
+export const SCHEDULE_COLUMNS: readonly ScheduleColumn[] = [
+  { header: 'name', path: 'name', kind: 'text', help: 'window label (required)' },
+  { header: 'site', path: 'site', kind: 'text', help: 'an example site id, instead of latitude/longitude/utcOffset' },
+  { header: 'latitude', path: 'site.latitude', kind: 'number', help: '[°] north positive' },
+  { header: 'longitude', path: 'site.longitude', kind: 'number', help: '[°] east positive' },
+  { header: 'utcOffset', path: 'site.utcOffset', kind: 'number', help: '[h] standard time, east positive' },
+  { header: 'elevation', path: 'site.elevation', kind: 'number', help: '[m] (0)' },
+  { header: 'year', path: 'year', kind: 'number', help: 'calendar year (required)' },
+  { header: 'surfaceAzimuth', path: 'surfaceAzimuth', kind: 'number', help: '[°] facing, clockwise from north (required)' },
+  { header: 'surfaceTilt', path: 'surfaceTilt', kind: 'number', help: '[°] 90 = vertical (90)' },
+  { header: 'width', path: 'width', kind: 'number', help: '[m] rough opening (required)' },
+  { header: 'height', path: 'height', kind: 'number', help: '[m] rough opening (required)' },
+  { header: 'frameFraction', path: 'frameFraction', kind: 'number', help: 'frame share of the opening (0)' },
+  { header: 'shgc', path: 'glazing.shgc', kind: 'number', help: 'SHGC at normal incidence (required)' },
+  { header: 'panes', path: 'glazing.panes', kind: 'number', help: '1…4 (2)' },
+  { header: 'interiorAttenuation', path: 'glazing.interiorAttenuation', kind: 'number', help: 'blinds/curtains 0…1 (1)' },
+  { header: 'overhangProjection', path: 'shading.overhang.projection', kind: 'number', help: '[m] (no overhang when blank)' },
+  { header: 'overhangGap', path: 'shading.overhang.gap', kind: 'number', help: '[m] above the window head (0)' },
+  { header: 'overhangExtensionLeft', path: 'shading.overhang.extensionLeft', kind: 'number', help: '[m] beyond the left jamb (0)' },
+  { header: 'overhangExtensionRight', path: 'shading.overhang.extensionRight', kind: 'number', help: '[m] beyond the right jamb (0)' },
+  { header: 'finProjection', path: 'shading.fins.projection', kind: 'number', help: '[m] a fin at each jamb (no fins when blank)' },
+  { header: 'finGap', path: 'shading.fins.gap', kind: 'number', help: '[m] from the jamb (0)' },
+  { header: 'finExtensionAbove', path: 'shading.fins.extensionAbove', kind: 'number', help: '[m] above the head (0)' },
+  { header: 'finExtensionBelow', path: 'shading.fins.extensionBelow', kind: 'number', help: '[m] below the sill (0)' },
+  { header: 'revealDepth', path: 'shading.revealDepth', kind: 'number', help: '[m] glass behind the wall face' },
+  { header: 'skyline', path: 'shading.skyline', kind: 'list', help: '[°] elevation by equal azimuth sectors from north, space-separated' },
+  { header: 'groundAlbedo', path: 'groundAlbedo', kind: 'number', help: 'ground reflectance (0.2)' },
+  { header: 'skyModel', path: 'skyModel', kind: 'text', help: 'isotropic | hayDavies | perez1990 (perez1990)' },
+  { header: 'linkeTurbidity', path: 'weather.linkeTurbidity', kind: 'list', help: 'clear sky by turbidity: 1 or 12 values' },
+  { header: 'tauB', path: 'weather.tauB', kind: 'list', help: 'ASHRAE clear sky: 1 or 12 values, with tauD' },
+  { header: 'tauD', path: 'weather.tauD', kind: 'list', help: 'ASHRAE clear sky: 1 or 12 values, with tauB' },
+];
+
+export const SCHEDULE_HELP = `usage: sunpane schedule --in FILE.csv|FILE.xlsx [--weather FILE.csv (--dni COL --dhi COL | --ghi COL)] --out FILE.xlsx|FILE.csv
+
+Works out each window's year and writes one summary row per window: annual and monthly gain
+[kWh], peak hour [W] and when, sunlit hours, mean sunlit fraction, missing hours.
+
+  --in FILE      the window schedule: a CSV file, or the first sheet of a workbook; a header row,
+                 then one row per window; blank cells take the default (in brackets below)
+  --weather FILE hourly weather for every window (as in \`sunpane table --help\`); without it each
+                 row needs a clear sky (linkeTurbidity, or tauB and tauD) or an example site
+  --out FILE     .csv or .xlsx (a table with SUM/MAX totals)
+  --help         this text
+
+Schedule columns (header names, any case; only name, year, surfaceAzimuth, width, height, shgc and
+a site are required):
+${SCHEDULE_COLUMNS.map((c) => `  ${c.header.padEnd(24)}${c.help}`).join('\n')}
+
+Example: examples/windows.csv. Errors name the row and the column.
+Exit codes: 0 done, 1 bad input, 2 wrong usage.`;
+
+const SCHEDULE_FLAGS = { in: true, weather: true, dni: true, dhi: true, ghi: true, out: true, help: false } as const;
+
+/** One schedule row as read: where it is (for messages) and its cells by lower-case header. */
+export interface ScheduleRow {
+  /** `line 4` (CSV) or `row 4` (sheet). */
+  where: string;
+  cells: Map<string, string | number>;
+}
+
+function setPath(obj: Record<string, unknown>, dotted: string, value: unknown): void {
+  const keys = dotted.split('.');
+  let o = obj;
+  for (const k of keys.slice(0, -1)) {
+    if (typeof o[k] !== 'object' || o[k] === null) o[k] = {};
+    o = o[k] as Record<string, unknown>;
+  }
+  o[keys[keys.length - 1]] = value;
+}
+
+function columnOfPath(p: string): ScheduleColumn | undefined {
+  const bare = p.replace(/\[\d+\]$/, '').replace(/^shading\.(leftFin|rightFin)\./, 'shading.fins.');
+  return SCHEDULE_COLUMNS.find((c) => c.path === bare);
+}
+
+function readCellValue(column: ScheduleColumn, raw: string | number, where: string): unknown {
+  if (column.kind === 'text') return String(raw).trim();
+  if (typeof raw === 'number') return column.kind === 'list' ? [raw] : raw;
+  const text = raw.trim();
+  if (column.kind === 'list') {
+    return text.split(/[\s;]+/).filter((t) => t !== '').map((t) => {
+      const n = Number(t);
+      if (!Number.isFinite(n)) throw new CliInputError(`${where}, column ${column.header}: "${t}" is not a number`);
+      return n;
+    });
+  }
+  const n = Number(text);
+  if (!Number.isFinite(n)) throw new CliInputError(`${where}, column ${column.header}: "${text}" is not a number`);
+  return n;
+}
+
+/**
+ * Turns one schedule row into a window spec (weather resolved later if the row has none).
+ * @throws CliInputError naming the row and the column
+ */
+export function windowFromRow(row: ScheduleRow): { spec: WindowSpec; hasWeather: boolean } {
+  const json: Record<string, unknown> = {};
+  for (const column of SCHEDULE_COLUMNS) {
+    const raw = row.cells.get(column.header.toLowerCase());
+    if (raw === undefined || raw === '') continue;
+    setPath(json, column.path, readCellValue(column, raw, row.where));
+  }
+  const weather = json.weather as Record<string, unknown> | undefined;
+  if (weather) weather.kind = weather.linkeTurbidity !== undefined ? 'ineichenClearSky' : 'ashraeClearSky';
+  const shading = json.shading as Record<string, unknown> | undefined;
+  if (shading?.fins) {
+    shading.leftFin = shading.fins;
+    shading.rightFin = shading.fins;
+    delete shading.fins;
+  }
+  const label = typeof json.name === 'string' ? ` ("${json.name}")` : '';
+  try {
+    const file = windowFromJson(json);
+    if (file.hasWeather) validateWindowSpec(file.spec);
+    return file;
+  } catch (err) {
+    if (err instanceof SunpaneError) {
+      const column = columnOfPath(err.argument);
+      const blank = err.value === undefined || err.value === null;
+      const what = column ? `column ${column.header}` : `field ${err.argument}`;
+      throw new CliInputError(`${row.where}${label}, ${what}: ${blank && column ? 'is blank but required' : err.message}`);
+    }
+    throw err;
+  }
+}
+
+function checkHeader(headers: string[], where: string): void {
+  const known = new Set(SCHEDULE_COLUMNS.map((c) => c.header.toLowerCase()));
+  for (const h of headers) {
+    if (h !== '' && !known.has(h.toLowerCase())) throw new CliInputError(`${where}: unknown column "${h}" (see \`sunpane schedule --help\` for the columns)`);
+  }
+  if (!headers.some((h) => h.toLowerCase() === 'name')) throw new CliInputError(`${where}: the header row has no "name" column`);
+}
+
+/** Reads a CSV schedule. */
+export function scheduleFromCsv(text: string, file: string): ScheduleRow[] {
+  const lines = parseCsv(text);
+  if (lines.length === 0) throw new CliInputError(`${file} is empty: expected a header row and one row per window`);
+  const headers = lines[0].fields;
+  checkHeader(headers, `${file} line ${lines[0].line}`);
+  return lines.slice(1).map((l) => ({
+    where: `${file} line ${l.line}`,
+    cells: new Map(headers.map((h, k) => [h.toLowerCase(), l.fields[k] ?? ''] as [string, string])),
+  }));
+}
+
+function plainCellValue(v: ExcelJS.CellValue): string | number {
+  if (v === null || v === undefined) return '';
+  if (typeof v === 'number' || typeof v === 'string') return v;
+  if (typeof v === 'boolean') return v ? 'TRUE' : 'FALSE';
+  if (v instanceof Date) return v.toISOString();
+  if (typeof v === 'object' && 'result' in v) return plainCellValue((v as ExcelJS.CellFormulaValue).result as ExcelJS.CellValue);
+  if (typeof v === 'object' && 'richText' in v) return v.richText.map((r) => r.text).join('');
+  if (typeof v === 'object' && 'text' in v) return String((v as { text: unknown }).text);
+  return String(v);
+}
+
+/** Reads the first sheet of a workbook schedule. */
+export async function scheduleFromXlsx(file: string): Promise<ScheduleRow[]> {
+  const wb = new ExcelJS.Workbook();
+  try {
+    await wb.xlsx.readFile(file);
+  } catch (err) {
+    throw new CliInputError(`cannot read the workbook ${file}: ${err instanceof Error && 'code' in err ? describeFsError(err) : 'not a readable .xlsx file'}`);
+  }
+  const ws = wb.worksheets[0];
+  if (!ws) throw new CliInputError(`${file} has no sheets`);
+  const headerRow = ws.getRow(1);
+  const headers: string[] = [];
+  headerRow.eachCell({ includeEmpty: true }, (cell, col) => (headers[col - 1] = String(plainCellValue(cell.value)).trim()));
+  checkHeader(headers, `${file} sheet "${ws.name}" row 1`);
+  const rows: ScheduleRow[] = [];
+  for (let r = 2; r <= ws.rowCount; r++) {
+    const row = ws.getRow(r);
+    const cells = new Map<string, string | number>();
+    headers.forEach((h, k) => cells.set(h.toLowerCase(), plainCellValue(row.getCell(k + 1).value)));
+    if ([...cells.values()].every((v) => v === '')) continue;
+    rows.push({ where: `${file} sheet "${ws.name}" row ${r}`, cells });
+  }
+  return rows;
+}
+
+/** One window's results for the summary table. */
+export interface WindowResult {
+  spec: WindowSpec;
+  glassArea: number;
+  summary: AnnualSummary;
+}
+
+/** The summary columns (headers of our own), shared by CSV, workbook and demo. */
+export const SUMMARY_HEADERS = [
+  'window',
+  'latitude [°]',
+  'facing [°]',
+  'glass area [m²]',
+  'annual gain [kWh]',
+  'peak gain [W]',
+  'peak hour ending',
+  'sunlit hours',
+  'mean sunlit fraction',
+  'missing hours',
+  ...MONTHS.map((m) => `${m} [kWh]`),
+] as const;
+
+/** The summary as CSV text. */
+export function summaryCsv(results: readonly WindowResult[]): string {
+  const lines = [csvLine([...SUMMARY_HEADERS])];
+  for (const r of results) {
+    const s = r.summary;
+    lines.push(
+      csvLine([
+        r.spec.name,
+        formatFixed(r.spec.site.latitude, 4),
+        formatFixed(r.spec.surfaceAzimuth, 2),
+        formatFixed(r.glassArea, 4),
+        formatFixed(s.annualKWh, 3),
+        formatFixed(s.peakW, 2),
+        formatSerialIso(s.peakStamp),
+        s.sunlitHours,
+        formatFixed(s.meanSunlitFraction, 4),
+        s.missingHours,
+        ...s.monthlyKWh.map((k) => formatFixed(k, 3)),
+      ]),
+    );
+  }
+  return `${lines.join('\n')}\n`;
+}
+
+/** Formula cells below a summary table and the values they must show. */
+export interface SummaryTotals {
+  annualKWh: { cell: string; expected: number };
+  peakW: { cell: string; expected: number };
+  glassArea: { cell: string; expected: number };
+}
+
+/**
+ * Adds the summary table of several windows to a sheet, with a total row of native formulas (SUM
+ * of glass area and annual gain, MAX of peaks) carrying their cached results.
+ */
+export function addSummaryTable(ws: ExcelJS.Worksheet, tableName: string, topRow: number, results: readonly WindowResult[]): SummaryTotals {
+  const numFmts = [undefined, NUMBER_FORMATS.angle, NUMBER_FORMATS.angle, NUMBER_FORMATS.area, NUMBER_FORMATS.kwh, NUMBER_FORMATS.watts, NUMBER_FORMATS.dateTime, NUMBER_FORMATS.integer, NUMBER_FORMATS.fraction, NUMBER_FORMATS.integer, ...MONTHS.map(() => NUMBER_FORMATS.kwh)];
+  const widths = [22, 12, 11, 15, 18, 14, 18, 13, 20, 14, ...MONTHS.map(() => 11)];
+  const rows: TableCell[][] = results.map((r) => [
+    r.spec.name,
+    r.spec.site.latitude,
+    r.spec.surfaceAzimuth,
+    r.glassArea,
+    r.summary.annualKWh,
+    r.summary.peakW,
+    serialToCellDate(r.summary.peakStamp),
+    r.summary.sunlitHours,
+    r.summary.meanSunlitFraction,
+    r.summary.missingHours,
+    ...r.summary.monthlyKWh,
+  ]);
+  const t = addDataTable(ws, tableName, { row: topRow, column: 1 }, SUMMARY_HEADERS.map((header, k) => ({ header, numFmt: numFmts[k], width: widths[k] })), rows);
+  const totalRow = t.lastRow + 1;
+  const sum = (xs: number[]) => xs.reduce((a, b) => a + b, 0);
+  setLabel(ws, address(totalRow, 1), 'all windows');
+  const cell = (header: string) => address(totalRow, t.columnOf(header));
+  const area = sum(results.map((r) => r.glassArea));
+  const annual = sum(results.map((r) => r.summary.annualKWh));
+  const peak = Math.max(0, ...results.map((r) => r.summary.peakW));
+  setFormula(ws, cell('glass area [m²]'), `SUM(${t.bodyRange('glass area [m²]')})`, area, NUMBER_FORMATS.area);
+  setFormula(ws, cell('annual gain [kWh]'), `SUM(${t.bodyRange('annual gain [kWh]')})`, annual, NUMBER_FORMATS.kwh);
+  setFormula(ws, cell('peak gain [W]'), `MAX(${t.bodyRange('peak gain [W]')})`, peak, NUMBER_FORMATS.watts);
+  for (const m of MONTHS) {
+    const h = `${m} [kWh]`;
+    setFormula(ws, cell(h), `SUM(${t.bodyRange(h)})`, sum(results.map((r) => r.summary.monthlyKWh[MONTHS.indexOf(m)])), NUMBER_FORMATS.kwh);
+  }
+  const sheet = ws.name;
+  return {
+    annualKWh: { cell: `${sheet}!${cell('annual gain [kWh]')}`, expected: annual },
+    peakW: { cell: `${sheet}!${cell('peak gain [W]')}`, expected: peak },
+    glassArea: { cell: `${sheet}!${cell('glass area [m²]')}`, expected: area },
+  };
+}
+
+/** Computes one window's year and summary. */
+export function windowResult(spec: WindowSpec): WindowResult {
+  const series = annualSeries(spec);
+  return { spec, glassArea: series.glassArea, summary: summarizeAnnual(series) };
+}
+
+/** Runs `sunpane schedule`. */
+export async function scheduleCommand(argv: readonly string[], io: Output): Promise<number> {
+  const flags = parseFlags(argv, SCHEDULE_FLAGS);
+  if (flags.has('help')) {
+    io.out(SCHEDULE_HELP);
+    return 0;
+  }
+  const input = requireFlag(flags, 'in', 'FILE.csv|FILE.xlsx (the window schedule)');
+  const out = requireFlag(flags, 'out', 'FILE.xlsx|FILE.csv (where to write)');
+  const kind = outputKind(out, ['csv', 'xlsx']);
+  const inKind = /\.xlsx$/i.test(input) ? 'xlsx' : 'csv';
+  const columns = weatherColumns(flags);
+  let rows: ScheduleRow[];
+  if (inKind === 'xlsx') rows = await scheduleFromXlsx(input);
+  else {
+    let text: string;
+    try {
+      text = fs.readFileSync(input, 'utf8');
+    } catch (err) {
+      throw new CliInputError(`cannot read the schedule ${input}: ${describeFsError(err)}`);
+    }
+    rows = scheduleFromCsv(text, input);
+  }
+  if (rows.length === 0) throw new CliInputError(`${input} has a header but no windows`);
+  const specs = rows.map((row) => ({ row, ...windowFromRow(row) }));
+  const weatherByYear = new Map<number, Weather>();
+  const weatherFile = flags.get('weather');
+  for (const s of specs) {
+    if (weatherFile !== undefined && columns !== undefined) {
+      let w = weatherByYear.get(s.spec.year);
+      if (!w) {
+        const read = readWeatherFile(weatherFile, s.spec.year, columns);
+        const note = describeMissing(weatherFile, read);
+        if (note) io.err(note);
+        w = read.weather;
+        weatherByYear.set(s.spec.year, w);
+      }
+      s.spec.weather = w;
+    } else if (!s.hasWeather) {
+      throw new CliInputError(`${s.row.where} ("${s.spec.name}"): no weather: fill linkeTurbidity (or tauB and tauD), use an example site, or give --weather FILE.csv`);
+    }
+    validateWindowSpec(s.spec);
+  }
+  const bar = new ProgressBar('windows', specs.length);
+  const results = specs.map((s) => {
+    const r = windowResult(s.spec);
+    bar.tick();
+    return r;
+  });
+  bar.finish();
+  if (kind === 'csv') await writeFileAtomic(out, summaryCsv(results));
+  else {
+    const wb = newWorkbook('Sunpane window schedule');
+    const ws = wb.addWorksheet('Summary');
+    addSummaryTable(ws, 'Summary', 1, results);
+    freezeAt(ws, 2, 2);
+    await saveWorkbook(wb, out);
+  }
+  const total = results.reduce((a, r) => a + r.summary.annualKWh, 0);
+  io.out(`${results.length} window${results.length === 1 ? '' : 's'}: ${total.toFixed(1)} kWh of solar gain a year in all`);
+  io.out(`wrote ${path.normalize(out)}`);
+  return 0;
+}

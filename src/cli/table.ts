@@ -1,0 +1,122 @@
+/**
+ * `sunpane table`: one window's hourly year, from a window file and optionally an hourly weather
+ * file, written as CSV or as a workbook (hourly table, monthly summary, heat map).
+ */
+import * as path from 'node:path';
+import { type AnnualSeries, annualSeries } from '../core/annual';
+import { type AnnualSummary, summarizeAnnual } from '../core/annualSummary';
+import { formatSerialIso } from '../core/time';
+import type { WindowSpec } from '../core/window';
+import { validateWindowSpec } from '../core/windowSpec';
+import type { Output } from './call';
+import { addHeatMapSheet, addHourlySheet, addMonthlySheet, hourlyCsv } from './annualSheets';
+import { writeFileAtomic } from './atomicWrite';
+import { CliInputError, CliUsageError } from './cliError';
+import { type Flags, outputKind, parseFlags, requireFlag } from './flags';
+import { ProgressBar } from './progress';
+import { type WeatherColumns, describeMissing, readWeatherFile } from './weatherCsv';
+import { readWindowFile } from './windowJson';
+import { newWorkbook, saveWorkbook } from './workbook';
+
+export const TABLE_HELP = `usage: sunpane table --window FILE.json [--weather FILE.csv (--dni COL --dhi COL | --ghi COL)] --out FILE.xlsx|FILE.csv
+
+Writes one window's hourly year: 8760 rows (8784 in a leap year), each stamped at the END of its
+hour in local standard time, the sun taken at mid-hour.
+
+  --window FILE.json   the window (see "window file" below)
+  --weather FILE.csv   hourly weather, one row per hour of the window's year (optional header line);
+                       a blank, non-numeric, negative or above-2000 value marks its hour missing
+  --dni COL --dhi COL  columns of direct normal and diffuse horizontal irradiance [W/m²]
+  --ghi COL            or a column of global horizontal irradiance [W/m²] (split by Erbs et al. 1982)
+                       COL is a header name or a 1-based column number
+  --out FILE           .csv: the hourly columns; .xlsx: hourly table, monthly summary, heat map
+  --help               this text
+
+Without --weather the window file's "weather" (a clear-sky model) is used.
+
+Window file (JSON): name, year, site ({latitude, longitude, utcOffset, elevation?} or an example
+site id), surfaceAzimuth [°], surfaceTilt [°] (90), width, height [m], frameFraction (0),
+glazing {shgc, panes (2), angleTable?, interiorAttenuation (1), radiantFraction?},
+shading {overhang {projection, gap, extensionLeft, extensionRight}, leftFin/rightFin {projection,
+gap, extensionAbove, extensionBelow}, revealDepth, skyline [°...]}, groundAlbedo (0.2),
+skyModel ("perez1990"), weather {kind: "ineichenClearSky", linkeTurbidity} or
+{kind: "ashraeClearSky", tauB, tauD}. Defaults in brackets. Example: examples/east-office.json
+
+Exit codes: 0 done, 1 bad input (the message names the field, row or line), 2 wrong usage.`;
+
+const TABLE_FLAGS = { window: true, weather: true, dni: true, dhi: true, ghi: true, out: true, help: false } as const;
+
+/** Reads the --weather/--dni/--dhi/--ghi flags into a column choice; usage errors for bad combinations. */
+export function weatherColumns(flags: Flags): WeatherColumns | undefined {
+  const [dni, dhi, ghi] = [flags.get('dni'), flags.get('dhi'), flags.get('ghi')];
+  if (!flags.has('weather')) {
+    if (dni !== undefined || dhi !== undefined || ghi !== undefined) throw new CliUsageError('--dni, --dhi and --ghi pick columns of a --weather file: give --weather FILE.csv too');
+    return undefined;
+  }
+  if (ghi !== undefined && (dni !== undefined || dhi !== undefined)) throw new CliUsageError('give either --dni and --dhi, or --ghi, not both');
+  if (ghi !== undefined) return { ghi };
+  if (dni === undefined || dhi === undefined) throw new CliUsageError('--weather needs its columns: --dni COL --dhi COL, or --ghi COL');
+  return { dni, dhi };
+}
+
+/** A window with its weather resolved and validated, and a note on missing hours (for stderr). */
+export interface ResolvedWindow {
+  spec: WindowSpec;
+  missingNote?: string;
+}
+
+/** Reads the window file and the weather file (if any); validates the result. */
+export function resolveWindow(windowFile: string, weatherFile: string | undefined, columns: WeatherColumns | undefined): ResolvedWindow {
+  const { spec, hasWeather } = readWindowFile(windowFile);
+  let missingNote: string | undefined;
+  if (weatherFile !== undefined && columns !== undefined) {
+    if (typeof spec.year !== 'number' || !Number.isInteger(spec.year)) validateWindowSpec(spec);
+    const w = readWeatherFile(weatherFile, spec.year, columns);
+    spec.weather = w.weather;
+    missingNote = describeMissing(weatherFile, w);
+  } else if (!hasWeather) {
+    throw new CliInputError(`${windowFile}: the window has no "weather": add a clear-sky model ("weather": {"kind": "ineichenClearSky", "linkeTurbidity": 3}) or give hourly weather with --weather FILE.csv`);
+  }
+  validateWindowSpec(spec);
+  return { spec, missingNote };
+}
+
+/** The text `table` prints when done: the window's year in one line, and where it went. */
+export function tableSummaryLine(series: AnnualSeries, summary: AnnualSummary): string {
+  const missing = summary.missingHours > 0 ? `; ${summary.missingHours} hours missing (not in the total)` : '';
+  return `${series.name}: ${summary.annualKWh.toFixed(1)} kWh in ${series.year}, peak ${Math.round(summary.peakW)} W in the hour ending ${formatSerialIso(summary.peakStamp)}, ${summary.sunlitHours} sunlit hours${missing}`;
+}
+
+/** Runs `sunpane table`. */
+export async function tableCommand(argv: readonly string[], io: Output): Promise<number> {
+  const flags = parseFlags(argv, TABLE_FLAGS);
+  if (flags.has('help')) {
+    io.out(TABLE_HELP);
+    return 0;
+  }
+  const windowFile = requireFlag(flags, 'window', 'FILE.json (the window)');
+  const out = requireFlag(flags, 'out', 'FILE.xlsx|FILE.csv (where to write)');
+  const kind = outputKind(out, ['csv', 'xlsx']);
+  const columns = weatherColumns(flags);
+  const { spec, missingNote } = resolveWindow(windowFile, flags.get('weather'), columns);
+  if (missingNote) io.err(missingNote);
+  const series = annualSeries(spec);
+  const summary = summarizeAnnual(series);
+  const bar = new ProgressBar('writing hours', series.hours);
+  if (kind === 'csv') {
+    const text = hourlyCsv(series, () => bar.tick());
+    bar.finish();
+    await writeFileAtomic(out, text);
+  } else {
+    const wb = newWorkbook(`Sunpane: ${spec.name}`);
+    const hourlySheet = 'Hourly';
+    const placement = addHourlySheet(wb, hourlySheet, 'Hourly', series, () => bar.tick());
+    bar.finish();
+    addMonthlySheet(wb, 'Monthly', 'Monthly', summary, { sheet: hourlySheet, placement });
+    addHeatMapSheet(wb, 'Heat map', series, `${spec.name}: gain [W] by day and hour ending`);
+    await saveWorkbook(wb, out);
+  }
+  io.out(tableSummaryLine(series, summary));
+  io.out(`wrote ${path.normalize(out)}`);
+  return 0;
+}
