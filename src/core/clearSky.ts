@@ -106,10 +106,12 @@ export function ineichenPerezClearSky(sunAltitude: number, dayOfYear: number, li
   const fh2 = exp(-h / 1250);
   const cg1 = 5.09e-5 * h + 0.868;
   const cg2 = 3.92e-5 * h + 0.0387;
-  const ghi = cg1 * i0 * cosZ * exp(-cg2 * m * (fh1 + fh2 * (tl - 1))) * exp(0.01 * pow(m, 1.8));
+  // GHI / cos z is formed first so the beam limit needs no division by cos z (finite at sunrise).
+  const ghiPerCosZ = cg1 * i0 * exp(-cg2 * m * (fh1 + fh2 * (tl - 1))) * exp(0.01 * pow(m, 1.8));
+  const ghi = ghiPerCosZ * cosZ;
   const b = 0.664 + 0.163 / fh1;
   const dniModel = b * i0 * exp(-0.09 * m * (tl - 1));
-  const dniLimit = (ghi * (1 - (0.1 - 0.2 * exp(-tl)) / (0.1 + 0.882 / fh1))) / cosZ;
+  const dniLimit = ghiPerCosZ * (1 - (0.1 - 0.2 * exp(-tl)) / (0.1 + 0.882 / fh1));
   const dni = Math.max(0, min(dniModel, dniLimit));
   const dhi = Math.max(0, ghi - dni * cosZ);
   return { dni, dhi, ghi };

@@ -17,6 +17,8 @@ import type { AngleTable, Glazing } from './window';
 /** Panes accepted by the physical model. */
 export const PANES_MIN = 1;
 export const PANES_MAX = 4;
+/** Smallest gap between two angles of a table [°]: closer rows carry no information and make slopes blow up. */
+export const TABLE_MIN_SPACING = 0.01;
 /** Step of the precomputed lookup in an {@link ShgcCurve} [°]. */
 export const CURVE_STEP = 0.1;
 
@@ -84,7 +86,7 @@ export function shgcAtAngle(shgcNormal: number, panes: number, incidence: number
 }
 
 /**
- * Checks an angle table: angles strictly ascending within 0…90 °, values within 0…1, equal lengths,
+ * Checks an angle table: angles strictly ascending within 0…90 °, at least 0.01° apart, values within 0…1, equal lengths,
  * at least one row. Errors name `${argument}.angles` / `${argument}.values`.
  */
 export function requireAngleTable(table: AngleTable, argument = 'angleTable'): AngleTable {
@@ -97,6 +99,9 @@ export function requireAngleTable(table: AngleTable, argument = 'angleTable'): A
   angles.forEach((a, k) => {
     requireRange(`${argument}.angles`, a, 0, 90, '°');
     if (k > 0 && !(a > angles[k - 1])) throw new SunpaneError(`${argument}.angles`, angles, `must be strictly ascending (angle ${k + 1}, ${a}, is not above ${angles[k - 1]})`);
+    if (k > 0 && a - angles[k - 1] < TABLE_MIN_SPACING) {
+      throw new SunpaneError(`${argument}.angles`, angles, `must be at least ${TABLE_MIN_SPACING}° apart (angles ${k} and ${k + 1} are ${angles[k - 1]} and ${a})`);
+    }
   });
   values.forEach((v) => requireRange(`${argument}.values`, v, 0, 1));
   return table;

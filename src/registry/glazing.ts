@@ -1,4 +1,90 @@
-/** Worksheet-function descriptors: glazing. */
-import type { FunctionDescriptor } from './types';
+/**
+ * Worksheet-function descriptors: glazing — SHGC at an incidence angle (physical model or the user's
+ * table), diffuse SHGC and glass area. The core computes (src/core/glazing.ts).
+ */
+import { diffuseShgc, diffuseShgcFromTable, glassArea, PANES_MAX, PANES_MIN, shgcAtAngle, shgcFromTable, TABLE_MIN_SPACING } from '../core/glazing';
+import type { Args, FunctionDescriptor, ParamDescriptor } from './types';
 
-export const GLAZING_FUNCTIONS: readonly FunctionDescriptor[] = [];
+const incidence: ParamDescriptor = { name: 'incidence', kind: 'number', unit: '°', min: 0, max: 180, description: 'incidence angle of the sun on the glass (90 or more: sun behind it, SHGC 0)' };
+const shgcNormal: ParamDescriptor = { name: 'shgcNormal', kind: 'number', min: 0, max: 1, description: 'solar heat gain coefficient at normal incidence (from the product rating)' };
+const panes: ParamDescriptor = { name: 'panes', kind: 'number', min: PANES_MIN, max: PANES_MAX, integer: true, default: 2, description: 'number of glass panes, for the angular shape' };
+const angles: ParamDescriptor = {
+  name: 'angles',
+  kind: 'numberList',
+  unit: '°',
+  min: 0,
+  max: 90,
+  ascending: true,
+  length: { min: 1, max: 91 },
+  description: 'incidence angles of the table, strictly ascending, at least 0.01° apart',
+};
+const shgcValues: ParamDescriptor = { name: 'shgcValues', kind: 'numberList', min: 0, max: 1, length: { min: 1, max: 91 }, description: 'SHGC at each of the angles, same count' };
+
+function table(a: Args) {
+  return { angles: a.angles as number[], values: a.shgcValues as number[] };
+}
+
+function tableMismatch(a: Args): string | undefined {
+  const x = a.angles as number[] | undefined;
+  const y = a.shgcValues as number[] | undefined;
+  if (x && y && x.length !== y.length) return `angles has ${x.length} values but shgcValues has ${y.length}`;
+  const k = x ? x.findIndex((v, i) => i > 0 && v - x[i - 1] < TABLE_MIN_SPACING) : -1;
+  return k > 0 ? `angles ${x![k - 1]} and ${x![k]} are less than ${TABLE_MIN_SPACING}° apart` : undefined;
+}
+
+export const GLAZING_FUNCTIONS: readonly FunctionDescriptor[] = [
+  {
+    name: 'SHGCANGLE',
+    summary: 'SHGC at an incidence angle from the normal-incidence SHGC and pane count (Fresnel reflection and absorption).',
+    category: 'Glazing',
+    params: [incidence, shgcNormal, panes],
+    result: { shape: 'value', min: 0, max: 1, description: 'SHGC at the angle, never above the normal value; 0 from 90° on' },
+    evaluate: (a) => shgcAtAngle(a.shgcNormal as number, a.panes as number, a.incidence as number),
+    examples: [
+      { args: ['60', '0.7', '2'], note: 'double glazing rated 0.70, sun 60° off the normal' },
+      { args: ['0', '0.7'], note: 'normal incidence returns the rating itself' },
+    ],
+  },
+  {
+    name: 'SHGCLOOKUP',
+    summary: 'SHGC at an incidence angle from your table of SHGC by angle (monotone cubic, tapering to 0 at 90°).',
+    category: 'Glazing',
+    params: [incidence, angles, shgcValues],
+    result: { shape: 'value', min: 0, max: 1, description: 'SHGC at the angle; 0 from 90° on' },
+    evaluate: (a) => shgcFromTable(table(a), a.incidence as number),
+    refuses: tableMismatch,
+    examples: [{ args: ['55', '{0,40,50,60,70,80}', '{0.7,0.68,0.66,0.6,0.48,0.28}'], note: 'between the 50° and 60° rows of a product table' }],
+  },
+  {
+    name: 'SHGCDIFFUSE',
+    summary: 'Hemispherical (diffuse) SHGC from the normal-incidence SHGC and pane count.',
+    category: 'Glazing',
+    params: [shgcNormal, panes],
+    result: { shape: 'value', min: 0, max: 1, description: 'SHGC for isotropic diffuse irradiance, 2∫ SHGC(θ) cos θ sin θ dθ' },
+    evaluate: (a) => diffuseShgc(a.shgcNormal as number, a.panes as number),
+    examples: [{ args: ['0.7', '2'], note: 'double glazing rated 0.70' }],
+  },
+  {
+    name: 'SHGCDIFFUSELOOKUP',
+    summary: 'Hemispherical (diffuse) SHGC from your table of SHGC by angle.',
+    category: 'Glazing',
+    params: [angles, shgcValues],
+    result: { shape: 'value', min: 0, max: 1, description: 'SHGC for isotropic diffuse irradiance, integrated over the interpolated table' },
+    evaluate: (a) => diffuseShgcFromTable(table(a)),
+    refuses: tableMismatch,
+    examples: [{ args: ['{0,40,50,60,70,80}', '{0.7,0.68,0.66,0.6,0.48,0.28}'], note: 'diffuse value of a product table' }],
+  },
+  {
+    name: 'GLASSAREA',
+    summary: 'Glass area of a window from its rough opening and the frame share.',
+    category: 'Glazing',
+    params: [
+      { name: 'width', kind: 'number', unit: 'm', min: 0, max: 1000, exclusiveMin: true, description: 'rough-opening width' },
+      { name: 'height', kind: 'number', unit: 'm', min: 0, max: 1000, exclusiveMin: true, description: 'rough-opening height' },
+      { name: 'frameFraction', kind: 'number', min: 0, max: 1, exclusiveMax: true, default: 0, description: 'frame share of the rough-opening area' },
+    ],
+    result: { shape: 'value', unit: 'm²', min: 0, description: 'width × height × (1 − frame share)' },
+    evaluate: (a) => glassArea(a.width as number, a.height as number, a.frameFraction as number),
+    examples: [{ args: ['1.2', '1.5', '0.2'], note: '1.44 m² of glass' }],
+  },
+];

@@ -1,4 +1,204 @@
-/** Worksheet-function descriptors: sky. */
-import type { FunctionDescriptor } from './types';
+/**
+ * Worksheet-function descriptors: sky irradiance — extraterrestrial irradiance, air mass, clear-sky
+ * models, decomposition of global horizontal irradiance and irradiance on a window plane.
+ * Descriptors read and check arguments; the core computes (src/core/sky.ts).
+ */
+import {
+  AIR_MASS_HORIZON,
+  GHI_MAX,
+  IRRADIANCE_MAX,
+  LINKE_MAX,
+  LINKE_MIN,
+  TAU_B_MAX,
+  TAU_D_MAX,
+  airMassKastenYoung,
+  ashraeClearSky,
+  ashraeVerticalDiffuseRatio,
+  decomposeErbs,
+  extraterrestrialIrradiance,
+  extraterrestrialSpencer,
+  ineichenPerezClearSky,
+  planeIrradiance,
+  type SkyModel,
+} from '../core/sky';
+import { GLOSSARY } from './glossary';
+import type { Args, FunctionDescriptor, ParamDescriptor } from './types';
 
-export const SKY_FUNCTIONS: readonly FunctionDescriptor[] = [];
+/** Highest extraterrestrial irradiance either formula gives (Spencer at perihelion ≈ 1414.0) [W/m²]. */
+const E0_MAX = 1415;
+const E0_MIN = 1320;
+
+const dayOfYear: ParamDescriptor = { name: 'dayOfYear', kind: 'number', min: 1, max: 366, description: 'day of the year, 1 = 1 January (fractions allowed)' };
+const tauB: ParamDescriptor = { name: 'tauB', kind: 'number', min: 0, max: TAU_B_MAX, exclusiveMin: true, description: 'beam pseudo-optical depth τb of the ASHRAE clear-sky model (site and month data)' };
+const tauD: ParamDescriptor = { name: 'tauD', kind: 'number', min: 0, max: TAU_D_MAX, exclusiveMin: true, description: 'diffuse pseudo-optical depth τd of the ASHRAE clear-sky model (site and month data)' };
+const linkeTurbidity: ParamDescriptor = { name: 'linkeTurbidity', kind: 'number', min: LINKE_MIN, max: LINKE_MAX, description: 'Linke turbidity factor (about 2 very clear, 3–4 typical, 6+ hazy)' };
+const irradiance = (name: string, description: string): ParamDescriptor => ({ name, kind: 'number', unit: 'W/m²', min: 0, max: IRRADIANCE_MAX, description });
+const dni = irradiance('dni', 'direct normal irradiance');
+const dhi = irradiance('dhi', 'diffuse horizontal irradiance');
+const albedo: ParamDescriptor = { name: 'albedo', kind: 'number', min: 0, max: 1, default: 0.2, description: 'ground reflectance (grass about 0.2, fresh snow up to 0.8)' };
+const MODEL_CHOICES = ['perez', 'haydavies', 'isotropic'] as const;
+const model: ParamDescriptor = {
+  name: 'model',
+  kind: 'choice',
+  choices: MODEL_CHOICES,
+  default: 'perez',
+  description: 'sky-diffuse model: "perez" (Perez 1990), "haydavies" (Hay–Davies) or "isotropic"',
+};
+const skyViewFactor: ParamDescriptor = { name: 'skyViewFactor', kind: 'number', min: 0, max: 1, default: 1, description: 'share of the sky diffuse the window still sees past a skyline (1 = open)' };
+const MODEL_OF: Record<(typeof MODEL_CHOICES)[number], SkyModel> = { perez: 'perez1990', haydavies: 'hayDavies', isotropic: 'isotropic' };
+
+const windowParams: readonly ParamDescriptor[] = [
+  dni,
+  dhi,
+  GLOSSARY.sunAltitude,
+  GLOSSARY.sunAzimuth,
+  GLOSSARY.surfaceAzimuth,
+  dayOfYear,
+  GLOSSARY.surfaceTilt,
+  albedo,
+  model,
+  skyViewFactor,
+];
+
+function windowIrradiance(a: Args) {
+  return planeIrradiance({
+    dni: a.dni as number,
+    dhi: a.dhi as number,
+    sunAltitude: a.sunAltitude as number,
+    sunAzimuth: a.sunAzimuth as number,
+    surfaceTilt: a.surfaceTilt as number,
+    surfaceAzimuth: a.surfaceAzimuth as number,
+    albedo: a.albedo as number,
+    dayOfYear: a.dayOfYear as number,
+    model: MODEL_OF[a.model as (typeof MODEL_CHOICES)[number]],
+    skyViewFactor: a.skyViewFactor as number,
+  });
+}
+
+const clearSkyParams: readonly ParamDescriptor[] = [GLOSSARY.sunAltitude, dayOfYear, tauB, tauD];
+const clearSkyOf = (a: Args) => ashraeClearSky(a.sunAltitude as number, a.dayOfYear as number, a.tauB as number, a.tauD as number);
+
+export const SKY_FUNCTIONS: readonly FunctionDescriptor[] = [
+  {
+    name: 'EXTRATERRESTRIAL',
+    summary: 'Solar irradiance above the atmosphere on a plane facing the sun, for a day of the year.',
+    category: 'Sky and irradiance',
+    params: [
+      dayOfYear,
+      {
+        name: 'formula',
+        kind: 'choice',
+        choices: ['ashrae', 'spencer'],
+        default: 'ashrae',
+        description: '"ashrae": 1367 W/m² with one cosine (ASHRAE Handbook); "spencer": Spencer (1971) series with 1366.1 W/m²',
+      },
+    ],
+    result: { shape: 'value', unit: 'W/m²', min: E0_MIN, max: E0_MAX, description: 'extraterrestrial normal irradiance' },
+    evaluate: (a) => (a.formula === 'spencer' ? extraterrestrialSpencer(a.dayOfYear as number) : extraterrestrialIrradiance(a.dayOfYear as number)),
+    examples: [
+      { args: ['3'], note: 'perihelion: 1367 × 1.033 = 1412.1 W/m²' },
+      { args: ['1', '"spencer"'], note: '1 January by Spencer (1971): 1414.0 W/m²' },
+    ],
+  },
+  {
+    name: 'AIRMASS',
+    summary: 'Relative optical air mass for a sun altitude (Kasten & Young 1989).',
+    category: 'Sky and irradiance',
+    params: [{ ...GLOSSARY.sunAltitude, description: 'sun altitude above the horizon (at or below 0 gives the horizon value)' }],
+    result: { shape: 'value', min: 0.999, max: AIR_MASS_HORIZON, description: 'relative air mass (1 at the zenith, about 37.9 at the horizon)' },
+    evaluate: (a) => airMassKastenYoung(a.sunAltitude as number),
+    examples: [{ args: ['10'], note: 'sun 10° high: 5.586' }],
+  },
+  {
+    name: 'CLEARSKYDNI',
+    summary: 'Clear-sky direct normal irradiance by the ASHRAE τb/τd model (2013 exponents).',
+    category: 'Sky and irradiance',
+    params: clearSkyParams,
+    result: { shape: 'value', unit: 'W/m²', min: 0, max: E0_MAX, description: 'direct normal irradiance; 0 with the sun at or below the horizon' },
+    evaluate: (a) => clearSkyOf(a).dni,
+    examples: [{ args: ['60', '172', '0.4', '2.3'], note: 'sun 60° high on 21 June with τb 0.4, τd 2.3' }],
+  },
+  {
+    name: 'CLEARSKYDHI',
+    summary: 'Clear-sky diffuse horizontal irradiance by the ASHRAE τb/τd model (2013 exponents).',
+    category: 'Sky and irradiance',
+    params: clearSkyParams,
+    result: { shape: 'value', unit: 'W/m²', min: 0, max: E0_MAX, description: 'diffuse horizontal irradiance; 0 with the sun at or below the horizon' },
+    evaluate: (a) => clearSkyOf(a).dhi,
+    examples: [{ args: ['60', '172', '0.4', '2.3'], note: 'sun 60° high on 21 June with τb 0.4, τd 2.3' }],
+  },
+  {
+    name: 'CLEARSKYGHI',
+    summary: 'Clear-sky global horizontal irradiance by the ASHRAE τb/τd model (2013 exponents).',
+    category: 'Sky and irradiance',
+    params: clearSkyParams,
+    result: { shape: 'value', unit: 'W/m²', min: 0, max: 2 * E0_MAX, description: 'global horizontal irradiance = direct normal × sin(altitude) + diffuse; 0 at night' },
+    evaluate: (a) => clearSkyOf(a).ghi,
+    examples: [{ args: ['60', '172', '0.4', '2.3'], note: 'sun 60° high on 21 June with τb 0.4, τd 2.3' }],
+  },
+  {
+    name: 'CLEARSKYLINKE',
+    summary: 'Clear-sky direct normal, diffuse and global horizontal irradiance from Linke turbidity (Ineichen & Perez 2002).',
+    category: 'Sky and irradiance',
+    params: [GLOSSARY.sunAltitude, dayOfYear, linkeTurbidity, GLOSSARY.elevation],
+    result: { shape: 'spill', unit: 'W/m²', columns: ['dni', 'dhi', 'ghi'], description: 'one row: direct normal, diffuse horizontal, global horizontal; zeros at night' },
+    evaluate: (a) => {
+      const r = ineichenPerezClearSky(a.sunAltitude as number, a.dayOfYear as number, a.linkeTurbidity as number, a.elevation as number);
+      return [[r.dni, r.dhi, r.ghi]];
+    },
+    examples: [{ args: ['50', '172', '3', '400'], note: 'sun 50° high on 21 June, turbidity 3, 400 m' }],
+  },
+  {
+    name: 'SPLITGLOBAL',
+    summary: 'Splits global horizontal irradiance into direct normal and diffuse horizontal (Erbs et al. 1982).',
+    category: 'Sky and irradiance',
+    params: [{ name: 'ghi', kind: 'number', unit: 'W/m²', min: 0, max: GHI_MAX, description: 'global horizontal irradiance (measured)' }, GLOSSARY.sunAltitude, dayOfYear],
+    result: {
+      shape: 'spill',
+      columns: ['dni', 'dhi', 'clearnessIndex'],
+      description: 'one row: direct normal [W/m²], diffuse horizontal [W/m²], clearness index; with the sun at or below the horizon all of the global is diffuse',
+    },
+    evaluate: (a) => {
+      const r = decomposeErbs(a.ghi as number, 90 - (a.sunAltitude as number), a.dayOfYear as number);
+      return [[r.dni, r.dhi, r.clearnessIndex]];
+    },
+    examples: [{ args: ['50', '5', '1'], note: '50 W/m² with the sun 5° high on 1 January: DNI 96.7, DHI 41.6, kt 0.406' }],
+  },
+  {
+    name: 'WINDOWIRRADIANCE',
+    summary: 'Total solar irradiance on a window plane (beam + sky diffuse + ground-reflected).',
+    category: 'Sky and irradiance',
+    params: windowParams,
+    result: { shape: 'value', unit: 'W/m²', min: 0, description: 'irradiance on the window plane; beam is 0 with the sun below the horizon or behind the window' },
+    evaluate: (a) => windowIrradiance(a).total,
+    examples: [
+      { args: ['800', '120', '45', '180', '180', '172'], note: 'south window at noon in June, Perez sky, albedo 0.2' },
+      { args: ['800', '120', '45', '180', '180', '172', '90', '0.2', '"isotropic"'], note: 'the same with an isotropic sky' },
+    ],
+  },
+  {
+    name: 'WINDOWIRRADIANCEPARTS',
+    summary: 'Beam, sky diffuse, ground-reflected and total irradiance on a window plane, with the incidence angle.',
+    category: 'Sky and irradiance',
+    params: windowParams,
+    result: {
+      shape: 'spill',
+      columns: ['beam', 'sky', 'ground', 'total', 'incidence'],
+      description: 'one row: beam, sky diffuse, ground-reflected and total irradiance [W/m²], incidence angle [°]',
+    },
+    evaluate: (a) => {
+      const r = windowIrradiance(a);
+      return [[r.beam, r.sky, r.ground, r.total, r.incidence]];
+    },
+    examples: [{ args: ['800', '120', '45', '180', '180', '172'], note: 'the parts for a south window at noon in June' }],
+  },
+  {
+    name: 'VERTICALDIFFUSERATIO',
+    summary: 'ASHRAE clear-day ratio of sky diffuse on a vertical surface to diffuse horizontal, from the incidence angle.',
+    category: 'Sky and irradiance',
+    params: [{ name: 'incidence', kind: 'number', unit: '°', min: 0, max: 180, description: 'incidence angle of the sun on the vertical surface (above 90: sun behind it)' }],
+    result: { shape: 'value', min: 0.45, max: 1.3, description: 'Y = max(0.45, 0.55 + 0.437 cos θ + 0.313 cos² θ); multiply by the clear-sky diffuse horizontal' },
+    evaluate: (a) => ashraeVerticalDiffuseRatio(a.incidence as number),
+    examples: [{ args: ['60'], note: 'sun 60° off the wall normal: 0.8168' }],
+  },
+];
