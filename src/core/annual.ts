@@ -14,7 +14,7 @@
  */
 import { SunpaneError } from './errors';
 import { type PreparedWindow, monthlyValue, prepareWindow } from './gain';
-import { ashraeClearSky, decomposeErbs, ineichenPerezClearSky, planeIrradiance } from './sky';
+import { type PlaneIrradianceInput, ashraeClearSky, decomposeErbs, ineichenPerezClearSky, planeIrradiance } from './sky';
 import { sunlitFraction } from './shading';
 import { annualSunPath } from './sun';
 import { DEG, RAD, acosClamped } from './angles';
@@ -130,6 +130,7 @@ export function annualOfPrepared(w: PreparedWindow): AnnualSeries {
   const az = path.azimuth;
   const zen = path.zenith;
   const cosTilt = Math.cos(tilt * RAD);
+  const planeInput: PlaneIrradianceInput = { dni: 0, dhi: 0, sunAltitude: 0, sunAzimuth: 0, surfaceTilt: tilt, surfaceAzimuth: surfAz, albedo, dayOfYear: 1, model, skyViewFactor };
   const sinTilt = Math.sin(tilt * RAD);
 
   for (let i = 0; i < n; i++) {
@@ -197,18 +198,13 @@ export function annualOfPrepared(w: PreparedWindow): AnnualSeries {
     out.dhi[i] = dhi;
     if (dhi === 0 && (dni === 0 || !sunUp)) continue; // dark hour: irradiance and gain stay 0
 
-    const plane = planeIrradiance({
-      dni: sunUp ? dni : 0,
-      dhi,
-      sunAltitude: a,
-      sunAzimuth: s,
-      surfaceTilt: tilt,
-      surfaceAzimuth: surfAz,
-      albedo,
-      dayOfYear: doy,
-      model,
-      skyViewFactor,
-    });
+    // One input record reused for every hour (no allocation per hour on our side).
+    planeInput.dni = sunUp ? dni : 0;
+    planeInput.dhi = dhi;
+    planeInput.sunAltitude = a;
+    planeInput.sunAzimuth = s;
+    planeInput.dayOfYear = doy;
+    const plane = planeIrradiance(planeInput);
     // Gain equation of src/core/gain.ts windowGainParts, inlined for the hourly path.
     const q = k * (plane.beam * lit * g + (plane.sky + plane.ground) * shgcDiffuse);
     out.beam[i] = plane.beam;

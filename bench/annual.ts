@@ -1,0 +1,72 @@
+/**
+ * Annual series benchmark: the full hourly year of one window — overhang, two fins, reveal and a
+ * skyline, Perez 1990 sky, angle-dependent SHGC, supplied DNI/DHI arrays — against suncalc 2.0.2's
+ * bare `getPosition` for the same 8760 instants, in the same run. The weather arrays are made once
+ * from the ASHRAE clear-sky model outside the timed part.
+ */
+import { annualSeries } from '../src/core/annual';
+import { ashraeClearSky } from '../src/core/sky';
+import { annualSunPath } from '../src/core/sun';
+import { serialToUtcMs } from '../src/core/time';
+import type { WindowSpec } from '../src/core/window';
+import { type BenchSection, consume, ratio, timeIt } from './harness';
+
+// eslint-disable-next-line @typescript-eslint/no-require-imports
+const SunCalc = require('suncalc') as { getPosition(date: Date, lat: number, lng: number): { altitude: number; azimuth: number } };
+
+const YEAR = 2026;
+const SITE = { latitude: 40, longitude: -105, utcOffset: -7, elevation: 1600 };
+
+function benchSpec(): WindowSpec {
+  const path = annualSunPath(YEAR, SITE);
+  const dni = new Float64Array(path.hours);
+  const dhi = new Float64Array(path.hours);
+  for (let i = 0; i < path.hours; i++) {
+    const c = ashraeClearSky(path.altitude[i], Math.floor(i / 24) + 1, 0.4, 2.3);
+    dni[i] = c.dni;
+    dhi[i] = c.dhi;
+  }
+  return {
+    name: 'bench window',
+    site: SITE,
+    surfaceAzimuth: 200,
+    surfaceTilt: 90,
+    width: 2,
+    height: 1.5,
+    frameFraction: 0.1,
+    glazing: { shgc: 0.6, panes: 2, radiantFraction: 0.8 },
+    shading: {
+      overhang: { projection: 0.6, gap: 0.2, extensionLeft: 0.3, extensionRight: 0.3 },
+      leftFin: { projection: 0.4, gap: 0.1, extensionAbove: 0.2, extensionBelow: 0 },
+      rightFin: { projection: 0.4, gap: 0.1, extensionAbove: 0.2, extensionBelow: 0 },
+      revealDepth: 0.1,
+      skyline: [5, 10, 20, 15, 0, 0, 5, 30],
+    },
+    groundAlbedo: 0.2,
+    skyModel: 'perez1990',
+    weather: { kind: 'measured', dni, dhi },
+    year: YEAR,
+  };
+}
+
+export function annualBench(): BenchSection {
+  const spec = benchSpec();
+  const hours = spec.weather.kind === 'measured' ? spec.weather.dni.length : 8760;
+  const stamps = annualSunPath(YEAR, SITE).stampSerial;
+  const dates = Array.from(stamps, (s) => new Date(serialToUtcMs(s - 1 / 48, SITE.utcOffset)));
+
+  const ours = timeIt(`window annual series, shaded, Perez, measured (${hours} h)`, hours, () => {
+    const s = annualSeries(spec);
+    consume(s.gain[4000]);
+  });
+  const suncalc = timeIt(`suncalc 2.0.2 getPosition (${hours} instants)`, hours, () => {
+    let acc = 0;
+    for (const d of dates) acc += SunCalc.getPosition(d, SITE.latitude, SITE.longitude).altitude;
+    consume(acc);
+  });
+  return {
+    title: 'Annual window series (full hourly gain of one shaded window) vs bare sun positions',
+    timings: [ours, suncalc],
+    ratios: { window_annual_vs_suncalc: ratio(ours, suncalc) },
+  };
+}
