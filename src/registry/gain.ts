@@ -25,7 +25,7 @@ const P = {
   year: { name: 'year', kind: 'number', integer: true, min: 1901, max: 9998, description: 'calendar year (8784 hours in a leap year, else 8760)' },
   width: { name: 'width', kind: 'number', unit: 'm', min: 0, max: LENGTH_MAX, exclusiveMin: true, description: 'window width (rough opening, frame included)' },
   height: { name: 'height', kind: 'number', unit: 'm', min: 0, max: LENGTH_MAX, exclusiveMin: true, description: 'window height (rough opening, frame included)' },
-  shgc: { name: 'shgc', kind: 'number', min: 0, max: 1, description: 'solar heat gain coefficient of the glazing at normal incidence' },
+  shgcNormal: { name: 'shgcNormal', kind: 'number', min: 0, max: 1, description: 'solar heat gain coefficient of the glazing at normal incidence (from the product rating)' },
   dni: { name: 'dni', kind: 'number', unit: 'W/m²', min: 0, max: IRRADIANCE_MAX, optional: true, description: "the hour's direct normal irradiance; blank: clear sky from tauB and tauD" },
   dhi: { name: 'dhi', kind: 'number', unit: 'W/m²', min: 0, max: IRRADIANCE_MAX, optional: true, description: "the hour's diffuse horizontal irradiance; blank: clear sky from tauB and tauD" },
   tauB: { name: 'tauB', kind: 'number', min: 0, max: TAU_B_MAX, exclusiveMin: true, optional: true, description: 'beam pseudo-optical depth of the ASHRAE clear-sky model (used when dni and dhi are blank)' },
@@ -33,7 +33,7 @@ const P = {
   panes: { name: 'panes', kind: 'number', integer: true, min: 1, max: 4, default: 2, description: 'number of glass panes, for the fall of SHGC with incidence angle' },
   frameFraction: { name: 'frameFraction', kind: 'number', min: 0, max: 1, exclusiveMax: true, default: 0, description: 'share of the rough opening taken by the frame' },
   albedo: { name: 'albedo', kind: 'number', min: 0, max: 1, default: 0.2, description: 'ground reflectance (0.2 is common practice for grass and soil, no source)' },
-  skyModel: { name: 'skyModel', kind: 'choice', choices: ['isotropic', 'haydavies', 'perez'], default: 'perez', description: 'sky-diffuse model: isotropic, Hay–Davies or Perez (1990)' },
+  model: { name: 'model', kind: 'choice', choices: ['perez', 'haydavies', 'isotropic'], default: 'perez', description: 'sky-diffuse model: "perez" (Perez 1990), "haydavies" (Hay–Davies) or "isotropic"' },
   surfaceTilt: { ...GLOSSARY.surfaceTilt, description: 'window tilt from horizontal: 90 is a vertical window (shading devices need 90)' },
   interiorAttenuation: { name: 'interiorAttenuation', kind: 'number', min: 0, max: 1, default: 1, description: 'interior attenuation coefficient of a blind or curtain; 1 = none' },
   radiantFraction: { name: 'radiantFraction', kind: 'number', min: 0, max: 1, default: DEFAULT_RADIANT_FRACTION, description: 'share of the gain that is radiant (reaches the air only through the room surfaces)' },
@@ -60,8 +60,8 @@ const P = {
   dhiSeries: { name: 'dhi', kind: 'numberList', unit: 'W/m²', min: 0, max: IRRADIANCE_MAX, optional: true, description: "a year's hourly diffuse horizontal irradiance, one value per hour; blank: clear sky from tauB and tauD" },
 } satisfies Record<string, ParamDescriptor>;
 
-const SITE_AND_WINDOW: readonly ParamDescriptor[] = [GLOSSARY.latitude, GLOSSARY.longitude, GLOSSARY.utcOffset, GLOSSARY.surfaceAzimuth, P.width, P.height, P.shgc];
-const GLASS_AND_GROUND: readonly ParamDescriptor[] = [P.panes, P.frameFraction, P.albedo, P.skyModel, P.surfaceTilt, P.interiorAttenuation];
+const SITE_AND_WINDOW: readonly ParamDescriptor[] = [GLOSSARY.latitude, GLOSSARY.longitude, GLOSSARY.utcOffset, GLOSSARY.surfaceAzimuth, P.width, P.height, P.shgcNormal];
+const GLASS_AND_GROUND: readonly ParamDescriptor[] = [P.panes, P.frameFraction, P.albedo, P.model, P.surfaceTilt, P.interiorAttenuation];
 const SHADING: readonly ParamDescriptor[] = [P.overhangProjection, P.overhangGap, P.overhangExtensionLeft, P.overhangExtensionRight, P.finProjection, P.finGap, P.revealDepth, P.skyline];
 
 const SKY_MODEL: Record<string, SkyModel> = { isotropic: 'isotropic', haydavies: 'hayDavies', perez: 'perez1990' };
@@ -92,10 +92,10 @@ function specOf(a: Args, year: number, weather: Weather): WindowSpec {
     width: a.width as number,
     height: a.height as number,
     frameFraction: a.frameFraction as number,
-    glazing: { shgc: a.shgc as number, panes: a.panes as number, interiorAttenuation: a.interiorAttenuation as number, radiantFraction: (a.radiantFraction as number | undefined) ?? DEFAULT_RADIANT_FRACTION },
+    glazing: { shgc: a.shgcNormal as number, panes: a.panes as number, interiorAttenuation: a.interiorAttenuation as number, radiantFraction: (a.radiantFraction as number | undefined) ?? DEFAULT_RADIANT_FRACTION },
     shading: shadingOf(a),
     groundAlbedo: a.albedo as number,
-    skyModel: SKY_MODEL[a.skyModel as string],
+    skyModel: SKY_MODEL[a.model as string],
     weather,
     year,
   };
@@ -176,6 +176,8 @@ const FIELD_TO_PARAM: Record<string, string> = {
   'shading.rightFin.gap': 'finGap',
   'shading.revealDepth': 'revealDepth',
   groundAlbedo: 'albedo',
+  skyModel: 'model',
+  'glazing.shgc': 'shgcNormal',
 };
 
 function paramNameOf(field: string): string {
