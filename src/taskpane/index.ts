@@ -1,7 +1,29 @@
 /**
- * The task pane. Placeholder entry until the pane issue lands: it only shows the caution.
+ * The task pane's entry: `startPane(document)` is called by src/addin.ts once Office is ready. It
+ * wires the pane to Excel.run and to the workbook's document settings; tests and other hosts call
+ * {@link createPane} with their own.
  */
+import { type PaneHost, createPane } from './pane';
+import type { SettingsStore } from './persist';
+import type { RunBatch } from './resultSheets';
+
+export { createPane } from './pane';
+
+/** Excel.run, or a clear failure when the pane is opened outside Excel. */
+const excelRun: RunBatch = (batch) => {
+  if (typeof Excel === 'undefined' || typeof Excel.run !== 'function') {
+    return Promise.reject(new Error('Excel is not available here: open the pane from the Sunpane button in Excel.'));
+  }
+  return Excel.run(batch);
+};
+
+function documentSettings(): SettingsStore | undefined {
+  if (typeof Office === 'undefined') return undefined;
+  return Office.context?.document?.settings as unknown as SettingsStore | undefined;
+}
+
+/** Builds the pane into the page's #sunpane-root. */
 export function startPane(doc: Document): void {
-  const root = doc.getElementById('sunpane-root');
-  if (root) root.textContent = 'Sunpane results are estimates by published methods; design decisions need a qualified engineer and the local energy code.';
+  const host: PaneHost = { run: excelRun, settings: documentSettings() };
+  createPane(doc, host);
 }

@@ -146,13 +146,18 @@
       this._queue = [];
       var payload = JSON.stringify(queue.map(function (q) { return { op: q.op, target: q.target, args: q.args }; }));
       var bytes = payload.length;
-      var record = { bytes: bytes, ops: queue.length, names: queue.map(function (q) { return q.op; }) };
-      state.syncs.push(record);
+      var syncRecord = {
+        bytes: bytes,
+        ops: queue.length,
+        names: queue.map(function (q) { return q.op; }),
+        valueRows: queue.filter(function (q) { return q.op === 'range.values'; }).map(function (q) { return Array.isArray(q.args[0]) ? q.args[0].length : 1; }),
+      };
+      state.syncs.push(syncRecord);
       var delay = state.syncDelayMs;
       return new Promise(function (resolve, reject) {
         setTimeout(function () {
           if (bytes > state.requestLimitBytes) {
-            record.refused = true;
+            syncRecord.refused = true;
             reject(HostError('RequestPayloadSizeLimitExceeded', 'The request payload size (' + bytes + ' bytes) has exceeded the limit'));
             return;
           }

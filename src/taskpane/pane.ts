@@ -1,0 +1,389 @@
+/**
+ * The pane's controller: builds the tabs (window, schedule, options, sun path), keeps the form in
+ * the workbook's settings, and runs the actions — each builds WindowSpecs, calls the core through
+ * engine.ts and writes to a new sheet through the Excel request context it is given.
+ */
+import { SunpaneError } from '../core/errors';
+import type { WindowSpec } from '../core/window';
+import { COMPARE_FORMATS, COMPARE_HEADER, MAX_OPTIONS, OPTION_FIELDS, type ShadingOption, comparisonRows, optionSpecs } from './compare';
+import { makeReplaceDialog } from './dialog';
+import { byId, h, show } from './dom';
+import { type YearResult, runYear, validateSpec } from './engine';
+import { FIELD_BY_ID, type FormValues, applyExampleSite } from './fields';
+import { applyVisibility, fillForm, readForm, renderForm, showProblems } from './formView';
+import { PaneStore, type SettingsStore } from './persist';
+import { type AskReplace, type RunBatch, RunCancelled, planSheet, sheetNamesOf } from './resultSheets';
+import { SCHEDULE_HELP, SUMMARY_FORMATS, SUMMARY_HEADER, readSchedule, summaryRow } from './schedule';
+import { readNamedTable, readSheetData } from './sheetData';
+import { type SheetData, buildWindowSpec, findProblems, isClean } from './spec';
+import { drawSunPath } from './sunPathView';
+import { writeSmallTableSheet } from './tableSheet';
+import { writeYearSheet } from './yearSheet';
+
+/** The caution shown in the pane and on every result sheet. */
+export const CAUTION = 'Results are estimates by published methods; design decisions need a qualified engineer and the local energy code.';
+
+/** What the pane needs from its host. */
+export interface PaneHost {
+  run: RunBatch;
+  settings?: SettingsStore;
+}
+
+const TABS = [
+  { id: 'window', title: 'Window' },
+  { id: 'schedule', title: 'Schedule' },
+  { id: 'options', title: 'Options' },
+  { id: 'sunpath', title: 'Sun path' },
+] as const;
+
+function weatherText(spec: WindowSpec): string {
+  switch (spec.weather.kind) {
+    case 'ineichenClearSky':
+      return `clear sky (Ineichen–Perez), Linke turbidity ${spec.weather.linkeTurbidity.join(', ')}`;
+    case 'ashraeClearSky':
+      return `clear sky (ASHRAE), τb ${spec.weather.tauB.join(', ')}, τd ${spec.weather.tauD.join(', ')}`;
+    case 'measured':
+      return 'hourly direct normal + diffuse horizontal from the workbook';
+    default:
+      return 'hourly global horizontal from the workbook, split by Erbs et al. (1982)';
+  }
+}
+
+/** The description lines above a result. */
+export function describeSpec(spec: WindowSpec): string[] {
+  const s = spec.site;
+  const off = s.utcOffset >= 0 ? `+${s.utcOffset}` : String(s.utcOffset);
+  return [
+    `${spec.name}: faces ${spec.surfaceAzimuth}°, tilt ${spec.surfaceTilt}°, opening ${spec.width} × ${spec.height} m, frame share ${spec.frameFraction}, SHGC ${spec.glazing.shgc}${spec.glazing.angleTable ? ' (angle table)' : `, ${spec.glazing.panes} panes`}`,
+    `Latitude ${s.latitude}°, longitude ${s.longitude}°, UTC${off} h, year ${spec.year}; ${weatherText(spec)}; sky model ${spec.skyModel}; ground reflectance ${spec.groundAlbedo}. Rows are hour-ending, local standard time, sun at mid-hour.`,
+    CAUTION,
+  ];
+}
+
+/** Builds the pane into `doc` and wires it to `host`. */
+export function createPane(doc: Document, host: PaneHost): void {
+  const root = byId(doc, 'sunpane-root');
+  root.textContent = '';
+  const store = new PaneStore(host.settings);
+  const state = store.state;
+
+  // ---- frame --------------------------------------------------------------------------------
+  root.append(
+    h(doc, 'header', { className: 'brand' }, h(doc, 'span', { className: 'mark', 'aria-hidden': 'true' }), h(doc, 'div', {}, h(doc, 'h1', {}, 'Sunpane'), h(doc, 'p', {}, 'Sun and shade on a window, hour by hour'))),
+    h(doc, 'p', { className: 'caution', id: 'caution', role: 'note' }, CAUTION),
+  );
+  const tablist = h(doc, 'div', { role: 'tablist', className: 'tabs', 'aria-label': 'Pane sections' });
+  root.append(tablist);
+  const panels: Record<string, HTMLElement> = {};
+  for (const t of TABS) {
+    const b = h(doc, 'button', { type: 'button', role: 'tab', id: `tab-${t.id}`, 'aria-controls': `panel-${t.id}` }, t.title);
+    b.addEventListener('click', () => selectTab(t.id));
+    b.addEventListener('keydown', (e) => {
+      const i = TABS.findIndex((x) => x.id === t.id);
+      if (e.key === 'ArrowRight' || e.key === 'ArrowLeft') {
+        const next = TABS[(i + (e.key === 'ArrowRight' ? 1 : TABS.length - 1)) % TABS.length];
+        selectTab(next.id);
+        byId(doc, `tab-${next.id}`).focus();
+      }
+    });
+    tablist.append(b);
+    panels[t.id] = h(doc, 'section', { role: 'tabpanel', id: `panel-${t.id}`, 'aria-labelledby': `tab-${t.id}` });
+    root.append(panels[t.id]);
+  }
+  const progress = h(doc, 'div', { id: 'progress', className: 'progress' },
+    h(doc, 'label', { for: 'progress-bar', id: 'progress-text' }, 'Working…'),
+    h(doc, 'progress', { id: 'progress-bar', max: 1, value: 0 }),
+    h(doc, 'button', { type: 'button', id: 'cancel' }, 'Cancel'));
+  progress.hidden = true;
+  const status = h(doc, 'div', { id: 'status', className: 'status', role: 'status', 'aria-live': 'polite' });
+  root.append(progress, status);
+  const askReplace: AskReplace = makeReplaceDialog(doc, root);
+
+  function selectTab(id: string): void {
+    for (const t of TABS) {
+      const on = t.id === id;
+      const b = byId(doc, `tab-${t.id}`);
+      b.setAttribute('aria-selected', String(on));
+      b.tabIndex = on ? 0 : -1;
+      panels[t.id].hidden = !on;
+    }
+    if (id === 'sunpath') void redrawSunPath();
+  }
+
+  // ---- window form ---------------------------------------------------------------------------
+  const formPanel = panels.window;
+  const form = h(doc, 'form', { id: 'window-form', novalidate: true });
+  renderForm(doc, form, state.form);
+  const formGeneral = h(doc, 'div', { className: 'msg general', id: 'form-msg', role: 'alert' });
+  const runYearButton = h(doc, 'button', { type: 'button', id: 'run-year', className: 'primary' }, 'Write hourly year to a new sheet');
+  formPanel.append(form, formGeneral, h(doc, 'div', { className: 'actions' }, runYearButton));
+  applyVisibility(doc, state.form);
+
+  let checkTimer: ReturnType<typeof setTimeout> | undefined;
+  form.addEventListener('input', (e) => onFormEdit(e.target as HTMLElement));
+  form.addEventListener('change', (e) => onFormEdit(e.target as HTMLElement));
+  form.addEventListener('submit', (e) => e.preventDefault());
+  function onFormEdit(target: HTMLElement): void {
+    if (target.id === 'examplePlace') {
+      const v = applyExampleSite(readForm(doc), (target as HTMLSelectElement).value);
+      fillForm(doc, v);
+    }
+    state.form = readForm(doc);
+    applyVisibility(doc, state.form);
+    store.saveSoon();
+    if (checkTimer) clearTimeout(checkTimer);
+    checkTimer = setTimeout(checkForm, 250);
+  }
+  function checkForm(): boolean {
+    const problems = findProblems(state.form, validateSpec);
+    showProblems(doc, problems, formGeneral);
+    return isClean(problems);
+  }
+
+  // ---- busy state, progress, cancel ----------------------------------------------------------
+  let cancelRequested = false;
+  byId(doc, 'cancel').addEventListener('click', () => {
+    cancelRequested = true;
+    byId(doc, 'progress-text').textContent = 'Stopping after this block…';
+  });
+  const actionButtons = () => Array.from(root.querySelectorAll<HTMLButtonElement>('button.primary[data-action], #run-year, #run-schedule, #run-compare'));
+  function setBusy(busy: boolean, text = 'Working…'): void {
+    cancelRequested = false;
+    progress.hidden = !busy;
+    byId(doc, 'progress-text').textContent = text;
+    (byId(doc, 'progress-bar') as HTMLProgressElement).value = 0;
+    for (const b of actionButtons()) b.disabled = busy;
+  }
+  function setProgress(done: number, total: number, text: string): void {
+    (byId(doc, 'progress-bar') as HTMLProgressElement).value = total > 0 ? done / total : 0;
+    if (!cancelRequested) byId(doc, 'progress-text').textContent = text;
+  }
+  function say(text: string, kind: 'ok' | 'error' | 'info' = 'info'): void {
+    status.textContent = text;
+    status.className = `status ${kind}`;
+  }
+  /** Lets the pane repaint between long steps. */
+  const breathe = () => new Promise<void>((r) => setTimeout(r, 0));
+
+  async function withSheetData(values: FormValues): Promise<{ spec: WindowSpec; data: SheetData } | undefined> {
+    if (!checkForm()) {
+      say('Fix the marked boxes on the Window tab first.', 'error');
+      return undefined;
+    }
+    let data: SheetData;
+    try {
+      data = await readSheetData(host.run, values);
+    } catch (err) {
+      if (err instanceof SunpaneError) {
+        showProblems(doc, { byField: fieldMessage(err), general: [] }, formGeneral);
+        say(err.message, 'error');
+        return undefined;
+      }
+      throw err;
+    }
+    const problems = findProblems(values, validateSpec, data);
+    if (!isClean(problems)) {
+      showProblems(doc, problems, formGeneral);
+      say('The ranges the form points at hold values the calculation cannot use: see the marked boxes.', 'error');
+      return undefined;
+    }
+    return { spec: buildWindowSpec(values, data), data };
+  }
+  function fieldMessage(err: SunpaneError): Record<string, string> {
+    for (const [id, f] of FIELD_BY_ID) if ((f.paths ?? []).some((p) => err.argument.startsWith(p))) return { [id]: err.message };
+    return {};
+  }
+  function reportFailure(err: unknown): void {
+    if (err instanceof RunCancelled) say(err.message, 'info');
+    else if (err instanceof SunpaneError) say(err.message, 'error');
+    else say(`Excel refused the request: ${(err as Error)?.message ?? String(err)}`, 'error');
+  }
+
+  runYearButton.addEventListener('click', () => void runYearAction());
+  async function runYearAction(): Promise<void> {
+    state.form = readForm(doc);
+    const ready = await withSheetData(state.form);
+    if (!ready) return;
+    setBusy(true, 'Working out the year…');
+    try {
+      await breathe();
+      const result: YearResult = runYear(ready.spec);
+      const plan = await planSheet(`${ready.spec.name} hourly`, await sheetNamesOf(host.run), store, askReplace);
+      const name = await writeYearSheet(host.run, plan, { title: `Sunpane hourly solar gain: ${ready.spec.name}`, lines: describeSpec(ready.spec) }, result.series, result.figures, {
+        onProgress: (done, total) => setProgress(done, total, `Writing rows: ${done} of ${total}`),
+        cancelled: () => cancelRequested,
+      });
+      store.remember(name);
+      say(`Wrote "${name}": ${result.figures.annualKWh.toFixed(0)} kWh in the year, peak ${result.figures.peakW.toFixed(0)} W.`, 'ok');
+    } catch (err) {
+      reportFailure(err);
+    } finally {
+      setBusy(false);
+    }
+  }
+
+  // ---- schedule ------------------------------------------------------------------------------
+  const sched = panels.schedule;
+  const tableInput = h(doc, 'input', { id: 'schedule-table', type: 'text', autocomplete: 'off', spellcheck: 'false' });
+  tableInput.value = state.scheduleTable;
+  tableInput.addEventListener('input', () => {
+    state.scheduleTable = tableInput.value;
+    store.saveSoon();
+  });
+  const schedButton = h(doc, 'button', { type: 'button', id: 'run-schedule', className: 'primary' }, 'Run every window in the table');
+  const schedProblems = h(doc, 'ul', { id: 'schedule-problems', className: 'problems', role: 'alert' });
+  sched.append(
+    h(doc, 'p', { className: 'help', id: 'schedule-help' }, SCHEDULE_HELP),
+    h(doc, 'p', { className: 'help' }, 'Place, glass model, sky, weather and year come from the Window tab unless the row gives them.'),
+    h(doc, 'div', { className: 'field' }, h(doc, 'label', { for: 'schedule-table' }, 'Excel table name'), tableInput),
+    h(doc, 'div', { className: 'actions' }, schedButton),
+    schedProblems,
+  );
+  schedButton.addEventListener('click', () => void runScheduleAction());
+  async function runScheduleAction(): Promise<void> {
+    schedProblems.textContent = '';
+    state.form = readForm(doc);
+    let table;
+    try {
+      table = await readNamedTable(host.run, tableInput.value);
+    } catch (err) {
+      reportFailure(err);
+      return;
+    }
+    const ready = await withSheetData(state.form);
+    if (!ready) return;
+    const { rows, problems } = readSchedule(table, state.form, validateSpec, ready.data);
+    if (problems.length) {
+      for (const p of problems) schedProblems.append(h(doc, 'li', {}, p.message));
+      say(`The schedule has ${problems.length} problem${problems.length > 1 ? 's' : ''}; nothing was written.`, 'error');
+      return;
+    }
+    setBusy(true, 'Working out the windows…');
+    try {
+      const out: (number | string)[][] = [];
+      for (const [i, r] of rows.entries()) {
+        if (cancelRequested) throw new RunCancelled();
+        setProgress(i, rows.length, `Window ${i + 1} of ${rows.length}: ${r.spec.name}`);
+        await breathe();
+        out.push(summaryRow(r.spec, runYear(r.spec).figures));
+      }
+      const plan = await planSheet('Schedule results', await sheetNamesOf(host.run), store, askReplace);
+      const name = await writeSmallTableSheet(host.run, plan, {
+        title: `Sunpane window schedule: ${rows.length} windows, year ${rows[0].spec.year}`,
+        lines: [`From table "${tableInput.value.trim()}"; ${weatherText(rows[0].spec)}.`, CAUTION],
+        header: SUMMARY_HEADER,
+        rows: out,
+        formats: SUMMARY_FORMATS,
+        chartColumn: 3,
+        chartTitle: 'Solar gain by window (kWh/yr)',
+      });
+      store.remember(name);
+      say(`Wrote "${name}" with ${rows.length} windows.`, 'ok');
+    } catch (err) {
+      reportFailure(err);
+    } finally {
+      setBusy(false);
+    }
+  }
+
+  // ---- options -------------------------------------------------------------------------------
+  const opts = panels.options;
+  const optTable = h(doc, 'table', { id: 'options-table', className: 'options' });
+  const addOption = h(doc, 'button', { type: 'button', id: 'add-option' }, 'Add option');
+  const compareButton = h(doc, 'button', { type: 'button', id: 'run-compare', className: 'primary' }, 'Compare on a new sheet');
+  const optMsg = h(doc, 'div', { id: 'options-msg', className: 'msg general', role: 'alert' });
+  opts.append(
+    h(doc, 'p', { className: 'help' }, `The window on the Window tab with up to ${MAX_OPTIONS} sets of outside shading, each against the same window with none (a skyline stays: it is the surroundings). Depths in m; 0 or blank = no such device; the reach is past each jamb.`),
+    h(doc, 'div', { className: 'table-scroll' }, optTable),
+    optMsg,
+    h(doc, 'div', { className: 'actions' }, addOption, compareButton),
+  );
+  function renderOptions(): void {
+    optTable.textContent = '';
+    optTable.append(h(doc, 'thead', {}, h(doc, 'tr', {}, ...OPTION_FIELDS.map((c) => h(doc, 'th', { scope: 'col' }, c.title)), h(doc, 'th', { scope: 'col' }, ''))));
+    const body = h(doc, 'tbody');
+    state.options.forEach((o, i) => {
+      const tr = h(doc, 'tr');
+      for (const c of OPTION_FIELDS) {
+        const id = `opt-${i}-${c.key}`;
+        const input = h(doc, 'input', { id, type: 'text', autocomplete: 'off', className: c.key === 'label' ? 'wide' : 'narrow' });
+        input.value = o[c.key];
+        input.addEventListener('input', () => {
+          state.options[i] = { ...state.options[i], [c.key]: input.value };
+          store.saveSoon();
+        });
+        tr.append(h(doc, 'td', {}, h(doc, 'label', { for: id, className: 'sr-only' }, `${c.title}, option ${i + 1}`), input));
+      }
+      const remove = h(doc, 'button', { type: 'button', className: 'link', id: `opt-${i}-remove`, 'aria-label': `Remove option ${i + 1}` }, 'Remove');
+      remove.addEventListener('click', () => {
+        state.options.splice(i, 1);
+        store.saveSoon();
+        renderOptions();
+      });
+      tr.append(h(doc, 'td', {}, remove));
+      body.append(tr);
+    });
+    optTable.append(body);
+    addOption.disabled = state.options.length >= MAX_OPTIONS;
+  }
+  renderOptions();
+  addOption.addEventListener('click', () => {
+    if (state.options.length >= MAX_OPTIONS) return;
+    state.options.push({ label: `Option ${state.options.length + 1}`, overhangDepth: '0', overhangGap: '0', overhangReach: '0', leftFinDepth: '0', rightFinDepth: '0', finGap: '0', setBack: '0' } as ShadingOption);
+    store.saveSoon();
+    renderOptions();
+  });
+  compareButton.addEventListener('click', () => void runCompareAction());
+  async function runCompareAction(): Promise<void> {
+    optMsg.textContent = '';
+    state.form = readForm(doc);
+    const ready = await withSheetData(state.form);
+    if (!ready) return;
+    let specs;
+    try {
+      specs = optionSpecs(ready.spec, state.options, validateSpec);
+    } catch (err) {
+      if (err instanceof SunpaneError) {
+        optMsg.textContent = err.message;
+        say('An option has a value the calculation cannot use; nothing was written.', 'error');
+        return;
+      }
+      throw err;
+    }
+    setBusy(true, 'Working out the options…');
+    try {
+      const results = [];
+      for (const [i, o] of specs.entries()) {
+        if (cancelRequested) throw new RunCancelled();
+        setProgress(i, specs.length, `Option ${i} of ${specs.length - 1}: ${o.label}`);
+        await breathe();
+        results.push({ label: o.label, figures: runYear(o.spec).figures });
+      }
+      const plan = await planSheet(`${ready.spec.name} options`, await sheetNamesOf(host.run), store, askReplace);
+      const name = await writeSmallTableSheet(host.run, plan, {
+        title: `Sunpane shading options: ${ready.spec.name}`,
+        lines: [...describeSpec(ready.spec).slice(0, 2), 'Cut = 1 − annual gain ÷ annual gain with no outside shading. Shaded share = 1 − mean glass-in-sun share over the hours the sun is in front of the wall.', CAUTION],
+        header: COMPARE_HEADER,
+        rows: comparisonRows(results),
+        formats: COMPARE_FORMATS,
+        chartColumn: 1,
+        chartTitle: 'Solar gain by shading option (kWh/yr)',
+      });
+      store.remember(name);
+      say(`Wrote "${name}" comparing ${specs.length - 1} options.`, 'ok');
+    } catch (err) {
+      reportFailure(err);
+    } finally {
+      setBusy(false);
+    }
+  }
+
+  // ---- sun path ------------------------------------------------------------------------------
+  const redrawSunPath = drawSunPath(doc, panels.sunpath, () => {
+    state.form = readForm(doc);
+    return state.form;
+  }, validateSpec, host.run);
+
+  selectTab('window');
+  checkForm();
+}

@@ -1,0 +1,94 @@
+/**
+ * The sun-path tab: draws the diagram for the window on the Window tab, with the shading mask of
+ * the whole glass or of one chosen point of it.
+ */
+import { SunpaneError } from '../core/errors';
+import { byId, h } from './dom';
+import { shadingMask, sunTracks } from './engine';
+import type { FormValues } from './fields';
+import type { RunBatch } from './resultSheets';
+import { readSheetData } from './sheetData';
+import { type SpecValidator, buildWindowSpec, findProblems, isClean, readNumberText } from './spec';
+import { sunPathSvg } from './sunPathSvg';
+
+/** Days whose tracks are drawn: the 21st of June, March (≈ September) and December. */
+export const TRACK_DAYS: readonly (readonly [number, number])[] = [
+  [6, 21],
+  [3, 21],
+  [12, 21],
+];
+const TRACK_LABELS = ['21 Jun', '21 Mar ≈ 23 Sep', '21 Dec'];
+
+/** Builds the tab into `panel`; returns the function that (re)draws it. */
+export function drawSunPath(doc: Document, panel: HTMLElement, getForm: () => FormValues, validate: SpecValidator, run?: RunBatch): () => Promise<void> {
+  const whole = h(doc, 'input', { type: 'radio', name: 'mask-of', id: 'mask-whole', value: 'whole', checked: true });
+  const point = h(doc, 'input', { type: 'radio', name: 'mask-of', id: 'mask-point', value: 'point' });
+  const px = h(doc, 'input', { type: 'text', id: 'mask-x', autocomplete: 'off', inputmode: 'decimal', 'aria-describedby': 'mask-x-msg' });
+  const py = h(doc, 'input', { type: 'text', id: 'mask-y', autocomplete: 'off', inputmode: 'decimal', 'aria-describedby': 'mask-y-msg' });
+  const drawButton = h(doc, 'button', { type: 'button', id: 'draw-sun-path' }, 'Redraw');
+  const figure = h(doc, 'div', { id: 'sun-path', className: 'sun-path-box' });
+  const msg = h(doc, 'div', { id: 'sun-path-msg', className: 'msg general', role: 'alert' });
+  panel.append(
+    h(doc, 'fieldset', { className: 'inline' },
+      h(doc, 'legend', {}, 'Shading mask of'),
+      h(doc, 'div', { className: 'radio' }, whole, h(doc, 'label', { for: 'mask-whole' }, 'the whole glass')),
+      h(doc, 'div', { className: 'radio' }, point, h(doc, 'label', { for: 'mask-point' }, 'one point of the glass')),
+      h(doc, 'div', { className: 'field small' }, h(doc, 'label', { for: 'mask-x' }, 'from left jamb (m, blank = middle)'), px, h(doc, 'div', { className: 'msg', id: 'mask-x-msg' })),
+      h(doc, 'div', { className: 'field small' }, h(doc, 'label', { for: 'mask-y' }, 'above sill (m, blank = middle)'), py, h(doc, 'div', { className: 'msg', id: 'mask-y-msg' })),
+      drawButton),
+    figure,
+    msg,
+    h(doc, 'p', { className: 'help' }, 'Centre = sun overhead, rim = horizon, north up. Dots mark whole hours of local standard time. The mask shows, for the sun in each part of the sky, how much of the glass (or the chosen point) is shaded by the overhang, fins and set-back; the skyline is drawn in green.'),
+  );
+
+  async function redraw(): Promise<void> {
+    const values = getForm();
+    msg.textContent = '';
+    byId(doc, 'mask-x-msg').textContent = '';
+    byId(doc, 'mask-y-msg').textContent = '';
+    // The drawing needs the window and the skyline, not the weather or glass tables.
+    const geometryOnly: FormValues = { ...values, weatherSource: 'ineichenClearSky', linkeTurbidity: '3', glassModel: 'physical' };
+    if (!isClean(findProblems(geometryOnly, validate))) {
+      msg.textContent = 'Fix the marked boxes on the Window tab to draw the sun path.';
+      figure.textContent = '';
+      return;
+    }
+    let data = {};
+    if (run && (values.skylineAddress ?? '').trim() !== '') {
+      try {
+        data = await readSheetData(run, geometryOnly);
+      } catch (err) {
+        msg.textContent = err instanceof SunpaneError ? err.message : String(err);
+      }
+    }
+    const spec = buildWindowSpec(geometryOnly, data);
+    let at: { x: number; y: number } | undefined;
+    if (point.checked) {
+      const x = (px.value ?? '').trim() === '' ? spec.width / 2 : (readNumberText(px.value) as number);
+      const y = (py.value ?? '').trim() === '' ? spec.height / 2 : (readNumberText(py.value) as number);
+      at = { x, y };
+    }
+    try {
+      const mask = shadingMask(spec, at);
+      const tracks = sunTracks(spec, TRACK_DAYS);
+      const where = at ? `point ${at.x} m from the left jamb, ${at.y} m above the sill` : 'whole glass';
+      figure.innerHTML = sunPathSvg({
+        tracks,
+        trackLabels: TRACK_LABELS,
+        mask,
+        surfaceAzimuth: spec.surfaceAzimuth,
+        skyline: spec.shading.skyline,
+        caption: `${spec.name}, facing ${spec.surfaceAzimuth}°, latitude ${spec.site.latitude}°, ${spec.year}; mask of the ${where}`,
+      });
+    } catch (err) {
+      if (!(err instanceof SunpaneError)) throw err;
+      const box = err.argument === 'x' ? 'mask-x-msg' : err.argument === 'y' ? 'mask-y-msg' : undefined;
+      if (box) byId(doc, box).textContent = err.message;
+      else msg.textContent = err.message;
+    }
+  }
+  drawButton.addEventListener('click', () => void redraw());
+  whole.addEventListener('change', () => void redraw());
+  point.addEventListener('change', () => void redraw());
+  return redraw;
+}

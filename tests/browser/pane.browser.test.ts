@@ -1,0 +1,460 @@
+/**
+ * The task pane, built (dist/taskpane.html from `npm run build`), in headless Chromium, with
+ * office.js replaced by our fake Excel host (tests/browser/excel-host.js: records every call,
+ * refuses requests over 5 MB and bad sheet names).
+ *
+ * Expected numbers come from the calculation core run here in node on a WindowSpec written out in
+ * this file (not built by the pane's code), so the checks are of the pane's plumbing: what it asks
+ * the core and what it writes. Screenshots go to test-artifacts/.
+ */
+import * as fs from 'node:fs';
+import * as path from 'node:path';
+import type { Browser, Page } from 'playwright-core';
+import { annualSeries } from '../../src/core/annual';
+import { summarizeAnnual } from '../../src/core/annualSummary';
+import { SunpaneError } from '../../src/core/errors';
+import type { WindowSpec } from '../../src/core/window';
+import { validateWindowSpec } from '../../src/core/windowSpec';
+import { EXAMPLE_SITES } from '../../src/demo/sites';
+import { launchBrowser, openAddinPage } from './chromium';
+
+const HOST_JS = fs.readFileSync(path.join(__dirname, 'excel-host.js'), 'utf8');
+const ARTIFACTS = path.resolve(__dirname, '../../test-artifacts');
+const YEAR = 2025;
+
+type Cell = string | number | boolean;
+
+let browser: Browser;
+
+beforeAll(async () => {
+  fs.mkdirSync(ARTIFACTS, { recursive: true });
+  browser = await launchBrowser();
+});
+
+afterAll(async () => {
+  await browser?.close();
+});
+
+async function openPane(settings?: unknown): Promise<Page> {
+  const preset = settings ? `window.__excelHostOptions = ${JSON.stringify({ settings })};\n` : '';
+  const page = await openAddinPage(browser, preset + HOST_JS);
+  await page.setViewportSize({ width: 420, height: 900 });
+  await page.waitForSelector('#run-year');
+  return page;
+}
+
+async function setField(page: Page, id: string, value: string): Promise<void> {
+  await page.fill(`#${id}`, value);
+}
+
+async function waitForStatus(page: Page, pattern: RegExp): Promise<string> {
+  await page.waitForFunction((src) => new RegExp(src).test(document.getElementById('status')?.textContent ?? ''), pattern.source, { timeout: 90_000 });
+  return (await page.textContent('#status')) ?? '';
+}
+
+const host = {
+  sheetNames: (page: Page) => page.evaluate(() => (window as never as { __excelHost: { sheetNames(): string[] } }).__excelHost.sheetNames()),
+  read: (page: Page, sheet: string, address: string) =>
+    page.evaluate(([s, a]) => (window as never as { __excelHost: { read(s: string, a: string): Cell[][] } }).__excelHost.read(s, a), [sheet, address] as const),
+  eval: <T>(page: Page, fn: string) => page.evaluate(`(function (host) { return ${fn}; })(window.__excelHost)`) as Promise<T>,
+};
+
+/** The demo window: an invented west-facing window at the "Salt Reach (example)" site with an overhang and a right fin. */
+const SALT = EXAMPLE_SITES.find((s) => s.id === 'saltReach')!;
+const DEMO: WindowSpec = {
+  name: 'Demo west',
+  site: { latitude: SALT.site.latitude, longitude: SALT.site.longitude, utcOffset: SALT.site.utcOffset, elevation: SALT.site.elevation },
+  surfaceAzimuth: 250,
+  surfaceTilt: 90,
+  width: 2.4,
+  height: 1.6,
+  frameFraction: 0.15,
+  glazing: { shgc: 0.4, panes: 2, interiorAttenuation: 1 },
+  shading: {
+    overhang: { projection: 0.8, gap: 0.3, extensionLeft: 0.4, extensionRight: 0.4 },
+    rightFin: { projection: 0.5, gap: 0.1, extensionAbove: 0, extensionBelow: 0 },
+  },
+  groundAlbedo: SALT.groundAlbedo,
+  skyModel: 'perez1990',
+  weather: { kind: 'ineichenClearSky', linkeTurbidity: [...SALT.linkeTurbidity] },
+  year: YEAR,
+};
+
+async function enterDemoWindow(page: Page): Promise<void> {
+  await page.selectOption('#examplePlace', 'saltReach');
+  await setField(page, 'windowName', 'Demo west');
+  await setField(page, 'surfaceAzimuth', '250');
+  await setField(page, 'width', '2.4');
+  await setField(page, 'height', '1.6');
+  await setField(page, 'overhangProjection', '0.8');
+  await setField(page, 'overhangGap', '0.3');
+  await setField(page, 'overhangExtensionLeft', '0.4');
+  await setField(page, 'overhangExtensionRight', '0.4');
+  await setField(page, 'rightFinProjection', '0.5');
+  await setField(page, 'rightFinGap', '0.1');
+  await setField(page, 'year', String(YEAR));
+}
+
+describe('the task pane in Chromium with a fake Excel host', () => {
+  test('the pane shows the caution, and every box and button can be reached by keyboard and has a label', async () => {
+    const page = await openPane();
+    expect(await page.textContent('#caution')).toBe('Results are estimates by published methods; design decisions need a qualified engineer and the local energy code.');
+    const unlabelled = await page.evaluate(() =>
+      Array.from(document.querySelectorAll('input, select')).filter((el) => !document.querySelector(`label[for="${el.id}"]`)).map((el) => el.id || el.outerHTML),
+    );
+    expect(unlabelled).toEqual([]);
+    const unreachable = await page.evaluate(() => Array.from(document.querySelectorAll<HTMLElement>('#panel-window input, #panel-window select, #panel-window button')).filter((el) => el.tabIndex < 0).length);
+    expect(unreachable).toBe(0);
+    await page.screenshot({ path: path.join(ARTIFACTS, 'pane-window.png'), fullPage: true });
+    await page.close();
+  });
+
+  test("the demo window's year is written to a new sheet in blocks under 5 MB, and matches the core", async () => {
+    const page = await openPane();
+    await enterDemoWindow(page);
+    await page.click('#run-year');
+    const status = await waitForStatus(page, /Wrote|refused|Fix|Stopped/);
+    expect(status).toMatch(/^Wrote "Demo west hourly"/);
+
+    const series = annualSeries(DEMO);
+    const summary = summarizeAnnual(series);
+    expect(series.hours).toBe(8760);
+
+    // Header row 5, hourly rows 6…8765 (columns A…N).
+    const header = await host.read(page, 'Demo west hourly', 'A5:N5');
+    expect(header[0][0]).toBe('Hour ending (local standard time)');
+    expect(header[0][12]).toBe('Solar gain W');
+    const rows = await host.read(page, 'Demo west hourly', 'A6:N8765');
+    expect(rows).toHaveLength(8760);
+    expect(await host.read(page, 'Demo west hourly', 'A8766:A8766')).toEqual([['']]);
+    for (const i of [0, 11, 2000, 4380 + 15, 5000, 8759]) {
+      expect(rows[i][0] as number).toBeCloseTo(series.stampSerial[i], 5);
+      expect(rows[i][1] as number).toBeCloseTo(series.sunAltitude[i], 2);
+      expect(rows[i][2] as number).toBeCloseTo(series.sunAzimuth[i], 2);
+      expect(rows[i][5] as number).toBeCloseTo(series.sunlitFraction[i], 3);
+      expect(rows[i][6] as number).toBeCloseTo(series.dni[i], 1);
+      expect(rows[i][11] as number).toBeCloseTo(series.shgc[i], 3);
+      expect(Math.abs((rows[i][12] as number) - series.gain[i])).toBeLessThanOrEqual(0.05 + 1e-9);
+    }
+    // An afternoon hour with the sun on this west window is partly shaded by the overhang.
+    const afternoon = rows.findIndex((r) => (r[5] as number) > 0 && (r[5] as number) < 1);
+    expect(afternoon).toBeGreaterThan(-1);
+
+    // Monthly summary in P5:R18 (year row 18), in kWh; the gain column adds up to the same year.
+    const monthly = await host.read(page, 'Demo west hourly', 'P5:R18');
+    expect(monthly[0]).toEqual(['Month', 'Solar gain kWh', 'kWh per m² of glass']);
+    expect(monthly[13][0]).toBe('Year');
+    expect(Math.abs((monthly[13][1] as number) - summary.annualKWh)).toBeLessThanOrEqual(0.005);
+    for (let m = 0; m < 12; m++) expect(Math.abs((monthly[m + 1][1] as number) - summary.monthlyKWh[m])).toBeLessThanOrEqual(0.005);
+    const columnSum = rows.reduce((s, r) => s + (r[12] as number), 0) / 1000;
+    expect(Math.abs(columnSum - summary.annualKWh)).toBeLessThan(0.5);
+    const peak = await host.read(page, 'Demo west hourly', 'P20:Q21');
+    expect(Math.abs((peak[0][1] as number) - summary.peakW)).toBeLessThanOrEqual(0.05);
+    expect(peak[1][1] as number).toBeCloseTo(summary.peakStamp, 5);
+
+    // Heat map: day × hour of the gain, rows = days.
+    const heat = await host.read(page, 'Demo west hourly', 'V6:AT6');
+    expect(heat[0][0] as number).toBe(Math.floor(series.stampSerial[0]));
+    expect(Math.abs((heat[0][16] as number) - series.gain[15])).toBeLessThanOrEqual(0.5);
+
+    // The host's record: blocks of ≤ 2,000 rows, each request under 5 MB, a table, a chart, a colour scale, frozen header.
+    const syncs = await host.eval<{ bytes: number; valueRows: number[]; refused?: boolean }[]>(page, 'host.state.syncs');
+    expect(syncs.every((s) => !s.refused && s.bytes < 5 * 1024 * 1024)).toBe(true);
+    const blockRows = syncs.flatMap((s) => s.valueRows).filter((n) => n >= 1000);
+    expect(blockRows.reduce((a, b) => a + b, 0)).toBe(8760);
+    expect(Math.max(...blockRows)).toBeLessThanOrEqual(2000);
+    const tables = await host.eval<{ name: string; sheet: string; address: string }[]>(page, 'host.tables()');
+    expect(tables).toContainEqual(expect.objectContaining({ sheet: 'Demo west hourly', address: 'A5:N8765' }));
+    const charts = await host.eval<{ type: string; source: string }[]>(page, 'host.charts("Demo west hourly")');
+    expect(charts).toHaveLength(1);
+    const cfs = await host.eval<{ type: string; criteria: { minimum: { color: string } } }[]>(page, 'host.conditionalFormats("Demo west hourly")');
+    expect(cfs[0].type).toBe('ColorScale');
+    expect(cfs[0].criteria.minimum.color).toBe('#F7F3E8');
+    expect(await host.eval<number>(page, 'host.sheet("Demo west hourly").frozenRows')).toBe(5);
+    const calls = await host.eval<{ op: string }[]>(page, 'host.state.calls');
+    expect(calls.some((c) => c.op === 'suspendApiCalculationUntilNextSync')).toBe(true);
+    await page.close();
+  });
+
+  test('an earlier result sheet is never overwritten without asking, and a user sheet of the same name is left alone', async () => {
+    const page = await openPane();
+    await setField(page, 'year', String(YEAR));
+    await page.evaluate(() => (window as never as { __excelHost: { addUserSheet(n: string, v: unknown[][]): void } }).__excelHost.addUserSheet('Window A hourly', [['my own notes', 42]]));
+    const before = await host.eval<string>(page, 'host.snapshot("Window A hourly")');
+
+    await page.click('#run-year');
+    await waitForStatus(page, /^Wrote/);
+    // The user's sheet kept its name and cells; ours got a free variant, remembered as ours.
+    expect(await host.sheetNames(page)).toEqual(['Window A hourly', 'Window A hourly (2)']);
+    expect(await host.eval<string>(page, 'host.snapshot("Window A hourly")')).toBe(before);
+
+    // Running again proposes "Window A hourly" again — taken by the user's sheet → another free name, no question.
+    await page.click('#run-year');
+    await waitForStatus(page, /Wrote "Window A hourly \(3\)"/);
+    expect(await page.isHidden('#confirm-backdrop')).toBe(true);
+
+    // Rename the window so that its proposed sheet is one of ours: the pane asks first.
+    await setField(page, 'windowName', 'Window A B');
+    await page.click('#run-year');
+    await waitForStatus(page, /Wrote "Window A B hourly"/);
+    await page.click('#run-year');
+    await page.waitForSelector('#confirm-backdrop:not([hidden])');
+    expect(await page.textContent('#confirm-text')).toContain('"Window A B hourly" holds an earlier Sunpane result');
+    await page.screenshot({ path: path.join(ARTIFACTS, 'pane-confirm.png') });
+    await page.click('#confirm-cancel');
+    expect(await waitForStatus(page, /Stopped/)).toBe('Stopped: the earlier result sheet was kept and nothing was written.');
+    const namesAfterCancel = await host.sheetNames(page);
+    expect(namesAfterCancel).toEqual(['Window A hourly', 'Window A hourly (2)', 'Window A hourly (3)', 'Window A B hourly']);
+
+    await page.click('#run-year');
+    await page.waitForSelector('#confirm-backdrop:not([hidden])');
+    await page.click('#confirm-keep');
+    await waitForStatus(page, /Wrote "Window A B hourly \(2\)"/);
+
+    await page.click('#run-year');
+    await page.waitForSelector('#confirm-backdrop:not([hidden])');
+    await page.keyboard.press('Enter'); // focus starts on "Replace it"
+    await waitForStatus(page, /Wrote "Window A B hourly"/);
+    expect((await host.sheetNames(page)).filter((n) => n.startsWith('Window A B'))).toHaveLength(2);
+    await page.close();
+  });
+
+  test('a schedule table runs every window into one summary row each, and a bad table names the row and column and writes nothing', async () => {
+    const page = await openPane();
+    await setField(page, 'year', String(YEAR));
+    await page.evaluate(() => {
+      const h = (window as never as { __excelHost: { addUserSheet(n: string, v: unknown[][]): void; addUserTable(s: string, a: string, n: string): void } }).__excelHost;
+      h.addUserSheet('Windows', [
+        ['Window', 'Faces (°)', 'Width [m]', 'Height [m]', 'SHGC', 'Overhang depth (m)', 'Overhang gap'],
+        ['N1', 0, 1.2, 1.5, 0.4, 0, 0],
+        ['E1', 90, 1.8, 1.5, 0.35, 0.6, 0.2],
+        ['W1', 270, 1.8, 1.5, '', 0.6, 0.2],
+        [], [], [], [], [], [], [],
+        ['Window', 'Faces', 'Width', 'Height', 'SHGC', 'Overhang depth', 'Overhang gap'],
+        ['Bad A', 180, '', 1.5, 0.4, 0, 0],
+        ['Bad B', 180, 1.2, 1.5, 1.4, 0, 0],
+      ]);
+      h.addUserTable('Windows', 'A1:G4', 'WindowList');
+      h.addUserTable('Windows', 'A12:G14', 'BadList');
+    });
+    await page.click('#tab-schedule');
+    expect(await page.textContent('#schedule-help')).toContain('Overhang depth');
+    await page.click('#run-schedule');
+    await waitForStatus(page, /Wrote|problem/);
+    const rows = await host.read(page, 'Schedule results', 'A5:I8');
+    expect(rows[0]).toEqual(['Window', 'Faces °', 'Glass m²', 'Solar gain kWh/yr', 'kWh per m² of glass', 'Peak gain W', 'Peak at (hour ending)', 'Mean glass-in-sun share', 'Hours with missing weather']);
+    expect(rows.slice(1).map((r) => r[0])).toEqual(['N1', 'E1', 'W1']);
+    const east: WindowSpec = {
+      name: 'E1',
+      site: { latitude: 52.2, longitude: 4.9, utcOffset: 1, elevation: 0 },
+      surfaceAzimuth: 90,
+      surfaceTilt: 90,
+      width: 1.8,
+      height: 1.5,
+      frameFraction: 0.15,
+      glazing: { shgc: 0.35, panes: 2, interiorAttenuation: 1 },
+      shading: { overhang: { projection: 0.6, gap: 0.2, extensionLeft: 0, extensionRight: 0 } },
+      groundAlbedo: 0.2,
+      skyModel: 'perez1990',
+      weather: { kind: 'ineichenClearSky', linkeTurbidity: [3] },
+      year: YEAR,
+    };
+    const s = summarizeAnnual(annualSeries(east));
+    expect(Math.abs((rows[2][3] as number) - s.annualKWh)).toBeLessThanOrEqual(0.05);
+    expect(Math.abs((rows[2][5] as number) - s.peakW)).toBeLessThanOrEqual(0.05);
+    // W1 left SHGC blank: the form's 0.4 applies, so it differs from E1 in more than orientation.
+    expect(rows[3][2]).toBeCloseTo(1.8 * 1.5 * 0.85, 3);
+    expect(await host.eval<number>(page, 'host.charts("Schedule results").length')).toBe(1);
+
+    // A table with a blank width and an SHGC of 1.4.
+    const sheetsBefore = await host.sheetNames(page);
+    await page.fill('#schedule-table', 'BadList');
+    await page.click('#run-schedule');
+    await waitForStatus(page, /problem/);
+    const problems = await page.$$eval('#schedule-problems li', (lis) => lis.map((li) => li.textContent));
+    expect(problems).toEqual([
+      'Row 1 (Bad A), column "Width": width = blank is not allowed: must be a number above 0 and up to 1000 m',
+      'Row 2 (Bad B), column "SHGC": glazing.shgc = 1.4 is not allowed: must be a number from 0 to 1',
+    ]);
+    expect(await host.sheetNames(page)).toEqual(sheetsBefore);
+
+    await page.fill('#schedule-table', 'NoSuchTable');
+    await page.click('#run-schedule');
+    expect(await waitForStatus(page, /table/)).toContain('table = "NoSuchTable" is not allowed');
+    await page.close();
+  });
+
+  test('shading options are compared against the unshaded window on a new sheet with a bar chart', async () => {
+    const page = await openPane();
+    await setField(page, 'year', String(YEAR));
+    await page.click('#tab-options');
+    expect(await page.$$eval('#options-table tbody tr', (r) => r.length)).toBe(3);
+    await page.click('#add-option');
+    await page.fill('#opt-3-label', 'Deep set-back');
+    await page.fill('#opt-3-setBack', '0.3');
+    await page.screenshot({ path: path.join(ARTIFACTS, 'pane-options.png'), fullPage: true });
+    await page.click('#run-compare');
+    await waitForStatus(page, /Wrote|refused|Fix|option/);
+    const rows = await host.read(page, 'Window A options', 'A7:E11');
+    expect(rows[0]).toEqual(['Shading option', 'Solar gain kWh/yr', 'Peak gain W', 'Cut vs no shading %', 'Shaded share of sun-on-wall hours']);
+    expect(rows.slice(1).map((r) => r[0])).toEqual(['No outside shading', 'Short overhang', 'Deep overhang', 'Overhang and fins']);
+    const all = await host.read(page, 'Window A options', 'A8:E12');
+    expect(all[4][0]).toBe('Deep set-back');
+    const bare: WindowSpec = {
+      name: 'Window A',
+      site: { latitude: 52.2, longitude: 4.9, utcOffset: 1, elevation: 0 },
+      surfaceAzimuth: 180,
+      surfaceTilt: 90,
+      width: 1.8,
+      height: 1.5,
+      frameFraction: 0.15,
+      glazing: { shgc: 0.4, panes: 2, interiorAttenuation: 1 },
+      shading: {},
+      groundAlbedo: 0.2,
+      skyModel: 'perez1990',
+      weather: { kind: 'ineichenClearSky', linkeTurbidity: [3] },
+      year: YEAR,
+    };
+    const ref = summarizeAnnual(annualSeries(bare));
+    expect(Math.abs((all[0][1] as number) - ref.annualKWh)).toBeLessThanOrEqual(0.05);
+    expect(all[0][3]).toBe(0);
+    const deep = summarizeAnnual(annualSeries({ ...bare, shading: { overhang: { projection: 1.0, gap: 0.2, extensionLeft: 0.5, extensionRight: 0.5 } } }));
+    expect(Math.abs((all[2][1] as number) - deep.annualKWh)).toBeLessThanOrEqual(0.05);
+    expect(all[2][3] as number).toBeCloseTo((1 - deep.annualKWh / ref.annualKWh) * 100, 1);
+    expect(all[2][4] as number).toBeCloseTo(1 - deep.meanSunlitFraction, 3);
+    // A deeper overhang never lets in more than a shorter one of the same gap.
+    expect(all[2][1] as number).toBeLessThan(all[1][1] as number);
+    const charts = await host.eval<{ type: string; title: string }[]>(page, 'host.charts("Window A options")');
+    expect(charts).toEqual([expect.objectContaining({ type: 'BarClustered', title: 'Solar gain by shading option (kWh/yr)' })]);
+
+    // A bad option value is named with the option, and nothing is written.
+    await page.fill('#opt-1-overhangDepth', '-1');
+    const sheets = await host.sheetNames(page);
+    await page.click('#run-compare');
+    await waitForStatus(page, /option/);
+    expect(await page.textContent('#options-msg')).toBe('shading.overhang.projection = -1 is not allowed: must be a number from 0 to 1000 m (option 2 "Deep overhang", column "Overhang depth m")');
+    expect(await host.sheetNames(page)).toEqual(sheets);
+    await page.close();
+  });
+
+  test("bad input shows the core's own message beside the box, and nothing is written", async () => {
+    const page = await openPane();
+    await setField(page, 'shgc', '1.4');
+    await setField(page, 'latitude', 'north');
+    await page.waitForFunction(() => (document.getElementById('shgc-msg')?.textContent ?? '') !== '' && (document.getElementById('latitude-msg')?.textContent ?? '') !== '');
+    const expected = (mutate: (s: WindowSpec) => void): string => {
+      const spec: WindowSpec = JSON.parse(JSON.stringify(DEMO));
+      mutate(spec);
+      try {
+        validateWindowSpec(spec);
+      } catch (err) {
+        if (err instanceof SunpaneError) return err.message;
+      }
+      throw new Error('expected the core to refuse');
+    };
+    expect(await page.textContent('#shgc-msg')).toBe(expected((s) => (s.glazing.shgc = 1.4)));
+    expect(await page.textContent('#latitude-msg')).toBe(expected((s) => (s.site.latitude = 'north' as never)));
+    expect(await page.getAttribute('#shgc', 'aria-invalid')).toBe('true');
+    await page.click('#run-year');
+    expect(await waitForStatus(page, /Fix/)).toBe('Fix the marked boxes on the Window tab first.');
+    expect(await host.sheetNames(page)).toEqual([]);
+
+    // Hourly weather from the sheet: an address that is not one, then a column of the wrong length.
+    await setField(page, 'shgc', '0.4');
+    await setField(page, 'latitude', '52.2');
+    await page.selectOption('#weatherSource', 'measured');
+    await setField(page, 'dniAddress', 'B2 to B8761');
+    await page.waitForFunction(() => (document.getElementById('dniAddress-msg')?.textContent ?? '') !== '');
+    expect(await page.textContent('#dniAddress-msg')).toContain('weather.dni = "B2 to B8761" is not allowed: must be a range address');
+    await page.evaluate(() => (window as never as { __excelHost: { addUserSheet(n: string, v: unknown[][]): void } }).__excelHost.addUserSheet('Weather', Array.from({ length: 100 }, () => [500, 100])));
+    await setField(page, 'dniAddress', 'Weather!A1:A100');
+    await setField(page, 'dhiAddress', 'Weather!B1:B100');
+    await setField(page, 'year', String(YEAR));
+    await page.click('#run-year');
+    await waitForStatus(page, /ranges the form points at/);
+    expect(await page.textContent('#dniAddress-msg')).toBe(`weather.dni = a list of 100 is not allowed: must hold one value per hour of ${YEAR}: 8760 values`);
+    expect(await host.sheetNames(page)).toEqual(['Weather']);
+    await page.screenshot({ path: path.join(ARTIFACTS, 'pane-bad-input.png'), fullPage: true });
+    await page.close();
+  });
+
+  test('cancel stops after the current block and removes the half-written sheet', async () => {
+    const page = await openPane();
+    await setField(page, 'year', String(YEAR));
+    await host.eval(page, '(host.state.syncDelayMs = 300)');
+    await page.click('#run-year');
+    await page.waitForFunction(() => /Writing rows: \d+ of 8760/.test(document.getElementById('progress-text')?.textContent ?? ''), undefined, { timeout: 60_000 });
+    await page.screenshot({ path: path.join(ARTIFACTS, 'pane-progress.png') });
+    await page.click('#cancel');
+    expect(await waitForStatus(page, /Stopped/)).toBe('Stopped: the half-written sheet was removed.');
+    expect(await host.sheetNames(page)).toEqual([]);
+    const written = await host.eval<number[]>(page, 'host.state.syncs.flatMap(function (s) { return s.valueRows; }).filter(function (n) { return n >= 1000; })');
+    expect(written.reduce((a, b) => a + b, 0)).toBeLessThan(8760);
+    expect(await page.isHidden('#progress')).toBe(true);
+    await page.close();
+  });
+
+  test('the form and the options are saved with the workbook and restored when it is opened again', async () => {
+    const page = await openPane();
+    await setField(page, 'latitude', '-33.9');
+    await page.selectOption('#skyModel', 'hayDavies');
+    await page.click('#tab-options');
+    await page.fill('#opt-0-label', 'Slim canopy');
+    await page.waitForFunction(() => {
+      const saved = (window as never as { __excelHost: { state: { savedSettings: Record<string, { form: Record<string, string>; options: { label: string }[] }> } } }).__excelHost.state.savedSettings['sunpane.pane'];
+      return saved && saved.form.latitude === '-33.9' && saved.options[0].label === 'Slim canopy';
+    });
+    const saved = await host.eval<Record<string, unknown>>(page, 'host.state.savedSettings');
+    await page.close();
+
+    const reopened = await openPane(saved);
+    expect(await reopened.inputValue('#latitude')).toBe('-33.9');
+    expect(await reopened.inputValue('#skyModel')).toBe('hayDavies');
+    expect(await reopened.inputValue('#opt-0-label')).toBe('Slim canopy');
+    await reopened.close();
+  });
+
+  test('the sun path draws in both hemispheres with the shading mask of the glass or of one point', async () => {
+    const page = await openPane();
+    await page.setViewportSize({ width: 420, height: 760 });
+    await setField(page, 'overhangProjection', '0.7');
+    await setField(page, 'overhangGap', '0.2');
+    await setField(page, 'leftFinProjection', '0.4');
+    await page.click('#tab-sunpath');
+    await page.waitForSelector('#sun-path svg polyline.track');
+    // The highest point of the first (21 June) track — nearest the centre — lies south of the
+    // centre (lower on the drawing) in the north, and north of it in the south.
+    const noonY = () =>
+      page.$eval('#sun-path svg polyline.track', (el) => {
+        const pts = (el.getAttribute('points') ?? '').split(' ').map((p) => p.split(',').map(Number));
+        const top = pts.reduce((best, p) => (Math.hypot(p[0] - 160, p[1] - 160) < Math.hypot(best[0] - 160, best[1] - 160) ? p : best));
+        return top[1];
+      });
+    expect(await noonY()).toBeGreaterThan(160);
+    expect(await page.$$eval('#sun-path svg path.mask-full', (p) => p.length)).toBeGreaterThan(0);
+    expect(await page.$$eval('#sun-path svg path.mask-part', (p) => p.length)).toBeGreaterThan(0);
+    await page.screenshot({ path: path.join(ARTIFACTS, 'sun-path-north.png'), fullPage: true });
+
+    await page.click('#mask-point');
+    await page.fill('#mask-x', '0.2');
+    await page.fill('#mask-y', '1.4');
+    await page.click('#draw-sun-path');
+    await page.waitForFunction(() => (document.querySelector('#sun-path desc')?.textContent ?? '').includes('point 0.2 m'));
+    expect(await page.$$eval('#sun-path svg path.mask-part', (p) => p.length)).toBe(0);
+    await page.screenshot({ path: path.join(ARTIFACTS, 'sun-path-point.png'), fullPage: true });
+    await page.fill('#mask-x', '5');
+    await page.click('#draw-sun-path');
+    await page.waitForFunction(() => (document.getElementById('mask-x-msg')?.textContent ?? '') !== '');
+    expect(await page.textContent('#mask-x-msg')).toBe('x = 5 is not allowed: must be a number from 0 to 1.8');
+
+    await page.click('#tab-window');
+    await page.selectOption('#examplePlace', 'kestrelHeads');
+    await setField(page, 'surfaceAzimuth', '0');
+    await page.click('#tab-sunpath');
+    await page.click('#mask-whole');
+    await page.waitForFunction(() => (document.querySelector('#sun-path desc')?.textContent ?? '').includes('latitude -37.9'));
+    expect(await noonY()).toBeLessThan(160);
+    await page.screenshot({ path: path.join(ARTIFACTS, 'sun-path-south.png'), fullPage: true });
+    await page.close();
+  });
+});
