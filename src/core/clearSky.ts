@@ -3,7 +3,8 @@
  * turbidity-based model of Ineichen & Perez (2002).
  *
  * Both return direct normal, diffuse horizontal and global horizontal irradiance; with the sun at or
- * below the horizon all three are 0 (no sun is a result, not an error).
+ * below the horizon all three are 0 (no sun is a result, not an error). Handbook equation numbers
+ * cited here are from memory; the formulas are those of REFERENCES.md §3.
  */
 import { airMassKastenYoung } from './airMass';
 import { RAD } from './angles';

@@ -4,7 +4,7 @@
  *
  * Two published forms: the one-cosine form of the ASHRAE Handbook (used with the ASHRAE clear-sky
  * model) and Spencer's (1971) Fourier series (used for the clearness index of Erbs et al. and by the
- * anisotropic sky models).
+ * anisotropic sky models). Handbook equation numbers cited here are from memory.
  */
 import { requireRange } from './errors';
 

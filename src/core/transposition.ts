@@ -4,6 +4,7 @@
  * The Perez (1990) model is in perez1990.ts; {@link planeIrradiance} combines them.
  *
  * "No sun" is not an error: with the sun at or below the horizon the circumsolar terms are 0.
+ * Equation numbers of Duffie & Beckman and of the ASHRAE Handbook cited here are from memory.
  */
 import { RAD } from './angles';
 import { requireRange } from './errors';
