@@ -15,6 +15,7 @@ import {
   addColourScale,
   addDataTable,
   address,
+  fitOnOnePage,
   freezeAt,
   serialToCellDate,
   setFormula,
@@ -96,18 +97,17 @@ export function sheetRef(sheet: string): string {
 }
 
 /**
- * Adds the monthly summary of one window: a table of month, gain and missing hours, then the
+ * Fills a sheet with the monthly summary of one window: a table of month, gain and missing hours, then the
  * annual total (SUM), the largest month (MAX) and — when the hourly sheet is given — the peak hour
  * (MAX over its gain column), all native formulas with cached results.
  */
 export function addMonthlySheet(
-  wb: ExcelJS.Workbook,
-  sheet: string,
+  ws: ExcelJS.Worksheet,
   tableName: string,
   summary: AnnualSummary,
   hourly?: { sheet: string; placement: TablePlacement },
 ): MonthlyCells {
-  const ws = wb.addWorksheet(sheet);
+  const sheet = ws.name;
   const rows = MONTHS.map((m, k) => [m, summary.monthlyKWh[k], summary.monthlyMissingHours[k]]);
   const t = addDataTable(
     ws,
@@ -135,6 +135,7 @@ export function addMonthlySheet(
     cells.peakW = { cell: `${sheet}!${address(labelRow + 2, 2)}`, expected: summary.peakW };
   }
   ws.getColumn(1).width = 16;
+  fitOnOnePage(ws, 'portrait');
   return cells;
 }
 
@@ -166,5 +167,5 @@ export function addHeatMapSheet(wb: ExcelJS.Workbook, sheet: string, series: Ann
   for (let h = 2; h <= 25; h++) ws.getColumn(h).width = 6;
   addColourScale(ws, `${address(headerRow + 1, 2)}:${address(headerRow + days, 25)}`);
   freezeAt(ws, headerRow + 1, 2);
-  ws.pageSetup = { orientation: 'portrait', fitToPage: true, fitToWidth: 1, fitToHeight: 1, margins: { left: 0.3, right: 0.3, top: 0.4, bottom: 0.4, header: 0.2, footer: 0.2 } };
+  fitOnOnePage(ws, 'portrait');
 }

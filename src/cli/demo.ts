@@ -19,7 +19,7 @@ import { type Flags, parseFlags } from './flags';
 import { type DemoFormulaSet, addFormulaSheet, demoFormulas } from './demoFormulas';
 import { ProgressBar } from './progress';
 import { type SummaryTotals, type WindowResult, addSummaryTable, windowResult } from './schedule';
-import { type ExcelJS, NUMBER_FORMATS, type TableCell, addDataTable, address, freezeAt, newWorkbook, saveWorkbook, setFormula, setLabel } from './workbook';
+import { COLOURS, type ExcelJS, NUMBER_FORMATS, type TableCell, addDataTable, address, fitOnOnePage, freezeAt, newWorkbook, saveWorkbook, setFormula, setLabel } from './workbook';
 
 export const DEMO_HELP = `usage: sunpane demo [--out DIR]
 
@@ -157,9 +157,9 @@ function addOverview(wb: ExcelJS.Workbook, results: DemoResults): { cell: string
   const ws = wb.addWorksheet('Overview');
   ws.getCell('A1').value = `${DEMO_BUILDING.name} — Sunpane demo`;
   ws.getCell('A1').font = { bold: true, size: 14 };
-  ws.getCell('A2').value = `An invented building (${DEMO_BUILDING.description}) on invented example sites, clear-sky year ${DEMO_YEAR}. Every input is made up for the demonstration.`;
-  ws.getCell('A3').value = 'Results are estimates by published methods; design decisions need a qualified engineer and the local energy code.';
-  ws.getCell('A3').font = { italic: true };
+  ws.getCell('A2').value = `An invented building on invented example sites, clear-sky year ${DEMO_YEAR}; every input is made up.`;
+  ws.getCell('A3').value = 'Results are estimates by published methods; design needs a qualified engineer and the local code.';
+  ws.getCell('A3').font = { italic: true, color: { argb: COLOURS.note } };
   const top = 5;
   const rows: TableCell[][] = gainBySiteAndFacing(results).map(({ siteId, byFacing }) => {
     const s = findExampleSite(siteId)!;
@@ -208,7 +208,7 @@ function addOverview(wb: ExcelJS.Workbook, results: DemoResults): { cell: string
     ws.getCell(row, 2).value = s.description;
   }
   freezeAt(ws, top + 1);
-  ws.pageSetup = { orientation: 'landscape', fitToPage: true, fitToWidth: 1, fitToHeight: 1 };
+  fitOnOnePage(ws);
   return checks;
 }
 
@@ -247,6 +247,7 @@ function addSchedule(wb: ExcelJS.Workbook, results: DemoResults): void {
     rows,
   );
   freezeAt(ws, 2, 2);
+  fitOnOnePage(ws);
 }
 
 function addMonthlyMatrix(wb: ExcelJS.Workbook, results: DemoResults): { cell: string; expected: number }[] {
@@ -273,6 +274,7 @@ function addMonthlyMatrix(wb: ExcelJS.Workbook, results: DemoResults): { cell: s
     checks.push({ cell: `Monthly!${address(sumRow, col)}`, expected: w.summary.annualKWh }, { cell: `Monthly!${address(maxRow, col)}`, expected: top });
   });
   freezeAt(ws, 2, 2);
+  fitOnOnePage(ws);
   return checks;
 }
 
@@ -316,6 +318,7 @@ function addOptions(wb: ExcelJS.Workbook, results: DemoResults): { cell: string;
     checks.push({ cell: `Options!${cell}`, expected });
   });
   freezeAt(ws, 2, 3);
+  fitOnOnePage(ws);
   return checks;
 }
 
@@ -327,15 +330,19 @@ export function buildDemoWorkbook(results: DemoResults): { workbook: ExcelJS.Wor
   const summarySheet = wb.addWorksheet('Summary');
   const summary = addSummaryTable(summarySheet, 'WindowSummary', 1, results.windows);
   freezeAt(summarySheet, 2, 2);
+  fitOnOnePage(summarySheet);
   const monthly = addMonthlyMatrix(wb, results);
   const options = addOptions(wb, results);
+  addFormulaSheet(wb, 'Formulas', results.formulas);
   const hourlyWindow = results.windows.find((w) => w.tag === DEMO_HOURLY_TAG) ?? results.windows[0];
   const series = annualSeries(hourlyWindow.spec);
   const hourlySheet = `Hourly ${hourlyWindow.tag}`;
-  const placement = addHourlySheet(wb, hourlySheet, `Hourly_${hourlyWindow.tag}`, series);
-  const yearCells = addMonthlySheet(wb, `Year ${hourlyWindow.tag}`, `Year_${hourlyWindow.tag}`, summarizeAnnual(series), { sheet: hourlySheet, placement });
   addHeatMapSheet(wb, `Heat map ${hourlyWindow.tag}`, series, `${hourlyWindow.spec.name}: solar gain [W] by day and hour ending, clear-sky ${DEMO_YEAR}`);
-  addFormulaSheet(wb, 'Formulas', results.formulas);
+  // The monthly sheet refers to the hourly one, which comes last (its many printed pages follow
+  // the one-page sheets).
+  const yearSheet = wb.addWorksheet(`Year ${hourlyWindow.tag}`);
+  const placement = addHourlySheet(wb, hourlySheet, `Hourly_${hourlyWindow.tag}`, series);
+  const yearCells = addMonthlySheet(yearSheet, `Year_${hourlyWindow.tag}`, summarizeAnnual(series), { sheet: hourlySheet, placement });
   const hourly = [yearCells.annualKWh, yearCells.maxMonthKWh, ...(yearCells.peakW ? [yearCells.peakW] : [])];
   return { workbook: wb, checks: { summary, monthly, options, overview, hourly } };
 }

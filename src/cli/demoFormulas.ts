@@ -14,7 +14,7 @@ import type { DemoWindow } from '../demo/building';
 import { applyFunction } from '../registry/evaluate';
 import { NAMESPACE, findFunction } from '../registry';
 import { NotAvailable, type RawArg } from '../registry/types';
-import { type ExcelJS, NUMBER_FORMATS, addDataTable, address, freezeAt, serialToCellDate, setFormula, styleHeader } from './workbook';
+import { type ExcelJS, NUMBER_FORMATS, addDataTable, address, fitOnOnePage, freezeAt, serialToCellDate, setFormula, styleHeader } from './workbook';
 
 /** One input cell of the formula sheet. */
 export interface DemoInput {
@@ -59,7 +59,7 @@ interface FormulaPlan {
 }
 
 /** First row of the input block and of the formula table on the sheet. */
-const INPUT_TOP = 4;
+const INPUT_TOP = 5;
 
 /** The input cells: the demo's equator-facing office window on 21 June at 14:00 (invented clear-sky depths). */
 export function demoInputs(window: DemoWindow): DemoInput[] {
@@ -109,7 +109,7 @@ const PLANS: readonly FormulaPlan[] = [
       surfaceAzimuth: { input: 'surfaceAzimuth' },
       width: { input: 'width' },
       height: { input: 'height' },
-      shgc: { input: 'shgc' },
+      shgcNormal: { input: 'shgc' },
       tauB: { input: 'tauB' },
       tauD: { input: 'tauD' },
       frameFraction: { input: 'frameFraction' },
@@ -189,7 +189,8 @@ export function addFormulaSheet(wb: ExcelJS.Workbook, sheet: string, set: DemoFo
   const ws = wb.addWorksheet(sheet);
   ws.getCell('A1').value = 'Sunpane worksheet functions — examples';
   ws.getCell('A1').font = { bold: true, size: 13 };
-  ws.getCell('A2').value = `Results below were worked out by Sunpane when the file was written. They recalculate in Excel once the Sunpane add-in is installed; elsewhere they may show #NAME?.`;
+  ws.getCell('A2').value = 'Results were worked out by Sunpane when the file was written.';
+  ws.getCell('A3').value = 'They recalculate in Excel once the Sunpane add-in is installed; elsewhere they may show #NAME?.';
   ws.getCell(INPUT_TOP, 1).value = 'input';
   ws.getCell(INPUT_TOP, 2).value = 'value';
   ws.getCell(INPUT_TOP, 3).value = 'unit';
@@ -206,14 +207,16 @@ export function addFormulaSheet(wb: ExcelJS.Workbook, sheet: string, set: DemoFo
     ws,
     'ExampleFormulas',
     { row: top, column: 1 },
-    [{ header: 'quantity', width: 44 }, { header: 'formula', width: 70 }, { header: 'result', width: 16 }, { header: 'unit', width: 8 }],
+    [{ header: 'quantity', width: 40 }, { header: 'formula', width: 60 }, { header: 'result', width: 16 }, { header: 'unit', width: 8 }],
     formulas.map((f) => [f.label, `=${f.formula}`, null, f.unit]),
   );
   formulas.forEach((f, k) => {
     const row = t.headerRow + 1 + k;
     const cell = address(row, 3);
+    ws.getCell(row, 2).alignment = { wrapText: true, vertical: 'top' };
     if (typeof f.result === 'number') setFormula(ws, cell, f.formula, f.result, f.numFmt);
     else ws.getCell(cell).value = f.result;
   });
-  freezeAt(ws, 3);
+  freezeAt(ws, 4);
+  fitOnOnePage(ws);
 }

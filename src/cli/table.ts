@@ -110,10 +110,11 @@ export async function tableCommand(argv: readonly string[], io: Output): Promise
   } else {
     const wb = newWorkbook(`Sunpane: ${spec.name}`);
     const hourlySheet = 'Hourly';
+    const monthlySheet = wb.addWorksheet('Monthly');
+    addHeatMapSheet(wb, 'Heat map', series, `${spec.name}: gain [W] by day and hour ending`);
     const placement = addHourlySheet(wb, hourlySheet, 'Hourly', series, () => bar.tick());
     bar.finish();
-    addMonthlySheet(wb, 'Monthly', 'Monthly', summary, { sheet: hourlySheet, placement });
-    addHeatMapSheet(wb, 'Heat map', series, `${spec.name}: gain [W] by day and hour ending`);
+    addMonthlySheet(monthlySheet, 'Monthly', summary, { sheet: hourlySheet, placement });
     await saveWorkbook(wb, out);
   }
   io.out(tableSummaryLine(series, summary));

@@ -116,6 +116,8 @@ export function addDataTable(
     columns: columns.map((c) => ({ name: c.header, filterButton: true })),
     rows: rows.map((r) => r.map((v) => (v === null ? undefined : v))) as unknown[][],
   });
+  // Explicit header colours as well as the table style: not every spreadsheet program draws table styles.
+  styleHeader(sheet, topLeft.row, topLeft.column, topLeft.column + columns.length - 1);
   columns.forEach((c, k) => {
     const col = sheet.getColumn(topLeft.column + k);
     const width = c.width ?? Math.max(10, Math.min(40, c.header.length + 2));
@@ -189,6 +191,18 @@ export function addColourScale(sheet: ExcelJS.Worksheet, range: string): void {
       } as ExcelJS.ConditionalFormattingRule,
     ],
   });
+}
+
+/** Prints a sheet on one page (scaled to fit), for PDF output and printing. */
+export function fitOnOnePage(sheet: ExcelJS.Worksheet, orientation: 'portrait' | 'landscape' = 'landscape'): void {
+  sheet.pageSetup = {
+    orientation,
+    fitToPage: true,
+    fitToWidth: 1,
+    fitToHeight: 1,
+    paperSize: 9,
+    margins: { left: 0.4, right: 0.4, top: 0.5, bottom: 0.5, header: 0.2, footer: 0.2 },
+  };
 }
 
 /** A new workbook with Sunpane's document properties. */
