@@ -6,12 +6,12 @@
  * from outside: x to the right, y up, origin at the lower-left corner of the wall opening; z is the
  * outward normal. The glass (width W, height H) lies a reveal depth R behind the wall face; the
  * overhang and fins are thin plates standing out from the wall face (z = 0 … P). With the sun
- * direction s = (sx, sy, sz) — sx = −cos β sin γ, sy = sin β, sz = cos β cos γ, β the sun altitude,
- * γ = sun azimuth − surface azimuth (positive: sun to the LEFT of the normal as seen from outside) —
- * a point at depth d in front of the wall casts its shadow on the wall plane displaced by
- * (−a·d, −b·d) with
+ * direction s = (sx, sy, sz) — sx = cos β sin γ, sy = sin β, sz = cos β cos γ, β the sun altitude,
+ * γ = surface azimuth − sun azimuth, the horizontal shadow angle of src/core/surface.ts
+ * (`wallSolarAzimuth`: positive when the sun is to the RIGHT as seen from outside) — a point at
+ * depth d in front of the wall casts its shadow on the wall plane displaced by (−a·d, −b·d) with
  *
- *   a = sx / sz = −tan γ,   b = sy / sz = tan β / cos γ = tan Ω (Ω the profile angle).
+ *   a = sx / sz = tan γ,   b = sy / sz = tan β / cos γ = tan Ω (Ω the profile angle).
  *
  * The ray from a glass point (x, y) to the sun crosses the wall plane at (x + a·R, y + b·R): a
  * translation, so areas are kept. Then
@@ -140,7 +140,7 @@ export function requireVerticalForShading(surfaceTilt: number, shading: Shading)
 
 /** The sun direction in the wall frame, reduced to the two shadow slopes. */
 interface ShadowSlopes {
-  /** −tan γ: shadow x-shift per unit depth is −a. */
+  /** tan γ (γ positive with the sun to the right): shadow x-shift per unit depth is −a. */
   a: number;
   /** tan Ω (profile angle): shadow y-shift per unit depth is −b. */
   b: number;
@@ -154,7 +154,7 @@ const slopes: ShadowSlopes = { a: 0, b: 0 };
  */
 function sunSlopes(sunAltitude: number, sunAzimuth: number, surfaceAzimuth: number): boolean {
   if (!(sunAltitude > 0)) return false;
-  const gamma = wrap180(sunAzimuth - surfaceAzimuth);
+  const gamma = wrap180(surfaceAzimuth - sunAzimuth); // horizontal shadow angle, + = sun to the right
   // Decide "in the wall plane" on the degrees: cos(90° in radians) is 6e-17, not 0.
   if (gamma <= -90 || gamma >= 90) return false;
   const betaRad = sunAltitude * RAD;
@@ -163,7 +163,7 @@ function sunSlopes(sunAltitude: number, sunAzimuth: number, surfaceAzimuth: numb
   const cosGamma = cos(gammaRad);
   const sz = cosBeta * cosGamma;
   if (!(sz > 0)) return false;
-  slopes.a = (-cosBeta * sin(gammaRad)) / sz; // a = sx / sz = −tan γ
+  slopes.a = (cosBeta * sin(gammaRad)) / sz; // a = sx / sz = tan γ
   slopes.b = sin(betaRad) / sz; // b = sy / sz = tan β / cos γ = tan Ω
   return true;
 }
@@ -252,7 +252,7 @@ function requireSunAngles(sunAltitude: number, sunAzimuth: number, surfaceAzimut
  * H + EA + EB is negative), the same for `rightFin…`, `revealDepth`, `skyline`, `sunAltitude`,
  * `sunAzimuth` or `surfaceAzimuth`.
  * @remarks Exact shadow polygons united by inclusion–exclusion — see the module comment for the
- * formulas (a = −tan γ, b = tan Ω) and the measured choice of the union method.
+ * formulas (a = tan γ, b = tan Ω) and the measured choice of the union method.
  */
 export function sunlitFraction(window: WindowOpening, shading: Shading, sunAltitude: number, sunAzimuth: number, surfaceAzimuth: number): number {
   requireShading(window, shading);

@@ -1,4 +1,215 @@
-/** Worksheet-function descriptors: shading. */
-import type { FunctionDescriptor } from './types';
+/**
+ * Worksheet-function descriptors: sunlit fraction of a window behind an overhang, fins, a reveal and
+ * a skyline; shadow depth and width of long devices; a month × hour sunlit mask. Every descriptor
+ * reads its arguments and calls the core (src/core/shading.ts, src/core/shadingMask.ts).
+ *
+ * Argument order: sun angles and surface azimuth, the window, then the devices, all optional with
+ * defaults meaning "no device". Parameter names and ranges are the same as in the gain functions
+ * (src/registry/gain.ts) so that one name means one thing.
+ */
+import { SunpaneError } from '../core/errors';
+import { shadowDepth, shadowWidth, sunlitFraction, type WindowOpening } from '../core/shading';
+import { MASK_DEFAULT_YEAR, monthHourMask } from '../core/shadingMask';
+import type { Shading } from '../core/window';
+import { GLOSSARY } from './glossary';
+import { type Args, type FunctionDescriptor, NotAvailable, type ParamDescriptor } from './types';
 
-export const SHADING_FUNCTIONS: readonly FunctionDescriptor[] = [];
+/** Longest window or shading dimension accepted by the worksheet functions [m] (as in gain.ts). */
+const LENGTH_MAX = 100;
+
+function length(name: string, description: string, extra: Partial<ParamDescriptor> = {}): ParamDescriptor {
+  return { name, kind: 'number', unit: 'm', min: 0, max: LENGTH_MAX, default: 0, description, ...extra };
+}
+
+function extension(name: string, description: string): ParamDescriptor {
+  return length(name, description, { min: -LENGTH_MAX });
+}
+
+const P = {
+  width: length('width', 'window width (the opening the shading is measured from)', { exclusiveMin: true, default: undefined }),
+  height: length('height', 'window height (the opening the shading is measured from)', { exclusiveMin: true, default: undefined }),
+  overhangProjection: length('overhangProjection', 'depth of an overhang out from the wall; 0 = no overhang'),
+  overhangProjectionRequired: length('overhangProjection', 'depth of the overhang out from the wall', { default: undefined }),
+  overhangGap: length('overhangGap', "height of the overhang's underside above the window head"),
+  overhangExtensionLeft: extension('overhangExtensionLeft', 'overhang extension beyond the left jamb, seen from outside (negative stops short)'),
+  overhangExtensionRight: extension('overhangExtensionRight', 'overhang extension beyond the right jamb, seen from outside (negative stops short)'),
+  leftFinProjection: length('leftFinProjection', 'depth of the fin at the left jamb (seen from outside) out from the wall; 0 = no left fin'),
+  rightFinProjection: length('rightFinProjection', 'depth of the fin at the right jamb (seen from outside) out from the wall; 0 = no right fin'),
+  finGap: length('finGap', 'distance from each jamb to its fin'),
+  leftFinGap: length('leftFinGap', 'distance from the left jamb to the left fin'),
+  rightFinGap: length('rightFinGap', 'distance from the right jamb to the right fin'),
+  finExtensionAbove: extension('finExtensionAbove', 'extension of the fins above the window head (negative stops below it)'),
+  finExtensionBelow: extension('finExtensionBelow', 'extension of the fins below the sill (negative stops above it)'),
+  revealDepth: length('revealDepth', 'depth of the glass behind the wall face; 0 = flush'),
+  skyline: {
+    name: 'skyline',
+    kind: 'numberList',
+    unit: '°',
+    min: 0,
+    max: 90,
+    optional: true,
+    length: { min: 1, max: 360 },
+    description: 'elevation angles of surrounding buildings and terrain for equal azimuth sectors clockwise from north; blank: open horizon',
+  } as ParamDescriptor,
+  projection: length('projection', 'depth of the overhang or fin out from the wall', { default: undefined }),
+  day: { name: 'day', kind: 'number', integer: true, min: 1, max: 28, default: 21, description: 'day of each month the mask is drawn for' } as ParamDescriptor,
+  year: { name: 'year', kind: 'number', integer: true, min: 1901, max: 9998, default: MASK_DEFAULT_YEAR, description: 'calendar year of the sun positions (any year gives nearly the same mask)' } as ParamDescriptor,
+} as const;
+
+const SUN_WALL: readonly ParamDescriptor[] = [GLOSSARY.sunAltitude, GLOSSARY.sunAzimuth, GLOSSARY.surfaceAzimuth];
+const WINDOW: readonly ParamDescriptor[] = [P.width, P.height];
+const OVERHANG_REST: readonly ParamDescriptor[] = [P.overhangGap, P.overhangExtensionLeft, P.overhangExtensionRight];
+/** The complete shading set, as in SUNLITFRACTION and SUNLITMASK. */
+const FULL_SET: readonly ParamDescriptor[] = [
+  P.overhangProjection,
+  ...OVERHANG_REST,
+  P.leftFinProjection,
+  P.leftFinGap,
+  P.rightFinProjection,
+  P.rightFinGap,
+  P.finExtensionAbove,
+  P.finExtensionBelow,
+  P.revealDepth,
+  P.skyline,
+];
+
+const num = (a: Args, name: string): number => a[name] as number;
+
+function openingOf(a: Args): WindowOpening {
+  return { width: num(a, 'width'), height: num(a, 'height') };
+}
+
+/** Overhang width W + EL + ER below 0: the reason, or undefined. */
+function overhangProblem(a: Args): string | undefined {
+  const total = num(a, 'width') + num(a, 'overhangExtensionLeft') + num(a, 'overhangExtensionRight');
+  return total < 0 ? `overhangExtensionLeft/Right leave the overhang a negative width (${total})` : undefined;
+}
+
+/** Fin height H + EA + EB below 0 (the extensions shared by both fins): the reason, or undefined. */
+function finProblem(a: Args): string | undefined {
+  const total = num(a, 'height') + num(a, 'finExtensionAbove') + num(a, 'finExtensionBelow');
+  return total < 0 ? `finExtensionAbove/Below leave the fins a negative height (${total})` : undefined;
+}
+
+/** Throws the fin-height error under the worksheet's own argument names. */
+function requireFinHeight(a: Args): void {
+  if (finProblem(a) === undefined) return;
+  const above = num(a, 'finExtensionAbove') <= num(a, 'finExtensionBelow');
+  const name = above ? 'finExtensionAbove' : 'finExtensionBelow';
+  const other = num(a, above ? 'finExtensionBelow' : 'finExtensionAbove');
+  throw new SunpaneError(name, a[name], `must be at least ${-(num(a, 'height') + other)}`, 'the fin height, window height + extension above + extension below, must not be negative');
+}
+
+function overhangOf(a: Args): Shading['overhang'] {
+  return { projection: num(a, 'overhangProjection'), gap: num(a, 'overhangGap'), extensionLeft: num(a, 'overhangExtensionLeft'), extensionRight: num(a, 'overhangExtensionRight') };
+}
+
+function fullShadingOf(a: Args): Shading {
+  requireFinHeight(a);
+  const fin = (projection: number, gap: number) => ({ projection, gap, extensionAbove: num(a, 'finExtensionAbove'), extensionBelow: num(a, 'finExtensionBelow') });
+  const s: Shading = {
+    overhang: overhangOf(a),
+    leftFin: fin(num(a, 'leftFinProjection'), num(a, 'leftFinGap')),
+    rightFin: fin(num(a, 'rightFinProjection'), num(a, 'rightFinGap')),
+    revealDepth: num(a, 'revealDepth'),
+  };
+  if (a.skyline !== undefined) s.skyline = a.skyline as number[];
+  return s;
+}
+
+function noShadow(): NotAvailable {
+  return new NotAvailable('no shadow: the sun is down or behind the wall');
+}
+
+const HOURS = Array.from({ length: 24 }, (_, k) => `${String(k + 1).padStart(2, '0')}:00`);
+
+export const SHADING_FUNCTIONS: readonly FunctionDescriptor[] = [
+  {
+    name: 'OVERHANGSUNLIT',
+    summary: 'Share of a window in the sun below an overhang of finite width (exact shadow geometry)',
+    category: 'Shading',
+    params: [...SUN_WALL, ...WINDOW, P.overhangProjectionRequired, ...OVERHANG_REST],
+    result: { shape: 'value', min: 0, max: 1, description: 'sunlit fraction of the window area; 0 with the sun down or behind the wall' },
+    refuses: overhangProblem,
+    evaluate: (a) => sunlitFraction(openingOf(a), { overhang: overhangOf(a) }, num(a, 'sunAltitude'), num(a, 'sunAzimuth'), num(a, 'surfaceAzimuth')),
+    examples: [
+      { args: ['45', '180', '180', '2', '1.5', '1', '0.2', '100', '100'], note: '0.4667: a long overhang 1 deep, 0.2 above a 1.5 high window, sun due south at 45° (shadow 1 − 0.2 = 0.8 deep)' },
+      { args: ['45', '150', '180', '2', '1.5', '1', '0.2'], note: '0.4713: the same overhang only as wide as the window, sun 30° east of south: the east end escapes part of the shadow (a long one would give 0.3635)' },
+    ],
+  },
+  {
+    name: 'FINSUNLIT',
+    summary: 'Share of a window in the sun beside a left and/or right fin (exact shadow geometry)',
+    category: 'Shading',
+    params: [...SUN_WALL, ...WINDOW, P.leftFinProjection, P.rightFinProjection, P.finGap, P.finExtensionAbove, P.finExtensionBelow],
+    result: { shape: 'value', min: 0, max: 1, description: 'sunlit fraction of the window area; 0 with the sun down or behind the wall' },
+    refuses: finProblem,
+    evaluate: (a) => {
+      requireFinHeight(a);
+      const fin = (projection: number) => ({ projection, gap: num(a, 'finGap'), extensionAbove: num(a, 'finExtensionAbove'), extensionBelow: num(a, 'finExtensionBelow') });
+      const shading: Shading = { leftFin: fin(num(a, 'leftFinProjection')), rightFin: fin(num(a, 'rightFinProjection')) };
+      return sunlitFraction(openingOf(a), shading, num(a, 'sunAltitude'), num(a, 'sunAzimuth'), num(a, 'surfaceAzimuth'));
+    },
+    examples: [
+      { args: ['30', '135', '180', '2', '1.5', '0', '1', '0.5', '100', '100'], note: '0.75: a tall right fin 1 deep, 0.5 from the jamb, sun 45° to the right (east on a south wall)' },
+      { args: ['30', '225', '180', '2', '1.5', '0', '1', '0.5'], note: '1: the same fin with the sun on the other side casts no shadow on the window' },
+    ],
+  },
+  {
+    name: 'SUNLITFRACTION',
+    summary: 'Share of a window in the sun behind overhang, fins, reveal and skyline together (shadows united, never summed)',
+    category: 'Shading',
+    params: [...SUN_WALL, ...WINDOW, ...FULL_SET],
+    result: { shape: 'value', min: 0, max: 1, description: 'sunlit fraction of the window area; 0 with the sun down, behind the wall or below the skyline' },
+    refuses: (a) => overhangProblem(a) ?? finProblem(a),
+    evaluate: (a) => sunlitFraction(openingOf(a), fullShadingOf(a), num(a, 'sunAltitude'), num(a, 'sunAzimuth'), num(a, 'surfaceAzimuth')),
+    examples: [
+      { args: ['35', '150', '180', '1.2', '1.5', '0.6', '0.1', '0.2', '0.2', '0.3', '0', '0.3', '0', '0', '0', '0.1'], note: 'overhang, two fins and a 0.1 reveal on a south window, mid-morning sun' },
+      { args: ['20', '250', '220', '1.2', '1.5', '', '', '', '', '', '', '', '', '', '', '', '{0,0,0,0,0,0,0,0,30,0,0,0}'], note: '0: a 30° building in the west-south-west hides the sun at 20°' },
+    ],
+  },
+  {
+    name: 'SHADOWDEPTH',
+    summary: 'How far the shadow of a long overhang reaches down the wall below its edge (projection × tan profile angle)',
+    category: 'Shading',
+    params: [...SUN_WALL, P.projection],
+    result: { shape: 'value', unit: 'm', min: 0, description: 'vertical shadow depth below the edge, in the unit of the projection; #N/A with the sun down or behind the wall' },
+    evaluate: (a) => shadowDepth(num(a, 'projection'), num(a, 'sunAltitude'), num(a, 'sunAzimuth'), num(a, 'surfaceAzimuth')) ?? noShadow(),
+    examples: [
+      { args: ['45', '180', '180', '1'], note: '1: sun due south at 45° on a south wall' },
+      { args: ['45', '240', '180', '1'], note: '2: the sun 60° round to the west doubles the profile angle tangent' },
+    ],
+  },
+  {
+    name: 'SHADOWWIDTH',
+    summary: 'How far the shadow of a tall fin reaches sideways across the wall (projection × |tan horizontal shadow angle|)',
+    category: 'Shading',
+    params: [...SUN_WALL, P.projection],
+    result: { shape: 'value', unit: 'm', min: 0, description: 'horizontal shadow width beside the fin, on the side away from the sun; #N/A with the sun down or behind the wall' },
+    evaluate: (a) => shadowWidth(num(a, 'projection'), num(a, 'sunAltitude'), num(a, 'sunAzimuth'), num(a, 'surfaceAzimuth')) ?? noShadow(),
+    examples: [{ args: ['30', '135', '180', '1'], note: '1: the sun 45° to the side' }],
+  },
+  {
+    name: 'SUNLITMASK',
+    summary: 'Month × hour table of the share of a window in the sun on one day of each month (spills 12 × 24)',
+    category: 'Shading',
+    params: [GLOSSARY.latitude, GLOSSARY.longitude, GLOSSARY.utcOffset, GLOSSARY.surfaceAzimuth, ...WINDOW, ...FULL_SET, P.day, P.year],
+    result: {
+      shape: 'spill',
+      description: 'sunlit fraction 0…1; rows January … December, columns hour ending 01:00 … 24:00 local standard time (sun at mid-hour); 0 with the sun down, behind the wall or below the skyline',
+      columns: HOURS,
+      min: 0,
+      max: 1,
+    },
+    refuses: (a) => overhangProblem(a) ?? finProblem(a),
+    evaluate: (a) =>
+      monthHourMask(
+        { latitude: num(a, 'latitude'), longitude: num(a, 'longitude'), utcOffset: num(a, 'utcOffset') },
+        openingOf(a),
+        fullShadingOf(a),
+        num(a, 'surfaceAzimuth'),
+        { day: num(a, 'day'), year: num(a, 'year') },
+      ),
+    examples: [{ args: ['51.5', '-0.1', '0', '180', '1.2', '1.5', '0.8', '0.1', '0.3', '0.3'], note: 'a south window in London under a 0.8 overhang: shaded at midday in summer, sunlit in winter' }],
+  },
+];

@@ -71,7 +71,7 @@ describe('closed forms for long overhangs and tall fins (ASHRAE Fundamentals, Fe
         (W, P, gap, alt, g, surf) => {
           const fin: Fin = { projection: P, gap, extensionAbove: WIDE, extensionBelow: WIDE };
           const expected = clip01(1 - (P * Math.tan(g * RAD) - gap) / W);
-          // γ > 0: sun to the LEFT of the normal (seen from outside), so the left fin shades.
+          // Sun azimuth = surface azimuth + g (g > 0): the sun is to the LEFT seen from outside, so the left fin shades.
           const leftSunLeft = sunlitFraction({ width: W, height: 1 }, { leftFin: fin }, alt, surf + g, surf);
           const rightSunRight = sunlitFraction({ width: W, height: 1 }, { rightFin: fin }, alt, surf - g, surf);
           const leftSunRight = sunlitFraction({ width: W, height: 1 }, { leftFin: fin }, alt, surf - g, surf);

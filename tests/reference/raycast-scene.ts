@@ -5,7 +5,7 @@
  * sun direction comes straight from its altitude and azimuth, and rays from sample points on the
  * glass toward the sun are tested with three.js's `Raycaster` (Möller–Trumbore triangle tests).
  *
- * Nothing here uses Sunpane's shading code or its wall-frame formulas (a = −tan γ, b = tan Ω): the
+ * Nothing here uses Sunpane's shading code or its wall-frame formulas (a = tan γ, b = tan Ω): the
  * window frame is placed by its compass azimuth only, with "right as seen from outside" taken as
  * the compass direction surface azimuth − 90° (for a viewer facing the window).
  *
