@@ -59,12 +59,15 @@ export function requireRange(
   unit?: string,
   options: { exclusiveMin?: boolean; exclusiveMax?: boolean; integer?: boolean } = {},
 ): number {
-  const allowed = rangeText(min, max, unit, options);
-  if (typeof value !== 'number' || !Number.isFinite(value)) throw new SunpaneError(argument, value, allowed);
-  if (options.integer && !Number.isInteger(value)) throw new SunpaneError(argument, value, allowed);
-  if (min !== undefined && (options.exclusiveMin ? value <= min : value < min)) throw new SunpaneError(argument, value, allowed);
-  if (max !== undefined && (options.exclusiveMax ? value >= max : value > max)) throw new SunpaneError(argument, value, allowed);
-  return value;
+  // The message is built only on failure: this check sits on hot paths.
+  const ok =
+    typeof value === 'number' &&
+    Number.isFinite(value) &&
+    (!options.integer || Number.isInteger(value)) &&
+    (min === undefined || (options.exclusiveMin ? value > min : value >= min)) &&
+    (max === undefined || (options.exclusiveMax ? value < max : value <= max));
+  if (!ok) throw new SunpaneError(argument, value, rangeText(min, max, unit, options));
+  return value as number;
 }
 
 /** The words for an allowed range, used in every range message so they read alike. */
