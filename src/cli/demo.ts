@@ -19,7 +19,7 @@ import { type Flags, parseFlags } from './flags';
 import { type DemoFormulaSet, addFormulaSheet, demoFormulas } from './demoFormulas';
 import { ProgressBar } from './progress';
 import { type SummaryTotals, type WindowResult, addSummaryTable, windowResult } from './schedule';
-import { COLOURS, type ExcelJS, NUMBER_FORMATS, type TableCell, addDataTable, address, fitOnOnePage, freezeAt, newWorkbook, saveWorkbook, setFormula, setLabel } from './workbook';
+import { COLOURS, type ExcelJS, NUMBER_FORMATS, type TableCell, addDataTable, address, fitOnOnePage, freezeAt, newWorkbook, saveWorkbook, setFormula, setLabel, styleHeader } from './workbook';
 
 export const DEMO_HELP = `usage: sunpane demo [--out DIR]
 
@@ -181,7 +181,7 @@ function addOverview(wb: ExcelJS.Workbook, results: DemoResults): { cell: string
   const checks: { cell: string; expected: number }[] = [];
   const totalCol = 5 + FACINGS.length;
   ws.getCell(top, totalCol).value = 'all facings [kWh]';
-  ws.getCell(top, totalCol).font = { bold: true };
+  styleHeader(ws, top, totalCol, totalCol);
   ws.getColumn(totalCol).width = 18;
   rows.forEach((r, k) => {
     const row = top + 1 + k;
