@@ -7,7 +7,7 @@ import { SunpaneError } from '../core/errors';
 import type { WindowSpec } from '../core/window';
 import { COMPARE_FORMATS, COMPARE_HEADER, MAX_OPTIONS, OPTION_FIELDS, type ShadingOption, comparisonRows, optionSpecs } from './compare';
 import { makeReplaceDialog } from './dialog';
-import { byId, h, show } from './dom';
+import { byId, h } from './dom';
 import { type YearResult, runYear, validateSpec } from './engine';
 import { FIELD_BY_ID, type FormValues, applyExampleSite } from './fields';
 import { applyVisibility, fillForm, readForm, renderForm, showProblems } from './formView';

@@ -10,7 +10,7 @@ import type { MaskGrid, SunTrack } from './engine';
 /** Our colours for the diagram. */
 export const SUN_PATH_COLOURS = {
   open: '#FFFFFF',
-  part: '#F4C979',
+  part: ['#FBE7B5', '#F4C462', '#E08A3C'],
   full: '#B6552F',
   behind: '#D9DDE1',
   grid: '#9AA5AE',
@@ -69,20 +69,24 @@ export function sunPathSvg(d: SunPathDrawing): string {
   const c = SUN_PATH_COLOURS;
   const parts: string[] = [];
   const legendTop = SIZE + 8;
-  const height = legendTop + 58;
+  const height = legendTop + 84;
   parts.push(`<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 ${SIZE} ${height}" width="100%" role="img" aria-labelledby="sp-title sp-desc" class="sun-path">`);
   parts.push(`<title id="sp-title">Sun path and shading mask</title><desc id="sp-desc">${escapeXml(d.caption)}</desc>`);
   parts.push(`<circle cx="${CX}" cy="${CY}" r="${R}" fill="${c.open}"/>`);
 
-  // Mask bands.
+  // Mask bands: partly shaded cells in three steps of shaded share (a third, two thirds).
   if (d.mask) {
-    const byKind: Record<string, string[]> = { part: [], full: [], behind: [] };
+    const byBand: Record<string, string[]> = { behind: [], part1: [], part2: [], part3: [], full: [] };
     for (const cell of d.mask.cells) {
       if (cell.kind === 'open') continue;
-      byKind[cell.kind].push(sector(cell.azimuth, cell.azimuth + d.mask.azimuthStep, cell.altitude, Math.min(90, cell.altitude + d.mask.altitudeStep)));
+      const shaded = 1 - cell.sunlit;
+      const band = cell.kind === 'part' ? (shaded < 1 / 3 ? 'part1' : shaded < 2 / 3 ? 'part2' : 'part3') : cell.kind;
+      byBand[band].push(sector(cell.azimuth, cell.azimuth + d.mask.azimuthStep, cell.altitude, Math.min(90, cell.altitude + d.mask.altitudeStep)));
     }
-    for (const kind of ['behind', 'part', 'full'] as const) {
-      if (byKind[kind].length) parts.push(`<path class="mask-${kind}" d="${byKind[kind].join('')}" fill="${c[kind]}" stroke="${c[kind]}" stroke-width="0.4"/>`);
+    for (const band of ['behind', 'part1', 'part2', 'part3', 'full'] as const) {
+      const colour = band.startsWith('part') ? c.part[Number(band.slice(4)) - 1] : c[band as 'behind' | 'full'];
+      const cls = band.startsWith('part') ? `mask-part ${band}` : `mask-${band}`;
+      if (byBand[band].length) parts.push(`<path class="${cls}" d="${byBand[band].join('')}" fill="${colour}" stroke="${colour}" stroke-width="0.4"/>`);
     }
   }
 
@@ -144,25 +148,31 @@ export function sunPathSvg(d: SunPathDrawing): string {
     }
   });
 
-  // Legend.
+  // Legend: track lines, then mask swatches, flowed into rows across the width.
   const labels = d.trackLabels ?? d.tracks.map((t) => `${t.day} ${MONTH_NAMES[t.month - 1]}`);
-  labels.forEach((label, i) => {
-    const x = 8 + i * 104;
-    parts.push(`<line x1="${x}" y1="${legendTop + 6}" x2="${x + 16}" y2="${legendTop + 6}" stroke="${c.tracks[i % c.tracks.length]}" stroke-width="2"/>`);
-    parts.push(`<text x="${x + 20}" y="${legendTop + 9}" font-size="9" fill="${c.rim}">${escapeXml(label)}</text>`);
-  });
-  const keys: [string, string][] = [
-    ['not shaded', c.open],
-    ['partly shaded', c.part],
-    ['fully shaded', c.full],
-    ['behind the wall', c.behind],
+  const items: { label: string; draw: (x: number, y: number) => string }[] = [
+    ...labels.map((label, i) => ({ label, draw: (x: number, y: number) => `<line x1="${x}" y1="${y - 3}" x2="${x + 12}" y2="${y - 3}" stroke="${c.tracks[i % c.tracks.length]}" stroke-width="2"/>` })),
+    ...([
+      ['not shaded', c.open],
+      ['< ⅓ shaded', c.part[0]],
+      ['⅓–⅔', c.part[1]],
+      ['> ⅔', c.part[2]],
+      ['fully shaded', c.full],
+      ['behind the wall', c.behind],
+    ] as const).map(([label, colour]) => ({ label, draw: (x: number, y: number) => `<rect x="${x + 1}" y="${y - 8}" width="10" height="10" fill="${colour}" stroke="${c.rim}" stroke-width="0.5"/>` })),
   ];
-  keys.forEach(([label, colour], i) => {
-    const x = 8 + i * 78;
-    parts.push(`<rect x="${x}" y="${legendTop + 18}" width="10" height="10" fill="${colour}" stroke="${c.rim}" stroke-width="0.5"/>`);
-    parts.push(`<text x="${x + 14}" y="${legendTop + 27}" font-size="8.5" fill="${c.rim}">${label}</text>`);
+  let lx = 8;
+  let ly = legendTop + 10;
+  items.forEach((item, i) => {
+    const w = 18 + item.label.length * 4.4;
+    if ((lx + w > SIZE - 4 && lx > 8) || i === labels.length) {
+      lx = 8;
+      ly += 15;
+    }
+    parts.push(item.draw(lx, ly), `<text x="${lx + 15}" y="${ly}" font-size="8.5" fill="${c.rim}">${escapeXml(item.label)}</text>`);
+    lx += w + 8;
   });
-  parts.push(`<text x="8" y="${legendTop + 46}" font-size="8.5" fill="${c.rim}">${escapeXml(d.caption)}</text>`);
+  d.caption.split('; ').forEach((line, i) => parts.push(`<text x="8" y="${ly + 17 + i * 11}" font-size="8.5" fill="${c.rim}">${escapeXml(line)}</text>`));
   parts.push('</svg>');
   return parts.join('');
 }

@@ -1,0 +1,41 @@
+/** Shading options compared against the unshaded window. */
+import type { WindowSpec } from '../../src/core/window';
+import { validateWindowSpec } from '../../src/core/windowSpec';
+import { comparisonRows, optionShading, optionSpecs, starterOptions } from '../../src/taskpane/compare';
+import { initialValues } from '../../src/taskpane/fields';
+import { buildWindowSpec } from '../../src/taskpane/spec';
+
+const validate = (s: WindowSpec) => void validateWindowSpec(s);
+
+describe('shading options', () => {
+  test('an option becomes a shading set with only its non-zero devices and the base skyline', () => {
+    const s = optionShading({ label: 'x', overhangDepth: '0.8', overhangGap: '0.1', overhangReach: '0.2', leftFinDepth: '', rightFinDepth: '0.3', finGap: '0.05', setBack: '0' }, [10, 20]);
+    expect(s).toEqual({
+      overhang: { projection: 0.8, gap: 0.1, extensionLeft: 0.2, extensionRight: 0.2 },
+      rightFin: { projection: 0.3, gap: 0.05, extensionAbove: 0, extensionBelow: 0 },
+      skyline: [10, 20],
+    });
+  });
+
+  test('the unshaded window comes first, devices removed; a bad option is named with its number, label and column', () => {
+    const base = buildWindowSpec({ ...initialValues(), year: '2025', overhangProjection: '0.4' });
+    const specs = optionSpecs(base, starterOptions(), validate);
+    expect(specs.map((s) => s.label)).toEqual(['No outside shading', 'Short overhang', 'Deep overhang', 'Overhang and fins']);
+    expect(specs[0].spec.shading).toEqual({});
+    const bad = [...starterOptions()];
+    bad[1] = { ...bad[1], overhangGap: 'high' };
+    expect(() => optionSpecs(base, bad, validate)).toThrow('shading.overhang.gap = "high" is not allowed: must be a number from 0 to 1000 m (option 2 "Deep overhang", column "Overhang gap m")');
+    expect(() => optionSpecs(base, new Array(7).fill(starterOptions()[0]), validate)).toThrow(/at most 6/);
+  });
+
+  test('the cut is 1 − annual ÷ unshaded annual in %, and the shaded share is 1 − mean sunlit share', () => {
+    const rows = comparisonRows([
+      { label: 'none', figures: { annualKWh: 400, peakW: 900, meanSunlitFraction: 1 } },
+      { label: 'deep', figures: { annualKWh: 300, peakW: 600, meanSunlitFraction: 0.62 } },
+    ]);
+    expect(rows).toEqual([
+      ['none', 400, 900, 0, 0],
+      ['deep', 300, 600, 25, 0.38],
+    ]);
+  });
+});

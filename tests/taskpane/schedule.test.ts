@@ -1,0 +1,70 @@
+/** The window schedule: headers of our own, one row per window, problems named by row and column. */
+import type { WindowSpec } from '../../src/core/window';
+import { validateWindowSpec } from '../../src/core/windowSpec';
+import { initialValues } from '../../src/taskpane/fields';
+import { headerKey, readSchedule, summaryRow } from '../../src/taskpane/schedule';
+
+const validate = (s: WindowSpec) => void validateWindowSpec(s);
+const form = { ...initialValues(), year: '2025' };
+
+describe('the window schedule', () => {
+  test('headers match without regard to case, spacing or units in brackets', () => {
+    expect(headerKey('Overhang depth (m)')).toBe('overhangdepth');
+    expect(headerKey(' FACES [°] ')).toBe('faces');
+  });
+
+  test('each row overrides the form; blank optional cells keep the form value; an overhang reach sets both sides', () => {
+    const { rows, problems } = readSchedule(
+      [
+        ['Window', 'Faces', 'Width', 'Height', 'SHGC', 'Overhang depth', 'Overhang reach', 'Latitude'],
+        ['S1', 180, 1.2, 1.4, '', 0.5, 0.25, -33.9],
+        ['', '', '', '', '', '', '', ''],
+        ['E1', 90, 2, 1.5, 0.3, 0, 0, ''],
+      ],
+      form,
+      validate,
+    );
+    expect(problems).toEqual([]);
+    expect(rows.map((r) => r.row)).toEqual([1, 3]);
+    expect(rows[0].spec.glazing.shgc).toBe(0.4);
+    expect(rows[0].spec.shading.overhang).toEqual({ projection: 0.5, gap: 0, extensionLeft: 0.25, extensionRight: 0.25 });
+    expect(rows[0].spec.site.latitude).toBe(-33.9);
+    expect(rows[1].spec.site.latitude).toBe(52.2);
+    expect(rows[1].spec.shading).toEqual({});
+  });
+
+  test('unknown headers and missing required columns are reported before any row', () => {
+    const { problems } = readSchedule([['Window', 'Facing', 'Width']], form, validate);
+    expect(problems.map((p) => p.message)).toEqual([
+      'Header "Facing" is not a schedule column (see the list of headers).',
+      'The table has no "Faces" column, which every schedule needs.',
+      'The table has no "Height" column, which every schedule needs.',
+    ]);
+  });
+
+  test('every bad row is named with its column and the core message, and no row is returned for it', () => {
+    const { rows, problems } = readSchedule(
+      [
+        ['Window', 'Faces', 'Width', 'Height', 'Fin gap', 'Left fin depth'],
+        ['A', 400, 1, 1, 0, 0],
+        ['', 180, 1, 1, 0, 0],
+        ['C', 180, 1, 1, -0.2, 0.3],
+        ['D', 180, 1, 1, 0, 0],
+      ],
+      form,
+      validate,
+    );
+    expect(rows.map((r) => r.spec.name)).toEqual(['D']);
+    expect(problems.map((p) => p.message)).toEqual([
+      'Row 1 (A), column "Faces": surfaceAzimuth = 400 is not allowed: must be a number from 0 to 360 °',
+      'Row 2, column "Window": blank is not allowed: every window needs a label.',
+      'Row 3 (C), column "Fin gap": shading.leftFin.gap = -0.2 is not allowed: must be a number from 0 to 1000 m',
+    ]);
+  });
+
+  test('a summary row gives kWh per m² of glass as annual kWh over glass area', () => {
+    const spec = { name: 'X', surfaceAzimuth: 90 } as WindowSpec;
+    const row = summaryRow(spec, { annualKWh: 300, peakW: 512.345, peakStamp: 45800.5, meanSunlitFraction: 0.81234, missingHours: 2, glassArea: 2.5 });
+    expect(row).toEqual(['X', 90, 2.5, 300, 120, 512.3, 45800.5, 0.812, 2]);
+  });
+});

@@ -1,0 +1,94 @@
+/**
+ * From the form's boxes to a WindowSpec, and the core's validation messages back beside the boxes.
+ * Expected messages are produced by the core's own validator (src/core/windowSpec.ts) on specs
+ * written out here, so the test checks that the pane passes values through unchanged and puts each
+ * message beside the right box.
+ */
+import { SunpaneError } from '../../src/core/errors';
+import type { WindowSpec } from '../../src/core/window';
+import { validateWindowSpec } from '../../src/core/windowSpec';
+import { applyExampleSite, fieldForArgument, initialValues } from '../../src/taskpane/fields';
+import { buildWindowSpec, findProblems, isClean, readListText, readNumberText } from '../../src/taskpane/spec';
+
+const validate = (s: WindowSpec) => void validateWindowSpec(s);
+
+function coreMessage(spec: WindowSpec): string {
+  try {
+    validateWindowSpec(spec);
+  } catch (err) {
+    if (err instanceof SunpaneError) return err.message;
+  }
+  throw new Error('expected a refusal');
+}
+
+describe('the window form', () => {
+  test('the initial form is a valid window with no devices, clear sky and the usual defaults', () => {
+    const spec = buildWindowSpec({ ...initialValues(), year: '2025' });
+    expect(() => validateWindowSpec(spec)).not.toThrow();
+    expect(spec.glazing).toEqual({ shgc: 0.4, panes: 2, interiorAttenuation: 1 });
+    expect(spec.frameFraction).toBe(0.15);
+    expect(spec.groundAlbedo).toBe(0.2);
+    expect(spec.shading).toEqual({});
+    expect(spec.weather).toEqual({ kind: 'ineichenClearSky', linkeTurbidity: [3] });
+  });
+
+  test('devices appear only when their depth is not zero, and blank device boxes mean zero', () => {
+    const spec = buildWindowSpec({ ...initialValues(), overhangProjection: '0.6', overhangGap: '', rightFinProjection: '0.3', revealDepth: '0.1' });
+    expect(spec.shading.overhang).toEqual({ projection: 0.6, gap: 0, extensionLeft: 0, extensionRight: 0 });
+    expect(spec.shading.leftFin).toBeUndefined();
+    expect(spec.shading.rightFin).toEqual({ projection: 0.3, gap: 0, extensionAbove: 0, extensionBelow: 0 });
+    expect(spec.shading.revealDepth).toBe(0.1);
+  });
+
+  test('numbers are read as typed; text and blanks go to the core as they are', () => {
+    expect(readNumberText(' 0.35 ')).toBe(0.35);
+    expect(readNumberText('')).toBeNull();
+    expect(readNumberText('abc')).toBe('abc');
+    expect(readListText('3.1, 3.3; 3.6  4')).toEqual([3.1, 3.3, 3.6, 4]);
+  });
+
+  test("each bad box gets the core's own message, all at once", () => {
+    const values = { ...initialValues(), year: '2025', shgc: '1.4', latitude: 'north', width: '' };
+    const problems = findProblems(values, validate);
+    const base = buildWindowSpec({ ...initialValues(), year: '2025' });
+    expect(problems.byField.shgc).toBe(coreMessage({ ...base, glazing: { ...base.glazing, shgc: 1.4 } }));
+    expect(problems.byField.latitude).toBe(coreMessage({ ...base, site: { ...base.site, latitude: 'north' as never } }));
+    expect(problems.byField.width).toBe(coreMessage({ ...base, width: null as never }));
+    expect(Object.keys(problems.byField).sort()).toEqual(['latitude', 'shgc', 'width']);
+    expect(problems.general).toEqual([]);
+  });
+
+  test('a device on a tilted window is refused beside the tilt box', () => {
+    const problems = findProblems({ ...initialValues(), year: '2025', surfaceTilt: '45', overhangProjection: '0.5' }, validate);
+    expect(problems.byField.surfaceTilt).toMatch(/^surfaceTilt = 45 is not allowed: must be 90/);
+  });
+
+  test('twelve monthly turbidities are checked value by value, and the message lands beside the list box', () => {
+    const problems = findProblems({ ...initialValues(), year: '2025', linkeTurbidity: '3,3,3,3,3,30,3,3,3,3,3,3' }, validate);
+    const base = buildWindowSpec({ ...initialValues(), year: '2025' });
+    const monthly = [3, 3, 3, 3, 3, 30, 3, 3, 3, 3, 3, 3];
+    expect(problems.byField.linkeTurbidity).toBe(coreMessage({ ...base, weather: { kind: 'ineichenClearSky', linkeTurbidity: monthly } }));
+    expect(problems.byField.linkeTurbidity).toMatch(/^weather\.linkeTurbidity\[5\] = 30 is not allowed/);
+    expect(isClean(findProblems({ ...initialValues(), year: '2025', linkeTurbidity: '3,3,3,3,3,3,3,3,3,3,3,3' }, validate))).toBe(true);
+  });
+
+  test('hourly weather needs two range addresses, checked before anything is read', () => {
+    const problems = findProblems({ ...initialValues(), year: '2025', weatherSource: 'measured', dniAddress: 'Weather!B2:B8761', dhiAddress: 'nowhere' }, validate);
+    expect(problems.byField).toEqual({ dhiAddress: expect.stringMatching(/^weather\.dhi = "nowhere" is not allowed: must be a range address/) });
+  });
+
+  test('messages find their box by the longest matching path', () => {
+    expect(fieldForArgument('shading.overhang.projection')?.id).toBe('overhangProjection');
+    expect(fieldForArgument('shading.overhang.extensionRight')?.id).toBe('overhangExtensionRight');
+    expect(fieldForArgument('glazing.angleTable.values[3]')?.id).toBe('angleTableAddress');
+    expect(fieldForArgument('shading.skyline[2]')?.id).toBe('skylineAddress');
+    expect(fieldForArgument('site.latitude')?.id).toBe('latitude');
+    expect(fieldForArgument('nothing.like.this')).toBeUndefined();
+  });
+
+  test('picking an example site fills the place, ground and turbidity boxes from the shared example list', () => {
+    const v = applyExampleSite(initialValues(), 'kestrelHeads');
+    expect([v.latitude, v.longitude, v.utcOffset]).toEqual(['-37.9', '145', '10']);
+    expect(readListText(v.linkeTurbidity)).toHaveLength(12);
+  });
+});

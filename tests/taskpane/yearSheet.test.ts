@@ -1,0 +1,86 @@
+/**
+ * Writing an hourly year to a new sheet, in node against the fake Excel host. The hourly columns
+ * here are invented numbers (demo data): the test checks placement, blocks, rounding and cancel,
+ * not physics.
+ */
+import { rowBlocks } from '../../src/taskpane/blocks';
+import { RunCancelled, type RunBatch } from '../../src/taskpane/resultSheets';
+import { type HourColumns, type YearFigures, dayHourGrid, hourRows, writeYearSheet } from '../../src/taskpane/yearSheet';
+// eslint-disable-next-line @typescript-eslint/no-require-imports
+const { createExcelHost } = require('../browser/excel-host.js');
+
+const HOURS = 8760;
+/** Invented columns: row i holds recognisable values (gain = i mod 1000 + 0.26). */
+function columns(): HourColumns {
+  const col = (f: (i: number) => number) => Float64Array.from({ length: HOURS }, (_, i) => f(i));
+  return {
+    stampSerial: col((i) => 45658 + (i + 1) / 24),
+    sunAltitude: col((i) => ((i % 24) - 12) * 5.123456),
+    sunAzimuth: col((i) => (i * 15) % 360),
+    incidence: col(() => 45.6789),
+    profileAngle: col(() => 30.4444),
+    sunlitFraction: col((i) => (i % 3) / 3),
+    dni: col(() => 800.04),
+    dhi: col(() => 100.06),
+    beam: col(() => 500.01),
+    sky: col(() => 50.55),
+    ground: col(() => 10.1),
+    shgc: col(() => 0.41234),
+    gain: col((i) => (i % 1000) + 0.26),
+    missing: new Uint8Array(HOURS),
+  };
+}
+const FIGURES: YearFigures = { monthlyKWh: new Array(12).fill(100.123), annualKWh: 1201.476, peakW: 999.26, peakStamp: 45700.5, sunlitHours: 3000, meanSunlitFraction: 0.8, missingHours: 0, glassArea: 2.3 };
+
+function setup() {
+  const { Excel, host } = createExcelHost();
+  const run: RunBatch = (batch) => Excel.run(batch);
+  return { run, host };
+}
+
+describe('the hourly year sheet', () => {
+  test('the rows are rounded for the sheet, and the day × hour grid reads day d, hour h from row 24d + h', () => {
+    const cols = columns();
+    expect(hourRows(cols, 0, 1)[0]).toEqual([45658.041667, -61.48, 0, 45.68, 30.44, 0, 800, 100.1, 500, 50.6, 10.1, 0.412, 0.3, 0]);
+    const grid = dayHourGrid(cols);
+    expect(grid).toHaveLength(365);
+    expect(grid[2][0]).toBe(45660);
+    expect(grid[2][1 + 5]).toBe(Math.round(cols.gain[2 * 24 + 5]));
+  });
+
+  test('the year goes to the named sheet in blocks of at most the block size, every request under 5 MB', async () => {
+    const { run, host } = setup();
+    const progress: number[] = [];
+    const name = await writeYearSheet(run, { name: 'W hourly' }, { title: 'T', lines: ['a', 'b', 'c'] }, columns(), FIGURES, { blockRows: 2000, onProgress: (d) => progress.push(d) });
+    expect(name).toBe('W hourly');
+    expect(progress).toEqual([...rowBlocks(HOURS, 2000).map((b) => b.end), HOURS]);
+    const blocks = host.state.syncs.flatMap((s: { valueRows: number[] }) => s.valueRows).filter((n: number) => n >= 500);
+    expect(blocks).toEqual([2000, 2000, 2000, 2000, 760]);
+    expect(host.state.syncs.every((s: { bytes: number }) => s.bytes < 5 * 1024 * 1024)).toBe(true);
+    expect(host.read('W hourly', 'M6:M7')).toEqual([[0.3], [1.3]]);
+    expect(host.read('W hourly', 'M8765:M8765')).toEqual([[759.3]]);
+    expect(host.formatAt('W hourly', 'A6')).toBe('yyyy-mm-dd hh:mm');
+    expect(host.read('W hourly', 'P18:Q18')).toEqual([['Year', 1201.48]]);
+    expect(host.tables()).toEqual([expect.objectContaining({ sheet: 'W hourly', address: 'A5:N8765' })]);
+  });
+
+  test('cancel after the first block removes the half-written sheet and says so', async () => {
+    const { run, host } = setup();
+    let blocksDone = 0;
+    const write = writeYearSheet(run, { name: 'W hourly' }, { title: 'T', lines: [] }, columns(), FIGURES, {
+      onProgress: () => blocksDone++,
+      cancelled: () => blocksDone >= 1,
+    });
+    await expect(write).rejects.toThrow(RunCancelled);
+    await expect(write).rejects.toThrow('Stopped: the half-written sheet was removed.');
+    expect(host.sheetNames()).toEqual([]);
+  });
+
+  test('an earlier result sheet the user agreed to replace is deleted and written anew under its name', async () => {
+    const { run, host } = setup();
+    host.addUserSheet('W hourly', [['old']]);
+    await writeYearSheet(run, { name: 'W hourly', replaces: 'W hourly' }, { title: 'New', lines: [] }, columns(), FIGURES);
+    expect(host.sheetNames()).toEqual(['W hourly']);
+    expect(host.read('W hourly', 'A1')).toEqual([['New']]);
+  });
+});
