@@ -81,7 +81,6 @@ describe('the sunlit fraction agrees with three.js ray casting', () => {
         worstCase = c;
       }
     }
-    if (process.env.SUNPANE_DEBUG) console.log({ worst, bias: biasSum / CASES, partlyShaded });
     // The cases must exercise partial shading, not only all-lit / all-dark windows.
     expect(partlyShaded).toBeGreaterThan(CASES / 2);
     if (worst > PER_CASE) throw new Error(`worst |difference| ${worst} > ${PER_CASE} for ${JSON.stringify(worstCase)}`);
