@@ -13,6 +13,21 @@
  *
  * The transcription is checked against the row counts and column sums of REFERENCES.md §1
  * (tests/reference/spa-worked-example.test.ts).
+ *
+ * The sums over the tables ({@link earthPeriodicSums}, {@link nutationSums}) are arranged for speed
+ * without changing the algorithm:
+ * - Earth terms: cos(B + Cτ) = cos B · cos Cτ − sin B · sin Cτ, with A cos B and A sin B computed once
+ *   and cos Cτ, sin Cτ once per distinct frequency. Frequencies that differ only by the rounding of
+ *   the table (e.g. 6283.07585, 6283.0758, 6283.076, 6283.08 in different series) share the value of
+ *   their largest-amplitude term, and a frequency within 0.01 rad/millennium of the sum or difference
+ *   of two lower ones is composed from them by angle addition (VSOP87 frequencies are combinations
+ *   of the planets' mean motions): 195 terms need 68 frequencies, of which only 18 call Math.cos and
+ *   Math.sin. The error of these substitutions is at most Σ A·|ΔC|·|τ|, given per unit τ by
+ *   {@link EARTH_FREQUENCY_MERGE_BOUND} and checked in tests/core/spaTerms.test.ts against the
+ *   plain term-by-term sums — far below the SPA's ±0.0003°.
+ * - Nutation: each argument is an integer combination of the five fundamental arguments X0…X4
+ *   (multipliers −2…3), so sin and cos of every row follow exactly from sin and cos of X0…X4 and
+ *   their multiples by the angle-addition formulas: 5 sine/cosine pairs instead of 63.
  */
 
 /** One Earth periodic term: amplitude A [1e-8 rad or 1e-8 AU], phase B [rad], frequency C [rad per millennium]. */
@@ -316,3 +331,226 @@ export const NUTATION_TERMS: readonly NutationTerm[] = [
   [0, 0, 3, 2, 2, -3, 0, 0, 0],
   [2, -1, 0, 2, 2, -3, 0, 0, 0],
 ];
+
+/** Merging of equal-but-for-rounding frequencies: at most this far apart [rad per millennium]. */
+const FREQUENCY_MERGE = 0.01;
+/** Largest Σ A·|ΔC| a composed frequency may add [1e-8 rad or AU per unit τ]. */
+const COMPOSE_BUDGET = 0.2;
+
+interface EarthPlan {
+  /** Effective frequency [rad per millennium] of each frequency slot. */
+  frequencies: Float64Array;
+  /**
+   * How to get cos and sin of each slot, in evaluation order: per slot `[slot, i, j, sign]` — with
+   * i < 0 by Math.cos/Math.sin, otherwise by angle addition from slots i and j (frequency
+   * f_i + sign·f_j).
+   */
+  recipe: Int32Array;
+  /** Per term: A cos B, A sin B, and the index of its frequency slot. */
+  aCosB: Float64Array;
+  aSinB: Float64Array;
+  frequencyOf: Int32Array;
+  /** Term index range [start[s], start[s + 1]) of series s: L0…L5, B0…B1, R0…R4. */
+  start: Int32Array;
+  /** Σ A·|C_effective − C| per quantity L, B, R [1e-8 rad or AU per unit τ]. */
+  mergeBound: [number, number, number];
+}
+
+function buildEarthPlan(): EarthPlan {
+  const series = [...L_TERMS, ...B_TERMS, ...R_TERMS];
+  const quantity = [...L_TERMS.map(() => 0), ...B_TERMS.map(() => 1), ...R_TERMS.map(() => 2)];
+  const terms = series.flatMap((rows, s) => rows.map((r) => ({ s, a: r[0], b: r[1], c: r[2] })));
+  // Representative frequencies: each term, largest amplitude first, joins a slot within FREQUENCY_MERGE or opens one.
+  const wanted: number[] = [];
+  const slotOf = new Map<(typeof terms)[number], number>();
+  const weight: number[] = [];
+  for (const t of [...terms].sort((x, y) => y.a - x.a)) {
+    let g = wanted.findIndex((f) => Math.abs(f - t.c) <= FREQUENCY_MERGE);
+    if (g < 0) g = wanted.push(t.c) - 1;
+    weight[g] = (weight[g] ?? 0) + t.a;
+    slotOf.set(t, g);
+  }
+  // Slots in ascending frequency; each is the sum or difference of two earlier ones when that lands
+  // within FREQUENCY_MERGE of it (VSOP frequencies are combinations of planetary mean motions), else direct.
+  const order = wanted.map((_, g) => g).sort((x, y) => wanted[x] - wanted[y]);
+  const effective = new Float64Array(wanted.length);
+  const recipe: number[] = [];
+  const done: number[] = [];
+  for (const g of order) {
+    let best: [number, number, number] | undefined;
+    // Composition error budget: Σ A·miss ≤ COMPOSE_BUDGET per slot (1e-8 units per unit τ).
+    let bestMiss = Math.min(FREQUENCY_MERGE, COMPOSE_BUDGET / weight[g]);
+    for (let x = 0; x < done.length && wanted[g] !== 0; x++) {
+      for (let y = 0; y < done.length; y++) {
+        const [i, j] = [done[x], done[y]];
+        if (effective[i] === 0 || effective[j] === 0) continue;
+        for (const sign of [1, -1]) {
+          const miss = Math.abs(effective[i] + sign * effective[j] - wanted[g]);
+          if (miss <= bestMiss) [best, bestMiss] = [[i, j, sign], miss];
+        }
+      }
+    }
+    if (best) {
+      effective[g] = effective[best[0]] + best[2] * effective[best[1]];
+      recipe.push(g, ...best);
+    } else {
+      effective[g] = wanted[g];
+      recipe.push(g, -1, -1, 0);
+    }
+    done.push(g);
+  }
+  const mergeBound: [number, number, number] = [0, 0, 0];
+  for (const t of terms) mergeBound[quantity[t.s]] += t.a * Math.abs(effective[slotOf.get(t) as number] - t.c);
+  const start = new Int32Array(series.length + 1);
+  series.forEach((rows, s) => (start[s + 1] = start[s] + rows.length));
+  return {
+    frequencies: effective,
+    recipe: Int32Array.from(recipe),
+    aCosB: Float64Array.from(terms, (t) => t.a * Math.cos(t.b)),
+    aSinB: Float64Array.from(terms, (t) => t.a * Math.sin(t.b)),
+    frequencyOf: Int32Array.from(terms, (t) => slotOf.get(t) as number),
+    start,
+    mergeBound,
+  };
+}
+
+const EARTH = buildEarthPlan();
+const FREQ_COS = new Float64Array(EARTH.frequencies.length);
+const FREQ_SIN = new Float64Array(EARTH.frequencies.length);
+
+/**
+ * Upper bound of the error from the shared and composed frequencies per unit |τ|, in radians (L, B)
+ * and AU (R): the error at τ is at most this times |τ| (τ = 0.1 in 2100).
+ */
+export const EARTH_FREQUENCY_MERGE_BOUND: readonly [number, number, number] = EARTH.mergeBound.map((b) => b / 1e8) as [number, number, number];
+
+/** Number of distinct frequencies, and of those needing Math.cos/Math.sin, per instant. */
+export const EARTH_FREQUENCY_COUNT = EARTH.frequencies.length;
+export const EARTH_DIRECT_FREQUENCY_COUNT = EARTH.recipe.filter((_, k) => k % 4 === 1).filter((i) => i < 0).length;
+
+function seriesSum(s: number): number {
+  let sum = 0;
+  const { aCosB, aSinB, frequencyOf } = EARTH;
+  for (let k = EARTH.start[s], end = EARTH.start[s + 1]; k < end; k++) {
+    const f = frequencyOf[k];
+    sum += aCosB[k] * FREQ_COS[f] - aSinB[k] * FREQ_SIN[f]; // A cos(B + Cτ)
+  }
+  return sum;
+}
+
+/** Heliocentric longitude L [rad, not reduced], latitude B [rad] and radius vector R [AU]. */
+export interface EarthHeliocentric {
+  L: number;
+  B: number;
+  R: number;
+}
+
+/**
+ * Earth heliocentric longitude, latitude and radius vector from the periodic terms.
+ * @param jme - Julian ephemeris millennium τ from J2000.0
+ * @param out - object to fill
+ * @returns `out`: L [rad, not reduced to one turn], B [rad], R [AU]
+ * @remarks Reda & Andreas (2008), Eq. 9–12 and Table A4.2: X_n = Σ A cos(B + Cτ) (Eq. 9),
+ *   X = (X0 + X1 τ + X2 τ² + …) / 1e8 (Eq. 10, 11).
+ */
+export function earthPeriodicSums(jme: number, out: EarthHeliocentric): EarthHeliocentric {
+  const { frequencies, recipe } = EARTH;
+  for (let k = 0; k < recipe.length; k += 4) {
+    const g = recipe[k];
+    const i = recipe[k + 1];
+    if (i < 0) {
+      const arg = frequencies[g] * jme;
+      FREQ_COS[g] = Math.cos(arg);
+      FREQ_SIN[g] = Math.sin(arg);
+    } else {
+      const j = recipe[k + 2];
+      const sj = recipe[k + 3] * FREQ_SIN[j];
+      FREQ_COS[g] = FREQ_COS[i] * FREQ_COS[j] - FREQ_SIN[i] * sj; // cos(a ± b)
+      FREQ_SIN[g] = FREQ_SIN[i] * FREQ_COS[j] + FREQ_COS[i] * sj; // sin(a ± b)
+    }
+  }
+  // Horner in τ over the series of each quantity (Eq. 10): L0…L5 are series 0–5, B0…B1 6–7, R0…R4 8–12.
+  let l = 0;
+  for (let s = 5; s >= 0; s--) l = l * jme + seriesSum(s);
+  let b = 0;
+  for (let s = 7; s >= 6; s--) b = b * jme + seriesSum(s);
+  let r = 0;
+  for (let s = 12; s >= 8; s--) r = r * jme + seriesSum(s);
+  out.L = l / 1e8; // Eq. 11
+  out.B = b / 1e8;
+  out.R = r / 1e8;
+  return out;
+}
+
+/** Per nutation row: the (argument, |multiplier|, sign) triples of its non-zero multipliers, flattened. */
+const NUT_FACTORS: Int32Array = Int32Array.from(
+  NUTATION_TERMS.flatMap((row) => {
+    const triples: number[] = [];
+    for (let j = 0; j < 5; j++) if (row[j] !== 0) triples.push(j, Math.abs(row[j]), Math.sign(row[j]));
+    return triples;
+  }),
+);
+const NUT_FACTOR_START: Int32Array = (() => {
+  const start = new Int32Array(NUTATION_TERMS.length + 1);
+  NUTATION_TERMS.forEach((row, i) => (start[i + 1] = start[i] + 3 * row.slice(0, 5).filter((y) => y !== 0).length));
+  return start;
+})();
+const NUT_COEFFICIENTS = Float64Array.from(NUTATION_TERMS.flatMap((r) => r.slice(5)));
+/** cos and sin of m·X_j for j = 0…4, m = 0…3, index j·4 + m. */
+const MULTIPLE_COS = new Float64Array(20);
+const MULTIPLE_SIN = new Float64Array(20);
+
+/** Nutation in longitude and obliquity [°]. */
+export interface Nutation {
+  deltaPsi: number;
+  deltaEpsilon: number;
+}
+
+/**
+ * Nutation in longitude Δψ and obliquity Δε.
+ * @param jce - Julian ephemeris century T from J2000.0
+ * @param x - the fundamental arguments X0…X4 [°] (Eq. 15–19)
+ * @param out - object to fill
+ * @returns `out`: Δψ, Δε [°]
+ * @remarks Reda & Andreas (2008), Eq. 20–22 and Table A4.3: Δψ = Σ (a + bT) sin(Σ Xj Yj),
+ *   Δε = Σ (c + dT) cos(Σ Xj Yj), in 0.0001″.
+ */
+export function nutationSums(jce: number, x: readonly number[], out: Nutation): Nutation {
+  for (let j = 0; j < 5; j++) {
+    const argRad = ((x[j] % 360) * Math.PI) / 180;
+    const c1 = Math.cos(argRad);
+    const s1 = Math.sin(argRad);
+    const c2 = c1 * c1 - s1 * s1;
+    const s2 = 2 * s1 * c1;
+    const k = j * 4;
+    MULTIPLE_COS[k] = 1;
+    MULTIPLE_SIN[k] = 0;
+    MULTIPLE_COS[k + 1] = c1;
+    MULTIPLE_SIN[k + 1] = s1;
+    MULTIPLE_COS[k + 2] = c2;
+    MULTIPLE_SIN[k + 2] = s2;
+    MULTIPLE_COS[k + 3] = c2 * c1 - s2 * s1;
+    MULTIPLE_SIN[k + 3] = s2 * c1 + c2 * s1;
+  }
+  let psiSum = 0;
+  let epsSum = 0;
+  for (let i = 0; i < NUTATION_TERMS.length; i++) {
+    // cos and sin of Σ Xj Yj by angle addition.
+    let re = 1;
+    let im = 0;
+    for (let f = NUT_FACTOR_START[i], end = NUT_FACTOR_START[i + 1]; f < end; f += 3) {
+      const k = NUT_FACTORS[f] * 4 + NUT_FACTORS[f + 1];
+      const c = MULTIPLE_COS[k];
+      const s = NUT_FACTORS[f + 2] * MULTIPLE_SIN[k];
+      const next = re * c - im * s;
+      im = re * s + im * c;
+      re = next;
+    }
+    const q = i * 4;
+    psiSum += (NUT_COEFFICIENTS[q] + NUT_COEFFICIENTS[q + 1] * jce) * im; // Eq. 20
+    epsSum += (NUT_COEFFICIENTS[q + 2] + NUT_COEFFICIENTS[q + 3] * jce) * re; // Eq. 21
+  }
+  out.deltaPsi = psiSum / 36_000_000; // Eq. 22
+  out.deltaEpsilon = epsSum / 36_000_000;
+  return out;
+}

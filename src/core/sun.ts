@@ -14,7 +14,7 @@
  */
 import { DEG, RAD, asinClamped, wrap180, wrap360 } from './angles';
 import { SunpaneError, requireRange } from './errors';
-import { B_TERMS, L_TERMS, NUTATION_TERMS, R_TERMS, type EarthTerm } from './spaTerms';
+import { type EarthHeliocentric, type Nutation, earthPeriodicSums, nutationSums } from './spaTerms';
 import { deltaTAt, julianDay, requireSerial, requireUtcOffset, serialToUtcMs, utcMsToSerial } from './time';
 
 export { annualSunPath, type SunPathYear, type SunPathOptions } from './sunPath';
@@ -127,30 +127,9 @@ export interface SpaSteps {
   E: number;
 }
 
-/** Earth terms flattened for speed: per series, a Float64Array of A, B, C triples. */
-function flatten(series: readonly (readonly EarthTerm[])[]): Float64Array[] {
-  return series.map((rows) => Float64Array.from(rows.flat()));
-}
-const L_FLAT = flatten(L_TERMS);
-const B_FLAT = flatten(B_TERMS);
-const R_FLAT = flatten(R_TERMS);
-const NUT_Y = Float64Array.from(NUTATION_TERMS.flatMap((r) => r.slice(0, 5)));
-const NUT_ABCD = Float64Array.from(NUTATION_TERMS.flatMap((r) => r.slice(5)));
-const NUT_ROWS = NUTATION_TERMS.length;
-
-/** Σ over series i of τ^i · Σ A cos(B + C τ), scaled by 1e-8. Eq. 9–11. */
-function earthSeries(series: Float64Array[], jme: number): number {
-  let total = 0;
-  let power = 1;
-  for (let i = 0; i < series.length; i++) {
-    const s = series[i];
-    let sum = 0;
-    for (let k = 0; k < s.length; k += 3) sum += s[k] * cos(s[k + 1] + s[k + 2] * jme); // Eq. 9
-    total += sum * power; // Eq. 10
-    power *= jme;
-  }
-  return total / 1e8; // Eq. 11
-}
+const helio: EarthHeliocentric = { L: 0, B: 0, R: 0 };
+const nutation: Nutation = { deltaPsi: 0, deltaEpsilon: 0 };
+const fundamental = [0, 0, 0, 0, 0];
 
 /**
  * The Earth-fixed part of the SPA: every quantity that does not depend on the observer, for one
@@ -167,29 +146,21 @@ export function spaGeocentric(jd: number, deltaT: number, out: SpaSteps = emptyS
   const jce = (jde - JD_J2000) / 36_525; // Eq. 7
   const jme = jce / 10; // Eq. 8
 
-  const L = wrap360(earthSeries(L_FLAT, jme) * DEG); // Eq. 12
-  const B = earthSeries(B_FLAT, jme) * DEG;
-  const R = earthSeries(R_FLAT, jme);
+  earthPeriodicSums(jme, helio); // Eq. 9–11
+  const L = wrap360(helio.L * DEG); // Eq. 12
+  const B = helio.B * DEG;
+  const R = helio.R;
   const theta = wrap360(L + 180); // Eq. 13
   const beta = -B; // Eq. 14
 
   // Fundamental arguments of nutation [°], Eq. 15–19.
-  const x0 = 297.85036 + 445_267.11148 * jce - 0.0019142 * jce * jce + (jce * jce * jce) / 189_474;
-  const x1 = 357.52772 + 35_999.05034 * jce - 0.0001603 * jce * jce - (jce * jce * jce) / 300_000;
-  const x2 = 134.96298 + 477_198.867398 * jce + 0.0086972 * jce * jce + (jce * jce * jce) / 56_250;
-  const x3 = 93.27191 + 483_202.017538 * jce - 0.0036825 * jce * jce + (jce * jce * jce) / 327_270;
-  const x4 = 125.04452 - 1934.136261 * jce + 0.0020708 * jce * jce + (jce * jce * jce) / 450_000;
-  let psiSum = 0;
-  let epsSum = 0;
-  for (let i = 0; i < NUT_ROWS; i++) {
-    const y = i * 5;
-    const c = i * 4;
-    const argRad = (x0 * NUT_Y[y] + x1 * NUT_Y[y + 1] + x2 * NUT_Y[y + 2] + x3 * NUT_Y[y + 3] + x4 * NUT_Y[y + 4]) * RAD; // Eq. 20 argument
-    psiSum += (NUT_ABCD[c] + NUT_ABCD[c + 1] * jce) * sin(argRad); // Eq. 20
-    epsSum += (NUT_ABCD[c + 2] + NUT_ABCD[c + 3] * jce) * cos(argRad); // Eq. 21
-  }
-  const deltaPsi = psiSum / 36_000_000; // Eq. 22
-  const deltaEpsilon = epsSum / 36_000_000;
+  fundamental[0] = 297.85036 + 445_267.11148 * jce - 0.0019142 * jce * jce + (jce * jce * jce) / 189_474;
+  fundamental[1] = 357.52772 + 35_999.05034 * jce - 0.0001603 * jce * jce - (jce * jce * jce) / 300_000;
+  fundamental[2] = 134.96298 + 477_198.867398 * jce + 0.0086972 * jce * jce + (jce * jce * jce) / 56_250;
+  fundamental[3] = 93.27191 + 483_202.017538 * jce - 0.0036825 * jce * jce + (jce * jce * jce) / 327_270;
+  fundamental[4] = 125.04452 - 1934.136261 * jce + 0.0020708 * jce * jce + (jce * jce * jce) / 450_000;
+  nutationSums(jce, fundamental, nutation); // Eq. 20–22
+  const { deltaPsi, deltaEpsilon } = nutation;
 
   const u = jme / 10;
   const epsilon0 =
@@ -320,6 +291,10 @@ function emptySteps(): SpaSteps {
   };
 }
 
+const NO_OPTIONS: SunOptions = {};
+/** Reused by {@link sunPosition} so that a call allocates only its result. */
+const resolvedScratch: ResolvedSunOptions = { elevation: 0, pressure: 0, temperature: 0, deltaT: undefined };
+
 /** Options after validation and defaults. */
 export interface ResolvedSunOptions {
   elevation: number;
@@ -333,8 +308,12 @@ export interface ResolvedSunOptions {
  * Validates observer options and fills in defaults; errors name the field (`elevation`, `pressure`,
  * `temperature`, `deltaT`), the first three after `prefix` (e.g. `site.`).
  */
-export function resolveSunOptions(options: SunOptions | undefined, prefix = ''): ResolvedSunOptions {
-  const o = options ?? {};
+export function resolveSunOptions(
+  options: SunOptions | undefined,
+  prefix = '',
+  out: ResolvedSunOptions = { elevation: 0, pressure: 0, temperature: 0, deltaT: undefined },
+): ResolvedSunOptions {
+  const o = options ?? NO_OPTIONS;
   const elevation = o.elevation === undefined ? 0 : requireRange(`${prefix}elevation`, o.elevation, -500, 9000, 'm');
   const pressure =
     o.pressure === undefined
@@ -342,7 +321,11 @@ export function resolveSunOptions(options: SunOptions | undefined, prefix = ''):
       : requireRange(`${prefix}pressure`, o.pressure, 0, 1200, 'hPa', { exclusiveMin: true });
   const temperature = o.temperature === undefined ? 12 : requireRange(`${prefix}temperature`, o.temperature, -90, 60, '°C');
   const deltaT = o.deltaT === undefined ? undefined : requireRange('deltaT', o.deltaT, -100, 10_000, 's');
-  return { elevation, pressure, temperature, deltaT };
+  out.elevation = elevation;
+  out.pressure = pressure;
+  out.temperature = temperature;
+  out.deltaT = deltaT;
+  return out;
 }
 
 /** Validates latitude and longitude by their glossary names (after `prefix`, e.g. `site.`). */
@@ -398,7 +381,7 @@ export function spaSteps(utcMs: number, latitude: number, longitude: number, opt
  * @remarks Reda & Andreas (2008), NREL/TP-560-34302, Eq. 4–46 and A1–A4; uncertainty ±0.0003°.
  */
 export function sunPosition(utcMs: number, latitude: number, longitude: number, options?: SunOptions): SunPosition {
-  const o = resolveSunOptions(options);
+  const o = resolveSunOptions(options, '', resolvedScratch);
   requireSite(latitude, longitude);
   requireInstant(utcMs, o.deltaT !== undefined);
   const s = stepsAt(utcMs, latitude, longitude, o, scratch);
