@@ -4,7 +4,7 @@
  * The format is Sunpane's own; its field names are the WindowSpec / glossary names so that one
  * name means one thing in cells, files and the pane. Every error names the field by its path
  * (`glazing.shgc`, `shading.overhang.projection`). Unknown fields are refused (a typo would
- * otherwise silently drop a shading device); fields whose name starts with `_` or equals
+ * otherwise silently drop a shading device; they are reported before anything else); fields whose name starts with `_` or equals
  * `comment` are ignored, for notes.
  *
  * ```jsonc
@@ -65,6 +65,9 @@ export const WINDOW_DEFAULTS = Object.freeze({
   deviceExtension: 0,
 });
 
+/** The top-level fields of a window file. */
+const WINDOW_FIELDS = ['name', 'year', 'site', 'surfaceAzimuth', 'surfaceTilt', 'width', 'height', 'frameFraction', 'glazing', 'shading', 'groundAlbedo', 'skyModel', 'weather'];
+
 const SKY_MODELS: readonly SkyModel[] = ['isotropic', 'hayDavies', 'perez1990'];
 
 type Json = Record<string, unknown>;
@@ -79,20 +82,16 @@ function join(path: string, key: string): string {
 
 /** Reads the fields of one JSON object by path, refusing unknown ones at the end. */
 class FieldReader {
-  private readonly used = new Set<string>();
-
   constructor(
     private readonly obj: Json,
     private readonly path: string,
   ) {}
 
   has(key: string): boolean {
-    this.used.add(key);
     return this.obj[key] !== undefined && this.obj[key] !== null;
   }
 
   raw(key: string): unknown {
-    this.used.add(key);
     return this.obj[key];
   }
 
@@ -146,13 +145,16 @@ class FieldReader {
     return r;
   }
 
-  /** Throws for the first field that was never asked for (a typo or an unsupported option). */
-  refuseUnknown(): void {
+  /**
+   * Throws for the first field not in `known` (a typo or an unsupported option) — checked before
+   * any value, so that a misspelt field is reported as such rather than as a missing one.
+   */
+  only(known: readonly string[]): this {
     for (const key of Object.keys(this.obj)) {
-      if (this.used.has(key) || key.startsWith('_') || key === 'comment') continue;
-      const known = [...this.used].filter((k) => !k.startsWith('_')).join(', ');
-      throw new SunpaneError(join(this.path, key), this.obj[key], `is not a field of ${this.path || 'the window'} (known fields: ${known})`);
+      if (known.includes(key) || key.startsWith('_') || key === 'comment') continue;
+      throw new SunpaneError(join(this.path, key), this.obj[key], `is not a field of ${this.path || 'the window'} (known fields: ${known.join(', ')})`);
     }
+    return this;
   }
 }
 
@@ -169,7 +171,7 @@ function readSite(parent: FieldReader): { site: Site; exampleWeather?: Weather; 
       exampleAlbedo: example.groundAlbedo,
     };
   }
-  const r = parent.requiredObject('site');
+  const r = parent.requiredObject('site').only(['latitude', 'longitude', 'utcOffset', 'elevation', 'pressure', 'temperature']);
   const site: Site = {
     latitude: r.number('latitude', undefined, '°'),
     longitude: r.number('longitude', undefined, '°'),
@@ -181,50 +183,49 @@ function readSite(parent: FieldReader): { site: Site; exampleWeather?: Weather; 
   if (elevation !== undefined) site.elevation = elevation;
   if (pressure !== undefined) site.pressure = pressure;
   if (temperature !== undefined) site.temperature = temperature;
-  r.refuseUnknown();
   return { site };
 }
 
 function readGlazing(parent: FieldReader): Glazing {
-  const r = parent.requiredObject('glazing');
+  const r = parent.requiredObject('glazing').only(['shgc', 'panes', 'angleTable', 'interiorAttenuation', 'radiantFraction']);
   const glazing: Glazing = { shgc: r.number('shgc'), panes: r.number('panes', WINDOW_DEFAULTS.panes) };
   const table = r.object('angleTable');
   if (table) {
+    table.only(['angles', 'values']);
     glazing.angleTable = { angles: table.numberList('angles', '°'), values: table.numberList('values') };
-    table.refuseUnknown();
   }
   glazing.interiorAttenuation = r.number('interiorAttenuation', WINDOW_DEFAULTS.interiorAttenuation);
   const radiant = r.optionalNumber('radiantFraction');
   if (radiant !== undefined) glazing.radiantFraction = radiant;
-  r.refuseUnknown();
   return glazing;
 }
 
 function readOverhang(r: FieldReader): Overhang {
+  r.only(['projection', 'gap', 'extensionLeft', 'extensionRight']);
   const o: Overhang = {
     projection: r.number('projection', undefined, 'm'),
     gap: r.number('gap', WINDOW_DEFAULTS.deviceGap, 'm'),
     extensionLeft: r.number('extensionLeft', WINDOW_DEFAULTS.deviceExtension, 'm'),
     extensionRight: r.number('extensionRight', WINDOW_DEFAULTS.deviceExtension, 'm'),
   };
-  r.refuseUnknown();
   return o;
 }
 
 function readFin(r: FieldReader): Fin {
+  r.only(['projection', 'gap', 'extensionAbove', 'extensionBelow']);
   const f: Fin = {
     projection: r.number('projection', undefined, 'm'),
     gap: r.number('gap', WINDOW_DEFAULTS.deviceGap, 'm'),
     extensionAbove: r.number('extensionAbove', WINDOW_DEFAULTS.deviceExtension, 'm'),
     extensionBelow: r.number('extensionBelow', WINDOW_DEFAULTS.deviceExtension, 'm'),
   };
-  r.refuseUnknown();
   return f;
 }
 
 function readShading(parent: FieldReader): Shading {
   const r = parent.object('shading');
   if (!r) return {};
+  r.only(['overhang', 'leftFin', 'rightFin', 'revealDepth', 'skyline']);
   const shading: Shading = {};
   const overhang = r.object('overhang');
   if (overhang) shading.overhang = readOverhang(overhang);
@@ -235,13 +236,13 @@ function readShading(parent: FieldReader): Shading {
   const reveal = r.optionalNumber('revealDepth', 'm');
   if (reveal !== undefined) shading.revealDepth = reveal;
   if (r.has('skyline')) shading.skyline = r.numberList('skyline', '°');
-  r.refuseUnknown();
   return shading;
 }
 
 function readWeather(parent: FieldReader): Weather | undefined {
   const r = parent.object('weather');
   if (!r) return undefined;
+  r.only(['kind', 'linkeTurbidity', 'tauB', 'tauD']);
   const kind = r.text('kind');
   let weather: Weather;
   if (kind === 'ineichenClearSky') weather = { kind, linkeTurbidity: r.numberList('linkeTurbidity') };
@@ -249,7 +250,6 @@ function readWeather(parent: FieldReader): Weather | undefined {
   else {
     throw new SunpaneError('weather.kind', kind, 'must be "ineichenClearSky" or "ashraeClearSky" (hourly measured weather comes from a CSV file: --weather FILE.csv)');
   }
-  r.refuseUnknown();
   return weather;
 }
 
@@ -268,7 +268,7 @@ export interface WindowFile {
  */
 export function windowFromJson(json: unknown): WindowFile {
   if (!isObject(json)) throw new SunpaneError('window', json, 'must be a JSON object { ... } describing one window');
-  const r = new FieldReader(json, '');
+  const r = new FieldReader(json, '').only(WINDOW_FIELDS);
   const name = r.text('name');
   const year = r.number('year');
   if (!Number.isInteger(year)) throw new SunpaneError('year', year, 'must be a whole number (calendar year)');
@@ -285,7 +285,6 @@ export function windowFromJson(json: unknown): WindowFile {
   const skyModel = SKY_MODELS.find((m) => m.toLowerCase() === skyModelText.toLowerCase());
   if (!skyModel) throw new SunpaneError('skyModel', skyModelText, `must be one of ${SKY_MODELS.map((m) => `"${m}"`).join(', ')}`);
   const given = readWeather(r);
-  r.refuseUnknown();
   const weather = given ?? exampleWeather;
   return {
     spec: {

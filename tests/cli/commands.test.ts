@@ -1,0 +1,238 @@
+/**
+ * The table, schedule and demo commands end to end (in process): saved-output diffs of help texts,
+ * `list` and example outputs; bad input named by field, row or line with exit code 1; usage errors
+ * with exit code 2; unwritable output paths leave no partial file.
+ */
+import { spawnSync } from 'node:child_process';
+import * as fs from 'node:fs';
+import * as path from 'node:path';
+import ExcelJS from 'exceljs';
+import { EXAMPLES, ROOT, expectSaved, run, tempDir } from './run';
+
+const WINDOW = path.join(EXAMPLES, 'east-office.json');
+const WEATHER = path.join(EXAMPLES, 'weather-brackwater-2026.csv');
+const SCHEDULE = path.join(EXAMPLES, 'windows.csv');
+const WEATHER_FLAGS = ['--weather', WEATHER, '--dni', 'direct normal', '--dhi', 'diffuse horizontal'];
+
+function weatherLines(): string[] {
+  return fs.readFileSync(WEATHER, 'utf8').split('\n');
+}
+
+function writeTemp(dir: string, name: string, text: string): string {
+  const file = path.join(dir, name);
+  fs.writeFileSync(file, text);
+  return file;
+}
+
+describe('help texts', () => {
+  it.each(['table', 'schedule', 'demo'])('prints the saved help of %s and exits 0', async (command) => {
+    const r = await run(command, '--help');
+    expect(r.code).toBe(0);
+    expect(r.out.startsWith(`usage: sunpane ${command}`)).toBe(true);
+    expectSaved(`${command}-help.txt`, r.out);
+  });
+
+  it('lists every command in the top-level usage', async () => {
+    const r = await run('--help');
+    expect(r.code).toBe(0);
+    for (const c of ['list', 'call', 'table', 'schedule', 'demo']) expect(r.out).toMatch(new RegExp(`^  ${c} `, 'm'));
+  });
+
+  it('prints the first worksheet functions of `sunpane list` as saved', async () => {
+    const r = await run('list');
+    expect(r.code).toBe(0);
+    expectSaved('list-head.txt', r.out.split('\n').slice(0, 6).join('\n'));
+  });
+});
+
+describe('sunpane table', () => {
+  it("writes the example window's clear-sky year as CSV, whose first day is as saved", async () => {
+    const dir = tempDir();
+    const out = path.join(dir, 'east.csv');
+    const r = await run('table', '--window', WINDOW, '--out', out);
+    expect(r).toMatchObject({ code: 0, err: '' });
+    const lines = fs.readFileSync(out, 'utf8').trimEnd().split('\n');
+    expect(lines.length).toBe(1 + 8760);
+    expectSaved('table-east-head.txt', lines.slice(0, 25).join('\n'));
+    expect(r.out).toMatch(/^East meeting room: \d+\.\d kWh in 2026, peak \d+ W in the hour ending 2026-\d\d-\d\dT\d\d:00, \d+ sunlit hours\nwrote /);
+  });
+
+  it('reads hourly weather by column name and writes a workbook with hourly, monthly and heat-map sheets', async () => {
+    const dir = tempDir();
+    const out = path.join(dir, 'east.xlsx');
+    const r = await run('table', '--window', WINDOW, ...WEATHER_FLAGS, '--out', out);
+    expect(r.code).toBe(0);
+    const wb = new ExcelJS.Workbook();
+    await wb.xlsx.readFile(out);
+    expect(wb.worksheets.map((w) => w.name)).toEqual(['Monthly', 'Heat map', 'Hourly']);
+    const hourly = wb.getWorksheet('Hourly')!;
+    expect(hourly.rowCount).toBe(8761);
+    expect(hourly.getCell('G12').value).toBe(311.7); // direct normal in the hour ending 2026-01-01 11:00 (weather file line 13)
+    expect(fs.readdirSync(dir)).toEqual(['east.xlsx']);
+  });
+
+  it('marks garbled and blank weather values missing, names their lines, and keeps going', async () => {
+    const dir = tempDir();
+    const lines = weatherLines();
+    lines[12] = '2026-01-01T11:00,oops,67.1';
+    lines[13] = '2026-01-01T12:00,,77.1';
+    const weather = writeTemp(dir, 'w.csv', lines.join('\n'));
+    const out = path.join(dir, 'east.csv');
+    const r = await run('table', '--window', WINDOW, '--weather', weather, '--dni', '2', '--dhi', '3', '--out', out);
+    expect(r.code).toBe(0);
+    expect(r.err).toBe(`${weather}: 2 hours missing — line 13 dni "oops" (not a number); line 14 dni (blank)`);
+    expect(r.out).toMatch(/2 hours missing \(not in the total\)/);
+    const rows = fs.readFileSync(out, 'utf8').split('\n');
+    expect(rows[11].split(',').at(-1)).toBe('1');
+    expect(rows[12].split(',').at(-1)).toBe('1');
+    expect(rows[13].split(',').at(-1)).toBe('0');
+  });
+
+  it('refuses a weather file with an hour missing, naming the rows expected and found', async () => {
+    const dir = tempDir();
+    const lines = weatherLines();
+    lines.splice(500, 1);
+    const weather = writeTemp(dir, 'short.csv', lines.join('\n'));
+    const r = await run('table', '--window', WINDOW, '--weather', weather, '--ghi', '2', '--out', path.join(dir, 'x.csv'));
+    expect(r.code).toBe(1);
+    expect(r.err).toMatch(/short\.csv: expected 8760 hourly rows for 2026 .*found 8759/);
+    expect(fs.readdirSync(dir)).toEqual(['short.csv']);
+  });
+
+  it("refuses a weather year that does not match the window's (leap) year", async () => {
+    const dir = tempDir();
+    const json = JSON.parse(fs.readFileSync(WINDOW, 'utf8'));
+    const window = writeTemp(dir, 'w.json', JSON.stringify({ ...json, year: 2028 }));
+    const r = await run('table', '--window', window, ...WEATHER_FLAGS, '--out', path.join(dir, 'x.csv'));
+    expect(r.code).toBe(1);
+    expect(r.err).toMatch(/expected 8784 hourly rows for 2028 .*found 8760/);
+  });
+
+  it.each([
+    [{ glazing: { panes: 2 } }, /^sunpane: glazing\.shgc = blank is not allowed: is required/],
+    [{ width: -1 }, /^sunpane: width = -1 is not allowed: must be a number above 0/],
+    [{ shading: { overhang: { projecton: 0.5 } } }, /^sunpane: shading\.overhang\.projecton = 0\.5 is not allowed: is not a field/],
+    [{ site: { latitude: 95, longitude: 0, utcOffset: 0 } }, /^sunpane: site\.latitude = 95 is not allowed: must be a number from -90 to 90/],
+    [{ weather: undefined }, /has no "weather"/],
+  ])('refuses a bad window file with exit code 1 naming the field (%#)', async (change, message) => {
+    const dir = tempDir();
+    const json = { ...JSON.parse(fs.readFileSync(WINDOW, 'utf8')), ...change };
+    const r = await run('table', '--window', writeTemp(dir, 'w.json', JSON.stringify(json)), '--out', path.join(dir, 'x.csv'));
+    expect(r.code).toBe(1);
+    expect(r.err).toMatch(message);
+  });
+
+  it('refuses a window file that is not JSON', async () => {
+    const dir = tempDir();
+    const r = await run('table', '--window', writeTemp(dir, 'w.json', '{"name": '), '--out', path.join(dir, 'x.csv'));
+    expect(r.code).toBe(1);
+    expect(r.err).toMatch(/w\.json is not valid JSON/);
+  });
+
+  it('refuses an unwritable output path with exit code 1 and leaves no partial file', async () => {
+    const dir = tempDir();
+    const missing = path.join(dir, 'no', 'such', 'annual.xlsx');
+    const r1 = await run('table', '--window', WINDOW, '--out', missing);
+    expect(r1.code).toBe(1);
+    expect(r1.err).toBe(`sunpane: cannot write ${missing}: the folder does not exist`);
+    fs.writeFileSync(path.join(dir, 'file'), 'x');
+    const r2 = await run('table', '--window', WINDOW, '--out', path.join(dir, 'file', 'annual.csv'));
+    expect(r2.code).toBe(1);
+    expect(r2.err).toMatch(/a part of the path is not a folder/);
+    expect(fs.readdirSync(dir)).toEqual(['file']);
+  });
+
+  it.each([
+    [['--window', 'w.json'], /--out FILE\.xlsx\|FILE\.csv \(where to write\) is required/],
+    [['--out', 'x.csv'], /--window FILE\.json \(the window\) is required/],
+    [['--window', 'w.json', '--out', 'x.txt'], /must end in \.csv or \.xlsx/],
+    [['--window', 'w.json', '--out', 'x.csv', '--colour', 'red'], /unknown flag --colour/],
+    [['--window', 'w.json', '--out', 'x.csv', '--dni', '2'], /give --weather FILE\.csv too/],
+    [['--window', 'w.json', '--out', 'x.csv', '--weather', 'w.csv', '--dni', '2'], /--dni COL --dhi COL, or --ghi COL/],
+    [['--window', 'w.json', '--out', 'x.csv', '--weather', 'w.csv', '--dni', '2', '--dhi', '3', '--ghi', '4'], /either --dni and --dhi, or --ghi/],
+    [['stray'], /unexpected argument "stray"/],
+  ])('answers wrong usage with exit code 2 and the usage line (%#)', async (args, message) => {
+    const r = await run('table', ...args);
+    expect(r.code).toBe(2);
+    expect(r.err).toMatch(message);
+    expect(r.err).toMatch(/usage: sunpane table --window/);
+  });
+});
+
+describe('sunpane schedule', () => {
+  it('summarises the example schedule as saved CSV', async () => {
+    const dir = tempDir();
+    const out = path.join(dir, 'summary.csv');
+    const r = await run('schedule', '--in', SCHEDULE, '--out', out);
+    expect(r.code).toBe(0);
+    expect(r.out).toMatch(/^4 windows: \d+\.\d kWh of solar gain a year in all\nwrote /);
+    expectSaved('schedule-example.csv.txt', fs.readFileSync(out, 'utf8'));
+  });
+
+  it('reads a workbook schedule and writes a workbook with SUM/MAX totals', async () => {
+    const dir = tempDir();
+    const input = new ExcelJS.Workbook();
+    const ws = input.addWorksheet('Windows');
+    ws.addRow(['Name', 'latitude', 'longitude', 'utcOffset', 'year', 'surfaceAzimuth', 'width', 'height', 'shgc', 'tauB', 'tauD']);
+    ws.addRow(['Lab east', 40, -105, -7, 2026, 90, 1.5, 1.2, 0.4, 0.4, 2.3]);
+    ws.addRow(['Lab west', 40, -105, -7, 2026, 270, 1.5, 1.2, 0.4, 0.4, 2.3]);
+    await input.xlsx.writeFile(path.join(dir, 'in.xlsx'));
+    const out = path.join(dir, 'out.xlsx');
+    const r = await run('schedule', '--in', path.join(dir, 'in.xlsx'), '--out', out);
+    expect(r.code).toBe(0);
+    const wb = new ExcelJS.Workbook();
+    await wb.xlsx.readFile(out);
+    const sheet = wb.getWorksheet('Summary')!;
+    expect(sheet.getTables().length).toBe(1);
+    const total = sheet.getCell('E4').value as ExcelJS.CellFormulaValue;
+    expect(total.formula).toBe('SUM(E2:E3)');
+    const e2 = sheet.getCell('E2').value as number;
+    const e3 = sheet.getCell('E3').value as number;
+    expect(total.result).toBeCloseTo(e2 + e3, 9);
+  });
+
+  it('names the line, window and column of a row with a required field missing', async () => {
+    const dir = tempDir();
+    const text = fs.readFileSync(SCHEDULE, 'utf8').replace('East meeting room,brackwater,2026,90,1.8,', 'East meeting room,brackwater,2026,90,,');
+    const input = writeTemp(dir, 'windows.csv', text);
+    const r = await run('schedule', '--in', input, '--out', path.join(dir, 'out.csv'));
+    expect(r.code).toBe(1);
+    expect(r.err).toBe(`sunpane: ${input} line 3 ("East meeting room"), column width: is blank but required`);
+    expect(fs.readdirSync(dir)).toEqual(['windows.csv']);
+  });
+
+  it('names the line and column of a value out of range or not a number, and an unknown column', async () => {
+    const dir = tempDir();
+    const base = fs.readFileSync(SCHEDULE, 'utf8');
+    const r1 = await run('schedule', '--in', writeTemp(dir, 'a.csv', base.replace(',0.5,2,,,,0.15', ',1.5,2,,,,0.15')), '--out', path.join(dir, 'o.csv'));
+    expect(r1.code).toBe(1);
+    expect(r1.err).toMatch(/a\.csv line 5 \("North studio"\), column shgc: glazing\.shgc = 1\.5 is not allowed: must be a number from 0 to 1$/);
+    const r2 = await run('schedule', '--in', writeTemp(dir, 'b.csv', base.replace('South office,brackwater,2026,180,3.0', 'South office,brackwater,2026,south,3.0')), '--out', path.join(dir, 'o.csv'));
+    expect(r2.err).toMatch(/b\.csv line 2, column surfaceAzimuth: "south" is not a number$/);
+    const r3 = await run('schedule', '--in', writeTemp(dir, 'c.csv', base.replace('panes,', 'pains,')), '--out', path.join(dir, 'o.csv'));
+    expect(r3.err).toMatch(/c\.csv line 1: unknown column "pains"/);
+  });
+
+  it('applies one hourly weather file to every window', async () => {
+    const dir = tempDir();
+    const out = path.join(dir, 'summary.csv');
+    const r = await run('schedule', '--in', SCHEDULE, ...WEATHER_FLAGS, '--out', out);
+    expect(r.code).toBe(0);
+    const clear = await run('schedule', '--in', SCHEDULE, '--out', path.join(dir, 'clear.csv'));
+    const total = (t: string) => Number(/: (\d+\.\d) kWh/.exec(t)![1]);
+    expect(total(r.out)).toBeLessThan(total(clear.out));
+  });
+});
+
+describe('the installed command', () => {
+  it('exits with 0, 1 and 2 as a process for success, bad input and wrong usage', () => {
+    const bin = path.join(ROOT, 'bin', 'sunpane.js');
+    if (!fs.existsSync(path.join(ROOT, 'lib', 'cli', 'main.js'))) throw new Error('lib/ is not built: run npm run build:cli first');
+    const dir = tempDir();
+    const ok = spawnSync(process.execPath, [bin, 'schedule', '--help'], { encoding: 'utf8' });
+    const bad = spawnSync(process.execPath, [bin, 'table', '--window', path.join(dir, 'none.json'), '--out', path.join(dir, 'x.csv')], { encoding: 'utf8' });
+    const usage = spawnSync(process.execPath, [bin, 'table', '--bogus'], { encoding: 'utf8' });
+    expect([ok.status, bad.status, usage.status]).toEqual([0, 1, 2]);
+    expect(bad.stderr).toMatch(/cannot read the window file .*none\.json: the folder does not exist/);
+  });
+});
