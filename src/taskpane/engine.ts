@@ -5,7 +5,7 @@
  */
 import { type AnnualSeries, annualSeries } from '../core/annual';
 import { type AnnualSummary, summarizeAnnual } from '../core/annualSummary';
-import { pointSunlit, sunlitFraction } from '../core/shading';
+import { shadingMaskGrid } from '../core/shadingMask';
 import { sunPosition } from '../core/sun';
 import { incidenceAngle } from '../core/surface';
 import { civilToSerial, serialToUtcMs } from '../core/time';
@@ -82,38 +82,36 @@ export type MaskClass = 'open' | 'part' | 'full' | 'behind';
 
 /** A sky grid of sun directions and, for each, how much of the glass (or the point) is in sun. */
 export interface MaskGrid {
-  azimuthStep: number;
-  altitudeStep: number;
-  /** Cells: lower-left corner azimuth / altitude [°], the sunlit value at the cell centre 0…1, and its class. */
-  cells: { azimuth: number; altitude: number; sunlit: number; kind: MaskClass }[];
+  /** Cells around each sampled sun direction: azimuth and altitude bounds [°], the sunlit value 0…1 at the sample, and its class. */
+  cells: { az0: number; az1: number; alt0: number; alt1: number; sunlit: number; kind: MaskClass }[];
 }
 
 /** Sunlit value at or above which a cell counts as not shaded (and at or below 1 − this, fully shaded). */
 export const MASK_OPEN = 0.995;
 
 /**
- * The shading mask over the sky in front of a vertical window: for sun directions at the centres
- * of an azimuth × altitude grid, the core's sunlit fraction of the glass (or, with `point`, whether
- * that point of the glass is in sun). The horizon profile is left out here, since it is drawn apart.
+ * The shading mask over the sky for a vertical window, from the core's {@link shadingMaskGrid}:
+ * the sunlit fraction of the glass (or, with `point`, whether that point of the glass sees the sun)
+ * for sun directions on an azimuth × altitude grid; each sample is drawn as the cell around it.
+ * Directions behind the window plane (incidence ≥ 90°, from the core's incidence angle) are marked
+ * apart. The skyline is left out here, since the drawing shows it on its own.
  * @param point - a point on the glass [m] from the left jamb (seen from outside) and above the sill
  */
 export function shadingMask(spec: WindowSpec, point?: { x: number; y: number }, azimuthStep = 5, altitudeStep = 5): MaskGrid {
-  const opening = { width: spec.width, height: spec.height };
-  const shading: Shading = { ...spec.shading, skyline: undefined };
+  const shading: Shading = { ...spec.shading };
   delete shading.skyline;
+  const grid = shadingMaskGrid({ width: spec.width, height: spec.height }, shading, spec.surfaceAzimuth, { azimuthStep, altitudeStep, point });
+  const values = point ? grid.point : grid.whole;
   const cells: MaskGrid['cells'] = [];
-  for (let az = 0; az < 360; az += azimuthStep) {
-    for (let alt = 0; alt < 90; alt += altitudeStep) {
-      const a = alt + altitudeStep / 2;
-      const s = az + azimuthStep / 2;
-      if (incidenceAngle(a, s, spec.surfaceTilt, spec.surfaceAzimuth) >= 90) {
-        cells.push({ azimuth: az, altitude: alt, sunlit: 0, kind: 'behind' });
-        continue;
-      }
-      const sunlit = point ? pointSunlit(opening, shading, point.x, point.y, a, s, spec.surfaceAzimuth) : sunlitFraction(opening, shading, a, s, spec.surfaceAzimuth);
-      const kind: MaskClass = sunlit >= MASK_OPEN ? 'open' : sunlit <= 1 - MASK_OPEN ? 'full' : 'part';
-      cells.push({ azimuth: az, altitude: alt, sunlit, kind });
-    }
-  }
-  return { azimuthStep, altitudeStep, cells };
+  grid.altitudes.forEach((alt, i) => {
+    // The horizon row is 0 by the core's convention (sun on the horizon): nothing to draw there.
+    if (alt <= 0) return;
+    grid.azimuths.forEach((az, j) => {
+      const sunlit = values[i][j];
+      const behind = incidenceAngle(alt, az, spec.surfaceTilt, spec.surfaceAzimuth) >= 90;
+      const kind: MaskClass = behind ? 'behind' : sunlit >= MASK_OPEN ? 'open' : sunlit <= 1 - MASK_OPEN ? 'full' : 'part';
+      cells.push({ az0: az - azimuthStep / 2, az1: az + azimuthStep / 2, alt0: Math.max(0, alt - altitudeStep / 2), alt1: Math.min(90, alt + altitudeStep / 2), sunlit, kind });
+    });
+  });
+  return { cells };
 }

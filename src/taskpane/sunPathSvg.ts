@@ -81,7 +81,7 @@ export function sunPathSvg(d: SunPathDrawing): string {
       if (cell.kind === 'open') continue;
       const shaded = 1 - cell.sunlit;
       const band = cell.kind === 'part' ? (shaded < 1 / 3 ? 'part1' : shaded < 2 / 3 ? 'part2' : 'part3') : cell.kind;
-      byBand[band].push(sector(cell.azimuth, cell.azimuth + d.mask.azimuthStep, cell.altitude, Math.min(90, cell.altitude + d.mask.altitudeStep)));
+      byBand[band].push(sector(cell.az0, cell.az1, cell.alt0, cell.alt1));
     }
     for (const band of ['behind', 'part1', 'part2', 'part3', 'full'] as const) {
       const colour = band.startsWith('part') ? c.part[Number(band.slice(4)) - 1] : c[band as 'behind' | 'full'];

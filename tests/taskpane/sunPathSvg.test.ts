@@ -43,10 +43,19 @@ describe('the sun-path diagram', () => {
   test('cells behind a south-facing wall are exactly those with the sun in the northern half of the sky', () => {
     const spec = buildWindowSpec({ ...initialValues(), year: '2025' });
     const mask = shadingMask(spec, undefined, 10, 10);
+    expect(mask.cells.length).toBe(36 * 9);
     for (const cell of mask.cells) {
-      const centre = cell.azimuth + 5;
-      const behind = centre < 90 || centre > 270;
+      const az = (cell.az0 + cell.az1) / 2;
+      const behind = az < 90 || az > 270;
+      if (az === 90 || az === 270 || cell.alt1 === 90) continue; // samples in the wall plane (due east, due west, the zenith)
       expect(cell.kind === 'behind').toBe(behind);
     }
+  });
+
+  test('the mask of one point is all or nothing, and a point off the glass is refused naming x', () => {
+    const spec = buildWindowSpec({ ...initialValues(), year: '2025', overhangProjection: '0.8' });
+    const mask = shadingMask(spec, { x: 0.1, y: 1.4 });
+    expect(mask.cells.every((c) => c.sunlit === 0 || c.sunlit === 1)).toBe(true);
+    expect(() => shadingMask(spec, { x: 5, y: 1 })).toThrow('x = 5 is not allowed: must be a number from 0 to 1.8');
   });
 });
