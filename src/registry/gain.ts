@@ -11,40 +11,37 @@ import { designDayPeaks } from '../core/designDay';
 import { windowGainAt } from '../core/gain';
 import { gainSteps } from '../core/gainSteps';
 import { coolingLoad, requireRadiantTimeFactors } from '../core/load';
-import { IRRADIANCE_MAX, TAU_B_MAX, TAU_D_MAX } from '../core/sky';
 import { hoursInYear, serialToCivil } from '../core/time';
 import type { Shading, SkyModel, Weather, WindowSpec } from '../core/window';
 import { DEFAULT_RADIANT_FRACTION, validateWindowSpec } from '../core/windowSpec';
 import { GLOSSARY } from './glossary';
 import { type Args, type FunctionDescriptor, NotAvailable, type OutTable, type ParamDescriptor } from './types';
 
-/** Longest window or shading dimension accepted by the worksheet functions [m]. */
-const LENGTH_MAX = 100;
-
+const G = GLOSSARY;
 const P = {
-  year: { name: 'year', kind: 'number', integer: true, min: 1901, max: 9998, description: 'calendar year (8784 hours in a leap year, else 8760)' },
-  width: { name: 'width', kind: 'number', unit: 'm', min: 0, max: LENGTH_MAX, exclusiveMin: true, description: 'window width (rough opening, frame included)' },
-  height: { name: 'height', kind: 'number', unit: 'm', min: 0, max: LENGTH_MAX, exclusiveMin: true, description: 'window height (rough opening, frame included)' },
-  shgcNormal: { name: 'shgcNormal', kind: 'number', min: 0, max: 1, description: 'solar heat gain coefficient of the glazing at normal incidence (from the product rating)' },
-  dni: { name: 'dni', kind: 'number', unit: 'W/m²', min: 0, max: IRRADIANCE_MAX, optional: true, description: "the hour's direct normal irradiance; blank: clear sky from tauB and tauD" },
-  dhi: { name: 'dhi', kind: 'number', unit: 'W/m²', min: 0, max: IRRADIANCE_MAX, optional: true, description: "the hour's diffuse horizontal irradiance; blank: clear sky from tauB and tauD" },
-  tauB: { name: 'tauB', kind: 'number', min: 0, max: TAU_B_MAX, exclusiveMin: true, optional: true, description: 'beam pseudo-optical depth of the ASHRAE clear-sky model (used when dni and dhi are blank)' },
-  tauD: { name: 'tauD', kind: 'number', min: 0, max: TAU_D_MAX, exclusiveMin: true, optional: true, description: 'diffuse pseudo-optical depth of the ASHRAE clear-sky model (used when dni and dhi are blank)' },
-  panes: { name: 'panes', kind: 'number', integer: true, min: 1, max: 4, default: 2, description: 'number of glass panes, for the fall of SHGC with incidence angle' },
-  frameFraction: { name: 'frameFraction', kind: 'number', min: 0, max: 1, exclusiveMax: true, default: 0, description: 'share of the rough opening taken by the frame' },
-  albedo: { name: 'albedo', kind: 'number', min: 0, max: 1, default: 0.2, description: 'ground reflectance (0.2 is common practice for grass and soil, no source)' },
-  model: { name: 'model', kind: 'choice', choices: ['perez', 'haydavies', 'isotropic'], default: 'perez', description: 'sky-diffuse model: "perez" (Perez 1990), "haydavies" (Hay–Davies) or "isotropic"' },
-  surfaceTilt: { ...GLOSSARY.surfaceTilt, description: 'window tilt from horizontal: 90 is a vertical window (shading devices need 90)' },
-  interiorAttenuation: { name: 'interiorAttenuation', kind: 'number', min: 0, max: 1, default: 1, description: 'interior attenuation coefficient of a blind or curtain; 1 = none' },
+  year: G.year,
+  width: G.width,
+  height: G.height,
+  shgcNormal: G.shgcNormal,
+  dni: { ...G.dni, optional: true, description: "the hour's direct normal irradiance; blank: clear sky from tauB and tauD" },
+  dhi: { ...G.dhi, optional: true, description: "the hour's diffuse horizontal irradiance; blank: clear sky from tauB and tauD" },
+  tauB: { ...G.tauB, optional: true, description: `${G.tauB.description}; used when dni and dhi are blank` },
+  tauD: { ...G.tauD, optional: true, description: `${G.tauD.description}; used when dni and dhi are blank` },
+  panes: G.panes,
+  frameFraction: G.frameFraction,
+  albedo: G.albedo,
+  model: G.model,
+  surfaceTilt: { ...G.surfaceTilt, description: 'window tilt from horizontal: 90 is a vertical window (shading devices need 90)' },
+  interiorAttenuation: G.interiorAttenuation,
   radiantFraction: { name: 'radiantFraction', kind: 'number', min: 0, max: 1, default: DEFAULT_RADIANT_FRACTION, description: 'share of the gain that is radiant (reaches the air only through the room surfaces)' },
-  overhangProjection: { name: 'overhangProjection', kind: 'number', unit: 'm', min: 0, max: LENGTH_MAX, default: 0, description: 'depth of an overhang out from the wall; 0 = no overhang' },
-  overhangGap: { name: 'overhangGap', kind: 'number', unit: 'm', min: 0, max: LENGTH_MAX, default: 0, description: "height of the overhang's underside above the window head" },
-  overhangExtensionLeft: { name: 'overhangExtensionLeft', kind: 'number', unit: 'm', min: -LENGTH_MAX, max: LENGTH_MAX, default: 0, description: 'overhang extension beyond the left jamb, seen from outside (negative stops short)' },
-  overhangExtensionRight: { name: 'overhangExtensionRight', kind: 'number', unit: 'm', min: -LENGTH_MAX, max: LENGTH_MAX, default: 0, description: 'overhang extension beyond the right jamb, seen from outside (negative stops short)' },
-  finProjection: { name: 'finProjection', kind: 'number', unit: 'm', min: 0, max: LENGTH_MAX, default: 0, description: 'depth of a fin at each side of the window, from head to sill; 0 = no fins' },
-  finGap: { name: 'finGap', kind: 'number', unit: 'm', min: 0, max: LENGTH_MAX, default: 0, description: 'distance from each jamb to its fin' },
-  revealDepth: { name: 'revealDepth', kind: 'number', unit: 'm', min: 0, max: LENGTH_MAX, default: 0, description: 'depth of the glass behind the wall face; 0 = flush' },
-  skyline: { name: 'skyline', kind: 'numberList', unit: '°', min: 0, max: 90, optional: true, length: { min: 1, max: 360 }, description: 'elevation angles of surrounding buildings and terrain for equal azimuth sectors clockwise from north; blank: open horizon' },
+  overhangProjection: G.overhangProjection,
+  overhangGap: G.overhangGap,
+  overhangExtensionLeft: G.overhangExtensionLeft,
+  overhangExtensionRight: G.overhangExtensionRight,
+  finProjection: { ...G.overhangProjection, name: 'finProjection', description: 'depth of a fin at each side of the window, from head to sill; 0 = no fins' },
+  finGap: G.finGap,
+  revealDepth: G.revealDepth,
+  skyline: G.skyline,
   quantity: {
     name: 'quantity',
     kind: 'choice',
@@ -56,8 +53,8 @@ const P = {
   factors: { name: 'factors', kind: 'numberList', min: 0, max: 1, length: { exact: 24 }, description: 'the 24 radiant time factors r0…r23 of the room (from your handbook or room model), summing to 1' },
   factorsOptional: { name: 'factors', kind: 'numberList', min: 0, max: 1, length: { exact: 24 }, optional: true, description: 'the 24 radiant time factors r0…r23 of the room, summing to 1; blank: no cooling-load columns' },
   gains: { name: 'gains', kind: 'numberList', unit: 'W', min: -1e7, max: 1e7, length: { exact: 24 }, description: 'hourly gain of the design day, hour ending 1:00 first' },
-  dniSeries: { name: 'dni', kind: 'numberList', unit: 'W/m²', min: 0, max: IRRADIANCE_MAX, optional: true, description: "a year's hourly direct normal irradiance, one value per hour (8760, or 8784 in a leap year); blank: clear sky from tauB and tauD" },
-  dhiSeries: { name: 'dhi', kind: 'numberList', unit: 'W/m²', min: 0, max: IRRADIANCE_MAX, optional: true, description: "a year's hourly diffuse horizontal irradiance, one value per hour; blank: clear sky from tauB and tauD" },
+  dniSeries: { ...G.dni, kind: 'numberList', optional: true, description: "a year's hourly direct normal irradiance, one value per hour (8760, or 8784 in a leap year); blank: clear sky from tauB and tauD" },
+  dhiSeries: { ...G.dhi, kind: 'numberList', optional: true, description: "a year's hourly diffuse horizontal irradiance, one value per hour; blank: clear sky from tauB and tauD" },
 } satisfies Record<string, ParamDescriptor>;
 
 const SITE_AND_WINDOW: readonly ParamDescriptor[] = [GLOSSARY.latitude, GLOSSARY.longitude, GLOSSARY.utcOffset, GLOSSARY.surfaceAzimuth, P.width, P.height, P.shgcNormal];
@@ -146,7 +143,7 @@ function yearOf(serial: number): number {
 function hourSpec(a: Args): { spec: WindowSpec; weatherHour?: { dni: number; dhi: number } } {
   requireWeatherArgs(a);
   const measured = a.dni !== undefined;
-  const weather: Weather = a.tauB !== undefined && a.tauD !== undefined ? clearSkyOf(a) : { kind: 'ashraeClearSky', tauB: [TAU_B_MAX], tauD: [TAU_D_MAX] };
+  const weather: Weather = a.tauB !== undefined && a.tauD !== undefined ? clearSkyOf(a) : { kind: 'ashraeClearSky', tauB: [G.tauB.max as number], tauD: [G.tauD.max as number] };
   return { spec: specOf(a, yearOf(a.dateTime as number), weather), weatherHour: measured ? { dni: a.dni as number, dhi: a.dhi as number } : undefined };
 }
 

@@ -2,12 +2,12 @@
  * Worksheet-function descriptors: glazing — SHGC at an incidence angle (physical model or the user's
  * table), diffuse SHGC and glass area. The core computes (src/core/glazing.ts).
  */
-import { diffuseShgc, diffuseShgcFromTable, glassArea, PANES_MAX, PANES_MIN, shgcAtAngle, shgcFromTable, TABLE_MIN_SPACING } from '../core/glazing';
+import { diffuseShgc, diffuseShgcFromTable, glassArea, shgcAtAngle, shgcFromTable, TABLE_MIN_SPACING } from '../core/glazing';
+import { GLOSSARY } from './glossary';
 import type { Args, FunctionDescriptor, ParamDescriptor } from './types';
 
-const incidence: ParamDescriptor = { name: 'incidence', kind: 'number', unit: '°', min: 0, max: 180, description: 'incidence angle of the sun on the glass (90 or more: sun behind it, SHGC 0)' };
-const shgcNormal: ParamDescriptor = { name: 'shgcNormal', kind: 'number', min: 0, max: 1, description: 'solar heat gain coefficient at normal incidence (from the product rating)' };
-const panes: ParamDescriptor = { name: 'panes', kind: 'number', min: PANES_MIN, max: PANES_MAX, integer: true, default: 2, description: 'number of glass panes, for the angular shape' };
+const incidence: ParamDescriptor = { ...GLOSSARY.incidence, description: 'incidence angle of the sun on the glass (90 or more: sun behind it, SHGC 0)' };
+const { shgcNormal, panes } = GLOSSARY;
 const angles: ParamDescriptor = {
   name: 'angles',
   kind: 'numberList',

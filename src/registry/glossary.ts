@@ -3,11 +3,20 @@
  * descriptor that takes them, so one name always means one thing (README "Glossary" is generated
  * from this list).
  */
+import { PANES_MAX, PANES_MIN } from '../core/glazing';
+import { IRRADIANCE_MAX, LINKE_MAX, LINKE_MIN, TAU_B_MAX, TAU_D_MAX } from '../core/sky';
 import { UTC_OFFSET_MAX, UTC_OFFSET_MIN } from '../core/time';
 import type { ParamDescriptor } from './types';
 
 function p(d: ParamDescriptor): ParamDescriptor {
   return Object.freeze(d);
+}
+
+/** Longest window or shading dimension the worksheet functions accept [m]. */
+export const LENGTH_MAX = 100;
+
+function length(name: string, description: string, extra: Partial<ParamDescriptor> = {}): ParamDescriptor {
+  return p({ name, kind: 'number', unit: 'm', min: 0, max: LENGTH_MAX, default: 0, description, ...extra });
 }
 
 export const GLOSSARY = {
@@ -24,4 +33,36 @@ export const GLOSSARY = {
   surfaceAzimuth: p({ name: 'surfaceAzimuth', kind: 'number', unit: '°', min: 0, max: 360, description: 'direction the surface faces, clockwise from true north (N 0, E 90, S 180, W 270)' }),
   sunAltitude: p({ name: 'sunAltitude', kind: 'number', unit: '°', min: -90, max: 90, description: 'sun altitude above the horizon' }),
   sunAzimuth: p({ name: 'sunAzimuth', kind: 'number', unit: '°', min: 0, max: 360, description: 'sun azimuth clockwise from true north' }),
+  incidence: p({ name: 'incidence', kind: 'number', unit: '°', min: 0, max: 180, description: 'incidence angle of the sun on the glass (90 or more: sun behind it)' }),
+  year: p({ name: 'year', kind: 'number', integer: true, min: 1901, max: 9998, description: 'calendar year (8784 hours in a leap year, else 8760)' }),
+  dayOfYear: p({ name: 'dayOfYear', kind: 'number', min: 1, max: 366, description: 'day of the year, 1 = 1 January (fractions allowed)' }),
+  width: length('width', 'window width (rough opening, frame included)', { exclusiveMin: true, default: undefined }),
+  height: length('height', 'window height (rough opening, frame included)', { exclusiveMin: true, default: undefined }),
+  overhangProjection: length('overhangProjection', 'depth of an overhang out from the wall; 0 = no overhang'),
+  overhangGap: length('overhangGap', "height of the overhang's underside above the window head"),
+  overhangExtensionLeft: length('overhangExtensionLeft', 'overhang extension beyond the left jamb, seen from outside (negative stops short)', { min: -LENGTH_MAX }),
+  overhangExtensionRight: length('overhangExtensionRight', 'overhang extension beyond the right jamb, seen from outside (negative stops short)', { min: -LENGTH_MAX }),
+  finGap: length('finGap', 'distance from each jamb to its fin'),
+  revealDepth: length('revealDepth', 'depth of the glass behind the wall face; 0 = flush'),
+  skyline: p({
+    name: 'skyline',
+    kind: 'numberList',
+    unit: '°',
+    min: 0,
+    max: 90,
+    optional: true,
+    length: { min: 1, max: 360 },
+    description: 'elevation angles of surrounding buildings and terrain for equal azimuth sectors clockwise from north; blank: open horizon',
+  }),
+  dni: p({ name: 'dni', kind: 'number', unit: 'W/m²', min: 0, max: IRRADIANCE_MAX, description: 'direct normal irradiance' }),
+  dhi: p({ name: 'dhi', kind: 'number', unit: 'W/m²', min: 0, max: IRRADIANCE_MAX, description: 'diffuse horizontal irradiance' }),
+  tauB: p({ name: 'tauB', kind: 'number', min: 0, max: TAU_B_MAX, exclusiveMin: true, description: 'beam pseudo-optical depth τb of the ASHRAE clear-sky model (site and month data)' }),
+  tauD: p({ name: 'tauD', kind: 'number', min: 0, max: TAU_D_MAX, exclusiveMin: true, description: 'diffuse pseudo-optical depth τd of the ASHRAE clear-sky model (site and month data)' }),
+  linkeTurbidity: p({ name: 'linkeTurbidity', kind: 'number', min: LINKE_MIN, max: LINKE_MAX, description: 'Linke turbidity factor (about 2 very clear, 3–4 typical, 6+ hazy)' }),
+  albedo: p({ name: 'albedo', kind: 'number', min: 0, max: 1, default: 0.2, description: 'ground reflectance (0.2 for grass and soil is common practice, no source; fresh snow up to 0.8)' }),
+  model: p({ name: 'model', kind: 'choice', choices: ['perez', 'haydavies', 'isotropic'], default: 'perez', description: 'sky-diffuse model: "perez" (Perez 1990), "haydavies" (Hay–Davies) or "isotropic"' }),
+  shgcNormal: p({ name: 'shgcNormal', kind: 'number', min: 0, max: 1, description: 'solar heat gain coefficient of the glazing at normal incidence (from the product rating)' }),
+  panes: p({ name: 'panes', kind: 'number', integer: true, min: PANES_MIN, max: PANES_MAX, default: 2, description: 'number of glass panes, for the fall of SHGC with incidence angle' }),
+  frameFraction: p({ name: 'frameFraction', kind: 'number', min: 0, max: 1, exclusiveMax: true, default: 0, description: 'share of the rough opening taken by the frame' }),
+  interiorAttenuation: p({ name: 'interiorAttenuation', kind: 'number', min: 0, max: 1, default: 1, description: 'interior attenuation coefficient of a blind or curtain; 1 = none' }),
 } as const;

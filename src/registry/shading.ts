@@ -14,46 +14,34 @@ import type { Shading } from '../core/window';
 import { GLOSSARY } from './glossary';
 import { type Args, type FunctionDescriptor, NotAvailable, type ParamDescriptor } from './types';
 
-/** Longest window or shading dimension accepted by the worksheet functions [m] (as in gain.ts). */
-const LENGTH_MAX = 100;
-
 function length(name: string, description: string, extra: Partial<ParamDescriptor> = {}): ParamDescriptor {
-  return { name, kind: 'number', unit: 'm', min: 0, max: LENGTH_MAX, default: 0, description, ...extra };
+  return { ...GLOSSARY.revealDepth, name, description, ...extra };
 }
 
 function extension(name: string, description: string): ParamDescriptor {
-  return length(name, description, { min: -LENGTH_MAX });
+  return { ...GLOSSARY.overhangExtensionLeft, name, description };
 }
 
 const P = {
-  width: length('width', 'window width (the opening the shading is measured from)', { exclusiveMin: true, default: undefined }),
-  height: length('height', 'window height (the opening the shading is measured from)', { exclusiveMin: true, default: undefined }),
-  overhangProjection: length('overhangProjection', 'depth of an overhang out from the wall; 0 = no overhang'),
-  overhangProjectionRequired: length('overhangProjection', 'depth of the overhang out from the wall', { default: undefined }),
-  overhangGap: length('overhangGap', "height of the overhang's underside above the window head"),
-  overhangExtensionLeft: extension('overhangExtensionLeft', 'overhang extension beyond the left jamb, seen from outside (negative stops short)'),
-  overhangExtensionRight: extension('overhangExtensionRight', 'overhang extension beyond the right jamb, seen from outside (negative stops short)'),
+  width: { ...GLOSSARY.width, description: 'window width (the opening the shading is measured from)' },
+  height: { ...GLOSSARY.height, description: 'window height (the opening the shading is measured from)' },
+  overhangProjection: GLOSSARY.overhangProjection,
+  overhangProjectionRequired: { ...GLOSSARY.overhangProjection, default: undefined, description: 'depth of the overhang out from the wall' },
+  overhangGap: GLOSSARY.overhangGap,
+  overhangExtensionLeft: GLOSSARY.overhangExtensionLeft,
+  overhangExtensionRight: GLOSSARY.overhangExtensionRight,
   leftFinProjection: length('leftFinProjection', 'depth of the fin at the left jamb (seen from outside) out from the wall; 0 = no left fin'),
   rightFinProjection: length('rightFinProjection', 'depth of the fin at the right jamb (seen from outside) out from the wall; 0 = no right fin'),
-  finGap: length('finGap', 'distance from each jamb to its fin'),
+  finGap: GLOSSARY.finGap,
   leftFinGap: length('leftFinGap', 'distance from the left jamb to the left fin'),
   rightFinGap: length('rightFinGap', 'distance from the right jamb to the right fin'),
   finExtensionAbove: extension('finExtensionAbove', 'extension of the fins above the window head (negative stops below it)'),
   finExtensionBelow: extension('finExtensionBelow', 'extension of the fins below the sill (negative stops above it)'),
-  revealDepth: length('revealDepth', 'depth of the glass behind the wall face; 0 = flush'),
-  skyline: {
-    name: 'skyline',
-    kind: 'numberList',
-    unit: '°',
-    min: 0,
-    max: 90,
-    optional: true,
-    length: { min: 1, max: 360 },
-    description: 'elevation angles of surrounding buildings and terrain for equal azimuth sectors clockwise from north; blank: open horizon',
-  } as ParamDescriptor,
+  revealDepth: GLOSSARY.revealDepth,
+  skyline: GLOSSARY.skyline,
   projection: length('projection', 'depth of the overhang or fin out from the wall', { default: undefined }),
   day: { name: 'day', kind: 'number', integer: true, min: 1, max: 28, default: 21, description: 'day of each month the mask is drawn for' } as ParamDescriptor,
-  year: { name: 'year', kind: 'number', integer: true, min: 1901, max: 9998, default: MASK_DEFAULT_YEAR, description: 'calendar year of the sun positions (any year gives nearly the same mask)' } as ParamDescriptor,
+  year: { ...GLOSSARY.year, default: MASK_DEFAULT_YEAR, description: 'calendar year of the sun positions (any year gives nearly the same mask)' } as ParamDescriptor,
 } as const;
 
 const SUN_WALL: readonly ParamDescriptor[] = [GLOSSARY.sunAltitude, GLOSSARY.sunAzimuth, GLOSSARY.surfaceAzimuth];

@@ -6,11 +6,6 @@
 import {
   AIR_MASS_HORIZON,
   GHI_MAX,
-  IRRADIANCE_MAX,
-  LINKE_MAX,
-  LINKE_MIN,
-  TAU_B_MAX,
-  TAU_D_MAX,
   airMassKastenYoung,
   ashraeClearSky,
   ashraeVerticalDiffuseRatio,
@@ -28,24 +23,10 @@ import type { Args, FunctionDescriptor, ParamDescriptor } from './types';
 const E0_MAX = 1415;
 const E0_MIN = 1320;
 
-const dayOfYear: ParamDescriptor = { name: 'dayOfYear', kind: 'number', min: 1, max: 366, description: 'day of the year, 1 = 1 January (fractions allowed)' };
-const tauB: ParamDescriptor = { name: 'tauB', kind: 'number', min: 0, max: TAU_B_MAX, exclusiveMin: true, description: 'beam pseudo-optical depth τb of the ASHRAE clear-sky model (site and month data)' };
-const tauD: ParamDescriptor = { name: 'tauD', kind: 'number', min: 0, max: TAU_D_MAX, exclusiveMin: true, description: 'diffuse pseudo-optical depth τd of the ASHRAE clear-sky model (site and month data)' };
-const linkeTurbidity: ParamDescriptor = { name: 'linkeTurbidity', kind: 'number', min: LINKE_MIN, max: LINKE_MAX, description: 'Linke turbidity factor (about 2 very clear, 3–4 typical, 6+ hazy)' };
-const irradiance = (name: string, description: string): ParamDescriptor => ({ name, kind: 'number', unit: 'W/m²', min: 0, max: IRRADIANCE_MAX, description });
-const dni = irradiance('dni', 'direct normal irradiance');
-const dhi = irradiance('dhi', 'diffuse horizontal irradiance');
-const albedo: ParamDescriptor = { name: 'albedo', kind: 'number', min: 0, max: 1, default: 0.2, description: 'ground reflectance (grass about 0.2, fresh snow up to 0.8)' };
-const MODEL_CHOICES = ['perez', 'haydavies', 'isotropic'] as const;
-const model: ParamDescriptor = {
-  name: 'model',
-  kind: 'choice',
-  choices: MODEL_CHOICES,
-  default: 'perez',
-  description: 'sky-diffuse model: "perez" (Perez 1990), "haydavies" (Hay–Davies) or "isotropic"',
-};
+const { dayOfYear, tauB, tauD, linkeTurbidity, dni, dhi, albedo, model } = GLOSSARY;
+type ModelChoice = 'perez' | 'haydavies' | 'isotropic';
 const skyViewFactor: ParamDescriptor = { name: 'skyViewFactor', kind: 'number', min: 0, max: 1, default: 1, description: 'share of the sky diffuse the window still sees past a skyline (1 = open)' };
-const MODEL_OF: Record<(typeof MODEL_CHOICES)[number], SkyModel> = { perez: 'perez1990', haydavies: 'hayDavies', isotropic: 'isotropic' };
+const MODEL_OF: Record<ModelChoice, SkyModel> = { perez: 'perez1990', haydavies: 'hayDavies', isotropic: 'isotropic' };
 
 const windowParams: readonly ParamDescriptor[] = [
   dni,
@@ -70,7 +51,7 @@ function windowIrradiance(a: Args) {
     surfaceAzimuth: a.surfaceAzimuth as number,
     albedo: a.albedo as number,
     dayOfYear: a.dayOfYear as number,
-    model: MODEL_OF[a.model as (typeof MODEL_CHOICES)[number]],
+    model: MODEL_OF[a.model as ModelChoice],
     skyViewFactor: a.skyViewFactor as number,
   });
 }
