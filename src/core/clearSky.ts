@@ -9,6 +9,7 @@
 import { airMassKastenYoung } from './airMass';
 import { RAD } from './angles';
 import { requireRange } from './errors';
+import { standardPressure } from './sun';
 import { extraterrestrialIrradiance, extraterrestrialSpencer, requireDayOfYear } from './extraterrestrial';
 
 const { exp, pow, sin, min } = Math;
@@ -93,7 +94,11 @@ export function ashraeClearSky(sunAltitude: number, dayOfYear: number, tauB: num
  * GHI = cg1 I0 cos z exp(−cg2 m (fh1 + fh2 (TL − 1))) exp(0.01 m^1.8);
  * DNI = b I0 exp(−0.09 m (TL − 1)) with b = 0.664 + 0.163 / fh1, limited so that it does not exceed
  * GHI (1 − (0.1 − 0.2 exp(−TL)) / (0.1 + 0.882 / fh1)) / cos z; DHI = GHI − DNI cos z.
- * m is the Kasten–Young relative air mass, I0 the extraterrestrial irradiance by Spencer (1971).
+ * m is the ABSOLUTE (pressure-corrected) air mass, the Kasten–Young relative air mass × p/p0 with
+ * p the standard-atmosphere pressure at the elevation ({@link standardPressure}), as the formulation
+ * is meant to be air-mass independent (from memory: with the relative air mass a high site would
+ * get less global irradiance at low sun than a sea-level one, which is unphysical); I0 is the
+ * extraterrestrial irradiance by Spencer (1971).
  */
 export function ineichenPerezClearSky(sunAltitude: number, dayOfYear: number, linkeTurbidity: number, elevation: number): ClearSky {
   const altitude = requireRange('sunAltitude', sunAltitude, -90, 90, '°');
@@ -101,7 +106,7 @@ export function ineichenPerezClearSky(sunAltitude: number, dayOfYear: number, li
   const tl = requireRange('linkeTurbidity', linkeTurbidity, LINKE_MIN, LINKE_MAX);
   const h = requireRange('elevation', elevation, ELEVATION_MIN, ELEVATION_MAX, 'm');
   if (altitude <= 0) return { ...NO_SUN };
-  const m = airMassKastenYoung(altitude);
+  const m = (airMassKastenYoung(altitude) * standardPressure(h)) / 1013.25;
   const cosZ = sin(altitude * RAD);
   const fh1 = exp(-h / 8000);
   const fh2 = exp(-h / 1250);
