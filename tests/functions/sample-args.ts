@@ -7,7 +7,7 @@ import { SunpaneError } from '../../src/core/errors';
 import { applyFunction } from '../../src/registry/evaluate';
 import { isOptional } from '../../src/registry';
 import type { FunctionDescriptor, OutTable, ParamDescriptor } from '../../src/registry/types';
-import { FORMULAS, type FormulaArg, serialOf } from '../fixtures/formulas';
+import { type Cell, FORMULAS, type FormulaArg, serialOf } from '../fixtures/formulas';
 
 /** A mid-year, midday local date-time: valid for every dateTime parameter. */
 const SAMPLE_SERIAL = serialOf(2024, 6, 21, 12, 30);
@@ -88,6 +88,12 @@ export function validArgs(fn: FunctionDescriptor): FormulaArg[] {
   throw new Error(`sample-args: cannot derive a valid call of ${fn.name} from its descriptor; add a row to tests/fixtures/formulas.ts`);
 }
 
+/** Rows ↔ columns of a range (a list given as a column instead of a row). */
+export function transpose(m: readonly Cell[][]): Cell[][] {
+  const width = m.reduce((w, r) => Math.max(w, r.length), 0);
+  return Array.from({ length: width }, (_, j) => m.map((r) => r[j] ?? null));
+}
+
 /** Index of the first broadcast parameter that has a value in `args` (for the range call). */
 export function firstBroadcastIndex(fn: FunctionDescriptor, args: readonly FormulaArg[]): number {
   return fn.params.findIndex((p, k) => p.kind !== 'numberList' && p.kind !== 'table' && args[k] !== null && args[k] !== undefined);
@@ -118,6 +124,14 @@ export function badArgs(fn: FunctionDescriptor, valid: readonly FormulaArg[]): {
   if (k >= 0) {
     args[k] = fn.params[k].kind === 'choice' ? 'no-such-choice' : 'not a date';
     return { args, param: fn.params[k].name };
+  }
+  k = fn.params.findIndex((p, i) => p.kind === 'numberList' && (p.max !== undefined || p.min !== undefined) && Array.isArray(args[i]));
+  if (k >= 0) {
+    const p = fn.params[k];
+    const list = (args[k] as Cell[][]).map((r) => r.slice());
+    list[0][0] = p.max !== undefined ? p.max + Math.max(1, Math.abs(p.max)) : (p.min as number) - Math.max(1, Math.abs(p.min as number));
+    args[k] = list;
+    return { args, param: p.name };
   }
   throw new Error(`sample-args: ${fn.name} has no parameter to make invalid generically`);
 }
