@@ -30,10 +30,10 @@ export const OPTION_FIELDS: readonly { key: keyof ShadingOption; title: string }
   { key: 'overhangDepth', title: 'Overhang depth m' },
   { key: 'overhangGap', title: 'Overhang gap m' },
   { key: 'overhangReach', title: 'Overhang reach m' },
+  { key: 'setBack', title: 'Set-back m' },
   { key: 'leftFinDepth', title: 'Left fin m' },
   { key: 'rightFinDepth', title: 'Right fin m' },
   { key: 'finGap', title: 'Fin gap m' },
-  { key: 'setBack', title: 'Set-back m' },
 ];
 
 /** Starting options for a new workbook (edit freely). */

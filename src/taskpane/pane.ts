@@ -150,6 +150,7 @@ export function createPane(doc: Document, host: PaneHost): void {
   function setBusy(busy: boolean, text = 'Working…'): void {
     cancelRequested = false;
     progress.hidden = !busy;
+    if (busy) progress.scrollIntoView?.({ block: 'nearest' });
     byId(doc, 'progress-text').textContent = text;
     (byId(doc, 'progress-bar') as HTMLProgressElement).value = 0;
     for (const b of actionButtons()) b.disabled = busy;
@@ -288,42 +289,41 @@ export function createPane(doc: Document, host: PaneHost): void {
 
   // ---- options -------------------------------------------------------------------------------
   const opts = panels.options;
-  const optTable = h(doc, 'table', { id: 'options-table', className: 'options' });
+  const optTable = h(doc, 'div', { id: 'options-list', className: 'options' });
   const addOption = h(doc, 'button', { type: 'button', id: 'add-option' }, 'Add option');
   const compareButton = h(doc, 'button', { type: 'button', id: 'run-compare', className: 'primary' }, 'Compare on a new sheet');
   const optMsg = h(doc, 'div', { id: 'options-msg', className: 'msg general', role: 'alert' });
   opts.append(
     h(doc, 'p', { className: 'help' }, `The window on the Window tab with up to ${MAX_OPTIONS} sets of outside shading, each against the same window with none (a skyline stays: it is the surroundings). Depths in m; 0 or blank = no such device; the reach is past each jamb.`),
-    h(doc, 'div', { className: 'table-scroll' }, optTable),
+    optTable,
     optMsg,
     h(doc, 'div', { className: 'actions' }, addOption, compareButton),
   );
   function renderOptions(): void {
     optTable.textContent = '';
-    optTable.append(h(doc, 'thead', {}, h(doc, 'tr', {}, ...OPTION_FIELDS.map((c) => h(doc, 'th', { scope: 'col' }, c.title)), h(doc, 'th', { scope: 'col' }, ''))));
-    const body = h(doc, 'tbody');
     state.options.forEach((o, i) => {
-      const tr = h(doc, 'tr');
+      const card = h(doc, 'fieldset', { className: 'option', id: `opt-${i}` }, h(doc, 'legend', {}, `Option ${i + 1}`));
       for (const c of OPTION_FIELDS) {
         const id = `opt-${i}-${c.key}`;
-        const input = h(doc, 'input', { id, type: 'text', autocomplete: 'off', className: c.key === 'label' ? 'wide' : 'narrow' });
+        const input = h(doc, 'input', { id, type: 'text', autocomplete: 'off', inputmode: c.key === 'label' ? undefined : 'decimal' });
         input.value = o[c.key];
         input.addEventListener('input', () => {
           state.options[i] = { ...state.options[i], [c.key]: input.value };
           store.saveSoon();
         });
-        tr.append(h(doc, 'td', {}, h(doc, 'label', { for: id, className: 'sr-only' }, `${c.title}, option ${i + 1}`), input));
+        card.append(h(doc, 'div', { className: c.key === 'label' ? 'field wide' : 'field' }, h(doc, 'label', { for: id }, c.key === 'label' ? 'Name' : c.title), input));
+        if (c.key === 'label') {
+          const remove = h(doc, 'button', { type: 'button', className: 'link', id: `opt-${i}-remove`, 'aria-label': `Remove option ${i + 1}` }, 'Remove');
+          remove.addEventListener('click', () => {
+            state.options.splice(i, 1);
+            store.saveSoon();
+            renderOptions();
+          });
+          card.append(h(doc, 'div', { className: 'field end' }, remove));
+        }
       }
-      const remove = h(doc, 'button', { type: 'button', className: 'link', id: `opt-${i}-remove`, 'aria-label': `Remove option ${i + 1}` }, 'Remove');
-      remove.addEventListener('click', () => {
-        state.options.splice(i, 1);
-        store.saveSoon();
-        renderOptions();
-      });
-      tr.append(h(doc, 'td', {}, remove));
-      body.append(tr);
+      optTable.append(card);
     });
-    optTable.append(body);
     addOption.disabled = state.options.length >= MAX_OPTIONS;
   }
   renderOptions();

@@ -288,7 +288,7 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     const page = await openPane();
     await setField(page, 'year', String(YEAR));
     await page.click('#tab-options');
-    expect(await page.$$eval('#options-table tbody tr', (r) => r.length)).toBe(3);
+    expect(await page.$$eval('#options-list fieldset.option', (r) => r.length)).toBe(3);
     await page.click('#add-option');
     await page.fill('#opt-3-label', 'Deep set-back');
     await page.fill('#opt-3-setBack', '0.3');
