@@ -80,6 +80,8 @@ function checkManifest(xml: string, host: string): void {
   // Requirements, permissions, identity.
   const sets = childrenNamed(at(root, 'Requirements', 'Sets'), 'Set').map((s) => `${s.attributes.Name} ${s.attributes.MinVersion}`);
   expect(sets).toContain('SharedRuntime 1.1');
+  // Custom functions in a shared runtime need their own requirement set too; 1.3 for per-cell errors.
+  expect(sets).toContain('CustomFunctionsRuntime 1.3');
   expect(at(root, 'Permissions').text).toBe('ReadWriteDocument');
   expect(at(root, 'Id').text).toMatch(/^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/);
   expect(at(root, 'Version').text).toMatch(/^\d+\.\d+\.\d+\.\d+$/);
