@@ -1,0 +1,153 @@
+/**
+ * `sunpane demo` and its workbook, read back with ExcelJS: the sheets it promises, real tables,
+ * frozen headers, number formats, the heat map's colour scale, every native formula's cached result
+ * equal to the formula worked out again from the cells it refers to, and every SUNPANE formula's
+ * cached result equal to the registered function applied to the cells it refers to.
+ */
+import * as fs from 'node:fs';
+import * as path from 'node:path';
+import ExcelJS from 'exceljs';
+import { COLOURS } from '../../src/cli/workbook';
+import { applyFunction } from '../../src/registry/evaluate';
+import { findFunction } from '../../src/registry';
+import { expectSaved, run, tempDir } from './run';
+
+let dir: string;
+let stdout: string;
+let wb: ExcelJS.Workbook;
+
+/** The number a cell holds (dates as 1900-system serials, formulas by their cached result). */
+function numberOf(v: ExcelJS.CellValue): number {
+  if (typeof v === 'number') return v;
+  if (v instanceof Date) return v.getTime() / 86_400_000 + 25_569;
+  if (v && typeof v === 'object' && 'formula' in v) return numberOf((v as ExcelJS.CellFormulaValue).result as ExcelJS.CellValue);
+  throw new Error(`not a number: ${JSON.stringify(v)}`);
+}
+
+function sheetOf(ref: string, here: ExcelJS.Worksheet): { ws: ExcelJS.Worksheet; range: string } {
+  const m = /^(?:'((?:[^']|'')+)'|([A-Za-z]\w*))!(.+)$/.exec(ref);
+  if (!m) return { ws: here, range: ref };
+  const ws = wb.getWorksheet((m[1] ?? m[2]).replace(/''/g, "'"));
+  if (!ws) throw new Error(`no sheet in ${ref}`);
+  return { ws, range: m[3] };
+}
+
+function rangeValues(ref: string, here: ExcelJS.Worksheet): number[] {
+  const { ws, range } = sheetOf(ref, here);
+  const [a, b = a] = range.split(':');
+  const from = ws.getCell(a);
+  const to = ws.getCell(b);
+  const out: number[] = [];
+  for (let r = Number(from.row); r <= Number(to.row); r++) for (let c = Number(from.col); c <= Number(to.col); c++) out.push(numberOf(ws.getCell(r, c).value));
+  return out;
+}
+
+/** Works a native formula out again from its cells: SUM(range), MAX(range) or 1-A/B. */
+function evaluateNative(formula: string, here: ExcelJS.Worksheet): number {
+  const fn = /^(SUM|MAX)\((.+)\)$/.exec(formula);
+  if (fn) {
+    const xs = rangeValues(fn[2], here);
+    return fn[1] === 'SUM' ? xs.reduce((s, x) => s + x, 0) : Math.max(...xs);
+  }
+  const ratio = /^1-([A-Z]+\d+)\/([A-Z]+\d+)$/.exec(formula);
+  if (ratio) return 1 - numberOf(here.getCell(ratio[1]).value) / numberOf(here.getCell(ratio[2]).value);
+  throw new Error(`unexpected native formula ${formula}`);
+}
+
+beforeAll(async () => {
+  dir = tempDir('sunpane-demo-');
+  const r = await run('demo', '--out', path.join(dir, 'nested', 'out'));
+  if (r.code !== 0) throw new Error(`demo failed: ${r.err}`);
+  stdout = r.out;
+  wb = new ExcelJS.Workbook();
+  await wb.xlsx.readFile(path.join(dir, 'nested', 'out', 'sunpane-demo.xlsx'));
+});
+
+describe('sunpane demo', () => {
+  it('prints the building, gain per site and facing and the best shading option, as saved', () => {
+    const lines = stdout.split('\n');
+    expect(lines).toHaveLength(6);
+    expect(lines[5]).toBe(`wrote ${path.join(dir, 'nested', 'out', 'sunpane-demo.xlsx')}`);
+    expectSaved('demo-summary.txt', lines.slice(0, 5).join('\n'));
+  });
+
+  it('writes only the workbook into the (created) output folder', () => {
+    expect(fs.readdirSync(path.join(dir, 'nested', 'out'))).toEqual(['sunpane-demo.xlsx']);
+  });
+
+  it('holds the schedule, summary, monthly, options, formula, heat-map, monthly-peak and hourly sheets', () => {
+    expect(wb.worksheets.map((w) => w.name)).toEqual(['Overview', 'Schedule', 'Summary', 'Monthly', 'Options', 'Formulas', 'Heat map BW-S1', 'Year BW-S1', 'Hourly BW-S1']);
+  });
+
+  it('puts its data in real tables with frozen header rows', () => {
+    for (const ws of wb.worksheets) {
+      if (ws.name.startsWith('Heat map')) continue;
+      expect(ws.getTables().length).toBe(1);
+    }
+    for (const ws of wb.worksheets) expect(ws.views[0]).toMatchObject({ state: 'frozen' });
+    expect(wb.getWorksheet('Summary')!.views[0]).toMatchObject({ ySplit: 1, xSplit: 1 });
+  });
+
+  it("gives the hourly sheet one row per hour of 2026, stamped at the hour's end with a date format", () => {
+    const ws = wb.getWorksheet('Hourly BW-S1')!;
+    expect(ws.rowCount).toBe(8761);
+    expect(numberOf(ws.getCell('A2').value)).toBeCloseTo(46023 + 1 / 24, 9); // 2026-01-01 01:00
+    expect(numberOf(ws.getCell('A8761').value)).toBeCloseTo(46388, 9); // 2027-01-01 00:00
+    expect(ws.getCell('A2').numFmt).toBe('yyyy-mm-dd hh:mm');
+    expect(ws.getCell('M2').numFmt).toBe('#,##0');
+  });
+
+  it('colours the day × hour heat map with our own three-stop colour scale', () => {
+    const ws = wb.getWorksheet('Heat map BW-S1')!;
+    const cf = (ws as unknown as { conditionalFormattings: { ref: string; rules: { type: string; color: { argb: string }[] }[] }[] }).conditionalFormattings;
+    expect(cf).toHaveLength(1);
+    expect(cf[0].ref).toBe('B3:Y367');
+    expect(cf[0].rules[0].type).toBe('colorScale');
+    expect(cf[0].rules[0].color.map((c) => c.argb)).toEqual([COLOURS.heatLow, COLOURS.heatMid, COLOURS.heatHigh]);
+  });
+
+  it('caches every native formula result as the formula works out from its cells (relative 1e-12)', () => {
+    let count = 0;
+    for (const ws of wb.worksheets) {
+      ws.eachRow((row) =>
+        row.eachCell((cell) => {
+          const v = cell.value as ExcelJS.CellFormulaValue;
+          if (!v || typeof v !== 'object' || !('formula' in v) || v.formula.startsWith('SUNPANE.')) return;
+          let expected: number;
+          try {
+            expected = evaluateNative(v.formula, ws);
+          } catch (err) {
+            throw new Error(`${ws.name}!${cell.address} ${v.formula}: ${(err as Error).message}`);
+          }
+          // ExcelJS 4.4 reads a cached 0 back as no result (the file does hold <v>0</v>).
+          const cached = v.result === undefined ? 0 : numberOf(v.result as ExcelJS.CellValue);
+          if (!(Math.abs(cached - expected) <= 1e-12 * Math.max(1, Math.abs(expected)))) throw new Error(`${ws.name}!${cell.address} ${v.formula}: cached ${cached}, from the cells ${expected}`);
+          expect(Math.abs(cached - expected)).toBeLessThanOrEqual(1e-12 * Math.max(1, Math.abs(expected)));
+          count++;
+        }),
+      );
+    }
+    expect(count).toBeGreaterThan(40);
+  });
+
+  it('caches every SUNPANE formula as the registered function gives for the cells it refers to', () => {
+    const ws = wb.getWorksheet('Formulas')!;
+    let count = 0;
+    ws.eachRow((row) =>
+      row.eachCell((cell) => {
+        const v = cell.value as ExcelJS.CellFormulaValue;
+        if (!v || typeof v !== 'object' || !('formula' in v) || !v.formula.startsWith('SUNPANE.')) return;
+        const m = /^SUNPANE\.([A-Z]+)\((.*)\)$/.exec(v.formula)!;
+        const fn = findFunction(m[1]);
+        expect(fn).toBeDefined();
+        const args = m[2].split(',').map((ref) => (ref === '' ? null : numberOf(ws.getCell(ref.replace(/\$/g, '')).value)));
+        const table = applyFunction(fn!, args);
+        expect(typeof table[0][0]).toBe('number');
+        // 1e-8: a cached time of day comes back through a millisecond Date (1 ms ≈ 1.2e-8 day).
+        expect(Math.abs(numberOf(v.result as ExcelJS.CellValue) - (table[0][0] as number))).toBeLessThanOrEqual(1e-8);
+        count++;
+      }),
+    );
+    expect(count).toBeGreaterThanOrEqual(6);
+  });
+});

@@ -1,0 +1,52 @@
+/**
+ * The invented weather year (examples/weather-brackwater-2026.csv): repeatable, one row per hour,
+ * dark at night, never brighter than the clear sky it is made from, and the committed example file
+ * is exactly what the generator writes. (Invented data; structural checks only.)
+ */
+import * as fs from 'node:fs';
+import * as path from 'node:path';
+import { ineichenPerezClearSky } from '../../src/core/clearSky';
+import { annualSunPath } from '../../src/core/sunPath';
+import { formatSerialIso } from '../../src/core/time';
+import { findExampleSite } from '../../src/demo/sites';
+import { inventedWeatherCsv, inventedWeatherYear } from '../../src/demo/weather';
+
+const site = findExampleSite('brackwater')!;
+
+describe('invented weather year', () => {
+  const w = inventedWeatherYear(site, 2026);
+
+  it('has one value per hour, and 8784 in a leap year', () => {
+    expect(w.dni.length).toBe(8760);
+    expect(inventedWeatherYear(site, 2028).dni.length).toBe(8784);
+  });
+
+  it('is the same every time for the same seed and differs for another', () => {
+    expect(inventedWeatherYear(site, 2026).dni).toEqual(w.dni);
+    expect(inventedWeatherYear(site, 2026, 7).dni).not.toEqual(w.dni);
+  });
+
+  it('is dark with the sun down and its beam never exceeds the clear sky (tolerance 0.05 W/m² rounding)', () => {
+    const path_ = annualSunPath(2026, site.site);
+    let clearDays = 0;
+    for (let i = 0; i < w.dni.length; i++) {
+      const altitude = path_.altitude[i];
+      if (altitude <= 0) {
+        expect(w.dni[i] + w.dhi[i]).toBe(0);
+        continue;
+      }
+      const day = Math.floor(i / 24);
+      const month = new Date(Date.UTC(2026, 0, day + 1)).getUTCMonth();
+      const clear = ineichenPerezClearSky(altitude, day + 1, site.linkeTurbidity[month], site.site.elevation ?? 0);
+      expect(w.dni[i]).toBeLessThanOrEqual(clear.dni + 0.05);
+      expect(w.dhi[i]).toBeGreaterThanOrEqual(clear.dhi - 0.05);
+      if (i % 24 === 12 && w.dni[i] > 0.8 * clear.dni) clearDays++;
+    }
+    expect(clearDays).toBeGreaterThan(20);
+  });
+
+  it('matches the committed example file line for line', () => {
+    const file = path.join(__dirname, '..', '..', 'examples', 'weather-brackwater-2026.csv');
+    expect(fs.readFileSync(file, 'utf8')).toBe(inventedWeatherCsv(site, 2026, formatSerialIso));
+  });
+});
