@@ -25,15 +25,15 @@ export interface ShadingOption {
 }
 
 /** The option boxes, in table order, with our column titles. */
-export const OPTION_FIELDS: readonly { key: keyof ShadingOption; title: string }[] = [
-  { key: 'label', title: 'Option' },
-  { key: 'overhangDepth', title: 'Overhang depth m' },
-  { key: 'overhangGap', title: 'Overhang gap m' },
-  { key: 'overhangReach', title: 'Overhang reach m' },
-  { key: 'setBack', title: 'Set-back m' },
-  { key: 'leftFinDepth', title: 'Left fin m' },
-  { key: 'rightFinDepth', title: 'Right fin m' },
-  { key: 'finGap', title: 'Fin gap m' },
+export const OPTION_FIELDS: readonly { key: keyof ShadingOption; title: string; short: string }[] = [
+  { key: 'label', title: 'Option', short: 'Name' },
+  { key: 'overhangDepth', title: 'Overhang depth m', short: 'Overhang m' },
+  { key: 'overhangGap', title: 'Overhang gap m', short: 'Gap above m' },
+  { key: 'overhangReach', title: 'Overhang reach m', short: 'Reach m' },
+  { key: 'setBack', title: 'Set-back m', short: 'Set-back m' },
+  { key: 'leftFinDepth', title: 'Left fin m', short: 'Left fin m' },
+  { key: 'rightFinDepth', title: 'Right fin m', short: 'Right fin m' },
+  { key: 'finGap', title: 'Fin gap m', short: 'Fin gap m' },
 ];
 
 /** Starting options for a new workbook (edit freely). */

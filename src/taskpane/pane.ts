@@ -311,7 +311,7 @@ export function createPane(doc: Document, host: PaneHost): void {
           state.options[i] = { ...state.options[i], [c.key]: input.value };
           store.saveSoon();
         });
-        card.append(h(doc, 'div', { className: c.key === 'label' ? 'field wide' : 'field' }, h(doc, 'label', { for: id }, c.key === 'label' ? 'Name' : c.title), input));
+        card.append(h(doc, 'div', { className: c.key === 'label' ? 'field wide' : 'field' }, h(doc, 'label', { for: id, title: c.title }, c.short), input));
         if (c.key === 'label') {
           const remove = h(doc, 'button', { type: 'button', className: 'link', id: `opt-${i}-remove`, 'aria-label': `Remove option ${i + 1}` }, 'Remove');
           remove.addEventListener('click', () => {

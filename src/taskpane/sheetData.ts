@@ -61,8 +61,16 @@ export async function readSheetData(run: RunBatch, form: FormValues): Promise<Sh
     try {
       await ctx.sync();
     } catch (err) {
-      const path = wanted[0].field.paths?.[0] ?? wanted[0].field.id;
-      throw new SunpaneError(path, wanted.map((w) => `${w.ref.sheet ? `${w.ref.sheet}!` : ''}${w.ref.range}`).join(', '), 'must point at cells that exist (check the sheet names)', (err as Error).message);
+      // Excel does not say which range failed: try them one by one to name the right box.
+      for (const w of wanted) {
+        rangeOf(ctx, w.ref).load('address');
+        try {
+          await ctx.sync();
+        } catch {
+          throw new SunpaneError(w.field.paths?.[0] ?? w.field.id, `${w.ref.sheet ? `${w.ref.sheet}!` : ''}${w.ref.range}`, 'must point at cells that exist (check the sheet name)');
+        }
+      }
+      throw err;
     }
     const data: SheetData = {};
     wanted.forEach((w, i) => {
