@@ -323,7 +323,7 @@ function addOptions(wb: ExcelJS.Workbook, results: DemoResults): { cell: string;
 }
 
 /** Builds the whole demo workbook; returns it with the formula cells a spreadsheet must reproduce. */
-export function buildDemoWorkbook(results: DemoResults): { workbook: ExcelJS.Workbook; checks: DemoCheckCells } {
+export function buildDemoWorkbook(results: DemoResults, onHour?: () => void): { workbook: ExcelJS.Workbook; checks: DemoCheckCells } {
   const wb = newWorkbook(`Sunpane demo: ${DEMO_BUILDING.name}`);
   const overview = addOverview(wb, results);
   addSchedule(wb, results);
@@ -341,7 +341,7 @@ export function buildDemoWorkbook(results: DemoResults): { workbook: ExcelJS.Wor
   // The monthly sheet refers to the hourly one, which comes last (its many printed pages follow
   // the one-page sheets).
   const yearSheet = wb.addWorksheet(`Year ${hourlyWindow.tag}`);
-  const placement = addHourlySheet(wb, hourlySheet, `Hourly_${hourlyWindow.tag}`, series);
+  const placement = addHourlySheet(wb, hourlySheet, `Hourly_${hourlyWindow.tag}`, series, onHour);
   const yearCells = addMonthlySheet(yearSheet, `Year_${hourlyWindow.tag}`, summarizeAnnual(series), { sheet: hourlySheet, placement });
   const hourly = [yearCells.annualKWh, yearCells.maxMonthKWh, ...(yearCells.peakW ? [yearCells.peakW] : [])];
   return { workbook: wb, checks: { summary, monthly, options, overview, hourly } };
@@ -370,7 +370,9 @@ export async function demoCommand(argv: readonly string[], io: Output): Promise<
     throw err;
   }
   bar.finish();
-  const { workbook } = buildDemoWorkbook(results);
+  const writing = new ProgressBar('hourly sheet', demoWindows()[0].spec.year % 4 === 0 ? 8784 : 8760);
+  const { workbook } = buildDemoWorkbook(results, () => writing.tick());
+  writing.finish();
   const file = path.join(dir, DEMO_FILE);
   await saveWorkbook(workbook, file);
   for (const line of demoSummaryText(results, path.normalize(file))) io.out(line);

@@ -102,6 +102,37 @@ const PLANS: readonly FormulaPlan[] = [
     numFmt: '0.00',
   },
   {
+    label: 'sunlit fraction of the glass under the overhang',
+    name: 'SUNLITFRACTION',
+    args: {
+      sunAltitude: { formula: 'sun altitude' },
+      sunAzimuth: { formula: 'sun azimuth' },
+      surfaceAzimuth: { input: 'surfaceAzimuth' },
+      width: { input: 'width' },
+      height: { input: 'height' },
+      overhangProjection: { input: 'overhangProjection' },
+      overhangGap: { input: 'overhangGap' },
+      overhangExtensionLeft: { input: 'overhangExtensionLeft' },
+      overhangExtensionRight: { input: 'overhangExtensionRight' },
+    },
+    unit: '',
+    numFmt: NUMBER_FORMATS.fraction,
+  },
+  {
+    label: 'SHGC at this incidence angle',
+    name: 'SHGCANGLE',
+    args: { incidence: { formula: 'incidence angle on the window' }, shgcNormal: { input: 'shgc' } },
+    unit: '',
+    numFmt: NUMBER_FORMATS.shgc,
+  },
+  {
+    label: 'glass area',
+    name: 'GLASSAREA',
+    args: { width: { input: 'width' }, height: { input: 'height' }, frameFraction: { input: 'frameFraction' } },
+    unit: 'm²',
+    numFmt: NUMBER_FORMATS.area,
+  },
+  {
     label: 'window solar gain this hour (clear sky, overhang)',
     name: 'WINDOWGAIN',
     args: {

@@ -59,6 +59,9 @@ function usage(io: Output): void {
 /** Runs the command line; resolves to the process exit code. */
 export async function main(argv: readonly string[], io: Output = { out: (t) => process.stdout.write(`${t}\n`), err: (t) => process.stderr.write(`${t}\n`) }): Promise<number> {
   const [name, ...rest] = argv;
+  if (name === 'help' && rest.length === 1 && COMMANDS[rest[0]] && rest[0] !== 'list' && rest[0] !== 'call') {
+    return COMMANDS[rest[0]].run(['--help'], io);
+  }
   if (!name || name === '--help' || name === '-h' || name === 'help') {
     usage(io);
     return name ? 0 : 2;

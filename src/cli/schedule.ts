@@ -151,7 +151,10 @@ export function windowFromRow(row: ScheduleRow): { spec: WindowSpec; hasWeather:
     return file;
   } catch (err) {
     if (err instanceof SunpaneError) {
-      const column = columnOfPath(err.argument);
+      if (err.argument === 'site' && (err.value === undefined || err.value === null)) {
+        throw new CliInputError(`${row.where}${label}: no site: fill the column site (an example site id) or latitude, longitude and utcOffset`);
+      }
+      const column = columnOfPath(err.argument === 'glazing' ? 'glazing.shgc' : err.argument);
       const blank = err.value === undefined || err.value === null;
       const what = column ? `column ${column.header}` : `field ${err.argument}`;
       throw new CliInputError(`${row.where}${label}, ${what}: ${blank && column ? 'is blank but required' : err.message}`);

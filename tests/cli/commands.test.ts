@@ -236,3 +236,19 @@ describe('the installed command', () => {
     expect(bad.stderr).toMatch(/cannot read the window file .*none\.json: the folder does not exist/);
   });
 });
+
+describe('help by name', () => {
+  it('prints a command\'s help for `sunpane help COMMAND`', async () => {
+    const r = await run('help', 'schedule');
+    expect(r.code).toBe(0);
+    expect(r.out.startsWith('usage: sunpane schedule')).toBe(true);
+  });
+
+  it('asks for a site when a schedule row has neither an example site nor coordinates', async () => {
+    const dir = tempDir();
+    const input = writeTemp(dir, 'w.csv', 'name,year,surfaceAzimuth,width,height,shgc,linkeTurbidity\nLone,2026,180,1,1,0.4,3\n');
+    const r = await run('schedule', '--in', input, '--out', path.join(dir, 'o.csv'));
+    expect(r.code).toBe(1);
+    expect(r.err).toBe(`sunpane: ${input} line 2 ("Lone"): no site: fill the column site (an example site id) or latitude, longitude and utcOffset`);
+  });
+});
