@@ -23,7 +23,7 @@
  *   of two lower ones is composed from them by angle addition (VSOP87 frequencies are combinations
  *   of the planets' mean motions): 195 terms need 68 frequencies, of which only 18 call Math.cos and
  *   Math.sin. The error of these substitutions is at most Σ A·|ΔC|·|τ|, given per unit τ by
- *   {@link EARTH_FREQUENCY_MERGE_BOUND} and checked in tests/core/spaTerms.test.ts against the
+ *   {@link EARTH_FREQUENCY_MERGE_BOUND} and checked in tests/core/sunTerms.test.ts against the
  *   plain term-by-term sums — far below the SPA's ±0.0003°.
  * - Nutation: each argument is an integer combination of the five fundamental arguments X0…X4
  *   (multipliers −2…3), so sin and cos of every row follow exactly from sin and cos of X0…X4 and

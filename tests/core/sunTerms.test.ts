@@ -1,0 +1,72 @@
+/**
+ * The rearranged sums over the SPA periodic-term tables (src/core/spaTerms.ts) against the plain
+ * sums of Reda & Andreas (2008), Eq. 9–11 (Earth: X = Σ τ^n Σ A cos(B + Cτ) / 1e8) and Eq. 20–22
+ * (nutation: Σ (a + bT) sin(Σ Xj Yj), Σ (c + dT) cos(Σ Xj Yj)), written out term by term here. The
+ * table transcription itself is checked against published sums in
+ * tests/reference/spa-worked-example.test.ts.
+ */
+import {
+  B_TERMS,
+  EARTH_DIRECT_FREQUENCY_COUNT,
+  EARTH_FREQUENCY_MERGE_BOUND,
+  L_TERMS,
+  NUTATION_TERMS,
+  R_TERMS,
+  earthPeriodicSums,
+  nutationSums,
+} from '../../src/core/spaTerms';
+
+type Series = readonly (readonly (readonly number[])[])[];
+
+function plainEarth(series: Series, tau: number): number {
+  let total = 0;
+  series.forEach((rows, n) => {
+    let sum = 0;
+    for (const [a, b, c] of rows) sum += a * Math.cos(b + c * tau);
+    total += sum * tau ** n;
+  });
+  return total / 1e8;
+}
+
+describe('Earth periodic sums with shared and composed frequencies', () => {
+  test('stay within the exported bound of the plain term-by-term sums for −0.3 ≤ τ ≤ 0.8', () => {
+    for (let tau = -0.3; tau <= 0.8; tau += 0.0137) {
+      const ours = earthPeriodicSums(tau, { L: 0, B: 0, R: 0 });
+      const plain = [plainEarth(L_TERMS, tau), plainEarth(B_TERMS, tau), plainEarth(R_TERMS, tau)];
+      // Rounding of ~200 terms adds up to ~1e-13 on top of the substitution bound.
+      [ours.L, ours.B, ours.R].forEach((v, q) => expect(Math.abs(v - plain[q])).toBeLessThanOrEqual(EARTH_FREQUENCY_MERGE_BOUND[q] * Math.abs(tau) + 1e-12));
+    }
+  });
+
+  test('the bound is below 1e-7° in L and B and 1e-9 AU in R from 1900 to 2100 (|τ| ≤ 0.1)', () => {
+    const degPerRad = 180 / Math.PI;
+    expect(EARTH_FREQUENCY_MERGE_BOUND[0] * 0.1 * degPerRad).toBeLessThan(1e-6);
+    expect(EARTH_FREQUENCY_MERGE_BOUND[1] * 0.1 * degPerRad).toBeLessThan(1e-7);
+    expect(EARTH_FREQUENCY_MERGE_BOUND[2] * 0.1).toBeLessThan(1e-8);
+    expect(EARTH_DIRECT_FREQUENCY_COUNT).toBeLessThan(40);
+  });
+});
+
+describe('nutation sums by angle addition', () => {
+  test('equal the plain sums over the 63 rows within 1e-12°', () => {
+    for (let t = -1; t <= 1; t += 0.0731) {
+      const x = [
+        297.85036 + 445_267.11148 * t,
+        357.52772 + 35_999.05034 * t,
+        134.96298 + 477_198.867398 * t,
+        93.27191 + 483_202.017538 * t,
+        125.04452 - 1934.136261 * t,
+      ];
+      let psi = 0;
+      let eps = 0;
+      for (const [y0, y1, y2, y3, y4, a, b, c, d] of NUTATION_TERMS) {
+        const arg = ((x[0] * y0 + x[1] * y1 + x[2] * y2 + x[3] * y3 + x[4] * y4) * Math.PI) / 180;
+        psi += (a + b * t) * Math.sin(arg);
+        eps += (c + d * t) * Math.cos(arg);
+      }
+      const ours = nutationSums(t, x, { deltaPsi: 0, deltaEpsilon: 0 });
+      expect(Math.abs(ours.deltaPsi - psi / 36_000_000)).toBeLessThan(1e-12);
+      expect(Math.abs(ours.deltaEpsilon - eps / 36_000_000)).toBeLessThan(1e-12);
+    }
+  });
+});
