@@ -22,23 +22,6 @@ const OFFICE_JS = 'https://appsforoffice.microsoft.com/lib/1/hosted/office.js';
 const BUDGET_BYTES = 150 * 1024;
 const DEV_PORT = 3000;
 
-/**
- * The plugins' option validation (schema-utils) needs ajv 8, but this install hoists ajv-keywords
- * next to eslint's ajv 6 (legacy-peer-deps), so the validator itself cannot load. Probe it once and,
- * only when it cannot load, build without option validation (and say so) rather than fail.
- */
-function ensureOptionValidation() {
-  const schemaUtils = require('schema-utils');
-  try {
-    schemaUtils.validate({ type: 'object' }, {}, { name: 'Sunpane build probe' });
-  } catch (err) {
-    if (!err || err.code !== 'MODULE_NOT_FOUND') throw err;
-    schemaUtils.disableValidation();
-    console.warn(`warning: webpack plugin option validation is off: ${String(err.message).split('\n')[0]} (ajv 8 is not where ajv-keywords looks; see the add-in report)`);
-  }
-}
-ensureOptionValidation();
-
 /** Loads the TypeScript registry in this Node process (fresh on every compilation, for watch mode). */
 function loadFunctionsMetadata() {
   require('ts-node').register({ transpileOnly: true, compilerOptions: { module: 'commonjs' } });
