@@ -1,3 +1,4 @@
+/* eslint-disable @typescript-eslint/no-this-alias -- plain browser script injected in place of office.js; its proxies hand "self" to callbacks. */
 /*
  * A fake Excel host for tests: the subset of the Office JS / Excel JS API that the Sunpane task pane
  * uses, over an in-memory workbook. Written by us from the API's documented behaviour (no Office
