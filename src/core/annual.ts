@@ -14,10 +14,11 @@
  */
 import { SunpaneError } from './errors';
 import { type PreparedWindow, monthlyValue, prepareWindow } from './gain';
-import { type PlaneIrradianceInput, ashraeClearSky, decomposeErbs, ineichenPerezClearSky, planeIrradiance } from './sky';
-import { sunlitFraction } from './shading';
+import { ashraeClearSky, decomposeErbs, extraterrestrialSpencer, ineichenPerezClearSky } from './sky';
+import { type PlaneParts, preparePlane } from './planeIrradiance';
+import { prepareShading } from './shading';
 import { annualSunPath } from './sun';
-import { DEG, RAD, acosClamped } from './angles';
+import { DEG, RAD, acosClamped, wrap180 } from './angles';
 import { daysInMonth } from './time';
 import type { WindowSpec } from './window';
 
@@ -91,14 +92,15 @@ export function annualOfPrepared(w: PreparedWindow): AnnualSeries {
   const n = w.hours;
   if (path.hours !== n) throw new SunpaneError('year', spec.year, `sun path has ${path.hours} hours, expected ${n}`);
   const col = () => new Float64Array(n);
+  // The sun path's columns are fresh arrays of this call: the series takes them over without copying.
   const out: AnnualSeries = {
     name: spec.name,
     year: spec.year,
     hours: n,
     glassArea: w.glassArea,
-    stampSerial: Float64Array.from(path.stampSerial),
-    sunAltitude: Float64Array.from(path.altitude),
-    sunAzimuth: Float64Array.from(path.azimuth),
+    stampSerial: path.stampSerial,
+    sunAltitude: path.altitude,
+    sunAzimuth: path.azimuth,
     incidence: col(),
     profileAngle: col(),
     sunlitFraction: col(),
@@ -113,30 +115,27 @@ export function annualOfPrepared(w: PreparedWindow): AnnualSeries {
     convective: col(),
     missing: new Uint8Array(n),
   };
-  const months = monthOfDay(spec.year);
-  const { curve, vertical, skyViewFactor } = w;
+  fillWeather(w, path.altitude, path.zenith, out);
+
+  const { curve, vertical } = w;
   const shgcDiffuse = curve.diffuse;
   const k = w.glassArea * w.interiorAttenuation;
   const fr = w.radiantFraction;
   const tilt = spec.surfaceTilt;
   const surfAz = spec.surfaceAzimuth;
-  const albedo = spec.groundAlbedo;
-  const model = spec.skyModel;
-  const opening = { width: spec.width, height: spec.height };
-  const shading = spec.shading;
-  const weather = spec.weather;
-  const elevation = spec.site.elevation ?? 0;
+  // Checked once here; per hour only the kernels run (the same ones the checked functions use).
+  const shade = vertical ? prepareShading({ width: spec.width, height: spec.height }, spec.shading, surfAz) : undefined;
+  const plane = preparePlane({ surfaceTilt: tilt, surfaceAzimuth: surfAz, albedo: spec.groundAlbedo, model: spec.skyModel, skyViewFactor: w.skyViewFactor });
+  const dniExtra = new Float64Array(367);
+  if (plane.needsDniExtra) for (let d = 1; d <= 366; d++) dniExtra[d] = extraterrestrialSpencer(d);
+  const parts: PlaneParts = { beam: 0, sky: 0, ground: 0, total: 0 };
   const alt = path.altitude;
   const az = path.azimuth;
-  const zen = path.zenith;
+  const { incidence, profileAngle, sunlitFraction, shgc, dni: dniColumn, dhi: dhiColumn, missing, beam, sky, ground, gain, radiant, convective } = out;
   const cosTilt = Math.cos(tilt * RAD);
-  const planeInput: PlaneIrradianceInput = { dni: 0, dhi: 0, sunAltitude: 0, sunAzimuth: 0, surfaceTilt: tilt, surfaceAzimuth: surfAz, albedo, dayOfYear: 1, model, skyViewFactor };
   const sinTilt = Math.sin(tilt * RAD);
 
   for (let i = 0; i < n; i++) {
-    const day = (i / 24) | 0;
-    const doy = day + 1;
-    const month = months[day];
     const a = alt[i];
     const s = az[i];
     const sunUp = a > 0;
@@ -146,73 +145,100 @@ export function annualOfPrepared(w: PreparedWindow): AnnualSeries {
     const betaRad = a * RAD;
     const sinBeta = Math.sin(betaRad);
     const cosBeta = Math.cos(betaRad);
-    const cosGamma = Math.cos((s - surfAz) * RAD);
-    const theta = acosClamped(sinBeta * cosTilt + cosBeta * sinTilt * cosGamma) * DEG; // D&B Eq. 1.6.3
+    const gamma = wrap180(surfAz - s); // horizontal shadow angle (src/core/shading.ts convention)
+    const gammaRad = gamma * RAD;
+    const cosGamma = Math.cos(gammaRad);
+    const cosTheta = sinBeta * cosTilt + cosBeta * sinTilt * cosGamma; // D&B Eq. 1.6.3
+    const theta = acosClamped(cosTheta) * DEG;
     const omega = Math.atan2(sinBeta, cosBeta * cosGamma) * DEG; // D&B Eq. 1.9.1a
     const front = sunUp && theta < 90;
     // Geometry first, for every row (missing weather does not hide where the sun is).
-    const lit = !front ? 0 : vertical ? sunlitFraction(opening, shading, a, s, surfAz) : 1;
+    const lit = !front ? 0 : shade !== undefined ? shade.sunlitInWallFrame(a, s, gamma, sinBeta, cosBeta, Math.sin(gammaRad), cosGamma) : 1;
     const g = theta < 90 ? curve.atAngle(theta) : 0;
-    out.incidence[i] = theta;
-    out.profileAngle[i] = omega === -180 ? 180 : omega;
-    out.sunlitFraction[i] = lit;
-    out.shgc[i] = g;
+    incidence[i] = theta;
+    profileAngle[i] = omega === -180 ? 180 : omega;
+    sunlitFraction[i] = lit;
+    shgc[i] = g;
 
-    let dni: number;
-    let dhi: number;
-    switch (weather.kind) {
-      case 'ashraeClearSky': {
-        if (!sunUp) continue; // clear sky with the sun down: no irradiance (the columns start at 0)
-        const c = ashraeClearSky(a, doy, monthlyValue(weather.tauB, month), monthlyValue(weather.tauD, month));
-        dni = c.dni;
-        dhi = c.dhi;
-        break;
-      }
-      case 'ineichenClearSky': {
-        if (!sunUp) continue;
-        const c = ineichenPerezClearSky(a, doy, monthlyValue(weather.linkeTurbidity, month), elevation);
-        dni = c.dni;
-        dhi = c.dhi;
-        break;
-      }
-      case 'measured':
-        dni = weather.dni[i];
-        dhi = weather.dhi[i];
-        if (!(Number.isFinite(dni) && Number.isFinite(dhi))) {
-          out.missing[i] = 1;
-          continue;
-        }
-        break;
-      default: {
-        const ghi = weather.ghi[i];
-        if (!Number.isFinite(ghi)) {
-          out.missing[i] = 1;
-          continue;
-        }
-        const d = decomposeErbs(ghi, zen[i], doy);
-        dni = d.dni;
-        dhi = d.dhi;
-      }
-    }
-    out.dni[i] = dni;
-    out.dhi[i] = dhi;
+    if (missing[i] === 1) continue;
+    const dni = dniColumn[i];
+    const dhi = dhiColumn[i];
     if (dhi === 0 && (dni === 0 || !sunUp)) continue; // dark hour: irradiance and gain stay 0
-
-    // One input record reused for every hour (no allocation per hour on our side).
-    planeInput.dni = sunUp ? dni : 0;
-    planeInput.dhi = dhi;
-    planeInput.sunAltitude = a;
-    planeInput.sunAzimuth = s;
-    planeInput.dayOfYear = doy;
-    const plane = planeIrradiance(planeInput);
+    plane.irradiance(parts, sunUp ? dni : 0, dhi, a, sinBeta, cosTheta, dniExtra[((i / 24) | 0) + 1]);
     // Gain equation of src/core/gain.ts windowGainParts, inlined for the hourly path.
-    const q = k * (plane.beam * lit * g + (plane.sky + plane.ground) * shgcDiffuse);
-    out.beam[i] = plane.beam;
-    out.sky[i] = plane.sky;
-    out.ground[i] = plane.ground;
-    out.gain[i] = q;
-    out.radiant[i] = fr * q;
-    out.convective[i] = (1 - fr) * q;
+    const q = k * (parts.beam * lit * g + (parts.sky + parts.ground) * shgcDiffuse);
+    beam[i] = parts.beam;
+    sky[i] = parts.sky;
+    ground[i] = parts.ground;
+    gain[i] = q;
+    radiant[i] = fr * q;
+    convective[i] = (1 - fr) * q;
   }
   return out;
+}
+
+/**
+ * Fills the dni, dhi and missing columns from the window's weather, one loop per kind (no switch
+ * per hour): clear-sky models at each hour's sun (0 with the sun down), a supplied series as given
+ * (a non-finite value marks the row missing), or a supplied GHI series split by Erbs et al.
+ */
+function fillWeather(w: PreparedWindow, alt: Float64Array, zen: Float64Array, out: AnnualSeries): void {
+  const weather = w.spec.weather;
+  const n = out.hours;
+  const { dni, dhi, missing } = out;
+  const months = monthOfDay(w.spec.year);
+  switch (weather.kind) {
+    case 'ashraeClearSky':
+      for (let day = 0; day * 24 < n; day++) {
+        const month = months[day];
+        const tauB = monthlyValue(weather.tauB, month);
+        const tauD = monthlyValue(weather.tauD, month);
+        for (let i = day * 24; i < day * 24 + 24; i++) {
+          if (!(alt[i] > 0)) continue; // sun down: no irradiance (the columns start at 0)
+          const c = ashraeClearSky(alt[i], day + 1, tauB, tauD);
+          dni[i] = c.dni;
+          dhi[i] = c.dhi;
+        }
+      }
+      return;
+    case 'ineichenClearSky': {
+      const elevation = w.spec.site.elevation ?? 0;
+      for (let day = 0; day * 24 < n; day++) {
+        const linke = monthlyValue(weather.linkeTurbidity, months[day]);
+        for (let i = day * 24; i < day * 24 + 24; i++) {
+          if (!(alt[i] > 0)) continue;
+          const c = ineichenPerezClearSky(alt[i], day + 1, linke, elevation);
+          dni[i] = c.dni;
+          dhi[i] = c.dhi;
+        }
+      }
+      return;
+    }
+    case 'measured': {
+      const dniIn = weather.dni;
+      const dhiIn = weather.dhi;
+      for (let i = 0; i < n; i++) {
+        const b = dniIn[i];
+        const d = dhiIn[i];
+        if (Number.isFinite(b) && Number.isFinite(d)) {
+          dni[i] = b;
+          dhi[i] = d;
+        } else missing[i] = 1;
+      }
+      return;
+    }
+    case 'globalHorizontal': {
+      const ghiIn = weather.ghi;
+      for (let i = 0; i < n; i++) {
+        const ghi = ghiIn[i];
+        if (!Number.isFinite(ghi)) {
+          missing[i] = 1;
+          continue;
+        }
+        const d = decomposeErbs(ghi, zen[i], ((i / 24) | 0) + 1);
+        dni[i] = d.dni;
+        dhi[i] = d.dhi;
+      }
+    }
+  }
 }

@@ -83,31 +83,83 @@ export function perezParts(
   coefficients: readonly PerezCoefficientRow[] = PEREZ_1990_COMPOSITE,
 ): PerezParts {
   const tiltRad = surfaceTilt * RAD;
-  const isotropicView = (1 + cos(tiltRad)) / 2;
-  if (dhi <= 0) return { epsilon: 1, delta: 0, bin: 1, f1: 0, f2: 0, isotropic: 0, circumsolar: 0, horizon: 0, total: 0 };
-  if (sunZenith >= 90) {
-    // No sun: no circumsolar disc and no brightness classification; the diffuse is taken as isotropic.
-    const iso = dhi * isotropicView;
-    return { epsilon: 1, delta: 0, bin: 1, f1: 0, f2: 0, isotropic: iso, circumsolar: 0, horizon: 0, total: iso };
+  // The incidence angle only matters with the sun up and some diffuse (as before: not evaluated otherwise).
+  const cosTheta = dhi > 0 && sunZenith < 90 ? cos(incidenceAngle(90 - sunZenith, sunAzimuth, surfaceTilt, surfaceAzimuth) * RAD) : 0;
+  const out = { epsilon: 1, delta: 0, bin: 1, f1: 0, f2: 0, isotropic: 0, circumsolar: 0, horizon: 0, total: 0 };
+  return perezPartsKernel(out, (1 + cos(tiltRad)) / 2, sin(tiltRad), dhi, dni, dniExtra, sunZenith, cos(sunZenith * RAD), airMass, cosTheta, coefficients);
+}
+
+/**
+ * The one implementation of the Perez (1990) model behind {@link perezParts},
+ * {@link skyDiffusePerez1990} and the prepared plane of src/core/planeIrradiance.ts: arguments
+ * already checked, the surface and sun given by the cosines and sines the hourly loop already has,
+ * the result written into `out` (no allocation).
+ * @param out - record to fill and return
+ * @param isotropicView - (1 + cos Σ) / 2 [-], Σ the surface tilt
+ * @param sinTilt - sin Σ [-]
+ * @param dhi - diffuse horizontal irradiance [W/m²], ≥ 0
+ * @param dni - direct normal irradiance [W/m²], ≥ 0
+ * @param dniExtra - extraterrestrial normal irradiance [W/m²]
+ * @param sunZenith - sun zenith angle [°], 0…180 (≥ 90: no sun, isotropic diffuse)
+ * @param cosZenith - cos of the zenith angle (= sin of the altitude) [-]
+ * @param airMass - relative air mass [-]
+ * @param cosIncidence - cos of the sun's incidence angle on the plane [-], −1…1
+ * @param coefficients - brightness coefficient rows, one per ε bin
+ * @returns `out`; see {@link skyDiffusePerez1990} for the formulas
+ */
+export function perezPartsKernel(
+  out: PerezParts,
+  isotropicView: number,
+  sinTilt: number,
+  dhi: number,
+  dni: number,
+  dniExtra: number,
+  sunZenith: number,
+  cosZenith: number,
+  airMass: number,
+  cosIncidence: number,
+  coefficients: readonly PerezCoefficientRow[] = PEREZ_1990_COMPOSITE,
+): PerezParts {
+  if (dhi <= 0 || sunZenith >= 90) {
+    // No diffuse: all 0. No sun: no circumsolar disc and no brightness classification; the
+    // diffuse is taken as isotropic.
+    const iso = dhi > 0 ? dhi * isotropicView : 0;
+    out.epsilon = 1;
+    out.delta = 0;
+    out.bin = 1;
+    out.f1 = 0;
+    out.f2 = 0;
+    out.isotropic = iso;
+    out.circumsolar = 0;
+    out.horizon = 0;
+    out.total = iso;
+    return out;
   }
   const zRad = sunZenith * RAD;
   const kz3 = PEREZ_KAPPA * zRad * zRad * zRad;
   const epsilon = ((dhi + dni) / dhi + kz3) / (1 + kz3); // Eq. 1
   const delta = (dhi * airMass) / dniExtra; // Eq. 2
   const bin = perezBin(epsilon);
-  const [f11, f12, f13, f21, f22, f23] = coefficients[bin - 1];
-  const f1Raw = f11 + f12 * delta + f13 * zRad; // Eq. 9
+  const row = coefficients[bin - 1];
+  const f1Raw = row[0] + row[1] * delta + row[2] * zRad; // Eq. 9
   const f1 = f1Raw > 0 ? f1Raw : 0;
-  const f2 = f21 + f22 * delta + f23 * zRad; // Eq. 9
-  const cosTheta = cos(incidenceAngle(90 - sunZenith, sunAzimuth, surfaceTilt, surfaceAzimuth) * RAD);
-  const a = cosTheta > 0 ? cosTheta : 0;
-  const cosZ = cos(zRad);
-  const b = cosZ > COS_85 ? cosZ : COS_85;
+  const f2 = row[3] + row[4] * delta + row[5] * zRad; // Eq. 9
+  const a = cosIncidence > 0 ? cosIncidence : 0;
+  const b = cosZenith > COS_85 ? cosZenith : COS_85;
   const isotropic = dhi * (1 - f1) * isotropicView;
   const circumsolar = (dhi * f1 * a) / b;
-  const horizon = dhi * f2 * sin(tiltRad);
+  const horizon = dhi * f2 * sinTilt;
   const sum = isotropic + circumsolar + horizon; // Duffie & Beckman Eq. 2.16.14 (sky terms)
-  return { epsilon, delta, bin, f1, f2, isotropic, circumsolar, horizon, total: sum > 0 ? sum : 0 };
+  out.epsilon = epsilon;
+  out.delta = delta;
+  out.bin = bin;
+  out.f1 = f1;
+  out.f2 = f2;
+  out.isotropic = isotropic;
+  out.circumsolar = circumsolar;
+  out.horizon = horizon;
+  out.total = sum > 0 ? sum : 0;
+  return out;
 }
 
 /**

@@ -6,7 +6,7 @@ import { airMassKastenYoung } from './airMass';
 import { RAD } from './angles';
 import { SunpaneError, requireRange } from './errors';
 import { extraterrestrialSpencer, requireDayOfYear } from './extraterrestrial';
-import { perezParts } from './perez1990';
+import { type PerezParts, perezPartsKernel } from './perez1990';
 import { incidenceAngle } from './surface';
 import { COS_85, requireIrradiance } from './transposition';
 import type { SkyModel } from './window';
@@ -76,34 +76,130 @@ export function planeIrradiance(input: PlaneIrradianceInput): PlaneIrradiance {
   const surfaceAzimuth = requireRange('surfaceAzimuth', input.surfaceAzimuth, 0, 360, '°');
   const albedo = requireRange('albedo', input.albedo, 0, 1);
   const dayOfYear = requireDayOfYear(input.dayOfYear);
-  const model = input.model;
-  if (!SKY_MODELS.includes(model)) {
-    throw new SunpaneError('model', model, `must be one of ${SKY_MODELS.map((m) => `"${m}"`).join(', ')}`);
-  }
+  const model = requireSkyModel(input.model);
   const svf = input.skyViewFactor === undefined ? 1 : requireRange('skyViewFactor', input.skyViewFactor, 0, 1);
 
   const incidence = incidenceAngle(altitude, sunAzimuth, tilt, surfaceAzimuth);
-  const cosTheta = cos(incidence * RAD);
-  const tiltRad = tilt * RAD;
-  const isotropicView = (1 + cos(tiltRad)) / 2;
-  const sunUp = altitude > 0;
-  const beam = sunUp && cosTheta > 0 ? dni * cosTheta : 0;
-  const ghi = (sunUp ? dni * sin(altitude * RAD) : 0) + dhi;
+  const plane = planeOf(tilt, albedo, model, svf);
+  const out = { beam: 0, sky: 0, ground: 0, total: 0, incidence };
+  const e0 = model === 'isotropic' ? 0 : extraterrestrialSpencer(dayOfYear);
+  planeKernel(out, plane, dni, dhi, altitude, sin(altitude * RAD), cos(incidence * RAD), e0);
+  return out;
+}
 
-  let sky: number;
-  if (!sunUp || model === 'isotropic') {
-    sky = dhi * isotropicView; // D&B Eq. 2.15.1
-  } else if (model === 'hayDavies') {
-    const e0 = extraterrestrialSpencer(dayOfYear);
-    const ai = dni / e0 < 1 ? dni / e0 : 1;
-    const cosZ = sin(altitude * RAD);
-    const rb = (cosTheta > 0 ? cosTheta : 0) / (cosZ > COS_85 ? cosZ : COS_85);
-    sky = dhi * ((1 - ai) * isotropicView + ai * rb); // D&B Eq. 2.16.4
-  } else {
-    const e0 = extraterrestrialSpencer(dayOfYear);
-    sky = perezParts(tilt, surfaceAzimuth, dhi, dni, e0, 90 - altitude, sunAzimuth, airMassKastenYoung(altitude)).total;
+function requireSkyModel(model: SkyModel): SkyModel {
+  if (!SKY_MODELS.includes(model)) {
+    throw new SunpaneError('model', model, `must be one of ${SKY_MODELS.map((m) => `"${m}"`).join(', ')}`);
   }
-  sky *= svf;
-  const ground = (ghi * albedo * (1 - cos(tiltRad))) / 2; // D&B Eq. 2.15.1
-  return { beam, sky, ground, total: beam + sky + ground, incidence };
+  return model;
+}
+
+/** The hour-independent part of a plane: its tilt's view factors, albedo, sky model and sky view. */
+interface PlaneConstants {
+  model: SkyModel;
+  tilt: number;
+  /** (1 + cos Σ) / 2: isotropic sky view of the plane. */
+  isotropicView: number;
+  /** sin Σ (Perez horizon band). */
+  sinTilt: number;
+  /** 1 − cos Σ (ground view, times 2). */
+  oneMinusCosTilt: number;
+  albedo: number;
+  skyViewFactor: number;
+  /** Scratch record for the Perez parts (one per plane: no allocation per hour). */
+  perez: PerezParts;
+}
+
+function planeOf(tilt: number, albedo: number, model: SkyModel, skyViewFactor: number): PlaneConstants {
+  const tiltRad = tilt * RAD;
+  const cosTilt = cos(tiltRad);
+  return {
+    model,
+    tilt,
+    isotropicView: (1 + cosTilt) / 2,
+    sinTilt: sin(tiltRad),
+    oneMinusCosTilt: 1 - cosTilt,
+    albedo,
+    skyViewFactor,
+    perez: { epsilon: 1, delta: 0, bin: 1, f1: 0, f2: 0, isotropic: 0, circumsolar: 0, horizon: 0, total: 0 },
+  };
+}
+
+/** The beam, sky and ground parts a {@link PreparedPlane} writes. */
+export interface PlaneParts {
+  /** [W/m²] as {@link PlaneIrradiance}. */
+  beam: number;
+  sky: number;
+  ground: number;
+  total: number;
+}
+
+/**
+ * The one implementation of the plane irradiance, behind {@link planeIrradiance} and
+ * {@link preparePlane}: inputs already checked, the sun given by its altitude, the sine of the
+ * altitude and the cosine of the incidence angle; writes `out`.
+ */
+function planeKernel(out: PlaneParts, p: PlaneConstants, dni: number, dhi: number, altitude: number, sinAltitude: number, cosIncidence: number, dniExtra: number): void {
+  const sunUp = altitude > 0;
+  const beam = sunUp && cosIncidence > 0 ? dni * cosIncidence : 0;
+  const ghi = (sunUp ? dni * sinAltitude : 0) + dhi;
+  let sky: number;
+  if (!sunUp || p.model === 'isotropic') {
+    sky = dhi * p.isotropicView; // D&B Eq. 2.15.1
+  } else if (p.model === 'hayDavies') {
+    const ai = dni / dniExtra < 1 ? dni / dniExtra : 1;
+    const rb = (cosIncidence > 0 ? cosIncidence : 0) / (sinAltitude > COS_85 ? sinAltitude : COS_85);
+    sky = dhi * ((1 - ai) * p.isotropicView + ai * rb); // D&B Eq. 2.16.4
+  } else {
+    sky = perezPartsKernel(p.perez, p.isotropicView, p.sinTilt, dhi, dni, dniExtra, 90 - altitude, sinAltitude, airMassKastenYoung(altitude), cosIncidence).total;
+  }
+  sky *= p.skyViewFactor;
+  const ground = (ghi * p.albedo * p.oneMinusCosTilt) / 2; // D&B Eq. 2.15.1
+  out.beam = beam;
+  out.sky = sky;
+  out.ground = ground;
+  out.total = beam + sky + ground;
+}
+
+/** The plane fields of {@link PlaneIrradianceInput}: everything that does not change by the hour. */
+export type PlaneSurfaceInput = Pick<PlaneIrradianceInput, 'surfaceTilt' | 'surfaceAzimuth' | 'albedo' | 'model' | 'skyViewFactor'>;
+
+/** A window plane checked once, for the irradiance of many hours (e.g. every hour of a year). */
+export interface PreparedPlane {
+  /** Whether the sky model needs the extraterrestrial irradiance (Hay–Davies, Perez). */
+  readonly needsDniExtra: boolean;
+  /**
+   * Irradiance on the plane for one hour, the same as {@link planeIrradiance} for the prepared plane,
+   * without argument checks, written into `out`.
+   * @param out - record to fill (beam, sky, ground, total [W/m²])
+   * @param dni - direct normal irradiance [W/m²], 0…2000 (not checked)
+   * @param dhi - diffuse horizontal irradiance [W/m²], 0…2000 (not checked)
+   * @param sunAltitude - [°] −90…90 (not checked)
+   * @param sinAltitude - sin of the altitude [-]
+   * @param cosIncidence - cos of the incidence angle on the plane [-], −1…1
+   * @param dniExtra - extraterrestrial normal irradiance of the day [W/m²] (Spencer 1971, as
+   *   {@link planeIrradiance} uses); any value when {@link needsDniExtra} is false
+   */
+  irradiance(out: PlaneParts, dni: number, dhi: number, sunAltitude: number, sinAltitude: number, cosIncidence: number, dniExtra: number): void;
+}
+
+/**
+ * Checks a window plane once and returns its hourly irradiance function.
+ * @param input - surface tilt [°] 0…180, surface azimuth [°] 0…360, albedo 0…1, sky model and sky
+ *   view factor 0…1 (default 1); errors name the field as {@link planeIrradiance}
+ * @returns {@link PreparedPlane}
+ * @remarks Same kernel and formulas as {@link planeIrradiance} (see there); the caller supplies the
+ * sun's sine and incidence cosine it already has, and the day's extraterrestrial irradiance.
+ */
+export function preparePlane(input: PlaneSurfaceInput): PreparedPlane {
+  const tilt = requireRange('surfaceTilt', input.surfaceTilt, 0, 180, '°');
+  requireRange('surfaceAzimuth', input.surfaceAzimuth, 0, 360, '°');
+  const albedo = requireRange('albedo', input.albedo, 0, 1);
+  const model = requireSkyModel(input.model);
+  const svf = input.skyViewFactor === undefined ? 1 : requireRange('skyViewFactor', input.skyViewFactor, 0, 1);
+  const plane = planeOf(tilt, albedo, model, svf);
+  return {
+    needsDniExtra: model !== 'isotropic',
+    irradiance: (out, dni, dhi, sunAltitude, sinAltitude, cosIncidence, dniExtra) => planeKernel(out, plane, dni, dhi, sunAltitude, sinAltitude, cosIncidence, dniExtra),
+  };
 }

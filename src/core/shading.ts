@@ -160,17 +160,22 @@ function sunSlopes(sunAltitude: number, sunAzimuth: number, surfaceAzimuth: numb
   if (gamma <= -90 || gamma >= 90) return false;
   const betaRad = sunAltitude * RAD;
   const gammaRad = gamma * RAD;
-  const cosBeta = cos(betaRad);
-  const cosGamma = cos(gammaRad);
+  return slopesFrom(sin(betaRad), cos(betaRad), sin(gammaRad), cos(gammaRad));
+}
+
+/** Fills {@link slopes} from the sines and cosines of β and γ; false when the sun is not in front (sz ≤ 0). */
+function slopesFrom(sinBeta: number, cosBeta: number, sinGamma: number, cosGamma: number): boolean {
   const sz = cosBeta * cosGamma;
   if (!(sz > 0)) return false;
-  slopes.a = (cosBeta * sin(gammaRad)) / sz; // a = sx / sz = tan γ
-  slopes.b = sin(betaRad) / sz; // b = sy / sz = tan β / cos γ = tan Ω
+  slopes.a = (cosBeta * sinGamma) / sz; // a = sx / sz = tan γ
+  slopes.b = sinBeta / sz; // b = sy / sz = tan β / cos γ = tan Ω
   return true;
 }
 
-// Per-call scratch (no allocation on the hourly path): up to 3 shadow quadrilaterals × 4 half-planes.
+// Per-call scratch (no allocation on the hourly path): up to 3 shadow quadrilaterals × 4 half-planes,
+// and their bounding boxes (4 numbers each, at the same index as their first half-plane).
 const planes = new Float64Array(3 * 4 * 3);
+const boxes = new Float64Array(3 * 4);
 let lit0x = 0;
 let lit0y = 0;
 let lit1x = 0;
@@ -196,7 +201,7 @@ function buildShadows(width: number, height: number, shading: Shading): number {
     const xr = width + oh.extensionRight;
     const dx = -a * oh.projection;
     const dy = -b * oh.projection;
-    if (overlapsLit(min(xl, xl + dx), max(xr, xr + dx), y + dy, y) && writeQuadHalfPlanes(planes, m * 4, xl, y, xr, y, xr + dx, y + dy, xl + dx, y + dy)) m++;
+    if (overlapsLit(min(xl, xl + dx), max(xr, xr + dx), y + dy, y) && writeQuadHalfPlanes(planes, m * 4, xl, y, xr, y, xr + dx, y + dy, xl + dx, y + dy, boxes)) m++;
   }
   const lf = shading.leftFin;
   if (lf && lf.projection > 0) m = addFin(m, -lf.gap, lf, height);
@@ -210,7 +215,7 @@ function addFin(m: number, x: number, fin: Fin, height: number): number {
   const yt = height + fin.extensionAbove;
   const dx = -slopes.a * fin.projection;
   const dy = -slopes.b * fin.projection;
-  if (overlapsLit(min(x, x + dx), max(x, x + dx), yb + dy, yt) && writeQuadHalfPlanes(planes, m * 4, x, yb, x, yt, x + dx, yt + dy, x + dx, yb + dy)) return m + 1;
+  if (overlapsLit(min(x, x + dx), max(x, x + dx), yb + dy, yt) && writeQuadHalfPlanes(planes, m * 4, x, yb, x, yt, x + dx, yt + dy, x + dx, yb + dy, boxes)) return m + 1;
   return m;
 }
 
@@ -224,7 +229,7 @@ function sunlitFractionFromSlopes(width: number, height: number, shading: Shadin
   const m = buildShadows(width, height, shading);
   const litArea = lit1x > lit0x && lit1y > lit0y ? (lit1x - lit0x) * (lit1y - lit0y) : 0;
   if (litArea === 0) return 0;
-  const shaded = unionAreaInRectangle(lit0x, lit0y, lit1x, lit1y, planes, m);
+  const shaded = unionAreaInRectangle(lit0x, lit0y, lit1x, lit1y, planes, m, boxes);
   const f = (litArea - shaded) / (width * height);
   return f < 0 ? 0 : f > 1 ? 1 : f;
 }
@@ -258,9 +263,91 @@ function requireSunAngles(sunAltitude: number, sunAzimuth: number, surfaceAzimut
 export function sunlitFraction(window: WindowOpening, shading: Shading, sunAltitude: number, sunAzimuth: number, surfaceAzimuth: number): number {
   requireShading(window, shading);
   requireSunAngles(sunAltitude, sunAzimuth, surfaceAzimuth);
+  return sunlitKernel(window.width, window.height, shading, hasShadingParts(shading), sunAltitude, sunAzimuth, surfaceAzimuth);
+}
+
+/**
+ * The one implementation behind {@link sunlitFraction} and {@link prepareShading}: inputs already
+ * checked; `shades` false when nothing can shade the glass (then 1 whenever the sun is in front).
+ */
+function sunlitKernel(width: number, height: number, shading: Shading, shades: boolean, sunAltitude: number, sunAzimuth: number, surfaceAzimuth: number): number {
   if (!sunSlopes(sunAltitude, sunAzimuth, surfaceAzimuth)) return 0;
+  return sunlitAfterSlopes(width, height, shading, shades, sunAltitude, sunAzimuth);
+}
+
+/** The rest of {@link sunlitKernel} once {@link slopes} hold a sun above the horizon in front of the wall. */
+function sunlitAfterSlopes(width: number, height: number, shading: Shading, shades: boolean, sunAltitude: number, sunAzimuth: number): number {
+  if (!shades) return 1; // = (W·H − 0) / (W·H): the lit rectangle is the whole glass
   if (shading.skyline && sunAltitude < skylineElevationUnchecked(shading.skyline, sunAzimuth)) return 0;
-  return sunlitFractionFromSlopes(window.width, window.height, shading);
+  return sunlitFractionFromSlopes(width, height, shading);
+}
+
+/** Can anything shade the glass: a device with projection above 0, a reveal or a skyline? */
+function hasShadingParts(shading: Shading): boolean {
+  return (
+    (shading.overhang !== undefined && shading.overhang.projection > 0) ||
+    (shading.leftFin !== undefined && shading.leftFin.projection > 0) ||
+    (shading.rightFin !== undefined && shading.rightFin.projection > 0) ||
+    (shading.revealDepth ?? 0) > 0 ||
+    shading.skyline !== undefined
+  );
+}
+
+/** A window's shading checked once, to evaluate at many sun positions (e.g. every hour of a year). */
+export interface PreparedShading {
+  /** False when nothing can shade the glass (no device with projection above 0, no reveal, no skyline). */
+  readonly shades: boolean;
+  /**
+   * Sunlit fraction of the glass, the same result as {@link sunlitFraction} for the prepared window
+   * and wall, without argument checks.
+   * @param sunAltitude - [°], a finite number (not checked)
+   * @param sunAzimuth - [°] clockwise from north, a finite number (not checked)
+   * @returns 0…1; 0 with the sun at or below the horizon, at or behind the wall plane or below the skyline
+   */
+  sunlit(sunAltitude: number, sunAzimuth: number): number;
+  /**
+   * {@link sunlit} for a caller that already has the sun's angles in the wall frame (the annual
+   * series): same result, without recomputing them.
+   * @param sunAltitude - β [°], finite (not checked)
+   * @param sunAzimuth - [°], finite (not checked)
+   * @param gamma - `wrap180(surfaceAzimuth − sunAzimuth)` [°] (src/core/angles.ts), the horizontal shadow angle
+   * @param sinBeta - sin β; @param cosBeta - cos β
+   * @param sinGamma - sin γ; @param cosGamma - cos γ (γ converted to radians as `gamma * RAD`)
+   * @returns as {@link sunlit}
+   */
+  sunlitInWallFrame(sunAltitude: number, sunAzimuth: number, gamma: number, sinBeta: number, cosBeta: number, sinGamma: number, cosGamma: number): number;
+}
+
+/**
+ * Checks a window's shading once and returns a sunlit-fraction function for many sun positions.
+ * @param window - glass width and height [length] > 0
+ * @param shading - as for {@link sunlitFraction}; copied, so later changes to it do not bypass the checks
+ * @param surfaceAzimuth - direction the window faces [°] clockwise from north (any finite value)
+ * @returns {@link PreparedShading}
+ * @throws SunpaneError naming the argument, as {@link sunlitFraction}
+ * @remarks Same kernel as {@link sunlitFraction} (exact shadow polygons; see the module comment);
+ * only the checks are done once instead of per call.
+ */
+export function prepareShading(window: WindowOpening, shading: Shading, surfaceAzimuth: number): PreparedShading {
+  requireShading(window, shading);
+  requireFinite('surfaceAzimuth', surfaceAzimuth, '°');
+  const { width, height } = window;
+  const copy: Shading = {};
+  if (shading.overhang) copy.overhang = { ...shading.overhang };
+  if (shading.leftFin) copy.leftFin = { ...shading.leftFin };
+  if (shading.rightFin) copy.rightFin = { ...shading.rightFin };
+  if (shading.revealDepth !== undefined) copy.revealDepth = shading.revealDepth;
+  if (shading.skyline !== undefined) copy.skyline = [...shading.skyline];
+  const shades = hasShadingParts(copy);
+  return {
+    shades,
+    sunlit: (sunAltitude, sunAzimuth) => sunlitKernel(width, height, copy, shades, sunAltitude, sunAzimuth, surfaceAzimuth),
+    sunlitInWallFrame: (sunAltitude, sunAzimuth, gamma, sinBeta, cosBeta, sinGamma, cosGamma) => {
+      // The tests of sunSlopes, in the same order, on the caller's values.
+      if (!(sunAltitude > 0) || gamma <= -90 || gamma >= 90 || !slopesFrom(sinBeta, cosBeta, sinGamma, cosGamma)) return 0;
+      return sunlitAfterSlopes(width, height, copy, shades, sunAltitude, sunAzimuth);
+    },
+  };
 }
 
 /**
