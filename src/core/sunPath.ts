@@ -193,6 +193,10 @@ export function annualSunPath(year: number, site: Site, options: SunPathOptions 
   const zenith = new Float64Array(hours);
   const declination = new Float64Array(hours);
   const equationOfTime = new Float64Array(hours);
+  // The result is built before the hourly loop: code after a loop that the engine optimises while it
+  // runs (on-stack replacement) has no type feedback yet, and an object literal there made every
+  // fresh optimisation bail out at the end of the call.
+  const result: SunPathYear = { year, hours, stampSerial, altitude, azimuth, zenith, declination, equationOfTime };
 
   // Hour i lies at node position (hourOffset + i) / HOURS_PER_STEP; hourOffset is a whole number of
   // quarter hours (offsets and the half-hour shift are), so the split into node k and fraction p is
@@ -276,5 +280,5 @@ export function annualSunPath(year: number, site: Site, options: SunPathOptions 
     const az = atan2Fast(vy, vx * sinLat - vz * cosLat) * deg + 180; // Eq. 45, 46
     azimuth[i] = az >= 360 ? az - 360 : az;
   }
-  return { year, hours, stampSerial, altitude, azimuth, zenith, declination, equationOfTime };
+  return result;
 }

@@ -1,0 +1,268 @@
+/**
+ * The prepared (validate-once) fast paths of the annual series held to their checked twins:
+ * - `prepareShading(...).sunlit` / `.sunlitInWallFrame` against `sunlitFraction`,
+ * - `preparePlane(...).irradiance` against `planeIrradiance`,
+ * - `perezPartsKernel` against `perezParts`,
+ * - `unionAreaInRectangle` with bounding boxes against the same union without them,
+ * - every hour of `annualSeries` against the checked functions applied to that hour's own sun.
+ * The checked twins are themselves tested against outside sources (tests/reference/); here the
+ * requirement is equality: 1e-12, relative to the size of the value where it is an irradiance.
+ */
+import fc from 'fast-check';
+import { RAD, wrap180 } from '../../src/core/angles';
+import { annualSeries } from '../../src/core/annual';
+import { SunpaneError } from '../../src/core/errors';
+import { prepareWindow } from '../../src/core/gain';
+import { PEREZ_1990_COMPOSITE, perezParts, perezPartsKernel } from '../../src/core/perez1990';
+import { type PlaneParts, planeIrradiance, preparePlane } from '../../src/core/planeIrradiance';
+import { unionAreaInRectangle, writeQuadHalfPlanes } from '../../src/core/polygon';
+import { prepareShading, sunlitFraction } from '../../src/core/shading';
+import { extraterrestrialSpencer } from '../../src/core/sky';
+import { incidenceAngle } from '../../src/core/surface';
+import type { Shading, SkyModel } from '../../src/core/window';
+import { shadedSpec } from './gainFixtures';
+
+const EQUAL = 1e-12;
+
+function closeTo(a: number, b: number, scale = 1): boolean {
+  // a === b also covers the unchecked kernels' ε = ∞ for a subnormal DHI (same on both paths).
+  return a === b || Math.abs(a - b) <= EQUAL * Math.max(scale, Math.abs(a), Math.abs(b));
+}
+
+const shadingArb: fc.Arbitrary<Shading> = fc.record(
+  {
+    overhang: fc.record({
+      projection: fc.oneof(fc.constant(0), fc.double({ min: 0, max: 2, noNaN: true })),
+      gap: fc.double({ min: 0, max: 1, noNaN: true }),
+      extensionLeft: fc.double({ min: -0.5, max: 2, noNaN: true }),
+      extensionRight: fc.double({ min: -0.5, max: 2, noNaN: true }),
+    }),
+    leftFin: fc.record({
+      projection: fc.oneof(fc.constant(0), fc.double({ min: 0, max: 2, noNaN: true })),
+      gap: fc.double({ min: 0, max: 1, noNaN: true }),
+      extensionAbove: fc.double({ min: -0.5, max: 2, noNaN: true }),
+      extensionBelow: fc.double({ min: -0.5, max: 2, noNaN: true }),
+    }),
+    rightFin: fc.record({
+      projection: fc.oneof(fc.constant(0), fc.double({ min: 0, max: 2, noNaN: true })),
+      gap: fc.double({ min: 0, max: 1, noNaN: true }),
+      extensionAbove: fc.double({ min: -0.5, max: 2, noNaN: true }),
+      extensionBelow: fc.double({ min: -0.5, max: 2, noNaN: true }),
+    }),
+    revealDepth: fc.oneof(fc.constant(0), fc.double({ min: 0, max: 0.5, noNaN: true })),
+    skyline: fc.array(fc.double({ min: 0, max: 60, noNaN: true }), { minLength: 1, maxLength: 12 }),
+  },
+  { requiredKeys: [] },
+);
+
+/** Sun altitudes with the edge cases drawn often: horizon, zenith, just above / below 0. */
+const altitudeArb = fc.oneof(fc.constantFrom(0, 90, -90, 1e-9, -1e-9, 89.999999), fc.double({ min: -90, max: 90, noNaN: true }));
+/** Sun azimuth relative to the wall: in the wall plane (±90 exactly), just inside, behind, anywhere. */
+const relativeAzimuthArb = fc.oneof(fc.constantFrom(0, 90, -90, 89.9999999, -89.9999999, 180, 135), fc.double({ min: -180, max: 180, noNaN: true }));
+
+describe('prepared shading equals sunlitFraction', () => {
+  test('over random windows, devices (including zero projection), reveals, skylines and suns', () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0.2, max: 3, noNaN: true }),
+        fc.double({ min: 0.2, max: 3, noNaN: true }),
+        shadingArb,
+        altitudeArb,
+        relativeAzimuthArb,
+        fc.double({ min: 0, max: 360, noNaN: true }),
+        (width, height, shading, altitude, relative, surfaceAzimuth) => {
+          // Devices narrower than the window are only valid down to total width / height 0.
+          if (shading.overhang && width + shading.overhang.extensionLeft + shading.overhang.extensionRight < 0) return;
+          for (const fin of [shading.leftFin, shading.rightFin]) if (fin && height + fin.extensionAbove + fin.extensionBelow < 0) return;
+          const window = { width, height };
+          const sunAzimuth = surfaceAzimuth + relative;
+          const checked = sunlitFraction(window, shading, altitude, sunAzimuth, surfaceAzimuth);
+          const prepared = prepareShading(window, shading, surfaceAzimuth);
+          expect(Math.abs(prepared.sunlit(altitude, sunAzimuth) - checked)).toBeLessThanOrEqual(EQUAL);
+          const gamma = wrap180(surfaceAzimuth - sunAzimuth);
+          const betaRad = altitude * RAD;
+          const framed = prepared.sunlitInWallFrame(altitude, sunAzimuth, gamma, Math.sin(betaRad), Math.cos(betaRad), Math.sin(gamma * RAD), Math.cos(gamma * RAD));
+          expect(Math.abs(framed - checked)).toBeLessThanOrEqual(EQUAL);
+        },
+      ),
+      { numRuns: 3000, seed: 8 },
+    );
+  });
+
+  test('the sun in the wall plane, behind it or below the horizon gives 0 on both paths; an open window gives 1 in front', () => {
+    const window = { width: 2, height: 1.5 };
+    const shading: Shading = { overhang: { projection: 0.5, gap: 0.1, extensionLeft: 0.2, extensionRight: 0.2 } };
+    const prepared = prepareShading(window, shading, 180);
+    for (const [alt, az] of [[30, 90], [30, 270], [30, 0], [0, 180], [-5, 180]]) {
+      expect(prepared.sunlit(alt, az)).toBe(0);
+      expect(sunlitFraction(window, shading, alt, az, 180)).toBe(0);
+    }
+    const open = prepareShading(window, {}, 180);
+    expect(open.shades).toBe(false);
+    expect(open.sunlit(30, 200)).toBe(1);
+    expect(open.sunlit(30, 90)).toBe(0);
+    expect(prepared.shades).toBe(true);
+  });
+
+  test('the checks run once at preparation, name the argument, and later edits to the shading do not reach the prepared copy', () => {
+    expect(() => prepareShading({ width: 2, height: 1 }, { revealDepth: -1 }, 180)).toThrow(SunpaneError);
+    try {
+      prepareShading({ width: 2, height: 1 }, { leftFin: { projection: Number.NaN, gap: 0, extensionAbove: 0, extensionBelow: 0 } }, 180);
+    } catch (err) {
+      expect((err as SunpaneError).argument).toBe('leftFinProjection');
+    }
+    expect(() => prepareShading({ width: 2, height: 1 }, {}, Number.POSITIVE_INFINITY)).toThrow(/^surfaceAzimuth/);
+    const shading: Shading = { overhang: { projection: 0.5, gap: 0, extensionLeft: 1, extensionRight: 1 }, skyline: [0] };
+    const prepared = prepareShading({ width: 2, height: 1 }, shading, 180);
+    const before = prepared.sunlit(40, 180);
+    shading.overhang!.projection = 5;
+    shading.skyline![0] = 80;
+    expect(prepared.sunlit(40, 180)).toBe(before);
+  });
+});
+
+describe('prepared plane equals planeIrradiance', () => {
+  const planeArb = fc.record({
+    dni: fc.oneof(fc.constant(0), fc.double({ min: 0, max: 2000, noNaN: true })),
+    dhi: fc.oneof(fc.constant(0), fc.double({ min: 0, max: 2000, noNaN: true })),
+    sunAltitude: altitudeArb,
+    sunAzimuth: fc.double({ min: 0, max: 360, noNaN: true }),
+    surfaceTilt: fc.oneof(fc.constantFrom(0, 90, 180), fc.double({ min: 0, max: 180, noNaN: true })),
+    surfaceAzimuth: fc.double({ min: 0, max: 360, noNaN: true }),
+    albedo: fc.double({ min: 0, max: 1, noNaN: true }),
+    dayOfYear: fc.integer({ min: 1, max: 366 }),
+    model: fc.constantFrom<SkyModel>('isotropic', 'hayDavies', 'perez1990'),
+    skyViewFactor: fc.double({ min: 0, max: 1, noNaN: true }),
+  });
+
+  test('over random suns (at, below and above the horizon, in front of and behind the plane), planes and models', () => {
+    const out: PlaneParts = { beam: 0, sky: 0, ground: 0, total: 0 };
+    fc.assert(
+      fc.property(planeArb, (input) => {
+        const checked = planeIrradiance(input);
+        const plane = preparePlane(input);
+        // The caller's own sun trig, as the annual loop has it.
+        const betaRad = input.sunAltitude * RAD;
+        const cosIncidence =
+          Math.sin(betaRad) * Math.cos(input.surfaceTilt * RAD) +
+          Math.cos(betaRad) * Math.sin(input.surfaceTilt * RAD) * Math.cos((input.sunAzimuth - input.surfaceAzimuth) * RAD);
+        plane.irradiance(out, input.dni, input.dhi, input.sunAltitude, Math.sin(betaRad), cosIncidence, extraterrestrialSpencer(input.dayOfYear));
+        const scale = input.dni + input.dhi;
+        expect(closeTo(out.beam, checked.beam, scale)).toBe(true);
+        expect(closeTo(out.sky, checked.sky, scale)).toBe(true);
+        expect(closeTo(out.ground, checked.ground, scale)).toBe(true);
+        expect(closeTo(out.total, checked.total, scale)).toBe(true);
+        expect(plane.needsDniExtra).toBe(input.model !== 'isotropic');
+      }),
+      { numRuns: 3000, seed: 9 },
+    );
+  });
+
+  test('bad plane fields are refused at preparation, naming the field', () => {
+    const good = { surfaceTilt: 90, surfaceAzimuth: 180, albedo: 0.2, model: 'perez1990' as SkyModel };
+    for (const [field, value] of [['surfaceTilt', 181], ['surfaceAzimuth', -1], ['albedo', 2], ['model', 'cloudy'], ['skyViewFactor', 1.5]] as const) {
+      let caught: unknown;
+      try {
+        preparePlane({ ...good, [field]: value } as typeof good);
+      } catch (err) {
+        caught = err;
+      }
+      expect(caught).toBeInstanceOf(SunpaneError);
+      expect((caught as SunpaneError).argument).toBe(field);
+    }
+  });
+});
+
+describe('Perez kernel equals perezParts', () => {
+  test('every intermediate value, over random skies including no diffuse and the sun at or below the horizon', () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0, max: 180, noNaN: true }),
+        fc.double({ min: 0, max: 360, noNaN: true }),
+        fc.oneof(fc.constant(0), fc.double({ min: 0, max: 2000, noNaN: true })),
+        fc.double({ min: 0, max: 2000, noNaN: true }),
+        fc.double({ min: 1000, max: 1500, noNaN: true }),
+        fc.oneof(fc.constantFrom(0, 90, 89.999, 120), fc.double({ min: 0, max: 180, noNaN: true })),
+        fc.double({ min: 0, max: 360, noNaN: true }),
+        fc.double({ min: 1, max: 40, noNaN: true }),
+        (tilt, surfAz, dhi, dni, e0, zenith, sunAz, m) => {
+          const p = perezParts(tilt, surfAz, dhi, dni, e0, zenith, sunAz, m);
+          const tiltRad = tilt * RAD;
+          const cosTheta = zenith < 90 ? Math.cos(incidenceAngle(90 - zenith, sunAz, tilt, surfAz) * RAD) : 0;
+          const out = { epsilon: 0, delta: 0, bin: 0, f1: 0, f2: 0, isotropic: 0, circumsolar: 0, horizon: 0, total: 0 };
+          perezPartsKernel(out, (1 + Math.cos(tiltRad)) / 2, Math.sin(tiltRad), dhi, dni, e0, zenith, Math.cos(zenith * RAD), m, cosTheta, PEREZ_1990_COMPOSITE);
+          for (const key of Object.keys(p) as (keyof typeof p)[]) expect(closeTo(out[key], p[key], dhi + dni)).toBe(true);
+        },
+      ),
+      { numRuns: 2000, seed: 10 },
+    );
+  });
+});
+
+describe('shadow union with bounding boxes equals the union without them', () => {
+  test('random convex quadrilaterals (parallelograms with axis-aligned edges and general ones), overlapping or apart', () => {
+    // Coordinates on a 1e-6 grid: shadow-sized figures (subnormal edge lengths, which no shadow has,
+    // would lose their normals to underflow).
+    const coordinate = (min: number, max: number) => fc.integer({ min: min * 1e6, max: max * 1e6 }).map((v) => v / 1e6);
+    const quad = fc.record({
+      x: coordinate(-2, 3),
+      y: coordinate(-2, 3),
+      ux: coordinate(-2, 2),
+      uy: fc.oneof(fc.constant(0), coordinate(-2, 2)),
+      vx: fc.oneof(fc.constant(0), coordinate(-2, 2)),
+      vy: coordinate(-2, 2),
+    });
+    fc.assert(
+      fc.property(fc.array(quad, { minLength: 0, maxLength: 3 }), (quads) => {
+        const planes = new Float64Array(36);
+        const boxes = new Float64Array(12);
+        let m = 0;
+        for (const q of quads) {
+          // Parallelogram (x, y), +u, +u+v, +v: convex; axis-aligned edges when uy or vx is 0.
+          if (writeQuadHalfPlanes(planes, m * 4, q.x, q.y, q.x + q.ux, q.y + q.uy, q.x + q.ux + q.vx, q.y + q.uy + q.vy, q.x + q.vx, q.y + q.vy, boxes)) m++;
+        }
+        const plain = unionAreaInRectangle(0, 0, 2, 1.5, planes, m);
+        const boxed = unionAreaInRectangle(0, 0, 2, 1.5, planes, m, boxes);
+        expect(Math.abs(plain - boxed)).toBeLessThanOrEqual(EQUAL * 3);
+      }),
+      { numRuns: 3000, seed: 11 },
+    );
+  });
+});
+
+describe('annual series hour by hour equals the checked functions at its own sun', () => {
+  test('sunlit fraction and plane irradiance of every hour of a shaded Perez window', () => {
+    const spec = shadedSpec();
+    const s = annualSeries(spec);
+    const w = prepareWindow(spec);
+    let front = 0;
+    for (let i = 0; i < s.hours; i++) {
+      const alt = s.sunAltitude[i];
+      const az = s.sunAzimuth[i];
+      const inFront = alt > 0 && s.incidence[i] < 90;
+      const lit = inFront ? sunlitFraction({ width: spec.width, height: spec.height }, spec.shading, alt, az, spec.surfaceAzimuth) : 0;
+      expect(Math.abs(s.sunlitFraction[i] - lit)).toBeLessThanOrEqual(EQUAL);
+      if (inFront) front++;
+      const dark = s.dhi[i] === 0 && (s.dni[i] === 0 || !(alt > 0));
+      if (dark) continue;
+      const p = planeIrradiance({
+        dni: alt > 0 ? s.dni[i] : 0,
+        dhi: s.dhi[i],
+        sunAltitude: alt,
+        sunAzimuth: az,
+        surfaceTilt: spec.surfaceTilt,
+        surfaceAzimuth: spec.surfaceAzimuth,
+        albedo: spec.groundAlbedo,
+        dayOfYear: Math.floor(i / 24) + 1,
+        model: spec.skyModel,
+        skyViewFactor: w.skyViewFactor,
+      });
+      const scale = s.dni[i] + s.dhi[i];
+      expect(closeTo(s.beam[i], p.beam, scale)).toBe(true);
+      expect(closeTo(s.sky[i], p.sky, scale)).toBe(true);
+      expect(closeTo(s.ground[i], p.ground, scale)).toBe(true);
+      expect(Math.abs(s.incidence[i] - p.incidence)).toBeLessThan(1e-9);
+    }
+    expect(front).toBeGreaterThan(2000);
+  });
+});
