@@ -3,9 +3,13 @@
  * END of its hour with the sun at the middle of the hour (DESIGN.md), in typed-array columns.
  *
  * Same calculation as {@link windowGainAt} hour by hour (the tests hold them together), written for
- * speed: the sun path comes from {@link annualSunPath} (slow terms once a day), everything that
- * does not change by the hour (SHGC curve, glass area, sky view factor) is worked out once, and
- * nothing is allocated per hour except what the sky model's call returns.
+ * speed: the sun path comes from {@link annualSunPath} (slow terms every second day, interpolated);
+ * everything that does not change by the hour (SHGC curve, glass area, sky view factor, the shading
+ * and the plane's checks, the day's extraterrestrial irradiance) is worked out once; per hour only
+ * the kernels run that the checked functions share ({@link prepareShading}, {@link preparePlane}),
+ * with the sun's sines and cosines computed once, and nothing is allocated. Hours that cannot
+ * matter are skipped: no shading with the sun down or behind the wall, no sky model in the dark.
+ * tests/core/preparedFast.test.ts holds every hour to the checked functions within 1e-12.
  *
  * Weather: clear-sky models (12 monthly values or one for the year) at each hour's sun; a supplied
  * DNI + DHI series; or a supplied GHI series split by Erbs et al. (1982). A non-finite value in a
