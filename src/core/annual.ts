@@ -129,7 +129,7 @@ export function annualOfPrepared(w: PreparedWindow): AnnualSeries {
   const surfAz = spec.surfaceAzimuth;
   // Checked once here; per hour only the kernels run (the same ones the checked functions use).
   const shade = vertical ? prepareShading({ width: spec.width, height: spec.height }, spec.shading, surfAz) : undefined;
-  const plane = preparePlane({ surfaceTilt: tilt, surfaceAzimuth: surfAz, albedo: spec.groundAlbedo, model: spec.skyModel, skyViewFactor: w.skyViewFactor });
+  const plane = preparePlane({ surfaceTilt: tilt, surfaceAzimuth: surfAz, groundAlbedo: spec.groundAlbedo, skyModel: spec.skyModel, skyViewFactor: w.skyViewFactor });
   const dniExtra = new Float64Array(367);
   if (plane.needsDniExtra) for (let d = 1; d <= 366; d++) dniExtra[d] = extraterrestrialSpencer(d);
   const parts: PlaneParts = { beam: 0, sky: 0, ground: 0, total: 0 };

@@ -261,9 +261,9 @@ export function gainOfPrepared(w: PreparedWindow, serial: number, weatherHour?: 
     sunAzimuth: sun.azimuth,
     surfaceTilt: spec.surfaceTilt,
     surfaceAzimuth: spec.surfaceAzimuth,
-    albedo: spec.groundAlbedo,
+    groundAlbedo: spec.groundAlbedo,
     dayOfYear: doy,
-    model: spec.skyModel,
+    skyModel: spec.skyModel,
     skyViewFactor: w.skyViewFactor,
   });
   const shgcBeam = incidence >= 90 ? 0 : w.curve.atAngle(incidence);

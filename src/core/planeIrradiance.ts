@@ -31,11 +31,11 @@ export interface PlaneIrradianceInput {
   /** Direction the window faces, clockwise from north [°], 0…360. */
   surfaceAzimuth: number;
   /** Ground reflectance [-], 0…1. */
-  albedo: number;
+  groundAlbedo: number;
   /** Day of the year, 1…366 (extraterrestrial irradiance for Hay–Davies and Perez). */
   dayOfYear: number;
   /** Sky-diffuse model. */
-  model: SkyModel;
+  skyModel: SkyModel;
   /** Multiplier 0…1 on the sky diffuse for a skyline that hides part of the sky; default 1 (open). */
   skyViewFactor?: number;
 }
@@ -57,7 +57,7 @@ export interface PlaneIrradiance {
 /**
  * Irradiance on a window plane by the chosen sky model.
  *
- * @param input - see {@link PlaneIrradianceInput}; errors name the field (`dni`, `albedo`, `model`...)
+ * @param input - see {@link PlaneIrradianceInput}; errors name the field (`dni`, `groundAlbedo`, `skyModel`...)
  * @returns beam, sky diffuse, ground-reflected and total irradiance on the plane [W/m²] and the
  * incidence angle [°]. With the sun at or below the horizon the beam is 0 and any diffuse given is
  * spread isotropically by every model (no circumsolar disc); with the sun behind the plane
@@ -74,9 +74,9 @@ export function planeIrradiance(input: PlaneIrradianceInput): PlaneIrradiance {
   const sunAzimuth = requireRange('sunAzimuth', input.sunAzimuth, 0, 360, '°');
   const tilt = requireRange('surfaceTilt', input.surfaceTilt, 0, 180, '°');
   const surfaceAzimuth = requireRange('surfaceAzimuth', input.surfaceAzimuth, 0, 360, '°');
-  const albedo = requireRange('albedo', input.albedo, 0, 1);
+  const albedo = requireRange('groundAlbedo', input.groundAlbedo, 0, 1);
   const dayOfYear = requireDayOfYear(input.dayOfYear);
-  const model = requireSkyModel(input.model);
+  const model = requireSkyModel(input.skyModel);
   const svf = input.skyViewFactor === undefined ? 1 : requireRange('skyViewFactor', input.skyViewFactor, 0, 1);
 
   const incidence = incidenceAngle(altitude, sunAzimuth, tilt, surfaceAzimuth);
@@ -89,7 +89,7 @@ export function planeIrradiance(input: PlaneIrradianceInput): PlaneIrradiance {
 
 function requireSkyModel(model: SkyModel): SkyModel {
   if (!SKY_MODELS.includes(model)) {
-    throw new SunpaneError('model', model, `must be one of ${SKY_MODELS.map((m) => `"${m}"`).join(', ')}`);
+    throw new SunpaneError('skyModel', model, `must be one of ${SKY_MODELS.map((m) => `"${m}"`).join(', ')}`);
   }
   return model;
 }
@@ -162,7 +162,7 @@ function planeKernel(out: PlaneParts, p: PlaneConstants, dni: number, dhi: numbe
 }
 
 /** The plane fields of {@link PlaneIrradianceInput}: everything that does not change by the hour. */
-export type PlaneSurfaceInput = Pick<PlaneIrradianceInput, 'surfaceTilt' | 'surfaceAzimuth' | 'albedo' | 'model' | 'skyViewFactor'>;
+export type PlaneSurfaceInput = Pick<PlaneIrradianceInput, 'surfaceTilt' | 'surfaceAzimuth' | 'groundAlbedo' | 'skyModel' | 'skyViewFactor'>;
 
 /** A window plane checked once, for the irradiance of many hours (e.g. every hour of a year). */
 export interface PreparedPlane {
@@ -194,8 +194,8 @@ export interface PreparedPlane {
 export function preparePlane(input: PlaneSurfaceInput): PreparedPlane {
   const tilt = requireRange('surfaceTilt', input.surfaceTilt, 0, 180, '°');
   requireRange('surfaceAzimuth', input.surfaceAzimuth, 0, 360, '°');
-  const albedo = requireRange('albedo', input.albedo, 0, 1);
-  const model = requireSkyModel(input.model);
+  const albedo = requireRange('groundAlbedo', input.groundAlbedo, 0, 1);
+  const model = requireSkyModel(input.skyModel);
   const svf = input.skyViewFactor === undefined ? 1 : requireRange('skyViewFactor', input.skyViewFactor, 0, 1);
   const plane = planeOf(tilt, albedo, model, svf);
   return {

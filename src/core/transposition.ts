@@ -44,14 +44,14 @@ export function skyDiffuseIsotropic(dhi: number, surfaceTilt: number): number {
  * ground).
  *
  * @param ghi - global horizontal irradiance [W/m²], 0…2000
- * @param albedo - ground reflectance [-], 0…1
+ * @param albedo - ground reflectance (errors name it `groundAlbedo`) [-], 0…1
  * @param surfaceTilt - surface tilt [°], 0…180
  * @returns ground-reflected irradiance on the plane [W/m²]; 0 for a horizontal plane facing up
  * @remarks Ig,T = GHI ρg (1 − cos Σ) / 2 — Duffie & Beckman, 4th ed., Eq. 2.15.1 (ground term).
  */
 export function groundReflected(ghi: number, albedo: number, surfaceTilt: number): number {
   const g = requireIrradiance('ghi', ghi);
-  const rho = requireRange('albedo', albedo, 0, 1);
+  const rho = requireRange('groundAlbedo', albedo, 0, 1);
   const tilt = requireRange('surfaceTilt', surfaceTilt, 0, 180, '°');
   return (g * rho * (1 - cos(tilt * RAD))) / 2;
 }

@@ -29,8 +29,8 @@ const P = {
   tauD: { ...G.tauD, optional: true, description: `${G.tauD.description}; used when dni and dhi are blank` },
   panes: G.panes,
   frameFraction: G.frameFraction,
-  albedo: G.albedo,
-  model: G.model,
+  groundAlbedo: G.groundAlbedo,
+  skyModel: G.skyModel,
   surfaceTilt: { ...G.surfaceTilt, description: 'window tilt from horizontal: 90 is a vertical window (shading devices need 90)' },
   interiorAttenuation: G.interiorAttenuation,
   radiantFraction: { name: 'radiantFraction', kind: 'number', min: 0, max: 1, default: DEFAULT_RADIANT_FRACTION, description: 'share of the gain that is radiant (reaches the air only through the room surfaces)' },
@@ -58,7 +58,7 @@ const P = {
 } satisfies Record<string, ParamDescriptor>;
 
 const SITE_AND_WINDOW: readonly ParamDescriptor[] = [GLOSSARY.latitude, GLOSSARY.longitude, GLOSSARY.utcOffset, GLOSSARY.surfaceAzimuth, P.width, P.height, P.shgcNormal];
-const GLASS_AND_GROUND: readonly ParamDescriptor[] = [P.panes, P.frameFraction, P.albedo, P.model, P.surfaceTilt, P.interiorAttenuation];
+const GLASS_AND_GROUND: readonly ParamDescriptor[] = [P.panes, P.frameFraction, P.groundAlbedo, P.skyModel, P.surfaceTilt, P.interiorAttenuation];
 const SHADING: readonly ParamDescriptor[] = [P.overhangProjection, P.overhangGap, P.overhangExtensionLeft, P.overhangExtensionRight, P.finProjection, P.finGap, P.revealDepth, P.skyline];
 
 const SKY_MODEL: Record<string, SkyModel> = { isotropic: 'isotropic', haydavies: 'hayDavies', perez: 'perez1990' };
@@ -91,8 +91,8 @@ function specOf(a: Args, year: number, weather: Weather): WindowSpec {
     frameFraction: a.frameFraction as number,
     glazing: { shgc: a.shgcNormal as number, panes: a.panes as number, interiorAttenuation: a.interiorAttenuation as number, radiantFraction: (a.radiantFraction as number | undefined) ?? DEFAULT_RADIANT_FRACTION },
     shading: shadingOf(a),
-    groundAlbedo: a.albedo as number,
-    skyModel: SKY_MODEL[a.model as string],
+    groundAlbedo: a.groundAlbedo as number,
+    skyModel: SKY_MODEL[a.skyModel as string],
     weather,
     year,
   };
@@ -172,8 +172,8 @@ const FIELD_TO_PARAM: Record<string, string> = {
   'shading.leftFin.gap': 'finGap',
   'shading.rightFin.gap': 'finGap',
   'shading.revealDepth': 'revealDepth',
-  groundAlbedo: 'albedo',
-  skyModel: 'model',
+  groundAlbedo: 'groundAlbedo',
+  skyModel: 'skyModel',
   'glazing.shgc': 'shgcNormal',
 };
 

@@ -23,7 +23,7 @@ import type { Args, FunctionDescriptor, ParamDescriptor } from './types';
 const E0_MAX = 1415;
 const E0_MIN = 1320;
 
-const { dayOfYear, tauB, tauD, linkeTurbidity, dni, dhi, albedo, model } = GLOSSARY;
+const { dayOfYear, tauB, tauD, linkeTurbidity, dni, dhi, groundAlbedo, skyModel } = GLOSSARY;
 type ModelChoice = 'perez' | 'haydavies' | 'isotropic';
 const skyViewFactor: ParamDescriptor = { name: 'skyViewFactor', kind: 'number', min: 0, max: 1, default: 1, description: 'share of the sky diffuse the window still sees past a skyline (1 = open)' };
 const MODEL_OF: Record<ModelChoice, SkyModel> = { perez: 'perez1990', haydavies: 'hayDavies', isotropic: 'isotropic' };
@@ -36,8 +36,8 @@ const windowParams: readonly ParamDescriptor[] = [
   GLOSSARY.surfaceAzimuth,
   dayOfYear,
   GLOSSARY.surfaceTilt,
-  albedo,
-  model,
+  groundAlbedo,
+  skyModel,
   skyViewFactor,
 ];
 
@@ -49,9 +49,9 @@ function windowIrradiance(a: Args) {
     sunAzimuth: a.sunAzimuth as number,
     surfaceTilt: a.surfaceTilt as number,
     surfaceAzimuth: a.surfaceAzimuth as number,
-    albedo: a.albedo as number,
+    groundAlbedo: a.groundAlbedo as number,
     dayOfYear: a.dayOfYear as number,
-    model: MODEL_OF[a.model as ModelChoice],
+    skyModel: MODEL_OF[a.skyModel as ModelChoice],
     skyViewFactor: a.skyViewFactor as number,
   });
 }

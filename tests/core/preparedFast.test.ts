@@ -129,9 +129,9 @@ describe('prepared plane equals planeIrradiance', () => {
     sunAzimuth: fc.double({ min: 0, max: 360, noNaN: true }),
     surfaceTilt: fc.oneof(fc.constantFrom(0, 90, 180), fc.double({ min: 0, max: 180, noNaN: true })),
     surfaceAzimuth: fc.double({ min: 0, max: 360, noNaN: true }),
-    albedo: fc.double({ min: 0, max: 1, noNaN: true }),
+    groundAlbedo: fc.double({ min: 0, max: 1, noNaN: true }),
     dayOfYear: fc.integer({ min: 1, max: 366 }),
-    model: fc.constantFrom<SkyModel>('isotropic', 'hayDavies', 'perez1990'),
+    skyModel: fc.constantFrom<SkyModel>('isotropic', 'hayDavies', 'perez1990'),
     skyViewFactor: fc.double({ min: 0, max: 1, noNaN: true }),
   });
 
@@ -152,15 +152,15 @@ describe('prepared plane equals planeIrradiance', () => {
         expect(closeTo(out.sky, checked.sky, scale)).toBe(true);
         expect(closeTo(out.ground, checked.ground, scale)).toBe(true);
         expect(closeTo(out.total, checked.total, scale)).toBe(true);
-        expect(plane.needsDniExtra).toBe(input.model !== 'isotropic');
+        expect(plane.needsDniExtra).toBe(input.skyModel !== 'isotropic');
       }),
       { numRuns: 3000, seed: 9 },
     );
   });
 
   test('bad plane fields are refused at preparation, naming the field', () => {
-    const good = { surfaceTilt: 90, surfaceAzimuth: 180, albedo: 0.2, model: 'perez1990' as SkyModel };
-    for (const [field, value] of [['surfaceTilt', 181], ['surfaceAzimuth', -1], ['albedo', 2], ['model', 'cloudy'], ['skyViewFactor', 1.5]] as const) {
+    const good = { surfaceTilt: 90, surfaceAzimuth: 180, groundAlbedo: 0.2, skyModel: 'perez1990' as SkyModel };
+    for (const [field, value] of [['surfaceTilt', 181], ['surfaceAzimuth', -1], ['groundAlbedo', 2], ['skyModel', 'cloudy'], ['skyViewFactor', 1.5]] as const) {
       let caught: unknown;
       try {
         preparePlane({ ...good, [field]: value } as typeof good);
@@ -252,9 +252,9 @@ describe('annual series hour by hour equals the checked functions at its own sun
         sunAzimuth: az,
         surfaceTilt: spec.surfaceTilt,
         surfaceAzimuth: spec.surfaceAzimuth,
-        albedo: spec.groundAlbedo,
+        groundAlbedo: spec.groundAlbedo,
         dayOfYear: Math.floor(i / 24) + 1,
-        model: spec.skyModel,
+        skyModel: spec.skyModel,
         skyViewFactor: w.skyViewFactor,
       });
       const scale = s.dni[i] + s.dhi[i];

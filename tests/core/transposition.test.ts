@@ -28,9 +28,9 @@ const base: PlaneIrradianceInput = {
   sunAzimuth: 150,
   surfaceTilt: 90,
   surfaceAzimuth: 180,
-  albedo: 0.2,
+  groundAlbedo: 0.2,
   dayOfYear: 200,
-  model: 'perez1990',
+  skyModel: 'perez1990',
 };
 
 function expectError(fn: () => unknown, argument: string): void {
@@ -47,7 +47,7 @@ function expectError(fn: () => unknown, argument: string): void {
 describe('planeIrradiance', () => {
   test('beam, sky and ground add up to the total and the beam is DNI × cos θ (1e-9)', () => {
     for (const model of ['isotropic', 'hayDavies', 'perez1990'] as const) {
-      const r = planeIrradiance({ ...base, model });
+      const r = planeIrradiance({ ...base, skyModel: model });
       expect(r.total).toBeCloseTo(r.beam + r.sky + r.ground, 9);
       expect(r.beam).toBeCloseTo(750 * cosd(r.incidence), 9);
     }
@@ -55,7 +55,7 @@ describe('planeIrradiance', () => {
 
   test('each model equals its stand-alone function on the same inputs (1e-9)', () => {
     const zenith = 90 - base.sunAltitude;
-    const r = (model: PlaneIrradianceInput['model']) => planeIrradiance({ ...base, model });
+    const r = (model: PlaneIrradianceInput['skyModel']) => planeIrradiance({ ...base, skyModel: model });
     const e0 = extraterrestrialSpencer(base.dayOfYear);
     const cosTheta = cosd(r('isotropic').incidence);
     expect(r('isotropic').sky).toBeCloseTo(skyDiffuseIsotropic(base.dhi, base.surfaceTilt), 9);
@@ -65,11 +65,11 @@ describe('planeIrradiance', () => {
       9,
     );
     const ghi = base.dni * sind(base.sunAltitude) + base.dhi;
-    expect(r('perez1990').ground).toBeCloseTo(groundReflected(ghi, base.albedo, base.surfaceTilt), 9);
+    expect(r('perez1990').ground).toBeCloseTo(groundReflected(ghi, base.groundAlbedo, base.surfaceTilt), 9);
   });
 
   test('a horizontal surface facing up under an isotropic sky receives exactly the global horizontal (1e-9)', () => {
-    const r = planeIrradiance({ ...base, surfaceTilt: 0, model: 'isotropic' });
+    const r = planeIrradiance({ ...base, surfaceTilt: 0, skyModel: 'isotropic' });
     expect(r.total).toBeCloseTo(base.dni * sind(base.sunAltitude) + base.dhi, 9);
     expect(r.ground).toBe(0);
   });
@@ -79,7 +79,7 @@ describe('planeIrradiance', () => {
     expect(r.incidence).toBeGreaterThan(90);
     expect(r.beam).toBe(0);
     for (const model of ['hayDavies', 'perez1990'] as const) {
-      const anisotropic = planeIrradiance({ ...base, sunAzimuth: 0, sunAltitude: 20, model });
+      const anisotropic = planeIrradiance({ ...base, sunAzimuth: 0, sunAltitude: 20, skyModel: model });
       expect(anisotropic.beam).toBe(0);
       expect(anisotropic.sky).toBeGreaterThanOrEqual(0);
     }
@@ -87,7 +87,7 @@ describe('planeIrradiance', () => {
 
   test('at night the beam is 0 and any diffuse given is spread isotropically by every model', () => {
     for (const model of ['isotropic', 'hayDavies', 'perez1990'] as const) {
-      const r = planeIrradiance({ ...base, sunAltitude: -5, dni: 0, dhi: 10, model });
+      const r = planeIrradiance({ ...base, sunAltitude: -5, dni: 0, dhi: 10, skyModel: model });
       expect(r.beam).toBe(0);
       expect(r.sky).toBeCloseTo(5, 9);
       expect(r.ground).toBeCloseTo(1, 9);
@@ -112,9 +112,9 @@ describe('planeIrradiance', () => {
           sunAzimuth: fc.double({ min: 0, max: 360, noNaN: true }),
           surfaceTilt: fc.double({ min: 0, max: 180, noNaN: true }),
           surfaceAzimuth: fc.double({ min: 0, max: 360, noNaN: true }),
-          albedo: fc.double({ min: 0, max: 1, noNaN: true }),
+          groundAlbedo: fc.double({ min: 0, max: 1, noNaN: true }),
           dayOfYear: fc.double({ min: 1, max: 366, noNaN: true }),
-          model: fc.constantFrom('isotropic' as const, 'hayDavies' as const, 'perez1990' as const),
+          skyModel: fc.constantFrom('isotropic' as const, 'hayDavies' as const, 'perez1990' as const),
           skyViewFactor: fc.double({ min: 0, max: 1, noNaN: true }),
         }),
         (input) => {
@@ -133,12 +133,12 @@ describe('planeIrradiance', () => {
   test('bad fields are refused naming the field', () => {
     expectError(() => planeIrradiance({ ...base, dni: -1 }), 'dni');
     expectError(() => planeIrradiance({ ...base, dhi: Number.NaN }), 'dhi');
-    expectError(() => planeIrradiance({ ...base, albedo: 1.5 }), 'albedo');
-    expectError(() => planeIrradiance({ ...base, albedo: -0.1 }), 'albedo');
+    expectError(() => planeIrradiance({ ...base, groundAlbedo: 1.5 }), 'groundAlbedo');
+    expectError(() => planeIrradiance({ ...base, groundAlbedo: -0.1 }), 'groundAlbedo');
     expectError(() => planeIrradiance({ ...base, skyViewFactor: 2 }), 'skyViewFactor');
     expectError(() => planeIrradiance({ ...base, dayOfYear: 0 }), 'dayOfYear');
     expectError(() => planeIrradiance({ ...base, surfaceTilt: 190 }), 'surfaceTilt');
-    expectError(() => planeIrradiance({ ...base, model: 'cloudy' as never }), 'model');
+    expectError(() => planeIrradiance({ ...base, skyModel: 'cloudy' as never }), 'skyModel');
   });
 });
 
@@ -148,7 +148,7 @@ describe('ASHRAE clear-day diffuse on tilted surfaces', () => {
     expect(skyDiffuseAshraeClearDay(100, 30, 0)).toBeCloseTo(100, 12);
   });
 
-  test('ground reflection refuses an albedo above 1 naming albedo', () => {
-    expectError(() => groundReflected(500, 1.2, 90), 'albedo');
+  test('ground reflection refuses an albedo above 1 naming groundAlbedo', () => {
+    expectError(() => groundReflected(500, 1.2, 90), 'groundAlbedo');
   });
 });

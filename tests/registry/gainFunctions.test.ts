@@ -19,7 +19,7 @@ function call(name: string, args: RawArg[]) {
 const NOON = '2026-07-21T12:30';
 // dateTime, latitude, longitude, utcOffset, surfaceAzimuth, width, height, shgc, dni, dhi, tauB, tauD
 const HOUR = [NOON, 40, -105, -7, 180, 2, 1.5, 0.6, null, null, 0.4, 2.3];
-// panes, frameFraction, albedo, skyModel, surfaceTilt, interiorAttenuation
+// panes, frameFraction, groundAlbedo, skyModel, surfaceTilt, interiorAttenuation
 const GLASS = [2, 0.1, 0.2, 'perez', 90, 1];
 
 describe('gain worksheet functions', () => {
