@@ -41,7 +41,10 @@ export interface AnnualSeries {
   sunAzimuth: Float64Array;
   /** Incidence angle on the glass [°], 0…180 (> 90: sun behind the window). */
   incidence: Float64Array;
-  /** Profile angle [°] (src/core/surface.ts). */
+  /**
+   * Profile angle [°] as src/core/surface.ts `profileAngle` gives it: −90…90 with the sun in front
+   * of the wall; |Ω| ≥ 90 when the sun is in or behind the wall plane (no shadow geometry then).
+   */
   profileAngle: Float64Array;
   /** Sunlit fraction of the glazing, 0…1 (0 with the sun down, behind the wall or the skyline). */
   sunlitFraction: Float64Array;
@@ -52,7 +55,7 @@ export interface AnnualSeries {
   beam: Float64Array;
   sky: Float64Array;
   ground: Float64Array;
-  /** SHGC at the incidence angle (0 with the sun behind the window). */
+  /** SHGC for the beam at the incidence angle; 0 when no beam can reach the glass (sun down or behind the window). */
   shgc: Float64Array;
   /** Window solar gain [W], and its radiant and convective parts. */
   gain: Float64Array;
@@ -158,7 +161,7 @@ export function annualOfPrepared(w: PreparedWindow): AnnualSeries {
     const front = sunUp && theta < 90;
     // Geometry first, for every row (missing weather does not hide where the sun is).
     const lit = !front ? 0 : shade !== undefined ? shade.sunlitInWallFrame(a, s, gamma, sinBeta, cosBeta, Math.sin(gammaRad), cosGamma) : 1;
-    const g = theta < 90 ? curve.atAngle(theta) : 0;
+    const g = front ? curve.atAngle(theta) : 0;
     incidence[i] = theta;
     profileAngle[i] = omega === -180 ? 180 : omega;
     sunlitFraction[i] = lit;
