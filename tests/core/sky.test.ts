@@ -3,21 +3,12 @@
  * models and Erbs decomposition. Published check values are in tests/reference/.
  */
 import fc from 'fast-check';
-import { SunpaneError } from '../../src/core/errors';
 import { ashraeClearSky, decomposeErbs, extraterrestrialIrradiance, extraterrestrialSpencer, ineichenPerezClearSky } from '../../src/core/sky';
+import { expectArgumentError } from '../support/expectError';
 
 const sinDeg = (d: number) => Math.sin((d * Math.PI) / 180);
 
-function expectError(fn: () => unknown, argument: string): void {
-  let caught: unknown;
-  try {
-    fn();
-  } catch (err) {
-    caught = err;
-  }
-  expect(caught).toBeInstanceOf(SunpaneError);
-  expect((caught as SunpaneError).argument).toBe(argument);
-}
+const expectError = expectArgumentError;
 
 describe('extraterrestrial irradiance', () => {
   test('both published forms stay within 1321–1415 W/m² and agree within 0.3 % all year', () => {

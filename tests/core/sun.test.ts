@@ -3,23 +3,13 @@
  * library checks are in tests/reference/spa-worked-example.test.ts, astronomy-engine-sun.test.ts
  * and suncalc-sun-position.test.ts.
  */
-import { SunpaneError } from '../../src/core/errors';
 import { RISE_SET_ALTITUDE, spaSteps, standardPressure, sunEvents, sunPosition } from '../../src/core/sun';
 import { civilToSerial, deltaTAt, serialToUtcMs } from '../../src/core/time';
+import { expectArgumentError } from '../support/expectError';
 
 const HOUR = 3_600_000;
 
-function expectError(fn: () => unknown, argument: string): void {
-  try {
-    fn();
-  } catch (err) {
-    expect(err).toBeInstanceOf(SunpaneError);
-    expect((err as SunpaneError).argument).toBe(argument);
-    expect((err as SunpaneError).message.startsWith(argument)).toBe(true);
-    return;
-  }
-  throw new Error(`expected a SunpaneError naming ${argument}`);
-}
+const expectError = expectArgumentError;
 
 function angleDifference(a: number, b: number): number {
   const d = Math.abs(a - b) % 360;

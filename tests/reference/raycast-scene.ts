@@ -1,5 +1,5 @@
 /**
- * An independent sunlit-fraction reference built on three.js 0.187.0 (npm `three`, pinned in
+ * Source: three.js 0.187.0 ray casting — an independent sunlit-fraction reference built on three.js 0.187.0 (npm `three`, pinned in
  * package.json): the window's overhang, fins, reveal (jambs, head and sill) and the wall face around
  * the opening are built as double-sided rectangles in WORLD coordinates (x east, y north, z up), the
  * sun direction comes straight from its altitude and azimuth, and rays from sample points on the

@@ -1,0 +1,14 @@
+/** Shared assertion: `fn` throws the one typed error, naming `argument` first in its message. */
+import { SunpaneError } from '../../src/core/errors';
+
+export function expectArgumentError(fn: () => unknown, argument: string): void {
+  let caught: unknown;
+  try {
+    fn();
+  } catch (err) {
+    caught = err;
+  }
+  expect(caught).toBeInstanceOf(SunpaneError);
+  expect((caught as SunpaneError).argument).toBe(argument);
+  expect((caught as SunpaneError).message.startsWith(argument)).toBe(true);
+}
