@@ -79,7 +79,17 @@ export function readRange(param: ParamDescriptor, raw: RawArg | undefined): ArgV
     return rows;
   }
   const values: number[] = [];
-  for (const row of rows) {
+  if (param.gapsAreMissing && rows.some((r) => r.some((c) => !isBlank(c)))) {
+    // A series with gaps: every cell keeps its place; a blank or non-numeric cell is a missing value (NaN).
+    for (const row of rows) {
+      for (const cell of row) {
+        const n = typeof cell === 'number' ? cell : typeof cell === 'string' && cell.trim() !== '' && !Number.isNaN(Number(cell)) ? Number(cell) : Number.NaN;
+        if (!Number.isNaN(n)) requireRange(`${param.name} (value ${values.length + 1})`, n, param.min, param.max, param.unit);
+        values.push(n);
+      }
+    }
+  }
+  for (const row of param.gapsAreMissing ? [] : rows) {
     for (const cell of row) {
       if (isBlank(cell) && rows.length * (row.length || 1) > 1) continue;
       if (isBlank(cell)) break;

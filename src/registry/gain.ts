@@ -53,8 +53,8 @@ const P = {
   factors: { name: 'factors', kind: 'numberList', min: 0, max: 1, length: { exact: 24 }, description: 'the 24 radiant time factors r0…r23 of the room (from your handbook or room model), summing to 1' },
   factorsOptional: { name: 'factors', kind: 'numberList', min: 0, max: 1, length: { exact: 24 }, optional: true, description: 'the 24 radiant time factors r0…r23 of the room, summing to 1; blank: no cooling-load columns' },
   gains: { name: 'gains', kind: 'numberList', unit: 'W', min: -1e7, max: 1e7, length: { exact: 24 }, description: 'hourly gain of the design day, hour ending 1:00 first' },
-  dniSeries: { ...G.dni, kind: 'numberList', optional: true, description: "a year's hourly direct normal irradiance, one value per hour (8760, or 8784 in a leap year); blank: clear sky from tauB and tauD" },
-  dhiSeries: { ...G.dhi, kind: 'numberList', optional: true, description: "a year's hourly diffuse horizontal irradiance, one value per hour; blank: clear sky from tauB and tauD" },
+  dniSeries: { ...G.dni, kind: 'numberList', optional: true, gapsAreMissing: true, description: "a year's hourly direct normal irradiance, one value per hour (8760, or 8784 in a leap year); a blank or text cell marks that hour missing (#N/A in the result); blank range: clear sky from tauB and tauD" },
+  dhiSeries: { ...G.dhi, kind: 'numberList', optional: true, gapsAreMissing: true, description: "a year's hourly diffuse horizontal irradiance, one value per hour; a blank or text cell marks that hour missing; blank range: clear sky from tauB and tauD" },
 } satisfies Record<string, ParamDescriptor>;
 
 const SITE_AND_WINDOW: readonly ParamDescriptor[] = [GLOSSARY.latitude, GLOSSARY.longitude, GLOSSARY.utcOffset, GLOSSARY.surfaceAzimuth, P.width, P.height, P.shgcNormal];

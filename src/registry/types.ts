@@ -59,6 +59,11 @@ export interface ParamDescriptor {
   length?: { min?: number; max?: number; exact?: number };
   /** For `numberList`: numbers must be strictly ascending. */
   ascending?: boolean;
+  /**
+   * For `numberList` series (e.g. hourly weather): every cell keeps its place, and a blank or
+   * non-numeric cell is a missing value (NaN) for the core to flag, instead of being skipped or refused.
+   */
+  gapsAreMissing?: boolean;
 }
 
 /** A parameter's value after reading: what `evaluate` receives under the parameter's name. */

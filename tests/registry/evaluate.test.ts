@@ -85,3 +85,23 @@ describe('broadcasting over ranges', () => {
     expect(() => requireRange('latitude', 95, -90, 90, '°')).toThrow('latitude = 95 is not allowed: must be a number from -90 to 90 °');
   });
 });
+
+describe('series with gaps', () => {
+  const SERIES: FunctionDescriptor = {
+    name: 'TOYSERIES',
+    summary: 'count of missing values',
+    category: 'Gain and load',
+    params: [{ name: 'dni', kind: 'numberList', min: 0, max: 2000, optional: true, gapsAreMissing: true, description: 'series' }],
+    result: { shape: 'spill', description: 'values' },
+    evaluate: (args) => [(args.dni as number[] | undefined)?.map((v) => (Number.isNaN(v) ? -1 : v)) ?? []],
+  };
+
+  test('blank and text cells keep their place as missing values; numbers are still range-checked', () => {
+    expect(applyFunction(SERIES, [[[1], [null], ['n/a'], [4]]])).toEqual([[1, -1, -1, 4]]);
+    expect(() => applyFunction(SERIES, [[[1], [null], [2500]]])).toThrow(/dni \(value 3\) = 2500 is not allowed/);
+  });
+
+  test('a wholly blank range is "not given"', () => {
+    expect(applyFunction(SERIES, [[[null], [null]]])).toEqual([[]]);
+  });
+});

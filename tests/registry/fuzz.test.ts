@@ -76,7 +76,8 @@ function invalidArb(p: ParamDescriptor): fc.Arbitrary<RawArg> {
       bad.push('maybe', 2);
       break;
     case 'numberList':
-      bad.push([['text']], [[Number.NaN]]);
+      // In a series with gaps, text and blanks are missing values, not errors.
+      if (!p.gapsAreMissing) bad.push([['text']], [[Number.NaN]]);
       if (p.max !== undefined) bad.push([[p.max + 1 + Math.abs(p.max)]]);
       if (p.min !== undefined) bad.push([[p.min - 1 - Math.abs(p.min)]]);
       break;

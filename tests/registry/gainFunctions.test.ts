@@ -3,6 +3,7 @@
  * (whose outside checks are in tests/core/gain*.test.ts and tests/reference/rts-spitler-1997.test.ts).
  * Plumbing only: argument order, defaults, error names, spill shapes.
  */
+import { NotAvailable } from '../../src/registry/types';
 import { SunpaneError } from '../../src/core/errors';
 import { annualSeries } from '../../src/core/annual';
 import { windowGainAt } from '../../src/core/gain';
@@ -87,5 +88,19 @@ describe('gain worksheet functions', () => {
     const cell = wrong()[0][0] as SunpaneError;
     expect(cell).toBeInstanceOf(SunpaneError);
     expect(cell.argument).toBe('dni');
+  });
+
+  test('WINDOWYEAR marks a blank or text weather cell missing (#N/A) instead of reading it as zero', () => {
+    const dni: (number | string | null)[][] = Array.from({ length: 8760 }, () => [600]);
+    const dhi: (number | string | null)[][] = Array.from({ length: 8760 }, () => [100]);
+    dni[4000][0] = null; // a blank hour
+    dhi[4001][0] = 'n/a'; // a garbled hour
+    const out = call('WINDOWYEAR', [2026, 40, -105, -7, 180, 2, 1.5, 0.6, 'gain', dni, dhi, null, null, ...GLASS]);
+    expect(out).toHaveLength(8760);
+    expect(out[4000][0]).toBeInstanceOf(NotAvailable);
+    expect(out[4001][0]).toBeInstanceOf(NotAvailable);
+    expect(typeof out[4002][0]).toBe('number');
+    // Geometry does not depend on the weather: still given on the missing hour.
+    expect(typeof call('WINDOWYEAR', [2026, 40, -105, -7, 180, 2, 1.5, 0.6, 'altitude', dni, dhi, null, null, ...GLASS])[4000][0]).toBe('number');
   });
 });
