@@ -269,3 +269,50 @@ export function unionAreaInRectangle(x0: number, y0: number, x1: number, y1: num
   return covered < 0 ? 0 : covered > full ? full : covered;
 }
 
+
+/**
+ * Area of the part of the rectangle [x0, x1] × [y0, y1] inside the strip w0 ≤ p·x + q·y ≤ w1 —
+ * closed form, used for the shadow union of src/core/shading.ts, where every shadow and every
+ * intersection of shadows with the lit rectangle is such a rectangle-and-strip set.
+ *
+ * @param x0 - left edge (x1 ≤ x0 gives 0)
+ * @param y0 - bottom edge (y1 ≤ y0 gives 0)
+ * @param x1 - right edge
+ * @param y1 - top edge
+ * @param p - x coefficient of the strip's linear form (any finite value)
+ * @param q - y coefficient (any finite value)
+ * @param w0 - lower bound of p·x + q·y (w1 ≤ w0 gives 0)
+ * @param w1 - upper bound
+ * @returns the area [square of the length unit], 0 … rectangle area
+ * @remarks Over the rectangle, v = p·x + q·y − v_min is the sum of two independent uniform parts
+ * on [0, α] and [0, β] with α = |p|·W, β = |q|·H; the share of the rectangle with v ≤ s is the
+ * distribution of that sum (Eq. P1, with β ≤ α after ordering):
+ * s²/(2αβ) for 0 ≤ s ≤ β, (s − β/2)/α for β ≤ s ≤ α, 1 − (α + β − s)²/(2αβ) for α ≤ s ≤ α + β
+ * (the convolution of two uniform densities — the trapezoidal distribution; e.g. Feller, *An
+ * Introduction to Probability Theory and Its Applications* II, §I.9 — from memory). Each branch
+ * divides only by quantities its own range keeps above 0, so a strip along an axis (p or q = 0)
+ * is exact too. Area = W·H·[G(w1 − v_min) − G(w0 − v_min)].
+ */
+export function rectangleStripArea(x0: number, y0: number, x1: number, y1: number, p: number, q: number, w0: number, w1: number): number {
+  const width = x1 - x0;
+  const height = y1 - y0;
+  if (!(width > 0 && height > 0 && w1 > w0)) return 0;
+  const ap = (p < 0 ? -p : p) * width;
+  const aq = (q < 0 ? -q : q) * height;
+  const vMin = (p >= 0 ? p * x0 : p * x1) + (q >= 0 ? q * y0 : q * y1);
+  const big = ap > aq ? ap : aq;
+  const small = ap > aq ? aq : ap;
+  const f = trapezoidCdf(w1 - vMin, big, small) - trapezoidCdf(w0 - vMin, big, small);
+  return f > 0 ? width * height * f : 0;
+}
+
+/** Eq. P1: P(U + V ≤ s) for U uniform on [0, big], V uniform on [0, small], small ≤ big. */
+function trapezoidCdf(s: number, big: number, small: number): number {
+  if (!(s > 0)) return 0;
+  const total = big + small;
+  if (s >= total) return 1;
+  if (s <= small) return (s * s) / (2 * big * small); // 0 < s ≤ small ≤ big
+  if (s <= big) return (s - small / 2) / big; // 0 < s ≤ big
+  const r = total - s; // big < s < total: small > 0
+  return 1 - (r * r) / (2 * big * small);
+}

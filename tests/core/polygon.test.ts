@@ -3,7 +3,8 @@
  * areas follow from elementary geometry (triangle ½·base·height, rectangle, square of side s).
  * The general case is checked against polygon-clipping in tests/reference/polygon-clipping-union.test.ts.
  */
-import { MAX_HALF_PLANES, clippedRectangleArea, unionAreaInRectangle, writeQuadHalfPlanes } from '../../src/core/polygon';
+import fc from 'fast-check';
+import { MAX_HALF_PLANES, clippedRectangleArea, rectangleStripArea, unionAreaInRectangle, writeQuadHalfPlanes } from '../../src/core/polygon';
 
 const TOL = 1e-12;
 
@@ -74,5 +75,53 @@ describe('unionAreaInRectangle', () => {
 
   test('no shapes cover nothing', () => {
     expect(unionAreaInRectangle(0, 0, 2, 1, new Float64Array(36), 0)).toBe(0);
+  });
+});
+
+describe('rectangleStripArea', () => {
+  test('elementary figures: a diagonal cut leaves triangle ½, an axis strip a slab, a strip past the rectangle nothing', () => {
+    // x + y ≤ 1 in the unit square: triangle of area ½; 0.5 ≤ x + y ≤ 1.5: 1 − 2 × ⅛ = ¾.
+    expect(Math.abs(rectangleStripArea(0, 0, 1, 1, 1, 1, -5, 1) - 0.5)).toBeLessThan(TOL);
+    expect(Math.abs(rectangleStripArea(0, 0, 1, 1, 1, 1, 0.5, 1.5) - 0.75)).toBeLessThan(TOL);
+    // 0.5 ≤ y ≤ 0.75 (p = 0) in [0, 2] × [0, 1]: slab 2 × 0.25.
+    expect(Math.abs(rectangleStripArea(0, 0, 2, 1, 0, 1, 0.5, 0.75) - 0.5)).toBeLessThan(TOL);
+    // 1 ≤ x ≤ 3 (q = 0) with a negative coefficient: −3 ≤ −x ≤ −1 in [0, 2] × [0, 1]: 1 × 1.
+    expect(Math.abs(rectangleStripArea(0, 0, 2, 1, -1, 0, -3, -1) - 1)).toBeLessThan(TOL);
+    expect(rectangleStripArea(0, 0, 1, 1, 1, 1, 2, 3)).toBe(0);
+    expect(rectangleStripArea(0, 0, 1, 1, 1, 1, 1, 1)).toBe(0);
+    expect(rectangleStripArea(1, 0, 1, 1, 1, 1, -9, 9)).toBe(0);
+    // No bound: the whole rectangle; p = q = 0 with 0 inside the strip: the whole rectangle too.
+    expect(rectangleStripArea(0, 0, 2, 3, 0.3, -0.7, -Infinity, Infinity)).toBe(6);
+    expect(rectangleStripArea(0, 0, 2, 3, 0, 0, -1, 1)).toBe(6);
+  });
+
+  test('equals the convex clip of the rectangle by the two half-planes of the strip, over random rectangles, directions and strips', () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: -3, max: 3, noNaN: true }),
+        fc.double({ min: -3, max: 3, noNaN: true }),
+        fc.double({ min: 0, max: 4, noNaN: true }),
+        fc.double({ min: 0, max: 4, noNaN: true }),
+        fc.double({ min: 0, max: 2 * Math.PI, noNaN: true }),
+        fc.oneof(fc.constantFrom(0, 1e-12, 1), fc.double({ min: 0, max: 1, noNaN: true })),
+        fc.double({ min: -8, max: 8, noNaN: true }),
+        fc.double({ min: 0, max: 8, noNaN: true }),
+        (x0, y0, w, h, angle, scale, w0, width) => {
+          // Directions along the axes are drawn as exact zeros, as shadows have them.
+          const p = Math.abs(Math.cos(angle)) < 1e-3 ? 0 : scale * Math.cos(angle);
+          const q = Math.abs(Math.sin(angle)) < 1e-3 ? 0 : scale * Math.sin(angle);
+          const n = Math.hypot(p, q);
+          const closed = rectangleStripArea(x0, y0, x0 + w, y0 + h, p, q, w0, w0 + width);
+          let clipped: number;
+          if (n === 0) clipped = w0 <= 0 && 0 <= w0 + width && width > 0 ? w * h : 0;
+          else {
+            const planes = new Float64Array([p / n, q / n, (w0 + width) / n, -p / n, -q / n, -w0 / n]);
+            clipped = clippedRectangleArea(x0, y0, x0 + w, y0 + h, planes, [0], [2], 1);
+          }
+          expect(Math.abs(closed - clipped)).toBeLessThanOrEqual(1e-12 * Math.max(1, w * h));
+        },
+      ),
+      { numRuns: 5000, seed: 21 },
+    );
   });
 });

@@ -230,6 +230,92 @@ describe('shadow union with bounding boxes equals the union without them', () =>
   });
 });
 
+/**
+ * The sunlit fraction by the general convex clipper: the shadow parallelograms built here from their
+ * vertices (module comment of src/core/shading.ts), united by inclusion–exclusion of convex clips
+ * (`unionAreaInRectangle`) — the method the closed form replaced, kept as its independent check.
+ */
+function sunlitByClipping(width: number, height: number, shading: Shading, altitude: number, gamma: number): number {
+  if (!(altitude > 0) || gamma <= -90 || gamma >= 90) return 0;
+  const betaRad = altitude * RAD;
+  const gammaRad = gamma * RAD;
+  const sz = Math.cos(betaRad) * Math.cos(gammaRad);
+  if (!(sz > 0)) return 0;
+  const a = (Math.cos(betaRad) * Math.sin(gammaRad)) / sz;
+  const b = Math.sin(betaRad) / sz;
+  const r = shading.revealDepth ?? 0;
+  const x0 = Math.max(0, a * r);
+  const x1 = Math.min(width, width + a * r);
+  const y0 = Math.max(0, b * r);
+  const y1 = Math.min(height, height + b * r);
+  if (!(x1 > x0 && y1 > y0)) return 0;
+  const planes = new Float64Array(36);
+  let m = 0;
+  const oh = shading.overhang;
+  if (oh && oh.projection > 0) {
+    const y = height + oh.gap;
+    const xl = -oh.extensionLeft;
+    const xr = width + oh.extensionRight;
+    const dx = -a * oh.projection;
+    const dy = -b * oh.projection;
+    if (writeQuadHalfPlanes(planes, m * 4, xl, y, xr, y, xr + dx, y + dy, xl + dx, y + dy)) m++;
+  }
+  for (const [fin, x] of [
+    [shading.leftFin, -(shading.leftFin?.gap ?? 0)],
+    [shading.rightFin, width + (shading.rightFin?.gap ?? 0)],
+  ] as const) {
+    if (!fin || !(fin.projection > 0)) continue;
+    const yb = -fin.extensionBelow;
+    const yt = height + fin.extensionAbove;
+    const dx = -a * fin.projection;
+    const dy = -b * fin.projection;
+    if (writeQuadHalfPlanes(planes, m * 4, x, yb, x, yt, x + dx, yt + dy, x + dx, yb + dy)) m++;
+  }
+  const lit = (x1 - x0) * (y1 - y0);
+  return Math.min(1, Math.max(0, (lit - unionAreaInRectangle(x0, y0, x1, y1, planes, m)) / (width * height)));
+}
+
+describe('closed-form shadow union equals the general convex clipper', () => {
+  test('over thousands of random windows, devices (one, two or three, overlapping or apart), reveals and suns in front', () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0.2, max: 3, noNaN: true }),
+        fc.double({ min: 0.2, max: 3, noNaN: true }),
+        shadingArb.map(({ skyline: _skyline, ...rest }) => rest),
+        fc.oneof(fc.constantFrom(1e-6, 0.01, 45, 89.9999), fc.double({ min: 1e-6, max: 89.9999, noNaN: true })),
+        fc.oneof(fc.constantFrom(0, 1e-9, -1e-9, 89.9999, -89.9999), fc.double({ min: -89.9999, max: 89.9999, noNaN: true })),
+        (width, height, shading, altitude, gamma) => {
+          if (shading.overhang && width + shading.overhang.extensionLeft + shading.overhang.extensionRight < 0) return;
+          for (const fin of [shading.leftFin, shading.rightFin]) if (fin && height + fin.extensionAbove + fin.extensionBelow < 0) return;
+          const sunAzimuth = 180 - gamma;
+          const closed = sunlitFraction({ width, height }, shading, altitude, sunAzimuth, 180);
+          // γ as the kernel forms it from the two azimuths (180 − (180 − γ) need not be γ exactly).
+          expect(Math.abs(closed - sunlitByClipping(width, height, shading, altitude, wrap180(180 - sunAzimuth)))).toBeLessThanOrEqual(EQUAL);
+        },
+      ),
+      { numRuns: 10000, seed: 12 },
+    );
+  });
+
+  test('every hour of the year of the benchmark-like window (overhang, two fins, reveal) agrees, and most hours are part-shaded', () => {
+    const shading: Shading = {
+      overhang: { projection: 0.6, gap: 0.2, extensionLeft: 0.3, extensionRight: 0.3 },
+      leftFin: { projection: 0.4, gap: 0.1, extensionAbove: 0.2, extensionBelow: 0 },
+      rightFin: { projection: 0.4, gap: 0.1, extensionAbove: 0.2, extensionBelow: 0 },
+      revealDepth: 0.1,
+    };
+    let partial = 0;
+    for (let altitude = 0.5; altitude < 90; altitude += 1.5) {
+      for (let gamma = -89.5; gamma < 90; gamma += 1.5) {
+        const closed = sunlitFraction({ width: 2, height: 1.5 }, shading, altitude, 200 - gamma, 200);
+        expect(Math.abs(closed - sunlitByClipping(2, 1.5, shading, altitude, wrap180(200 - (200 - gamma))))).toBeLessThanOrEqual(EQUAL);
+        if (closed > 0 && closed < 1) partial++;
+      }
+    }
+    expect(partial).toBeGreaterThan(1000);
+  });
+});
+
 describe('annual series hour by hour equals the checked functions at its own sun', () => {
   test('sunlit fraction and plane irradiance of every hour of a shaded Perez window', () => {
     const spec = shadedSpec();
