@@ -198,63 +198,36 @@ export function annualSunPath(year: number, site: Site, options: SunPathOptions 
   // fresh optimisation bail out at the end of the call.
   const result: SunPathYear = { year, hours, stampSerial, altitude, azimuth, zenith, declination, equationOfTime };
 
-  // Hour i lies at node position (hourOffset + i) / HOURS_PER_STEP; hourOffset is a whole number of
-  // quarter hours (offsets and the half-hour shift are), so the split into node k and fraction p is
-  // exact and repeats every HOURS_PER_STEP hours: the quintic Lagrange weights (nodes k−2 … k+3 at
-  // −2 … 3) are tabulated once.
+  // Hour i lies at node position (hourOffset + i) / HOURS_PER_STEP (a whole number of quarter hours
+  // past the first node, so the split into segment and fraction is exact).
   const hourOffset = (yearStartMs + shiftMs) / MS_PER_HOUR - 24 * firstDay;
-  const weights = new Float64Array(HOURS_PER_STEP * 6);
-  for (let j = 0; j < HOURS_PER_STEP; j++) {
-    const t = hourOffset + j;
-    const p = (t - HOURS_PER_STEP * floor(t / HOURS_PER_STEP)) / HOURS_PER_STEP;
-    const [pp2, pp1, pm1, pm2, pm3] = [p + 2, p + 1, p - 1, p - 2, p - 3];
-    weights.set(
-      [
-        (-pp1 * p * pm1 * pm2 * pm3) / 120,
-        (pp2 * p * pm1 * pm2 * pm3) / 24,
-        (-pp2 * pp1 * pm1 * pm2 * pm3) / 12,
-        (pp2 * pp1 * p * pm2 * pm3) / 12,
-        (-pp2 * pp1 * p * pm1 * pm3) / 24,
-        (pp2 * pp1 * p * pm1 * pm2) / 120,
-      ],
-      j * 6,
-    );
-  }
-  // Module constants and imports copied to locals for the hot loop.
-  const [rad, deg, cos15, sin15] = [RAD, DEG, COS_15, SIN_15];
-  const refractionScale = ((pressure / 1010) * (283 / (273 + temperature)) * 1.02) / 60; // Eq. 42, constant part
-  const refractionFrom = RISE_SET_ALTITUDE;
+  const g = interpolateHourly(gNode, hourOffset, hours, G_SCRATCH);
+  const a = interpolateHourly(aNode, hourOffset, hours, A_SCRATCH);
+  const b = interpolateHourly(bNode, hourOffset, hours, B_SCRATCH);
+  interpolateHourly(declNode, hourOffset, hours, declination);
+  interpolateHourly(eotNode, hourOffset, hours, equationOfTime);
+
+  // Pass 1: hour angle and the topocentric vector. Its up, horizontal, westward and southward
+  // components are parked in altitude, zenith, azimuth and SOUTH_SCRATCH for pass 2 (short loops
+  // with independent iterations run much faster than one long loop body).
+  const [rad, cos15, sin15] = [RAD, COS_15, SIN_15];
+  const south = SOUTH_SCRATCH;
   // cos and sin of the hour angle: directly every 24 hours, by rotation through one hour in between.
   let cosH = 1;
   let sinH = 0;
   let previousHourAngle = 0;
   for (let i = 0; i < hours; i++) {
     stampSerial[i] = startSerial + (i + 1) / 24;
-    const ms = yearStartMs + i * MS_PER_HOUR + shiftMs;
-    const k = floor((hourOffset + i) / HOURS_PER_STEP);
-    const wi = (i % HOURS_PER_STEP) * 6;
-    const w0 = weights[wi];
-    const w1 = weights[wi + 1];
-    const w2 = weights[wi + 2];
-    const w3 = weights[wi + 3];
-    const w4 = weights[wi + 4];
-    const w5 = weights[wi + 5];
-    const g = w0 * gNode[k - 2] + w1 * gNode[k - 1] + w2 * gNode[k] + w3 * gNode[k + 1] + w4 * gNode[k + 2] + w5 * gNode[k + 3];
-    const a = w0 * aNode[k - 2] + w1 * aNode[k - 1] + w2 * aNode[k] + w3 * aNode[k + 1] + w4 * aNode[k + 2] + w5 * aNode[k + 3];
-    const b = w0 * bNode[k - 2] + w1 * bNode[k - 1] + w2 * bNode[k] + w3 * bNode[k + 1] + w4 * bNode[k + 2] + w5 * bNode[k + 3];
-    declination[i] = w0 * declNode[k - 2] + w1 * declNode[k - 1] + w2 * declNode[k] + w3 * declNode[k + 1] + w4 * declNode[k + 2] + w5 * declNode[k + 3];
-    equationOfTime[i] = w0 * eotNode[k - 2] + w1 * eotNode[k - 1] + w2 * eotNode[k] + w3 * eotNode[k + 1] + w4 * eotNode[k + 2] + w5 * eotNode[k + 3];
-
     // Eq. 27 with 360.98564736629·D split as 360·frac(D) + 0.98564736629·D to keep H small and exact.
-    const days = ms / MS_PER_DAY - DAYS_UNIX_TO_J2000; // JD − 2451545
+    const days = (yearStartMs + i * MS_PER_HOUR + shiftMs) / MS_PER_DAY - DAYS_UNIX_TO_J2000; // JD − 2451545
     const jc = days / 36_525;
     const nu0 = 280.46061837 + 360 * (days - floor(days)) + 0.98564736629 * days + jc * jc * (0.000387933 - jc / 38_710_000);
-    const hourAngle = nu0 + longitude - g; // Eq. 28, 31 [°], not reduced
+    const hourAngle = nu0 + longitude - g[i]; // Eq. 28, 31 [°], not reduced
     if (i % 24 === 0) {
       cosH = cos(hourAngle * rad);
       sinH = sin(hourAngle * rad);
     } else {
-      // H advances 15° + ε per hour (ε ≈ 0.04°): rotate by 15° and by ε (Taylor to ε⁵, exact to 1e-20).
+      // H advances 15° + ε per hour (|ε| ≈ 0.04°): rotate by 15° and by ε (Taylor to ε⁵, exact to 1e-20).
       let step = hourAngle - previousHourAngle - 15;
       step -= 360 * Math.round(step / 360);
       const eps = step * rad;
@@ -269,16 +242,84 @@ export function annualSunPath(year: number, site: Site, options: SunPathOptions 
     }
     previousHourAngle = hourAngle;
     // Topocentric vector in Earth radii: X toward the meridian, Y westward, Z toward the pole (Eq. 36–40).
-    const vx = a * cosH - x;
-    const vy = a * sinH;
-    const vz = b - y;
-    const e0 = asinFast((sinLat * vz + cosLat * vx) / sqrt(vx * vx + vy * vy + vz * vz)) * deg; // Eq. 41
-    // Eq. 42, 43 as in refractionSpa: no refraction below −(0.26667 + 0.5667)°.
+    const vx = a[i] * cosH - x;
+    const vy = a[i] * sinH;
+    const vz = b[i] - y;
+    const s = vx * sinLat - vz * cosLat;
+    altitude[i] = sinLat * vz + cosLat * vx; // up
+    zenith[i] = sqrt(vy * vy + s * s); // horizontal
+    azimuth[i] = vy;
+    south[i] = s;
+  }
+
+  // Pass 2: altitude (Eq. 41, as atan2 of the up and horizontal components), refraction (Eq. 42, 43
+  // as in refractionSpa: none below −(0.26667 + 0.5667)°), zenith (Eq. 44), azimuth (Eq. 45, 46).
+  const deg = DEG;
+  const refractionScale = ((o.pressure / 1010) * (283 / (273 + o.temperature)) * 1.02) / 60; // Eq. 42, constant part
+  const refractionFrom = RISE_SET_ALTITUDE;
+  for (let i = 0; i < hours; i++) {
+    const e0 = atan2Fast(altitude[i], zenith[i]) * deg;
     const e = e0 < refractionFrom ? e0 : e0 + refractionScale / tan((e0 + 10.3 / (e0 + 5.11)) * rad);
     altitude[i] = e;
-    zenith[i] = 90 - e; // Eq. 44
-    const az = atan2Fast(vy, vx * sinLat - vz * cosLat) * deg + 180; // Eq. 45, 46
+    zenith[i] = 90 - e;
+    const az = atan2Fast(azimuth[i], south[i]) * deg + 180;
     azimuth[i] = az >= 360 ? az - 360 : az;
   }
   return result;
+}
+
+/** Per-hour scratch columns (a year has at most 8784 hours); reused, since one call runs at a time. */
+const G_SCRATCH = new Float64Array(8784);
+const A_SCRATCH = new Float64Array(8784);
+const B_SCRATCH = new Float64Array(8784);
+const SOUTH_SCRATCH = new Float64Array(8784);
+
+/**
+ * Monomial coefficients of the six Lagrange basis polynomials for the nodes −2, −1, 0, 1, 2, 3:
+ * ℓ_j(p) = Σ_d LAGRANGE_POWERS[6j + d] p^d.
+ */
+const LAGRANGE_POWERS: Float64Array = (() => {
+  const out = new Float64Array(36);
+  for (let j = 0; j < 6; j++) {
+    let poly = [1]; // coefficients, lowest power first
+    let scale = 1;
+    for (let m = 0; m < 6; m++) {
+      if (m === j) continue;
+      const root = m - 2;
+      poly = poly.map((c, d) => (d > 0 ? poly[d - 1] : 0) - root * c).concat(poly[poly.length - 1]);
+      scale *= j - m;
+    }
+    poly.forEach((c, d) => (out[6 * j + d] = c / scale));
+  }
+  return out;
+})();
+
+/**
+ * Quintic (six-point) Lagrange interpolation of node values to hours.
+ * @param nodeValues - values at equally spaced nodes, HOURS_PER_STEP hours apart
+ * @param hourOffset - position of hour 0 after node 0 [h]; a whole number of quarter hours, at least 2 steps
+ * @param hours - number of hours; the nodes must reach 3 steps beyond the last
+ * @param out - filled with the interpolated value for hours 0 … hours − 1
+ * @returns `out`
+ * @remarks Within each step between nodes k and k + 1 the interpolating polynomial through nodes
+ *   k − 2 … k + 3 is written in powers of the fraction p and evaluated by Horner's rule.
+ */
+function interpolateHourly(nodeValues: Float64Array, hourOffset: number, hours: number, out: Float64Array): Float64Array {
+  const w = LAGRANGE_POWERS;
+  let i = 0;
+  for (let k = floor(hourOffset / HOURS_PER_STEP); i < hours; k++) {
+    const [f0, f1, f2, f3, f4, f5] = [nodeValues[k - 2], nodeValues[k - 1], nodeValues[k], nodeValues[k + 1], nodeValues[k + 2], nodeValues[k + 3]];
+    const c0 = f0 * w[0] + f1 * w[6] + f2 * w[12] + f3 * w[18] + f4 * w[24] + f5 * w[30];
+    const c1 = f0 * w[1] + f1 * w[7] + f2 * w[13] + f3 * w[19] + f4 * w[25] + f5 * w[31];
+    const c2 = f0 * w[2] + f1 * w[8] + f2 * w[14] + f3 * w[20] + f4 * w[26] + f5 * w[32];
+    const c3 = f0 * w[3] + f1 * w[9] + f2 * w[15] + f3 * w[21] + f4 * w[27] + f5 * w[33];
+    const c4 = f0 * w[4] + f1 * w[10] + f2 * w[16] + f3 * w[22] + f4 * w[28] + f5 * w[34];
+    const c5 = f0 * w[5] + f1 * w[11] + f2 * w[17] + f3 * w[23] + f4 * w[29] + f5 * w[35];
+    const segmentEnd = HOURS_PER_STEP * (k + 1);
+    for (; i < hours && hourOffset + i < segmentEnd; i++) {
+      const p = (hourOffset + i - HOURS_PER_STEP * k) / HOURS_PER_STEP;
+      out[i] = c0 + p * (c1 + p * (c2 + p * (c3 + p * (c4 + p * c5))));
+    }
+  }
+  return out;
 }
