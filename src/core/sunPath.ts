@@ -185,7 +185,6 @@ export function annualSunPath(year: number, site: Site, options: SunPathOptions 
   const uRad = atan(POLAR_RATIO * tan(latRad));
   const x = cos(uRad) + (o.elevation / EARTH_RADIUS_M) * cosLat;
   const y = POLAR_RATIO * sin(uRad) + (o.elevation / EARTH_RADIUS_M) * sinLat;
-  const { pressure, temperature } = o;
 
   const stampSerial = new Float64Array(hours);
   const altitude = new Float64Array(hours);
