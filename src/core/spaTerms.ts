@@ -454,6 +454,12 @@ export interface EarthHeliocentric {
  *   X = (X0 + X1 τ + X2 τ² + …) / 1e8 (Eq. 10, 11).
  */
 export function earthPeriodicSums(jme: number, out: EarthHeliocentric): EarthHeliocentric {
+  seedFrequencies(jme);
+  return sumEarthSeries(jme, out);
+}
+
+/** cos and sin of every frequency slot at τ into FREQ_COS, FREQ_SIN (direct or by angle addition). */
+function seedFrequencies(jme: number): void {
   const { frequencies, recipe } = EARTH;
   for (let k = 0; k < recipe.length; k += 4) {
     const g = recipe[k];
@@ -469,6 +475,10 @@ export function earthPeriodicSums(jme: number, out: EarthHeliocentric): EarthHel
       FREQ_SIN[g] = FREQ_SIN[i] * FREQ_COS[j] + FREQ_COS[i] * sj; // sin(a ± b)
     }
   }
+}
+
+/** L, B, R from the slot values in FREQ_COS, FREQ_SIN (Eq. 9–11). */
+function sumEarthSeries(jme: number, out: EarthHeliocentric): EarthHeliocentric {
   // Horner in τ over the series of each quantity (Eq. 10): L0…L5 are series 0–5, B0…B1 6–7, R0…R4 8–12.
   let l = 0;
   for (let s = 5; s >= 0; s--) l = l * jme + seriesSum(s);
@@ -480,6 +490,44 @@ export function earthPeriodicSums(jme: number, out: EarthHeliocentric): EarthHel
   out.B = b / 1e8;
   out.R = r / 1e8;
   return out;
+}
+
+const STEP_COS = new Float64Array(EARTH.frequencies.length);
+const STEP_SIN = new Float64Array(EARTH.frequencies.length);
+
+/**
+ * Earth heliocentric longitude, latitude and radius vector at equally spaced instants
+ * τ_n = τ0 + n·Δτ, n = 0 … count − 1 — {@link earthPeriodicSums} for a series of instants.
+ * @param jme0 - Julian ephemeris millennium τ0 of the first instant
+ * @param stepJme - spacing Δτ [millennia]
+ * @param count - number of instants
+ * @param L - filled with L [rad, not reduced] per instant; B [rad] and R [AU] likewise
+ * @remarks Same terms and frequency slots as {@link earthPeriodicSums}; cos and sin of each slot
+ *   are computed at τ0 and then carried from instant to instant by rotation through the slot's
+ *   fixed step C·Δτ (cos(x + d) = cos x cos d − sin x sin d, sin(x + d) = sin x cos d + cos x sin d),
+ *   so that no cos or sin is needed after the first instant. The rotations add only rounding
+ *   (≈ n·1e-16 relative); tests/core/sunTerms.test.ts holds the series to the single-instant sums.
+ */
+export function earthPeriodicSeries(jme0: number, stepJme: number, count: number, L: Float64Array, B: Float64Array, R: Float64Array): void {
+  const { frequencies } = EARTH;
+  const slots = frequencies.length;
+  for (let g = 0; g < slots; g++) {
+    STEP_COS[g] = Math.cos(frequencies[g] * stepJme);
+    STEP_SIN[g] = Math.sin(frequencies[g] * stepJme);
+  }
+  seedFrequencies(jme0);
+  const out: EarthHeliocentric = { L: 0, B: 0, R: 0 };
+  for (let n = 0; n < count; n++) {
+    sumEarthSeries(jme0 + n * stepJme, out);
+    L[n] = out.L;
+    B[n] = out.B;
+    R[n] = out.R;
+    for (let g = 0; g < slots; g++) {
+      const c = FREQ_COS[g] * STEP_COS[g] - FREQ_SIN[g] * STEP_SIN[g];
+      FREQ_SIN[g] = FREQ_SIN[g] * STEP_COS[g] + FREQ_COS[g] * STEP_SIN[g];
+      FREQ_COS[g] = c;
+    }
+  }
 }
 
 /** Per nutation row: the (argument, |multiplier|, sign) triples of its non-zero multipliers, flattened. */
@@ -516,6 +564,12 @@ export interface Nutation {
  *   Δε = Σ (c + dT) cos(Σ Xj Yj), in 0.0001″.
  */
 export function nutationSums(jce: number, x: readonly number[], out: Nutation): Nutation {
+  rowPhasors(x, ROW_COS, ROW_SIN);
+  return sumNutationRows(jce, out);
+}
+
+/** cos and sin of every row argument Σ Xj Yj by angle addition from cos and sin of X0…X4 [°]. */
+function rowPhasors(x: readonly number[], rowCos: Float64Array, rowSin: Float64Array): void {
   for (let j = 0; j < 5; j++) {
     const argRad = ((x[j] % 360) * Math.PI) / 180;
     const c1 = Math.cos(argRad);
@@ -532,10 +586,7 @@ export function nutationSums(jce: number, x: readonly number[], out: Nutation): 
     MULTIPLE_COS[k + 3] = c2 * c1 - s2 * s1;
     MULTIPLE_SIN[k + 3] = s2 * c1 + c2 * s1;
   }
-  let psiSum = 0;
-  let epsSum = 0;
   for (let i = 0; i < NUTATION_TERMS.length; i++) {
-    // cos and sin of Σ Xj Yj by angle addition.
     let re = 1;
     let im = 0;
     for (let f = NUT_FACTOR_START[i], end = NUT_FACTOR_START[i + 1]; f < end; f += 3) {
@@ -546,11 +597,70 @@ export function nutationSums(jce: number, x: readonly number[], out: Nutation): 
       im = re * s + im * c;
       re = next;
     }
+    rowCos[i] = re;
+    rowSin[i] = im;
+  }
+}
+
+/** Δψ, Δε from the row phasors in ROW_COS, ROW_SIN (Eq. 20–22). */
+function sumNutationRows(jce: number, out: Nutation): Nutation {
+  let psiSum = 0;
+  let epsSum = 0;
+  for (let i = 0; i < NUTATION_TERMS.length; i++) {
     const q = i * 4;
-    psiSum += (NUT_COEFFICIENTS[q] + NUT_COEFFICIENTS[q + 1] * jce) * im; // Eq. 20
-    epsSum += (NUT_COEFFICIENTS[q + 2] + NUT_COEFFICIENTS[q + 3] * jce) * re; // Eq. 21
+    psiSum += (NUT_COEFFICIENTS[q] + NUT_COEFFICIENTS[q + 1] * jce) * ROW_SIN[i]; // Eq. 20
+    epsSum += (NUT_COEFFICIENTS[q + 2] + NUT_COEFFICIENTS[q + 3] * jce) * ROW_COS[i]; // Eq. 21
   }
   out.deltaPsi = psiSum / 36_000_000; // Eq. 22
   out.deltaEpsilon = epsSum / 36_000_000;
   return out;
+}
+
+const ROW_COS = new Float64Array(NUTATION_TERMS.length);
+const ROW_SIN = new Float64Array(NUTATION_TERMS.length);
+const ROW_STEP_COS = new Float64Array(NUTATION_TERMS.length);
+const ROW_STEP_SIN = new Float64Array(NUTATION_TERMS.length);
+
+/**
+ * Nutation in longitude and obliquity at equally spaced instants T_n = T0 + n·ΔT, n = 0 … count − 1
+ * — {@link nutationSums} for a series of instants.
+ * @param jce0 - Julian ephemeris century T0 of the first instant
+ * @param stepJce - spacing ΔT [centuries]
+ * @param count - number of instants, at least 2
+ * @param xFirst - fundamental arguments X0…X4 [°] at the first instant (Eq. 15–19)
+ * @param xLast - the same at the last instant
+ * @param deltaPsi - filled with Δψ [°] per instant; deltaEpsilon with Δε [°]
+ * @remarks Eq. 20–22 with cos and sin of each row's argument computed at the first instant and
+ *   carried by rotation through a fixed step: the row's argument advanced at the mean rate between
+ *   the first and last instant, (X_j,last − X_j,first)/(count − 1) per step. The fundamental
+ *   arguments are cubic in T, so over a span s their departure from that chord is at most
+ *   (s/2)²·max|X_j″|/2, with X_j″ = 2·(quadratic coefficient) + 6·T·(cubic coefficient) below
+ *   0.03 °/century² for the years 1–9999: for a span of a year and a month (0.0103 century) under
+ *   4e-7° per argument, 1.2e-6° for a row (multipliers up to 3), which changes Δψ and Δε by under
+ *   1e-9°. tests/core/sunTerms.test.ts holds the series to {@link nutationSums}.
+ */
+export function nutationSeries(
+  jce0: number,
+  stepJce: number,
+  count: number,
+  xFirst: readonly number[],
+  xLast: readonly number[],
+  deltaPsi: Float64Array,
+  deltaEpsilon: Float64Array,
+): void {
+  const stepX = xFirst.map((first, j) => (xLast[j] - first) / (count - 1));
+  rowPhasors(stepX, ROW_STEP_COS, ROW_STEP_SIN);
+  rowPhasors(xFirst, ROW_COS, ROW_SIN);
+  const rows = NUTATION_TERMS.length;
+  const out: Nutation = { deltaPsi: 0, deltaEpsilon: 0 };
+  for (let n = 0; n < count; n++) {
+    sumNutationRows(jce0 + n * stepJce, out);
+    deltaPsi[n] = out.deltaPsi;
+    deltaEpsilon[n] = out.deltaEpsilon;
+    for (let i = 0; i < rows; i++) {
+      const c = ROW_COS[i] * ROW_STEP_COS[i] - ROW_SIN[i] * ROW_STEP_SIN[i];
+      ROW_SIN[i] = ROW_SIN[i] * ROW_STEP_COS[i] + ROW_COS[i] * ROW_STEP_SIN[i];
+      ROW_COS[i] = c;
+    }
+  }
 }

@@ -14,7 +14,7 @@
  */
 import { DEG, RAD, asinClamped, wrap180, wrap360 } from './angles';
 import { SunpaneError, requireRange } from './errors';
-import { type EarthHeliocentric, type Nutation, earthPeriodicSums, nutationSums } from './spaTerms';
+import { type EarthHeliocentric, type Nutation, earthPeriodicSeries, earthPeriodicSums, nutationSeries, nutationSums } from './spaTerms';
 import { deltaTAt, julianDay, requireSerial, requireUtcOffset, serialToUtcMs, utcMsToSerial } from './time';
 
 export { annualSunPath, type SunPathYear, type SunPathOptions } from './sunPath';
@@ -142,25 +142,86 @@ const fundamental = [0, 0, 0, 0, 0];
  */
 export function spaGeocentric(jd: number, deltaT: number, out: SpaSteps = emptySteps()): SpaSteps {
   const jde = jd + deltaT / 86_400; // Eq. 5
+  const jce = (jde - JD_J2000) / 36_525; // Eq. 7
+  earthPeriodicSums(jce / 10, helio); // Eq. 9–11
+  fundamentalArguments(jce, fundamental); // Eq. 15–19
+  nutationSums(jce, fundamental, nutation); // Eq. 20–22
+  return spaGeocentricFinish(jd, jde, helio, nutation, out);
+}
+
+/** Fundamental arguments of nutation X0…X4 [°] at Julian ephemeris century `jce`, into `out`. Eq. 15–19. */
+function fundamentalArguments(jce: number, out: number[]): number[] {
+  out[0] = 297.85036 + 445_267.11148 * jce - 0.0019142 * jce * jce + (jce * jce * jce) / 189_474;
+  out[1] = 357.52772 + 35_999.05034 * jce - 0.0001603 * jce * jce - (jce * jce * jce) / 300_000;
+  out[2] = 134.96298 + 477_198.867398 * jce + 0.0086972 * jce * jce + (jce * jce * jce) / 56_250;
+  out[3] = 93.27191 + 483_202.017538 * jce - 0.0036825 * jce * jce + (jce * jce * jce) / 327_270;
+  out[4] = 125.04452 - 1934.136261 * jce + 0.0020708 * jce * jce + (jce * jce * jce) / 450_000;
+  return out;
+}
+
+const seriesHelio: EarthHeliocentric = { L: 0, B: 0, R: 0 };
+const seriesNutation: Nutation = { deltaPsi: 0, deltaEpsilon: 0 };
+const fundamentalLast = [0, 0, 0, 0, 0];
+
+/**
+ * {@link spaGeocentric} at equally spaced instants jd0 + n·step (UT), n = 0 … count − 1, for the
+ * annual fast path: the periodic sums are carried from instant to instant by rotation
+ * ({@link earthPeriodicSeries}, {@link nutationSeries}) instead of being evaluated afresh.
+ * @param jd0 - Julian day (UT) of the first instant
+ * @param stepDays - spacing [days] > 0
+ * @param count - number of instants, at least 2
+ * @param deltaTFirst - TT − UT [s] at the first instant
+ * @param deltaTLast - TT − UT [s] at the last instant; in between ΔT is taken as linear in time
+ * @param visit - called with n and the filled steps for each instant in turn (the same object each time)
+ * @remarks Reda & Andreas (2008), Eq. 4–30 and A1–A4. Taking ΔT as linear over the span is the only
+ *   approximation besides rounding: from 1901 on, the default ΔT polynomials (Espenak & Meeus 2006)
+ *   curve by at most about 0.15 s/yr² (around 1920), so over a year and a month they depart from
+ *   their chord by under 0.03 s, in which the sun moves about 0.04″/s × 0.03 s ≈ 3e-7°.
+ */
+export function spaGeocentricSeries(
+  jd0: number,
+  stepDays: number,
+  count: number,
+  deltaTFirst: number,
+  deltaTLast: number,
+  visit: (n: number, steps: SpaSteps) => void,
+): void {
+  const jdeFirst = jd0 + deltaTFirst / 86_400; // Eq. 5
+  const jdeLast = jd0 + (count - 1) * stepDays + deltaTLast / 86_400;
+  const stepJde = (jdeLast - jdeFirst) / (count - 1);
+  const jceFirst = (jdeFirst - JD_J2000) / 36_525; // Eq. 7
+  const stepJce = stepJde / 36_525;
+  const L = new Float64Array(count);
+  const B = new Float64Array(count);
+  const R = new Float64Array(count);
+  const deltaPsi = new Float64Array(count);
+  const deltaEpsilon = new Float64Array(count);
+  earthPeriodicSeries(jceFirst / 10, stepJce / 10, count, L, B, R); // Eq. 8–11
+  fundamentalArguments(jceFirst, fundamental); // Eq. 15–19
+  fundamentalArguments((jdeLast - JD_J2000) / 36_525, fundamentalLast);
+  nutationSeries(jceFirst, stepJce, count, fundamental, fundamentalLast, deltaPsi, deltaEpsilon); // Eq. 20–22
+  const out = emptySteps();
+  for (let n = 0; n < count; n++) {
+    seriesHelio.L = L[n];
+    seriesHelio.B = B[n];
+    seriesHelio.R = R[n];
+    seriesNutation.deltaPsi = deltaPsi[n];
+    seriesNutation.deltaEpsilon = deltaEpsilon[n];
+    visit(n, spaGeocentricFinish(jd0 + n * stepDays, jdeFirst + n * stepJde, seriesHelio, seriesNutation, out));
+  }
+}
+
+/** Eq. 6–8 and 12–30, A1–A4 from the periodic sums: the rest of {@link spaGeocentric}. */
+function spaGeocentricFinish(jd: number, jde: number, h: EarthHeliocentric, nut: Nutation, out: SpaSteps): SpaSteps {
   const jc = (jd - JD_J2000) / 36_525; // Eq. 6
   const jce = (jde - JD_J2000) / 36_525; // Eq. 7
   const jme = jce / 10; // Eq. 8
-
-  earthPeriodicSums(jme, helio); // Eq. 9–11
-  const L = wrap360(helio.L * DEG); // Eq. 12
-  const B = helio.B * DEG;
-  const R = helio.R;
+  const L = wrap360(h.L * DEG); // Eq. 12
+  const B = h.B * DEG;
+  const R = h.R;
   const theta = wrap360(L + 180); // Eq. 13
   const beta = -B; // Eq. 14
-
-  // Fundamental arguments of nutation [°], Eq. 15–19.
-  fundamental[0] = 297.85036 + 445_267.11148 * jce - 0.0019142 * jce * jce + (jce * jce * jce) / 189_474;
-  fundamental[1] = 357.52772 + 35_999.05034 * jce - 0.0001603 * jce * jce - (jce * jce * jce) / 300_000;
-  fundamental[2] = 134.96298 + 477_198.867398 * jce + 0.0086972 * jce * jce + (jce * jce * jce) / 56_250;
-  fundamental[3] = 93.27191 + 483_202.017538 * jce - 0.0036825 * jce * jce + (jce * jce * jce) / 327_270;
-  fundamental[4] = 125.04452 - 1934.136261 * jce + 0.0020708 * jce * jce + (jce * jce * jce) / 450_000;
-  nutationSums(jce, fundamental, nutation); // Eq. 20–22
-  const { deltaPsi, deltaEpsilon } = nutation;
+  const { deltaPsi, deltaEpsilon } = nut;
 
   const u = jme / 10;
   const epsilon0 =

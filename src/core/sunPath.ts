@@ -17,7 +17,7 @@
  */
 import { DEG, RAD } from './angles';
 import { SunpaneError } from './errors';
-import { RISE_SET_ALTITUDE, type SpaSteps, requireSite, resolveSunOptions, spaGeocentric } from './sun';
+import { RISE_SET_ALTITUDE, requireSite, resolveSunOptions, spaGeocentricSeries } from './sun';
 import { civilToSerial, deltaTAt, hoursInYear, julianDay, requireUtcOffset, requireYear, serialToUtcMs } from './time';
 import type { Site } from './window';
 
@@ -164,10 +164,9 @@ export function annualSunPath(year: number, site: Site, options: SunPathOptions 
   const bNode = new Float64Array(nodes); // sin δ / sin ξ
   const declNode = new Float64Array(nodes);
   const eotNode = new Float64Array(nodes);
-  const steps = {} as SpaSteps;
-  for (let n = 0; n < nodes; n++) {
-    const ms = (firstDay + n * NODE_STEP_DAYS) * MS_PER_DAY;
-    spaGeocentric(julianDay(ms), o.deltaT ?? deltaTAt(ms), steps);
+  const firstMs = firstDay * MS_PER_DAY;
+  const lastMs = (firstDay + (nodes - 1) * NODE_STEP_DAYS) * MS_PER_DAY;
+  spaGeocentricSeries(julianDay(firstMs), NODE_STEP_DAYS, nodes, o.deltaT ?? deltaTAt(firstMs), o.deltaT ?? deltaTAt(lastMs), (n, steps) => {
     let g = steps.alpha - steps.deltaPsi * cos(steps.epsilon * RAD); // so that H = ν0 + σ − g (Eq. 28, 31)
     if (n > 0) while (g < gNode[n - 1] - 180) g += 360; // unwrap across 360°
     gNode[n] = g;
@@ -176,7 +175,7 @@ export function annualSunPath(year: number, site: Site, options: SunPathOptions 
     bNode[n] = sin(steps.delta * RAD) * inverseSinXi;
     declNode[n] = steps.delta;
     eotNode[n] = steps.E;
-  }
+  });
 
   // Observer constants, Eq. 33–35.
   const latRad = latitude * RAD;
