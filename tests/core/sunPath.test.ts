@@ -56,6 +56,23 @@ describe('annual sun path agrees with the direct algorithm', () => {
   );
 });
 
+describe('annual sun path in years where the default ΔT curves most', () => {
+  test.each([1915, 1921, 2150])('in %s every hour with altitude above −1° at latitude 23.4° is within 1e-4° of the direct algorithm', (year) => {
+    const site: Site = { latitude: 23.4, longitude: 88.4, utcOffset: 5.5 };
+    const path = annualSunPath(year, site);
+    let worstAltitude = 0;
+    let worstAzimuth = 0;
+    for (let i = 0; i < path.hours; i++) {
+      const direct = sunPosition(serialToUtcMs(path.stampSerial[i] - 1 / 48, site.utcOffset), site.latitude, site.longitude);
+      if (direct.altitude <= -1) continue;
+      worstAltitude = Math.max(worstAltitude, Math.abs(direct.altitude - path.altitude[i]));
+      worstAzimuth = Math.max(worstAzimuth, angleDifference(direct.azimuth, path.azimuth[i]));
+    }
+    expect(worstAltitude).toBeLessThan(1e-4);
+    expect(worstAzimuth).toBeLessThan(1e-4);
+  });
+});
+
 describe('annual sun path layout', () => {
   const site: Site = { latitude: 40, longitude: -105, utcOffset: -7 };
 

@@ -12,7 +12,9 @@ import {
   L_TERMS,
   NUTATION_TERMS,
   R_TERMS,
+  earthPeriodicSeries,
   earthPeriodicSums,
+  nutationSeries,
   nutationSums,
 } from '../../src/core/spaTerms';
 
@@ -67,6 +69,46 @@ describe('nutation sums by angle addition', () => {
       const ours = nutationSums(t, x, { deltaPsi: 0, deltaEpsilon: 0 });
       expect(Math.abs(ours.deltaPsi - psi / 36_000_000)).toBeLessThan(1e-12);
       expect(Math.abs(ours.deltaEpsilon - eps / 36_000_000)).toBeLessThan(1e-12);
+    }
+  });
+});
+
+describe('periodic sums carried by rotation over a series of instants', () => {
+  test('the Earth series equals the single-instant sums at every one of 190 two-day steps within 1e-12 rad and AU', () => {
+    for (const tau0 of [-0.09, 0.025, 0.6]) {
+      const count = 190;
+      const step = 2 / 365_250;
+      const [L, B, R] = [new Float64Array(count), new Float64Array(count), new Float64Array(count)];
+      earthPeriodicSeries(tau0, step, count, L, B, R);
+      for (let n = 0; n < count; n++) {
+        const direct = earthPeriodicSums(tau0 + n * step, { L: 0, B: 0, R: 0 });
+        expect(Math.abs(L[n] - direct.L)).toBeLessThan(1e-12);
+        expect(Math.abs(B[n] - direct.B)).toBeLessThan(1e-12);
+        expect(Math.abs(R[n] - direct.R)).toBeLessThan(1e-12);
+      }
+    }
+  });
+
+  test('the nutation series equals the single-instant sums at every step within 1e-9° (chord of the fundamental arguments)', () => {
+    const fundamental = (t: number) => [
+      297.85036 + 445_267.11148 * t - 0.0019142 * t * t + (t * t * t) / 189_474,
+      357.52772 + 35_999.05034 * t - 0.0001603 * t * t - (t * t * t) / 300_000,
+      134.96298 + 477_198.867398 * t + 0.0086972 * t * t + (t * t * t) / 56_250,
+      93.27191 + 483_202.017538 * t - 0.0036825 * t * t + (t * t * t) / 327_270,
+      125.04452 - 1934.136261 * t + 0.0020708 * t * t + (t * t * t) / 450_000,
+    ];
+    // Years 1901, 2025 and 9000: the chord error grows with the cubic terms far from J2000.
+    for (const t0 of [-0.99, 0.25, 70]) {
+      const count = 190;
+      const step = 2 / 36_525;
+      const [psi, eps] = [new Float64Array(count), new Float64Array(count)];
+      nutationSeries(t0, step, count, fundamental(t0), fundamental(t0 + (count - 1) * step), psi, eps);
+      for (let n = 0; n < count; n++) {
+        const t = t0 + n * step;
+        const direct = nutationSums(t, fundamental(t), { deltaPsi: 0, deltaEpsilon: 0 });
+        expect(Math.abs(psi[n] - direct.deltaPsi)).toBeLessThan(1e-9);
+        expect(Math.abs(eps[n] - direct.deltaEpsilon)).toBeLessThan(1e-9);
+      }
     }
   });
 });
