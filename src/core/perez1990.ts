@@ -60,11 +60,14 @@ export interface PerezParts {
   total: number;
 }
 
-/** The ε bin (1…8) of a sky clearness value. */
+const [EDGE_1, EDGE_2, EDGE_3, EDGE_4, EDGE_5, EDGE_6, EDGE_7] = PEREZ_EPSILON_EDGES;
+
+/** The ε bin (1…8) of a sky clearness value: 1 + the number of bin edges at or below ε (bin 1 for NaN). */
 export function perezBin(epsilon: number): number {
-  let bin = 1;
-  while (bin <= PEREZ_EPSILON_EDGES.length && epsilon >= PEREZ_EPSILON_EDGES[bin - 1]) bin++;
-  return bin;
+  // Unrolled over the seven ascending edges (one comparison chain, no loop over the frozen array).
+  if (!(epsilon >= EDGE_1)) return 1;
+  if (!(epsilon >= EDGE_4)) return epsilon >= EDGE_3 ? 4 : epsilon >= EDGE_2 ? 3 : 2;
+  return epsilon >= EDGE_7 ? 8 : epsilon >= EDGE_6 ? 7 : epsilon >= EDGE_5 ? 6 : 5;
 }
 
 /**

@@ -52,7 +52,8 @@
  */
 import { RAD, wrap180 } from './angles';
 import { SunpaneError, requireFinite, requireRange } from './errors';
-import { rectangleStripArea, writeQuadHalfPlanes } from './polygon';
+import { writeQuadHalfPlanes } from './polygon';
+import { shadowPlanOf, sunlitFromPlan } from './shadowPlan';
 import { requireSkyline, skylineElevationUnchecked } from './skyline';
 import type { Fin, Overhang, Shading } from './window';
 
@@ -233,118 +234,6 @@ function overlapsLit(x0: number, x1: number, y0: number, y1: number): boolean {
   return x1 > lit0x && x0 < lit1x && y1 > lit0y && y0 < lit1y;
 }
 
-// Shadows as boxes in three coordinates (x, y and w = p·x + q·y, constant along the sun's
-// direction on the wall): shadow i is {x ∈ [bx0, bx1], y ∈ [by0, by1], w ∈ [bw0, bw1]}, with ±∞
-// for a coordinate it does not bound. See {@link sunlitFractionFromSlopes}.
-const bx0 = new Float64Array(3);
-const bx1 = new Float64Array(3);
-const by0 = new Float64Array(3);
-const by1 = new Float64Array(3);
-const bw0 = new Float64Array(3);
-const bw1 = new Float64Array(3);
-
-/**
- * Builds the lit rectangle and the shadow boxes for the current {@link slopes}; returns the number
- * of shadows that can touch the lit rectangle.
- */
-function buildShadowBoxes(width: number, height: number, shading: Shading): number {
-  const { a, b, p, q } = slopes;
-  const r = shading.revealDepth ?? 0;
-  lit0x = max(0, a * r);
-  lit1x = min(width, width + a * r);
-  lit0y = max(0, b * r);
-  lit1y = min(height, height + b * r);
-  let m = 0;
-  const oh = shading.overhang;
-  if (oh && oh.projection > 0) {
-    // Overhang: between its edge line y = H + G and that line's shadow, and between the sun lines
-    // through its two ends.
-    const y = height + oh.gap;
-    const xl = -oh.extensionLeft;
-    const xr = width + oh.extensionRight;
-    const dx = -a * oh.projection;
-    const yLow = y - b * oh.projection;
-    if (overlapsLit(min(xl, xl + dx), max(xr, xr + dx), yLow, y)) {
-      bx0[m] = -Infinity;
-      bx1[m] = Infinity;
-      by0[m] = yLow;
-      by1[m] = y;
-      bw0[m] = p * xl + q * y; // p = sin β > 0: the order of xl ≤ xr is kept
-      bw1[m] = p * xr + q * y;
-      m++;
-    }
-  }
-  const lf = shading.leftFin;
-  if (lf && lf.projection > 0) m = addFinBox(m, -lf.gap, lf, height);
-  const rf = shading.rightFin;
-  if (rf && rf.projection > 0) m = addFinBox(m, width + rf.gap, rf, height);
-  return m;
-}
-
-/** Fin at x: between its edge line and that line's shadow, and between the sun lines through its ends. */
-function addFinBox(m: number, x: number, fin: Fin, height: number): number {
-  const { a, b, p, q } = slopes;
-  const yb = -fin.extensionBelow;
-  const yt = height + fin.extensionAbove;
-  const xs = x - a * fin.projection;
-  const x0 = min(x, xs);
-  const x1 = max(x, xs);
-  if (!overlapsLit(x0, x1, yb - b * fin.projection, yt)) return m;
-  bx0[m] = x0;
-  bx1[m] = x1;
-  by0[m] = -Infinity;
-  by1[m] = Infinity;
-  const wb = p * x + q * yb;
-  const wt = p * x + q * yt;
-  bw0[m] = min(wb, wt);
-  bw1[m] = max(wb, wt);
-  return m + 1;
-}
-
-/**
- * Sunlit area / glass area for the current slopes (inputs already checked).
- *
- * Every shadow is a parallelogram with two edges along an axis and two along the sun's direction
- * on the wall, so it is the set {x ∈ X, y ∈ Y, w ∈ Ω} of intervals in the three coordinates x, y
- * and w = sin β·x − cos β sin γ·y (constant along the sun's direction): an overhang's shadow bounds
- * y and w, a fin's bounds x and w. The intersection of the lit rectangle with any group of shadows
- * is then again such a set, its intervals the intersections of theirs — a rectangle cut by a strip,
- * whose area has a closed form ({@link rectangleStripArea}). The union follows by
- * inclusion–exclusion over the ≤ 7 groups: exact, no polygon clipping (the convex clipper of
- * src/core/polygon.ts remains the independent check in the tests).
- */
-function sunlitFractionFromSlopes(width: number, height: number, shading: Shading): number {
-  const m = buildShadowBoxes(width, height, shading);
-  const litArea = lit1x > lit0x && lit1y > lit0y ? (lit1x - lit0x) * (lit1y - lit0y) : 0;
-  if (litArea === 0) return 0;
-  const { p, q } = slopes;
-  let covered = 0;
-  for (let mask = 1; mask < 1 << m; mask++) {
-    let x0 = lit0x;
-    let x1 = lit1x;
-    let y0 = lit0y;
-    let y1 = lit1y;
-    let w0 = -Infinity;
-    let w1 = Infinity;
-    let odd = false;
-    for (let i = 0; i < m; i++) {
-      if ((mask & (1 << i)) === 0) continue;
-      odd = !odd;
-      if (bx0[i] > x0) x0 = bx0[i];
-      if (bx1[i] < x1) x1 = bx1[i];
-      if (by0[i] > y0) y0 = by0[i];
-      if (by1[i] < y1) y1 = by1[i];
-      if (bw0[i] > w0) w0 = bw0[i];
-      if (bw1[i] < w1) w1 = bw1[i];
-    }
-    const area = rectangleStripArea(x0, y0, x1, y1, p, q, w0, w1);
-    covered += odd ? area : -area;
-  }
-  const shaded = covered < 0 ? 0 : covered > litArea ? litArea : covered;
-  const f = (litArea - shaded) / (width * height);
-  return f < 0 ? 0 : f > 1 ? 1 : f;
-}
-
 function requireSunAngles(sunAltitude: number, sunAzimuth: number, surfaceAzimuth: number): void {
   requireRange('sunAltitude', sunAltitude, -90, 90, '°');
   requireFinite('sunAzimuth', sunAzimuth, '°');
@@ -390,7 +279,7 @@ function sunlitKernel(width: number, height: number, shading: Shading, shades: b
 function sunlitAfterSlopes(width: number, height: number, shading: Shading, shades: boolean, sunAltitude: number, sunAzimuth: number): number {
   if (!shades) return 1; // = (W·H − 0) / (W·H): the lit rectangle is the whole glass
   if (shading.skyline && sunAltitude < skylineElevationUnchecked(shading.skyline, sunAzimuth)) return 0;
-  return sunlitFractionFromSlopes(width, height, shading);
+  return sunlitFromPlan(shadowPlanOf(width, height, shading), slopes.a, slopes.b, slopes.p, slopes.q);
 }
 
 /** Can anything shade the glass: a device with projection above 0, a reveal or a skyline? */
@@ -450,13 +339,27 @@ export function prepareShading(window: WindowOpening, shading: Shading, surfaceA
   if (shading.revealDepth !== undefined) copy.revealDepth = shading.revealDepth;
   if (shading.skyline !== undefined) copy.skyline = [...shading.skyline];
   const shades = hasShadingParts(copy);
+  const plan = shadowPlanOf(width, height, copy);
+  const skyline = copy.skyline;
+  const sectors = skyline === undefined ? 0 : skyline.length;
   return {
     shades,
     sunlit: (sunAltitude, sunAzimuth) => sunlitKernel(width, height, copy, shades, sunAltitude, sunAzimuth, surfaceAzimuth),
     sunlitInWallFrame: (sunAltitude, sunAzimuth, gamma, sinBeta, cosBeta, sinGamma, cosGamma) => {
-      // The tests of sunSlopes, in the same order, on the caller's values.
-      if (!(sunAltitude > 0) || gamma <= -90 || gamma >= 90 || !slopesFrom(sinBeta, cosBeta, sinGamma, cosGamma)) return 0;
-      return sunlitAfterSlopes(width, height, copy, shades, sunAltitude, sunAzimuth);
+      // The tests of sunSlopes and slopesFrom, in the same order, on the caller's values.
+      if (!(sunAltitude > 0) || gamma <= -90 || gamma >= 90) return 0;
+      const sz = cosBeta * cosGamma;
+      if (!(sz > 0)) return 0;
+      if (!shades) return 1;
+      if (skyline !== undefined) {
+        // skylineElevationUnchecked (src/core/skyline.ts) without its wrap for an azimuth already in 0…360.
+        if (sunAzimuth >= 0 && sunAzimuth < 360) {
+          const k = Math.floor((sunAzimuth * sectors) / 360);
+          if (sunAltitude < skyline[k >= sectors ? sectors - 1 : k]) return 0;
+        } else if (sunAltitude < skylineElevationUnchecked(skyline, sunAzimuth)) return 0;
+      }
+      const q = -cosBeta * sinGamma;
+      return sunlitFromPlan(plan, -q / sz, sinBeta / sz, sinBeta, q); // a = sx / sz, b = sy / sz (as slopesFrom)
     },
   };
 }

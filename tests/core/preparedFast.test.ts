@@ -13,7 +13,8 @@ import { RAD, wrap180 } from '../../src/core/angles';
 import { annualSeries } from '../../src/core/annual';
 import { SunpaneError } from '../../src/core/errors';
 import { prepareWindow } from '../../src/core/gain';
-import { PEREZ_1990_COMPOSITE, perezParts, perezPartsKernel } from '../../src/core/perez1990';
+import { airMassKastenYoung, airMassKastenYoungUnchecked } from '../../src/core/airMass';
+import { PEREZ_1990_COMPOSITE, PEREZ_EPSILON_EDGES, perezBin, perezParts, perezPartsKernel } from '../../src/core/perez1990';
 import { type PlaneParts, planeIrradiance, preparePlane } from '../../src/core/planeIrradiance';
 import { unionAreaInRectangle, writeQuadHalfPlanes } from '../../src/core/polygon';
 import { prepareShading, sunlitFraction } from '../../src/core/shading';
@@ -196,6 +197,25 @@ describe('Perez kernel equals perezParts', () => {
       ),
       { numRuns: 2000, seed: 10 },
     );
+  });
+});
+
+describe('unrolled and unchecked helpers equal their plain definitions', () => {
+  test('perezBin is 1 + the number of bin edges at or below ε, at every edge, either side of it, and for NaN', () => {
+    const byCount = (e: number) => 1 + PEREZ_EPSILON_EDGES.filter((edge) => e >= edge).length;
+    const values = [Number.NaN, -1, 0, 1, Infinity, ...PEREZ_EPSILON_EDGES.flatMap((e) => [e, e * (1 - 1e-15), e * (1 + 1e-15), e - 0.01, e + 0.01])];
+    for (let e = 0.9; e < 8; e += 0.001) values.push(e);
+    for (const e of values) expect(perezBin(e)).toBe(Number.isNaN(e) ? 1 : byCount(e));
+  });
+
+  test('the unchecked Kasten–Young air mass equals Eq. 3 written with Math.pow within 1e-14 relative, and the checked one is it', () => {
+    for (let alt = -10; alt <= 90; alt += 0.01) {
+      const beta = Math.max(alt, 0);
+      const eq3 = 1 / (Math.sin(beta * RAD) + 0.50572 * Math.pow(beta + 6.07995, -1.6364));
+      const m = airMassKastenYoungUnchecked(alt);
+      expect(Math.abs(m - eq3)).toBeLessThanOrEqual(1e-14 * eq3);
+      expect(airMassKastenYoung(alt)).toBe(m);
+    }
   });
 });
 
