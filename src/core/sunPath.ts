@@ -4,16 +4,21 @@
  * The Earth-fixed (slow) part of the SPA — heliocentric position, nutation, obliquity, aberration,
  * geocentric right ascension and declination, Earth–sun distance, equation of time — changes
  * smoothly, so it is computed every second day at 0 h UT (Reda & Andreas 2008, Eq. 4–30 and
- * A1–A4, by {@link spaGeocentric}) and interpolated in between by six-point (quintic) Lagrange
- * interpolation over the nodes before and after. Only the fast part is done per hour: mean sidereal
- * time (Eq. 27, exact), hour angle (Eq. 31), parallax, altitude, refraction and azimuth (Eq. 32–46).
+ * A1–A4, by {@link spaGeocentricSeries}: the periodic terms are carried from node to node by
+ * rotation, so cos and sin are called only at the first node) and interpolated in between by
+ * six-point (quintic) Lagrange interpolation over the nodes before and after, evaluated per node
+ * step as a polynomial by Horner's rule. Only the fast part is done per hour: mean sidereal time
+ * (Eq. 27, exact), hour angle (Eq. 31), parallax, altitude, refraction and azimuth (Eq. 32–46).
  *
  * Per hour nothing is allocated and few functions are called: cos and sin of the hour angle are
- * computed directly once a day and carried hour to hour by rotation; asin and atan2 are inlined
- * series (error < 1e-9 rad). The parallax step uses the vector form of the SPA's Eq. 36–41 (the
- * sun's geocentric direction scaled by its distance in Earth radii, 1/sin ξ, minus the observer's
- * position (x, 0, y)); the two are algebraically identical. tests/core/sunPath.test.ts shows agreement with {@link sunPosition}
- * within 1e-4° over full years at several latitudes.
+ * computed directly once a day and carried hour to hour by rotation; the parallax step uses the
+ * vector form of the SPA's Eq. 36–41 (the sun's geocentric direction scaled by its distance in
+ * Earth radii, 1/sin ξ, minus the observer's position (x, 0, y); algebraically identical); altitude
+ * and azimuth are atan2 of the vector's components by an inlined series (error < 1e-10 rad). The
+ * hourly work runs as short passes over the year (interpolation, vector, angles), which the engine
+ * runs much faster than one long loop body. tests/core/sunPath.test.ts shows agreement with
+ * {@link sunPosition} within 1e-4° over full years at several latitudes (measured: altitude
+ * ≤ 4e-7°, azimuth ≤ 7e-6° near the zenith).
  */
 import { DEG, RAD } from './angles';
 import { SunpaneError } from './errors';
@@ -217,8 +222,8 @@ export function annualSunPath(year: number, site: Site, options: SunPathOptions 
   for (let i = 0; i < hours; i++) {
     stampSerial[i] = startSerial + (i + 1) / 24;
     // Eq. 27 with 360.98564736629·D split as 360·frac(D) + 0.98564736629·D to keep H small and exact.
-    const days = (yearStartMs + i * MS_PER_HOUR + shiftMs) / MS_PER_DAY - DAYS_UNIX_TO_J2000; // JD − 2451545
-    const jc = days / 36_525;
+    const days = (yearStartMs + i * MS_PER_HOUR + shiftMs) * (1 / MS_PER_DAY) - DAYS_UNIX_TO_J2000; // JD − 2451545
+    const jc = days * (1 / 36_525);
     const nu0 = 280.46061837 + 360 * (days - floor(days)) + 0.98564736629 * days + jc * jc * (0.000387933 - jc / 38_710_000);
     const hourAngle = nu0 + longitude - g[i]; // Eq. 28, 31 [°], not reduced
     if (i % 24 === 0) {
@@ -313,9 +318,11 @@ function interpolateHourly(nodeValues: Float64Array, hourOffset: number, hours: 
     const c3 = f0 * w[3] + f1 * w[9] + f2 * w[15] + f3 * w[21] + f4 * w[27] + f5 * w[33];
     const c4 = f0 * w[4] + f1 * w[10] + f2 * w[16] + f3 * w[22] + f4 * w[28] + f5 * w[34];
     const c5 = f0 * w[5] + f1 * w[11] + f2 * w[17] + f3 * w[23] + f4 * w[29] + f5 * w[35];
-    const segmentEnd = HOURS_PER_STEP * (k + 1);
-    for (; i < hours && hourOffset + i < segmentEnd; i++) {
-      const p = (hourOffset + i - HOURS_PER_STEP * k) / HOURS_PER_STEP;
+    // Hours of this step: from i up to (not including) the first at or past node k + 1.
+    const end = Math.min(hours, Math.ceil(HOURS_PER_STEP * (k + 1) - hourOffset));
+    const hourOfNode = hourOffset - HOURS_PER_STEP * k;
+    for (; i < end; i++) {
+      const p = (hourOfNode + i) * (1 / HOURS_PER_STEP);
       out[i] = c0 + p * (c1 + p * (c2 + p * (c3 + p * (c4 + p * c5))));
     }
   }
