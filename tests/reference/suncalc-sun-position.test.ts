@@ -11,25 +11,11 @@
  * 1010 hPa and 10 °C, which makes the two refraction formulas nearly the same; azimuth is compared
  * through the angle between the two directions, which stays meaningful near the zenith.
  */
-import { RAD } from '../../src/core/angles';
+import { seeded, separation } from '../support/sky';
 import { sunPosition } from '../../src/core/sun';
 
 // eslint-disable-next-line @typescript-eslint/no-require-imports
 const SunCalc = require('suncalc') as { getPosition(date: Date, lat: number, lng: number): { altitude: number; azimuth: number } };
-
-function seeded(seed: number): () => number {
-  let state = seed >>> 0;
-  return () => {
-    state = (Math.imul(state, 1_664_525) + 1_013_904_223) >>> 0;
-    return state / 4_294_967_296;
-  };
-}
-
-function separation(alt1: number, az1: number, alt2: number, az2: number): number {
-  const v = (alt: number, az: number) => [Math.cos(alt * RAD) * Math.sin(az * RAD), Math.cos(alt * RAD) * Math.cos(az * RAD), Math.sin(alt * RAD)];
-  const [p, q] = [v(alt1, az1), v(alt2, az2)];
-  return (2 * Math.asin(Math.hypot(p[0] - q[0], p[1] - q[1], p[2] - q[2]) / 2)) / RAD;
-}
 
 describe('sun position agrees with suncalc 2.0.2', () => {
   test('at 2,500 random instants 1950–2100 and sites from pole to pole, above 5° altitude, within 0.03°', () => {
