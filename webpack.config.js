@@ -22,6 +22,30 @@ const OFFICE_JS = 'https://appsforoffice.microsoft.com/lib/1/hosted/office.js';
 const BUDGET_BYTES = 150 * 1024;
 const DEV_PORT = 3000;
 
+/**
+ * The registry's words — `summary`, `description`, `examples` — are documentation: the README
+ * reference and functions.json are made from them in Node, and the add-in's own code never reads
+ * them (messages are built from names, units and ranges). This TypeScript transformer drops those
+ * properties from object literals in src/registry files, so the bundle carries only what runs.
+ */
+const DOC_PROPERTIES = new Set(['summary', 'description', 'examples']);
+function dropRegistryExamples(context) {
+  const ts = require('typescript');
+  const registryDir = path.join(SRC, 'registry') + path.sep;
+  return (sourceFile) => {
+    if (!path.resolve(sourceFile.fileName).startsWith(registryDir)) return sourceFile;
+    const visit = (node) => {
+      if (ts.isObjectLiteralExpression(node)) {
+        const kept = node.properties.filter((p) => !(ts.isPropertyAssignment(p) && ts.isIdentifier(p.name) && DOC_PROPERTIES.has(p.name.text)));
+        const updated = ts.factory.updateObjectLiteralExpression(node, kept);
+        return ts.visitEachChild(updated, visit, context);
+      }
+      return ts.visitEachChild(node, visit, context);
+    };
+    return ts.visitNode(sourceFile, visit);
+  };
+}
+
 /** Loads the TypeScript registry in this Node process (fresh on every compilation, for watch mode). */
 function loadFunctionsMetadata() {
   require('ts-node').register({ transpileOnly: true, compilerOptions: { module: 'commonjs' } });
@@ -124,6 +148,7 @@ module.exports = async (_env, argv) => {
               transpileOnly: true,
               onlyCompileBundledFiles: true,
               compilerOptions: { module: 'es2020', sourceMap: true },
+              getCustomTransformers: () => ({ before: [dropRegistryExamples] }),
             },
           },
         },
