@@ -20,7 +20,7 @@
  * {@link sunPosition} within 1e-4° over full years at several latitudes (measured: altitude
  * ≤ 4e-7°, azimuth ≤ 7e-6° near the zenith).
  */
-import { DEG, RAD } from './angles';
+import { DEG, RAD, atan2Fast } from './angles';
 import { SunpaneError } from './errors';
 import { RISE_SET_ALTITUDE, requireSite, resolveSunOptions, spaGeocentricSeries } from './sun';
 import { civilToSerial, deltaTAt, hoursInYear, julianDay, requireUtcOffset, requireYear, serialToUtcMs } from './time';
@@ -45,65 +45,6 @@ const POLAR_RATIO = 0.99664719; // SPA Eq. 33–35
 const NODE_STEP_DAYS = 2;
 const HOURS_PER_STEP = 24 * NODE_STEP_DAYS;
 const EARTH_RADIUS_M = 6_378_140;
-
-/*
- * Inverse trigonometry for the hourly loop, inlined polynomials instead of Math.asin / Math.atan2
- * (which the engine calls out of line). Accuracy (tests/core/sunPath.test.ts): below 1e-9 rad, i.e.
- * 6e-8° — three orders of magnitude under the 1e-4° this path must keep.
- */
-/**
- * asin z for |z| ≤ 0.5 by its Taylor series Σ c_n z^(2n+1), c_n = (2n)! / (4^n (n!)² (2n + 1)), to
- * z²⁵ (truncation error < 1e-10); the coefficients written as exact fractions.
- */
-function asinSmall(z: number): number {
-  const z2 = z * z;
-  let sum = 676_039 / 104_857_600; // c12
-  sum = 88_179 / 12_058_624 + z2 * sum;
-  sum = 46_189 / 5_505_024 + z2 * sum;
-  sum = 12_155 / 1_245_184 + z2 * sum;
-  sum = 6435 / 557_056 + z2 * sum;
-  sum = 143 / 10_240 + z2 * sum;
-  sum = 231 / 13_312 + z2 * sum;
-  sum = 63 / 2816 + z2 * sum;
-  sum = 35 / 1152 + z2 * sum;
-  sum = 5 / 112 + z2 * sum;
-  sum = 3 / 40 + z2 * sum;
-  sum = 1 / 6 + z2 * sum; // c1
-  return z * (1 + z2 * sum);
-}
-
-/**
- * asin x [rad] for x in [−1, 1] (clamped): the series for |x| ≤ 0.5, else
- * asin x = ±(π/2 − 2 asin √((1 − |x|)/2)). Error below 5e-10 rad.
- */
-export function asinFast(x: number): number {
-  const ax = x < 0 ? -x : x;
-  if (ax <= 0.5) return asinSmall(x);
-  const r = Math.PI / 2 - 2 * asinSmall(sqrt((1 - (ax > 1 ? 1 : ax)) / 2));
-  return x < 0 ? -r : r;
-}
-
-/** atan t for 0 ≤ t ≤ 1: above tan 15°, atan t = 30° + atan((√3 t − 1)/(√3 + t)); then the series to u¹⁷ (|u| ≤ tan 15°, error < 1e-11). */
-function atanUnit(t: number): number {
-  let base = 0;
-  if (t > 0.2679491924311227) {
-    // tan 15° = 2 − √3; √3 = 1.7320508075688772
-    t = (1.7320508075688772 * t - 1) / (1.7320508075688772 + t);
-    base = Math.PI / 6;
-  }
-  const u2 = t * t;
-  return base + t * (1 + u2 * (-1 / 3 + u2 * (1 / 5 + u2 * (-1 / 7 + u2 * (1 / 9 + u2 * (-1 / 11 + u2 * (1 / 13 + u2 * (-1 / 15 + u2 / 17))))))));
-}
-
-/** atan2(y, x) [rad] in [−π, π] as Math.atan2, but 0 when both are ±0. Error below 1e-10 rad. */
-export function atan2Fast(y: number, x: number): number {
-  const ax = x < 0 ? -x : x;
-  const ay = y < 0 ? -y : y;
-  if (ax === 0 && ay === 0) return 0;
-  let r = ay <= ax ? atanUnit(ay / ax) : Math.PI / 2 - atanUnit(ax / ay);
-  if (x < 0) r = Math.PI - r;
-  return y < 0 ? -r : r;
-}
 
 /** One year of hourly sun positions at a site. */
 export interface SunPathYear {

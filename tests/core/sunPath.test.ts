@@ -5,7 +5,6 @@
  */
 import { SunpaneError } from '../../src/core/errors';
 import { annualSunPath, sunPosition } from '../../src/core/sun';
-import { asinFast, atan2Fast } from '../../src/core/sunPath';
 import { civilToSerial, serialToUtcMs } from '../../src/core/time';
 import type { Site } from '../../src/core/window';
 
@@ -120,27 +119,3 @@ describe('annual sun path layout', () => {
   });
 });
 
-describe('inverse trigonometry of the hourly loop', () => {
-  test('asinFast matches Math.asin within 1e-9 rad over [−1, 1]', () => {
-    let worst = 0;
-    for (let x = -1; x <= 1; x += 1 / 4096) worst = Math.max(worst, Math.abs(asinFast(x) - Math.asin(x)));
-    for (const x of [-1, -0.5, 0.5, 1, 0.4999999, 0.5000001]) worst = Math.max(worst, Math.abs(asinFast(x) - Math.asin(x)));
-    expect(worst).toBeLessThan(1e-9);
-  });
-
-  test('atan2Fast matches Math.atan2 within 1e-9 rad around the circle and at every octant edge', () => {
-    let worst = 0;
-    for (let k = 0; k < 7200; k++) {
-      const a = (k / 7200) * 2 * Math.PI - Math.PI + 1e-7;
-      for (const r of [1e-6, 1, 2.3e4]) {
-        const [y, x] = [r * Math.sin(a), r * Math.cos(a)];
-        worst = Math.max(worst, Math.abs(atan2Fast(y, x) - Math.atan2(y, x)));
-      }
-    }
-    for (const [y, x] of [[1, 1], [-1, 1], [1, -1], [-1, -1], [0, 1], [1, 0], [-1, 0], [0.2679491924311227, 1]]) {
-      worst = Math.max(worst, Math.abs(atan2Fast(y, x) - Math.atan2(y, x)));
-    }
-    expect(worst).toBeLessThan(1e-9);
-    expect(atan2Fast(0, 0)).toBe(0);
-  });
-});
