@@ -2,7 +2,7 @@
  * Irradiance on a window plane from direct normal and diffuse horizontal irradiance: beam, sky
  * diffuse (isotropic, Hay–Davies or Perez 1990) and ground-reflected parts.
  */
-import { airMassKastenYoungUnchecked } from './airMass';
+import { airMassKastenYoungFromSine } from './airMass';
 import { RAD } from './angles';
 import { SunpaneError, requireRange } from './errors';
 import { extraterrestrialSpencer, requireDayOfYear } from './extraterrestrial';
@@ -151,7 +151,7 @@ function planeKernel(out: PlaneParts, p: PlaneConstants, dni: number, dhi: numbe
     const rb = (cosIncidence > 0 ? cosIncidence : 0) / (sinAltitude > COS_85 ? sinAltitude : COS_85);
     sky = dhi * ((1 - ai) * p.isotropicView + ai * rb); // D&B Eq. 2.16.4
   } else {
-    sky = perezPartsKernel(p.perez, p.isotropicView, p.sinTilt, dhi, dni, dniExtra, 90 - altitude, sinAltitude, airMassKastenYoungUnchecked(altitude), cosIncidence).total;
+    sky = perezPartsKernel(p.perez, p.isotropicView, p.sinTilt, dhi, dni, dniExtra, 90 - altitude, sinAltitude, airMassKastenYoungFromSine(altitude, sinAltitude), cosIncidence).total;
   }
   sky *= p.skyViewFactor;
   const ground = (ghi * p.albedo * p.oneMinusCosTilt) / 2; // D&B Eq. 2.15.1

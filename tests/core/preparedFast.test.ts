@@ -10,10 +10,10 @@
  */
 import fc from 'fast-check';
 import { RAD, wrap180 } from '../../src/core/angles';
-import { annualSeries } from '../../src/core/annual';
+import { annualSeries, wrapDifference180 } from '../../src/core/annual';
 import { SunpaneError } from '../../src/core/errors';
 import { prepareWindow } from '../../src/core/gain';
-import { airMassKastenYoung, airMassKastenYoungUnchecked } from '../../src/core/airMass';
+import { airMassKastenYoung, airMassKastenYoungFromSine, airMassKastenYoungUnchecked } from '../../src/core/airMass';
 import { PEREZ_1990_COMPOSITE, PEREZ_EPSILON_EDGES, perezBin, perezParts, perezPartsKernel } from '../../src/core/perez1990';
 import { type PlaneParts, planeIrradiance, preparePlane } from '../../src/core/planeIrradiance';
 import { unionAreaInRectangle, writeQuadHalfPlanes } from '../../src/core/polygon';
@@ -201,6 +201,17 @@ describe('Perez kernel equals perezParts', () => {
 });
 
 describe('unrolled and unchecked helpers equal their plain definitions', () => {
+  test('the hourly angle wrap gives the very number wrap180 gives, at the edges and over random differences', () => {
+    const edges = [0, -0, 180, -180, 180.0000000001, -180.0000000001, 359.9999999999, -359.9999999999, 360, -360, 720, -1e-14, 1e-14, -5e-324, 90, -90, 270, -270];
+    for (const d of edges) expect(Object.is(wrapDifference180(d), wrap180(d))).toBe(true);
+    fc.assert(
+      fc.property(fc.double({ min: -1000, max: 1000, noNaN: true }), (d) => {
+        expect(Object.is(wrapDifference180(d), wrap180(d))).toBe(true);
+      }),
+      { numRuns: 5000, seed: 14 },
+    );
+  });
+
   test('perezBin is 1 + the number of bin edges at or below ε, at every edge, either side of it, and for NaN', () => {
     const byCount = (e: number) => 1 + PEREZ_EPSILON_EDGES.filter((edge) => e >= edge).length;
     const values = [Number.NaN, -1, 0, 1, Infinity, ...PEREZ_EPSILON_EDGES.flatMap((e) => [e, e * (1 - 1e-15), e * (1 + 1e-15), e - 0.01, e + 0.01])];
@@ -215,7 +226,16 @@ describe('unrolled and unchecked helpers equal their plain definitions', () => {
       const m = airMassKastenYoungUnchecked(alt);
       expect(Math.abs(m - eq3)).toBeLessThanOrEqual(1e-14 * eq3);
       expect(airMassKastenYoung(alt)).toBe(m);
+      if (alt > 0) expect(airMassKastenYoungFromSine(alt, Math.sin(alt * RAD))).toBe(m);
     }
+    // Random altitudes between the grid points and at the series' nodes and midpoints (90/256° apart).
+    fc.assert(
+      fc.property(fc.oneof(fc.double({ min: 0, max: 90, noNaN: true }), fc.integer({ min: 0, max: 512 }).map((k) => (k * 90) / 512)), (alt) => {
+        const eq3 = 1 / (Math.sin(alt * RAD) + 0.50572 * Math.pow(alt + 6.07995, -1.6364));
+        expect(Math.abs(airMassKastenYoungUnchecked(alt) - eq3)).toBeLessThanOrEqual(1e-14 * eq3);
+      }),
+      { numRuns: 5000, seed: 13 },
+    );
   });
 });
 
