@@ -188,16 +188,22 @@ export function shgcCurve(glazing: Glazing): ShgcCurve {
     diffuse = hemisphericalAverage(model);
   }
   const count = Math.round(90 / CURVE_STEP);
-  const lookup = new Float64Array(count + 2);
-  for (let k = 0; k < count; k++) lookup[k] = model(k * CURVE_STEP);
-  // lookup[count] (90°) and lookup[count + 1] stay 0.
+  // The 0.1° table is filled on first use of each node (NaN = not yet worked out): a year of one
+  // window visits only the angles its sun reaches, and the values are the same model(k · 0.1°).
+  const lookup = new Float64Array(count + 2).fill(Number.NaN, 0, count);
+  // lookup[count] (90°) and lookup[count + 1] are 0.
+  lookup[0] = model(0);
   const atAngle = (incidence: number): number => {
     if (!(incidence >= 0 && incidence <= 180)) requireIncidence(incidence);
     if (incidence >= 90) return 0;
     const u = incidence / CURVE_STEP;
     const k = u | 0;
     const f = u - k;
-    return lookup[k] + f * (lookup[k + 1] - lookup[k]);
+    let lo = lookup[k];
+    if (Number.isNaN(lo)) lo = lookup[k] = model(k * CURVE_STEP);
+    let hi = lookup[k + 1];
+    if (Number.isNaN(hi)) hi = lookup[k + 1] = model((k + 1) * CURVE_STEP);
+    return lo + f * (hi - lo);
   };
   return { atAngle, diffuse, normal: lookup[0] };
 }

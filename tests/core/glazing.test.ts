@@ -6,6 +6,7 @@
 import fc from 'fast-check';
 import { SunpaneError } from '../../src/core/errors';
 import {
+  CURVE_STEP,
   diffuseShgc,
   diffuseShgcFromTable,
   glassArea,
@@ -155,5 +156,31 @@ describe('SHGC curve, interior attenuation and glass area', () => {
     expectError(() => glassArea(0, 1, 0.1), 'width');
     expectError(() => glassArea(1, -1, 0.1), 'height');
     expectError(() => glassArea(1, 1, 1), 'frameFraction');
+  });
+});
+
+describe('SHGC curve lookup filled on first use', () => {
+  test('gives the linear interpolation between the exact model at the neighbouring 0.1° nodes, whatever order the angles come in', () => {
+    const physical = shgcCurve({ shgc: 0.6, panes: 2 });
+    const table = { angles: [0, 40, 60, 80], values: [0.7, 0.68, 0.55, 0.2] };
+    const tabled = shgcCurve({ shgc: 0.7, panes: 1, angleTable: table });
+    fc.assert(
+      fc.property(fc.double({ min: 0, max: 89.99, noNaN: true }), (theta) => {
+        const k = Math.floor(theta / CURVE_STEP);
+        const f = theta / CURVE_STEP - k;
+        for (const [curve, exact] of [
+          [physical, (a: number) => shgcAtAngle(0.6, 2, a)],
+          [tabled, (a: number) => shgcFromTable(table, a)],
+        ] as const) {
+          const lo = exact(k * CURVE_STEP);
+          const hi = exact((k + 1) * CURVE_STEP);
+          expect(Math.abs(curve.atAngle(theta) - (lo + f * (hi - lo)))).toBeLessThanOrEqual(1e-15);
+        }
+      }),
+      { numRuns: 2000, seed: 31 },
+    );
+    expect(physical.atAngle(90)).toBe(0);
+    expect(physical.atAngle(89.99999)).toBeGreaterThanOrEqual(0);
+    expect(physical.normal).toBe(shgcAtAngle(0.6, 2, 0));
   });
 });
