@@ -31,6 +31,10 @@ module.exports = tseslint.config(
     rules: restrict(['../functions/*', '../taskpane/*', '../cli/*', ...nodeBuiltinPatterns], 'src/demo is invented data on top of src/core only.'),
   },
   {
+    files: ['src/schedule/**/*.ts'],
+    rules: restrict(['../functions/*', '../taskpane/*', '../cli/*', '../demo/*', '../registry/*', ...nodeBuiltinPatterns], 'src/schedule is the shared window-schedule format on top of src/core only.'),
+  },
+  {
     files: ['src/functions/**/*.ts'],
     rules: restrict(['../taskpane/*', '../cli/*', ...nodeBuiltinPatterns], 'Adapters never import each other (DESIGN.md).'),
   },

@@ -1,6 +1,7 @@
 /**
  * `sunpane schedule`: the annual summary of many windows, one per row of a CSV file or of the
- * first sheet of a workbook, written as CSV or as a workbook table with SUM/MAX totals.
+ * first sheet of a workbook, written as CSV or as a workbook table with SUM/MAX totals. The
+ * columns are the task pane's (src/schedule/columns.ts); blanks take the window file's defaults.
  */
 import * as fs from 'node:fs';
 import * as path from 'node:path';
@@ -22,49 +23,9 @@ import { weatherColumns } from './table';
 import { describeMissing, readWeatherFile } from './weatherCsv';
 import { windowFromJson } from './windowJson';
 import { NUMBER_FORMATS, type TableCell, addDataTable, address, freezeAt, newWorkbook, saveWorkbook, serialToCellDate, setFormula, setLabel } from './workbook';
+import { type MatchedHeaders, type ScheduleColumn, SCHEDULE_COLUMNS, SITE_KEY, columnForHeader, columnsForPath, headerKey, matchHeaders, requiredColumns, splitListCell } from '../schedule/columns';
 
-/** One schedule column: header (matched case-insensitively), where it goes in the window JSON, and its help line. */
-interface ScheduleColumn {
-  header: string;
-  /** JSON path in the window file format (see windowJson.ts). */
-  path: string;
-  kind: 'text' | 'number' | 'list';
-  help: string;
-}
-
-/** The schedule's columns, in the order `--help` lists them. */
-export const SCHEDULE_COLUMNS: readonly ScheduleColumn[] = [
-  { header: 'name', path: 'name', kind: 'text', help: 'window label (required)' },
-  { header: 'site', path: 'site', kind: 'text', help: 'an example site id, instead of latitude/longitude/utcOffset' },
-  { header: 'latitude', path: 'site.latitude', kind: 'number', help: '[°] north positive' },
-  { header: 'longitude', path: 'site.longitude', kind: 'number', help: '[°] east positive' },
-  { header: 'utcOffset', path: 'site.utcOffset', kind: 'number', help: '[h] standard time, east positive' },
-  { header: 'elevation', path: 'site.elevation', kind: 'number', help: '[m] (0)' },
-  { header: 'year', path: 'year', kind: 'number', help: 'calendar year (required)' },
-  { header: 'surfaceAzimuth', path: 'surfaceAzimuth', kind: 'number', help: '[°] facing, clockwise from north (required)' },
-  { header: 'surfaceTilt', path: 'surfaceTilt', kind: 'number', help: '[°] 90 = vertical (90)' },
-  { header: 'width', path: 'width', kind: 'number', help: '[m] rough opening (required)' },
-  { header: 'height', path: 'height', kind: 'number', help: '[m] rough opening (required)' },
-  { header: 'frameFraction', path: 'frameFraction', kind: 'number', help: 'frame share of the opening (0)' },
-  { header: 'shgc', path: 'glazing.shgc', kind: 'number', help: 'SHGC at normal incidence (required)' },
-  { header: 'panes', path: 'glazing.panes', kind: 'number', help: '1…4 (2)' },
-  { header: 'interiorAttenuation', path: 'glazing.interiorAttenuation', kind: 'number', help: 'blinds/curtains 0…1 (1)' },
-  { header: 'overhangProjection', path: 'shading.overhang.projection', kind: 'number', help: '[m] (no overhang when blank)' },
-  { header: 'overhangGap', path: 'shading.overhang.gap', kind: 'number', help: '[m] above the window head (0)' },
-  { header: 'overhangExtensionLeft', path: 'shading.overhang.extensionLeft', kind: 'number', help: '[m] beyond the left jamb (0)' },
-  { header: 'overhangExtensionRight', path: 'shading.overhang.extensionRight', kind: 'number', help: '[m] beyond the right jamb (0)' },
-  { header: 'finProjection', path: 'shading.fins.projection', kind: 'number', help: '[m] a fin at each jamb (no fins when blank)' },
-  { header: 'finGap', path: 'shading.fins.gap', kind: 'number', help: '[m] from the jamb (0)' },
-  { header: 'finExtensionAbove', path: 'shading.fins.extensionAbove', kind: 'number', help: '[m] above the head (0)' },
-  { header: 'finExtensionBelow', path: 'shading.fins.extensionBelow', kind: 'number', help: '[m] below the sill (0)' },
-  { header: 'revealDepth', path: 'shading.revealDepth', kind: 'number', help: '[m] glass behind the wall face' },
-  { header: 'skyline', path: 'shading.skyline', kind: 'list', help: '[°] elevation by equal azimuth sectors from north, space-separated' },
-  { header: 'groundAlbedo', path: 'groundAlbedo', kind: 'number', help: 'ground reflectance (0.2)' },
-  { header: 'skyModel', path: 'skyModel', kind: 'text', help: 'isotropic | hayDavies | perez1990 (perez1990)' },
-  { header: 'linkeTurbidity', path: 'weather.linkeTurbidity', kind: 'list', help: 'clear sky by turbidity: 1 or 12 values' },
-  { header: 'tauB', path: 'weather.tauB', kind: 'list', help: 'ASHRAE clear sky: 1 or 12 values, with tauD' },
-  { header: 'tauD', path: 'weather.tauD', kind: 'list', help: 'ASHRAE clear sky: 1 or 12 values, with tauB' },
-];
+const SCHEDULE_FLAGS = { in: true, weather: true, dni: true, dhi: true, ghi: true, out: true, help: false } as const;
 
 export const SCHEDULE_HELP = `usage: sunpane schedule --in FILE.csv|FILE.xlsx [--weather FILE.csv (--dni COL --dhi COL | --ghi COL)] --out FILE.xlsx|FILE.csv
 
@@ -74,24 +35,32 @@ Works out each window's year and writes one summary row per window: annual and m
   --in FILE      the window schedule: a CSV file, or the first sheet of a workbook; a header row,
                  then one row per window; blank cells take the default (in brackets below)
   --weather FILE hourly weather for every window (as in \`sunpane table --help\`); without it each
-                 row needs a clear sky (linkeTurbidity, or tauB and tauD) or an example site
+                 row needs a clear sky (Linke turbidity, or both optical depths) or an example site
   --out FILE     .csv or .xlsx (a table with SUM/MAX totals)
   --help         this text
 
-Schedule columns (header names, any case; only name, year, surfaceAzimuth, width, height, shgc and
-a site are required):
-${SCHEDULE_COLUMNS.map((c) => `  ${c.header.padEnd(24)}${c.help}`).join('\n')}
+Schedule columns, the same as in the task pane (any case; the unit in brackets may be left out;
+the older name is accepted too). Required: ${requiredColumns('cli').map((c) => c.header).join(', ')},
+and a place: Site, or Latitude, Longitude and UTC offset. Lists are space-separated.
+  ${'header'.padEnd(25)}${'or'.padEnd(24)}meaning (blank means)
+${SCHEDULE_COLUMNS.map(helpLine).join('\n')}
 
 Example: examples/windows.csv. Errors name the row and the column.
 Exit codes: 0 done, 1 bad input, 2 wrong usage.`;
 
-const SCHEDULE_FLAGS = { in: true, weather: true, dni: true, dhi: true, ghi: true, out: true, help: false } as const;
+function helpLine(c: ScheduleColumn): string {
+  const older = c.aliases.filter((a) => headerKey(a) !== headerKey(c.header)).join(', ');
+  return `  ${c.header.padEnd(25)}${older.padEnd(24)}${c.help}`;
+}
 
-/** One schedule row as read: where it is (for messages) and its cells by lower-case header. */
+/** One schedule row as read: where it is (for messages) and its cells by column key. */
 export interface ScheduleRow {
   /** `line 4` (CSV) or `row 4` (sheet). */
   where: string;
+  /** Cell values by column key ({@link ScheduleColumn.key}). */
   cells: Map<string, string | number>;
+  /** The headers as written in the file, by column key (messages use the user's own words). */
+  headers: ReadonlyMap<string, string>;
 }
 
 function setPath(obj: Record<string, unknown>, dotted: string, value: unknown): void {
@@ -104,25 +73,38 @@ function setPath(obj: Record<string, unknown>, dotted: string, value: unknown): 
   o[keys[keys.length - 1]] = value;
 }
 
-function columnOfPath(p: string): ScheduleColumn | undefined {
-  const bare = p.replace(/\[\d+\]$/, '').replace(/^shading\.(leftFin|rightFin)\./, 'shading.fins.');
-  return SCHEDULE_COLUMNS.find((c) => c.path === bare);
+/** How a column is named in a message: as written in the file, else by its header. */
+function columnName(column: ScheduleColumn, row: ScheduleRow): string {
+  return `column "${row.headers.get(column.key) ?? column.header}"`;
 }
 
-function readCellValue(column: ScheduleColumn, raw: string | number, where: string): unknown {
+/** The column a window-file path came from: one the file has if possible, else the first that fills it. */
+function columnOfPath(p: string, row: ScheduleRow): ScheduleColumn | undefined {
+  const candidates = columnsForPath(p.replace(/\[\d+\]$/, ''));
+  return candidates.find((c) => row.headers.has(c.key)) ?? candidates[0];
+}
+
+function readCellValue(column: ScheduleColumn, raw: string | number, row: ScheduleRow): unknown {
   if (column.kind === 'text') return String(raw).trim();
-  if (typeof raw === 'number') return column.kind === 'list' ? [raw] : raw;
-  const text = raw.trim();
-  if (column.kind === 'list') {
-    return text.split(/[\s;]+/).filter((t) => t !== '').map((t) => {
-      const n = Number(t);
-      if (!Number.isFinite(n)) throw new CliInputError(`${where}, column ${column.header}: "${t}" is not a number`);
-      return n;
-    });
+  const number = (t: string) => {
+    const n = Number(t);
+    if (!Number.isFinite(n)) throw new CliInputError(`${row.where}, ${columnName(column, row)}: "${t}" is not a number`);
+    return n;
+  };
+  if (column.kind === 'list') return splitListCell(raw).map(number);
+  return typeof raw === 'number' ? raw : number(raw.trim());
+}
+
+/**
+ * A fin given only the shared gap or extensions while the other side has a depth is no fin: the
+ * both-sides columns apply to each fin that has a depth.
+ */
+function dropFinsWithoutDepth(shading: Record<string, unknown> | undefined): void {
+  if (!shading) return;
+  const hasDepth = (side: string) => (shading[side] as Record<string, unknown> | undefined)?.projection !== undefined;
+  for (const [side, other] of [['leftFin', 'rightFin'], ['rightFin', 'leftFin']]) {
+    if (shading[side] && !hasDepth(side) && hasDepth(other)) delete shading[side];
   }
-  const n = Number(text);
-  if (!Number.isFinite(n)) throw new CliInputError(`${where}, column ${column.header}: "${text}" is not a number`);
-  return n;
 }
 
 /**
@@ -131,20 +113,18 @@ function readCellValue(column: ScheduleColumn, raw: string | number, where: stri
  */
 export function windowFromRow(row: ScheduleRow): { spec: WindowSpec; hasWeather: boolean } {
   const json: Record<string, unknown> = {};
+  const label = () => (typeof json.name === 'string' && json.name !== '' ? ` ("${json.name}")` : '');
   for (const column of SCHEDULE_COLUMNS) {
-    const raw = row.cells.get(column.header.toLowerCase());
-    if (raw === undefined || raw === '') continue;
-    setPath(json, column.path, readCellValue(column, raw, row.where));
+    const raw = row.cells.get(column.key);
+    if (raw === undefined || (typeof raw === 'string' && raw.trim() === '')) continue;
+    const value = readCellValue(column, raw, row);
+    // Site comes before the coordinates in the column list, so a site id is already set here.
+    if (column.paths[0].startsWith('site.') && typeof json.site === 'string') throw placeTwice(row, label());
+    for (const p of column.paths) setPath(json, p, value);
   }
   const weather = json.weather as Record<string, unknown> | undefined;
   if (weather) weather.kind = weather.linkeTurbidity !== undefined ? 'ineichenClearSky' : 'ashraeClearSky';
-  const shading = json.shading as Record<string, unknown> | undefined;
-  if (shading?.fins) {
-    shading.leftFin = shading.fins;
-    shading.rightFin = shading.fins;
-    delete shading.fins;
-  }
-  const label = typeof json.name === 'string' ? ` ("${json.name}")` : '';
+  dropFinsWithoutDepth(json.shading as Record<string, unknown> | undefined);
   try {
     const file = windowFromJson(json);
     if (file.hasWeather) validateWindowSpec(file.spec);
@@ -152,35 +132,53 @@ export function windowFromRow(row: ScheduleRow): { spec: WindowSpec; hasWeather:
   } catch (err) {
     if (err instanceof SunpaneError) {
       if (err.argument === 'site' && (err.value === undefined || err.value === null)) {
-        throw new CliInputError(`${row.where}${label}: no site: fill the column site (an example site id) or latitude, longitude and utcOffset`);
+        throw new CliInputError(`${row.where}${label()}: no site: fill the column Site (an example site id) or Latitude, Longitude and UTC offset`);
       }
-      const column = columnOfPath(err.argument === 'glazing' ? 'glazing.shgc' : err.argument);
+      const column = columnOfPath(err.argument === 'glazing' ? 'glazing.shgc' : err.argument, row);
       const blank = err.value === undefined || err.value === null;
-      const what = column ? `column ${column.header}` : `field ${err.argument}`;
-      throw new CliInputError(`${row.where}${label}, ${what}: ${blank && column ? 'is blank but required' : err.message}`);
+      if (!column) throw new CliInputError(`${row.where}${label()}, field ${err.argument}: ${err.message}`);
+      const missing = blank ? (row.headers.has(column.key) ? 'is blank but required' : 'is required but the schedule has no such column') : err.message;
+      throw new CliInputError(`${row.where}${label()}, ${columnName(column, row)}: ${missing}`);
     }
     throw err;
   }
 }
 
-function checkHeader(headers: string[], where: string): void {
-  const known = new Set(SCHEDULE_COLUMNS.map((c) => c.header.toLowerCase()));
-  for (const h of headers) {
-    if (h !== '' && !known.has(h.toLowerCase())) throw new CliInputError(`${where}: unknown column "${h}" (see \`sunpane schedule --help\` for the columns)`);
+function placeTwice(row: ScheduleRow, label: string): CliInputError {
+  return new CliInputError(`${row.where}${label}: give either an example site (column "${row.headers.get(SITE_KEY) ?? 'Site'}") or its own latitude, longitude, UTC offset and elevation, not both`);
+}
+
+/** Matches the header row; unknown or repeated headers and a missing label column are errors. */
+function readHeader(headers: readonly string[], where: string): MatchedHeaders {
+  const matched = matchHeaders(headers);
+  if (matched.unknown.length) {
+    const names = matched.unknown.map((u) => `"${u.header}"`).join(', ');
+    throw new CliInputError(`${where}: unknown column${matched.unknown.length > 1 ? 's' : ''} ${names} (see \`sunpane schedule --help\` for the columns)`);
   }
-  if (!headers.some((h) => h.toLowerCase() === 'name')) throw new CliInputError(`${where}: the header row has no "name" column`);
+  if (matched.repeated.length) {
+    const r = matched.repeated[0];
+    const first = matched.written.get(columnForHeader(r.header)!.key);
+    throw new CliInputError(`${where}: columns "${first}" and "${r.header}" are the same column; keep one`);
+  }
+  const label = SCHEDULE_COLUMNS[0];
+  if (!matched.written.has(label.key)) throw new CliInputError(`${where}: the header row has no "${label.header}" column`);
+  return matched;
+}
+
+function rowCells(matched: MatchedHeaders, values: readonly (string | number)[]): Map<string, string | number> {
+  const cells = new Map<string, string | number>();
+  matched.columns.forEach((c, k) => {
+    if (c) cells.set(c.key, values[k] ?? '');
+  });
+  return cells;
 }
 
 /** Reads a CSV schedule. */
 export function scheduleFromCsv(text: string, file: string): ScheduleRow[] {
   const lines = parseCsv(text);
   if (lines.length === 0) throw new CliInputError(`${file} is empty: expected a header row and one row per window`);
-  const headers = lines[0].fields;
-  checkHeader(headers, `${file} line ${lines[0].line}`);
-  return lines.slice(1).map((l) => ({
-    where: `${file} line ${l.line}`,
-    cells: new Map(headers.map((h, k) => [h.toLowerCase(), l.fields[k] ?? ''] as [string, string])),
-  }));
+  const matched = readHeader(lines[0].fields, `${file} line ${lines[0].line}`);
+  return lines.slice(1).map((l) => ({ where: `${file} line ${l.line}`, cells: rowCells(matched, l.fields), headers: matched.written }));
 }
 
 function plainCellValue(v: ExcelJS.CellValue): string | number {
@@ -207,14 +205,13 @@ export async function scheduleFromXlsx(file: string): Promise<ScheduleRow[]> {
   const headerRow = ws.getRow(1);
   const headers: string[] = [];
   headerRow.eachCell({ includeEmpty: true }, (cell, col) => (headers[col - 1] = String(plainCellValue(cell.value)).trim()));
-  checkHeader(headers, `${file} sheet "${ws.name}" row 1`);
+  const matched = readHeader(headers, `${file} sheet "${ws.name}" row 1`);
   const rows: ScheduleRow[] = [];
   for (let r = 2; r <= ws.rowCount; r++) {
     const row = ws.getRow(r);
-    const cells = new Map<string, string | number>();
-    headers.forEach((h, k) => cells.set(h.toLowerCase(), plainCellValue(row.getCell(k + 1).value)));
+    const cells = rowCells(matched, headers.map((_, k) => plainCellValue(row.getCell(k + 1).value)));
     if ([...cells.values()].every((v) => v === '')) continue;
-    rows.push({ where: `${file} sheet "${ws.name}" row ${r}`, cells });
+    rows.push({ where: `${file} sheet "${ws.name}" row ${r}`, cells, headers: matched.written });
   }
   return rows;
 }

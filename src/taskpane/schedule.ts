@@ -1,69 +1,39 @@
 /**
- * The window schedule: many windows read from an Excel table, one row per window, each run for the
- * whole year and summarised in one row. The form supplies everything a row leaves out (place,
- * glass model, sky and weather, year); a row's columns override it.
- *
- * Column headers (our own; case, spaces and units in brackets do not matter):
- *   Window            label of the window (required)
- *   Faces             bearing the glass faces, ° from north (required)
- *   Width, Height     opening size, m (required)
- *   Tilt              °; Frame share; SHGC; Panes; Blind factor (inside attenuation)
- *   Overhang depth, Overhang gap, Overhang reach (past each jamb), m
- *   Left fin depth, Right fin depth, Fin gap (from the jamb), m
- *   Set-back (glass behind the wall face), m
- *   Latitude, Longitude, UTC offset, Elevation, Ground reflectance
+ * The window schedule in the pane: many windows read from an Excel table, one row per window, each
+ * run for the whole year and summarised in one row. The columns are the command line's too
+ * (src/schedule/columns.ts: headers, older names accepted, what each fills). The form supplies
+ * everything a row leaves blank (place, glass model, sky and weather, year); a row's cells
+ * override it. A Site cell fills the place from an example site; a Skyline cell gives the row its
+ * own skyline; a Linke turbidity or optical-depth cell switches the row to that clear sky.
  * Any row with a missing or bad value is reported by row and column, and nothing is written until
  * every row is valid.
  */
 import { SunpaneError } from '../core/errors';
 import type { WindowSpec } from '../core/window';
-import { type FormValues, fieldForArgument } from './fields';
-import { type SheetData, type SpecValidator, buildWindowSpec } from './spec';
+import { EXAMPLE_SITES } from '../demo/sites';
+import { SCHEDULE_COLUMNS, SITE_KEY, SKYLINE_KEY, type ScheduleColumn, columnForHeader, headerKey, matchHeaders, requiredColumns } from '../schedule/columns';
+import { FIELDS, type FieldDef, type FormValues, applyExampleSite, fieldForArgument } from './fields';
+import { type SheetData, type SpecValidator, buildWindowSpec, readListText } from './spec';
 
-/** One schedule column: our header, the form boxes it fills, and whether a row must give it. */
-export interface ScheduleColumn {
-  header: string;
-  /** Form field ids it sets (an overhang reach sets both sides). */
-  fields: readonly string[];
-  required?: boolean;
-}
-
-export const SCHEDULE_COLUMNS: readonly ScheduleColumn[] = [
-  { header: 'Window', fields: ['windowName'], required: true },
-  { header: 'Faces', fields: ['surfaceAzimuth'], required: true },
-  { header: 'Width', fields: ['width'], required: true },
-  { header: 'Height', fields: ['height'], required: true },
-  { header: 'Tilt', fields: ['surfaceTilt'] },
-  { header: 'Frame share', fields: ['frameFraction'] },
-  { header: 'SHGC', fields: ['shgc'] },
-  { header: 'Panes', fields: ['panes'] },
-  { header: 'Blind factor', fields: ['interiorAttenuation'] },
-  { header: 'Overhang depth', fields: ['overhangProjection'] },
-  { header: 'Overhang gap', fields: ['overhangGap'] },
-  { header: 'Overhang reach', fields: ['overhangExtensionLeft', 'overhangExtensionRight'] },
-  { header: 'Left fin depth', fields: ['leftFinProjection'] },
-  { header: 'Right fin depth', fields: ['rightFinProjection'] },
-  { header: 'Fin gap', fields: ['leftFinGap', 'rightFinGap'] },
-  { header: 'Set-back', fields: ['revealDepth'] },
-  { header: 'Latitude', fields: ['latitude'] },
-  { header: 'Longitude', fields: ['longitude'] },
-  { header: 'UTC offset', fields: ['utcOffset'] },
-  { header: 'Elevation', fields: ['elevation'] },
-  { header: 'Ground reflectance', fields: ['groundAlbedo'] },
-];
+export { headerKey };
 
 /** Help text listing the headers, for the pane. */
-export const SCHEDULE_HELP = `One row per window. Needed: ${SCHEDULE_COLUMNS.filter((c) => c.required).map((c) => c.header).join(', ')}. Optional (blank takes the form's value): ${SCHEDULE_COLUMNS.filter((c) => !c.required).map((c) => c.header).join(', ')}. Lengths in m, angles in °; units in brackets after a header are ignored.`;
+export const SCHEDULE_HELP = `One row per window. Needed: ${requiredColumns('pane').map((c) => c.header).join(', ')}. Optional (blank takes the form's value): ${SCHEDULE_COLUMNS.filter((c) => !c.requiredBy.includes('pane')).map((c) => c.header).join(', ')}. The same table runs with \`sunpane schedule\`. Case does not matter and the unit in brackets may be left out; the window file's names (surfaceAzimuth, overhangProjection…) are accepted too. Lists (skyline, monthly turbidity) are space-separated.`;
 
-/** A header reduced for matching: lower case, no units in brackets, letters and digits only. */
-export function headerKey(text: unknown): string {
-  return String(text ?? '')
-    .replace(/[([][^)\]]*[)\]]/g, '')
-    .toLowerCase()
-    .replace(/[^a-z0-9]/g, '');
+/** The form box a column path fills (the skyline and the example site are handled apart). */
+function fieldOfPath(path: string): FieldDef {
+  const field = FIELDS.find((f) => f.kind !== 'address' && f.paths?.includes(path));
+  if (!field) throw new Error(`schedule path ${path} has no form box`);
+  return field;
 }
 
-const BY_KEY = new Map(SCHEDULE_COLUMNS.map((c) => [headerKey(c.header), c]));
+/** Form boxes of every column (a both-sides column fills two). */
+const COLUMN_FIELDS: ReadonlyMap<string, readonly FieldDef[]> = new Map(
+  SCHEDULE_COLUMNS.map((c) => [c.key, c.key === SITE_KEY ? [] : c.key === SKYLINE_KEY ? FIELDS.filter((f) => f.id === 'skylineAddress') : c.paths.map(fieldOfPath)]),
+);
+
+/** Weather kind a row switches to when it fills a clear-sky column. */
+const WEATHER_OF_COLUMN: Readonly<Record<string, string>> = { linkeTurbidity: 'ineichenClearSky', tauB: 'ashraeClearSky', tauD: 'ashraeClearSky' };
 
 /** A schedule row ready to run. */
 export interface ScheduleRow {
@@ -84,6 +54,12 @@ function cellText(v: unknown): string {
   return typeof v === 'number' ? String(v) : String(v).trim();
 }
 
+/** A cell's text as the box expects it: a choice matched to its option without regard to case. */
+function boxText(field: FieldDef, text: string): string {
+  if (field.kind !== 'select') return text;
+  return field.options?.find((o) => o.value.toLowerCase() === text.toLowerCase())?.value ?? text;
+}
+
 /**
  * Reads a schedule table (header row first) into WindowSpecs, each checked by the core's
  * validator. Returns every problem found (nothing is run when there is any).
@@ -95,47 +71,79 @@ export function readSchedule(table: readonly (readonly unknown[])[], form: FormV
   const problems: ScheduleProblem[] = [];
   const rows: ScheduleRow[] = [];
   if (table.length === 0) return { rows, problems: [{ row: 0, message: 'The table is empty: it needs a header row and one row per window.' }] };
-  const header = table[0].map(headerKey);
-  const columns: (ScheduleColumn | undefined)[] = header.map((k) => BY_KEY.get(k));
-  table[0].forEach((h, i) => {
-    if (!columns[i] && cellText(h) !== '') problems.push({ row: 0, column: cellText(h), message: `Header "${cellText(h)}" is not a schedule column (see the list of headers).` });
-  });
-  for (const c of SCHEDULE_COLUMNS.filter((c) => c.required)) {
-    if (!columns.includes(c)) problems.push({ row: 0, column: c.header, message: `The table has no "${c.header}" column, which every schedule needs.` });
+  const matched = matchHeaders(table[0]);
+  for (const u of matched.unknown) problems.push({ row: 0, column: u.header, message: `Header "${u.header}" is not a schedule column (see the list of headers).` });
+  for (const r of matched.repeated) {
+    const first = matched.written.get(columnForHeader(r.header)?.key ?? '');
+    problems.push({ row: 0, column: r.header, message: `Headers "${first}" and "${r.header}" name the same column: keep one.` });
+  }
+  for (const c of requiredColumns('pane')) {
+    if (!matched.written.has(c.key)) problems.push({ row: 0, column: c.header, message: `The table has no "${c.header}" column, which every schedule needs.` });
   }
   if (problems.length) return { rows, problems };
   if (table.length < 2) return { rows, problems: [{ row: 0, message: 'The table has no windows: add one row per window under the header.' }] };
+  const present: { column: ScheduleColumn; index: number; header: string }[] = SCHEDULE_COLUMNS.filter((c) => matched.written.has(c.key)).map((column) => ({
+    column,
+    index: matched.columns.indexOf(column),
+    header: matched.written.get(column.key)!,
+  }));
 
   for (let r = 1; r < table.length; r++) {
     const line = table[r];
     if (line.every((v) => cellText(v) === '')) continue;
-    const values: FormValues = { ...form };
-    const fieldToColumn = new Map<string, string>();
-    columns.forEach((col, i) => {
-      if (!col) return;
-      const text = cellText(line[i]);
-      for (const id of col.fields) fieldToColumn.set(id, col.header);
-      if (text === '' && !col.required) return;
-      for (const id of col.fields) values[id] = text;
-    });
-    const label = values.windowName.trim();
-    if (label === '') {
-      problems.push({ row: r, column: 'Window', message: `Row ${r}, column "Window": blank is not allowed: every window needs a label.` });
-      continue;
-    }
-    try {
-      const spec = buildWindowSpec(values, data);
-      validate(spec);
-      rows.push({ row: r, spec });
-    } catch (err) {
-      if (!(err instanceof SunpaneError)) throw err;
-      const field = fieldForArgument(err.argument);
-      const column = field ? fieldToColumn.get(field.id) : undefined;
-      const where = column ? `column "${column}"` : field ? `form box "${field.label}"` : 'form';
-      problems.push({ row: r, column, message: `Row ${r} (${label}), ${where}: ${err.message}` });
-    }
+    const problem = readRow(line, present, form, data, validate);
+    if ('spec' in problem) rows.push({ row: r, spec: problem.spec });
+    else problems.push({ row: r, column: problem.column, message: `Row ${r}${problem.label ? ` (${problem.label})` : ''}, ${problem.where}: ${problem.message}` });
   }
   return { rows, problems };
+}
+
+type RowOutcome = { spec: WindowSpec } | { label: string; column?: string; where: string; message: string };
+
+/** One row: the form overridden by the row's cells, in the column list's order (both sides before one side). */
+function readRow(line: readonly unknown[], present: readonly { column: ScheduleColumn; index: number; header: string }[], form: FormValues, data: SheetData, validate: SpecValidator): RowOutcome {
+  let values: FormValues = { ...form };
+  const rowData: SheetData = { ...data };
+  const fieldToColumn = new Map<string, string>();
+  let siteHeader: string | undefined;
+  for (const { column, index, header } of present) {
+    const text = cellText(line[index]);
+    for (const f of COLUMN_FIELDS.get(column.key) ?? []) if (text !== '' || !fieldToColumn.has(f.id)) fieldToColumn.set(f.id, header);
+    if (text === '') continue;
+    if (column.key === SITE_KEY) {
+      const site = EXAMPLE_SITES.find((s) => s.id.toLowerCase() === text.toLowerCase());
+      if (!site) return { label: cellText(line[present[0].index]), column: header, where: `column "${header}"`, message: `"${text}" is not an example site (${EXAMPLE_SITES.map((s) => s.id).join(', ')}).` };
+      values = applyExampleSite(values, site.id);
+      siteHeader = header;
+      continue;
+    }
+    if (siteHeader && column.paths[0].startsWith('site.')) {
+      return { label: cellText(line[present[0].index]), column: header, where: `column "${header}"`, message: `give either an example site (column "${siteHeader}") or its own latitude, longitude, UTC offset and elevation, not both.` };
+    }
+    if (column.key === SKYLINE_KEY) {
+      rowData.skyline = readListText(text) as number[];
+      continue;
+    }
+    for (const f of COLUMN_FIELDS.get(column.key) ?? []) values[f.id] = boxText(f, text);
+    if (WEATHER_OF_COLUMN[column.key]) values.weatherSource = WEATHER_OF_COLUMN[column.key];
+  }
+  const label = (values.windowName ?? '').trim();
+  const labelHeader = fieldToColumn.get('windowName') ?? 'Window';
+  // The label column is required, and first in the list, so present[0] is it.
+  if (cellText(line[present[0].index]) === '') {
+    return { label: '', column: labelHeader, where: `column "${labelHeader}"`, message: 'blank is not allowed: every window needs a label.' };
+  }
+  try {
+    const spec = buildWindowSpec(values, rowData);
+    validate(spec);
+    return { spec };
+  } catch (err) {
+    if (!(err instanceof SunpaneError)) throw err;
+    const field = fieldForArgument(err.argument);
+    const column = field ? fieldToColumn.get(field.id) : undefined;
+    const where = column ? `column "${column}"` : field ? `form box "${field.label}"` : 'form';
+    return { label, column, where, message: err.message };
+  }
 }
 
 /** Header of the summary sheet's table (our own wording). */

@@ -197,7 +197,7 @@ describe('sunpane schedule', () => {
     const input = writeTemp(dir, 'windows.csv', text);
     const r = await run('schedule', '--in', input, '--out', path.join(dir, 'out.csv'));
     expect(r.code).toBe(1);
-    expect(r.err).toBe(`sunpane: ${input} line 3 ("East meeting room"), column width: is blank but required`);
+    expect(r.err).toBe(`sunpane: ${input} line 3 ("East meeting room"), column "Width [m]": is blank but required`);
     expect(fs.readdirSync(dir)).toEqual(['windows.csv']);
   });
 
@@ -206,11 +206,11 @@ describe('sunpane schedule', () => {
     const base = fs.readFileSync(SCHEDULE, 'utf8');
     const r1 = await run('schedule', '--in', writeTemp(dir, 'a.csv', base.replace(',0.5,2,,,,0.15', ',1.5,2,,,,0.15')), '--out', path.join(dir, 'o.csv'));
     expect(r1.code).toBe(1);
-    expect(r1.err).toMatch(/a\.csv line 5 \("North studio"\), column shgc: glazing\.shgc = 1\.5 is not allowed: must be a number from 0 to 1$/);
+    expect(r1.err).toMatch(/a\.csv line 5 \("North studio"\), column "SHGC": glazing\.shgc = 1\.5 is not allowed: must be a number from 0 to 1$/);
     const r2 = await run('schedule', '--in', writeTemp(dir, 'b.csv', base.replace('South office,brackwater,2026,180,3.0', 'South office,brackwater,2026,south,3.0')), '--out', path.join(dir, 'o.csv'));
-    expect(r2.err).toMatch(/b\.csv line 2, column surfaceAzimuth: "south" is not a number$/);
-    const r3 = await run('schedule', '--in', writeTemp(dir, 'c.csv', base.replace('panes,', 'pains,')), '--out', path.join(dir, 'o.csv'));
-    expect(r3.err).toMatch(/c\.csv line 1: unknown column "pains"/);
+    expect(r2.err).toMatch(/b\.csv line 2, column "Faces \[°\]": "south" is not a number$/);
+    const r3 = await run('schedule', '--in', writeTemp(dir, 'c.csv', base.replace('Panes,', 'Pains,')), '--out', path.join(dir, 'o.csv'));
+    expect(r3.err).toMatch(/c\.csv line 1: unknown column "Pains"/);
   });
 
   it('applies one hourly weather file to every window', async () => {
@@ -249,6 +249,6 @@ describe('help by name', () => {
     const input = writeTemp(dir, 'w.csv', 'name,year,surfaceAzimuth,width,height,shgc,linkeTurbidity\nLone,2026,180,1,1,0.4,3\n');
     const r = await run('schedule', '--in', input, '--out', path.join(dir, 'o.csv'));
     expect(r.code).toBe(1);
-    expect(r.err).toBe(`sunpane: ${input} line 2 ("Lone"): no site: fill the column site (an example site id) or latitude, longitude and utcOffset`);
+    expect(r.err).toBe(`sunpane: ${input} line 2 ("Lone"): no site: fill the column Site (an example site id) or Latitude, Longitude and UTC offset`);
   });
 });

@@ -37,8 +37,49 @@ describe('the window schedule', () => {
     const { problems } = readSchedule([['Window', 'Facing', 'Width']], form, validate);
     expect(problems.map((p) => p.message)).toEqual([
       'Header "Facing" is not a schedule column (see the list of headers).',
-      'The table has no "Faces" column, which every schedule needs.',
-      'The table has no "Height" column, which every schedule needs.',
+      'The table has no "Faces [°]" column, which every schedule needs.',
+      'The table has no "Height [m]" column, which every schedule needs.',
+    ]);
+  });
+
+  test('a column named twice (the shared header and an older name) is reported by both names', () => {
+    const { problems } = readSchedule([['Window', 'Faces', 'Width', 'Height', 'Set-back [m]', 'revealDepth']], form, validate);
+    expect(problems.map((p) => p.message)).toEqual(['Headers "Set-back [m]" and "revealDepth" name the same column: keep one.']);
+  });
+
+  test('the window file\'s names work in the pane: a site fills the place, a skyline and a turbidity apply to their row only', () => {
+    const { rows, problems } = readSchedule(
+      [
+        ['name', 'site', 'surfaceAzimuth', 'width', 'height', 'skyline', 'linkeTurbidity', 'skyModel'],
+        ['N', 'Brackwater', 0, 1, 1, '10 10 0 0', '2.5 ; 2.7 2.9 3 3 3 3 3 3 3 2.7 2.5', 'Isotropic'],
+        ['S', '', 180, 1, 1, '', '', ''],
+      ],
+      { ...form, weatherSource: 'ashraeClearSky' },
+      validate,
+    );
+    expect(problems).toEqual([]);
+    expect(rows[0].spec.site).toEqual({ latitude: 52.2, longitude: 4.9, utcOffset: 1, elevation: 5 });
+    expect(rows[0].spec.shading.skyline).toEqual([10, 10, 0, 0]);
+    expect(rows[0].spec.weather).toEqual({ kind: 'ineichenClearSky', linkeTurbidity: [2.5, 2.7, 2.9, 3, 3, 3, 3, 3, 3, 3, 2.7, 2.5] });
+    expect(rows[0].spec.skyModel).toBe('isotropic');
+    expect(rows[1].spec.site.latitude).toBe(52.2);
+    expect(rows[1].spec.shading.skyline).toBeUndefined();
+    expect(rows[1].spec.weather.kind).toBe('ashraeClearSky');
+  });
+
+  test('an unknown example site, and a site beside its own coordinates, are named by row and column', () => {
+    const { problems } = readSchedule(
+      [
+        ['Window', 'Site', 'Latitude [°]', 'Faces', 'Width', 'Height'],
+        ['A', 'nowhere', '', 180, 1, 1],
+        ['B', 'brackwater', 40, 180, 1, 1],
+      ],
+      form,
+      validate,
+    );
+    expect(problems.map((p) => p.message)).toEqual([
+      expect.stringMatching(/^Row 1 \(A\), column "Site": "nowhere" is not an example site \(brackwater, /),
+      'Row 2 (B), column "Latitude [°]": give either an example site (column "Site") or its own latitude, longitude, UTC offset and elevation, not both.',
     ]);
   });
 
