@@ -109,7 +109,8 @@ function readRow(line: readonly unknown[], present: readonly { column: ScheduleC
   for (const { column, index, header } of present) {
     const text = cellText(line[index]);
     for (const f of COLUMN_FIELDS.get(column.key) ?? []) if (text !== '' || !fieldToColumn.has(f.id)) fieldToColumn.set(f.id, header);
-    if (text === '') continue;
+    // A blank optional cell keeps the form's value; a blank required one goes to the core as blank.
+    if (text === '' && !column.requiredBy.includes('pane')) continue;
     if (column.key === SITE_KEY) {
       const site = EXAMPLE_SITES.find((s) => s.id.toLowerCase() === text.toLowerCase());
       if (!site) return { label: cellText(line[present[0].index]), column: header, where: `column "${header}"`, message: `"${text}" is not an example site (${EXAMPLE_SITES.map((s) => s.id).join(', ')}).` };

@@ -91,6 +91,7 @@ describe('the window schedule', () => {
         ['', 180, 1, 1, 0, 0],
         ['C', 180, 1, 1, -0.2, 0.3],
         ['D', 180, 1, 1, 0, 0],
+        ['E', 180, '', 1, 0, 0],
       ],
       form,
       validate,
@@ -100,6 +101,7 @@ describe('the window schedule', () => {
       'Row 1 (A), column "Faces": surfaceAzimuth = 400 is not allowed: must be a number from 0 to 360 °',
       'Row 2, column "Window": blank is not allowed: every window needs a label.',
       'Row 3 (C), column "Fin gap": shading.leftFin.gap = -0.2 is not allowed: must be a number from 0 to 1000 m',
+      'Row 5 (E), column "Width": width = blank is not allowed: must be a number above 0 and up to 1000 m',
     ]);
   });
 
