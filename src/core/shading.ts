@@ -26,8 +26,9 @@
  *   edges, likewise.
  * A glass point is sunlit when its wall-plane point is in the lit rectangle and in no shadow
  * parallelogram, so the sunlit area = area(lit rectangle) − area(lit rectangle ∩ (S1 ∪ S2 ∪ S3)),
- * the union taken by inclusion–exclusion over the ≤ 7 intersections. Overlapping shadows are
- * counted once, never summed. Each shadow has two edges along an axis and two along the sun's
+ * the union taken by inclusion–exclusion (overhang + fin − overhang ∩ fin: for any sun at most one
+ * fin's shadow reaches the opening, the other falls on the far side of its fin). Overlapping shadows
+ * are counted once, never summed. Each shadow has two edges along an axis and two along the sun's
  * direction on the wall, so with w = sin β·x − cos β sin γ·y (constant along that direction) it is a
  * box of intervals in (x, y, w); every intersection with the lit rectangle is again such a box, a
  * rectangle cut by a strip, whose area is a closed form ({@link rectangleStripArea},

@@ -14,7 +14,8 @@
  * The lit rectangle (glass seen through the reveal) is a box in (x, y); the intersection of it with
  * any group of shadows is again a box — a rectangle cut by a strip — with an exact closed-form area
  * ({@link rectangleStripArea}). The shaded area is the union of the shadows within the lit
- * rectangle by inclusion–exclusion over the ≤ 7 groups.
+ * rectangle by inclusion–exclusion: overhang, fin, and overhang ∩ fin (at most one fin's shadow can
+ * reach the opening for a given sun, so these three groups are all there are).
  */
 import { rectangleStripArea } from './polygon';
 import type { Shading } from './window';
@@ -178,19 +179,12 @@ export function sunlitFromPlan(g: ShadowPlan, a: number, b: number, p: number, q
     covered += rectangleStripArea(lX0, ly0, lX1, ly1, p, q, lw0, lw1);
     if (oh) covered -= rectangleStripArea(lX0, oY0, lX1, oY1, p, q, ow0 > lw0 ? ow0 : lw0, ow1 < lw1 ? ow1 : lw1);
   }
+  // No left-and-right terms: both fin shadows are shifted by −a per unit depth, so the one on the
+  // side the shift points away from the opening lies wholly outside it (x ≤ −g ≤ 0 for the left fin
+  // when a ≥ 0, x ≥ W + g ≥ W for the right fin when a ≤ 0) and was left out above.
   if (rf) {
     covered += rectangleStripArea(rX0, ly0, rX1, ly1, p, q, rw0, rw1);
     if (oh) covered -= rectangleStripArea(rX0, oY0, rX1, oY1, p, q, ow0 > rw0 ? ow0 : rw0, ow1 < rw1 ? ow1 : rw1);
-    if (lf) {
-      const x0 = lX0 > rX0 ? lX0 : rX0;
-      const x1 = lX1 < rX1 ? lX1 : rX1;
-      const w0 = lw0 > rw0 ? lw0 : rw0;
-      const w1 = lw1 < rw1 ? lw1 : rw1;
-      if (x1 > x0 && w1 > w0) {
-        covered -= rectangleStripArea(x0, ly0, x1, ly1, p, q, w0, w1);
-        if (oh) covered += rectangleStripArea(x0, oY0, x1, oY1, p, q, ow0 > w0 ? ow0 : w0, ow1 < w1 ? ow1 : w1);
-      }
-    }
   }
   const shaded = covered < 0 ? 0 : covered > litArea ? litArea : covered;
   const f = (litArea - shaded) / g.area;
