@@ -175,10 +175,16 @@ export function annualOfPrepared(w: PreparedWindow): AnnualSeries {
       sinGamma < 0.99 && sinGamma > -0.99 ? (gamma < 90 && gamma > -90 ? 1 : -1) * Math.sqrt((1 - sinGamma) * (1 + sinGamma)) : Math.cos(gammaRad);
     const cosTheta = sinBeta * cosTilt + cosBeta * sinTilt * cosGamma; // D&B Eq. 1.6.3
     const theta = acosClamped(cosTheta) * DEG;
-    // D&B Eq. 1.9.1a, Ω = atan2(sin β, cos β cos γ); with the second argument above 0 as atan of the
-    // ratio (fdlibm's atan2 does exactly that there: same value, less work).
+    // D&B Eq. 1.9.1a, Ω = atan2(sin β, cos β cos γ), by one atan of the ratio: with the second
+    // argument above 0 that is what fdlibm's atan2 does (same value); below 0 (sun behind the wall)
+    // atan2(y, x) = ±π − atan(y / −x), + for y ≥ 0 (within an ulp of π of atan2's value).
     const horizontal = cosBeta * cosGamma;
-    const omega = (horizontal > 0 ? Math.atan(sinBeta / horizontal) : Math.atan2(sinBeta, horizontal)) * DEG;
+    const omega =
+      (horizontal > 0
+        ? Math.atan(sinBeta / horizontal)
+        : horizontal < 0
+          ? (sinBeta >= 0 ? Math.PI : -Math.PI) - Math.atan(sinBeta / -horizontal)
+          : Math.atan2(sinBeta, horizontal)) * DEG;
     const front = sunUp && theta < 90;
     // Geometry first, for every row (missing weather does not hide where the sun is).
     const lit = !front ? 0 : shade !== undefined ? shade.sunlitInWallFrame(a, s, gamma, sinBeta, cosBeta, sinGamma, cosGamma) : 1;

@@ -19,7 +19,7 @@ import { type PlaneParts, planeIrradiance, preparePlane } from '../../src/core/p
 import { unionAreaInRectangle, writeQuadHalfPlanes } from '../../src/core/polygon';
 import { prepareShading, sunlitFraction } from '../../src/core/shading';
 import { extraterrestrialSpencer } from '../../src/core/sky';
-import { incidenceAngle } from '../../src/core/surface';
+import { incidenceAngle, profileAngle } from '../../src/core/surface';
 import type { Shading, SkyModel } from '../../src/core/window';
 import { shadedSpec } from './gainFixtures';
 
@@ -410,5 +410,21 @@ describe('annual series hour by hour equals the checked functions at its own sun
       expect(Math.abs(s.incidence[i] - p.incidence)).toBeLessThan(1e-9);
     }
     expect(front).toBeGreaterThan(2000);
+  });
+
+  test('incidence and profile angle of every hour, day and night, equal the checked functions within 1e-12 °', () => {
+    for (const surfaceAzimuth of [0, 90, 200, 315]) {
+      const spec = { ...shadedSpec(), surfaceAzimuth };
+      const s = annualSeries(spec);
+      let behind = 0;
+      for (let i = 0; i < s.hours; i++) {
+        const alt = s.sunAltitude[i];
+        const az = s.sunAzimuth[i];
+        expect(Math.abs(s.profileAngle[i] - profileAngle(alt, az, surfaceAzimuth))).toBeLessThanOrEqual(1e-12 * 180);
+        expect(Math.abs(s.incidence[i] - incidenceAngle(alt, az, spec.surfaceTilt, surfaceAzimuth))).toBeLessThanOrEqual(1e-9);
+        if (Math.abs(s.profileAngle[i]) > 90) behind++;
+      }
+      expect(behind).toBeGreaterThan(1000);
+    }
   });
 });
