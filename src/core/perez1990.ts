@@ -107,7 +107,8 @@ export function perezParts(
  * @param cosZenith - cos of the zenith angle (= sin of the altitude) [-]
  * @param airMass - relative air mass [-]
  * @param cosIncidence - cos of the sun's incidence angle on the plane [-], −1…1
- * @param coefficients - brightness coefficient rows, one per ε bin
+ * @param coefficients - brightness coefficient rows, one per ε bin ({@link PEREZ_1990_COMPOSITE} for
+ *   the published set; no default, which keeps the kernel small enough to inline)
  * @returns `out`; see {@link skyDiffusePerez1990} for the formulas
  */
 export function perezPartsKernel(
@@ -121,23 +122,9 @@ export function perezPartsKernel(
   cosZenith: number,
   airMass: number,
   cosIncidence: number,
-  coefficients: readonly PerezCoefficientRow[] = PEREZ_1990_COMPOSITE,
+  coefficients: readonly PerezCoefficientRow[],
 ): PerezParts {
-  if (dhi <= 0 || sunZenith >= 90) {
-    // No diffuse: all 0. No sun: no circumsolar disc and no brightness classification; the
-    // diffuse is taken as isotropic.
-    const iso = dhi > 0 ? dhi * isotropicView : 0;
-    out.epsilon = 1;
-    out.delta = 0;
-    out.bin = 1;
-    out.f1 = 0;
-    out.f2 = 0;
-    out.isotropic = iso;
-    out.circumsolar = 0;
-    out.horizon = 0;
-    out.total = iso;
-    return out;
-  }
+  if (dhi <= 0 || sunZenith >= 90) return perezIsotropicOnly(out, isotropicView, dhi);
   const zRad = sunZenith * RAD;
   const kz3 = PEREZ_KAPPA * zRad * zRad * zRad;
   const epsilon = ((dhi + dni) / dhi + kz3) / (1 + kz3); // Eq. 1
@@ -162,6 +149,25 @@ export function perezPartsKernel(
   out.circumsolar = circumsolar;
   out.horizon = horizon;
   out.total = sum > 0 ? sum : 0;
+  return out;
+}
+
+/**
+ * The branch of {@link perezPartsKernel} with no diffuse (all 0) or no sun (no circumsolar disc and
+ * no brightness classification; the diffuse is taken as isotropic) — a function of its own, so that
+ * the kernel's usual path stays small enough for the compiler to inline into hourly loops.
+ */
+function perezIsotropicOnly(out: PerezParts, isotropicView: number, dhi: number): PerezParts {
+  const iso = dhi > 0 ? dhi * isotropicView : 0;
+  out.epsilon = 1;
+  out.delta = 0;
+  out.bin = 1;
+  out.f1 = 0;
+  out.f2 = 0;
+  out.isotropic = iso;
+  out.circumsolar = 0;
+  out.horizon = 0;
+  out.total = iso;
   return out;
 }
 

@@ -6,7 +6,7 @@ import { airMassKastenYoungFromSine } from './airMass';
 import { RAD } from './angles';
 import { SunpaneError, requireRange } from './errors';
 import { extraterrestrialSpencer, requireDayOfYear } from './extraterrestrial';
-import { type PerezParts, perezPartsKernel } from './perez1990';
+import { PEREZ_1990_COMPOSITE, type PerezParts, perezPartsKernel } from './perez1990';
 import { incidenceAngle } from './surface';
 import { COS_85, requireIrradiance } from './transposition';
 import type { SkyModel } from './window';
@@ -151,7 +151,7 @@ function planeKernel(out: PlaneParts, p: PlaneConstants, dni: number, dhi: numbe
     const rb = (cosIncidence > 0 ? cosIncidence : 0) / (sinAltitude > COS_85 ? sinAltitude : COS_85);
     sky = dhi * ((1 - ai) * p.isotropicView + ai * rb); // D&B Eq. 2.16.4
   } else {
-    sky = perezPartsKernel(p.perez, p.isotropicView, p.sinTilt, dhi, dni, dniExtra, 90 - altitude, sinAltitude, airMassKastenYoungFromSine(altitude, sinAltitude), cosIncidence).total;
+    sky = perezPartsKernel(p.perez, p.isotropicView, p.sinTilt, dhi, dni, dniExtra, 90 - altitude, sinAltitude, airMassKastenYoungFromSine(altitude, sinAltitude), cosIncidence, PEREZ_1990_COMPOSITE).total;
   }
   sky *= p.skyViewFactor;
   const ground = (ghi * p.albedo * p.oneMinusCosTilt) / 2; // D&B Eq. 2.15.1
