@@ -7,9 +7,17 @@
  * everything that does not change by the hour (SHGC curve, glass area, sky view factor, the shading
  * and the plane's checks, the day's extraterrestrial irradiance) is worked out once; per hour only
  * the kernels run that the checked functions share ({@link prepareShading}, {@link preparePlane}),
- * with the sun's sines and cosines computed once, and nothing is allocated. Hours that cannot
- * matter are skipped: no shading with the sun down or behind the wall, no sky model in the dark.
- * tests/core/preparedFast.test.ts holds every hour to the checked functions within 1e-12.
+ * with the sun's sines and cosines computed once (two sines; the cosines by square roots), and
+ * nothing is allocated. Hours that cannot matter are skipped: no shading with the sun down or
+ * behind the wall, no shadow work with the sun below the skyline, no sky model in the dark.
+ * The shadow union is a closed form (src/core/shadowPlan.ts), the Kasten–Young power a tabulated
+ * series (src/core/airMass.ts), the SHGC table filled on first use (src/core/glazing.ts).
+ * tests/core/preparedFast.test.ts holds every hour to the checked functions within 1e-12 (the
+ * incidence angle within 1e-9 °: acos amplifies rounding near 0° and 180°).
+ *
+ * Speed (`npm run bench`, window_annual_vs_suncalc, on the shared 2-core machine): about 4.4 ms a
+ * year before this round, 2.2–2.5 ms (best of many runs) after it, of which the sun path is
+ * 0.75–0.9 ms; suncalc 2.0.2's bare getPosition for the same 8760 instants 2.0–2.5 ms.
  *
  * Weather: clear-sky models (12 monthly values or one for the year) at each hour's sun; a supplied
  * DNI + DHI series; or a supplied GHI series split by Erbs et al. (1982). A non-finite value in a

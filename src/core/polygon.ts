@@ -1,6 +1,10 @@
 /**
  * Exact area of the intersection of an axis-aligned rectangle with convex polygons given as
- * half-planes — the geometric kernel of the shadow union in {@link ./shading}.
+ * half-planes, and of a rectangle with a strip ({@link rectangleStripArea}, the closed form the
+ * shadow union of src/core/shadowPlan.ts uses). The general clipper is kept as the independent
+ * check of that closed form (tests/core/preparedFast.test.ts) and is itself checked against
+ * polygon-clipping (tests/reference/polygon-clipping-union.test.ts); {@link writeQuadHalfPlanes}
+ * also serves the point test of src/core/shading.ts.
  *
  * Method: Sutherland–Hodgman clipping of a convex polygon by one half-plane at a time (Sutherland &
  * Hodgman, "Reentrant polygon clipping", Communications of the ACM 17(1), 1974); clipping a convex
@@ -11,7 +15,7 @@
  * A polygon of at most {@link MAX_HALF_PLANES} half-planes is clipped; each half-plane adds at most
  * one vertex, so the buffers hold 4 + MAX_HALF_PLANES vertices.
  *
- * Speed (the annual series clips up to ~4000 sunlit hours a year): when the quadrilaterals' bounding
+ * Speed: when the quadrilaterals' bounding
  * boxes are given, each term of the union first shrinks the rectangle to the common part of the
  * boxes — exact, since each quadrilateral lies inside its box — and skips the term outright when
  * that part is empty. An axis-aligned edge of a convex quadrilateral lies on its box's boundary, so
