@@ -9,7 +9,7 @@ import { ashraeClearSky } from '../src/core/sky';
 import { annualSunPath } from '../src/core/sun';
 import { serialToUtcMs } from '../src/core/time';
 import type { WindowSpec } from '../src/core/window';
-import { type BenchSection, consume, ratio, timeIt } from './harness';
+import { type BenchSection, consume, ratio, timeInterleaved } from './harness';
 
 // eslint-disable-next-line @typescript-eslint/no-require-imports
 const SunCalc = require('suncalc') as { getPosition(date: Date, lat: number, lng: number): { altitude: number; azimuth: number } };
@@ -55,15 +55,22 @@ export function annualBench(): BenchSection {
   const stamps = annualSunPath(YEAR, SITE).stampSerial;
   const dates = Array.from(stamps, (s) => new Date(serialToUtcMs(s - 1 / 48, SITE.utcOffset)));
 
-  const ours = timeIt(`window annual series, shaded, Perez, measured (${hours} h)`, hours, () => {
-    const s = annualSeries(spec);
-    consume(s.gain[4000]);
-  });
-  const suncalc = timeIt(`suncalc 2.0.2 getPosition (${hours} instants)`, hours, () => {
-    let acc = 0;
-    for (const d of dates) acc += SunCalc.getPosition(d, SITE.latitude, SITE.longitude).altitude;
-    consume(acc);
-  });
+  const [ours, suncalc] = timeInterleaved([
+    {
+      label: `window annual series, shaded, Perez, measured (${hours} h)`,
+      operations: hours,
+      work: () => consume(annualSeries(spec).gain[4000]),
+    },
+    {
+      label: `suncalc 2.0.2 getPosition (${hours} instants)`,
+      operations: hours,
+      work: () => {
+        let acc = 0;
+        for (const d of dates) acc += SunCalc.getPosition(d, SITE.latitude, SITE.longitude).altitude;
+        consume(acc);
+      },
+    },
+  ]);
   return {
     title: 'Annual window series (full hourly gain of one shaded window) vs bare sun positions',
     timings: [ours, suncalc],

@@ -43,6 +43,35 @@ export function timeIt(label: string, operations: number, work: () => void, repe
   return { label, medianMs: times[Math.floor(times.length / 2)], operations };
 }
 
+/** One piece of work to time: what it is, evaluations per run, and the run. */
+export interface Job {
+  label: string;
+  operations: number;
+  work: () => void;
+}
+
+/**
+ * Times several jobs INTERLEAVED: each round runs every job once (the starting job rotates from
+ * round to round), so that a change in the machine's load during the measurement affects all of
+ * them alike; returns each job's median. Used for every ratio against a peer library.
+ */
+export function timeInterleaved(jobs: readonly Job[], repeats = 31, warmup = 7): Timing[] {
+  const times: number[][] = jobs.map(() => []);
+  for (let round = 0; round < warmup + repeats; round++) {
+    for (let k = 0; k < jobs.length; k++) {
+      const j = (round + k) % jobs.length;
+      const t0 = performance.now();
+      jobs[j].work();
+      const dt = performance.now() - t0;
+      if (round >= warmup) times[j].push(dt);
+    }
+  }
+  return jobs.map((job, j) => {
+    const sorted = times[j].sort((a, b) => a - b);
+    return { label: job.label, medianMs: sorted[Math.floor(sorted.length / 2)], operations: job.operations };
+  });
+}
+
 /** ratio = ours / theirs of median times, rounded to 3 significant digits. */
 export function ratio(ours: Timing, theirs: Timing): number {
   return Number((ours.medianMs / theirs.medianMs).toPrecision(3));

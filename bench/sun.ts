@@ -11,7 +11,7 @@ import * as Astronomy from 'astronomy-engine';
 import { annualSunPath, sunPosition } from '../src/core/sun';
 import { civilToSerial, serialToUtcMs } from '../src/core/time';
 import type { Site } from '../src/core/window';
-import { type BenchSection, consume, ratio, timeIt } from './harness';
+import { type BenchSection, consume, ratio, timeInterleaved } from './harness';
 
 // eslint-disable-next-line @typescript-eslint/no-require-imports
 const SunCalc = require('suncalc') as { getPosition(date: Date, lat: number, lng: number): { altitude: number; azimuth: number } };
@@ -27,21 +27,33 @@ export function sunBench(): BenchSection {
   const observer = new Astronomy.Observer(SITE.latitude, SITE.longitude, SITE.elevation ?? 0);
   const options = { elevation: SITE.elevation };
 
-  const direct = timeIt(`sun position, direct SPA (${hours} instants)`, hours, () => {
-    for (let i = 0; i < hours; i++) consume(sunPosition(instants[i], SITE.latitude, SITE.longitude, options).altitude);
-  });
-  const annual = timeIt(`sun position, annual fast path (${hours} hours)`, hours, () => {
-    consume(annualSunPath(YEAR, SITE).altitude[4000]);
-  });
-  const suncalc = timeIt(`suncalc 2.0.2 getPosition (${hours} instants)`, hours, () => {
-    for (let i = 0; i < hours; i++) consume(SunCalc.getPosition(dates[i], SITE.latitude, SITE.longitude).altitude);
-  });
-  const astronomy = timeIt(`astronomy-engine 2.1.19 Equator + Horizon (${hours} instants)`, hours, () => {
-    for (let i = 0; i < hours; i++) {
-      const eq = Astronomy.Equator(Astronomy.Body.Sun, dates[i], observer, true, true);
-      consume(Astronomy.Horizon(dates[i], observer, eq.ra, eq.dec, 'normal').altitude);
-    }
-  });
+  const [direct, annual, suncalc, astronomy] = timeInterleaved([
+    {
+      label: `sun position, direct SPA (${hours} instants)`,
+      operations: hours,
+      work: () => {
+        for (let i = 0; i < hours; i++) consume(sunPosition(instants[i], SITE.latitude, SITE.longitude, options).altitude);
+      },
+    },
+    { label: `sun position, annual fast path (${hours} hours)`, operations: hours, work: () => consume(annualSunPath(YEAR, SITE).altitude[4000]) },
+    {
+      label: `suncalc 2.0.2 getPosition (${hours} instants)`,
+      operations: hours,
+      work: () => {
+        for (let i = 0; i < hours; i++) consume(SunCalc.getPosition(dates[i], SITE.latitude, SITE.longitude).altitude);
+      },
+    },
+    {
+      label: `astronomy-engine 2.1.19 Equator + Horizon (${hours} instants)`,
+      operations: hours,
+      work: () => {
+        for (let i = 0; i < hours; i++) {
+          const eq = Astronomy.Equator(Astronomy.Body.Sun, dates[i], observer, true, true);
+          consume(Astronomy.Horizon(dates[i], observer, eq.ra, eq.dec, 'normal').altitude);
+        }
+      },
+    },
+  ]);
 
   return {
     title: 'Sun position: one year of hours at one site',
