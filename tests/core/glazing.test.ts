@@ -4,7 +4,6 @@
  * (Fresnel, Fritsch–Carlson, hemispherical integral) are in tests/reference/.
  */
 import fc from 'fast-check';
-import { SunpaneError } from '../../src/core/errors';
 import {
   CURVE_STEP,
   diffuseShgc,
@@ -16,19 +15,11 @@ import {
   shgcFromTable,
 } from '../../src/core/glazing';
 import { hemisphericalAverage } from '../../src/core/hemispherical';
+import { expectArgumentError } from '../support/expectError';
 
 const TABLE = { angles: [0, 40, 50, 60, 70, 80], values: [0.7, 0.68, 0.66, 0.6, 0.48, 0.28] };
 
-function expectError(fn: () => unknown, argument: string): void {
-  let caught: unknown;
-  try {
-    fn();
-  } catch (err) {
-    caught = err;
-  }
-  expect(caught).toBeInstanceOf(SunpaneError);
-  expect((caught as SunpaneError).argument).toBe(argument);
-}
+const expectError = expectArgumentError;
 
 describe('SHGC by the physical model', () => {
   test('returns the rated SHGC at normal incidence (1e-12) and 0 from 90° on', () => {

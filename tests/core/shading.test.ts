@@ -12,9 +12,9 @@
  * The general case is checked against three.js ray casting in tests/reference/raycast-three.test.ts.
  */
 import fc from 'fast-check';
-import { SunpaneError } from '../../src/core/errors';
 import { pointSunlit, requireVerticalForShading, shadowDepth, shadowWidth, sunlitFraction } from '../../src/core/shading';
 import type { Fin, Overhang, Shading } from '../../src/core/window';
+import { expectArgumentError } from '../support/expectError';
 
 const RAD = Math.PI / 180;
 const EXACT = 1e-12;
@@ -28,16 +28,6 @@ function clip01(x: number): number {
   return Math.min(1, Math.max(0, x));
 }
 
-function expectArgumentError(fn: () => unknown, argument: string): void {
-  let caught: unknown;
-  try {
-    fn();
-  } catch (err) {
-    caught = err;
-  }
-  expect(caught).toBeInstanceOf(SunpaneError);
-  expect((caught as SunpaneError).argument).toBe(argument);
-}
 
 describe('closed forms for long overhangs and tall fins (ASHRAE Fundamentals, Fenestration — from memory)', () => {
   test('a long overhang leaves 1 − (P·tan Ω − G)/H of the glass sunlit, clipped to 0…1', () => {

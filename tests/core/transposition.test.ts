@@ -4,7 +4,6 @@
  * documented results. Published check values are in tests/reference/.
  */
 import fc from 'fast-check';
-import { SunpaneError } from '../../src/core/errors';
 import {
   airMassKastenYoung,
   extraterrestrialSpencer,
@@ -17,6 +16,7 @@ import {
   skyDiffusePerez1990,
   ashraeVerticalDiffuseRatio,
 } from '../../src/core/sky';
+import { expectArgumentError } from '../support/expectError';
 
 const cosd = (d: number) => Math.cos((d * Math.PI) / 180);
 const sind = (d: number) => Math.sin((d * Math.PI) / 180);
@@ -33,16 +33,7 @@ const base: PlaneIrradianceInput = {
   skyModel: 'perez1990',
 };
 
-function expectError(fn: () => unknown, argument: string): void {
-  let caught: unknown;
-  try {
-    fn();
-  } catch (err) {
-    caught = err;
-  }
-  expect(caught).toBeInstanceOf(SunpaneError);
-  expect((caught as SunpaneError).argument).toBe(argument);
-}
+const expectError = expectArgumentError;
 
 describe('planeIrradiance', () => {
   test('beam, sky and ground add up to the total and the beam is DNI × cos θ (1e-9)', () => {
