@@ -7,8 +7,8 @@
  * everything that does not change by the hour (SHGC curve, glass area, sky view factor, the shading
  * and the plane's checks, the day's extraterrestrial irradiance) is worked out once; per hour only
  * the kernels run that the checked functions share ({@link prepareShading}, {@link preparePlane}),
- * with the sun's sines and cosines computed once (two sines; the cosines by square roots), and
- * nothing is allocated. Hours that cannot matter are skipped: no shading with the sun down or
+ * with the sun's sines and cosines taken from the sun path (which has them from its topocentric
+ * vector, parked in output columns until their row is written), and nothing is allocated. Hours that cannot matter are skipped: no shading with the sun down or
  * behind the wall, no shadow work with the sun below the skyline, no sky model in the dark.
  * The shadow union is a closed form (src/core/shadowPlan.ts), the Kasten–Young power a tabulated
  * series (src/core/airMass.ts), the SHGC table filled on first use (src/core/glazing.ts).
@@ -115,10 +115,18 @@ export function annualSeries(spec: WindowSpec): AnnualSeries {
 /** {@link annualSeries} for a window already prepared. */
 export function annualOfPrepared(w: PreparedWindow): AnnualSeries {
   const { spec } = w;
-  const path = annualSunPath(spec.year, spec.site);
   const n = w.hours;
-  if (path.hours !== n) throw new SunpaneError('year', spec.year, `sun path has ${path.hours} hours, expected ${n}`);
   const col = () => new Float64Array(n);
+  // The sun path parks the sines and cosines of the sun's altitude and azimuth in four output
+  // columns that the hourly loop fills in every row, each row read before it is overwritten (no
+  // allocation for them).
+  const incidence = col();
+  const profileAngle = col();
+  const sunlitFraction = col();
+  const shgc = col();
+  const trig = { sinAltitude: incidence, cosAltitude: profileAngle, sinAzimuth: sunlitFraction, cosAzimuth: shgc };
+  const path = annualSunPath(spec.year, spec.site, { trig });
+  if (path.hours !== n) throw new SunpaneError('year', spec.year, `sun path has ${path.hours} hours, expected ${n}`);
   // The sun path's columns are fresh arrays of this call: the series takes them over without copying.
   const out: AnnualSeries = {
     name: spec.name,
@@ -128,15 +136,15 @@ export function annualOfPrepared(w: PreparedWindow): AnnualSeries {
     stampSerial: path.stampSerial,
     sunAltitude: path.altitude,
     sunAzimuth: path.azimuth,
-    incidence: col(),
-    profileAngle: col(),
-    sunlitFraction: col(),
+    incidence,
+    profileAngle,
+    sunlitFraction,
     dni: col(),
     dhi: col(),
     beam: col(),
     sky: col(),
     ground: col(),
-    shgc: col(),
+    shgc,
     gain: col(),
     radiant: col(),
     convective: col(),
@@ -158,9 +166,12 @@ export function annualOfPrepared(w: PreparedWindow): AnnualSeries {
   const parts: PlaneParts = { beam: 0, sky: 0, ground: 0, total: 0 };
   const alt = path.altitude;
   const az = path.azimuth;
-  const { incidence, profileAngle, sunlitFraction, shgc, dni: dniColumn, dhi: dhiColumn, missing, beam, sky, ground, gain, radiant, convective } = out;
+  const { dni: dniColumn, dhi: dhiColumn, missing, beam, sky, ground, gain, radiant, convective } = out;
   const cosTilt = Math.cos(tilt * RAD);
   const sinTilt = Math.sin(tilt * RAD);
+  const cosSurf = Math.cos(surfAz * RAD);
+  const sinSurf = Math.sin(surfAz * RAD);
+  const { sinAltitude: sinAlt, cosAltitude: cosAlt, sinAzimuth: sinAz, cosAzimuth: cosAz } = trig;
 
   for (let i = 0; i < n; i++) {
     const a = alt[i];
@@ -169,18 +180,14 @@ export function annualOfPrepared(w: PreparedWindow): AnnualSeries {
     // Incidence and profile angles with the surface's trig worked out once (same formulas as
     // src/core/surface.ts incidenceAngle / profileAngle — D&B Eq. 1.6.3, 1.9.1a — without the
     // per-call argument checks; the agreement tests with windowGainAt hold them together).
-    const betaRad = a * RAD;
-    const sinBeta = Math.sin(betaRad);
-    // cos β = √((1 − sin β)(1 + sin β)) (β within ±90°): a square root instead of a second
-    // trigonometric call, within a few ulps of Math.cos while |sin β| < 0.99 (the relative error is
-    // about 1e-16 / cos² β ≤ 6e-15); Math.cos near the zenith.
-    const cosBeta = sinBeta < 0.99 && sinBeta > -0.99 ? Math.sqrt((1 - sinBeta) * (1 + sinBeta)) : Math.cos(betaRad);
+    // The sun's sines and cosines come with the sun path (from its topocentric vector, within a few
+    // ulps of Math.sin / Math.cos of the columns); those of γ = surface azimuth − sun azimuth by the
+    // difference formulas, the surface's once.
+    const sinBeta = sinAlt[i];
+    const cosBeta = cosAlt[i];
     const gamma = wrapDifference180(surfAz - s); // horizontal shadow angle (src/core/shading.ts convention)
-    const gammaRad = gamma * RAD;
-    const sinGamma = Math.sin(gammaRad);
-    // cos γ likewise, negative behind the wall (|γ| > 90°).
-    const cosGamma =
-      sinGamma < 0.99 && sinGamma > -0.99 ? (gamma < 90 && gamma > -90 ? 1 : -1) * Math.sqrt((1 - sinGamma) * (1 + sinGamma)) : Math.cos(gammaRad);
+    const sinGamma = sinSurf * cosAz[i] - cosSurf * sinAz[i];
+    const cosGamma = cosSurf * cosAz[i] + sinSurf * sinAz[i];
     const cosTheta = sinBeta * cosTilt + cosBeta * sinTilt * cosGamma; // D&B Eq. 1.6.3
     const theta = acosClamped(cosTheta) * DEG;
     // D&B Eq. 1.9.1a, Ω = atan2(sin β, cos β cos γ), by one atan of the ratio: with the second

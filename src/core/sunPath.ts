@@ -14,13 +14,16 @@
  * computed directly once a day and carried hour to hour by rotation; the parallax step uses the
  * vector form of the SPA's Eq. 36–41 (the sun's geocentric direction scaled by its distance in
  * Earth radii, 1/sin ξ, minus the observer's position (x, 0, y); algebraically identical); altitude
- * and azimuth are atan2 of the vector's components by an inlined series (error < 1e-10 rad). The
- * hourly work runs as short passes over the year (interpolation, vector, angles), which the engine
- * runs much faster than one long loop body. tests/core/sunPath.test.ts shows agreement with
+ * and azimuth are atan2 of the vector's components by an inlined series (within a few ulps of
+ * Math.atan2), and the refraction's tangent comes from the same components (no Math.tan). On request
+ * the sines and cosines of altitude and azimuth are taken from the vector too (callers then need no
+ * Math.sin / Math.cos per hour). The hourly work runs as short passes over the year (interpolation,
+ * vector, angles), each pass a function of its own, which the engine runs much faster than one long
+ * loop body. tests/core/sunPath.test.ts shows agreement with
  * {@link sunPosition} within 1e-4° over full years at several latitudes (measured: altitude
  * ≤ 4e-7°, azimuth ≤ 7e-6° near the zenith).
  */
-import { DEG, RAD, atan2Fast } from './angles';
+import { DEG, RAD } from './angles';
 import { SunpaneError } from './errors';
 import { RISE_SET_ALTITUDE, requireSite, resolveSunOptions, spaGeocentricSeries } from './sun';
 import { civilToSerial, deltaTAt, hoursInYear, julianDay, requireUtcOffset, requireYear, serialToUtcMs } from './time';
@@ -63,6 +66,14 @@ export interface SunPathYear {
   declination: Float64Array;
   /** Equation of time [min]. */
   equationOfTime: Float64Array;
+  /**
+   * With `options.trig`: sine and cosine of `altitude` and of `azimuth`, from the topocentric vector
+   * (within a few ulps of Math.sin / Math.cos of the columns); otherwise undefined.
+   */
+  sinAltitude: Float64Array | undefined;
+  cosAltitude: Float64Array | undefined;
+  sinAzimuth: Float64Array | undefined;
+  cosAzimuth: Float64Array | undefined;
 }
 
 export interface SunPathOptions {
@@ -70,6 +81,20 @@ export interface SunPathOptions {
   at?: 'middle' | 'end';
   /** ΔT = TT − UT [s], −100…10000; default Espenak & Meeus (2006) per day. */
   deltaT?: number;
+  /**
+   * Also the sines and cosines of altitude and azimuth: `true` in fresh columns, or in the given
+   * columns (each at least `hours` long; e.g. columns of the caller's that it overwrites row by row
+   * after reading them). Default false (no trig columns).
+   */
+  trig?: boolean | SunTrigColumns;
+}
+
+/** Columns for the sines and cosines of the sun's altitude and azimuth, one value per hour. */
+export interface SunTrigColumns {
+  sinAltitude: Float64Array;
+  cosAltitude: Float64Array;
+  sinAzimuth: Float64Array;
+  cosAzimuth: Float64Array;
 }
 
 /**
@@ -79,7 +104,8 @@ export interface SunPathOptions {
  * @param site - latitude [°] −90…90, longitude [°] −180…180, utcOffset [h] −12…14, and optional
  *   elevation [m], pressure [hPa], temperature [°C] as for {@link sunPosition}
  * @param options - `at`: `middle` (default) evaluates the sun at the middle of each hour, `end` at the
- *   stamp; `deltaT` [s]
+ *   stamp; `deltaT` [s]; `trig`: also the sines and cosines of altitude and azimuth (`true`: fresh
+ *   columns; or columns to fill, each at least as long as the year has hours)
  * @returns typed arrays, one value per hour; at night the altitude is simply negative
  * @remarks NREL SPA (Reda & Andreas 2008) with the slow terms computed every second day and
  *   interpolated by quintic Lagrange interpolation; agrees with the direct algorithm within 1e-4°. Errors name the
@@ -94,6 +120,9 @@ export function annualSunPath(year: number, site: Site, options: SunPathOptions 
   requireUtcOffset(utcOffset, 'site.utcOffset');
   const at = options.at ?? 'middle';
   if (at !== 'middle' && at !== 'end') throw new SunpaneError('at', at, 'must be "middle" or "end"');
+  const trig = options.trig ?? false;
+  if (typeof trig !== 'boolean' && !isTrigColumns(trig, hoursInYear(year)))
+    throw new SunpaneError('trig', trig, 'must be true, false or four Float64Array columns (sinAltitude, cosAltitude, sinAzimuth, cosAzimuth) as long as the year');
   const o = resolveSunOptions({ elevation: site.elevation, pressure: site.pressure, temperature: site.temperature, deltaT: options.deltaT }, 'site.');
 
   const hours = hoursInYear(year);
@@ -137,10 +166,25 @@ export function annualSunPath(year: number, site: Site, options: SunPathOptions 
   const zenith = new Float64Array(hours);
   const declination = new Float64Array(hours);
   const equationOfTime = new Float64Array(hours);
-  // The result is built before the hourly loop: code after a loop that the engine optimises while it
-  // runs (on-stack replacement) has no type feedback yet, and an object literal there made every
-  // fresh optimisation bail out at the end of the call.
-  const result: SunPathYear = { year, hours, stampSerial, altitude, azimuth, zenith, declination, equationOfTime };
+  const given = typeof trig === 'object' ? trig : undefined;
+  const sinAltitude = given ? given.sinAltitude : trig ? new Float64Array(hours) : undefined;
+  const cosAltitude = given ? given.cosAltitude : trig ? new Float64Array(hours) : undefined;
+  const sinAzimuth = given ? given.sinAzimuth : trig ? new Float64Array(hours) : undefined;
+  const cosAzimuth = given ? given.cosAzimuth : trig ? new Float64Array(hours) : undefined;
+  const result: SunPathYear = {
+    year,
+    hours,
+    stampSerial,
+    altitude,
+    azimuth,
+    zenith,
+    declination,
+    equationOfTime,
+    sinAltitude,
+    cosAltitude,
+    sinAzimuth,
+    cosAzimuth,
+  };
 
   // Hour i lies at node position (hourOffset + i) / HOURS_PER_STEP (a whole number of quarter hours
   // past the first node, so the split into segment and fraction is exact).
@@ -151,11 +195,69 @@ export function annualSunPath(year: number, site: Site, options: SunPathOptions 
   interpolateHourly(declNode, hourOffset, hours, declination);
   interpolateHourly(eotNode, hourOffset, hours, equationOfTime);
 
-  // Pass 1: hour angle and the topocentric vector. Its up, horizontal, westward and southward
-  // components are parked in altitude, zenith, azimuth and SOUTH_SCRATCH for pass 2 (short loops
-  // with independent iterations run much faster than one long loop body).
-  const [rad, cos15, sin15] = [RAD, COS_15, SIN_15];
-  const south = SOUTH_SCRATCH;
+  // The hourly passes are functions of their own: a loop that the engine optimises while it runs
+  // (on-stack replacement) leaves the code after it without type feedback, and a property read there
+  // (a module import, an option) made the optimised annualSunPath bail out on every call.
+  hourlyVectors(hours, startSerial, yearStartMs, shiftMs, longitude, sinLat, cosLat, x, y, g, a, b, stampSerial, altitude, zenith, azimuth, SOUTH_SCRATCH);
+  const refractionScale = ((o.pressure / 1010) * (283 / (273 + o.temperature)) * 1.02) / 60; // Eq. 42, constant part
+  if (sinAltitude && cosAltitude && sinAzimuth && cosAzimuth)
+    hourlyAnglesWithTrig(hours, refractionScale, altitude, zenith, azimuth, SOUTH_SCRATCH, sinAltitude, cosAltitude, sinAzimuth, cosAzimuth);
+  else hourlyAngles(hours, refractionScale, altitude, zenith, azimuth, SOUTH_SCRATCH);
+  return result;
+}
+
+/** Whether `value` holds the four trig columns, Float64Arrays of at least `hours` entries. */
+function isTrigColumns(value: unknown, hours: number): value is SunTrigColumns {
+  if (value === null || typeof value !== 'object') return false;
+  const v = value as Record<string, unknown>;
+  return [v.sinAltitude, v.cosAltitude, v.sinAzimuth, v.cosAzimuth].every((c) => c instanceof Float64Array && c.length >= hours);
+}
+
+/**
+ * Pass 1 of {@link annualSunPath}: hour angle and the topocentric vector per hour. Its up,
+ * horizontal, westward and southward components are parked in `up`, `horizontal`, `west` and
+ * `south` for pass 2 (short loops with independent iterations run much faster than one long loop
+ * body).
+ * @param hours - number of hours
+ * @param startSerial - local serial of the start of the year
+ * @param yearStartMs - UTC time of the start of the year [ms since 1970]
+ * @param shiftMs - where in the hour the sun is evaluated [ms]
+ * @param longitude - site longitude [°]
+ * @param sinLat - sine of the latitude
+ * @param cosLat - cosine of the latitude
+ * @param x - observer's distance from the Earth's axis [Earth radii] (SPA Eq. 34, 35)
+ * @param y - observer's distance from the equatorial plane [Earth radii]
+ * @param g - per hour, α − Δψ cos ε [°]
+ * @param a - per hour, cos δ / sin ξ
+ * @param b - per hour, sin δ / sin ξ
+ * @param stampSerial - filled with the row stamps
+ * @param up - filled with the up component
+ * @param horizontal - filled with the horizontal length
+ * @param west - filled with the westward component
+ * @param south - filled with the southward component
+ */
+function hourlyVectors(
+  hours: number,
+  startSerial: number,
+  yearStartMs: number,
+  shiftMs: number,
+  longitude: number,
+  sinLat: number,
+  cosLat: number,
+  x: number,
+  y: number,
+  g: Float64Array,
+  a: Float64Array,
+  b: Float64Array,
+  stampSerial: Float64Array,
+  up: Float64Array,
+  horizontal: Float64Array,
+  west: Float64Array,
+  south: Float64Array,
+): void {
+  const rad = RAD;
+  const cos15 = COS_15;
+  const sin15 = SIN_15;
   // cos and sin of the hour angle: directly every 24 hours, by rotation through one hour in between.
   let cosH = 1;
   let sinH = 0;
@@ -190,26 +292,159 @@ export function annualSunPath(year: number, site: Site, options: SunPathOptions 
     const vy = a[i] * sinH;
     const vz = b[i] - y;
     const s = vx * sinLat - vz * cosLat;
-    altitude[i] = sinLat * vz + cosLat * vx; // up
-    zenith[i] = sqrt(vy * vy + s * s); // horizontal
-    azimuth[i] = vy;
+    up[i] = sinLat * vz + cosLat * vx;
+    horizontal[i] = sqrt(vy * vy + s * s);
+    west[i] = vy;
     south[i] = s;
   }
+}
 
-  // Pass 2: altitude (Eq. 41, as atan2 of the up and horizontal components), refraction (Eq. 42, 43
-  // as in refractionSpa: none below −(0.26667 + 0.5667)°), zenith (Eq. 44), azimuth (Eq. 45, 46).
+/**
+ * Pass 2 of {@link annualSunPath}: altitude (Eq. 41, as atan2 of the up and horizontal
+ * components), refraction (Eq. 42, 43 as in refractionSpa: none below −(0.26667 + 0.5667)°), zenith
+ * (Eq. 44), azimuth (Eq. 45, 46), written over the components of pass 1.
+ * @param hours - number of hours
+ * @param refractionScale - constant part of Eq. 42 [°]
+ * @param altitude - in: up component; out: altitude [°]
+ * @param zenith - in: horizontal length; out: zenith angle [°]
+ * @param azimuth - in: westward component; out: azimuth [°], [0, 360)
+ * @param south - southward component
+ */
+function hourlyAngles(hours: number, refractionScale: number, altitude: Float64Array, zenith: Float64Array, azimuth: Float64Array, south: Float64Array): void {
   const deg = DEG;
-  const refractionScale = ((o.pressure / 1010) * (283 / (273 + o.temperature)) * 1.02) / 60; // Eq. 42, constant part
   const refractionFrom = RISE_SET_ALTITUDE;
   for (let i = 0; i < hours; i++) {
-    const e0 = atan2Fast(altitude[i], zenith[i]) * deg;
-    const e = e0 < refractionFrom ? e0 : e0 + refractionScale / tan((e0 + 10.3 / (e0 + 5.11)) * rad);
+    const u = altitude[i];
+    const h = zenith[i];
+    const e0 = atan2Precise(u, h) * deg;
+    const e = e0 < refractionFrom ? e0 : e0 + refractionFromComponents(refractionScale, u, h, e0);
     altitude[i] = e;
     zenith[i] = 90 - e;
-    const az = atan2Fast(azimuth[i], south[i]) * deg + 180;
+    const az = atan2Precise(azimuth[i], south[i]) * deg + 180;
     azimuth[i] = az >= 360 ? az - 360 : az;
   }
-  return result;
+}
+
+/**
+ * {@link hourlyAngles} that also writes the sines and cosines of altitude and azimuth, taken from the
+ * components (sin e₀ = up / r, cos e₀ = horizontal / r; sin A = −west / horizontal, cos A = −south /
+ * horizontal, as A = atan2(west, south) + 180°) and turned through the refraction Δe by its sine and
+ * cosine (Taylor to Δe⁵ and Δe⁴; |Δe| < 0.02 rad, truncation < 1e-17). Since the angle columns come
+ * from {@link atan2Precise} (error < 1e-16 rad), these agree with Math.sin / Math.cos of the columns
+ * within a few ulps. With the sun exactly overhead (horizontal 0) the azimuth is 180° as in
+ * {@link hourlyAngles}: sine 0, cosine −1.
+ * @param hours - number of hours
+ * @param refractionScale - constant part of Eq. 42 [°]
+ * @param altitude - in: up component; out: altitude [°]
+ * @param zenith - in: horizontal length; out: zenith angle [°]
+ * @param azimuth - in: westward component; out: azimuth [°], [0, 360)
+ * @param south - southward component
+ * @param sinAlt - filled with sin(altitude)
+ * @param cosAlt - filled with cos(altitude)
+ * @param sinAz - filled with sin(azimuth)
+ * @param cosAz - filled with cos(azimuth)
+ */
+function hourlyAnglesWithTrig(
+  hours: number,
+  refractionScale: number,
+  altitude: Float64Array,
+  zenith: Float64Array,
+  azimuth: Float64Array,
+  south: Float64Array,
+  sinAlt: Float64Array,
+  cosAlt: Float64Array,
+  sinAz: Float64Array,
+  cosAz: Float64Array,
+): void {
+  const deg = DEG;
+  const rad = RAD;
+  const refractionFrom = RISE_SET_ALTITUDE;
+  for (let i = 0; i < hours; i++) {
+    const u = altitude[i];
+    const h = zenith[i];
+    const inverseR = 1 / sqrt(u * u + h * h);
+    const sin0 = u * inverseR;
+    const cos0 = h * inverseR;
+    const e0 = atan2Precise(u, h) * deg;
+    if (e0 < refractionFrom) {
+      altitude[i] = e0;
+      zenith[i] = 90 - e0;
+      sinAlt[i] = sin0;
+      cosAlt[i] = cos0;
+    } else {
+      const r = refractionFromComponents(refractionScale, u, h, e0); // Eq. 43 [°]
+      const e = e0 + r;
+      altitude[i] = e;
+      zenith[i] = 90 - e;
+      const rRad = r * rad;
+      const r2 = rRad * rRad;
+      const sinR = rRad * (1 - r2 * (1 / 6 - r2 / 120));
+      const cosR = 1 - r2 * (0.5 - r2 / 24);
+      sinAlt[i] = sin0 * cosR + cos0 * sinR;
+      cosAlt[i] = cos0 * cosR - sin0 * sinR;
+    }
+    const west = azimuth[i];
+    const s = south[i];
+    const az = atan2Precise(west, s) * deg + 180;
+    azimuth[i] = az >= 360 ? az - 360 : az;
+    if (h > 0) {
+      const inverseH = 1 / h;
+      sinAz[i] = -west * inverseH;
+      cosAz[i] = -s * inverseH;
+    } else {
+      sinAz[i] = 0;
+      cosAz[i] = -1;
+    }
+  }
+}
+
+/**
+ * Atmospheric refraction of the SPA, Eq. 43: Δe = scale / tan(e₀ + 10.3 / (e₀ + 5.11)) [°], for
+ * e₀ ≥ −(0.26667 + 0.5667)°, without a call to Math.tan: with d = 10.3 / (e₀ + 5.11) [°] and
+ * tan e₀ = up / horizontal, 1 / tan(e₀ + d) = (horizontal − up · tan d) / (up + horizontal · tan d)
+ * (the denominator is (up² + horizontal²)^½ · sin(e₀ + d) / cos d, positive for these e₀), tan d
+ * by its series to d¹¹ (d ≤ 2.41° = 0.042 rad: truncation below 1e-20).
+ * @param scale - constant part of Eq. 42 [°]
+ * @param up - up component of the topocentric vector
+ * @param horizontal - horizontal length of the topocentric vector, ≥ 0
+ * @param e0 - the altitude without refraction [°], atan2(up, horizontal), at least −0.83337°
+ * @returns the refraction Δe [°]
+ */
+function refractionFromComponents(scale: number, up: number, horizontal: number, e0: number): number {
+  const d = (10.3 / (e0 + 5.11)) * RAD;
+  const d2 = d * d;
+  const tanD = d * (1 + d2 * (1 / 3 + d2 * (2 / 15 + d2 * (17 / 315 + d2 * (62 / 2835 + d2 * (1382 / 155_925))))));
+  return (scale * (horizontal - up * tanD)) / (up + horizontal * tanD);
+}
+
+/**
+ * atan2(y, x) [rad] in [−π, π] as Math.atan2 within a few ulps (0 when both are ±0), inlined in the
+ * hourly loops instead of Math.atan2 (which the engine calls out of line). Accurate enough that the
+ * sines and cosines taken from the components match the angles (see {@link hourlyAnglesWithTrig}).
+ * @param y - ordinate, any finite value
+ * @param x - abscissa, any finite value
+ * @returns the angle [rad]
+ * @remarks With t = min(|x|, |y|) / max(|x|, |y|): above tan 15°, atan t = 30° + atan((√3 t − 1)/(√3 + t));
+ *   then the Maclaurin series to u²⁵ (|u| ≤ tan 15° = 0.268: truncation below u²⁷/27 < 2e-17). One
+ *   copy of the series, so that the engine inlines the function twice into a loop.
+ */
+function atan2Precise(y: number, x: number): number {
+  const ax = x < 0 ? -x : x;
+  const ay = y < 0 ? -y : y;
+  if (ax === 0 && ay === 0) return 0;
+  const steep = ay > ax;
+  let t = steep ? ax / ay : ay / ax;
+  let base = 0;
+  if (t > 0.2679491924311227) {
+    t = (1.7320508075688772 * t - 1) / (1.7320508075688772 + t); // √3 = 1.7320508075688772
+    base = Math.PI / 6;
+  }
+  const u2 = t * t;
+  const tail = u2 * (1 / 17 + u2 * (-1 / 19 + u2 * (1 / 21 + u2 * (-1 / 23 + u2 / 25))));
+  let r = base + t * (1 + u2 * (-1 / 3 + u2 * (1 / 5 + u2 * (-1 / 7 + u2 * (1 / 9 + u2 * (-1 / 11 + u2 * (1 / 13 + u2 * (-1 / 15 + tail))))))));
+  if (steep) r = Math.PI / 2 - r;
+  if (x < 0) r = Math.PI - r;
+  return y < 0 ? -r : r;
 }
 
 /** Per-hour scratch columns (a year has at most 8784 hours); reused, since one call runs at a time. */
