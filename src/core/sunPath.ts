@@ -23,7 +23,7 @@
  * {@link sunPosition} within 1e-4° over full years at several latitudes (measured: altitude
  * ≤ 4e-7°, azimuth ≤ 7e-6° near the zenith).
  */
-import { DEG, RAD } from './angles';
+import { DEG, RAD, atan2Fast } from './angles';
 import { SunpaneError } from './errors';
 import { RISE_SET_ALTITUDE, requireSite, resolveSunOptions, spaGeocentricSeries } from './sun';
 import { civilToSerial, deltaTAt, hoursInYear, julianDay, requireUtcOffset, requireYear, serialToUtcMs } from './time';
@@ -316,11 +316,11 @@ function hourlyAngles(hours: number, refractionScale: number, altitude: Float64A
   for (let i = 0; i < hours; i++) {
     const u = altitude[i];
     const h = zenith[i];
-    const e0 = atan2Precise(u, h) * deg;
+    const e0 = atan2Fast(u, h) * deg;
     const e = e0 < refractionFrom ? e0 : e0 + refractionFromComponents(refractionScale, u, h, e0);
     altitude[i] = e;
     zenith[i] = 90 - e;
-    const az = atan2Precise(azimuth[i], south[i]) * deg + 180;
+    const az = atan2Fast(azimuth[i], south[i]) * deg + 180;
     azimuth[i] = az >= 360 ? az - 360 : az;
   }
 }
@@ -330,7 +330,7 @@ function hourlyAngles(hours: number, refractionScale: number, altitude: Float64A
  * components (sin e₀ = up / r, cos e₀ = horizontal / r; sin A = −west / horizontal, cos A = −south /
  * horizontal, as A = atan2(west, south) + 180°) and turned through the refraction Δe by its sine and
  * cosine (Taylor to Δe⁵ and Δe⁴; |Δe| < 0.02 rad, truncation < 1e-17). Since the angle columns come
- * from {@link atan2Precise} (error < 1e-16 rad), these agree with Math.sin / Math.cos of the columns
+ * from {@link atan2Fast} (error < 1e-16 rad), these agree with Math.sin / Math.cos of the columns
  * within a few ulps. With the sun exactly overhead (horizontal 0) the azimuth is 180° as in
  * {@link hourlyAngles}: sine 0, cosine −1.
  * @param hours - number of hours
@@ -365,7 +365,7 @@ function hourlyAnglesWithTrig(
     const inverseR = 1 / sqrt(u * u + h * h);
     const sin0 = u * inverseR;
     const cos0 = h * inverseR;
-    const e0 = atan2Precise(u, h) * deg;
+    const e0 = atan2Fast(u, h) * deg;
     if (e0 < refractionFrom) {
       altitude[i] = e0;
       zenith[i] = 90 - e0;
@@ -385,7 +385,7 @@ function hourlyAnglesWithTrig(
     }
     const west = azimuth[i];
     const s = south[i];
-    const az = atan2Precise(west, s) * deg + 180;
+    const az = atan2Fast(west, s) * deg + 180;
     azimuth[i] = az >= 360 ? az - 360 : az;
     if (h > 0) {
       const inverseH = 1 / h;
@@ -415,36 +415,6 @@ function refractionFromComponents(scale: number, up: number, horizontal: number,
   const d2 = d * d;
   const tanD = d * (1 + d2 * (1 / 3 + d2 * (2 / 15 + d2 * (17 / 315 + d2 * (62 / 2835 + d2 * (1382 / 155_925))))));
   return (scale * (horizontal - up * tanD)) / (up + horizontal * tanD);
-}
-
-/**
- * atan2(y, x) [rad] in [−π, π] as Math.atan2 within a few ulps (0 when both are ±0), inlined in the
- * hourly loops instead of Math.atan2 (which the engine calls out of line). Accurate enough that the
- * sines and cosines taken from the components match the angles (see {@link hourlyAnglesWithTrig}).
- * @param y - ordinate, any finite value
- * @param x - abscissa, any finite value
- * @returns the angle [rad]
- * @remarks With t = min(|x|, |y|) / max(|x|, |y|): above tan 15°, atan t = 30° + atan((√3 t − 1)/(√3 + t));
- *   then the Maclaurin series to u²⁵ (|u| ≤ tan 15° = 0.268: truncation below u²⁷/27 < 2e-17). One
- *   copy of the series, so that the engine inlines the function twice into a loop.
- */
-function atan2Precise(y: number, x: number): number {
-  const ax = x < 0 ? -x : x;
-  const ay = y < 0 ? -y : y;
-  if (ax === 0 && ay === 0) return 0;
-  const steep = ay > ax;
-  let t = steep ? ax / ay : ay / ax;
-  let base = 0;
-  if (t > 0.2679491924311227) {
-    t = (1.7320508075688772 * t - 1) / (1.7320508075688772 + t); // √3 = 1.7320508075688772
-    base = Math.PI / 6;
-  }
-  const u2 = t * t;
-  const tail = u2 * (1 / 17 + u2 * (-1 / 19 + u2 * (1 / 21 + u2 * (-1 / 23 + u2 / 25))));
-  let r = base + t * (1 + u2 * (-1 / 3 + u2 * (1 / 5 + u2 * (-1 / 7 + u2 * (1 / 9 + u2 * (-1 / 11 + u2 * (1 / 13 + u2 * (-1 / 15 + tail))))))));
-  if (steep) r = Math.PI / 2 - r;
-  if (x < 0) r = Math.PI - r;
-  return y < 0 ? -r : r;
 }
 
 /** Per-hour scratch columns (a year has at most 8784 hours); reused, since one call runs at a time. */
