@@ -17,7 +17,8 @@
  */
 import { SunpaneError, requireRange } from './errors';
 import { glassArea as glassAreaOf, interiorAttenuationOf, shgcCurve, type ShgcCurve } from './glazing';
-import { hasShading, radiantFractionOf, validateWindowSpec } from './windowSpec';
+import { hasShading } from './shading';
+import { radiantFractionOf, validateWindowSpec } from './windowSpec';
 import { sunlitFraction, skylineSkyViewFactor } from './shading';
 import { ashraeClearSky, decomposeErbs, ineichenPerezClearSky, planeIrradiance } from './sky';
 import { sunPosition, type SunOptions } from './sun';

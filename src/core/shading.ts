@@ -70,10 +70,50 @@ export interface WindowOpening {
   height: number;
 }
 
-/** Overhang field names as they appear in errors and in the worksheet functions. */
-const OVERHANG_NAMES = { projection: 'overhangProjection', gap: 'overhangGap', extensionLeft: 'overhangExtensionLeft', extensionRight: 'overhangExtensionRight' } as const;
-const LEFT_FIN_NAMES = { projection: 'leftFinProjection', gap: 'leftFinGap', extensionAbove: 'leftFinExtensionAbove', extensionBelow: 'leftFinExtensionBelow' } as const;
-const RIGHT_FIN_NAMES = { projection: 'rightFinProjection', gap: 'rightFinGap', extensionAbove: 'rightFinExtensionAbove', extensionBelow: 'rightFinExtensionBelow' } as const;
+/** The argument names errors give for each field of a shading description. */
+export interface ShadingNames {
+  shading: string;
+  overhang: { projection: string; gap: string; extensionLeft: string; extensionRight: string };
+  leftFin: { projection: string; gap: string; extensionAbove: string; extensionBelow: string };
+  rightFin: { projection: string; gap: string; extensionAbove: string; extensionBelow: string };
+  revealDepth: string;
+  skyline: string;
+}
+
+/** The flat names of the worksheet functions (`overhangProjection`, `leftFinGap`, …). */
+export const FLAT_SHADING_NAMES: ShadingNames = {
+  shading: 'shading',
+  overhang: { projection: 'overhangProjection', gap: 'overhangGap', extensionLeft: 'overhangExtensionLeft', extensionRight: 'overhangExtensionRight' },
+  leftFin: { projection: 'leftFinProjection', gap: 'leftFinGap', extensionAbove: 'leftFinExtensionAbove', extensionBelow: 'leftFinExtensionBelow' },
+  rightFin: { projection: 'rightFinProjection', gap: 'rightFinGap', extensionAbove: 'rightFinExtensionAbove', extensionBelow: 'rightFinExtensionBelow' },
+  revealDepth: 'revealDepth',
+  skyline: 'skyline',
+};
+
+/** The path names of a window description (`shading.overhang.projection`, `shading.leftFin.gap`, …). */
+export const PATH_SHADING_NAMES: ShadingNames = {
+  shading: 'shading',
+  overhang: { projection: 'shading.overhang.projection', gap: 'shading.overhang.gap', extensionLeft: 'shading.overhang.extensionLeft', extensionRight: 'shading.overhang.extensionRight' },
+  leftFin: { projection: 'shading.leftFin.projection', gap: 'shading.leftFin.gap', extensionAbove: 'shading.leftFin.extensionAbove', extensionBelow: 'shading.leftFin.extensionBelow' },
+  rightFin: { projection: 'shading.rightFin.projection', gap: 'shading.rightFin.gap', extensionAbove: 'shading.rightFin.extensionAbove', extensionBelow: 'shading.rightFin.extensionBelow' },
+  revealDepth: 'shading.revealDepth',
+  skyline: 'shading.skyline',
+};
+
+const OVERHANG_NAMES = FLAT_SHADING_NAMES.overhang;
+
+/** An optional bound on every device length, with its unit, for callers that work in real units (a window description in metres). */
+export interface LengthLimit {
+  max: number;
+  unit: string;
+}
+
+/** A device length: ≥ 0 (or any sign for extensions), finite, and within ±limit.max when a limit is given. */
+function requireLength(argument: string, value: number, signed: boolean, limit?: LengthLimit): void {
+  if (limit) requireRange(argument, value, signed ? -limit.max : 0, limit.max, limit.unit);
+  else if (signed) requireFinite(argument, value);
+  else requireRange(argument, value, 0, undefined);
+}
 
 /**
  * Checks a window opening.
@@ -87,15 +127,16 @@ export function requireWindowOpening(window: WindowOpening): WindowOpening {
 }
 
 /** Checks an overhang for a window of width `width`. Errors name `overhangProjection`, `overhangGap`, `overhangExtensionLeft`, `overhangExtensionRight`. */
-export function requireOverhang(overhang: Overhang, width: number): Overhang {
-  requireRange(OVERHANG_NAMES.projection, overhang.projection, 0, undefined);
-  requireRange(OVERHANG_NAMES.gap, overhang.gap, 0, undefined);
-  requireFinite(OVERHANG_NAMES.extensionLeft, overhang.extensionLeft);
-  requireFinite(OVERHANG_NAMES.extensionRight, overhang.extensionRight);
+export function requireOverhang(overhang: Overhang, width: number, names: ShadingNames['overhang'] = OVERHANG_NAMES, limit?: LengthLimit): Overhang {
+  if (overhang === null || typeof overhang !== 'object') throw new SunpaneError(names.projection, overhang, 'must be an overhang (projection, gap, extensionLeft, extensionRight)');
+  requireLength(names.projection, overhang.projection, false, limit);
+  requireLength(names.gap, overhang.gap, false, limit);
+  requireLength(names.extensionLeft, overhang.extensionLeft, true, limit);
+  requireLength(names.extensionRight, overhang.extensionRight, true, limit);
   if (width + overhang.extensionLeft + overhang.extensionRight < 0) {
     // Name the extension that cuts more: it is the one most likely mistyped.
     const left = overhang.extensionLeft <= overhang.extensionRight;
-    const name = left ? OVERHANG_NAMES.extensionLeft : OVERHANG_NAMES.extensionRight;
+    const name = left ? names.extensionLeft : names.extensionRight;
     const other = left ? overhang.extensionRight : overhang.extensionLeft;
     throw new SunpaneError(name, left ? overhang.extensionLeft : overhang.extensionRight, `must be at least ${-(width + other)}`, 'the overhang width, window width + left + right extension, must not be negative');
   }
@@ -103,11 +144,12 @@ export function requireOverhang(overhang: Overhang, width: number): Overhang {
 }
 
 /** Checks a fin for a window of height `height`; `names` gives the argument names for errors. */
-function requireFin(fin: Fin, height: number, names: typeof LEFT_FIN_NAMES | typeof RIGHT_FIN_NAMES): Fin {
-  requireRange(names.projection, fin.projection, 0, undefined);
-  requireRange(names.gap, fin.gap, 0, undefined);
-  requireFinite(names.extensionAbove, fin.extensionAbove);
-  requireFinite(names.extensionBelow, fin.extensionBelow);
+function requireFin(fin: Fin, height: number, names: ShadingNames['leftFin'], limit?: LengthLimit): Fin {
+  if (fin === null || typeof fin !== 'object') throw new SunpaneError(names.projection, fin, 'must be a fin (projection, gap, extensionAbove, extensionBelow)');
+  requireLength(names.projection, fin.projection, false, limit);
+  requireLength(names.gap, fin.gap, false, limit);
+  requireLength(names.extensionAbove, fin.extensionAbove, true, limit);
+  requireLength(names.extensionBelow, fin.extensionBelow, true, limit);
   if (height + fin.extensionAbove + fin.extensionBelow < 0) {
     const above = fin.extensionAbove <= fin.extensionBelow;
     const name = above ? names.extensionAbove : names.extensionBelow;
@@ -118,18 +160,24 @@ function requireFin(fin: Fin, height: number, names: typeof LEFT_FIN_NAMES | typ
 }
 
 /**
- * Checks a complete shading description for a window. Errors name the flat argument names used
- * by the worksheet functions: `overhangProjection`, `leftFinGap`, `revealDepth`, `skyline`, …
+ * Checks a complete shading description for a window. Errors name the fields by `names`: the
+ * worksheet functions' flat names by default (`overhangProjection`, `leftFinGap`, `revealDepth`,
+ * `skyline`, …), or a window description's paths ({@link PATH_SHADING_NAMES}).
  */
-export function requireShading(window: WindowOpening, shading: Shading): Shading {
+export function requireShading(window: WindowOpening, shading: Shading, names: ShadingNames = FLAT_SHADING_NAMES, limit?: LengthLimit): Shading {
   requireWindowOpening(window);
-  if (shading === null || typeof shading !== 'object') throw new SunpaneError('shading', shading, 'must be a shading description (an object, {} for none)');
-  if (shading.overhang) requireOverhang(shading.overhang, window.width);
-  if (shading.leftFin) requireFin(shading.leftFin, window.height, LEFT_FIN_NAMES);
-  if (shading.rightFin) requireFin(shading.rightFin, window.height, RIGHT_FIN_NAMES);
-  if (shading.revealDepth !== undefined) requireRange('revealDepth', shading.revealDepth, 0, undefined);
-  if (shading.skyline !== undefined) requireSkyline(shading.skyline);
+  if (shading === null || typeof shading !== 'object') throw new SunpaneError(names.shading, shading, 'must be a shading description (an object, {} for none)');
+  if (shading.overhang !== undefined) requireOverhang(shading.overhang, window.width, names.overhang, limit);
+  if (shading.leftFin !== undefined) requireFin(shading.leftFin, window.height, names.leftFin, limit);
+  if (shading.rightFin !== undefined) requireFin(shading.rightFin, window.height, names.rightFin, limit);
+  if (shading.revealDepth !== undefined) requireLength(names.revealDepth, shading.revealDepth, false, limit);
+  if (shading.skyline !== undefined) requireSkyline(shading.skyline, names.skyline);
   return shading;
+}
+
+/** True when the shading set holds any device or a skyline (a reveal of depth 0 is none). */
+export function hasShading(shading: Shading): boolean {
+  return shading.overhang !== undefined || shading.leftFin !== undefined || shading.rightFin !== undefined || (shading.revealDepth ?? 0) > 0 || shading.skyline !== undefined;
 }
 
 /**
@@ -139,8 +187,7 @@ export function requireShading(window: WindowOpening, shading: Shading): Shading
  * @throws SunpaneError naming `surfaceTilt` when tilt ≠ 90° and any device or skyline is given
  */
 export function requireVerticalForShading(surfaceTilt: number, shading: Shading): void {
-  const any = shading.overhang || shading.leftFin || shading.rightFin || (shading.revealDepth ?? 0) > 0 || shading.skyline;
-  if (any && surfaceTilt !== 90) {
+  if (hasShading(shading) && surfaceTilt !== 90) {
     throw new SunpaneError('surfaceTilt', surfaceTilt, 'must be 90 ° (a vertical wall) when shading devices or a skyline are given');
   }
 }

@@ -6,7 +6,8 @@
 import { SunpaneError, requireRange } from './errors';
 import { LINKE_MAX, LINKE_MIN, TAU_B_MAX, TAU_D_MAX } from './sky';
 import { hoursInYear, requireYear } from './time';
-import type { Fin, Glazing, Shading, Site, SkyModel, Weather, WindowSpec } from './window';
+import { PATH_SHADING_NAMES, requireShading, requireVerticalForShading } from './shading';
+import type { Glazing, Shading, Site, SkyModel, Weather, WindowSpec } from './window';
 
 /**
  * Default radiant fraction of the window gain: 1, all transmitted solar gain treated as radiant
@@ -63,46 +64,9 @@ function validateGlazing(glazing: Glazing): void {
   }
 }
 
-function validateFin(path: string, fin: Fin, height: number): void {
-  requireObject(path, fin);
-  requireRange(`${path}.projection`, fin.projection, 0, MAX_LENGTH, 'm');
-  requireRange(`${path}.gap`, fin.gap, 0, MAX_LENGTH, 'm');
-  requireRange(`${path}.extensionAbove`, fin.extensionAbove, -MAX_LENGTH, MAX_LENGTH, 'm');
-  requireRange(`${path}.extensionBelow`, fin.extensionBelow, -MAX_LENGTH, MAX_LENGTH, 'm');
-  if (height + fin.extensionAbove + fin.extensionBelow < 0) {
-    throw new SunpaneError(`${path}.extensionBelow`, fin.extensionBelow, `must leave the fin a length of at least 0 (height + extensionAbove + extensionBelow ≥ 0, here ${height} + ${fin.extensionAbove} + ${fin.extensionBelow})`);
-  }
-}
-
-/** True when the shading set holds any device or a skyline. */
-export function hasShading(shading: Shading): boolean {
-  return shading.overhang !== undefined || shading.leftFin !== undefined || shading.rightFin !== undefined || (shading.revealDepth ?? 0) > 0 || shading.skyline !== undefined;
-}
-
 function validateShading(shading: Shading, width: number, height: number, surfaceTilt: number): void {
-  requireObject('shading', shading);
-  const o = shading.overhang;
-  if (o !== undefined) {
-    requireObject('shading.overhang', o);
-    requireRange('shading.overhang.projection', o.projection, 0, MAX_LENGTH, 'm');
-    requireRange('shading.overhang.gap', o.gap, 0, MAX_LENGTH, 'm');
-    requireRange('shading.overhang.extensionLeft', o.extensionLeft, -MAX_LENGTH, MAX_LENGTH, 'm');
-    requireRange('shading.overhang.extensionRight', o.extensionRight, -MAX_LENGTH, MAX_LENGTH, 'm');
-    if (width + o.extensionLeft + o.extensionRight < 0) {
-      throw new SunpaneError('shading.overhang.extensionRight', o.extensionRight, `must leave the overhang a width of at least 0 (width + extensionLeft + extensionRight ≥ 0, here ${width} + ${o.extensionLeft} + ${o.extensionRight})`);
-    }
-  }
-  if (shading.leftFin !== undefined) validateFin('shading.leftFin', shading.leftFin, height);
-  if (shading.rightFin !== undefined) validateFin('shading.rightFin', shading.rightFin, height);
-  optionalRange('shading.revealDepth', shading.revealDepth, 0, MAX_LENGTH, 'm');
-  if (shading.skyline !== undefined) {
-    const s = shading.skyline;
-    if (!Array.isArray(s) || s.length < 1) throw new SunpaneError('shading.skyline', s, 'must be a list of at least one elevation angle');
-    for (let i = 0; i < s.length; i++) requireRange(`shading.skyline[${i}]`, s[i], 0, 90, '°');
-  }
-  if (hasShading(shading) && surfaceTilt !== 90) {
-    throw new SunpaneError('surfaceTilt', surfaceTilt, 'must be 90 (a vertical window) when shading devices or a skyline are given');
-  }
+  requireShading({ width, height }, shading, PATH_SHADING_NAMES, { max: MAX_LENGTH, unit: 'm' });
+  requireVerticalForShading(surfaceTilt, shading);
 }
 
 function validateMonthly(path: string, values: unknown, min: number, max: number, exclusiveMin: boolean): void {

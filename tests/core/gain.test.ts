@@ -137,9 +137,9 @@ describe('window description validation', () => {
     expect(refusal({ ...s, groundAlbedo: -0.1 })).toBe('groundAlbedo');
     expect(refusal({ ...s, skyModel: 'cloudy' })).toBe('skyModel');
     expect(refusal({ ...s, shading: { overhang: { projection: -1, gap: 0, extensionLeft: 0, extensionRight: 0 } } })).toBe('shading.overhang.projection');
-    expect(refusal({ ...s, shading: { overhang: { projection: 1, gap: 0, extensionLeft: -1.5, extensionRight: -1 } } })).toBe('shading.overhang.extensionRight');
+    expect(refusal({ ...s, shading: { overhang: { projection: 1, gap: 0, extensionLeft: -1.5, extensionRight: -1 } } })).toBe('shading.overhang.extensionLeft'); // the extension that cuts more
     expect(refusal({ ...s, shading: { leftFin: { projection: 1, gap: Number.NaN, extensionAbove: 0, extensionBelow: 0 } } })).toBe('shading.leftFin.gap');
-    expect(refusal({ ...s, shading: { skyline: [10, 95] } })).toBe('shading.skyline[1]');
+    expect(refusal({ ...s, shading: { skyline: [10, 95] } })).toBe('shading.skyline'); // message: value 2 is 95
     expect(refusal({ ...s, surfaceTilt: 30, shading: { revealDepth: 0.1 } })).toBe('surfaceTilt');
     expect(refusal({ ...s, weather: { kind: 'ashraeClearSky', tauB: [0.4, 0.5], tauD: [2.3] } })).toBe('weather.tauB');
     expect(refusal({ ...s, weather: { kind: 'ashraeClearSky', tauB: new Array(12).fill(0.4).map((v, i) => (i === 3 ? 0 : v)), tauD: new Array(12).fill(2) } })).toBe('weather.tauB[3]');

@@ -45,7 +45,7 @@ describe('gain worksheet functions', () => {
     expect(noSky.argument).toBe('tauB');
     const narrow = call('WINDOWGAIN', [...HOUR, ...GLASS, 0.5, 0, -1.5, -1])[0][0] as SunpaneError;
     expect(narrow).toBeInstanceOf(SunpaneError);
-    expect(narrow.argument).toBe('overhangExtensionRight');
+    expect(narrow.argument).toBe('overhangExtensionLeft'); // -1.5 cuts more than -1
     const tilted = call('WINDOWGAIN', [...HOUR, 2, 0.1, 0.2, 'perez', 45, 1, 0.5])[0][0] as SunpaneError;
     expect(tilted.argument).toBe('surfaceTilt');
   });
