@@ -29,8 +29,9 @@
 import { SunpaneError } from './errors';
 import { type PreparedWindow, monthlyValue, prepareWindow } from './gain';
 import { ashraeClearSky, decomposeErbs, extraterrestrialSpencer, ineichenPerezClearSky } from './sky';
-import { type PlaneParts, preparePlane } from './planeIrradiance';
-import { prepareShading } from './shading';
+import type { ShgcCurve } from './glazing';
+import { type PlaneParts, type PreparedPlane, preparePlane } from './planeIrradiance';
+import { type PreparedShading, prepareShading } from './shading';
 import { annualSunPath } from './sun';
 import { DEG, RAD, acosClamped, wrap180 } from './angles';
 import { daysInMonth } from './time';
@@ -119,15 +120,10 @@ export function annualOfPrepared(w: PreparedWindow): AnnualSeries {
   const { spec } = w;
   const n = w.hours;
   const col = () => new Float64Array(n);
-  // The sun path parks the sines and cosines of the sun's altitude and azimuth in four output
-  // columns that the hourly loop fills in every row, each row read before it is overwritten (no
-  // allocation for them).
-  const incidence = col();
-  const profileAngle = col();
-  const sunlitFraction = col();
-  const shgc = col();
-  const trig = { sinAltitude: incidence, cosAltitude: profileAngle, sinAzimuth: sunlitFraction, cosAzimuth: shgc };
-  const path = annualSunPath(spec.year, spec.site, { trig });
+  // The sun path writes the sines and cosines of the sun's altitude and azimuth into scratch
+  // columns of this module (no allocation for them; one call runs at a time).
+  const trig = { sinAltitude: SIN_ALT_SCRATCH, cosAltitude: COS_ALT_SCRATCH, sinAzimuth: SIN_GAMMA_SCRATCH, cosAzimuth: COS_GAMMA_SCRATCH };
+  const path = annualSunPath(spec.year, spec.site, { trig, slowColumns: false });
   if (path.hours !== n) throw new SunpaneError('year', spec.year, `sun path has ${path.hours} hours, expected ${n}`);
   // The sun path's columns are fresh arrays of this call: the series takes them over without copying.
   const out: AnnualSeries = {
@@ -138,15 +134,15 @@ export function annualOfPrepared(w: PreparedWindow): AnnualSeries {
     stampSerial: path.stampSerial,
     sunAltitude: path.altitude,
     sunAzimuth: path.azimuth,
-    incidence,
-    profileAngle,
-    sunlitFraction,
+    incidence: col(),
+    profileAngle: col(),
+    sunlitFraction: col(),
     dni: col(),
     dhi: col(),
     beam: col(),
     sky: col(),
     ground: col(),
-    shgc,
+    shgc: col(),
     gain: col(),
     radiant: col(),
     convective: col(),
@@ -154,44 +150,65 @@ export function annualOfPrepared(w: PreparedWindow): AnnualSeries {
   };
   fillWeather(w, path.altitude, path.zenith, out);
 
-  const { curve, vertical } = w;
-  const shgcDiffuse = curve.diffuse;
-  const k = w.glassArea * w.interiorAttenuation;
-  const fr = w.radiantFraction;
   const tilt = spec.surfaceTilt;
   const surfAz = spec.surfaceAzimuth;
   // Checked once here; per hour only the kernels run (the same ones the checked functions use).
-  const shade = vertical ? prepareShading({ width: spec.width, height: spec.height }, spec.shading, surfAz) : undefined;
+  const shade = w.vertical ? prepareShading({ width: spec.width, height: spec.height }, spec.shading, surfAz) : undefined;
   const plane = preparePlane({ surfaceTilt: tilt, surfaceAzimuth: surfAz, groundAlbedo: spec.groundAlbedo, skyModel: spec.skyModel, skyViewFactor: w.skyViewFactor });
   const dniExtra = new Float64Array(367);
   if (plane.needsDniExtra) for (let d = 1; d <= 366; d++) dniExtra[d] = extraterrestrialSpencer(d);
-  const parts: PlaneParts = { beam: 0, sky: 0, ground: 0, total: 0 };
-  const alt = path.altitude;
-  const az = path.azimuth;
-  const { dni: dniColumn, dhi: dhiColumn, missing, beam, sky, ground, gain, radiant, convective } = out;
-  const cosTilt = Math.cos(tilt * RAD);
-  const sinTilt = Math.sin(tilt * RAD);
-  const cosSurf = Math.cos(surfAz * RAD);
-  const sinSurf = Math.sin(surfAz * RAD);
-  const { sinAltitude: sinAlt, cosAltitude: cosAlt, sinAzimuth: sinAz, cosAzimuth: cosAz } = trig;
 
+  // Three short passes over the year, each a function of its own (as in src/core/sunPath.ts: short
+  // loops with few live values run much faster than one long loop body, and a function of its own
+  // keeps its type feedback): angles for every hour; shading and SHGC for the hours with the sun in
+  // front of the window; irradiance and gain for the hours with light.
+  hourlyAngles(n, Math.cos(tilt * RAD), Math.sin(tilt * RAD), Math.cos(surfAz * RAD), Math.sin(surfAz * RAD), out.incidence, out.profileAngle);
+  hourlyShading(n, shade, w.curve, surfAz, path.altitude, path.azimuth, out.incidence, out.sunlitFraction, out.shgc);
+  hourlyGain(n, plane, dniExtra, w.glassArea * w.interiorAttenuation, w.radiantFraction, w.curve.diffuse, path.altitude, out);
+  return out;
+}
+
+/**
+ * Per-hour scratch columns (a year has at most 8784 hours), reused since one call runs at a time:
+ * the sun's sin β and cos β (from the sun path), sin γ and cos γ (the sun path's sines and cosines
+ * of the azimuth, turned into those of γ in place), and cos θ.
+ */
+const SIN_ALT_SCRATCH = new Float64Array(8784);
+const COS_ALT_SCRATCH = new Float64Array(8784);
+const SIN_GAMMA_SCRATCH = new Float64Array(8784);
+const COS_GAMMA_SCRATCH = new Float64Array(8784);
+const COS_THETA_SCRATCH = new Float64Array(8784);
+
+/**
+ * Pass 1 of {@link annualOfPrepared}: incidence and profile angle of every hour, day and night.
+ * Same formulas as src/core/surface.ts incidenceAngle / profileAngle (D&B Eq. 1.6.3, 1.9.1a) with
+ * the surface's trig worked out once and without the per-call argument checks; the sun's sines and
+ * cosines come with the sun path (within a few ulps of Math.sin / Math.cos of its columns), those of
+ * γ = surface azimuth − sun azimuth by the difference formulas. Leaves sin γ, cos γ and cos θ in the
+ * scratch columns for the later passes.
+ * @param n - number of hours
+ * @param cosTilt - cos Σ
+ * @param sinTilt - sin Σ
+ * @param cosSurf - cos of the surface azimuth
+ * @param sinSurf - sin of the surface azimuth
+ * @param incidence - filled with θ [°], 0…180
+ * @param profileAngle - filled with Ω [°] (180, not −180, for the sun straight behind)
+ */
+function hourlyAngles(n: number, cosTilt: number, sinTilt: number, cosSurf: number, sinSurf: number, incidence: Float64Array, profileAngle: Float64Array): void {
+  const sinAlt = SIN_ALT_SCRATCH;
+  const cosAlt = COS_ALT_SCRATCH;
+  const sinG = SIN_GAMMA_SCRATCH; // in: sin of the sun azimuth; out: sin γ
+  const cosG = COS_GAMMA_SCRATCH; // in: cos of the sun azimuth; out: cos γ
+  const cosT = COS_THETA_SCRATCH;
+  const deg = DEG;
   for (let i = 0; i < n; i++) {
-    const a = alt[i];
-    const s = az[i];
-    const sunUp = a > 0;
-    // Incidence and profile angles with the surface's trig worked out once (same formulas as
-    // src/core/surface.ts incidenceAngle / profileAngle — D&B Eq. 1.6.3, 1.9.1a — without the
-    // per-call argument checks; the agreement tests with windowGainAt hold them together).
-    // The sun's sines and cosines come with the sun path (from its topocentric vector, within a few
-    // ulps of Math.sin / Math.cos of the columns); those of γ = surface azimuth − sun azimuth by the
-    // difference formulas, the surface's once.
     const sinBeta = sinAlt[i];
     const cosBeta = cosAlt[i];
-    const gamma = wrapDifference180(surfAz - s); // horizontal shadow angle (src/core/shading.ts convention)
-    const sinGamma = sinSurf * cosAz[i] - cosSurf * sinAz[i];
-    const cosGamma = cosSurf * cosAz[i] + sinSurf * sinAz[i];
+    const sinA = sinG[i];
+    const cosA = cosG[i];
+    const sinGamma = sinSurf * cosA - cosSurf * sinA;
+    const cosGamma = cosSurf * cosA + sinSurf * sinA;
     const cosTheta = sinBeta * cosTilt + cosBeta * sinTilt * cosGamma; // D&B Eq. 1.6.3
-    const theta = acosClamped(cosTheta) * DEG;
     // D&B Eq. 1.9.1a, Ω = atan2(sin β, cos β cos γ), by one atan of the ratio: with the second
     // argument above 0 that is what fdlibm's atan2 does (same value); below 0 (sun behind the wall)
     // atan2(y, x) = ±π − atan(y / −x), + for y ≥ 0 (within an ulp of π of atan2's value).
@@ -201,23 +218,82 @@ export function annualOfPrepared(w: PreparedWindow): AnnualSeries {
         ? Math.atan(sinBeta / horizontal)
         : horizontal < 0
           ? (sinBeta >= 0 ? Math.PI : -Math.PI) - Math.atan(sinBeta / -horizontal)
-          : Math.atan2(sinBeta, horizontal)) * DEG;
-    const front = sunUp && theta < 90;
-    // Geometry first, for every row (missing weather does not hide where the sun is).
-    const lit = !front ? 0 : shade !== undefined ? shade.sunlitInWallFrame(a, s, gamma, sinBeta, cosBeta, sinGamma, cosGamma) : 1;
-    const g = front ? curve.atAngle(theta) : 0;
-    incidence[i] = theta;
+          : Math.atan2(sinBeta, horizontal)) * deg;
+    sinG[i] = sinGamma;
+    cosG[i] = cosGamma;
+    cosT[i] = cosTheta;
+    incidence[i] = acosClamped(cosTheta) * deg;
     profileAngle[i] = omega === -180 ? 180 : omega;
-    sunlitFraction[i] = lit;
-    shgc[i] = g;
+  }
+}
 
+/**
+ * Pass 2 of {@link annualOfPrepared}: sunlit fraction and beam SHGC for the hours with the sun up and
+ * in front of the window (θ < 90°); other rows stay 0 (no shadow work with the sun down or behind
+ * the wall). Geometry for every such row, missing weather or not.
+ * @param n - number of hours
+ * @param shade - the prepared shading of a vertical window, or undefined (sunlit fraction 1)
+ * @param curve - the glazing's SHGC curve
+ * @param surfAz - surface azimuth [°]
+ * @param alt - sun altitude [°]
+ * @param az - sun azimuth [°]
+ * @param incidence - θ [°] from pass 1
+ * @param sunlitFraction - filled with the sunlit fraction, 0…1
+ * @param shgc - filled with SHGC(θ)
+ */
+function hourlyShading(
+  n: number,
+  shade: PreparedShading | undefined,
+  curve: ShgcCurve,
+  surfAz: number,
+  alt: Float64Array,
+  az: Float64Array,
+  incidence: Float64Array,
+  sunlitFraction: Float64Array,
+  shgc: Float64Array,
+): void {
+  const sinAlt = SIN_ALT_SCRATCH;
+  const cosAlt = COS_ALT_SCRATCH;
+  const sinG = SIN_GAMMA_SCRATCH;
+  const cosG = COS_GAMMA_SCRATCH;
+  for (let i = 0; i < n; i++) {
+    const a = alt[i];
+    const theta = incidence[i];
+    if (!(a > 0 && theta < 90)) continue;
+    const s = az[i];
+    const gamma = wrapDifference180(surfAz - s); // horizontal shadow angle (src/core/shading.ts convention)
+    sunlitFraction[i] = shade !== undefined ? shade.sunlitInWallFrame(a, s, gamma, sinAlt[i], cosAlt[i], sinG[i], cosG[i]) : 1;
+    shgc[i] = curve.atAngle(theta);
+  }
+}
+
+/**
+ * Pass 3 of {@link annualOfPrepared}: irradiance on the plane and gain for the hours with weather
+ * and light; missing and dark rows stay 0.
+ * @param n - number of hours
+ * @param plane - the prepared plane
+ * @param dniExtra - extraterrestrial normal irradiance by day of the year [W/m²] (index 1…366)
+ * @param k - glass area × interior attenuation [m²]
+ * @param fr - radiant fraction of the gain [-]
+ * @param shgcDiffuse - diffuse SHGC [-]
+ * @param alt - sun altitude [°]
+ * @param out - the series: reads dni, dhi, missing, sunlitFraction, shgc; fills beam, sky, ground, gain, radiant, convective
+ */
+function hourlyGain(n: number, plane: PreparedPlane, dniExtra: Float64Array, k: number, fr: number, shgcDiffuse: number, alt: Float64Array, out: AnnualSeries): void {
+  const { dni: dniColumn, dhi: dhiColumn, missing, sunlitFraction, shgc, beam, sky, ground, gain, radiant, convective } = out;
+  const sinAlt = SIN_ALT_SCRATCH;
+  const cosT = COS_THETA_SCRATCH;
+  const parts: PlaneParts = { beam: 0, sky: 0, ground: 0, total: 0 };
+  for (let i = 0; i < n; i++) {
     if (missing[i] === 1) continue;
     const dni = dniColumn[i];
     const dhi = dhiColumn[i];
+    const a = alt[i];
+    const sunUp = a > 0;
     if (dhi === 0 && (dni === 0 || !sunUp)) continue; // dark hour: irradiance and gain stay 0
-    plane.irradiance(parts, sunUp ? dni : 0, dhi, a, sinBeta, cosTheta, dniExtra[((i / 24) | 0) + 1]);
+    plane.irradiance(parts, sunUp ? dni : 0, dhi, a, sinAlt[i], cosT[i], dniExtra[((i / 24) | 0) + 1]);
     // Gain equation of src/core/gain.ts windowGainParts, inlined for the hourly path.
-    const q = k * (parts.beam * lit * g + (parts.sky + parts.ground) * shgcDiffuse);
+    const q = k * (parts.beam * sunlitFraction[i] * shgc[i] + (parts.sky + parts.ground) * shgcDiffuse);
     beam[i] = parts.beam;
     sky[i] = parts.sky;
     ground[i] = parts.ground;
@@ -225,7 +301,6 @@ export function annualOfPrepared(w: PreparedWindow): AnnualSeries {
     radiant[i] = fr * q;
     convective[i] = (1 - fr) * q;
   }
-  return out;
 }
 
 /**

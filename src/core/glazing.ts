@@ -175,24 +175,30 @@ export function diffuseShgcFromTable(table: AngleTable): number {
  * with the exact model to about 1e-5.
  */
 export function shgcCurve(glazing: Glazing): ShgcCurve {
+  let lookup: Float64Array;
   let model: (incidence: number) => number;
   let diffuse: number;
   if (glazing.angleTable !== undefined) {
     const { model: m, knots } = tableModel(requireAngleTable(glazing.angleTable, 'glazing.angleTable'));
     model = m;
     diffuse = hemisphericalAverage(m, knots);
+    lookup = emptyLookup(model);
   } else {
     const s = requireShgc('glazing.shgc', glazing.shgc);
     const n = requirePanes('glazing.panes', glazing.panes);
-    model = physicalModel(s, n);
-    diffuse = hemisphericalAverage(model);
+    // The physical model depends on these two numbers only: its lookup table and diffuse value are
+    // kept (a few recent glazings), so a window worked out again (e.g. its year, once per
+    // recalculation) does not redo the Fresnel integration or refill the table. Same values.
+    const key = `${s}|${n}`;
+    let kept = PHYSICAL_CURVES.get(key);
+    if (kept === undefined) {
+      const m = physicalModel(s, n);
+      kept = { model: m, lookup: emptyLookup(m), diffuse: hemisphericalAverage(m) };
+      if (PHYSICAL_CURVES.size >= PHYSICAL_CURVES_KEPT) PHYSICAL_CURVES.delete(PHYSICAL_CURVES.keys().next().value as string);
+      PHYSICAL_CURVES.set(key, kept);
+    }
+    ({ model, lookup, diffuse } = kept);
   }
-  const count = Math.round(90 / CURVE_STEP);
-  // The 0.1° table is filled on first use of each node (NaN = not yet worked out): a year of one
-  // window visits only the angles its sun reaches, and the values are the same model(k · 0.1°).
-  const lookup = new Float64Array(count + 2).fill(Number.NaN, 0, count);
-  // lookup[count] (90°) and lookup[count + 1] are 0.
-  lookup[0] = model(0);
   const atAngle = (incidence: number): number => {
     if (!(incidence >= 0 && incidence <= 180)) requireIncidence(incidence);
     if (incidence >= 90) return 0;
@@ -207,6 +213,23 @@ export function shgcCurve(glazing: Glazing): ShgcCurve {
   };
   return { atAngle, diffuse, normal: lookup[0] };
 }
+
+/**
+ * The 0.1° table of a model, filled on first use of each node (NaN = not yet worked out): a year of
+ * one window visits only the angles its sun reaches, and the values are the same model(k · 0.1°).
+ * lookup[count] (90°) and lookup[count + 1] are 0.
+ */
+function emptyLookup(model: (incidence: number) => number): Float64Array {
+  const count = Math.round(90 / CURVE_STEP);
+  const lookup = new Float64Array(count + 2).fill(Number.NaN, 0, count);
+  lookup[0] = model(0);
+  return lookup;
+}
+
+/** How many physical-model curves {@link shgcCurve} keeps (the oldest goes first). */
+const PHYSICAL_CURVES_KEPT = 16;
+/** Physical-model curves by "shgc|panes": the model, its 0.1° table (filled as used) and diffuse SHGC. */
+const PHYSICAL_CURVES = new Map<string, { model: (incidence: number) => number; lookup: Float64Array; diffuse: number }>();
 
 /**
  * The interior attenuation coefficient of a glazing (blinds, curtains): a multiplier on the gain.

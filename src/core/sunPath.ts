@@ -62,9 +62,9 @@ export interface SunPathYear {
   azimuth: Float64Array;
   /** Zenith angle, 90 − altitude [°]. */
   zenith: Float64Array;
-  /** Geocentric declination [°]. */
+  /** Geocentric declination [°]; empty (length 0) with `options.slowColumns` false. */
   declination: Float64Array;
-  /** Equation of time [min]. */
+  /** Equation of time [min]; empty (length 0) with `options.slowColumns` false. */
   equationOfTime: Float64Array;
   /**
    * With `options.trig`: sine and cosine of `altitude` and of `azimuth`, from the topocentric vector
@@ -87,6 +87,12 @@ export interface SunPathOptions {
    * after reading them). Default false (no trig columns).
    */
   trig?: boolean | SunTrigColumns;
+  /**
+   * Whether to fill the declination and equation-of-time columns (default true). A caller that uses
+   * only the sun's position (e.g. src/core/annual.ts) passes false and saves their interpolation and
+   * allocation; the two columns are then empty (length 0).
+   */
+  slowColumns?: boolean;
 }
 
 /** Columns for the sines and cosines of the sun's altitude and azimuth, one value per hour. */
@@ -105,7 +111,8 @@ export interface SunTrigColumns {
  *   elevation [m], pressure [hPa], temperature [°C] as for {@link sunPosition}
  * @param options - `at`: `middle` (default) evaluates the sun at the middle of each hour, `end` at the
  *   stamp; `deltaT` [s]; `trig`: also the sines and cosines of altitude and azimuth (`true`: fresh
- *   columns; or columns to fill, each at least as long as the year has hours)
+ *   columns; or columns to fill, each at least as long as the year has hours); `slowColumns`:
+ *   false leaves the declination and equation-of-time columns empty (default true)
  * @returns typed arrays, one value per hour; at night the altitude is simply negative
  * @remarks NREL SPA (Reda & Andreas 2008) with the slow terms computed every second day and
  *   interpolated by quintic Lagrange interpolation; agrees with the direct algorithm within 1e-4°. Errors name the
@@ -123,6 +130,8 @@ export function annualSunPath(year: number, site: Site, options: SunPathOptions 
   const trig = options.trig ?? false;
   if (typeof trig !== 'boolean' && !isTrigColumns(trig, hoursInYear(year)))
     throw new SunpaneError('trig', trig, 'must be true, false or four Float64Array columns (sinAltitude, cosAltitude, sinAzimuth, cosAzimuth) as long as the year');
+  const slowColumns = options.slowColumns ?? true;
+  if (typeof slowColumns !== 'boolean') throw new SunpaneError('slowColumns', slowColumns, 'must be true or false');
   const o = resolveSunOptions({ elevation: site.elevation, pressure: site.pressure, temperature: site.temperature, deltaT: options.deltaT }, 'site.');
 
   const hours = hoursInYear(year);
@@ -164,8 +173,8 @@ export function annualSunPath(year: number, site: Site, options: SunPathOptions 
   const altitude = new Float64Array(hours);
   const azimuth = new Float64Array(hours);
   const zenith = new Float64Array(hours);
-  const declination = new Float64Array(hours);
-  const equationOfTime = new Float64Array(hours);
+  const declination = new Float64Array(slowColumns ? hours : 0);
+  const equationOfTime = new Float64Array(slowColumns ? hours : 0);
   const given = typeof trig === 'object' ? trig : undefined;
   const sinAltitude = given ? given.sinAltitude : trig ? new Float64Array(hours) : undefined;
   const cosAltitude = given ? given.cosAltitude : trig ? new Float64Array(hours) : undefined;
@@ -192,8 +201,10 @@ export function annualSunPath(year: number, site: Site, options: SunPathOptions 
   const g = interpolateHourly(gNode, hourOffset, hours, G_SCRATCH);
   const a = interpolateHourly(aNode, hourOffset, hours, A_SCRATCH);
   const b = interpolateHourly(bNode, hourOffset, hours, B_SCRATCH);
-  interpolateHourly(declNode, hourOffset, hours, declination);
-  interpolateHourly(eotNode, hourOffset, hours, equationOfTime);
+  if (slowColumns) {
+    interpolateHourly(declNode, hourOffset, hours, declination);
+    interpolateHourly(eotNode, hourOffset, hours, equationOfTime);
+  }
 
   // The hourly passes are functions of their own: a loop that the engine optimises while it runs
   // (on-stack replacement) leaves the code after it without type feedback, and a property read there

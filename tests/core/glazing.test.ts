@@ -175,3 +175,24 @@ describe('SHGC curve lookup filled on first use', () => {
     expect(physical.normal).toBe(shgcAtAngle(0.6, 2, 0));
   });
 });
+
+describe('kept physical-model curves', () => {
+  test('a glazing prepared again gives the same values, diffuse SHGC and normal SHGC as the first time, also after other glazings pushed it out', () => {
+    const first = shgcCurve({ shgc: 0.55, panes: 3 });
+    const firstValues = [0, 12.34, 45.6, 70.05, 89.9].map((t) => first.atAngle(t));
+    for (let k = 0; k < 20; k++) shgcCurve({ shgc: 0.3 + k / 100, panes: 2 }); // more glazings than are kept
+    const again = shgcCurve({ shgc: 0.55, panes: 3 });
+    const secondValues = [0, 12.34, 45.6, 70.05, 89.9].map((t) => again.atAngle(t));
+    expect(secondValues).toEqual(firstValues);
+    expect(again.diffuse).toBe(first.diffuse);
+    expect(again.diffuse).toBe(diffuseShgc(0.55, 3));
+    expect(again.normal).toBe(shgcAtAngle(0.55, 3, 0));
+    // The table's values are the model's at the 0.1° nodes, interpolated in between (1e-4 as above).
+    for (const t of [12.34, 45.6, 70.05]) expect(Math.abs(again.atAngle(t) - shgcAtAngle(0.55, 3, t))).toBeLessThan(1e-4);
+  });
+
+  test('a kept curve still refuses a bad incidence angle, naming it', () => {
+    shgcCurve({ shgc: 0.61, panes: 2 });
+    expectError(() => shgcCurve({ shgc: 0.61, panes: 2 }).atAngle(-1), 'incidence');
+  });
+});

@@ -175,4 +175,19 @@ describe('annual sun path sines and cosines', () => {
     expect(Array.from(given.cosAzimuth)).toEqual(Array.from(fresh.cosAzimuth ?? []));
     expect(given.sinAltitude[8783]).toBe(7);
   });
+
+  test('with slowColumns false the position columns are the same numbers and the declination and equation-of-time columns are empty', () => {
+    const site: Site = { latitude: 47.4, longitude: 8.5, utcOffset: 1, elevation: 400 };
+    const full = annualSunPath(2024, site, { trig: true });
+    const fast = annualSunPath(2024, site, { trig: true, slowColumns: false });
+    expect(fast.hours).toBe(8784);
+    expect(fast.declination).toHaveLength(0);
+    expect(fast.equationOfTime).toHaveLength(0);
+    expect(full.declination).toHaveLength(8784);
+    for (const key of ['stampSerial', 'altitude', 'azimuth', 'zenith', 'sinAltitude', 'cosAltitude', 'sinAzimuth', 'cosAzimuth'] as const) {
+      expect(Array.from(fast[key] ?? [])).toEqual(Array.from(full[key] ?? []));
+    }
+    expect(() => annualSunPath(2024, site, { slowColumns: 'no' as unknown as boolean })).toThrow(SunpaneError);
+    expect(() => annualSunPath(2024, site, { slowColumns: 'no' as unknown as boolean })).toThrow(/^slowColumns/);
+  });
 });
