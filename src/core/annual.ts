@@ -155,8 +155,7 @@ export function annualOfPrepared(w: PreparedWindow): AnnualSeries {
   // Checked once here; per hour only the kernels run (the same ones the checked functions use).
   const shade = w.vertical ? prepareShading({ width: spec.width, height: spec.height }, spec.shading, surfAz) : undefined;
   const plane = preparePlane({ surfaceTilt: tilt, surfaceAzimuth: surfAz, groundAlbedo: spec.groundAlbedo, skyModel: spec.skyModel, skyViewFactor: w.skyViewFactor });
-  const dniExtra = new Float64Array(367);
-  if (plane.needsDniExtra) for (let d = 1; d <= 366; d++) dniExtra[d] = extraterrestrialSpencer(d);
+  const dniExtra = plane.needsDniExtra ? dniExtraByDay() : NO_DNI_EXTRA;
 
   // Three short passes over the year, each a function of its own (as in src/core/sunPath.ts: short
   // loops with few live values run much faster than one long loop body, and a function of its own
@@ -166,6 +165,23 @@ export function annualOfPrepared(w: PreparedWindow): AnnualSeries {
   hourlyShading(n, shade, w.curve, surfAz, path.altitude, path.azimuth, out.incidence, out.sunlitFraction, out.shgc);
   hourlyGain(n, plane, dniExtra, w.glassArea * w.interiorAttenuation, w.radiantFraction, w.curve.diffuse, path.altitude, out);
   return out;
+}
+
+/** Zeros by day of the year, for sky models that need no extraterrestrial irradiance. */
+const NO_DNI_EXTRA = new Float64Array(367);
+let dniExtraTable: Float64Array | undefined;
+
+/**
+ * Extraterrestrial normal irradiance by day of the year [W/m²], index 1…366 (Spencer 1971, as
+ * src/core/planeIrradiance.ts uses), worked out on first use and kept: it depends on the day only.
+ */
+function dniExtraByDay(): Float64Array {
+  if (dniExtraTable === undefined) {
+    const table = new Float64Array(367);
+    for (let d = 1; d <= 366; d++) table[d] = extraterrestrialSpencer(d);
+    dniExtraTable = table;
+  }
+  return dniExtraTable;
 }
 
 /**

@@ -209,7 +209,8 @@ export function annualSunPath(year: number, site: Site, options: SunPathOptions 
   // The hourly passes are functions of their own: a loop that the engine optimises while it runs
   // (on-stack replacement) leaves the code after it without type feedback, and a property read there
   // (a module import, an option) made the optimised annualSunPath bail out on every call.
-  hourlyVectors(hours, startSerial, yearStartMs, shiftMs, longitude, sinLat, cosLat, x, y, g, a, b, stampSerial, altitude, zenith, azimuth, SOUTH_SCRATCH);
+  hourlyHourAngles(hours, startSerial, yearStartMs, shiftMs, longitude, g, stampSerial);
+  hourlyVectors(hours, sinLat, cosLat, x, y, g, a, b, altitude, zenith, azimuth, SOUTH_SCRATCH);
   const refractionScale = ((o.pressure / 1010) * (283 / (273 + o.temperature)) * 1.02) / 60; // Eq. 42, constant part
   if (sinAltitude && cosAltitude && sinAzimuth && cosAzimuth)
     hourlyAnglesWithTrig(hours, refractionScale, altitude, zenith, azimuth, SOUTH_SCRATCH, sinAltitude, cosAltitude, sinAzimuth, cosAzimuth);
@@ -225,23 +226,38 @@ function isTrigColumns(value: unknown, hours: number): value is SunTrigColumns {
 }
 
 /**
- * Pass 1 of {@link annualSunPath}: hour angle and the topocentric vector per hour. Its up,
- * horizontal, westward and southward components are parked in `up`, `horizontal`, `west` and
- * `south` for pass 2 (short loops with independent iterations run much faster than one long loop
- * body).
+ * Pass 1 of {@link annualSunPath}: row stamps and the hour angle of every hour (kept apart from the
+ * vector pass: two short loops run faster than one long one).
  * @param hours - number of hours
  * @param startSerial - local serial of the start of the year
  * @param yearStartMs - UTC time of the start of the year [ms since 1970]
  * @param shiftMs - where in the hour the sun is evaluated [ms]
  * @param longitude - site longitude [°]
+ * @param g - in: per hour, α − Δψ cos ε [°]; out: the hour angle H [°], not reduced
+ * @param stampSerial - filled with the row stamps
+ */
+function hourlyHourAngles(hours: number, startSerial: number, yearStartMs: number, shiftMs: number, longitude: number, g: Float64Array, stampSerial: Float64Array): void {
+  for (let i = 0; i < hours; i++) {
+    stampSerial[i] = startSerial + (i + 1) / 24;
+    // Eq. 27 with 360.98564736629·D split as 360·frac(D) + 0.98564736629·D to keep H small and exact.
+    const days = (yearStartMs + i * MS_PER_HOUR + shiftMs) * (1 / MS_PER_DAY) - DAYS_UNIX_TO_J2000; // JD − 2451545
+    const jc = days * (1 / 36_525);
+    const nu0 = 280.46061837 + 360 * (days - floor(days)) + 0.98564736629 * days + jc * jc * (0.000387933 - jc / 38_710_000);
+    g[i] = nu0 + longitude - g[i]; // Eq. 28, 31 [°], not reduced
+  }
+}
+
+/**
+ * Pass 2 of {@link annualSunPath}: the topocentric vector per hour. Its up, horizontal, westward and
+ * southward components are parked in `up`, `horizontal`, `west` and `south` for pass 3.
+ * @param hours - number of hours
  * @param sinLat - sine of the latitude
  * @param cosLat - cosine of the latitude
  * @param x - observer's distance from the Earth's axis [Earth radii] (SPA Eq. 34, 35)
  * @param y - observer's distance from the equatorial plane [Earth radii]
- * @param g - per hour, α − Δψ cos ε [°]
+ * @param hourAngles - per hour, the hour angle [°] (pass 1)
  * @param a - per hour, cos δ / sin ξ
  * @param b - per hour, sin δ / sin ξ
- * @param stampSerial - filled with the row stamps
  * @param up - filled with the up component
  * @param horizontal - filled with the horizontal length
  * @param west - filled with the westward component
@@ -249,18 +265,13 @@ function isTrigColumns(value: unknown, hours: number): value is SunTrigColumns {
  */
 function hourlyVectors(
   hours: number,
-  startSerial: number,
-  yearStartMs: number,
-  shiftMs: number,
-  longitude: number,
   sinLat: number,
   cosLat: number,
   x: number,
   y: number,
-  g: Float64Array,
+  hourAngles: Float64Array,
   a: Float64Array,
   b: Float64Array,
-  stampSerial: Float64Array,
   up: Float64Array,
   horizontal: Float64Array,
   west: Float64Array,
@@ -274,12 +285,7 @@ function hourlyVectors(
   let sinH = 0;
   let previousHourAngle = 0;
   for (let i = 0; i < hours; i++) {
-    stampSerial[i] = startSerial + (i + 1) / 24;
-    // Eq. 27 with 360.98564736629·D split as 360·frac(D) + 0.98564736629·D to keep H small and exact.
-    const days = (yearStartMs + i * MS_PER_HOUR + shiftMs) * (1 / MS_PER_DAY) - DAYS_UNIX_TO_J2000; // JD − 2451545
-    const jc = days * (1 / 36_525);
-    const nu0 = 280.46061837 + 360 * (days - floor(days)) + 0.98564736629 * days + jc * jc * (0.000387933 - jc / 38_710_000);
-    const hourAngle = nu0 + longitude - g[i]; // Eq. 28, 31 [°], not reduced
+    const hourAngle = hourAngles[i];
     if (i % 24 === 0) {
       cosH = cos(hourAngle * rad);
       sinH = sin(hourAngle * rad);
@@ -311,9 +317,9 @@ function hourlyVectors(
 }
 
 /**
- * Pass 2 of {@link annualSunPath}: altitude (Eq. 41, as atan2 of the up and horizontal
+ * Pass 3 of {@link annualSunPath}: altitude (Eq. 41, as atan2 of the up and horizontal
  * components), refraction (Eq. 42, 43 as in refractionSpa: none below −(0.26667 + 0.5667)°), zenith
- * (Eq. 44), azimuth (Eq. 45, 46), written over the components of pass 1.
+ * (Eq. 44), azimuth (Eq. 45, 46), written over the components of pass 2.
  * @param hours - number of hours
  * @param refractionScale - constant part of Eq. 42 [°]
  * @param altitude - in: up component; out: altitude [°]
@@ -367,6 +373,21 @@ function hourlyAnglesWithTrig(
   sinAz: Float64Array,
   cosAz: Float64Array,
 ): void {
+  hourlyAltitudesWithTrig(hours, refractionScale, altitude, zenith, sinAlt, cosAlt);
+  hourlyAzimuthsWithTrig(hours, azimuth, south, sinAz, cosAz);
+}
+
+/**
+ * The altitude half of {@link hourlyAnglesWithTrig} (a pass of its own: two short loops run faster
+ * than one with both atan2 series). Reads the horizontal length from `zenith` before overwriting it.
+ * @param hours - number of hours
+ * @param refractionScale - constant part of Eq. 42 [°]
+ * @param altitude - in: up component; out: altitude [°]
+ * @param zenith - in: horizontal length; out: zenith angle [°]
+ * @param sinAlt - filled with sin(altitude)
+ * @param cosAlt - filled with cos(altitude)
+ */
+function hourlyAltitudesWithTrig(hours: number, refractionScale: number, altitude: Float64Array, zenith: Float64Array, sinAlt: Float64Array, cosAlt: Float64Array): void {
   const deg = DEG;
   const rad = RAD;
   const refractionFrom = RISE_SET_ALTITUDE;
@@ -394,8 +415,24 @@ function hourlyAnglesWithTrig(
       sinAlt[i] = sin0 * cosR + cos0 * sinR;
       cosAlt[i] = cos0 * cosR - sin0 * sinR;
     }
+  }
+}
+
+/**
+ * The azimuth half of {@link hourlyAnglesWithTrig}. The horizontal length is taken again from the
+ * west and south components (the same sum of squares pass 2 took, so the same number).
+ * @param hours - number of hours
+ * @param azimuth - in: westward component; out: azimuth [°], [0, 360)
+ * @param south - southward component
+ * @param sinAz - filled with sin(azimuth)
+ * @param cosAz - filled with cos(azimuth)
+ */
+function hourlyAzimuthsWithTrig(hours: number, azimuth: Float64Array, south: Float64Array, sinAz: Float64Array, cosAz: Float64Array): void {
+  const deg = DEG;
+  for (let i = 0; i < hours; i++) {
     const west = azimuth[i];
     const s = south[i];
+    const h = sqrt(west * west + s * s);
     const az = atan2Fast(west, s) * deg + 180;
     azimuth[i] = az >= 360 ? az - 360 : az;
     if (h > 0) {
