@@ -378,8 +378,11 @@ function hourlyAnglesWithTrig(
 }
 
 /**
- * The altitude half of {@link hourlyAnglesWithTrig} (a pass of its own: two short loops run faster
- * than one with both atan2 series). Reads the horizontal length from `zenith` before overwriting it.
+ * The altitude half of {@link hourlyAnglesWithTrig}, itself two passes (short loops run faster):
+ * the geometric altitude e₀ with its sine and cosine for every hour, then the refraction for the
+ * hours at or above −(0.26667 + 0.5667)°, from the same components as {@link hourlyAngles} (so the
+ * altitude is the same number with or without the trig columns): the first pass keeps the up
+ * component in a scratch column and leaves the horizontal length in `zenith`.
  * @param hours - number of hours
  * @param refractionScale - constant part of Eq. 42 [°]
  * @param altitude - in: up component; out: altitude [°]
@@ -389,32 +392,51 @@ function hourlyAnglesWithTrig(
  */
 function hourlyAltitudesWithTrig(hours: number, refractionScale: number, altitude: Float64Array, zenith: Float64Array, sinAlt: Float64Array, cosAlt: Float64Array): void {
   const deg = DEG;
-  const rad = RAD;
-  const refractionFrom = RISE_SET_ALTITUDE;
   for (let i = 0; i < hours; i++) {
     const u = altitude[i];
     const h = zenith[i];
     const inverseR = 1 / sqrt(u * u + h * h);
-    const sin0 = u * inverseR;
-    const cos0 = h * inverseR;
-    const e0 = atan2Fast(u, h) * deg;
+    sinAlt[i] = u * inverseR;
+    cosAlt[i] = h * inverseR;
+    altitude[i] = atan2Fast(u, h) * deg;
+    UP_SCRATCH[i] = u;
+  }
+  hourlyRefraction(hours, refractionScale, altitude, zenith, UP_SCRATCH, sinAlt, cosAlt);
+}
+
+/**
+ * Second pass of {@link hourlyAltitudesWithTrig}: refraction (Eq. 43) added to the altitude, its
+ * sine and cosine turned through Δe by Δe's sine and cosine (Taylor to Δe⁵ and Δe⁴; |Δe| < 0.02 rad,
+ * truncation < 1e-17), and the zenith angle (Eq. 44).
+ * @param hours - number of hours
+ * @param refractionScale - constant part of Eq. 42 [°]
+ * @param altitude - in: geometric altitude e₀ [°]; out: with refraction [°]
+ * @param zenith - in: horizontal length; out: zenith angle [°]
+ * @param up - up component
+ * @param sinAlt - in: sin e₀; out: sin(altitude)
+ * @param cosAlt - in: cos e₀; out: cos(altitude)
+ */
+function hourlyRefraction(hours: number, refractionScale: number, altitude: Float64Array, zenith: Float64Array, up: Float64Array, sinAlt: Float64Array, cosAlt: Float64Array): void {
+  const rad = RAD;
+  const refractionFrom = RISE_SET_ALTITUDE;
+  for (let i = 0; i < hours; i++) {
+    const e0 = altitude[i];
     if (e0 < refractionFrom) {
-      altitude[i] = e0;
       zenith[i] = 90 - e0;
-      sinAlt[i] = sin0;
-      cosAlt[i] = cos0;
-    } else {
-      const r = refractionFromComponents(refractionScale, u, h, e0); // Eq. 43 [°]
-      const e = e0 + r;
-      altitude[i] = e;
-      zenith[i] = 90 - e;
-      const rRad = r * rad;
-      const r2 = rRad * rRad;
-      const sinR = rRad * (1 - r2 * (1 / 6 - r2 / 120));
-      const cosR = 1 - r2 * (0.5 - r2 / 24);
-      sinAlt[i] = sin0 * cosR + cos0 * sinR;
-      cosAlt[i] = cos0 * cosR - sin0 * sinR;
+      continue;
     }
+    const r = refractionFromComponents(refractionScale, up[i], zenith[i], e0); // Eq. 43 [°]
+    const sin0 = sinAlt[i];
+    const cos0 = cosAlt[i];
+    const e = e0 + r;
+    altitude[i] = e;
+    zenith[i] = 90 - e;
+    const rRad = r * rad;
+    const r2 = rRad * rRad;
+    const sinR = rRad * (1 - r2 * (1 / 6 - r2 / 120));
+    const cosR = 1 - r2 * (0.5 - r2 / 24);
+    sinAlt[i] = sin0 * cosR + cos0 * sinR;
+    cosAlt[i] = cos0 * cosR - sin0 * sinR;
   }
 }
 
@@ -470,6 +492,7 @@ const G_SCRATCH = new Float64Array(8784);
 const A_SCRATCH = new Float64Array(8784);
 const B_SCRATCH = new Float64Array(8784);
 const SOUTH_SCRATCH = new Float64Array(8784);
+const UP_SCRATCH = new Float64Array(8784);
 
 /**
  * Monomial coefficients of the six Lagrange basis polynomials for the nodes −2, −1, 0, 1, 2, 3:
