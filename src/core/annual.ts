@@ -3,23 +3,29 @@
  * END of its hour with the sun at the middle of the hour (DESIGN.md), in typed-array columns.
  *
  * Same calculation as {@link windowGainAt} hour by hour (the tests hold them together), written for
- * speed: the sun path comes from {@link annualSunPath} (slow terms every second day, interpolated);
- * everything that does not change by the hour (SHGC curve, glass area, sky view factor, the shading
- * and the plane's checks, the day's extraterrestrial irradiance) is worked out once; per hour only
- * the kernels run that the checked functions share ({@link prepareShading}, {@link preparePlane}),
- * with the sun's sines and cosines taken from the sun path (which has them from its topocentric
- * vector, parked in output columns until their row is written), and nothing is allocated. Hours that cannot matter are skipped: no shading with the sun down or
- * behind the wall, no shadow work with the sun below the skyline, no sky model in the dark.
+ * speed: the sun path comes from {@link annualSunPath} (slow terms every second day, interpolated;
+ * without the declination and equation-of-time columns, which the series does not use); everything
+ * that does not change by the hour (SHGC curve, glass area, sky view factor, the shading and the
+ * plane's checks, the extraterrestrial irradiance by day) is worked out once; per hour only the
+ * kernels run that the checked functions share ({@link prepareShading}, {@link preparePlane}), with
+ * the sun's sines and cosines taken from the sun path (which has them from its topocentric vector),
+ * and nothing is allocated. The hourly work is three short passes, each a function of its own:
+ * angles (every hour), shading and SHGC (sun up and in front of the wall), irradiance and gain
+ * (hours with light). Hours that cannot matter are skipped: no shading with the sun down or behind
+ * the wall, no shadow work with the sun below the skyline, no sky model in the dark.
  * The shadow union is a closed form (src/core/shadowPlan.ts), the Kasten–Young power a tabulated
- * series (src/core/airMass.ts), the SHGC table filled on first use (src/core/glazing.ts).
+ * series (src/core/airMass.ts), the SHGC table filled on first use and kept per glazing
+ * (src/core/glazing.ts).
  * tests/core/preparedFast.test.ts holds every hour to the checked functions within 1e-12 (the
  * incidence angle within 1e-9 °: acos amplifies rounding near 0° and 180°).
  *
  * Speed (`npm run bench`, window_annual_vs_suncalc, on the shared 2-core machine): about 4.4 ms a
- * year two rounds ago, 2.2–2.5 ms (best of many runs) after the last, of which the sun path is
- * 0.75–0.9 ms; suncalc 2.0.2's bare getPosition for the same 8760 instants 2.0–2.5 ms. With the
- * sun's sines and cosines from the sun path: 5–7 % less than that in the same process (medians of
- * 300 interleaved rounds, 2.21–2.27 ms against 2.37–2.39 ms; 0.97–1.08 of suncalc).
+ * year three rounds ago, 2.2–2.5 ms two rounds ago; taking the sun's sines and cosines from the sun
+ * path saved 5–7 %. Last round (three passes here, shorter passes in the sun path, kept SHGC curves
+ * and extraterrestrial table, no declination / equation-of-time columns): 15–20 % less time than
+ * before in interleaved A/B runs against the previous code in the same process (400 rounds; the
+ * machine was shared and loaded, so absolute times varied 1.9–3.0 ms); `npm run bench` ratio 1.12
+ * before, about 0.93 after.
  *
  * Weather: clear-sky models (12 monthly values or one for the year) at each hour's sun; a supplied
  * DNI + DHI series; or a supplied GHI series split by Erbs et al. (1982). A non-finite value in a

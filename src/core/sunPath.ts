@@ -18,8 +18,9 @@
  * Math.atan2), and the refraction's tangent comes from the same components (no Math.tan). On request
  * the sines and cosines of altitude and azimuth are taken from the vector too (callers then need no
  * Math.sin / Math.cos per hour). The hourly work runs as short passes over the year (interpolation,
- * vector, angles), each pass a function of its own, which the engine runs much faster than one long
- * loop body. tests/core/sunPath.test.ts shows agreement with
+ * hour angle, vector, angles; with the trig columns altitude, refraction and azimuth each a pass of
+ * their own), each pass a function of its own, which the
+ * engine runs much faster than one long loop body. tests/core/sunPath.test.ts shows agreement with
  * {@link sunPosition} within 1e-4° over full years at several latitudes (measured: altitude
  * ≤ 4e-7°, azimuth ≤ 7e-6° near the zenith).
  */
