@@ -55,7 +55,7 @@ export interface Job {
  * round to round), so that a change in the machine's load during the measurement affects all of
  * them alike; returns each job's median. Used for every ratio against a peer library.
  */
-export function timeInterleaved(jobs: readonly Job[], repeats = 31, warmup = 7): Timing[] {
+export function timeInterleaved(jobs: readonly Job[], repeats = 101, warmup = 11): Timing[] {
   const times: number[][] = jobs.map(() => []);
   for (let round = 0; round < warmup + repeats; round++) {
     for (let k = 0; k < jobs.length; k++) {
