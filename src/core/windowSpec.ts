@@ -6,6 +6,7 @@
 import { SunpaneError, requireRange } from './errors';
 import { LINKE_MAX, LINKE_MIN, TAU_B_MAX, TAU_D_MAX } from './sky';
 import { hoursInYear, requireYear } from './time';
+import { requireAngleTable } from './glazing';
 import { PATH_SHADING_NAMES, requireShading, requireVerticalForShading } from './shading';
 import type { Glazing, Shading, Site, SkyModel, Weather, WindowSpec } from './window';
 
@@ -49,19 +50,7 @@ function validateGlazing(glazing: Glazing): void {
   requireRange('glazing.panes', glazing.panes, 1, 4, undefined, { integer: true });
   optionalRange('glazing.interiorAttenuation', glazing.interiorAttenuation, 0, 1);
   optionalRange('glazing.radiantFraction', glazing.radiantFraction, 0, 1);
-  const table = glazing.angleTable;
-  if (table === undefined) return;
-  requireObject('glazing.angleTable', table);
-  const { angles, values } = table;
-  if (!Array.isArray(angles) || angles.length < 1) throw new SunpaneError('glazing.angleTable.angles', angles, 'must be a list of at least one angle');
-  if (!Array.isArray(values) || values.length !== angles.length) {
-    throw new SunpaneError('glazing.angleTable.values', values, `must be a list of ${angles.length} values, one per angle`);
-  }
-  for (let i = 0; i < angles.length; i++) {
-    requireRange(`glazing.angleTable.angles[${i}]`, angles[i], 0, 90, '°');
-    if (i > 0 && !(angles[i] > angles[i - 1])) throw new SunpaneError(`glazing.angleTable.angles[${i}]`, angles[i], `must be above the angle before it (${angles[i - 1]} °): angles strictly ascending`);
-    requireRange(`glazing.angleTable.values[${i}]`, values[i], 0, 1);
-  }
+  if (glazing.angleTable !== undefined) requireAngleTable(glazing.angleTable, 'glazing.angleTable');
 }
 
 function validateShading(shading: Shading, width: number, height: number, surfaceTilt: number): void {
