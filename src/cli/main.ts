@@ -45,10 +45,6 @@ const COMMANDS: Record<string, Command> = {
   demo: { summary: 'write the demo workbook of an invented building (default folder out/demo)', run: guarded(demoCommand, DEMO_HELP) },
 };
 
-/** Registers a further command (used by the table / schedule / demo modules). */
-export function addCommand(name: string, command: Command): void {
-  COMMANDS[name] = command;
-}
 
 function usage(io: Output): void {
   io.out('usage: sunpane COMMAND [ARGS...]\n');

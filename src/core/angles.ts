@@ -4,22 +4,14 @@
  * Inverse cosine of 1.0000000002 is a classic NaN source; every inverse trig call in the core goes
  * through the clamped forms here.
  */
-const { PI, asin, acos, atan2 } = Math;
+const { PI, asin, acos } = Math;
 
 /** Radians per degree. */
 export const RAD = PI / 180;
 /** Degrees per radian. */
 export const DEG = 180 / PI;
 
-/** Degrees → radians. */
-export function toRad(deg: number): number {
-  return deg * RAD;
-}
 
-/** Radians → degrees. */
-export function toDeg(rad: number): number {
-  return rad * DEG;
-}
 
 /** asin with its argument clamped to [−1, 1] [rad]. */
 export function asinClamped(x: number): number {
@@ -43,10 +35,6 @@ export function wrap180(deg: number): number {
   return r > 180 ? r - 360 : r;
 }
 
-/** atan2 in degrees reduced to [0, 360). */
-export function atan2Deg360(y: number, x: number): number {
-  return wrap360(atan2(y, x) * DEG);
-}
 
 /**
  * atan2(y, x) [rad] in [−π, π] as Math.atan2 within a few ulps (0 when both are ±0), inlined in the

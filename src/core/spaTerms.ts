@@ -424,8 +424,7 @@ const FREQ_SIN = new Float64Array(EARTH.frequencies.length);
  */
 export const EARTH_FREQUENCY_MERGE_BOUND: readonly [number, number, number] = EARTH.mergeBound.map((b) => b / 1e8) as [number, number, number];
 
-/** Number of distinct frequencies, and of those needing Math.cos/Math.sin, per instant. */
-export const EARTH_FREQUENCY_COUNT = EARTH.frequencies.length;
+/** Number of distinct Earth frequencies needing Math.cos/Math.sin per instant. */
 export const EARTH_DIRECT_FREQUENCY_COUNT = EARTH.recipe.filter((_, k) => k % 4 === 1).filter((i) => i < 0).length;
 
 function seriesSum(s: number): number {

@@ -171,10 +171,6 @@ export function julianDay(utcMs: number): number {
   return utcMs / MS_PER_DAY + JD_UNIX_EPOCH;
 }
 
-/** UTC instant of a Julian day (UT). */
-export function julianDayToUtcMs(jd: number): number {
-  return (jd - JD_UNIX_EPOCH) * MS_PER_DAY;
-}
 
 /**
  * ΔT = TT − UT [s] by the polynomial expressions of Espenak & Meeus (2006), *Five Millennium Canon

@@ -69,7 +69,3 @@ export function filled<T>(rows: number, columns: number, value: T): T[][] {
   return out;
 }
 
-/** Approximate size of a request body for `values` [bytes], as JSON. */
-export function jsonSize(values: unknown): number {
-  return JSON.stringify(values).length;
-}
