@@ -4,11 +4,11 @@
  * bare `getPosition` for the same 8760 instants, in the same run. The weather arrays are made once
  * from the ASHRAE clear-sky model outside the timed part.
  */
-import { annualSeries } from '../src/core/annual';
-import { ashraeClearSky } from '../src/core/sky';
-import { annualSunPath } from '../src/core/sun';
-import { serialToUtcMs } from '../src/core/time';
-import type { WindowSpec } from '../src/core/window';
+import { annualSeries } from '../src/core/gain/annual';
+import { ashraeClearSky } from '../src/core/sky/clearSky';
+import { annualSunPath } from '../src/core/sun/sunPath';
+import { serialToUtcMs } from '../src/core/time/calendar';
+import type { WindowSpec } from '../src/core/gain/window';
 import { type BenchSection, consume, ratio, timeInterleaved } from './harness';
 
 // eslint-disable-next-line @typescript-eslint/no-require-imports

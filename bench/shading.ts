@@ -7,15 +7,15 @@
  *   this comparison is generous to the reference. Ray casting is slow, so both are timed on the
  *   same subset of sun-facing hours and compared per evaluation;
  * - polygon-clipping 0.15.7's general union + intersection of the same shadow parallelograms (the
- *   alternative union method weighed in src/core/shading.ts), on all 8760 hours.
+ *   alternative union method weighed in src/core/shading/sunlit.ts), on all 8760 hours.
  *
  * Sun positions come from suncalc 2.0.2 (outside the timed part), so this bench does not depend on
  * Sunpane's own sun code. Ratio keys (ours / theirs, per evaluation): `shading_vs_raycast`,
  * `shading_vs_polygonclipping`.
  */
 import polygonClipping, { type Polygon } from 'polygon-clipping';
-import { sunlitFraction } from '../src/core/shading';
-import type { Shading } from '../src/core/window';
+import { sunlitFraction } from '../src/core/shading/sunlit';
+import type { Shading } from '../src/core/shading/types';
 import { RaycastScene, seededRandom } from '../tests/reference/raycast-scene';
 import { type BenchSection, type Timing, consume, timeIt } from './harness';
 
@@ -53,7 +53,7 @@ function yearOfSun(): { altitude: Float64Array; azimuth: Float64Array } {
   return { altitude, azimuth };
 }
 
-/** The same shadow geometry as src/core/shading.ts, as polygons for polygon-clipping (γ + = sun right). */
+/** The same shadow geometry as src/core/shading/sunlit.ts, as polygons for polygon-clipping (γ + = sun right). */
 function unionByPolygonClipping(altitude: number, azimuth: number): number {
   if (!(altitude > 0)) return 0;
   const g = ((((SURFACE_AZIMUTH - azimuth) % 360) + 540) % 360) - 180;

@@ -8,9 +8,10 @@
  * Ratios are ours / theirs of median times (below 1: we are faster).
  */
 import * as Astronomy from 'astronomy-engine';
-import { annualSunPath, sunPosition } from '../src/core/sun';
-import { civilToSerial, serialToUtcMs } from '../src/core/time';
-import type { Site } from '../src/core/window';
+import { annualSunPath } from '../src/core/sun/sunPath';
+import { sunPosition } from '../src/core/sun/spa';
+import { civilToSerial, serialToUtcMs } from '../src/core/time/calendar';
+import type { Site } from '../src/core/sun/site';
 import { type BenchSection, consume, ratio, timeInterleaved } from './harness';
 
 // eslint-disable-next-line @typescript-eslint/no-require-imports

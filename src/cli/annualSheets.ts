@@ -2,26 +2,10 @@
  * One window's year as output: the hourly columns (for CSV and for a workbook sheet), the monthly
  * summary sheet with native SUM/MAX formulas, and the day × hour heat map of the gain.
  */
-import type { AnnualSeries } from '../core/annual';
-import type { AnnualSummary } from '../core/annualSummary';
+import type { AnnualSeries, AnnualSummary } from '../core/gain';
 import { formatSerialIso } from '../core/time';
 import { csvLine, formatFixed } from './csv';
-import {
-  type ExcelJS,
-  NUMBER_FORMATS,
-  type TableCell,
-  type TableColumn,
-  type TablePlacement,
-  addColourScale,
-  addDataTable,
-  address,
-  fitOnOnePage,
-  freezeAt,
-  serialToCellDate,
-  setFormula,
-  setLabel,
-  styleHeader,
-} from './workbook';
+import { type ExcelJS, NUMBER_FORMATS, type TableCell, type TableColumn, type TablePlacement, addColourScale, addDataTable, address, fitOnOnePage, freezeAt, serialToCellDate, setFormula, setLabel, styleHeader } from './workbook';
 
 /** One hourly output column: header, number format, CSV decimals and where the value comes from. */
 interface HourlyColumn extends TableColumn {

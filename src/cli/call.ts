@@ -2,7 +2,7 @@
  * `sunpane list` and `sunpane call NAME ARG...`: any registered function, evaluated exactly as in a
  * worksheet cell.
  */
-import { SunpaneError } from '../core/errors';
+import { SunpaneError } from '../core/common';
 import { formatSerialIso } from '../core/time';
 import { applyFunction } from '../registry/evaluate';
 import { FUNCTIONS, findFunction, signature } from '../registry';

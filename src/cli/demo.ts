@@ -4,12 +4,10 @@
  * sheet of example Sunpane worksheet formulas with their results cached — and a short text summary.
  */
 import * as path from 'node:path';
-import { annualSeries } from '../core/annual';
-import { summarizeAnnual } from '../core/annualSummary';
-import { SunpaneError } from '../core/errors';
+import { annualSeries, summarizeAnnual, validateWindowSpec } from '../core/gain';
+import { SunpaneError } from '../core/common';
 import { glassArea } from '../core/glazing';
-import type { Shading } from '../core/window';
-import { validateWindowSpec } from '../core/windowSpec';
+import type { Shading } from '../core/shading';
 import { DEMO_BUILDING, DEMO_HOURLY_TAG, DEMO_YEAR, type DemoWindow, SHADING_OPTIONS, demoWindows } from '../demo/building';
 import { EXAMPLE_SITES, findExampleSite } from '../demo/sites';
 import type { Output } from './call';

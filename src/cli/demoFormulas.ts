@@ -8,7 +8,7 @@
  * Functions are looked up with `findFunction`, and arguments are given by parameter name, so a
  * renamed function or parameter makes the demo fail loudly rather than write a dead formula.
  */
-import { SunpaneError } from '../core/errors';
+import { SunpaneError } from '../core/common';
 import { civilToSerial } from '../core/time';
 import type { DemoWindow } from '../demo/building';
 import { applyFunction } from '../registry/evaluate';

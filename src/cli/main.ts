@@ -1,7 +1,7 @@
 /**
  * The `sunpane` command line: the same engine as the worksheet functions, without Excel.
  */
-import { SunpaneError } from '../core/errors';
+import { SunpaneError } from '../core/common';
 import { callCommand, listCommand, type Output } from './call';
 import { CliInputError, CliUsageError, EXIT_BAD_INPUT, EXIT_USAGE } from './cliError';
 import { DEMO_HELP, demoCommand } from './demo';

@@ -6,12 +6,9 @@
 import * as fs from 'node:fs';
 import * as path from 'node:path';
 import ExcelJS from 'exceljs';
-import { annualSeries } from '../core/annual';
-import { type AnnualSummary, summarizeAnnual } from '../core/annualSummary';
-import { SunpaneError } from '../core/errors';
+import { annualSeries, type AnnualSummary, summarizeAnnual, type Weather, type WindowSpec, validateWindowSpec } from '../core/gain';
+import { SunpaneError } from '../core/common';
 import { formatSerialIso } from '../core/time';
-import type { Weather, WindowSpec } from '../core/window';
-import { validateWindowSpec } from '../core/windowSpec';
 import type { Output } from './call';
 import { MONTHS } from './annualSheets';
 import { describeFsError, writeFileAtomic } from './atomicWrite';

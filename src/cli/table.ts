@@ -3,11 +3,8 @@
  * file, written as CSV or as a workbook (hourly table, monthly summary, heat map).
  */
 import * as path from 'node:path';
-import { type AnnualSeries, annualSeries } from '../core/annual';
-import { type AnnualSummary, summarizeAnnual } from '../core/annualSummary';
+import { type AnnualSeries, annualSeries, type AnnualSummary, summarizeAnnual, type WindowSpec, validateWindowSpec } from '../core/gain';
 import { formatSerialIso } from '../core/time';
-import type { WindowSpec } from '../core/window';
-import { validateWindowSpec } from '../core/windowSpec';
 import type { Output } from './call';
 import { addHeatMapSheet, addHourlySheet, addMonthlySheet, hourlyCsv } from './annualSheets';
 import { writeFileAtomic } from './atomicWrite';

@@ -17,8 +17,7 @@
  */
 import * as fs from 'node:fs';
 import { hoursInYear } from '../core/time';
-import { MAX_IRRADIANCE } from '../core/windowSpec';
-import type { Weather } from '../core/window';
+import { MAX_IRRADIANCE, type Weather } from '../core/gain';
 import { CliInputError, CliUsageError } from './cliError';
 import { describeFsError } from './atomicWrite';
 import { parseCsv, type CsvLine } from './csv';

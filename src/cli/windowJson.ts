@@ -47,8 +47,12 @@
  * ```
  */
 import * as fs from 'node:fs';
-import { SunpaneError } from '../core/errors';
-import type { Fin, Glazing, Overhang, Shading, Site, SkyModel, Weather, WindowSpec } from '../core/window';
+import { SunpaneError } from '../core/common';
+import type { Fin, Overhang, Shading } from '../core/shading';
+import type { Glazing } from '../core/glazing';
+import type { Site } from '../core/sun';
+import type { SkyModel } from '../core/sky';
+import type { Weather, WindowSpec } from '../core/gain';
 import { findExampleSite, EXAMPLE_SITES } from '../demo/sites';
 import { CliInputError } from './cliError';
 import { describeFsError } from './atomicWrite';

@@ -4,7 +4,8 @@
  * with windows facing all four ways and a few shading choices. Every number here is made up for the
  * demonstration (typical-looking, not from any real building or product).
  */
-import type { Shading, WindowSpec } from '../core/window';
+import type { Shading } from '../core/shading';
+import type { WindowSpec } from '../core/gain';
 import { type ExampleSite, findExampleSite } from './sites';
 
 /** Calendar year of the demo's hourly series. */

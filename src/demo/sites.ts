@@ -6,7 +6,7 @@
  * near-equatorial, southern temperate, beyond the Arctic Circle), and the turbidity values are
  * invented, typical-looking numbers for a clear-sky demonstration only. Do not use them for design.
  */
-import type { Site } from '../core/window';
+import type { Site } from '../core/sun';
 
 /** One invented example site. */
 export interface ExampleSite {

@@ -4,8 +4,8 @@
  * and overcast days, more diffuse light under cloud) but it is not a measurement of anywhere; never
  * use it for design.
  */
-import { ineichenPerezClearSky } from '../core/clearSky';
-import { annualSunPath } from '../core/sunPath';
+import { ineichenPerezClearSky } from '../core/sky';
+import { annualSunPath } from '../core/sun';
 import type { ExampleSite } from './sites';
 
 /** One invented year: stamps at the end of each hour and the two irradiance columns [W/m²]. */

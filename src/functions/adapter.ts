@@ -12,7 +12,7 @@
  * - anything else thrown → #VALUE! "internal error: ...": nothing escapes uncaught, and no NaN or
  *   Infinity ever reaches a cell.
  */
-import { SunpaneError } from '../core/errors';
+import { SunpaneError } from '../core/common';
 import { applyFunction } from '../registry/evaluate';
 import { NotAvailable, type FunctionDescriptor, type Matrix, type OutCell, type OutTable, type RawArg, type Scalar } from '../registry/types';
 

@@ -11,20 +11,9 @@
  * - `numberList` and `table` parameters take their whole range and are not broadcast;
  * - `spill` functions take single values for their broadcast parameters.
  */
-import { SunpaneError, rangeText, requireRange } from '../core/errors';
+import { SunpaneError, rangeText, requireRange } from '../core/common';
 import { parseIsoLocal, requireSerial } from '../core/time';
-import {
-  type ArgValue,
-  type Args,
-  type FunctionDescriptor,
-  type Matrix,
-  NotAvailable,
-  type OutCell,
-  type OutTable,
-  type ParamDescriptor,
-  type RawArg,
-  type Scalar,
-} from './types';
+import { type ArgValue, type Args, type FunctionDescriptor, type Matrix, NotAvailable, type OutCell, type OutTable, type ParamDescriptor, type RawArg, type Scalar } from './types';
 
 function isMatrix(raw: RawArg | undefined): raw is Matrix {
   return Array.isArray(raw);

@@ -5,15 +5,12 @@
  * Argument order: the essentials (when, where, which way, how big, which glass, which weather) come
  * first; the rest have defaults, and the shading group at the end defaults to "no device".
  */
-import { SunpaneError } from '../core/errors';
-import { annualSeries, type AnnualSeries } from '../core/annual';
-import { designDayPeaks } from '../core/designDay';
-import { windowGainAt } from '../core/gain';
-import { gainSteps } from '../core/gainSteps';
-import { coolingLoad, requireRadiantTimeFactors } from '../core/load';
+import { SunpaneError } from '../core/common';
+import { annualSeries, type AnnualSeries, windowGainAt, gainSteps, type Weather, type WindowSpec, DEFAULT_RADIANT_FRACTION, validateWindowSpec } from '../core/gain';
+import { designDayPeaks, coolingLoad, requireRadiantTimeFactors } from '../core/load';
 import { hoursInYear, serialToCivil } from '../core/time';
-import type { Shading, SkyModel, Weather, WindowSpec } from '../core/window';
-import { DEFAULT_RADIANT_FRACTION, validateWindowSpec } from '../core/windowSpec';
+import type { Shading } from '../core/shading';
+import type { SkyModel } from '../core/sky';
 import { GLOSSARY } from './glossary';
 import { type Args, type FunctionDescriptor, NotAvailable, type OutTable, type ParamDescriptor } from './types';
 

@@ -1,6 +1,6 @@
 /**
  * Worksheet-function descriptors: glazing — SHGC at an incidence angle (physical model or the user's
- * table), diffuse SHGC and glass area. The core computes (src/core/glazing.ts).
+ * table), diffuse SHGC and glass area. The core computes (src/core/glazing/shgc.ts).
  */
 import { diffuseShgc, diffuseShgcFromTable, glassArea, shgcAtAngle, shgcFromTable, TABLE_MIN_SPACING } from '../core/glazing';
 import { GLOSSARY } from './glossary';

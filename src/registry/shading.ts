@@ -1,16 +1,14 @@
 /**
  * Worksheet-function descriptors: sunlit fraction of a window behind an overhang, fins, a reveal and
  * a skyline; shadow depth and width of long devices; a month × hour sunlit mask. Every descriptor
- * reads its arguments and calls the core (src/core/shading.ts, src/core/shadingMask.ts).
+ * reads its arguments and calls the core (src/core/shading/sunlit.ts, src/core/shading/shadingMask.ts).
  *
  * Argument order: sun angles and surface azimuth, the window, then the devices, all optional with
  * defaults meaning "no device". Parameter names and ranges are the same as in the gain functions
  * (src/registry/gain.ts) so that one name means one thing.
  */
-import { SunpaneError } from '../core/errors';
-import { shadowDepth, shadowWidth, sunlitFraction, type WindowOpening } from '../core/shading';
-import { MASK_DEFAULT_YEAR, monthHourMask } from '../core/shadingMask';
-import type { Shading } from '../core/window';
+import { SunpaneError } from '../core/common';
+import { shadowDepth, shadowWidth, sunlitFraction, type WindowOpening, MASK_DEFAULT_YEAR, monthHourMask, type Shading } from '../core/shading';
 import { GLOSSARY } from './glossary';
 import { type Args, type FunctionDescriptor, NotAvailable, type ParamDescriptor } from './types';
 

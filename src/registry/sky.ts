@@ -1,21 +1,9 @@
 /**
  * Worksheet-function descriptors: sky irradiance — extraterrestrial irradiance, air mass, clear-sky
  * models, decomposition of global horizontal irradiance and irradiance on a window plane.
- * Descriptors read and check arguments; the core computes (src/core/sky.ts).
+ * Descriptors read and check arguments; the core computes (src/core/sky/index.ts).
  */
-import {
-  AIR_MASS_HORIZON,
-  GHI_MAX,
-  airMassKastenYoung,
-  ashraeClearSky,
-  ashraeVerticalDiffuseRatio,
-  decomposeErbs,
-  extraterrestrialIrradiance,
-  extraterrestrialSpencer,
-  ineichenPerezClearSky,
-  planeIrradiance,
-  type SkyModel,
-} from '../core/sky';
+import { AIR_MASS_HORIZON, GHI_MAX, airMassKastenYoung, ashraeClearSky, ashraeVerticalDiffuseRatio, decomposeErbs, extraterrestrialIrradiance, extraterrestrialSpencer, ineichenPerezClearSky, planeIrradiance, type SkyModel } from '../core/sky';
 import { GLOSSARY } from './glossary';
 import type { Args, FunctionDescriptor, ParamDescriptor } from './types';
 

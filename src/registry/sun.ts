@@ -1,11 +1,10 @@
 /**
  * Worksheet-function descriptors: sun position (NREL SPA), sunrise / solar noon / sunset, and the
  * angles between the sun and a surface. Every descriptor reads its arguments and calls the core
- * (src/core/sun.ts, src/core/surface.ts); none computes by itself.
+ * (src/core/sun/spa.ts, src/core/sun/surfaceAngles.ts); none computes by itself.
  */
 import { MAX_SERIAL_EXCLUSIVE, MIN_SERIAL, serialToUtcMs } from '../core/time';
-import { type SunOptions, type SunPosition, sunEvents, sunPosition } from '../core/sun';
-import { incidenceAngle, profileAngle, wallSolarAzimuth } from '../core/surface';
+import { type SunOptions, type SunPosition, sunEvents, sunPosition, incidenceAngle, profileAngle, wallSolarAzimuth } from '../core/sun';
 import { GLOSSARY } from './glossary';
 import { type Args, type FunctionDescriptor, NotAvailable, type ParamDescriptor } from './types';
 

@@ -3,7 +3,7 @@
  * Excel's functions.json, the CLI's `call` and `list`, the README reference and the fuzz tests are
  * all derived.
  */
-import type { SunpaneError } from '../core/errors';
+import type { SunpaneError } from '../core/common';
 
 /** One value as it comes from a cell or a CLI argument. `null` is a blank cell. */
 export type Scalar = number | string | boolean | null;

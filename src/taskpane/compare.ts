@@ -5,8 +5,9 @@
  * the unshaded window, and the mean shaded share of the glass over the hours the sun is in front
  * of the wall (1 − mean sunlit fraction, from the core's annual summary).
  */
-import { SunpaneError } from '../core/errors';
-import type { Shading, WindowSpec } from '../core/window';
+import { SunpaneError } from '../core/common';
+import type { Shading } from '../core/shading';
+import type { WindowSpec } from '../core/gain';
 import { readNumberText } from './spec';
 
 /** Most options compared at once. */

@@ -3,14 +3,10 @@
  * Nothing here computes physics; it only calls core functions and reshapes their results for the
  * sheet writer and the sun-path drawing.
  */
-import { type AnnualSeries, annualSeries } from '../core/annual';
-import { type AnnualSummary, summarizeAnnual } from '../core/annualSummary';
-import { shadingMaskGrid } from '../core/shadingMask';
-import { sunPosition } from '../core/sun';
-import { incidenceAngle } from '../core/surface';
+import { type AnnualSeries, annualSeries, type AnnualSummary, summarizeAnnual, type WindowSpec, validateWindowSpec } from '../core/gain';
+import { shadingMaskGrid, type Shading } from '../core/shading';
+import { sunPosition, incidenceAngle } from '../core/sun';
 import { civilToSerial, serialToUtcMs } from '../core/time';
-import type { Shading, WindowSpec } from '../core/window';
-import { validateWindowSpec } from '../core/windowSpec';
 import type { YearFigures } from './yearSheet';
 
 /** Checks a WindowSpec (throws SunpaneError naming the field path). */

@@ -3,8 +3,8 @@
  * the workbook's settings, and runs the actions — each builds WindowSpecs, calls the core through
  * engine.ts and writes to a new sheet through the Excel request context it is given.
  */
-import { SunpaneError } from '../core/errors';
-import type { WindowSpec } from '../core/window';
+import { SunpaneError } from '../core/common';
+import type { WindowSpec } from '../core/gain';
 import { COMPARE_FORMATS, COMPARE_HEADER, MAX_OPTIONS, OPTION_FIELDS, type ShadingOption, comparisonRows, optionSpecs } from './compare';
 import { makeReplaceDialog } from './dialog';
 import { byId, h } from './dom';

@@ -8,8 +8,8 @@
  * Any row with a missing or bad value is reported by row and column, and nothing is written until
  * every row is valid.
  */
-import { SunpaneError } from '../core/errors';
-import type { WindowSpec } from '../core/window';
+import { SunpaneError } from '../core/common';
+import type { WindowSpec } from '../core/gain';
 import { EXAMPLE_SITES } from '../demo/sites';
 import { SCHEDULE_COLUMNS, SITE_KEY, SKYLINE_KEY, type ScheduleColumn, columnForHeader, headerKey, matchHeaders, requiredColumns } from '../schedule/columns';
 import { FIELDS, type FieldDef, type FormValues, applyExampleSite, fieldForArgument } from './fields';

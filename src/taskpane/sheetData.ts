@@ -3,7 +3,7 @@
  * hourly weather columns, and a schedule table by name. Reading only; errors name the form field
  * (by its WindowSpec path) in the core's words.
  */
-import { SunpaneError } from '../core/errors';
+import { SunpaneError } from '../core/common';
 import { RANGE_ADDRESS_HELP, type RangeRef, parseRangeAddress } from './addresses';
 import type { FormValues } from './fields';
 import type { RunBatch } from './resultSheets';

@@ -4,8 +4,10 @@
  * core's validator as typed, so the messages are the core's, word for word the same as the
  * worksheet functions show.
  */
-import { SunpaneError } from '../core/errors';
-import type { AngleTable, Shading, Weather, WindowSpec } from '../core/window';
+import { SunpaneError } from '../core/common';
+import type { AngleTable } from '../core/glazing';
+import type { Shading } from '../core/shading';
+import type { Weather, WindowSpec } from '../core/gain';
 import { RANGE_ADDRESS_HELP, parseRangeAddress } from './addresses';
 import { FIELDS, FIELD_BY_ID, type FieldDef, type FormValues, fieldForArgument } from './fields';
 

@@ -2,7 +2,7 @@
  * The sun-path tab: draws the diagram for the window on the Window tab, with the shading mask of
  * the whole glass or of one chosen point of it.
  */
-import { SunpaneError } from '../core/errors';
+import { SunpaneError } from '../core/common';
 import { byId, h } from './dom';
 import { shadingMask, sunTracks } from './engine';
 import type { FormValues } from './fields';

@@ -14,7 +14,7 @@
 import * as fs from 'node:fs';
 import * as path from 'node:path';
 import type { Browser, Page } from 'playwright-core';
-import { SunpaneError } from '../../src/core/errors';
+import { SunpaneError } from '../../src/core/common/errors';
 import { applyFunction } from '../../src/registry/evaluate';
 import { FUNCTIONS, findFunction } from '../../src/registry';
 import { NotAvailable, type OutTable } from '../../src/registry/types';

@@ -10,11 +10,11 @@
 import * as fs from 'node:fs';
 import * as path from 'node:path';
 import type { Browser, Page } from 'playwright-core';
-import { annualSeries } from '../../src/core/annual';
-import { summarizeAnnual } from '../../src/core/annualSummary';
-import { SunpaneError } from '../../src/core/errors';
-import type { WindowSpec } from '../../src/core/window';
-import { validateWindowSpec } from '../../src/core/windowSpec';
+import { annualSeries } from '../../src/core/gain/annual';
+import { summarizeAnnual } from '../../src/core/gain/annualSummary';
+import { SunpaneError } from '../../src/core/common/errors';
+import type { WindowSpec } from '../../src/core/gain/window';
+import { validateWindowSpec } from '../../src/core/gain/windowSpec';
 import { EXAMPLE_SITES } from '../../src/demo/sites';
 import { launchBrowser, openAddinPage } from './chromium';
 

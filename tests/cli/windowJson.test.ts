@@ -5,8 +5,8 @@
 import * as fs from 'node:fs';
 import * as os from 'node:os';
 import * as path from 'node:path';
-import { SunpaneError } from '../../src/core/errors';
-import { validateWindowSpec } from '../../src/core/windowSpec';
+import { SunpaneError } from '../../src/core/common/errors';
+import { validateWindowSpec } from '../../src/core/gain/windowSpec';
 import { CliInputError } from '../../src/cli/cliError';
 import { readWindowFile, windowFromJson, WINDOW_DEFAULTS } from '../../src/cli/windowJson';
 import { findExampleSite } from '../../src/demo/sites';

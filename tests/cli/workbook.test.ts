@@ -1,6 +1,6 @@
 /** Workbook helpers: addresses, names Excel accepts, and date cells that show local wall-clock time. */
 import { address, columnLetter, serialToCellDate, sheetName, tableName } from '../../src/cli/workbook';
-import { civilToSerial } from '../../src/core/time';
+import { civilToSerial } from '../../src/core/time/calendar';
 
 describe('workbook helpers', () => {
   it('spells column numbers as letters past Z and ZZ', () => {

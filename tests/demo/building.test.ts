@@ -1,5 +1,5 @@
 /** The invented demo building and example sites: what the demo promises to show. (Invented data; structural checks only.) */
-import { validateWindowSpec } from '../../src/core/windowSpec';
+import { validateWindowSpec } from '../../src/core/gain/windowSpec';
 import { DEMO_BUILDING, DEMO_HOURLY_TAG, SHADING_OPTIONS, demoWindows } from '../../src/demo/building';
 import { EXAMPLE_SITES, findExampleSite } from '../../src/demo/sites';
 

@@ -5,9 +5,9 @@
  */
 import * as fs from 'node:fs';
 import * as path from 'node:path';
-import { ineichenPerezClearSky } from '../../src/core/clearSky';
-import { annualSunPath } from '../../src/core/sunPath';
-import { formatSerialIso } from '../../src/core/time';
+import { ineichenPerezClearSky } from '../../src/core/sky/clearSky';
+import { annualSunPath } from '../../src/core/sun/sunPath';
+import { formatSerialIso } from '../../src/core/time/calendar';
 import { findExampleSite } from '../../src/demo/sites';
 import { inventedWeatherCsv, inventedWeatherYear } from '../../src/demo/weather';
 

@@ -7,7 +7,7 @@
  * outside source is involved; the calculations themselves are checked in tests/reference/.
  */
 import fc from 'fast-check';
-import { SunpaneError, requireRange } from '../../src/core/errors';
+import { SunpaneError, requireRange } from '../../src/core/common/errors';
 import { makeHandler, normaliseArg } from '../../src/functions/adapter';
 import { hostRuntime, registerFunctions } from '../../src/functions/register';
 import { FUNCTIONS } from '../../src/registry';

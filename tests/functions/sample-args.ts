@@ -3,7 +3,7 @@
  * defaults, choices, list lengths), so the add-in tests cover functions added later with no extra
  * work. A formula-table row for the function, when there is one, is preferred as the valid call.
  */
-import { SunpaneError } from '../../src/core/errors';
+import { SunpaneError } from '../../src/core/common/errors';
 import { applyFunction } from '../../src/registry/evaluate';
 import { isOptional } from '../../src/registry';
 import type { FunctionDescriptor, OutTable, ParamDescriptor } from '../../src/registry/types';

@@ -10,11 +10,11 @@
  * evaluated by hand at stated points (the arithmetic is written out below), plus identities of the
  * published form: at air mass 1 the exponents drop out (Eb = E0 e^−τb whatever ab is).
  */
-import { airMassKastenYoung } from '../../src/core/airMass';
-import { ashraeAirMassExponents, ashraeClearSky } from '../../src/core/clearSky';
-import { SunpaneError } from '../../src/core/errors';
-import { extraterrestrialIrradiance } from '../../src/core/extraterrestrial';
-import { ashraeVerticalDiffuseRatio } from '../../src/core/transposition';
+import { airMassKastenYoung } from '../../src/core/sky/airMass';
+import { ashraeAirMassExponents, ashraeClearSky } from '../../src/core/sky/clearSky';
+import { SunpaneError } from '../../src/core/common/errors';
+import { extraterrestrialIrradiance } from '../../src/core/sky/extraterrestrial';
+import { ashraeVerticalDiffuseRatio } from '../../src/core/sky/transposition';
 
 describe('ASHRAE extraterrestrial irradiance', () => {
   test('is 1367 × 1.033 = 1412.111 W/m² on day 3 (perihelion) and 1367 × 0.967 near day 185.5 (within 1e-6)', () => {

@@ -19,8 +19,9 @@
  */
 import * as Astronomy from 'astronomy-engine';
 import { seeded, separation } from '../support/sky';
-import { sunEvents, sunPosition } from '../../src/core/sun';
-import { civilToSerial, serialToUtcMs } from '../../src/core/time';
+import { sunEvents } from '../../src/core/sun/events';
+import { sunPosition } from '../../src/core/sun/spa';
+import { civilToSerial, serialToUtcMs } from '../../src/core/time/calendar';
 
 const FROM = Date.UTC(1950, 0, 1);
 const TO = Date.UTC(2100, 0, 1);

@@ -5,7 +5,8 @@
  * the tolerance, 0.001 s, allows for summation order only.
  */
 import * as Astronomy from 'astronomy-engine';
-import { deltaTAt, julianDay } from '../../src/core/time';
+import { deltaTAt } from '../../src/core/time/deltaT';
+import { julianDay } from '../../src/core/time/calendar';
 
 describe('ΔT by Espenak & Meeus agrees with astronomy-engine 2.1.19', () => {
   test('at 500 instants from 1900 to 2200 within 0.001 s', () => {

@@ -5,7 +5,7 @@
  * (as pinned in pvlib's public test suite): GHI 50 W/m², zenith 85°, 1 January → kt 0.405724,
  * DHI 41.5704, DNI 96.7193.
  */
-import { decomposeErbs, diffuseFractionErbs1982 } from '../../src/core/decomposition';
+import { decomposeErbs, diffuseFractionErbs1982 } from '../../src/core/sky/decomposition';
 
 describe('Erbs et al. (1982) decomposition', () => {
   test('GHI 50 W/m² at zenith 85° on 1 January gives kt 0.405724, DHI 41.5704, DNI 96.7193', () => {

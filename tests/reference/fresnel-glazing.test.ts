@@ -6,8 +6,8 @@
  * 0.01). Normal-incidence reflectance of one interface ((n − 1)/(n + 1))² = 0.0434 for n = 1.526
  * (REFERENCES.md §4). Equation numbers from memory.
  */
-import { RAD } from '../../src/core/angles';
-import { GLASS_REFRACTIVE_INDEX, interfaceReflectance, paneStackTransmittance } from '../../src/core/fresnel';
+import { RAD } from '../../src/core/common/angles';
+import { GLASS_REFRACTIVE_INDEX, interfaceReflectance, paneStackTransmittance } from '../../src/core/glazing/fresnel';
 
 const n = GLASS_REFRACTIVE_INDEX;
 

@@ -7,7 +7,7 @@
  * y = 0, 2.76429e-5, 4.37498e-2, 0.169183, 0.469428, 0.943740, 0.998636, 0.999919, 0.999994.
  * A cubic Hermite interpolant reproduces straight lines exactly (its secants and tangents coincide).
  */
-import { monotoneCubic } from '../../src/core/monotoneCubic';
+import { monotoneCubic } from '../../src/core/common/monotoneCubic';
 
 const X = [7.99, 8.09, 8.19, 8.7, 9.2, 10, 12, 15, 20];
 const Y = [0, 2.76429e-5, 4.37498e-2, 0.169183, 0.469428, 0.94374, 0.998636, 0.999919, 0.999994];

@@ -3,7 +3,7 @@
  * abscissae and weights of Gauss–Legendre quadrature: n = 2: ±0.577350269189626, weights 1;
  * n = 3: 0, ±0.774596669241483, weights 0.888888888888889 and 0.555555555555556.
  */
-import { gaussLegendre } from '../../src/core/hemispherical';
+import { gaussLegendre } from '../../src/core/common/hemispherical';
 
 describe('Gauss–Legendre nodes and weights', () => {
   test('two points: ±1/√3 with unit weights (1e-15)', () => {

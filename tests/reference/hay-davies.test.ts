@@ -4,8 +4,8 @@
  * Engineering of Thermal Processes, 4th ed., Eq. 2.16.4. Check value: REFERENCES.md §3 (as pinned in
  * pvlib's public test suite): 102.9949 W/m², isotropic part 30.1818, circumsolar part 72.8130.
  */
-import { RAD } from '../../src/core/angles';
-import { skyDiffuseHayDavies } from '../../src/core/transposition';
+import { RAD } from '../../src/core/common/angles';
+import { skyDiffuseHayDavies } from '../../src/core/sky/transposition';
 
 const dhi = 118.45831879;
 const dni = 939.95469881;

@@ -4,7 +4,7 @@
  * §5.4; REFERENCES.md §4), and its closed forms: a constant averages to itself; X = cos θ averages to
  * 2 ∫ cos² θ sin θ dθ = 2/3; X = cos² θ to 1/2; a step to 0 above θc to sin² θc.
  */
-import { hemisphericalAverage } from '../../src/core/hemispherical';
+import { hemisphericalAverage } from '../../src/core/common/hemispherical';
 
 describe('hemispherical average', () => {
   test('of a constant is the constant (1e-13)', () => {

@@ -6,10 +6,10 @@
  * below (a transcription check, not an independent value) plus physical orderings marked
  * "common practice, no source". No published numeric example could be sourced.
  */
-import { airMassKastenYoung } from '../../src/core/airMass';
-import { ineichenPerezClearSky } from '../../src/core/clearSky';
-import { SunpaneError } from '../../src/core/errors';
-import { extraterrestrialSpencer } from '../../src/core/extraterrestrial';
+import { airMassKastenYoung } from '../../src/core/sky/airMass';
+import { ineichenPerezClearSky } from '../../src/core/sky/clearSky';
+import { SunpaneError } from '../../src/core/common/errors';
+import { extraterrestrialSpencer } from '../../src/core/sky/extraterrestrial';
 
 describe('Ineichen–Perez (2002) clear sky', () => {
   test('at 40° altitude, day 80, TL 3.5, 1500 m the equations give the values written out (1e-9 relative)', () => {

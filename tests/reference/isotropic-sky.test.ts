@@ -3,7 +3,7 @@
  * Engineering of Thermal Processes, 4th ed., Eq. 2.15.1 (sky and ground terms): sky = DHI (1 + cos Σ)/2,
  * ground = GHI ρg (1 − cos Σ)/2. Check value: REFERENCES.md §3, tilt 40°, DHI 100 → 88.30222216 W/m².
  */
-import { groundReflected, skyDiffuseIsotropic } from '../../src/core/transposition';
+import { groundReflected, skyDiffuseIsotropic } from '../../src/core/sky/transposition';
 
 describe('isotropic sky and ground reflection', () => {
   test('tilt 40°, DHI 100 W/m² gives 88.30222216 W/m² (within 1e-8)', () => {

@@ -3,8 +3,8 @@
  * formula", Applied Optics 28(22), 4735–4738, Eq. 3. Check values: REFERENCES.md §3 — zenith 0° →
  * 1.000, 80° → 5.586, 89.9° → 36.467 (as tabulated to three decimals, so tolerance 5e-4).
  */
-import { airMassKastenYoung, AIR_MASS_HORIZON } from '../../src/core/airMass';
-import { SunpaneError } from '../../src/core/errors';
+import { airMassKastenYoung, AIR_MASS_HORIZON } from '../../src/core/sky/airMass';
+import { SunpaneError } from '../../src/core/common/errors';
 
 describe('Kasten–Young relative air mass', () => {
   test.each([

@@ -6,10 +6,10 @@
  * public test suite): 109.084332 W/m². Coefficient table cross-read against Duffie & Beckman,
  * Solar Engineering of Thermal Processes, 4th ed., Table 2.16.1 (from memory).
  */
-import { RAD } from '../../src/core/angles';
-import { SunpaneError } from '../../src/core/errors';
-import { PEREZ_1990_COMPOSITE, PEREZ_EPSILON_EDGES, perezBin, perezParts, skyDiffusePerez1990 } from '../../src/core/perez1990';
-import { skyDiffuseIsotropic } from '../../src/core/transposition';
+import { RAD } from '../../src/core/common/angles';
+import { SunpaneError } from '../../src/core/common/errors';
+import { PEREZ_1990_COMPOSITE, PEREZ_EPSILON_EDGES, perezBin, perezParts, skyDiffusePerez1990 } from '../../src/core/sky/perez1990';
+import { skyDiffuseIsotropic } from '../../src/core/sky/transposition';
 
 const CASE = {
   tilt: 40,

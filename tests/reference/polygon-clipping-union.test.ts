@@ -2,14 +2,14 @@
  * Source: polygon-clipping 0.15.7 (npm, pinned in package.json), a general polygon boolean-operation
  * library (Martínez–Rueda sweep line). Its `union` and `intersection` of the shadow quadrilaterals
  * with the lit rectangle, measured by the shoelace formula over the returned rings, must equal
- * Sunpane's inclusion–exclusion of convex clips (src/core/polygon.ts `unionAreaInRectangle`).
+ * Sunpane's inclusion–exclusion of convex clips (src/core/shading/polygon.ts `unionAreaInRectangle`).
  *
  * Both are exact up to floating-point rounding, so the tolerance is 1e-9 of the rectangle's area
  * (polygon-clipping rounds crossing points to ~1e-15 relative; our clips add a few ulps per step).
  */
 import fc from 'fast-check';
 import polygonClipping, { type MultiPolygon, type Polygon } from 'polygon-clipping';
-import { unionAreaInRectangle, writeQuadHalfPlanes } from '../../src/core/polygon';
+import { unionAreaInRectangle, writeQuadHalfPlanes } from '../../src/core/shading/polygon';
 
 function ringArea(ring: [number, number][]): number {
   let twice = 0;

@@ -16,7 +16,7 @@
  */
 import * as fs from 'node:fs';
 import * as path from 'node:path';
-import type { Shading } from '../../src/core/window';
+import type { Shading } from '../../src/core/shading/types';
 
 // three.js ships no TypeScript types here (@types/three is not installed); only these parts are used.
 interface Vec3 {

@@ -8,8 +8,9 @@
  * The factor lists below are test inputs chosen for the checks (not published tables; Sunpane ships
  * none), so only the method is being checked against the source.
  */
-import { SunpaneError } from '../../src/core/errors';
-import { coolingLoad, peakOfDay, radiantToCoolingLoad, requireRadiantTimeFactors } from '../../src/core/load';
+import { SunpaneError } from '../../src/core/common/errors';
+import { coolingLoad, radiantToCoolingLoad, requireRadiantTimeFactors } from '../../src/core/load/rts';
+import { peakOfDay } from '../../src/core/gain/designDay';
 
 /** A decaying series that sums to exactly 1 (geometric, renormalised). */
 function decayingFactors(ratio: number): number[] {

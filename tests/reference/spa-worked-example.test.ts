@@ -10,10 +10,11 @@
  * 11 °C, surface slope 30° facing 170° (azimuth rotation −10°), refraction at rise/set 0.5667°.
  * Tolerances are the ones REFERENCES.md gives for each quantity (the report prints 6–10 digits).
  */
-import { B_TERMS, L_TERMS, NUTATION_TERMS, R_TERMS } from '../../src/core/spaTerms';
-import { spaSteps, sunEvents, sunPosition } from '../../src/core/sun';
-import { incidenceAngle } from '../../src/core/surface';
-import { civilToSerial, serialToCivil } from '../../src/core/time';
+import { B_TERMS, L_TERMS, NUTATION_TERMS, R_TERMS } from '../../src/core/sun/spaTerms';
+import { spaSteps, sunPosition } from '../../src/core/sun/spa';
+import { sunEvents } from '../../src/core/sun/events';
+import { incidenceAngle } from '../../src/core/sun/surfaceAngles';
+import { civilToSerial, serialToCivil } from '../../src/core/time/calendar';
 
 const UTC_MS = Date.UTC(2003, 9, 17, 19, 30, 30);
 const LAT = 39.742476;

@@ -12,7 +12,7 @@
  * through the angle between the two directions, which stays meaningful near the zenith.
  */
 import { seeded, separation } from '../support/sky';
-import { sunPosition } from '../../src/core/sun';
+import { sunPosition } from '../../src/core/sun/spa';
 
 // eslint-disable-next-line @typescript-eslint/no-require-imports
 const SunCalc = require('suncalc') as { getPosition(date: Date, lat: number, lng: number): { altitude: number; azimuth: number } };

@@ -2,7 +2,7 @@
  * The broadcasting rules of src/registry/evaluate.ts, on a toy descriptor (plumbing only: no
  * calculation is checked here, so no outside source applies).
  */
-import { SunpaneError, requireRange } from '../../src/core/errors';
+import { SunpaneError, requireRange } from '../../src/core/common/errors';
 import { applyFunction } from '../../src/registry/evaluate';
 import { type FunctionDescriptor, NotAvailable } from '../../src/registry/types';
 

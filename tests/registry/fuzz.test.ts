@@ -5,8 +5,8 @@
  * argument. The descriptors' ranges are the contract; this test holds the core to it.
  */
 import fc from 'fast-check';
-import { SunpaneError } from '../../src/core/errors';
-import { MAX_SERIAL_EXCLUSIVE, MIN_SERIAL } from '../../src/core/time';
+import { SunpaneError } from '../../src/core/common/errors';
+import { MAX_SERIAL_EXCLUSIVE, MIN_SERIAL } from '../../src/core/time/calendar';
 import { applyFunction, readRange, readScalar } from '../../src/registry/evaluate';
 import { FUNCTIONS, isOptional } from '../../src/registry';
 import { type Args, type FunctionDescriptor, NotAvailable, type OutTable, type ParamDescriptor, type RawArg } from '../../src/registry/types';

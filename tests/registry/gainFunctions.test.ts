@@ -3,15 +3,14 @@
  * (whose outside checks are in tests/core/gain*.test.ts and tests/reference/rts-spitler-1997.test.ts).
  * Plumbing only: argument order, defaults, error names, spill shapes.
  */
-import { NotAvailable } from '../../src/registry/types';
-import { SunpaneError } from '../../src/core/errors';
-import { annualSeries } from '../../src/core/annual';
-import { windowGainAt } from '../../src/core/gain';
-import { civilToSerial } from '../../src/core/time';
+import { NotAvailable, type RawArg } from '../../src/registry/types';
+import { SunpaneError } from '../../src/core/common/errors';
+import { annualSeries } from '../../src/core/gain/annual';
+import { windowGainAt } from '../../src/core/gain/windowGain';
+import { civilToSerial } from '../../src/core/time/calendar';
 import { applyFunction } from '../../src/registry/evaluate';
 import { findFunction } from '../../src/registry';
-import type { RawArg } from '../../src/registry/types';
-import { baseSpec } from '../core/gainFixtures';
+import { baseSpec } from '../core/gain/gainFixtures';
 
 function call(name: string, args: RawArg[]) {
   return applyFunction(findFunction(name)!, args);

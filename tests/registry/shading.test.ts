@@ -4,7 +4,7 @@
  * devices (shadow depth P·tan Ω, width P·|tan γ|; ASHRAE Handbook—Fundamentals, "Fenestration",
  * exterior shading — from memory) worked by hand in each row's comment; tolerance 1e-9.
  */
-import { SunpaneError } from '../../src/core/errors';
+import { SunpaneError } from '../../src/core/common/errors';
 import { parseCliArg } from '../../src/cli/args';
 import { applyFunction } from '../../src/registry/evaluate';
 import { findFunction } from '../../src/registry';

@@ -4,8 +4,8 @@
  * WindowSpecs. Test data: tests/schedule/styles.ts (invented windows).
  */
 import { scheduleFromCsv, windowFromRow } from '../../src/cli/schedule';
-import type { WindowSpec } from '../../src/core/window';
-import { validateWindowSpec } from '../../src/core/windowSpec';
+import type { WindowSpec } from '../../src/core/gain/window';
+import { validateWindowSpec } from '../../src/core/gain/windowSpec';
 import { initialValues } from '../../src/taskpane/fields';
 import { readSchedule } from '../../src/taskpane/schedule';
 import { type HeaderStyle, scheduleCsv, scheduleTable } from './styles';

@@ -1,5 +1,5 @@
 /** Shared assertion: `fn` throws the one typed error, naming `argument` first in its message. */
-import { SunpaneError } from '../../src/core/errors';
+import { SunpaneError } from '../../src/core/common/errors';
 
 export function expectArgumentError(fn: () => unknown, argument: string): void {
   let caught: unknown;

@@ -1,5 +1,5 @@
 /** Shared helpers of the sun-position reference tests. */
-import { RAD } from '../../src/core/angles';
+import { RAD } from '../../src/core/common/angles';
 
 /** Seeded linear congruential generator (Numerical Recipes constants): reproducible samples in [0, 1). */
 export function seeded(seed: number): () => number {

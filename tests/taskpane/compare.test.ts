@@ -1,6 +1,6 @@
 /** Shading options compared against the unshaded window. */
-import type { WindowSpec } from '../../src/core/window';
-import { validateWindowSpec } from '../../src/core/windowSpec';
+import type { WindowSpec } from '../../src/core/gain/window';
+import { validateWindowSpec } from '../../src/core/gain/windowSpec';
 import { comparisonRows, optionShading, optionSpecs, starterOptions } from '../../src/taskpane/compare';
 import { initialValues } from '../../src/taskpane/fields';
 import { buildWindowSpec } from '../../src/taskpane/spec';

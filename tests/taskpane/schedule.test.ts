@@ -1,6 +1,6 @@
 /** The window schedule: headers of our own, one row per window, problems named by row and column. */
-import type { WindowSpec } from '../../src/core/window';
-import { validateWindowSpec } from '../../src/core/windowSpec';
+import type { WindowSpec } from '../../src/core/gain/window';
+import { validateWindowSpec } from '../../src/core/gain/windowSpec';
 import { initialValues } from '../../src/taskpane/fields';
 import { headerKey, readSchedule, summaryRow } from '../../src/taskpane/schedule';
 

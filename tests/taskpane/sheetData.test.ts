@@ -1,5 +1,5 @@
 /** Reading what the form points at on the user's sheets, in node against the fake Excel host. */
-import { SunpaneError } from '../../src/core/errors';
+import { SunpaneError } from '../../src/core/common/errors';
 import { initialValues } from '../../src/taskpane/fields';
 import type { RunBatch } from '../../src/taskpane/resultSheets';
 import { angleTableOf, readNamedTable, readSheetData, weatherColumn } from '../../src/taskpane/sheetData';

@@ -1,12 +1,12 @@
 /**
  * From the form's boxes to a WindowSpec, and the core's validation messages back beside the boxes.
- * Expected messages are produced by the core's own validator (src/core/windowSpec.ts) on specs
+ * Expected messages are produced by the core's own validator (src/core/gain/windowSpec.ts) on specs
  * written out here, so the test checks that the pane passes values through unchanged and puts each
  * message beside the right box.
  */
-import { SunpaneError } from '../../src/core/errors';
-import type { WindowSpec } from '../../src/core/window';
-import { validateWindowSpec } from '../../src/core/windowSpec';
+import { SunpaneError } from '../../src/core/common/errors';
+import type { WindowSpec } from '../../src/core/gain/window';
+import { validateWindowSpec } from '../../src/core/gain/windowSpec';
 import { applyExampleSite, fieldForArgument, initialValues } from '../../src/taskpane/fields';
 import { buildWindowSpec, findProblems, isClean, readListText, readNumberText } from '../../src/taskpane/spec';
 

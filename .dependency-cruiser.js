@@ -1,0 +1,88 @@
+// The house rules of src, checked by `npm run deps` (part of `npm test`); docs/architecture.md
+// explains them. Concept folders of src/core, lowest first:
+//   common → time → sun → sky / shading → glazing → gain → load
+// A folder imports only folders below it, and code outside a folder only through its index.ts.
+const ORDER = ['common', 'time', 'sun', 'sky|shading', 'glazing', 'gain', 'load'];
+
+const upward = ORDER.slice(0, -1).map((level, i) => ({
+  name: `core-${level.replace('|', '-')}-imports-upward`,
+  comment: `src/core/{${level}} must not import a folder above it (${ORDER.slice(i + 1).join(', ')})`,
+  severity: 'error',
+  from: { path: `^src/core/(${level})/` },
+  to: { path: `^src/core/(${ORDER.slice(i + 1).join('|')})/` },
+}));
+
+module.exports = {
+  forbidden: [
+    {
+      name: 'no-circular',
+      comment: 'No import cycles anywhere in src.',
+      severity: 'error',
+      from: { path: '^src/' },
+      to: { circular: true },
+    },
+    ...upward,
+    {
+      name: 'core-sky-shading-apart',
+      comment: 'sky and shading stand side by side: neither imports the other.',
+      severity: 'error',
+      from: { path: '^src/core/(sky|shading)/' },
+      to: { path: '^src/core/(sky|shading)/', pathNot: '^src/core/$1/' },
+    },
+    {
+      name: 'core-through-index',
+      comment: "Outside a concept folder, import it through its index.ts (the folder's only public door).",
+      severity: 'error',
+      from: { path: '^src/core/([^/]+)/' },
+      to: { path: '^src/core/[^/]+/(?!index\\.ts$)[^/]+$', pathNot: '^src/core/$1/' },
+    },
+    {
+      name: 'outside-core-through-index',
+      comment: "Code outside src/core imports a concept folder only through its index.ts.",
+      severity: 'error',
+      from: { path: '^src/(?!core/)' },
+      to: { path: '^src/core/[^/]+/(?!index\\.ts$)[^/]+$' },
+    },
+    {
+      name: 'core-is-pure',
+      comment: 'src/core imports nothing outside src/core: no Office, DOM, Node or npm packages.',
+      severity: 'error',
+      from: { path: '^src/core/' },
+      to: { pathNot: '^src/core/' },
+    },
+    {
+      name: 'shared-layers-below-adapters',
+      comment: 'registry, demo and schedule sit on the core; they never import an adapter.',
+      severity: 'error',
+      from: { path: '^src/(registry|demo|schedule)/' },
+      to: { path: '^src/(functions|taskpane|cli)/' },
+    },
+    {
+      name: 'schedule-on-core-only',
+      comment: 'The window-schedule format depends on the core only.',
+      severity: 'error',
+      from: { path: '^src/schedule/' },
+      to: { path: '^src/(registry|demo)/' },
+    },
+    {
+      name: 'shared-layers-no-node',
+      comment: 'registry, demo and schedule also run in the add-in: no Node built-ins.',
+      severity: 'error',
+      from: { path: '^src/(registry|demo|schedule|functions|taskpane)/' },
+      to: { dependencyTypes: ['core'] },
+    },
+    {
+      name: 'adapters-apart',
+      comment: 'The adapters (functions, taskpane, cli) never import each other.',
+      severity: 'error',
+      from: { path: '^src/(functions|taskpane|cli)/' },
+      to: { path: '^src/(functions|taskpane|cli)/', pathNot: '^src/$1/' },
+    },
+  ],
+  options: {
+    doNotFollow: { path: 'node_modules' },
+    tsConfig: { fileName: 'tsconfig.json' },
+    tsPreCompilationDeps: true,
+    exclude: { path: '(^|/)node_modules/' },
+  },
+};

@@ -1,0 +1,76 @@
+/**
+ * Design-day gains: for each month, one clear day (the 21st unless asked otherwise), the hourly
+ * window gain and its peak hour and value. The cooling load of these days is worked out in
+ * load/designDay.ts.
+ */
+import { SunpaneError, requireRange } from '../common';
+import { civilToSerial } from '../time';
+import { gainOfPrepared, prepareWindow, type PreparedWindow } from './windowGain';
+import type { Weather, WindowSpec } from './window';
+
+/** Options of {@link designDayGains}. */
+export interface DesignDayGainOptions {
+  /** Day of each month, 1…28 (every month has it); default 21. */
+  day?: number;
+  /**
+   * Clear-sky weather for the design days (`ashraeClearSky` or `ineichenClearSky`); default the
+   * window's own weather, which must then be a clear-sky model.
+   */
+  clearSky?: Weather;
+}
+
+/** One month's design day. */
+export interface DesignDayGainMonth {
+  /** 1…12 */
+  month: number;
+  /** Day of the month. */
+  day: number;
+  /** Window gain of each hour [W]; index 0 is the hour ending 01:00, sun at its middle. */
+  hourlyGain: number[];
+  /** Hour ending (1…24, local standard time) of the largest gain; the earliest on ties. */
+  peakHour: number;
+  /** The largest hourly gain [W] (0 when the sun never reaches the window that day). */
+  peakGain: number;
+  /** Local serial at the end of the peak hour. */
+  peakStamp: number;
+}
+
+/** Default day of the month for design days. */
+export const DEFAULT_DESIGN_DAY = 21;
+
+/** Index and value of the largest value of a day (the earliest on ties). */
+export function peakOfDay(values: ArrayLike<number>): { index: number; value: number } {
+  let index = 0;
+  for (let i = 1; i < values.length; i++) if (values[i] > values[index]) index = i;
+  return { index, value: values.length ? values[index] : 0 };
+}
+
+/**
+ * The clear-day gain of a window on one day of every month, with its peak hour.
+ * @param spec - the window (validated; errors name the field by its path)
+ * @param options - day of the month (1…28, default 21), clear-sky weather
+ * @returns 12 months, January first, and the prepared window (for the radiant fraction and
+ *   anything else a caller needs); a month whose design day has no sun on the window has peak 0
+ *   at the first hour
+ * @remarks Gain as in gain/windowGain.ts at the middle of each hour of spec.year's design day.
+ * @throws SunpaneError naming `day` or `weather.kind` / `clearSky.kind` (a measured weather series
+ *   and no clear-sky model given)
+ */
+export function designDayGains(spec: WindowSpec, options: DesignDayGainOptions = {}): { months: DesignDayGainMonth[]; window: PreparedWindow } {
+  const day = requireRange('day', options.day ?? DEFAULT_DESIGN_DAY, 1, 28, undefined, { integer: true });
+  const weather = options.clearSky ?? spec?.weather;
+  const kind = weather?.kind;
+  if (kind !== 'ashraeClearSky' && kind !== 'ineichenClearSky') {
+    throw new SunpaneError(options.clearSky ? 'clearSky.kind' : 'weather.kind', kind, 'design days need a clear-sky model ("ashraeClearSky" or "ineichenClearSky"); give one as the clearSky option');
+  }
+  const w = prepareWindow(options.clearSky ? { ...spec, weather: options.clearSky } : spec);
+  const months: DesignDayGainMonth[] = [];
+  for (let month = 1; month <= 12; month++) {
+    const midnight = civilToSerial(spec.year, month, day);
+    const hourlyGain: number[] = [];
+    for (let h = 0; h < 24; h++) hourlyGain.push(gainOfPrepared(w, midnight + (h + 0.5) / 24).gain.total);
+    const peak = peakOfDay(hourlyGain);
+    months.push({ month, day, hourlyGain, peakHour: peak.index + 1, peakGain: peak.value, peakStamp: midnight + (peak.index + 1) / 24 });
+  }
+  return { months, window: w };
+}

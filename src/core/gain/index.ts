@@ -1,0 +1,14 @@
+/**
+ * Gain: one window described once (WindowSpec) and checked once, its solar gain for one hour with a
+ * step-by-step working, its whole year as hourly columns with a summary, and its clear design days.
+ * Imports: common, time, sun, sky, shading, glazing.
+ *
+ * This index is the folder's only public door: code outside the folder imports from here.
+ */
+export { type AnnualSeries, annualSeries } from './annual';
+export { type AnnualSummary, summarizeAnnual } from './annualSummary';
+export { type DesignDayGainMonth, type DesignDayGainOptions, designDayGains, peakOfDay } from './designDay';
+export { gainSteps } from './gainSteps';
+export { type Weather, type WindowSpec } from './window';
+export { windowGainAt } from './windowGain';
+export { DEFAULT_RADIANT_FRACTION, MAX_IRRADIANCE, validateWindowSpec } from './windowSpec';

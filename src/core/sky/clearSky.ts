@@ -1,0 +1,123 @@
+/**
+ * Clear-sky irradiance models: the ASHRAE pseudo-optical-depth model (τb, τd) and the
+ * turbidity-based model of Ineichen & Perez (2002).
+ *
+ * Both return direct normal, diffuse horizontal and global horizontal irradiance; with the sun at or
+ * below the horizon all three are 0 (no sun is a result, not an error). Handbook equation numbers
+ * cited here are from memory; the formulas are those of REFERENCES.md §3.
+ */
+import { airMassKastenYoung } from './airMass';
+import { RAD, requireRange } from '../common';
+import { standardPressure } from '../sun';
+import { extraterrestrialIrradiance, extraterrestrialSpencer, requireDayOfYear } from './extraterrestrial';
+
+const { exp, pow, sin, min } = Math;
+
+/** Clear-sky irradiance [W/m²]. */
+export interface ClearSky {
+  /** Direct normal irradiance [W/m²]. */
+  dni: number;
+  /** Diffuse horizontal irradiance [W/m²]. */
+  dhi: number;
+  /** Global horizontal irradiance = dni · sin(altitude) + dhi [W/m²]. */
+  ghi: number;
+}
+
+/** Upper bound of the beam pseudo-optical depth τb accepted (published climate tables stay well below). */
+export const TAU_B_MAX = 1.2;
+/** Upper bound of the diffuse pseudo-optical depth τd accepted (published climate tables stay well below). */
+export const TAU_D_MAX = 4;
+/** Range of Linke turbidity accepted: 1 is a clean dry atmosphere; very hazy skies reach about 7. */
+export const LINKE_MIN = 1;
+export const LINKE_MAX = 10;
+/** Range of site elevation accepted [m] (as the glossary's `elevation`). */
+export const ELEVATION_MIN = -500;
+export const ELEVATION_MAX = 9000;
+
+const NO_SUN: Readonly<ClearSky> = Object.freeze({ dni: 0, dhi: 0, ghi: 0 });
+
+/**
+ * Air-mass exponents of the ASHRAE clear-sky model (current coefficients).
+ *
+ * @param tauB - beam pseudo-optical depth [-], > 0
+ * @param tauD - diffuse pseudo-optical depth [-], > 0
+ * @returns `{ ab, ad }`, the beam and diffuse air-mass exponents [-]
+ * @remarks ab = 1.454 − 0.406 τb − 0.268 τd + 0.021 τb τd; ad = 0.507 + 0.205 τb − 0.080 τd
+ * − 0.190 τb τd — Gueymard, C. A. & Thevenard, D. (2013), ASHRAE Trans. 119(2) (RP-1613), as in
+ * ASHRAE Handbook—Fundamentals (2013) ch. 14, Eqs. 17–18. (The 2009 Handbook had other coefficients.)
+ */
+export function ashraeAirMassExponents(tauB: number, tauD: number): { ab: number; ad: number } {
+  const ab = 1.454 - 0.406 * tauB - 0.268 * tauD + 0.021 * tauB * tauD; // Eq. 17
+  const ad = 0.507 + 0.205 * tauB - 0.08 * tauD - 0.19 * tauB * tauD; // Eq. 18
+  return { ab, ad };
+}
+
+/**
+ * Clear-sky irradiance by the ASHRAE pseudo-optical-depth model.
+ *
+ * @param sunAltitude - sun altitude [°], −90…90
+ * @param dayOfYear - day of the year, 1…366
+ * @param tauB - beam pseudo-optical depth τb [-], above 0 up to {@link TAU_B_MAX}
+ * @param tauD - diffuse pseudo-optical depth τd [-], above 0 up to {@link TAU_D_MAX}
+ * @returns direct normal, diffuse horizontal and global horizontal irradiance [W/m²]; all 0 when the
+ * sun is at or below the horizon
+ * @remarks Eb = E0 exp(−τb m^ab), Ed = E0 exp(−τd m^ad) (ASHRAE Handbook—Fundamentals (2013)
+ * ch. 14, Eqs. 15–16), E0 by the Handbook's Eq. 4 ({@link extraterrestrialIrradiance}), m by
+ * Kasten & Young (1989), exponents by {@link ashraeAirMassExponents}. Global = Eb sin β + Ed.
+ */
+export function ashraeClearSky(sunAltitude: number, dayOfYear: number, tauB: number, tauD: number): ClearSky {
+  const altitude = requireRange('sunAltitude', sunAltitude, -90, 90, '°');
+  const e0 = extraterrestrialIrradiance(dayOfYear);
+  const tb = requireRange('tauB', tauB, 0, TAU_B_MAX, undefined, { exclusiveMin: true });
+  const td = requireRange('tauD', tauD, 0, TAU_D_MAX, undefined, { exclusiveMin: true });
+  if (altitude <= 0) return { ...NO_SUN };
+  const m = airMassKastenYoung(altitude);
+  const { ab, ad } = ashraeAirMassExponents(tb, td);
+  const dni = e0 * exp(-tb * pow(m, ab)); // Eq. 15
+  const dhi = e0 * exp(-td * pow(m, ad)); // Eq. 16
+  return { dni, dhi, ghi: dni * sin(altitude * RAD) + dhi };
+}
+
+/**
+ * Clear-sky irradiance by the turbidity model of Ineichen & Perez (2002).
+ *
+ * @param sunAltitude - sun altitude [°], −90…90
+ * @param dayOfYear - day of the year, 1…366
+ * @param linkeTurbidity - Linke turbidity factor TL (air-mass-2 value) [-], 1…10
+ * @param elevation - site elevation above sea level [m], −500…9000
+ * @returns direct normal, diffuse horizontal and global horizontal irradiance [W/m²]; all 0 when the
+ * sun is at or below the horizon
+ * @remarks Ineichen, P. & Perez, R. (2002), "A new airmass independent formulation for the Linke
+ * turbidity coefficient", Solar Energy 73(3), 151–157 (equations from memory):
+ * fh1 = exp(−h/8000), fh2 = exp(−h/1250), cg1 = 5.09e−5 h + 0.868, cg2 = 3.92e−5 h + 0.0387;
+ * GHI = cg1 I0 cos z exp(−cg2 m (fh1 + fh2 (TL − 1))) exp(0.01 m^1.8);
+ * DNI = b I0 exp(−0.09 m (TL − 1)) with b = 0.664 + 0.163 / fh1, limited so that it does not exceed
+ * GHI (1 − (0.1 − 0.2 exp(−TL)) / (0.1 + 0.882 / fh1)) / cos z; DHI = GHI − DNI cos z.
+ * m is the ABSOLUTE (pressure-corrected) air mass, the Kasten–Young relative air mass × p/p0 with
+ * p the standard-atmosphere pressure at the elevation ({@link standardPressure}), as the formulation
+ * is meant to be air-mass independent (from memory: with the relative air mass a high site would
+ * get less global irradiance at low sun than a sea-level one, which is unphysical); I0 is the
+ * extraterrestrial irradiance by Spencer (1971).
+ */
+export function ineichenPerezClearSky(sunAltitude: number, dayOfYear: number, linkeTurbidity: number, elevation: number): ClearSky {
+  const altitude = requireRange('sunAltitude', sunAltitude, -90, 90, '°');
+  const i0 = extraterrestrialSpencer(requireDayOfYear(dayOfYear));
+  const tl = requireRange('linkeTurbidity', linkeTurbidity, LINKE_MIN, LINKE_MAX);
+  const h = requireRange('elevation', elevation, ELEVATION_MIN, ELEVATION_MAX, 'm');
+  if (altitude <= 0) return { ...NO_SUN };
+  const m = (airMassKastenYoung(altitude) * standardPressure(h)) / 1013.25;
+  const cosZ = sin(altitude * RAD);
+  const fh1 = exp(-h / 8000);
+  const fh2 = exp(-h / 1250);
+  const cg1 = 5.09e-5 * h + 0.868;
+  const cg2 = 3.92e-5 * h + 0.0387;
+  // GHI / cos z is formed first so the beam limit needs no division by cos z (finite at sunrise).
+  const ghiPerCosZ = cg1 * i0 * exp(-cg2 * m * (fh1 + fh2 * (tl - 1))) * exp(0.01 * pow(m, 1.8));
+  const ghi = ghiPerCosZ * cosZ;
+  const b = 0.664 + 0.163 / fh1;
+  const dniModel = b * i0 * exp(-0.09 * m * (tl - 1));
+  const dniLimit = ghiPerCosZ * (1 - (0.1 - 0.2 * exp(-tl)) / (0.1 + 0.882 / fh1));
+  const dni = Math.max(0, min(dniModel, dniLimit));
+  const dhi = Math.max(0, ghi - dni * cosZ);
+  return { dni, dhi, ghi };
+}

@@ -1,0 +1,138 @@
+/**
+ * Sunrise, solar noon and sunset of a local calendar day, found on the full NREL SPA.
+ *
+ * Source: Reda, I. & Andreas, A., *Solar Position Algorithm for Solar Radiation Applications*,
+ * NREL/TP-560-34302 (revised January 2008), Appendix A.2 (the rise/transit/set definitions: the
+ * upper limb on the refracted horizon, h′0 = −(0.26667° + 0.5667°)). The search itself is ours:
+ * transits by Newton iteration on the hour angle, rise and set by the Illinois method between
+ * consecutive transits, which works on the LOCAL day asked for rather than the report's UT day.
+ */
+import { DEG, RAD, asinClamped, wrap180 } from '../common';
+import { deltaTAt, julianDay, requireSerial, requireUtcOffset, serialToUtcMs, utcMsToSerial } from '../time';
+import { RISE_SET_ALTITUDE, type ResolvedSunOptions, type SunOptions, emptySteps, requireInstant, requireSite, resolveSunOptions, spaGeocentric } from './spa';
+
+const { sin, cos } = Math;
+
+const MS_PER_DAY = 86_400_000;
+const scratch = emptySteps();
+
+/** Sunrise, solar noon and sunset of one local day. */
+export interface SunEvents {
+  /** `polarDay`: the sun stays above the rise/set altitude all local day; `polarNight`: below it all day. */
+  condition: 'normal' | 'polarDay' | 'polarNight';
+  /** Local standard-time serial of sunrise, or null when the sun does not rise during the local day. */
+  sunrise: number | null;
+  /** Local serial of the upper transit (the sun due south or north); also given in polar day and night. */
+  solarNoon: number;
+  /** Local serial of sunset, or null when the sun does not set during the local day. */
+  sunset: number | null;
+}
+
+/**
+ * Geocentric altitude of the sun's centre without refraction [°] and the geocentric local hour angle
+ * H [°] at an instant: the quantities the SPA's rise/transit/set routine (Appendix A.2) works with.
+ */
+function eventProbe(utcMs: number, latitude: number, longitude: number, o: ResolvedSunOptions): { altitude: number; hourAngle: number } {
+  const s = spaGeocentric(julianDay(utcMs), o.deltaT ?? deltaTAt(utcMs), scratch);
+  const hourAngle = s.nu + longitude - s.alpha; // Eq. 31
+  const latRad = latitude * RAD;
+  const deltaRad = s.delta * RAD;
+  const altitude = asinClamped(sin(latRad) * sin(deltaRad) + cos(latRad) * cos(deltaRad) * cos(hourAngle * RAD)) * DEG; // as Eq. 41 with geocentric δ, H (Appendix A.2)
+  return { altitude, hourAngle };
+}
+
+/** Instant near `guessMs` when the geocentric hour angle is `target` (0 upper, 180 lower transit). */
+function transitNear(guessMs: number, target: number, latitude: number, longitude: number, o: ResolvedSunOptions): number {
+  let t = guessMs;
+  for (let i = 0; i < 8; i++) {
+    // The hour angle advances about 360° per day (sidereal rate less the sun's motion).
+    const offset = wrap180(eventProbe(t, latitude, longitude, o).hourAngle - target);
+    t -= (offset / 360) * MS_PER_DAY;
+    if (Math.abs(offset) < 1e-8) break;
+  }
+  return t;
+}
+
+/** Root of altitude − RISE_SET_ALTITUDE between a and b (opposite signs) by the Illinois method. */
+function crossing(a: number, fa: number, b: number, fb: number, latitude: number, longitude: number, o: ResolvedSunOptions): number {
+  let side = 0;
+  for (let i = 0; i < 60 && b - a > 1; i++) {
+    const c = (a * fb - b * fa) / (fb - fa);
+    const fc = eventProbe(c, latitude, longitude, o).altitude - RISE_SET_ALTITUDE;
+    if (fc === 0) return c;
+    if (fc * fb > 0) {
+      b = c;
+      fb = fc;
+      if (side === -1) fa /= 2;
+      side = -1;
+    } else {
+      a = c;
+      fa = fc;
+      if (side === 1) fb /= 2;
+      side = 1;
+    }
+    if (Math.abs(fc) < 1e-7) return c;
+  }
+  return (a + b) / 2;
+}
+
+/**
+ * Sunrise, solar noon and sunset on a local calendar day.
+ * @param localDate - spreadsheet serial in local standard time; only its calendar day is used
+ * @param latitude - [°] −90…90, north positive
+ * @param longitude - [°] −180…180, east positive
+ * @param utcOffset - standard-time offset from UTC [h], −12…14, east positive
+ * @param options - elevation, pressure, temperature (these do not change the rise/set definition), ΔT
+ * @returns local serials. Sunrise/sunset: the sun's upper limb on the horizon, i.e. geocentric
+ *   geometric altitude of the centre −(0.26667° + 0.5667°), the SPA's convention (Appendix A.2,
+ *   h′0); pressure and temperature do not change it. Solar noon: the upper transit (geocentric
+ *   local hour angle 0, as in Appendix A.2) inside the local day, or the one nearest the day's
+ *   middle in the rare day without one. `condition` is `polarDay` / `polarNight` with null rise and
+ *   set when the sun stays above / below that altitude all day. On a day when only one of the two
+ *   events happens (near the polar circles, or when an event falls just across midnight) the other
+ *   is null and the condition is `normal`; if an event happens twice in one day, the first is given.
+ * @remarks Events are found on the full SPA: transits by Newton iteration on the hour angle, rise
+ *   and set by the Illinois method between consecutive transits (altitude is monotonic there). This
+ *   replaces the SPA's Appendix A.2 interpolation, which works on the UT day.
+ */
+export function sunEvents(localDate: number, latitude: number, longitude: number, utcOffset: number, options?: SunOptions): SunEvents {
+  requireSerial('date', localDate);
+  requireSite(latitude, longitude);
+  requireUtcOffset(utcOffset);
+  const o = resolveSunOptions(options);
+  const dayStart = serialToUtcMs(Math.floor(localDate), utcOffset);
+  const dayEnd = dayStart + MS_PER_DAY;
+  requireInstant(dayStart - MS_PER_DAY, o.deltaT !== undefined);
+
+  // Upper transit nearest local noon, then alternating lower/upper transits half a day apart.
+  const noon = transitNear(dayStart + MS_PER_DAY / 2, 0, latitude, longitude, o);
+  const transits: number[] = [];
+  for (let k = -4; k <= 4; k++) transits.push(k === 0 ? noon : transitNear(noon + (k * MS_PER_DAY) / 2, k % 2 === 0 ? 0 : 180, latitude, longitude, o));
+  const f = transits.map((t) => eventProbe(t, latitude, longitude, o).altitude - RISE_SET_ALTITUDE);
+
+  let sunrise: number | null = null;
+  let sunset: number | null = null;
+  let solarNoon: number | null = null;
+  for (let k = 0; k < transits.length; k++) {
+    const isUpper = (k - 4) % 2 === 0;
+    if (isUpper && transits[k] >= dayStart && transits[k] < dayEnd && solarNoon === null) solarNoon = transits[k];
+    if (k + 1 === transits.length) break;
+    const [a, b] = [transits[k], transits[k + 1]];
+    if (b < dayStart || a >= dayEnd || f[k] * f[k + 1] >= 0) continue;
+    const t = crossing(a, f[k], b, f[k + 1], latitude, longitude, o);
+    if (t < dayStart || t >= dayEnd) continue;
+    if (isUpper) sunset ??= t;
+    else sunrise ??= t;
+  }
+  if (solarNoon === null) {
+    const middle = dayStart + MS_PER_DAY / 2;
+    solarNoon = transits.filter((_, k) => (k - 4) % 2 === 0).reduce((best, t) => (Math.abs(t - middle) < Math.abs(best - middle) ? t : best));
+  }
+  let condition: SunEvents['condition'] = 'normal';
+  if (sunrise === null && sunset === null) {
+    const probeAt = solarNoon >= dayStart && solarNoon < dayEnd ? solarNoon : dayStart;
+    condition = eventProbe(probeAt, latitude, longitude, o).altitude > RISE_SET_ALTITUDE ? 'polarDay' : 'polarNight';
+  }
+  const toSerial = (t: number | null) => (t === null ? null : utcMsToSerial(t, utcOffset));
+  return { condition, sunrise: toSerial(sunrise), solarNoon: utcMsToSerial(solarNoon, utcOffset), sunset: toSerial(sunset) };
+}

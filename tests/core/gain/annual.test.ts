@@ -1,0 +1,145 @@
+/**
+ * The annual hourly series and its summary. The per-hour calculation is checked against the
+ * one-hour path (windowGainAt), whose equation is checked by hand in gain.test.ts against the SHGC
+ * definition (ASHRAE Handbook—Fundamentals (2013) ch. 15, from memory). Row count and stamping
+ * follow DESIGN.md's hourly-series convention; the calendar facts (2028 is a leap year with 8784
+ * hours; 1 January 01:00 ends the first hour) are the Gregorian calendar's.
+ */
+import { SunpaneError } from '../../../src/core/common/errors';
+import { annualSeries } from '../../../src/core/gain/annual';
+import { summarizeAnnual } from '../../../src/core/gain/annualSummary';
+import { windowGainAt } from '../../../src/core/gain/windowGain';
+import { ashraeClearSky } from '../../../src/core/sky/clearSky';
+import { annualSunPath } from '../../../src/core/sun/sunPath';
+import { civilToSerial } from '../../../src/core/time/calendar';
+import { baseSpec, shadedSpec } from './gainFixtures';
+
+/** Synthetic measured weather: clear-sky DNI/DHI at the mid-hour sun, scaled down on some days. */
+function syntheticWeather(year: number, site = baseSpec().site) {
+  const path = annualSunPath(year, site);
+  const dni = new Float64Array(path.hours);
+  const dhi = new Float64Array(path.hours);
+  for (let i = 0; i < path.hours; i++) {
+    const doy = Math.floor(i / 24) + 1;
+    const c = ashraeClearSky(path.altitude[i], doy, 0.4, 2.3);
+    const cloud = doy % 5 === 0 ? 0.3 : 1;
+    dni[i] = c.dni * cloud;
+    dhi[i] = c.dhi * (2 - cloud);
+  }
+  return { dni, dhi };
+}
+
+describe('annual series', () => {
+  test('a common year has 8760 rows stamped at the end of each hour', () => {
+    const s = annualSeries(baseSpec());
+    expect(s.hours).toBe(8760);
+    expect(s.gain.length).toBe(8760);
+    expect(s.stampSerial[0]).toBeCloseTo(civilToSerial(2026, 1, 1, 1), 9);
+    expect(s.stampSerial[8759]).toBeCloseTo(civilToSerial(2027, 1, 1, 0), 9);
+  });
+
+  test('a leap year has 8784 rows and its supplied series must be 8784 long', () => {
+    const spec = baseSpec({ year: 2028 });
+    expect(annualSeries(spec).hours).toBe(8784);
+    const bad = baseSpec({ year: 2028, weather: { kind: 'measured', dni: new Float64Array(8760), dhi: new Float64Array(8760) } });
+    expect(() => annualSeries(bad)).toThrow(SunpaneError);
+    expect(() => annualSeries(bad)).toThrow(/^weather\.dni = a list of 8760 is not allowed: must hold one value per hour of 2028: 8784 values/);
+  });
+
+  test('agrees with the one-hour calculation at sampled hours (shaded window, Perez sky, clear sky)', () => {
+    const spec = shadedSpec();
+    const s = annualSeries(spec);
+    let daylight = 0;
+    for (let i = 5; i < s.hours; i += 53) {
+      const h = windowGainAt(spec, s.stampSerial[i] - 1 / 48);
+      // The annual sun path interpolates the SPA's slow terms (≤ 1e-4° from the direct algorithm),
+      // so angles agree to about 1e-4° and the gain to a small fraction of a watt.
+      expect(s.sunAltitude[i]).toBeCloseTo(h.sunAltitude, 3);
+      expect(s.incidence[i]).toBeCloseTo(h.incidence, 3);
+      expect(s.sunlitFraction[i]).toBeCloseTo(h.sunlitFraction, 3);
+      expect(s.beam[i]).toBeCloseTo(h.beam, 1);
+      expect(s.sky[i]).toBeCloseTo(h.sky, 1);
+      expect(s.ground[i]).toBeCloseTo(h.ground, 1);
+      expect(s.gain[i]).toBeCloseTo(h.gain.total, 0);
+      if (h.gain.total > 0) daylight++;
+    }
+    expect(daylight).toBeGreaterThan(40);
+  });
+
+  test('agrees with the one-hour calculation for measured and for global-horizontal weather', () => {
+    const { dni, dhi } = syntheticWeather(2026);
+    const ghi = new Float64Array(dni.length);
+    const path = annualSunPath(2026, baseSpec().site);
+    for (let i = 0; i < ghi.length; i++) ghi[i] = dni[i] * Math.max(0, Math.sin((path.altitude[i] * Math.PI) / 180)) + dhi[i];
+    for (const weather of [{ kind: 'measured' as const, dni, dhi }, { kind: 'globalHorizontal' as const, ghi }]) {
+      const spec = shadedSpec({ weather, skyModel: 'hayDavies' });
+      const s = annualSeries(spec);
+      for (let i = 7; i < s.hours; i += 97) {
+        const h = windowGainAt(spec, s.stampSerial[i] - 1 / 48);
+        expect(s.dni[i]).toBeCloseTo(h.dni, 1);
+        expect(s.dhi[i]).toBeCloseTo(h.dhi, 1);
+        expect(s.gain[i]).toBeCloseTo(h.gain.total, 0);
+      }
+    }
+  });
+
+  test('missing hours are flagged, zero, and counted by the summary', () => {
+    const { dni, dhi } = syntheticWeather(2026);
+    const missing = [100, 101, 4000, 8759];
+    for (const i of missing) dni[i] = Number.NaN;
+    dhi[5000] = Number.POSITIVE_INFINITY;
+    const s = annualSeries(baseSpec({ weather: { kind: 'measured', dni, dhi } }));
+    for (const i of [...missing, 5000]) {
+      expect(s.missing[i]).toBe(1);
+      expect(s.gain[i]).toBe(0);
+    }
+    const sum = summarizeAnnual(s);
+    expect(sum.missingHours).toBe(5);
+    expect(sum.monthlyMissingHours[0]).toBe(2); // hours 100, 101: 5 January
+    expect(sum.monthlyMissingHours[11]).toBe(1); // hour 8759: 31 December 23:00–24:00
+    expect(sum.monthlyMissingHours.reduce((a, b) => a + b, 0)).toBe(5);
+  });
+
+  test('the summary equals the sums of its series', () => {
+    const s = annualSeries(shadedSpec());
+    const sum = summarizeAnnual(s);
+    let total = 0;
+    let peak = 0;
+    let peakAt = 0;
+    let sunlitHours = 0;
+    const monthly = new Array(12).fill(0);
+    for (let i = 0; i < s.hours; i++) {
+      total += s.gain[i];
+      if (s.gain[i] > peak) [peak, peakAt] = [s.gain[i], i];
+      if (s.beam[i] > 0 && s.sunlitFraction[i] > 0) sunlitHours++;
+    }
+    // January: rows 0…743 (31 days × 24 h); the row ending 1 February 00:00 is January's last.
+    for (let i = 0; i < 744; i++) monthly[0] += s.gain[i];
+    expect(sum.annualKWh).toBeCloseTo(total / 1000, 6);
+    expect(sum.monthlyKWh.reduce((a, b) => a + b, 0)).toBeCloseTo(sum.annualKWh, 9);
+    expect(sum.monthlyKWh[0]).toBeCloseTo(monthly[0] / 1000, 6);
+    expect(sum.peakW).toBe(peak);
+    expect(sum.peakStamp).toBe(s.stampSerial[peakAt]);
+    expect(sum.sunlitHours).toBe(sunlitHours);
+    expect(sum.meanSunlitFraction).toBeGreaterThan(0);
+    expect(sum.meanSunlitFraction).toBeLessThan(1);
+    expect(sum.missingHours).toBe(0);
+  });
+
+  test('shading lowers the annual gain and never raises an hour', () => {
+    const bare = annualSeries(baseSpec());
+    const shaded = annualSeries(shadedSpec());
+    for (let i = 0; i < bare.hours; i++) expect(shaded.gain[i]).toBeLessThanOrEqual(bare.gain[i] + 1e-9);
+    expect(summarizeAnnual(shaded).annualKWh).toBeLessThan(summarizeAnnual(bare).annualKWh);
+  });
+
+  test('twelve monthly clear-sky values are used month by month', () => {
+    const tauB = [0.3, 0.3, 0.3, 0.3, 0.3, 0.3, 0.6, 0.6, 0.6, 0.6, 0.6, 0.6];
+    const s = annualSeries(baseSpec({ weather: { kind: 'ashraeClearSky', tauB, tauD: new Array(12).fill(2.3) } }));
+    const one = annualSeries(baseSpec({ weather: { kind: 'ashraeClearSky', tauB: [0.3], tauD: [2.3] } }));
+    const noonJan = 14 * 24 + 12;
+    const noonJul = (181 + 14) * 24 + 12;
+    expect(s.dni[noonJan]).toBe(one.dni[noonJan]);
+    expect(s.dni[noonJul]).toBeLessThan(one.dni[noonJul]);
+  });
+});
