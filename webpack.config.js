@@ -1,10 +1,13 @@
 'use strict';
 /**
  * Builds the one shared-runtime bundle of the add-in into dist/:
- *   taskpane.js    src/addin.ts (worksheet functions + task pane), minified with a source map
+ *   taskpane.js    src/addin.ts (worksheet functions + task pane), minified; source maps only in
+ *                  development builds (a production build ships none)
  *   taskpane.html  from src/taskpane/pane.html, loading office.js from Microsoft's CDN first
+ *   taskpane.css   src/taskpane/pane.css (the page's Content-Security-Policy allows no inline style)
  *   functions.json generated from the registry (src/functions/metadata.ts)
- *   manifest.xml   manifest.xml with its host replaced by SUNPANE_HOST (default https://localhost:3000)
+ *   manifest.xml   production: the production Id and display name, host replaced by SUNPANE_HOST
+ *                  (default https://localhost:3000); development: manifest.xml's own identity
  *   assets/        icons
  * A production build fails when the JavaScript (excluding office.js) exceeds the size budget.
  * `webpack serve` (npm run dev-server / npm start) serves the same over HTTPS on port 3000.
@@ -13,7 +16,7 @@ const fs = require('node:fs');
 const path = require('node:path');
 const HtmlWebpackPlugin = require('html-webpack-plugin');
 const CopyWebpackPlugin = require('copy-webpack-plugin');
-const { resolveHost, manifestForHost } = require('./scripts/manifest-host');
+const { resolveHost, manifestForHost, manifestForIdentity } = require('./scripts/manifest-host');
 
 const ROOT = __dirname;
 const SRC = path.join(ROOT, 'src');
@@ -74,7 +77,8 @@ class SunpaneAddinPlugin {
         try {
           const manifestPath = path.join(ROOT, 'manifest.xml');
           compilation.fileDependencies.add(manifestPath);
-          const xml = manifestForHost(fs.readFileSync(manifestPath, 'utf8'), resolveHost(process.env.SUNPANE_HOST));
+          const identity = this.options.production ? 'production' : 'development';
+          const xml = manifestForHost(manifestForIdentity(fs.readFileSync(manifestPath, 'utf8'), identity), resolveHost(process.env.SUNPANE_HOST));
           compilation.emitAsset('manifest.xml', new sources.RawSource(xml));
         } catch (err) {
           compilation.errors.push(new compiler.webpack.WebpackError(`manifest.xml: ${err && err.message ? err.message : err}`));
@@ -133,7 +137,7 @@ module.exports = async (_env, argv) => {
     context: ROOT,
     entry: { taskpane: path.join(SRC, 'addin.ts') },
     output: { path: path.join(ROOT, 'dist'), filename: '[name].js', clean: true },
-    devtool: 'source-map',
+    devtool: production ? false : 'source-map',
     target: ['web', 'es2020'],
     resolve: { extensions: ['.ts', '.js'] },
     module: {
@@ -147,7 +151,7 @@ module.exports = async (_env, argv) => {
               configFile: path.join(ROOT, 'tsconfig.json'),
               transpileOnly: true,
               onlyCompileBundledFiles: true,
-              compilerOptions: { module: 'es2020', sourceMap: true },
+              compilerOptions: { module: 'es2020', sourceMap: !production },
               getCustomTransformers: () => ({ before: [dropRegistryExamples] }),
             },
           },
@@ -156,9 +160,15 @@ module.exports = async (_env, argv) => {
     },
     performance: { hints: false },
     plugins: [
-      new HtmlWebpackPlugin({ template: path.join(SRC, 'taskpane', 'pane.html'), filename: 'taskpane.html', chunks: ['taskpane'], scriptLoading: 'defer' }),
-      new CopyWebpackPlugin({ patterns: [{ from: path.join(ROOT, 'assets'), to: 'assets', globOptions: { ignore: ['**/*.md'] } }] }),
-      new SunpaneAddinPlugin({ budget: production }),
+      new HtmlWebpackPlugin({ template: path.join(SRC, 'taskpane', 'pane.html'), filename: 'taskpane.html', chunks: ['taskpane'], scriptLoading: 'defer', minify: false }),
+      new CopyWebpackPlugin({
+        patterns: [
+          // Copied as written (not minified): the help page's CSP names its inline style by hash.
+          { from: path.join(ROOT, 'assets'), to: 'assets', globOptions: { ignore: ['**/*.md'] }, info: { minimized: true } },
+          { from: path.join(SRC, 'taskpane', 'pane.css'), to: 'taskpane.css', info: { minimized: true } },
+        ],
+      }),
+      new SunpaneAddinPlugin({ budget: production, production }),
     ],
     devServer: {
       port: DEV_PORT,

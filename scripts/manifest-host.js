@@ -1,12 +1,21 @@
 'use strict';
 /**
- * The host the add-in is served from. manifest.xml at the repository root points every URL at the
- * development host https://localhost:3000; the build writes dist/manifest.xml with that host
- * replaced by SUNPANE_HOST (for deploying dist/ to a static HTTPS host).
+ * The host the add-in is served from, and which of its two identities a manifest carries.
+ * manifest.xml at the repository root is the DEVELOPMENT manifest: every URL on
+ * https://localhost:3000, its own Id and the display name "Sunpane (development)", so that it can be
+ * installed beside the released add-in. A production build (`npm run build`) writes
+ * dist/manifest.xml with the production Id and display name and the host replaced by SUNPANE_HOST;
+ * a development build (`npm run build:dev`, the dev server) keeps the development identity.
  */
 
 /** The host written in the committed manifest.xml template. */
 const DEV_HOST = 'https://localhost:3000';
+
+/** The two identities: Id (a GUID Office keys installed add-ins by) and the name users see. */
+const IDENTITIES = Object.freeze({
+  development: Object.freeze({ id: '52d5cd48-d489-440c-988d-690fad75766a', displayName: 'Sunpane (development)' }),
+  production: Object.freeze({ id: 'cf809c33-94a2-4fef-abc6-210ec9a0d4fd', displayName: 'Sunpane' }),
+});
 
 /**
  * Checks and normalises a host: an https origin, optionally with a path prefix, no trailing slash.
@@ -38,4 +47,20 @@ function manifestForHost(xml, host) {
   return xml.split(DEV_HOST).join(host);
 }
 
-module.exports = { DEV_HOST, resolveHost, manifestForHost };
+/**
+ * The manifest with the identity of `kind` ('development' as committed, or 'production').
+ * @param {string} xml - manifest.xml as committed (development identity)
+ * @param {'development' | 'production'} kind
+ * @returns {string}
+ */
+function manifestForIdentity(xml, kind) {
+  const from = IDENTITIES.development;
+  const to = IDENTITIES[kind];
+  if (!to) throw new Error(`manifest identity ${JSON.stringify(kind)} is not one of ${Object.keys(IDENTITIES).join(', ')}`);
+  const idTag = `<Id>${from.id}</Id>`;
+  const nameTag = `<DisplayName DefaultValue="${from.displayName}"/>`;
+  if (!xml.includes(idTag) || !xml.includes(nameTag)) throw new Error(`manifest.xml does not carry the development identity (${idTag}, ${nameTag})`);
+  return xml.replace(idTag, `<Id>${to.id}</Id>`).replace(nameTag, `<DisplayName DefaultValue="${to.displayName}"/>`);
+}
+
+module.exports = { DEV_HOST, IDENTITIES, resolveHost, manifestForHost, manifestForIdentity };

@@ -10,10 +10,12 @@ import * as path from 'node:path';
 import { NAMESPACE } from '../src/registry';
 import { type XmlElement, allElements, at, childrenNamed, localName, parseXml } from './manifest-xml';
 // eslint-disable-next-line @typescript-eslint/no-require-imports -- the build's own CommonJS helper
-const { DEV_HOST, resolveHost, manifestForHost } = require('../scripts/manifest-host.js') as {
+const { DEV_HOST, IDENTITIES, resolveHost, manifestForHost, manifestForIdentity } = require('../scripts/manifest-host.js') as {
   DEV_HOST: string;
+  IDENTITIES: Record<'development' | 'production', { id: string; displayName: string }>;
   resolveHost: (v: string | undefined) => string;
   manifestForHost: (xml: string, host: string) => string;
+  manifestForIdentity: (xml: string, kind: string) => string;
 };
 
 const ROOT = path.resolve(__dirname, '..');
@@ -162,11 +164,27 @@ describe('the manifest the build writes', () => {
     expect(resolveHost('  ')).toBe(DEV_HOST);
   });
 
-  test('dist/manifest.xml (from `npm run build`) is the template on one https host', () => {
+  test('dist/manifest.xml (from the production build) is the template with the production identity on one https host', () => {
     const built = path.join(ROOT, 'dist', 'manifest.xml');
     if (!fs.existsSync(built)) throw new Error('dist/manifest.xml is missing: run `npm run build` (npm test does it in pretest)');
     const xml = fs.readFileSync(built, 'utf8');
     const host = /<AppDomain>([^<]+)<\/AppDomain>/.exec(xml)?.[1] ?? '';
-    expect(xml).toBe(manifestForHost(TEMPLATE, resolveHost(host)));
+    expect(xml).toBe(manifestForHost(manifestForIdentity(TEMPLATE, 'production'), resolveHost(host)));
+    checkManifest(xml, resolveHost(host));
+  });
+
+  test('development and production manifests differ in Id and display name, so both can be installed side by side', () => {
+    const dev = parseXml(TEMPLATE);
+    const prod = parseXml(manifestForIdentity(TEMPLATE, 'production'));
+    expect(at(dev, 'Id').text).toBe(IDENTITIES.development.id);
+    expect(at(dev, 'DisplayName').attributes.DefaultValue).toBe(IDENTITIES.development.displayName);
+    expect(at(prod, 'Id').text).toBe(IDENTITIES.production.id);
+    expect(at(prod, 'DisplayName').attributes.DefaultValue).toBe(IDENTITIES.production.displayName);
+    expect(at(prod, 'Id').text).not.toBe(at(dev, 'Id').text);
+    expect(at(prod, 'DisplayName').attributes.DefaultValue).not.toBe(at(dev, 'DisplayName').attributes.DefaultValue);
+    expect(at(prod, 'Id').text.toLowerCase()).toMatch(/^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/);
+    // Nothing else changes between the two.
+    expect(manifestForIdentity(TEMPLATE, 'production').split('\n').filter((l, i) => l !== TEMPLATE.split('\n')[i])).toHaveLength(2);
+    expect(() => manifestForIdentity(TEMPLATE, 'staging')).toThrow(/staging/);
   });
 });

@@ -2,8 +2,10 @@
  * The demo's sheet of example worksheet formulas: a block of input cells (one of the demo windows
  * on a midsummer afternoon) and Sunpane functions applied to them, written as real
  * `SUNPANE.<NAME>(...)` formulas whose cached results come from our core through the same
- * `applyFunction` the add-in uses. They recalculate in Excel once the add-in is installed; other
- * programs show the cached value until they recalculate (then #NAME?).
+ * `applyFunction` the add-in uses. In the file each call is stored the way Excel itself saves a
+ * call to an add-in's custom function, `_xldudf_SUNPANE_<NAME>(...)` (docs/platform.md), so that
+ * Excel links it to the add-in when the add-in is loaded; other programs show the cached value
+ * until they recalculate (then #NAME?).
  *
  * Functions are looked up with `findFunction`, and arguments are given by parameter name, so a
  * renamed function or parameter makes the demo fail loudly rather than write a dead formula.
@@ -56,6 +58,16 @@ interface FormulaPlan {
   args: Record<string, ArgSource>;
   unit: string;
   numFmt: string;
+}
+
+/**
+ * A formula as a saved workbook stores it: each `SUNPANE.NAME(` call becomes
+ * `_xldudf_SUNPANE_NAME(`, the form Excel writes for a custom function of an add-in and resolves
+ * to the add-in's function when the add-in loads with the workbook (docs/platform.md). A call
+ * written as plain `SUNPANE.NAME(` text is read as an unknown function and stays #NAME?.
+ */
+export function storedFormula(text: string): string {
+  return text.replace(new RegExp(`\\b${NAMESPACE}\\.([A-Z][A-Z0-9_]*)\\(`, 'g'), `_xldudf_${NAMESPACE}_$1(`);
 }
 
 /** First row of the input block and of the formula table on the sheet. */
@@ -245,7 +257,7 @@ export function addFormulaSheet(wb: ExcelJS.Workbook, sheet: string, set: DemoFo
     const row = t.headerRow + 1 + k;
     const cell = address(row, 3);
     ws.getCell(row, 2).alignment = { wrapText: true, vertical: 'top' };
-    if (typeof f.result === 'number') setFormula(ws, cell, f.formula, f.result, f.numFmt);
+    if (typeof f.result === 'number') setFormula(ws, cell, storedFormula(f.formula), f.result, f.numFmt);
     else ws.getCell(cell).value = f.result;
   });
   freezeAt(ws, 4);

@@ -27,11 +27,13 @@ const TYPES: Record<string, string> = { '.html': 'text/html', '.js': 'text/javas
 
 /**
  * Opens a page on which every request to ORIGIN is answered from dist/, every request for office.js
- * (any host) is answered with `officeStub`, and any other request is refused.
+ * (any host) is answered with `officeStub`, and any other request is refused. `beforeLoad` runs on
+ * the new page before it is opened (init scripts, viewport, colour scheme).
  */
-export async function openAddinPage(browser: Browser, officeStub: string, pagePath = '/taskpane.html'): Promise<Page> {
+export async function openAddinPage(browser: Browser, officeStub: string, pagePath = '/taskpane.html', beforeLoad?: (page: Page) => Promise<void>): Promise<Page> {
   if (!fs.existsSync(DIST)) throw new Error('dist/ is missing: run `npm run build` first');
   const page = await browser.newPage();
+  if (beforeLoad) await beforeLoad(page);
   await page.route('**/*', async (route) => {
     const url = new URL(route.request().url());
     if (/office(\.debug)?\.js$/.test(url.pathname)) {

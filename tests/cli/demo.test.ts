@@ -9,7 +9,8 @@ import * as path from 'node:path';
 import ExcelJS from 'exceljs';
 import { COLOURS } from '../../src/cli/workbook';
 import { applyFunction } from '../../src/registry/evaluate';
-import { findFunction } from '../../src/registry';
+import { FUNCTIONS, findFunction } from '../../src/registry';
+import { functionsMetadata } from '../../src/functions/metadata';
 import { expectSaved, run, tempDir } from './run';
 
 let dir: string;
@@ -112,7 +113,7 @@ describe('sunpane demo', () => {
       ws.eachRow((row) =>
         row.eachCell((cell) => {
           const v = cell.value as ExcelJS.CellFormulaValue;
-          if (!v || typeof v !== 'object' || !('formula' in v) || v.formula.startsWith('SUNPANE.')) return;
+          if (!v || typeof v !== 'object' || !('formula' in v) || v.formula.startsWith('_xldudf_SUNPANE_')) return;
           let expected: number;
           try {
             expected = evaluateNative(v.formula, ws);
@@ -131,13 +132,19 @@ describe('sunpane demo', () => {
   });
 
   it('caches every SUNPANE formula as the registered function gives for the cells it refers to', () => {
+    const registeredNames = new Set(functionsMetadata(FUNCTIONS).functions.map((f) => f.name));
     const ws = wb.getWorksheet('Formulas')!;
     let count = 0;
     ws.eachRow((row) =>
       row.eachCell((cell) => {
         const v = cell.value as ExcelJS.CellFormulaValue;
-        if (!v || typeof v !== 'object' || !('formula' in v) || !v.formula.startsWith('SUNPANE.')) return;
-        const m = /^SUNPANE\.([A-Z]+)\((.*)\)$/.exec(v.formula)!;
+        if (!v || typeof v !== 'object' || !('formula' in v)) return;
+        // Stored as Excel saves an add-in's custom function (docs/platform.md); never as plain SUNPANE.NAME text.
+        expect(v.formula).not.toMatch(/SUNPANE\./);
+        const m = /^_xldudf_SUNPANE_([A-Z]+)\((.*)\)$/.exec(v.formula)!;
+        expect(m).not.toBeNull();
+        // The stored name is the one the add-in's functions.json registers (namespace SUNPANE + name).
+        expect(registeredNames.has(m[1])).toBe(true);
         const fn = findFunction(m[1]);
         expect(fn).toBeDefined();
         const args = m[2].split(',').map((ref) => (ref === '' ? null : numberOf(ws.getCell(ref.replace(/\$/g, '')).value)));
