@@ -116,7 +116,7 @@ class SunpaneAddinPlugin {
 /**
  * The dev server's HTTPS settings: on Windows and macOS the Office development certificate (trusted
  * by desktop Excel) when it can be had; otherwise webpack-dev-server's own self-signed certificate,
- * which the browser must accept once (Linux, CI: see OFFICE.md — the trusted-store install needs sudo).
+ * which the browser must accept once (Linux, CI: see docs/platform.md#developing-on-linux — the trusted-store install needs sudo).
  */
 async function devServerHttps() {
   if (process.platform !== 'win32' && process.platform !== 'darwin') return 'https';

@@ -2,7 +2,7 @@
 /* eslint-disable @typescript-eslint/no-require-imports -- a plain CommonJS Node script, run without a build step */
 /**
  * `npm stop`: ends the dev server that `npm start` recorded, with its whole process group (killing
- * only `webpack serve` can orphan its child — OFFICE.md), and on Windows and macOS removes the
+ * only `webpack serve` can orphan its child — docs/platform.md#developing-on-linux), and on Windows and macOS removes the
  * sideloaded add-in.
  */
 const { spawnSync } = require('node:child_process');

@@ -1,6 +1,6 @@
 /**
  * manifest.xml, checked offline (the online validator is unreachable here, and
- * `office-addin-manifest info` passes dangling resids — OFFICE.md): the shared runtime's four
+ * `office-addin-manifest info` passes dangling resids — docs/platform.md#developing-on-linux): the shared runtime's four
  * references on one resid, every resid defined and at most 32 characters, HTTPS everywhere, a
  * four-part version in step with package.json, the icons present at the sizes named, and the
  * build's host substitution (SUNPANE_HOST).

@@ -4,7 +4,7 @@
  * arguments, lets the registry's one broadcast helper ({@link applyFunction}) do all reading,
  * checking and pairing of ranges, and turns the result table back into cells Excel can show.
  *
- * Error mapping (Excel shows a custom message only on #VALUE! and #N/A, OFFICE.md):
+ * Error mapping (Excel shows a custom message only on #VALUE! and #N/A, docs/platform.md#errors):
  * - a result cell holding a SunpaneError → #VALUE! with its message (only that cell);
  * - a result cell holding a NotAvailable → #N/A with its message;
  * - a call refused as a whole (mismatched range shapes, a bad whole-range argument) → the handler

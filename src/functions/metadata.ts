@@ -5,7 +5,7 @@
  * Every parameter and every result is declared `type: "any"`, `dimensionality: "matrix"`: any
  * argument may be a single cell or a range (the registry's broadcast helper pairs them), and any
  * result may spill. Units and ranges go into the descriptions, because formula autocomplete shows
- * nothing else (OFFICE.md).
+ * nothing else (docs/platform.md#custom-function-metadata).
  */
 import { isOptional, paramHelp } from '../registry';
 import type { FunctionDescriptor } from '../registry/types';
@@ -33,7 +33,7 @@ export interface FunctionsMetadata {
   functions: FunctionMetadata[];
 }
 
-/** Excel's limits on metadata text (OFFICE.md). */
+/** Our limits on metadata text (docs/platform.md#custom-function-metadata). */
 export const MAX_PARAMETER_NAME = 64;
 export const MAX_DESCRIPTION = 512;
 

@@ -1,7 +1,7 @@
 /**
  * Cell addressing, row blocks and rounding for writing large tables in pieces: Excel on the web
  * refuses a request over 5 MB, so an hourly year (8760 rows) is written in blocks of rows with a
- * `context.sync()` after each (OFFICE.md, "Writing to sheets from the pane").
+ * `context.sync()` after each (docs/platform.md#writing-sheets-from-the-pane).
  */
 
 /** Rows per block when writing the hourly table (1,000–2,000 keeps each request well under 5 MB). */

@@ -1,7 +1,7 @@
 /**
  * Sheet names for the pane's result sheets: Excel allows at most 31 characters, none of
  * `: \ / ? * [ ]`, not blank, not starting or ending with an apostrophe, and names are unique
- * without regard to case (OFFICE.md, "Writing to sheets from the pane").
+ * without regard to case (docs/platform.md#writing-sheets-from-the-pane).
  */
 
 /** Longest sheet name Excel accepts. */

@@ -1,6 +1,6 @@
 /**
- * functions.json as generated from the registry: the shape Excel reads (OFFICE.md "Custom
- * functions"), every parameter and result a matrix of any, units and ranges in the descriptions,
+ * functions.json as generated from the registry: the shape Excel reads
+ * (docs/platform.md#custom-function-metadata), every parameter and result a matrix of any, units and ranges in the descriptions,
  * optional arguments only at the end, and ids Excel accepts. Also checks the built dist/functions.json
  * is exactly what the generator gives for the current registry (the build cannot ship stale metadata).
  */

@@ -3,7 +3,7 @@
  * irradiance E0 = 1367 [1 + 0.033 cos(360° (n − 3)/365)]; clear-sky beam Eb = E0 exp(−τb m^ab) and
  * diffuse Ed = E0 exp(−τd m^ad) with the air-mass exponents of Gueymard, C. A. & Thevenard, D.
  * (2013), ASHRAE Trans. 119(2) (RP-1613): ab = 1.454 − 0.406 τb − 0.268 τd + 0.021 τb τd,
- * ad = 0.507 + 0.205 τb − 0.080 τd − 0.190 τb τd (REFERENCES.md §3); the vertical-surface diffuse
+ * ad = 0.507 + 0.205 τb − 0.080 τd − 0.190 τb τd; the vertical-surface diffuse
  * ratio Y = max(0.45, 0.55 + 0.437 cos θ + 0.313 cos² θ).
  *
  * No Handbook worked example could be sourced here, so the checks are the published equations

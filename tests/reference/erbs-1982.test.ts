@@ -1,8 +1,8 @@
 /**
  * Source: Erbs, D. G., Klein, S. A. & Duffie, J. A. (1982), "Estimation of the diffuse radiation
  * fraction for hourly, daily and monthly-average global radiation", Solar Energy 28(4), 293–302,
- * Eq. 1; extraterrestrial irradiance by Spencer (1971) at 1366.1 W/m². Check values: REFERENCES.md §3
- * (as pinned in pvlib's public test suite): GHI 50 W/m², zenith 85°, 1 January → kt 0.405724,
+ * Eq. 1; extraterrestrial irradiance by Spencer (1971) at 1366.1 W/m². Check values (as pinned in
+ * pvlib-python's public test suite; docs/methods.md#global-into-direct-and-diffuse-erbs-et-al-1982): GHI 50 W/m², zenith 85°, 1 January → kt 0.405724,
  * DHI 41.5704, DNI 96.7193.
  */
 import { decomposeErbs, diffuseFractionErbs1982 } from '../../src/core/sky/decomposition';

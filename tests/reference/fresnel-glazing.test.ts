@@ -4,7 +4,7 @@
  * non-absorbing covers per polarisation τ = (1 − r)/(1 + (2N − 1) r) (Eq. 5.1.8), and Example 5.1.1
  * (one and two covers at 60°, n = 1.526: τ ≈ 0.84 and 0.76 — values from memory, so a tolerance of
  * 0.01). Normal-incidence reflectance of one interface ((n − 1)/(n + 1))² = 0.0434 for n = 1.526
- * (REFERENCES.md §4). Equation numbers from memory.
+ * (docs/methods.md#fresnel-optics-of-uncoated-panes). Equation numbers from memory.
  */
 import { RAD } from '../../src/core/common/angles';
 import { GLASS_REFRACTIVE_INDEX, interfaceReflectance, paneStackTransmittance } from '../../src/core/glazing/fresnel';

@@ -1,8 +1,8 @@
 /**
  * Source: Hay, J. E. & Davies, J. A. (1980), "Calculation of the solar radiation incident on an
  * inclined surface", Proc. First Canadian Solar Radiation Data Workshop; in Duffie & Beckman, Solar
- * Engineering of Thermal Processes, 4th ed., Eq. 2.16.4. Check value: REFERENCES.md §3 (as pinned in
- * pvlib's public test suite): 102.9949 W/m², isotropic part 30.1818, circumsolar part 72.8130.
+ * Engineering of Thermal Processes, 4th ed., Eq. 2.16.4. Check value (as pinned in
+ * pvlib-python's public test suite; docs/methods.md#sky-diffuse-on-the-window): 102.9949 W/m², isotropic part 30.1818, circumsolar part 72.8130.
  */
 import { RAD } from '../../src/core/common/angles';
 import { skyDiffuseHayDavies } from '../../src/core/sky/transposition';

@@ -1,7 +1,7 @@
 /**
  * Source: the hemispherical (diffuse) average of an angular property for isotropic radiance,
  * 2 ∫₀^{π/2} X(θ) cos θ sin θ dθ (Duffie & Beckman, Solar Engineering of Thermal Processes, 4th ed.,
- * §5.4; REFERENCES.md §4), and its closed forms: a constant averages to itself; X = cos θ averages to
+ * §5.4; docs/methods.md#hemispherical-diffuse-shgc), and its closed forms: a constant averages to itself; X = cos θ averages to
  * 2 ∫ cos² θ sin θ dθ = 2/3; X = cos² θ to 1/2; a step to 0 above θc to sin² θc.
  */
 import { hemisphericalAverage } from '../../src/core/common/hemispherical';

@@ -1,7 +1,7 @@
 /**
  * Source: the isotropic-sky transposition of Liu & Jordan as given in Duffie & Beckman, Solar
  * Engineering of Thermal Processes, 4th ed., Eq. 2.15.1 (sky and ground terms): sky = DHI (1 + cos Σ)/2,
- * ground = GHI ρg (1 − cos Σ)/2. Check value: REFERENCES.md §3, tilt 40°, DHI 100 → 88.30222216 W/m².
+ * ground = GHI ρg (1 − cos Σ)/2. Check value (docs/methods.md#sky-diffuse-on-the-window): tilt 40°, DHI 100 → 88.30222216 W/m².
  */
 import { groundReflected, skyDiffuseIsotropic } from '../../src/core/sky/transposition';
 

@@ -1,6 +1,6 @@
 /**
  * Source: Kasten, F. & Young, A. T. (1989), "Revised optical air mass tables and approximation
- * formula", Applied Optics 28(22), 4735–4738, Eq. 3. Check values: REFERENCES.md §3 — zenith 0° →
+ * formula", Applied Optics 28(22), 4735–4738, Eq. 3. Check values (stated in the publication) — zenith 0° →
  * 1.000, 80° → 5.586, 89.9° → 36.467 (as tabulated to three decimals, so tolerance 5e-4).
  */
 import { airMassKastenYoung, AIR_MASS_HORIZON } from '../../src/core/sky/airMass';

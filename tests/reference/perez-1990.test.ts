@@ -2,7 +2,7 @@
  * Source: Perez, R., Ineichen, P., Seals, R., Michalsky, J. & Stewart, R. (1990), "Modeling daylight
  * availability and irradiance components from direct and global irradiance", Solar Energy 44(5),
  * 271–289 — model Eqs. 1, 2, 9, composite coefficients of Table 6, ε bin edges and κ = 1.041.
- * Check value: REFERENCES.md §3 (the published model's value for this case as pinned in pvlib's
+ * Check value (docs/methods.md#sky-diffuse-on-the-window; the published model's value for this case as pinned in pvlib's
  * public test suite): 109.084332 W/m². Coefficient table cross-read against Duffie & Beckman,
  * Solar Engineering of Thermal Processes, 4th ed., Table 2.16.1 (from memory).
  */

@@ -2,7 +2,7 @@
  * Source: three.js 0.187.0 (npm `three`, pinned in package.json) — its `Raycaster` ray/triangle
  * intersection, used on a scene of the overhang, fins, reveal and wall face built in world
  * coordinates (tests/reference/raycast-scene.ts). An independent reference: it shares no code or
- * formula with src/core/shading/sunlit.ts, only the description of the geometry (DESIGN.md).
+ * formula with src/core/shading/sunlit.ts, only the description of the geometry (docs/conventions.md#window-shading-geometry).
  *
  * Sampling and tolerance. Each case estimates the sunlit fraction from N = 60 × 60 = 3600 rays,
  * one uniformly random point in each cell of a 60 × 60 grid over the glass (jittered stratified

@@ -1,14 +1,14 @@
 /**
  * Source: Reda, I. & Andreas, A., *Solar Position Algorithm for Solar Radiation Applications*,
  * NREL/TP-560-34302 (revised January 2008) — the worked example of the report (Table A5.1 and its
- * appendix), as collected in /work/shared/REFERENCES.md §1 [pub], and the row counts and column sums
- * of its periodic-term tables A4.2 and A4.3 (REFERENCES.md §1, computed from two independent public
- * transcriptions) to check our transcription.
+ * appendix) — stated in the publication — and the row counts and column sums of its
+ * periodic-term tables A4.2 and A4.3 (computed from two independent public transcriptions of the
+ * report) to check our transcription. Summary in docs/methods.md#sun-position-nrel-solar-position-algorithm.
  *
  * Inputs: 2003-10-17 12:30:30 local standard time at UTC−7 (19:30:30 UT), ΔUT1 = 0, ΔT = 67 s,
  * latitude 39.742476°, longitude −105.1786°, elevation 1830.14 m, pressure 820 hPa, temperature
  * 11 °C, surface slope 30° facing 170° (azimuth rotation −10°), refraction at rise/set 0.5667°.
- * Tolerances are the ones REFERENCES.md gives for each quantity (the report prints 6–10 digits).
+ * Tolerances follow the digits the report prints for each quantity (6–10 digits).
  */
 import { B_TERMS, L_TERMS, NUTATION_TERMS, R_TERMS } from '../../src/core/sun/spaTerms';
 import { spaSteps, sunPosition } from '../../src/core/sun/spa';

@@ -1,6 +1,6 @@
 /**
  * The fake Excel host used by the pane's tests (tests/browser/excel-host.js) enforces what Excel on
- * the web enforces (OFFICE.md, "Writing to sheets from the pane"): a request over 5 MB is refused,
+ * the web enforces (docs/platform.md#writing-sheets-from-the-pane): a request over 5 MB is refused,
  * sheet names follow Excel's rules, value arrays match their range, and properties are readable
  * only after load() and sync(). Without these refusals the pane's tests could not fail.
  */

@@ -1,6 +1,6 @@
 /**
  * The hourly series of one window over a year: 8760 rows (8784 in a leap year), each stamped at the
- * END of its hour with the sun at the middle of the hour (DESIGN.md), in typed-array columns.
+ * END of its hour with the sun at the middle of the hour (docs/conventions.md#hourly-rows), in typed-array columns.
  *
  * Same calculation as {@link windowGainAt} hour by hour (the tests hold them together), written for
  * speed: the sun path comes from {@link annualSunPath} (slow terms every second day, interpolated;

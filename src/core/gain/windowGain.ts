@@ -9,7 +9,7 @@
  * coefficient at the beam's incidence angle, SHGC_diffuse its hemispherical average and IAC the
  * interior attenuation coefficient. Source: ASHRAE Handbook—Fundamentals (2013) ch. 15, the
  * fenestration solar heat gain equations (beam, diffuse and interior attenuation terms; from
- * memory); DESIGN.md "Gain and load".
+ * memory); docs/methods.md#gain.
  *
  * "No sun" is a result: at night, with the sun behind the wall or behind the skyline the beam part
  * is 0 and only the diffuse parts (possibly 0) remain. The beam counts only when the sun at the

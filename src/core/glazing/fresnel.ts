@@ -1,7 +1,7 @@
 /**
  * Solar optics of uncoated glass panes from the Fresnel equations, Snell's law and Bouguer's law of
  * absorption (Duffie & Beckman, Solar Engineering of Thermal Processes, 4th ed., §5.1–5.3; the
- * equation numbers cited below are from memory, the formulas are those of REFERENCES.md §4).
+ * equation numbers cited below are from memory, the formulas are gathered in docs/methods.md#fresnel-optics-of-uncoated-panes).
  */
 import { RAD } from '../common';
 
@@ -60,7 +60,7 @@ function stack(front: PolarisedPair, back: PolarisedPair): PolarisedPair {
  * @remarks Per polarisation one pane: τ = τa (1 − r)² / (1 − (r τa)²), ρ = r + r (1 − r)² τa² / (1 − (r τa)²),
  * τa = exp(−K L / cos θ2); panes combine as T = T1 T2 / (1 − R1 R2) with the stack's reflectance
  * R = R1 + T1² R2 / (1 − R1 R2); the two polarisations are averaged last — Duffie & Beckman, 4th ed.,
- * §5.2–5.3 (REFERENCES.md §4). Each pane's reflectance is the same from both sides (an absorbing
+ * §5.2–5.3. Each pane's reflectance is the same from both sides (an absorbing
  * pane with equal interfaces is symmetric), so the stack needs one reflectance per polarisation.
  */
 export function paneStackTransmittance(incidence: number, panes: number, kl: number, n: number = GLASS_REFRACTIVE_INDEX): number {

@@ -15,7 +15,7 @@
  * Sunpane ships no factor tables.
  *
  * Hour indexing: value k of a 24-hour series is the hour ending at k + 1 o'clock (rows stamped at
- * the end of the hour, DESIGN.md), so index 0 is the hour 00:00–01:00.
+ * the end of the hour, docs/conventions.md#hourly-rows), so index 0 is the hour 00:00–01:00.
  */
 import { SunpaneError, rangeText, requireRange } from '../common';
 

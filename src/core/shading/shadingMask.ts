@@ -87,7 +87,7 @@ export interface MonthHourOptions {
  * @returns 12 × 24 sunlit fractions 0…1; 0 for hours with the sun down, behind the wall or below
  * the skyline
  * @remarks Sun position by the NREL SPA (Reda & Andreas 2008) via src/core/sun/spa.ts; hourly stamps at
- * the END of the hour with the sun at mid-hour (DESIGN.md).
+ * the END of the hour with the sun at mid-hour (docs/conventions.md#hourly-rows).
  * @throws SunpaneError naming `day`, `year`, `utcOffset`, `latitude`, `longitude`, or any window or
  * shading argument
  */

@@ -2,7 +2,7 @@
  * Sunlit fraction of a window in a vertical wall, shaded by an overhang, left and right fins, a
  * reveal (glass set back behind the wall face) and a skyline — by exact shadow polygons.
  *
- * Geometry (DESIGN.md, "Window shading geometry"). Coordinates in the plane of the wall face, seen
+ * Geometry (docs/conventions.md#window-shading-geometry). Coordinates in the plane of the wall face, seen
  * from outside: x to the right, y up, origin at the lower-left corner of the wall opening; z is the
  * outward normal. The glass (width W, height H) lies a reveal depth R behind the wall face; the
  * overhang and fins are thin plates standing out from the wall face (z = 0 … P). With the sun

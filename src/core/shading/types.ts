@@ -4,7 +4,7 @@
  * outside, facing the window (docs/conventions.md).
  */
 
-/** A horizontal projection above the window (DESIGN.md, "Window shading geometry"). */
+/** A horizontal projection above the window (docs/conventions.md#window-shading-geometry). */
 export interface Overhang {
   /** Depth out from the wall face [m], ≥ 0 (0 casts no shadow). */
   projection: number;

@@ -4,7 +4,8 @@
  *
  * Both return direct normal, diffuse horizontal and global horizontal irradiance; with the sun at or
  * below the horizon all three are 0 (no sun is a result, not an error). Handbook equation numbers
- * cited here are from memory; the formulas are those of REFERENCES.md §3.
+ * cited here are from memory; the formulas are gathered in
+ * docs/methods.md#clear-sky-ashrae-pseudo-optical-depths.
  */
 import { airMassKastenYoung } from './airMass';
 import { RAD, requireRange } from '../common';

@@ -7,7 +7,7 @@
  * its Appendix A.1, Eq. A1–A4). Stated uncertainty ±0.0003° in zenith and azimuth for the years
  * −2000…6000.
  *
- * Conventions (DESIGN.md): degrees in and out; azimuth clockwise from true north (N 0, E 90, S 180,
+ * Conventions (docs/conventions.md): degrees in and out; azimuth clockwise from true north (N 0, E 90, S 180,
  * W 270); altitude is topocentric (seen from the site, with parallax) and includes refraction; hour
  * angle negative in the morning. Time in is a UTC instant [ms since 1970-01-01]; ΔT = TT − UT from
  * {@link deltaTAt} unless given.

@@ -11,8 +11,8 @@
  * in units of 1e-8 rad (L, B) or 1e-8 AU (R). Each nutation row is `[Y0, Y1, Y2, Y3, Y4, a, b, c, d]`
  * and contributes (a + b·T)·sin(ΣXj·Yj) to Δψ and (c + d·T)·cos(ΣXj·Yj) to Δε, in units of 0.0001″.
  *
- * The transcription is checked against the row counts and column sums of REFERENCES.md §1
- * (tests/reference/spa-worked-example.test.ts).
+ * The transcription is checked against the row counts and column sums of both tables
+ * (tests/reference/spa-worked-example.test.ts; docs/methods.md#sun-position-nrel-solar-position-algorithm).
  *
  * The sums over the tables ({@link earthPeriodicSums}, {@link nutationSums}) are arranged for speed
  * without changing the algorithm:

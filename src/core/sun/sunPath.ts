@@ -75,7 +75,7 @@ export interface SunPathYear {
 }
 
 export interface SunPathOptions {
-  /** Where in each hour the sun is evaluated: `middle` (default, DESIGN.md) or `end` (the stamp). */
+  /** Where in each hour the sun is evaluated: `middle` (default, docs/conventions.md#hourly-rows) or `end` (the stamp). */
   at?: 'middle' | 'end';
   /** ΔT = TT − UT [s], −100…10000; default Espenak & Meeus (2006) per day. */
   deltaT?: number;

@@ -2,7 +2,7 @@
  * Angles between the sun and a surface: incidence angle, horizontal shadow angle (wall-solar
  * azimuth) and vertical shadow angle (profile angle).
  *
- * Conventions (DESIGN.md): degrees; azimuths clockwise from true north, for the sun and for the
+ * Conventions (docs/conventions.md#directions-and-angles): degrees; azimuths clockwise from true north, for the sun and for the
  * direction the surface faces (its outward normal); tilt 0 = horizontal facing up, 90 = vertical;
  * left and right as seen from outside, facing the window.
  *

@@ -3,7 +3,7 @@
  *
  * All calendar and spreadsheet-serial handling in Sunpane lives in this folder (ΔT in deltaT.ts).
  *
- * Conventions (DESIGN.md): a date-time crossing a public interface is a spreadsheet serial number in
+ * Conventions (docs/conventions.md#date-times): a date-time crossing a public interface is a spreadsheet serial number in
  * the 1900 date system, in *local standard time* (no daylight saving), with the site's UTC offset in
  * hours, east positive. Inside the core an instant is a UTC time in milliseconds since 1970-01-01
  * (the JavaScript epoch), written `utcMs`.

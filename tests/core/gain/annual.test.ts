@@ -1,8 +1,8 @@
 /**
  * The annual hourly series and its summary. The per-hour calculation is checked against the
- * one-hour path (windowGainAt), whose equation is checked by hand in gain.test.ts against the SHGC
+ * one-hour path (windowGainAt), whose equation is checked by hand in windowGain.test.ts against the SHGC
  * definition (ASHRAE Handbook—Fundamentals (2013) ch. 15, from memory). Row count and stamping
- * follow DESIGN.md's hourly-series convention; the calendar facts (2028 is a leap year with 8784
+ * follow docs/conventions.md#hourly-rows; the calendar facts (2028 is a leap year with 8784
  * hours; 1 January 01:00 ends the first hour) are the Gregorian calendar's.
  */
 import { SunpaneError } from '../../../src/core/common/errors';

@@ -1,7 +1,7 @@
 /**
  * The annual fast path (src/core/sun/sunPath.ts) against the direct NREL SPA (src/core/sun/spa.ts), which is
  * itself checked against the published worked example and two outside libraries
- * (tests/reference/). Requirement (DESIGN.md): agreement within 1e-4° in altitude and azimuth.
+ * (tests/reference/). Requirement (docs/methods.md#sun-position-nrel-solar-position-algorithm): agreement within 1e-4° in altitude and azimuth.
  */
 import { SunpaneError } from '../../../src/core/common/errors';
 import { annualSunPath } from '../../../src/core/sun/sunPath';
