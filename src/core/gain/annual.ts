@@ -13,19 +13,10 @@
  * angles (every hour), shading and SHGC (sun up and in front of the wall), irradiance and gain
  * (hours with light). Hours that cannot matter are skipped: no shading with the sun down or behind
  * the wall, no shadow work with the sun below the skyline, no sky model in the dark.
- * The shadow union is a closed form (src/core/shading/shadowPlan.ts), the Kasten–Young power a tabulated
- * series (src/core/sky/airMass.ts), the SHGC table filled on first use and kept per glazing
- * (src/core/glazing/shgc.ts).
+ * The fast paths it relies on (each beside the plain formula it replaces, each with an equality
+ * test, each kept because it moves `npm run bench` by 10 % or more) are listed in docs/fast-paths.md.
  * tests/core/gain/preparedFast.test.ts holds every hour to the checked functions within 1e-12 (the
  * incidence angle within 1e-9 °: acos amplifies rounding near 0° and 180°).
- *
- * Speed (`npm run bench`, window_annual_vs_suncalc, on the shared 2-core machine): about 4.4 ms a
- * year three rounds ago, 2.2–2.5 ms two rounds ago; taking the sun's sines and cosines from the sun
- * path saved 5–7 %. Last round (three passes here, shorter passes in the sun path, kept SHGC curves
- * and extraterrestrial table, no declination / equation-of-time columns): 15–20 % less time than
- * before in interleaved A/B runs against the previous code in the same process (400 rounds; the
- * machine was shared and loaded, so absolute times varied 1.9–3.0 ms); `npm run bench` ratio 1.12
- * before, about 0.93 after.
  *
  * Weather: clear-sky models (12 monthly values or one for the year) at each hour's sun; a supplied
  * DNI + DHI series; or a supplied GHI series split by Erbs et al. (1982). A non-finite value in a
@@ -78,18 +69,6 @@ export interface AnnualSeries {
   convective: Float64Array;
   /** 1 where the weather series has no value for the hour (gain etc. 0), else 0. */
   missing: Uint8Array;
-}
-
-/**
- * `wrap180(d)` of src/core/common/angles.ts without its floating-point remainder when |d| < 360 (there the
- * remainder is d itself, so the result is the same number); other values go to wrap180.
- * @param d - an angle difference [°], any finite value
- * @returns the same number as wrap180(d), −180…180
- */
-export function wrapDifference180(d: number): number {
-  if (!(d > -360 && d < 360)) return wrap180(d);
-  const r = d < 0 ? d + 360 : d; // wrap360: d + 360 may round to 360, which the next line maps to 0 as wrap180 does
-  return r > 180 ? r - 360 : r;
 }
 
 /** Month (1…12) of each day of the year, index 0 = 1 January. */
@@ -229,16 +208,7 @@ function hourlyAngles(n: number, cosTilt: number, sinTilt: number, cosSurf: numb
     const sinGamma = sinSurf * cosA - cosSurf * sinA;
     const cosGamma = cosSurf * cosA + sinSurf * sinA;
     const cosTheta = sinBeta * cosTilt + cosBeta * sinTilt * cosGamma; // D&B Eq. 1.6.3
-    // D&B Eq. 1.9.1a, Ω = atan2(sin β, cos β cos γ), by one atan of the ratio: with the second
-    // argument above 0 that is what fdlibm's atan2 does (same value); below 0 (sun behind the wall)
-    // atan2(y, x) = ±π − atan(y / −x), + for y ≥ 0 (within an ulp of π of atan2's value).
-    const horizontal = cosBeta * cosGamma;
-    const omega =
-      (horizontal > 0
-        ? Math.atan(sinBeta / horizontal)
-        : horizontal < 0
-          ? (sinBeta >= 0 ? Math.PI : -Math.PI) - Math.atan(sinBeta / -horizontal)
-          : Math.atan2(sinBeta, horizontal)) * deg;
+    const omega = Math.atan2(sinBeta, cosBeta * cosGamma) * deg; // D&B Eq. 1.9.1a
     sinG[i] = sinGamma;
     cosG[i] = cosGamma;
     cosT[i] = cosTheta;
@@ -281,7 +251,7 @@ function hourlyShading(
     const theta = incidence[i];
     if (!(a > 0 && theta < 90)) continue;
     const s = az[i];
-    const gamma = wrapDifference180(surfAz - s); // horizontal shadow angle (src/core/shading/sunlit.ts convention)
+    const gamma = wrap180(surfAz - s); // horizontal shadow angle (src/core/shading/sunlit.ts convention)
     sunlitFraction[i] = shade !== undefined ? shade.sunlitInWallFrame(a, s, gamma, sinAlt[i], cosAlt[i], sinG[i], cosG[i]) : 1;
     shgc[i] = curve.atAngle(theta);
   }

@@ -3,51 +3,23 @@
  * path at the zenith.
  */
 import { RAD, requireRange } from '../common';
+import { kastenYoungPowerFast } from './airMassFast';
 
-const { sin, exp, log, pow, round } = Math;
+const { sin, pow } = Math;
 
 /** Exponent and offset of the power term of Kasten & Young (1989) Eq. 3: 0.50572 (β + 6.07995)^−1.6364. */
 const KY_EXPONENT = -1.6364;
 const KY_OFFSET = 6.07995;
 
-// (β + 6.07995)^−1.6364 for 0 ≤ β ≤ 90 by nodes y_k every 90/256 ° (values by Math.pow, made once at
-// load) and the binomial series of (1 + t)^c about the nearest node, |t| ≤ 0.176 / 6.08 < 0.029:
-// 12 terms leave a truncation below 0.029^12 · 3 ≈ 1e-18 relative.
-const KY_NODES = 256;
-const KY_STEP = 90 / KY_NODES;
-const KY_TERMS = 12;
-const kyY = new Float64Array(KY_NODES + 1);
-const kyInverse = new Float64Array(KY_NODES + 1);
-const kyPower = new Float64Array(KY_NODES + 1);
-for (let k = 0; k <= KY_NODES; k++) {
-  const y = KY_OFFSET + k * KY_STEP;
-  kyY[k] = y;
-  kyInverse[k] = 1 / y;
-  kyPower[k] = pow(y, KY_EXPONENT);
-}
-/** Binomial coefficients C(c, j) = c (c − 1) … (c − j + 1) / j!, j = 0…KY_TERMS − 1. */
-const kyBinomial = new Float64Array(KY_TERMS);
-kyBinomial[0] = 1;
-for (let j = 1; j < KY_TERMS; j++) kyBinomial[j] = (kyBinomial[j - 1] * (KY_EXPONENT - j + 1)) / j;
-const [B0, B1, B2, B3, B4, B5, B6, B7, B8, B9, B10, B11] = kyBinomial;
-
 /**
- * (β + 6.07995)^−1.6364 — Math.pow's value to about 1e-15 relative (tests/core/gain/preparedFast.test.ts
- * holds it within 1e-14 over the whole range), in a fraction of the time: nearest tabulated node
- * times the binomial series in t = (y − y_k) / y_k, summed by Estrin's scheme (pairs, then powers
- * t², t⁴, t⁸: short dependency chains); exp/log outside 0 ≤ β ≤ 90.
+ * The power term (β + 6.07995)^−1.6364 of Kasten & Young Eq. 3 as written. The hourly path uses its
+ * fast twin {@link kastenYoungPowerFast} (airMassFast.ts), held to this within 1e-14 relative.
  */
-function kastenYoungPower(beta: number): number {
-  if (!(beta >= 0 && beta <= 90)) return exp(KY_EXPONENT * log(beta + KY_OFFSET));
-  const k = round(beta / KY_STEP);
-  const t = (beta + KY_OFFSET - kyY[k]) * kyInverse[k];
-  const t2 = t * t;
-  const t4 = t2 * t2;
-  const low = B0 + B1 * t + t2 * (B2 + B3 * t);
-  const mid = B4 + B5 * t + t2 * (B6 + B7 * t);
-  const high = B8 + B9 * t + t2 * (B10 + B11 * t);
-  return kyPower[k] * (low + t4 * (mid + t4 * high));
+export function kastenYoungPowerPlain(beta: number): number {
+  return pow(beta + KY_OFFSET, KY_EXPONENT);
 }
+
+const kastenYoungPower = kastenYoungPowerFast;
 
 /**
  * Relative air mass of Kasten & Young (1989).
@@ -69,8 +41,7 @@ export function airMassKastenYoung(sunAltitude: number): number {
  * altitude once (the one implementation: the checked form calls it).
  * @param sunAltitude - sun altitude [°], a finite number (not checked)
  * @returns as {@link airMassKastenYoung}
- * @remarks Kasten & Young (1989) Eq. 3, the power (β + 6.07995)^−1.6364 by tabulated nodes and a
- * binomial series (same value as Math.pow to about 1e-15 relative, a quarter of its time in V8).
+ * @remarks Kasten & Young (1989) Eq. 3.
  */
 export function airMassKastenYoungUnchecked(sunAltitude: number): number {
   const beta = sunAltitude > 0 ? sunAltitude : 0;

@@ -59,14 +59,11 @@ export interface PerezParts {
   total: number;
 }
 
-const [EDGE_1, EDGE_2, EDGE_3, EDGE_4, EDGE_5, EDGE_6, EDGE_7] = PEREZ_EPSILON_EDGES;
-
 /** The ε bin (1…8) of a sky clearness value: 1 + the number of bin edges at or below ε (bin 1 for NaN). */
 export function perezBin(epsilon: number): number {
-  // Unrolled over the seven ascending edges (one comparison chain, no loop over the frozen array).
-  if (!(epsilon >= EDGE_1)) return 1;
-  if (!(epsilon >= EDGE_4)) return epsilon >= EDGE_3 ? 4 : epsilon >= EDGE_2 ? 3 : 2;
-  return epsilon >= EDGE_7 ? 8 : epsilon >= EDGE_6 ? 7 : epsilon >= EDGE_5 ? 6 : 5;
+  let bin = 1;
+  for (let k = 0; k < PEREZ_EPSILON_EDGES.length; k++) if (epsilon >= PEREZ_EPSILON_EDGES[k]) bin++;
+  return bin;
 }
 
 /**

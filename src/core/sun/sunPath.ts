@@ -14,8 +14,8 @@
  * computed directly once a day and carried hour to hour by rotation; the parallax step uses the
  * vector form of the SPA's Eq. 36–41 (the sun's geocentric direction scaled by its distance in
  * Earth radii, 1/sin ξ, minus the observer's position (x, 0, y); algebraically identical); altitude
- * and azimuth are atan2 of the vector's components by an inlined series (within a few ulps of
- * Math.atan2), and the refraction's tangent comes from the same components (no Math.tan). On request
+ * and azimuth are Math.atan2 of the vector's components, and the refraction's tangent comes from
+ * the same components (no Math.tan). On request
  * the sines and cosines of altitude and azimuth are taken from the vector too (callers then need no
  * Math.sin / Math.cos per hour). The hourly work runs as short passes over the year (interpolation,
  * hour angle, vector, angles; with the trig columns altitude, refraction and azimuth each a pass of
@@ -24,12 +24,12 @@
  * {@link sunPosition} within 1e-4° over full years at several latitudes (measured: altitude
  * ≤ 4e-7°, azimuth ≤ 7e-6° near the zenith).
  */
-import { DEG, RAD, atan2Fast, SunpaneError } from '../common';
+import { DEG, RAD, SunpaneError } from '../common';
 import { EARTH_RADIUS_M, POLAR_RATIO, RISE_SET_ALTITUDE, requireSite, resolveSunOptions, spaGeocentricSeries } from './spa';
 import { civilToSerial, deltaTAt, hoursInYear, julianDay, requireUtcOffset, requireYear, serialToUtcMs } from '../time';
 import type { Site } from './site';
 
-const { sin, cos, tan, atan, sqrt, floor } = Math;
+const { sin, cos, tan, atan, atan2, sqrt, floor } = Math;
 
 const MS_PER_HOUR = 3_600_000;
 const MS_PER_DAY = 86_400_000;
@@ -331,11 +331,11 @@ function hourlyAngles(hours: number, refractionScale: number, altitude: Float64A
   for (let i = 0; i < hours; i++) {
     const u = altitude[i];
     const h = zenith[i];
-    const e0 = atan2Fast(u, h) * deg;
+    const e0 = atan2(u, h) * deg;
     const e = e0 < refractionFrom ? e0 : e0 + refractionFromComponents(refractionScale, u, h, e0);
     altitude[i] = e;
     zenith[i] = 90 - e;
-    const az = atan2Fast(azimuth[i], south[i]) * deg + 180;
+    const az = atan2(azimuth[i], south[i]) * deg + 180;
     azimuth[i] = az >= 360 ? az - 360 : az;
   }
 }
@@ -345,7 +345,7 @@ function hourlyAngles(hours: number, refractionScale: number, altitude: Float64A
  * components (sin e₀ = up / r, cos e₀ = horizontal / r; sin A = −west / horizontal, cos A = −south /
  * horizontal, as A = atan2(west, south) + 180°) and turned through the refraction Δe by its sine and
  * cosine (Taylor to Δe⁵ and Δe⁴; |Δe| < 0.02 rad, truncation < 1e-17). Since the angle columns come
- * from {@link atan2Fast} (error < 1e-16 rad), these agree with Math.sin / Math.cos of the columns
+ * from Math.atan2 (within an ulp), these agree with Math.sin / Math.cos of the columns
  * within a few ulps. With the sun exactly overhead (horizontal 0) the azimuth is 180° as in
  * {@link hourlyAngles}: sine 0, cosine −1.
  * @param hours - number of hours
@@ -396,7 +396,7 @@ function hourlyAltitudesWithTrig(hours: number, refractionScale: number, altitud
     const inverseR = 1 / sqrt(u * u + h * h);
     sinAlt[i] = u * inverseR;
     cosAlt[i] = h * inverseR;
-    altitude[i] = atan2Fast(u, h) * deg;
+    altitude[i] = atan2(u, h) * deg;
     UP_SCRATCH[i] = u;
   }
   hourlyRefraction(hours, refractionScale, altitude, zenith, UP_SCRATCH, sinAlt, cosAlt);
@@ -453,7 +453,7 @@ function hourlyAzimuthsWithTrig(hours: number, azimuth: Float64Array, south: Flo
     const west = azimuth[i];
     const s = south[i];
     const h = sqrt(west * west + s * s);
-    const az = atan2Fast(west, s) * deg + 180;
+    const az = atan2(west, s) * deg + 180;
     azimuth[i] = az >= 360 ? az - 360 : az;
     if (h > 0) {
       const inverseH = 1 / h;

@@ -1,19 +1,35 @@
-import { atan2Fast } from '../../../src/core/common/angles';
+import { acosClamped, asinClamped, wrap180, wrap360 } from '../../../src/core/common/angles';
 
-describe('the fast atan2 of the hourly loops', () => {
-  test('atan2Fast matches Math.atan2 within a few ulps (2e-15 rad) around the circle and at every octant edge', () => {
-    let worst = 0;
-    for (let k = 0; k < 7200; k++) {
-      const a = (k / 7200) * 2 * Math.PI - Math.PI + 1e-7;
-      for (const r of [1e-6, 1, 2.3e4]) {
-        const [y, x] = [r * Math.sin(a), r * Math.cos(a)];
-        worst = Math.max(worst, Math.abs(atan2Fast(y, x) - Math.atan2(y, x)));
-      }
+describe('the angle helpers of the core', () => {
+  test('clamped inverse trig stays finite just outside ±1 (rounding), and equals Math.asin / Math.acos inside', () => {
+    expect(acosClamped(1.0000000002)).toBe(0);
+    expect(acosClamped(-1.0000000002)).toBe(Math.PI);
+    expect(asinClamped(1.0000000002)).toBe(Math.PI / 2);
+    expect(asinClamped(-1.0000000002)).toBe(-Math.PI / 2);
+    for (const x of [-1, -0.5, 0, 0.3, 1]) {
+      expect(acosClamped(x)).toBe(Math.acos(x));
+      expect(asinClamped(x)).toBe(Math.asin(x));
     }
-    for (const [y, x] of [[1, 1], [-1, 1], [1, -1], [-1, -1], [0, 1], [1, 0], [-1, 0], [0.2679491924311227, 1]]) {
-      worst = Math.max(worst, Math.abs(atan2Fast(y, x) - Math.atan2(y, x)));
+  });
+
+  test('wrap360 gives [0, 360) and wrap180 gives (−180, 180] at the edges and for large angles', () => {
+    const cases: [number, number, number][] = [
+      // angle, wrap360, wrap180
+      [0, 0, 0],
+      [360, 0, 0],
+      [-360, 0, 0],
+      [180, 180, 180],
+      [-180, 180, 180],
+      [190, 190, -170],
+      [-190, 170, 170],
+      [725, 5, 5],
+      [-1e-14, 0, 0], // 360 − 1e-14 rounds to 360 itself, so the wrap gives 0 (the same direction)
+    ];
+    for (const [a, w360, w180] of cases) {
+      expect(wrap360(a)).toBeCloseTo(w360, 12);
+      expect(wrap180(a)).toBeCloseTo(w180, 12);
+      expect(wrap360(a)).toBeGreaterThanOrEqual(0);
+      expect(wrap360(a)).toBeLessThan(360);
     }
-    expect(worst).toBeLessThan(2e-15);
-    expect(atan2Fast(0, 0)).toBe(0);
   });
 });
