@@ -52,9 +52,9 @@ module.exports = {
     },
     {
       name: 'shared-layers-below-adapters',
-      comment: 'registry, demo and schedule sit on the core; they never import an adapter.',
+      comment: 'registry, demo, schedule and io sit on the core; they never import an adapter.',
       severity: 'error',
-      from: { path: '^src/(registry|demo|schedule)/' },
+      from: { path: '^src/(registry|demo|schedule|io)/' },
       to: { path: '^src/(functions|taskpane|cli)/' },
     },
     {
@@ -65,10 +65,17 @@ module.exports = {
       to: { path: '^src/(registry|demo)/' },
     },
     {
-      name: 'shared-layers-no-node',
-      comment: 'registry, demo and schedule also run in the add-in: no Node built-ins.',
+      name: 'io-on-core-only',
+      comment: 'Reading and writing user files and sheets (src/io) depends on the core only.',
       severity: 'error',
-      from: { path: '^src/(registry|demo|schedule|functions|taskpane)/' },
+      from: { path: '^src/io/' },
+      to: { path: '^src/(registry|demo|schedule)/' },
+    },
+    {
+      name: 'shared-layers-no-node',
+      comment: 'registry, demo, schedule and io also run in the add-in: no Node built-ins.',
+      severity: 'error',
+      from: { path: '^src/(registry|demo|schedule|io|functions|taskpane)/' },
       to: { dependencyTypes: ['core'] },
     },
     {

@@ -4,7 +4,7 @@
  * the user is asked (in the pane) whether to replace it or keep both; a name taken by any other
  * sheet simply gets a free variant (`Name (2)`).
  */
-import { hasSheetName, uniqueSheetName } from './sheetNames';
+import { hasSheetName, uniqueSheetName } from '../io/sheetNames';
 
 /** Runs a batch of Excel requests (Excel.run, or a test host's). */
 export type RunBatch = <T>(batch: (ctx: Excel.RequestContext) => Promise<T>) => Promise<T>;
