@@ -3,6 +3,7 @@
  * a few lines of description, the table as an Excel table, and optionally a bar chart of one of its
  * columns.
  */
+import { escapeFormulaText } from '../io/textCells';
 import { cellAddress, rangeAddress } from './blocks';
 import type { RunBatch } from './resultSheets';
 import { HEAD_FILL } from './yearSheet';
@@ -18,6 +19,11 @@ export interface SmallTable {
   chartTitle?: string;
 }
 
+/** A row's text cells as Excel should keep them: never read as a formula (labels come from the user). */
+function textSafeRow(row: readonly (number | string)[]): (number | string)[] {
+  return row.map((v) => (typeof v === 'string' ? escapeFormulaText(v) : v));
+}
+
 /** Row (0-based) of the table's header on the sheet. */
 export function tableHeaderRow(t: SmallTable): number {
   return t.lines.length + 2;
@@ -29,12 +35,12 @@ export async function writeSmallTableSheet(run: RunBatch, target: { name: string
     if (target.replaces) ctx.workbook.worksheets.getItem(target.replaces).delete();
     const sheet = ctx.workbook.worksheets.add(target.name);
     const head = sheet.getRange(rangeAddress(0, 0, 1 + t.lines.length, 1));
-    head.values = [[t.title], ...t.lines.map((l) => [l])];
+    head.values = [[escapeFormulaText(t.title)], ...t.lines.map((l) => [escapeFormulaText(l)])];
     sheet.getRange(cellAddress(0, 0)).format.font.bold = true;
     const top = tableHeaderRow(t);
     const width = t.header.length;
     const all = sheet.getRange(rangeAddress(top, 0, t.rows.length + 1, width));
-    all.values = [t.header.slice(), ...t.rows.map((r) => r.slice())];
+    all.values = [t.header.slice(), ...t.rows.map(textSafeRow)];
     all.numberFormat = [t.header.map(() => '@'), ...t.rows.map(() => t.formats.slice())];
     const table = sheet.tables.add(rangeAddress(top, 0, t.rows.length + 1, width), true);
     table.style = 'TableStyleMedium16';
@@ -49,7 +55,7 @@ export async function writeSmallTableSheet(run: RunBatch, target: { name: string
       // beside the table so the chart has one contiguous source range.
       const chartCol = width + 1;
       const src = sheet.getRange(rangeAddress(top, chartCol, t.rows.length + 1, 2));
-      src.values = [[t.header[0], t.header[t.chartColumn]], ...t.rows.map((r) => [r[0], r[t.chartColumn as number]])];
+      src.values = [[t.header[0], t.header[t.chartColumn]], ...t.rows.map((r) => textSafeRow([r[0], r[t.chartColumn as number]]))];
       const chart = sheet.charts.add('BarClustered', src, 'Columns');
       chart.title.text = t.chartTitle ?? t.header[t.chartColumn];
       chart.legend.position = 'Bottom';

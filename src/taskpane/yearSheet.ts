@@ -8,6 +8,7 @@
  * workbook is left as it was before the run (apart from an earlier result sheet the user had
  * already agreed to replace).
  */
+import { escapeFormulaText } from '../io/textCells';
 import { DEFAULT_BLOCK_ROWS, cellAddress, rangeAddress, roundForSheet, rowBlocks } from './blocks';
 import { type RunBatch, RunCancelled } from './resultSheets';
 
@@ -173,7 +174,8 @@ export async function writeYearSheet(
     if (target.replaces) ctx.workbook.worksheets.getItem(target.replaces).delete();
     const sheet = ctx.workbook.worksheets.add(target.name);
     const head = sheet.getRange(rangeAddress(0, 0, 1 + heading.lines.length, 1));
-    head.values = [[heading.title], ...heading.lines.map((l) => [l])];
+    // The heading names the window: the user's text, never read as a formula.
+    head.values = [[escapeFormulaText(heading.title)], ...heading.lines.map((l) => [escapeFormulaText(l)])];
     sheet.getRange(cellAddress(0, 0)).format.font.bold = true;
     const header = sheet.getRange(rangeAddress(TABLE_HEADER_ROW, 0, 1, width));
     header.values = [HOUR_TABLE_COLUMNS.map((c) => c.header)];

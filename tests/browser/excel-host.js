@@ -104,7 +104,7 @@
     }
     function newSheet(name) {
       checkSheetName(name);
-      var s = { name: name, cells: new Map(), formats: new Map(), tables: [], charts: [], conditionalFormats: [], frozenRows: 0, styles: [] };
+      var s = { name: name, cells: new Map(), formulaCells: new Set(), formats: new Map(), tables: [], charts: [], conditionalFormats: [], frozenRows: 0, styles: [] };
       state.sheets.push(s);
       if (!state.active) state.active = name;
       return s;
@@ -416,6 +416,11 @@
                 if (typeof v === 'number' && !isFinite(v)) throw HostError('InvalidArgument', 'A value is not a finite number at ' + a1({ r0: box.r0 + r, c0: box.c0 + c, r1: box.r0 + r, c1: box.c0 + c }));
                 if (v !== null && v !== '' && typeof v !== 'number' && typeof v !== 'string' && typeof v !== 'boolean') throw HostError('InvalidArgument', 'A value of an unsupported type');
                 var key = cellKey(box.r0 + r, box.c0 + c);
+                // As Excel: a text starting with = + - @ is entered as a formula; a leading
+                // apostrophe marks text and is not part of the value.
+                s.formulaCells.delete(key);
+                if (typeof v === 'string' && v.charAt(0) === "'") v = v.slice(1);
+                else if (typeof v === 'string' && /^[=+\-@]/.test(v)) s.formulaCells.add(key);
                 if (v === null || v === '') s.cells.delete(key);
                 else s.cells.set(key, v);
               }
@@ -520,6 +525,10 @@
       sheet: function (name) { return findSheet(name); },
       /** Cell values of an A1 range on a sheet (blank cells as ''). */
       read: function (sheet, address) { return readBox(requireSheet(sheet), parseA1(address)); },
+      /** A1 addresses of the cells a text value turned into a formula (as Excel reads "=…", "+…", "-…", "@…"). */
+      formulaCells: function (sheet) {
+        return Array.from(requireSheet(sheet).formulaCells).map(function (k) { var rc = k.split(',').map(Number); return a1({ r0: rc[0], c0: rc[1], r1: rc[0], c1: rc[1] }); });
+      },
       formatAt: function (sheet, address) { return requireSheet(sheet).formats.get(cellKey(parseA1(address).r0, parseA1(address).c0)); },
       /** Adds a sheet of the user's with values from A1 (test set-up, outside any request). */
       addUserSheet: function (name, values, topLeft) {
