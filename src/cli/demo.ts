@@ -12,7 +12,7 @@ import { DEMO_BUILDING, DEMO_HOURLY_TAG, DEMO_YEAR, type DemoWindow, SHADING_OPT
 import { EXAMPLE_SITES, findExampleSite } from '../demo/sites';
 import type { Output } from './call';
 import { MONTHS, addHeatMapSheet, addHourlySheet, addMonthlySheet } from './annualSheets';
-import { ensureFolder } from './atomicWrite';
+import { checkOutput, ensureFolder } from './atomicWrite';
 import { type Flags, parseFlags } from './flags';
 import { type DemoFormulaSet, addFormulaSheet, demoFormulas } from './demoFormulas';
 import { ProgressBar } from './progress';
@@ -32,12 +32,13 @@ Formulas (example SUNPANE.* worksheet formulas with cached results; they recalcu
 once the add-in is installed).
 
   --out DIR   output folder (created if needed)
+  --force     replace the workbook if it exists (a read-only one is never replaced)
   --help      this text
 
 Every number in the demo building is invented; results are estimates by published methods.
 Exit codes: 0 done, 1 bad input (e.g. an unwritable folder), 2 wrong usage.`;
 
-const DEMO_FLAGS = { out: true, help: false } as const;
+const DEMO_FLAGS = { out: true, force: false, help: false } as const;
 
 /** Name of the demo workbook file. */
 export const DEMO_FILE = 'sunpane-demo.xlsx';
@@ -359,6 +360,9 @@ export async function demoCommand(argv: readonly string[], io: Output): Promise<
   }
   const dir = outDir(flags);
   await ensureFolder(dir);
+  const force = { force: flags.has('force') };
+  const file = path.join(dir, DEMO_FILE);
+  checkOutput(file, force);
   const bar = new ProgressBar('demo windows', demoSteps());
   let results: DemoResults;
   try {
@@ -371,8 +375,7 @@ export async function demoCommand(argv: readonly string[], io: Output): Promise<
   const writing = new ProgressBar('hourly sheet', demoWindows()[0].spec.year % 4 === 0 ? 8784 : 8760);
   const { workbook } = buildDemoWorkbook(results, () => writing.tick());
   writing.finish();
-  const file = path.join(dir, DEMO_FILE);
-  await saveWorkbook(workbook, file);
+  await saveWorkbook(workbook, file, force);
   for (const line of demoSummaryText(results, path.normalize(file))) io.out(line);
   return 0;
 }

@@ -2,7 +2,7 @@
  * The `sunpane` command line: the same engine as the worksheet functions, without Excel.
  */
 import { SunpaneError } from '../core/common';
-import { callCommand, listCommand, type Output } from './call';
+import { CALL_HELP, LIST_HELP, callCommand, listCommand, type Output } from './call';
 import { CliInputError, CliUsageError, EXIT_BAD_INPUT, EXIT_USAGE } from './cliError';
 import { DEMO_HELP, demoCommand } from './demo';
 import { SCHEDULE_HELP, scheduleCommand } from './schedule';
@@ -10,6 +10,7 @@ import { TABLE_HELP, tableCommand } from './table';
 
 interface Command {
   summary: string;
+  help: string;
   run(argv: readonly string[], io: Output): number | Promise<number>;
 }
 
@@ -38,16 +39,16 @@ function guarded(run: (argv: readonly string[], io: Output) => Promise<number>, 
 }
 
 const COMMANDS: Record<string, Command> = {
-  list: { summary: 'print every worksheet function with its signature', run: (_argv, io) => listCommand(io) },
-  call: { summary: 'call NAME ARG...: evaluate a function as in a cell (ranges as {1,2;3,4}; --iso prints date-times as text)', run: callCommand },
-  table: { summary: "one window's hourly year from a window file (+ hourly weather CSV) to .csv or .xlsx", run: guarded(tableCommand, TABLE_HELP) },
-  schedule: { summary: 'annual summary of many windows, one per row of a .csv or .xlsx schedule', run: guarded(scheduleCommand, SCHEDULE_HELP) },
-  demo: { summary: 'write the demo workbook of an invented building (default folder out/demo)', run: guarded(demoCommand, DEMO_HELP) },
+  list: { summary: 'print every worksheet function with its signature', help: LIST_HELP, run: listCommand },
+  call: { summary: 'call NAME ARG...: evaluate a function as in a cell (ranges as {1,2;3,4}; --iso prints date-times as text)', help: CALL_HELP, run: callCommand },
+  table: { summary: "one window's hourly year from a window file (+ hourly weather CSV) to .csv or .xlsx", help: TABLE_HELP, run: guarded(tableCommand, TABLE_HELP) },
+  schedule: { summary: 'annual summary of many windows, one per row of a .csv or .xlsx schedule', help: SCHEDULE_HELP, run: guarded(scheduleCommand, SCHEDULE_HELP) },
+  demo: { summary: 'write the demo workbook of an invented building (default folder out/demo)', help: DEMO_HELP, run: guarded(demoCommand, DEMO_HELP) },
 };
 
 
 function usage(io: Output): void {
-  io.out('usage: sunpane COMMAND [ARGS...]\n');
+  io.out('usage: sunpane COMMAND [ARGS...]   (`sunpane COMMAND --help` or `sunpane help COMMAND` for one command)\n');
   for (const [name, c] of Object.entries(COMMANDS)) io.out(`  ${name.padEnd(10)} ${c.summary}`);
   io.out('\nResults are estimates by published methods; design decisions need a qualified engineer and the local energy code.');
 }
@@ -55,8 +56,9 @@ function usage(io: Output): void {
 /** Runs the command line; resolves to the process exit code. */
 export async function main(argv: readonly string[], io: Output = { out: (t) => process.stdout.write(`${t}\n`), err: (t) => process.stderr.write(`${t}\n`) }): Promise<number> {
   const [name, ...rest] = argv;
-  if (name === 'help' && rest.length === 1 && COMMANDS[rest[0]] && rest[0] !== 'list' && rest[0] !== 'call') {
-    return COMMANDS[rest[0]].run(['--help'], io);
+  if (name === 'help' && rest.length === 1 && COMMANDS[rest[0]]) {
+    io.out(COMMANDS[rest[0]].help);
+    return 0;
   }
   if (!name || name === '--help' || name === '-h' || name === 'help') {
     usage(io);
@@ -69,4 +71,28 @@ export async function main(argv: readonly string[], io: Output = { out: (t) => p
     return 2;
   }
   return command.run(rest, io);
+}
+
+/**
+ * Runs the command line as the `sunpane` process: sets the exit code, and ends quietly with status 0
+ * when the reader of its output goes away (`sunpane list | head -1`: writing to a closed pipe gives
+ * EPIPE, which is not an error of ours). Unfinished output files are removed on the way out
+ * (atomicWrite.ts).
+ */
+export function runAsProcess(argv: readonly string[]): void {
+  for (const stream of [process.stdout, process.stderr]) {
+    stream.on('error', (err: NodeJS.ErrnoException) => {
+      if (err.code === 'EPIPE') process.exit(0);
+      throw err;
+    });
+  }
+  main(argv).then(
+    (code) => {
+      process.exitCode = code;
+    },
+    (err: unknown) => {
+      process.stderr.write(`sunpane: ${err instanceof Error ? err.message : String(err)}\n`);
+      process.exitCode = 2;
+    },
+  );
 }

@@ -11,7 +11,8 @@ import { SunpaneError } from '../core/common';
 import { formatSerialIso } from '../core/time';
 import type { Output } from './call';
 import { MONTHS } from './annualSheets';
-import { describeFsError, writeFileAtomic } from './atomicWrite';
+import { checkOutput, describeFsError, writeFileAtomic } from './atomicWrite';
+import { escapeFormulaText } from '../io/textCells';
 import { CliInputError } from './cliError';
 import { csvLine, formatFixed, parseCsv } from './csv';
 import { outputKind, parseFlags, requireFlag } from './flags';
@@ -22,7 +23,7 @@ import { windowFromJson } from './windowJson';
 import { NUMBER_FORMATS, type TableCell, addDataTable, address, freezeAt, newWorkbook, saveWorkbook, serialToCellDate, setFormula, setLabel } from './workbook';
 import { type MatchedHeaders, type ScheduleColumn, SCHEDULE_COLUMNS, SITE_KEY, columnForHeader, columnsForPath, headerKey, matchHeaders, requiredColumns, splitListCell } from '../schedule/columns';
 
-const SCHEDULE_FLAGS = { in: true, weather: true, dni: true, dhi: true, ghi: true, out: true, help: false } as const;
+const SCHEDULE_FLAGS = { in: true, weather: true, dni: true, dhi: true, ghi: true, out: true, force: false, help: false } as const;
 
 export const SCHEDULE_HELP = `usage: sunpane schedule --in FILE.csv|FILE.xlsx [--weather FILE.csv (--dni COL --dhi COL | --ghi COL)] --out FILE.xlsx|FILE.csv
 
@@ -34,6 +35,7 @@ Works out each window's year and writes one summary row per window: annual and m
   --weather FILE hourly weather for every window (as in \`sunpane table --help\`); without it each
                  row needs a clear sky (Linke turbidity, or both optical depths) or an example site
   --out FILE     .csv or .xlsx (a table with SUM/MAX totals)
+  --force        replace FILE if it exists (a read-only file is never replaced)
   --help         this text
 
 Schedule columns, the same as in the task pane (any case; the unit in brackets may be left out;
@@ -242,7 +244,7 @@ export function summaryCsv(results: readonly WindowResult[]): string {
     const s = r.summary;
     lines.push(
       csvLine([
-        r.spec.name,
+        escapeFormulaText(r.spec.name),
         formatFixed(r.spec.site.latitude, 4),
         formatFixed(r.spec.surfaceAzimuth, 2),
         formatFixed(r.glassArea, 4),
@@ -274,7 +276,7 @@ export function addSummaryTable(ws: ExcelJS.Worksheet, tableName: string, topRow
   const numFmts = [undefined, NUMBER_FORMATS.angle, NUMBER_FORMATS.angle, NUMBER_FORMATS.area, NUMBER_FORMATS.kwh, NUMBER_FORMATS.watts, NUMBER_FORMATS.dateTime, NUMBER_FORMATS.integer, NUMBER_FORMATS.fraction, NUMBER_FORMATS.integer, ...MONTHS.map(() => NUMBER_FORMATS.kwh)];
   const widths = [22, 12, 11, 15, 18, 14, 18, 13, 20, 14, ...MONTHS.map(() => 11)];
   const rows: TableCell[][] = results.map((r) => [
-    r.spec.name,
+    escapeFormulaText(r.spec.name),
     r.spec.site.latitude,
     r.spec.surfaceAzimuth,
     r.glassArea,
@@ -325,6 +327,8 @@ export async function scheduleCommand(argv: readonly string[], io: Output): Prom
   const input = requireFlag(flags, 'in', 'FILE.csv|FILE.xlsx (the window schedule)');
   const out = requireFlag(flags, 'out', 'FILE.xlsx|FILE.csv (where to write)');
   const kind = outputKind(out, ['csv', 'xlsx']);
+  const force = { force: flags.has('force') };
+  checkOutput(out, force);
   const inKind = /\.xlsx$/i.test(input) ? 'xlsx' : 'csv';
   const columns = weatherColumns(flags);
   let rows: ScheduleRow[];
@@ -365,13 +369,13 @@ export async function scheduleCommand(argv: readonly string[], io: Output): Prom
     return r;
   });
   bar.finish();
-  if (kind === 'csv') await writeFileAtomic(out, summaryCsv(results));
+  if (kind === 'csv') await writeFileAtomic(out, summaryCsv(results), force);
   else {
     const wb = newWorkbook('Sunpane window schedule');
     const ws = wb.addWorksheet('Summary');
     addSummaryTable(ws, 'Summary', 1, results);
     freezeAt(ws, 2, 2);
-    await saveWorkbook(wb, out);
+    await saveWorkbook(wb, out, force);
   }
   const total = results.reduce((a, r) => a + r.summary.annualKWh, 0);
   io.out(`${results.length} window${results.length === 1 ? '' : 's'}: ${total.toFixed(1)} kWh of solar gain a year in all`);

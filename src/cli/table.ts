@@ -7,7 +7,8 @@ import { type AnnualSeries, annualSeries, type AnnualSummary, summarizeAnnual, t
 import { formatSerialIso } from '../core/time';
 import type { Output } from './call';
 import { addHeatMapSheet, addHourlySheet, addMonthlySheet, hourlyCsv } from './annualSheets';
-import { writeFileAtomic } from './atomicWrite';
+import { checkOutput, writeFileAtomic } from './atomicWrite';
+import { escapeFormulaText } from '../io/textCells';
 import { CliInputError, CliUsageError } from './cliError';
 import { type Flags, outputKind, parseFlags, requireFlag } from './flags';
 import { ProgressBar } from './progress';
@@ -27,6 +28,7 @@ hour in local standard time, the sun taken at mid-hour.
   --ghi COL            or a column of global horizontal irradiance [W/m²] (split by Erbs et al. 1982)
                        COL is a header name or a 1-based column number
   --out FILE           .csv: the hourly columns; .xlsx: hourly table, monthly summary, heat map
+  --force              replace FILE if it exists (a read-only file is never replaced)
   --help               this text
 
 Without --weather the window file's "weather" (a clear-sky model) is used.
@@ -41,7 +43,7 @@ skyModel ("perez1990"), weather {kind: "ineichenClearSky", linkeTurbidity} or
 
 Exit codes: 0 done, 1 bad input (the message names the field, row or line), 2 wrong usage.`;
 
-const TABLE_FLAGS = { window: true, weather: true, dni: true, dhi: true, ghi: true, out: true, help: false } as const;
+const TABLE_FLAGS = { window: true, weather: true, dni: true, dhi: true, ghi: true, out: true, force: false, help: false } as const;
 
 /** Reads the --weather/--dni/--dhi/--ghi flags into a column choice; usage errors for bad combinations. */
 export function weatherColumns(flags: Flags): WeatherColumns | undefined {
@@ -94,6 +96,8 @@ export async function tableCommand(argv: readonly string[], io: Output): Promise
   const windowFile = requireFlag(flags, 'window', 'FILE.json (the window)');
   const out = requireFlag(flags, 'out', 'FILE.xlsx|FILE.csv (where to write)');
   const kind = outputKind(out, ['csv', 'xlsx']);
+  const force = { force: flags.has('force') };
+  checkOutput(out, force);
   const columns = weatherColumns(flags);
   const { spec, missingNote } = resolveWindow(windowFile, flags.get('weather'), columns);
   if (missingNote) io.err(missingNote);
@@ -103,16 +107,16 @@ export async function tableCommand(argv: readonly string[], io: Output): Promise
   if (kind === 'csv') {
     const text = hourlyCsv(series, () => bar.tick());
     bar.finish();
-    await writeFileAtomic(out, text);
+    await writeFileAtomic(out, text, force);
   } else {
     const wb = newWorkbook(`Sunpane: ${spec.name}`);
     const hourlySheet = 'Hourly';
     const monthlySheet = wb.addWorksheet('Monthly');
-    addHeatMapSheet(wb, 'Heat map', series, `${spec.name}: gain [W] by day and hour ending`);
+    addHeatMapSheet(wb, 'Heat map', series, escapeFormulaText(`${spec.name}: gain [W] by day and hour ending`));
     const placement = addHourlySheet(wb, hourlySheet, 'Hourly', series, () => bar.tick());
     bar.finish();
     addMonthlySheet(monthlySheet, 'Monthly', summary, { sheet: hourlySheet, placement });
-    await saveWorkbook(wb, out);
+    await saveWorkbook(wb, out, force);
   }
   io.out(tableSummaryLine(series, summary));
   io.out(`wrote ${path.normalize(out)}`);

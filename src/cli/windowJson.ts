@@ -322,6 +322,8 @@ export function readWindowFile(file: string): WindowFile {
   } catch (err) {
     throw new CliInputError(`cannot read the window file ${file}: ${describeFsError(err)}`);
   }
+  // A byte-order mark (as some editors save UTF-8) is not part of the JSON.
+  if (text.charCodeAt(0) === 0xfeff) text = text.slice(1);
   let json: unknown;
   try {
     json = JSON.parse(text);

@@ -4,7 +4,7 @@
  * results, and a day × hour colour-scale heat map. The command line's only spreadsheet writer.
  */
 import ExcelJS from 'exceljs';
-import { writeFileAtomic } from './atomicWrite';
+import { type OutputOptions, writeFileAtomic } from './atomicWrite';
 
 /** Number formats used across Sunpane workbooks. */
 export const NUMBER_FORMATS = Object.freeze({
@@ -72,10 +72,8 @@ export function address(row: number, column: number): string {
   return `${columnLetter(column)}${row}`;
 }
 
-/** Sheet names: ≤ 31 characters, none of `: \ / ? * [ ]`. */
-export function sheetName(text: string): string {
-  return text.replace(/[:\\/?*[\]]/g, '-').slice(0, 31);
-}
+/** Sheet names by Excel's rules: the one implementation the pane uses too (src/io/sheetNames.ts). */
+export { cleanSheetName as sheetName } from '../io/sheetNames';
 
 /** Where a data table sits on its sheet (1-based), for formulas that refer to it. */
 export interface TablePlacement {
@@ -215,10 +213,10 @@ export function newWorkbook(title: string): ExcelJS.Workbook {
   return wb;
 }
 
-/** Serialises a workbook and writes it atomically (temporary file, then rename). */
-export async function saveWorkbook(wb: ExcelJS.Workbook, file: string): Promise<void> {
+/** Serialises a workbook and writes it atomically (temporary file, then rename; see atomicWrite.ts). */
+export async function saveWorkbook(wb: ExcelJS.Workbook, file: string, options: OutputOptions = {}): Promise<void> {
   const buffer = await wb.xlsx.writeBuffer();
-  await writeFileAtomic(file, new Uint8Array(buffer as ArrayBuffer));
+  await writeFileAtomic(file, new Uint8Array(buffer as ArrayBuffer), options);
 }
 
 /** A Date in UTC that shows a local standard-time serial's wall-clock time in a spreadsheet cell. */

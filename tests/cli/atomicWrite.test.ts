@@ -3,7 +3,7 @@ import * as fs from 'node:fs';
 import * as os from 'node:os';
 import * as path from 'node:path';
 import { CliInputError } from '../../src/cli/cliError';
-import { ensureFolder, writeFileAtomic } from '../../src/cli/atomicWrite';
+import { checkOutput, ensureFolder, openAtomicOutput, writeFileAtomic } from '../../src/cli/atomicWrite';
 
 function tempDir(): string {
   return fs.mkdtempSync(path.join(os.tmpdir(), 'sunpane-atomic-'));
@@ -17,12 +17,45 @@ describe('atomic file writing', () => {
     expect(fs.readdirSync(dir)).toEqual(['out.csv']);
   });
 
-  it('replaces an existing file only when the new one is complete', async () => {
+  it('replaces an existing file only when asked (force), and only when the new one is complete', async () => {
     const dir = tempDir();
     const file = path.join(dir, 'out.csv');
     fs.writeFileSync(file, 'old');
-    await writeFileAtomic(file, 'new');
+    await expect(writeFileAtomic(file, 'new')).rejects.toThrow(new CliInputError(`${file} exists: give --force to replace it`));
+    expect(fs.readFileSync(file, 'utf8')).toBe('old');
+    await writeFileAtomic(file, 'new', { force: true });
     expect(fs.readFileSync(file, 'utf8')).toBe('new');
+    expect(fs.readdirSync(dir)).toEqual(['out.csv']);
+  });
+
+  it('never replaces a read-only file, and says so before any work is done', async () => {
+    const dir = tempDir();
+    const file = path.join(dir, 'out.csv');
+    fs.writeFileSync(file, 'kept');
+    fs.chmodSync(file, 0o444);
+    expect(() => checkOutput(file, { force: true })).toThrow(new CliInputError(`${file} is read-only: not replaced`));
+    await expect(writeFileAtomic(file, 'new', { force: true })).rejects.toThrow(/is read-only: not replaced/);
+    expect(fs.readFileSync(file, 'utf8')).toBe('kept');
+    expect(fs.readdirSync(dir)).toEqual(['out.csv']);
+  });
+
+  it('a file that appears while the output is being written is not replaced (no --force)', async () => {
+    const dir = tempDir();
+    const file = path.join(dir, 'out.csv');
+    const out = openAtomicOutput(file);
+    out.stream.write('new');
+    fs.writeFileSync(file, 'someone else');
+    await expect(out.commit()).rejects.toThrow(/exists: give --force/);
+    expect(fs.readFileSync(file, 'utf8')).toBe('someone else');
+    expect(fs.readdirSync(dir)).toEqual(['out.csv']);
+  });
+
+  it('an output given up (abort) leaves neither the target nor a temporary file', async () => {
+    const dir = tempDir();
+    const out = openAtomicOutput(path.join(dir, 'out.csv'));
+    out.stream.write('half');
+    await out.abort();
+    expect(fs.readdirSync(dir)).toEqual([]);
   });
 
   it('refuses a path whose folder does not exist, naming the path and leaving nothing', async () => {

@@ -13,9 +13,10 @@ describe('workbook helpers', () => {
     expect(tableName('1st floor')).toBe('T_1st_floor');
   });
 
-  it('keeps sheet names within 31 characters and free of : \\ / ? * [ ]', () => {
+  it('names sheets by the rules the pane uses (src/io/sheetNames.ts; tests/io/sheetNames.test.ts)', () => {
     expect(sheetName('a/b:c?d*e[f]g\\h')).toBe('a-b-c-d-e-f-g-h');
     expect(sheetName('x'.repeat(40))).toHaveLength(31);
+    expect(sheetName("'History'")).toBe('History (2)');
   });
 
   it('turns a local serial into a Date whose UTC fields carry the wall-clock time', () => {
