@@ -1,12 +1,12 @@
 /**
  * Sheet names for every workbook Sunpane writes, the pane's result sheets and the command line's
- * workbooks alike. Excel's rules: at most 31 characters, none of `: \ / ? * [ ]`, not blank, no
- * apostrophe at either end, not `History` in any case (Excel keeps that name for its change
- * history), unique without regard to case (docs/platform.md#writing-sheets-from-the-pane). The length is counted in UTF-16 code units, the
- * stricter of the ways a character can be counted, so that a name which fits here fits in every
- * client. A name is cut only between whole graphemes (what a reader sees as one character: an
- * emoji with its skin tone or its family members, a flag, a letter with its accent), never inside
- * one.
+ * workbooks alike. Excel's rules (docs/platform.md#writing-sheets-from-the-pane): at most 31
+ * characters, none of `: \ / ? * [ ]`, not blank, no apostrophe at either end, not `History` in
+ * any case (Excel keeps that name for its change history), unique without regard to case. The
+ * length is counted in UTF-16 code units, the stricter of the ways a character can be counted, so
+ * that a name which fits here fits in every client. A name is cut only between whole graphemes
+ * (what a reader sees as one character: an emoji with its skin tone or its family members, a flag,
+ * a letter with its accent), never inside one.
  */
 
 /** Longest sheet name Excel accepts [UTF-16 code units]. */
