@@ -26,12 +26,13 @@ const BUDGET_BYTES = 150 * 1024;
 const DEV_PORT = 3000;
 
 /**
- * The registry's words — `summary`, `description`, `examples` — are documentation: the README
- * reference and functions.json are made from them in Node, and the add-in's own code never reads
- * them (messages are built from names, units and ranges). This TypeScript transformer drops those
- * properties from object literals in src/registry files, so the bundle carries only what runs.
+ * The registry's words — `summary`, `description`, `examples`, `outsideCheck` — are documentation:
+ * the function reference (docs/functions.md) and functions.json are made from them in Node, and the
+ * add-in's own code never reads them (messages are built from names, units and ranges). This
+ * TypeScript transformer drops those properties from object literals in src/registry files, so the
+ * bundle carries only what runs.
  */
-const DOC_PROPERTIES = new Set(['summary', 'description', 'examples']);
+const DOC_PROPERTIES = new Set(['summary', 'description', 'examples', 'outsideCheck']);
 function dropRegistryExamples(context) {
   const ts = require('typescript');
   const registryDir = path.join(SRC, 'registry') + path.sep;

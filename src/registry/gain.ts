@@ -12,7 +12,7 @@ import { hoursInYear, serialToCivil } from '../core/time';
 import type { Shading } from '../core/shading';
 import type { SkyModel } from '../core/sky';
 import { GLOSSARY } from './glossary';
-import { type Args, type FunctionDescriptor, NotAvailable, type OutTable, type ParamDescriptor } from './types';
+import { type Args, type FunctionDescriptor, NotAvailable, type OutsideCheck, type OutTable, type ParamDescriptor } from './types';
 
 const G = GLOSSARY;
 const P = {
@@ -187,6 +187,13 @@ function hourRefuses(a: Args): string | undefined {
 
 const HOUR_PARAMS: readonly ParamDescriptor[] = [GLOSSARY.dateTime, ...SITE_AND_WINDOW, P.dni, P.dhi, P.tauB, P.tauD, ...GLASS_AND_GROUND];
 
+/** The one-hour gain equation: hand computations; its inputs are each checked against their own sources. */
+const GAIN_CHECK: OutsideCheck = {
+  source:
+    'The fenestration solar heat gain equation Q = A_glass · IAC · [E_beam · F_sunlit · SHGC(θ) + (E_sky + E_ground) · SHGC_diffuse] (ASHRAE Handbook—Fundamentals (2013) ch. 15 — from memory), worked by hand with the numbers written out, and a bare window facing the sun gaining SHGC × glass area × DNI; the sun, sky, shading and SHGC it uses are checked against their own sources (see SUNALTITUDE, WINDOWIRRADIANCE, SUNLITFRACTION, SHGCANGLE).',
+  tests: ['tests/core/gain/windowGain.test.ts', 'tests/core/gain/gainSteps.test.ts', 'tests/registry/gainFunctions.test.ts'],
+};
+
 const WINDOWGAIN: FunctionDescriptor = {
   name: 'WINDOWGAIN',
   summary: 'Solar heat gain through a window in one hour: beam through the sunlit glass plus sky and ground diffuse, × SHGC × glass area.',
@@ -202,6 +209,7 @@ const WINDOWGAIN: FunctionDescriptor = {
     { args: ['"2026-07-21T12:30"', '40', '-105', '-7', '180', '1.5', '1.2', '0.4', '', '', '0.4', '2.3'], note: 'a south window at noon on a clear July day (ASHRAE clear sky, τb 0.4, τd 2.3)' },
     { args: ['"2026-07-21T12:30"', '40', '-105', '-7', '180', '1.5', '1.2', '0.4', '850', '120', '', '', '2', '0.15', '0.2', '"perez"', '90', '1', '0.6', '0.1'], note: 'the same window with measured irradiance, a 15 % frame and a 0.6 m overhang 0.1 m above the head' },
   ],
+  outsideCheck: GAIN_CHECK,
 };
 
 const GAINSTEPS: FunctionDescriptor = {
@@ -218,6 +226,7 @@ const GAINSTEPS: FunctionDescriptor = {
   },
   refuses: hourRefuses,
   examples: [{ args: ['"2026-07-21T12:30"', '40', '-105', '-7', '180', '1.5', '1.2', '0.4', '', '', '0.4', '2.3'], note: 'every step from sun altitude to watts for a south window at noon in July' }],
+  outsideCheck: { ...GAIN_CHECK, source: `Every step re-derived by hand from the earlier steps: ${GAIN_CHECK.source}` },
 };
 
 const COOLINGLOAD: FunctionDescriptor = {
@@ -229,6 +238,7 @@ const COOLINGLOAD: FunctionDescriptor = {
   evaluate: (a) => Array.from(coolingLoad(a.gains as number[], a.factors as number[], a.radiantFraction as number), (q) => [q]),
   refuses: (a) => factorsProblem(a.factors as number[] | undefined),
   examples: [{ args: ['B2:B25', 'C2:C25', '1'], note: 'gains in B2:B25 (hour ending 1:00 to 24:00), the room’s 24 radiant time factors in C2:C25' }],
+  outsideCheck: { source: 'Radiant time series, Spitler, Fisher & Pedersen (1997), ASHRAE Trans. 103(2): a constant gain gives an equal load, a unit impulse gives back the factors, the 24-hour total is kept, factors must sum to 1 — properties of the published method (the factor lists are test inputs; no published factor table is shipped).', tests: ['tests/reference/rts-spitler-1997.test.ts', 'tests/fixtures/formulas.ts'] },
 };
 
 function factorsProblem(factors: number[] | undefined): string | undefined {
@@ -272,6 +282,7 @@ const PEAKGAINS: FunctionDescriptor = {
   },
   refuses: (a) => factorsProblem(a.factors as number[] | undefined) ?? specProblem(() => peakSpec(a)),
   examples: [{ args: ['2026', '40', '-105', '-7', '270', '1.5', '1.2', '0.4', '0.4', '2.3'], note: 'a west window: peak hour and watts on the 21st of each month' }],
+  outsideCheck: { source: 'Each month\'s peak is the largest of 24 one-hour gains (checked as for WINDOWGAIN, on the ASHRAE clear-sky model as for CLEARSKYDNI); with factors the cooling load follows Spitler, Fisher & Pedersen (1997) and keeps the day total; west windows peak after solar noon and east windows before (geometry).', tests: ['tests/core/load/designDay.test.ts', 'tests/reference/rts-spitler-1997.test.ts', 'tests/registry/gainFunctions.test.ts'] },
 };
 
 /** Which column of the annual series a `quantity` choice picks. */
@@ -334,6 +345,7 @@ const WINDOWYEAR: FunctionDescriptor = {
     { args: ['2026', '40', '-105', '-7', '180', '1.5', '1.2', '0.4', '"gain"', '', '', '0.4', '2.3'], note: 'hourly clear-sky gain of a south window for the whole year' },
     { args: ['2026', '40', '-105', '-7', '180', '1.5', '1.2', '0.4', '"sunlit"', '', '', '0.4', '2.3', '', '', '', '', '', '', '0.8'], note: 'hourly sunlit fraction under a 0.8 m overhang' },
   ],
+  outsideCheck: { source: 'Every hour held to the checked one-hour functions (see WINDOWGAIN) within 1e-12 (relative for irradiances), and the year\'s sun path held to the direct NREL SPA within 1e-4° (which is checked against the report\'s worked example, astronomy-engine 2.1.19 and suncalc 2.0.2); rows stamped at the end of each hour, 8760 or 8784 of them.', tests: ['tests/core/gain/annual.test.ts', 'tests/core/gain/preparedFast.test.ts', 'tests/core/sun/sunPath.test.ts', 'tests/registry/gainFunctions.test.ts'] },
 };
 
 export const GAIN_FUNCTIONS: readonly FunctionDescriptor[] = [WINDOWGAIN, GAINSTEPS, COOLINGLOAD, PEAKGAINS, WINDOWYEAR];

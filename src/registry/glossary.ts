@@ -1,7 +1,7 @@
 /**
  * The glossary: shared parameter names, with their meaning, unit and range, used by every
- * descriptor that takes them, so one name always means one thing (README "Glossary" is generated
- * from this list).
+ * descriptor that takes them, so one name always means one thing (the glossary of docs/functions.md is
+ * generated from this list).
  */
 import { PANES_MAX, PANES_MIN } from '../core/glazing';
 import { IRRADIANCE_MAX, LINKE_MAX, LINKE_MIN, TAU_B_MAX, TAU_D_MAX } from '../core/sky';

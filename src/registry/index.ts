@@ -1,6 +1,6 @@
 /**
  * The registry: every worksheet function, described once. Excel's functions.json, the CLI's
- * `list` / `call`, the README function reference and the fuzz tests all read this list.
+ * `list` / `call`, the function reference in docs/functions.md and the fuzz tests all read this list.
  */
 import { GAIN_FUNCTIONS } from './gain';
 import { GLAZING_FUNCTIONS } from './glazing';

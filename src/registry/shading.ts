@@ -10,7 +10,7 @@
 import { SunpaneError } from '../core/common';
 import { shadowDepth, shadowWidth, sunlitFraction, type WindowOpening, MASK_DEFAULT_YEAR, monthHourMask, type Shading } from '../core/shading';
 import { GLOSSARY } from './glossary';
-import { type Args, type FunctionDescriptor, NotAvailable, type ParamDescriptor } from './types';
+import { type Args, type FunctionDescriptor, NotAvailable, type OutsideCheck, type ParamDescriptor } from './types';
 
 function length(name: string, description: string, extra: Partial<ParamDescriptor> = {}): ParamDescriptor {
   return { ...GLOSSARY.revealDepth, name, description, ...extra };
@@ -109,6 +109,13 @@ function noShadow(): NotAvailable {
 
 const HOURS = Array.from({ length: 24 }, (_, k) => `${String(k + 1).padStart(2, '0')}:00`);
 
+/** The sunlit fraction of overhang, fins, reveal and skyline: long-device closed forms, ray casting and a polygon library. */
+const SUNLIT_CHECK: OutsideCheck = {
+  source:
+    'Long devices: shadow depth P·tan Ω below an overhang and width P·|tan γ| beside a fin (ASHRAE Handbook—Fundamentals, "Fenestration", exterior shading; Duffie & Beckman §1.9 — from memory), exact; any window, devices and sun: three.js 0.187.0 ray casting over 320 random cases (60 × 60 jittered rays each) and the shadow union against polygon-clipping 0.15.7 — produced by named npm libraries.',
+  tests: ['tests/core/shading/sunlit.test.ts', 'tests/reference/raycast-three.test.ts', 'tests/reference/polygon-clipping-union.test.ts', 'tests/fixtures/formulas.ts'],
+};
+
 export const SHADING_FUNCTIONS: readonly FunctionDescriptor[] = [
   {
     name: 'OVERHANGSUNLIT',
@@ -122,6 +129,7 @@ export const SHADING_FUNCTIONS: readonly FunctionDescriptor[] = [
       { args: ['45', '180', '180', '2', '1.5', '1', '0.2', '100', '100'], note: '0.4667: a long overhang 1 deep, 0.2 above a 1.5 high window, sun due south at 45° (shadow 1 − 0.2 = 0.8 deep)' },
       { args: ['45', '150', '180', '2', '1.5', '1', '0.2'], note: '0.4713: the same overhang only as wide as the window, sun 30° east of south: the east end escapes part of the shadow (a long one would give 0.3635)' },
     ],
+    outsideCheck: SUNLIT_CHECK,
   },
   {
     name: 'FINSUNLIT',
@@ -140,6 +148,7 @@ export const SHADING_FUNCTIONS: readonly FunctionDescriptor[] = [
       { args: ['30', '135', '180', '2', '1.5', '0', '1', '0.5', '100', '100'], note: '0.75: a tall right fin 1 deep, 0.5 from the jamb, sun 45° to the right (east on a south wall)' },
       { args: ['30', '225', '180', '2', '1.5', '0', '1', '0.5'], note: '1: the same fin with the sun on the other side casts no shadow on the window' },
     ],
+    outsideCheck: SUNLIT_CHECK,
   },
   {
     name: 'SUNLITFRACTION',
@@ -153,6 +162,7 @@ export const SHADING_FUNCTIONS: readonly FunctionDescriptor[] = [
       { args: ['35', '150', '180', '1.2', '1.5', '0.6', '0.1', '0.2', '0.2', '0.3', '0', '0.3', '0', '0', '0', '0.1'], note: 'overhang, two fins and a 0.1 reveal on a south window, mid-morning sun' },
       { args: ['20', '250', '220', '1.2', '1.5', '', '', '', '', '', '', '', '', '', '', '', '{0,0,0,0,0,0,0,0,30,0,0,0}'], note: '0: a 30° building in the west-south-west hides the sun at 20°' },
     ],
+    outsideCheck: SUNLIT_CHECK,
   },
   {
     name: 'SHADOWDEPTH',
@@ -165,6 +175,7 @@ export const SHADING_FUNCTIONS: readonly FunctionDescriptor[] = [
       { args: ['45', '180', '180', '1'], note: '1: sun due south at 45° on a south wall' },
       { args: ['45', '240', '180', '1'], note: '2: the sun 60° round to the west doubles the profile angle tangent' },
     ],
+    outsideCheck: { source: 'Shadow depth of a long overhang = projection × tan(profile angle) (Duffie & Beckman, Solar Engineering of Thermal Processes, 4th ed., §1.9 — from memory), worked by hand: sun normal to the wall at 45° and 60°.', tests: ['tests/fixtures/formulas.ts', 'tests/registry/shading.test.ts'] },
   },
   {
     name: 'SHADOWWIDTH',
@@ -174,6 +185,7 @@ export const SHADING_FUNCTIONS: readonly FunctionDescriptor[] = [
     result: { shape: 'value', unit: 'm', min: 0, description: 'horizontal shadow width beside the fin, on the side away from the sun; #N/A with the sun down or behind the wall' },
     evaluate: (a) => shadowWidth(num(a, 'projection'), num(a, 'sunAltitude'), num(a, 'sunAzimuth'), num(a, 'surfaceAzimuth')) ?? noShadow(),
     examples: [{ args: ['30', '135', '180', '1'], note: '1: the sun 45° to the side' }],
+    outsideCheck: { source: 'Shadow width of a tall fin = projection × |tan γ| (Duffie & Beckman, Solar Engineering of Thermal Processes, 4th ed., §1.9 — from memory), worked by hand for |γ| = 45° and 20°.', tests: ['tests/fixtures/formulas.ts', 'tests/registry/shading.test.ts'] },
   },
   {
     name: 'SUNLITMASK',
@@ -196,6 +208,7 @@ export const SHADING_FUNCTIONS: readonly FunctionDescriptor[] = [
         num(a, 'surfaceAzimuth'),
         { day: num(a, 'day'), year: num(a, 'year') },
       ),
-    examples: [{ args: ['51.5', '-0.1', '0', '180', '1.2', '1.5', '0.8', '0.1', '0.3', '0.3'], note: 'a south window in London under a 0.8 overhang: shaded at midday in summer, sunlit in winter' }],
+    examples: [{ args: ['51.5', '-0.1', '0', '180', '1.2', '1.5', '0.8', '0.1', '0.3', '0.3'], note: 'a south window at 51.5° N (an example location) under a 0.8 overhang: shaded at midday in summer, sunlit in winter' }],
+    outsideCheck: { source: 'suncalc 2.0.2 — produced by a named npm library: a bare window\'s mask is 1 exactly in the hours whose mid-hour sun suncalc puts above the horizon and in front of the wall; with devices each cell comes from the sunlit-fraction code checked for SUNLITFRACTION (three.js 0.187.0 ray casting).', tests: ['tests/core/shading/shadingMask.test.ts', 'tests/reference/raycast-three.test.ts'] },
   },
 ];

@@ -6,7 +6,7 @@
 import { MAX_SERIAL_EXCLUSIVE, MIN_SERIAL, serialToUtcMs } from '../core/time';
 import { type SunOptions, type SunPosition, sunEvents, sunPosition, incidenceAngle, profileAngle, wallSolarAzimuth } from '../core/sun';
 import { GLOSSARY } from './glossary';
-import { type Args, type FunctionDescriptor, NotAvailable, type ParamDescriptor } from './types';
+import { type Args, type FunctionDescriptor, NotAvailable, type OutsideCheck, type ParamDescriptor } from './types';
 
 /** When and where, then the optional atmosphere and ΔT: the shared head of the sun-position functions. */
 const WHEN_WHERE: readonly ParamDescriptor[] = [GLOSSARY.dateTime, GLOSSARY.latitude, GLOSSARY.longitude, GLOSSARY.utcOffset];
@@ -20,6 +20,14 @@ const SURFACE_AZIMUTH: ParamDescriptor = { ...GLOSSARY.surfaceAzimuth };
 const SURFACE_TILT: ParamDescriptor = { ...GLOSSARY.surfaceTilt };
 
 const EXAMPLE_SPA = ['2003-10-17T12:30:30', '39.742476', '-105.1786', '-7', '1830.14', '820', '11', '67'];
+
+const SPA_REPORT = 'NREL SPA worked example (Reda & Andreas, NREL/TP-560-34302, rev. 2008, Table A5.1)';
+const SPA_TESTS = ['tests/reference/spa-worked-example.test.ts', 'tests/fixtures/formulas.ts'] as const;
+/** Sun position: the report's example, and two independent npm libraries over many instants. */
+const POSITION_CHECK: OutsideCheck = {
+  source: `${SPA_REPORT} — stated in the publication; and astronomy-engine 2.1.19 (within 0.002°) and suncalc 2.0.2 (within 0.03°) at 2,500 random instants and sites, 1950–2100 — produced by named npm libraries.`,
+  tests: [...SPA_TESTS, 'tests/reference/astronomy-engine-sun.test.ts', 'tests/reference/suncalc-sun-position.test.ts'],
+};
 
 function optionsOf(a: Args): SunOptions {
   return {
@@ -50,9 +58,10 @@ export const SUN_FUNCTIONS: readonly FunctionDescriptor[] = [
     result: { shape: 'value', unit: DEGREES, min: -90, max: 90, description: 'topocentric altitude of the sun centre with refraction; negative at night' },
     evaluate: (a) => positionOf(a).altitude,
     examples: [
-      { args: EXAMPLE_SPA, note: '39.888378: the NREL SPA worked example (Golden, Colorado)' },
-      { args: ['2026-06-21T12:00', '51.5', '0', '0'], note: 'London at midsummer noon: about 62' },
+      { args: EXAMPLE_SPA, note: '39.888378: the NREL SPA worked example' },
+      { args: ['2026-06-21T12:00', '51.5', '0', '0'], note: 'about 62: midsummer noon at 51.5° N, 0° E (an example location)' },
     ],
+    outsideCheck: POSITION_CHECK,
   },
   {
     name: 'SUNAZIMUTH',
@@ -62,6 +71,7 @@ export const SUN_FUNCTIONS: readonly FunctionDescriptor[] = [
     result: { shape: 'value', unit: DEGREES, min: 0, max: 360, description: 'topocentric azimuth: N 0, E 90, S 180, W 270' },
     evaluate: (a) => positionOf(a).azimuth,
     examples: [{ args: EXAMPLE_SPA, note: '194.340241: the NREL SPA worked example' }],
+    outsideCheck: POSITION_CHECK,
   },
   {
     name: 'SUNZENITH',
@@ -71,6 +81,7 @@ export const SUN_FUNCTIONS: readonly FunctionDescriptor[] = [
     result: { shape: 'value', unit: DEGREES, min: 0, max: 180, description: 'topocentric zenith angle; above 90 at night' },
     evaluate: (a) => positionOf(a).zenith,
     examples: [{ args: EXAMPLE_SPA, note: '50.111622: the NREL SPA worked example' }],
+    outsideCheck: POSITION_CHECK,
   },
   {
     name: 'SOLARDECLINATION',
@@ -80,6 +91,7 @@ export const SUN_FUNCTIONS: readonly FunctionDescriptor[] = [
     result: { shape: 'value', unit: DEGREES, min: -24.5, max: 24.5, description: 'geocentric declination of the sun, north positive' },
     evaluate: (a) => positionOf(a).declination,
     examples: [{ args: EXAMPLE_SPA, note: '-9.314340: the NREL SPA worked example' }],
+    outsideCheck: { source: `${SPA_REPORT}: geocentric declination −9.314340° — stated in the publication.`, tests: [...SPA_TESTS] },
   },
   {
     name: 'EQUATIONOFTIME',
@@ -89,6 +101,7 @@ export const SUN_FUNCTIONS: readonly FunctionDescriptor[] = [
     result: { shape: 'value', unit: 'min', min: -20, max: 20, description: 'equation of time in minutes; positive when the sundial is ahead of the clock' },
     evaluate: (a) => positionOf(a).equationOfTime,
     examples: [{ args: EXAMPLE_SPA, note: '14.641511: the NREL SPA worked example' }],
+    outsideCheck: { source: `${SPA_REPORT}: equation of time 14.641511 min — stated in the publication.`, tests: [...SPA_TESTS] },
   },
   {
     name: 'SOLARTIME',
@@ -98,6 +111,7 @@ export const SUN_FUNCTIONS: readonly FunctionDescriptor[] = [
     result: { shape: 'value', unit: 'h', min: 0, max: 24, description: 'apparent (sundial) time of day in hours, 0 up to 24' },
     evaluate: (a) => positionOf(a).solarTime,
     examples: [{ args: EXAMPLE_SPA, note: 'about 12.74: 12:44 by the sundial at 12:30:30 local standard time' }],
+    outsideCheck: { source: `${SPA_REPORT}: observer hour angle H = 11.105902° — stated in the publication; solar time = 12 h + H/15.`, tests: [...SPA_TESTS] },
   },
   {
     name: 'SUNRISE',
@@ -114,6 +128,7 @@ export const SUN_FUNCTIONS: readonly FunctionDescriptor[] = [
       { args: ['2003-10-17', '39.742476', '-105.1786', '-7', '67'], note: '06:12:43 local: the NREL SPA worked example' },
       { args: ['2026-06-21', '78', '15', '1'], note: '#N/A: midnight sun at 78° N' },
     ],
+    outsideCheck: { source: `${SPA_REPORT}: sunrise 06:12:43 local (±1 s) — stated in the publication; and astronomy-engine 2.1.19 rise times on 300 random local days within ±65° latitude, and no sunrise in polar night — produced by a named npm library.`, tests: [...SPA_TESTS, 'tests/reference/astronomy-engine-sun.test.ts'] },
   },
   {
     name: 'SOLARNOON',
@@ -123,6 +138,7 @@ export const SUN_FUNCTIONS: readonly FunctionDescriptor[] = [
     result: { shape: 'value', kind: 'dateTime', min: MIN_SERIAL - 1, max: MAX_SERIAL_EXCLUSIVE, description: 'local standard date-time of the upper transit (also during polar day and night)' },
     evaluate: (a) => eventsOf(a).solarNoon,
     examples: [{ args: ['2003-10-17', '39.742476', '-105.1786', '-7', '67'], note: '11:46:05 local: the NREL SPA worked example' }],
+    outsideCheck: { source: `${SPA_REPORT}: sun transit 11:46:05 local (±1 s) — stated in the publication.`, tests: [...SPA_TESTS] },
   },
   {
     name: 'SUNSET',
@@ -139,6 +155,7 @@ export const SUN_FUNCTIONS: readonly FunctionDescriptor[] = [
       { args: ['2003-10-17', '39.742476', '-105.1786', '-7', '67'], note: 'about 17:18:52 local on 17 October' },
       { args: ['2026-12-21', '78', '15', '1'], note: '#N/A: polar night at 78° N' },
     ],
+    outsideCheck: { source: 'astronomy-engine 2.1.19: sunset of the report\'s example site on the local 17 October at 17:18:51 (±30 s; the report\'s own 17:20:19 belongs to the previous local day), set times on 300 random local days within ±65° latitude, and no sunset in polar day — produced by a named npm library.', tests: ['tests/reference/astronomy-engine-sun.test.ts', 'tests/fixtures/formulas.ts'] },
   },
   {
     name: 'INCIDENCEANGLE',
@@ -151,6 +168,7 @@ export const SUN_FUNCTIONS: readonly FunctionDescriptor[] = [
       { args: ['39.888378', '194.340241', '170', '30'], note: '25.187: the NREL SPA worked example (30° slope facing 170°)' },
       { args: ['30', '90', '270'], note: '150: the sun in the east is behind a west wall' },
     ],
+    outsideCheck: { source: `${SPA_REPORT}: incidence 25.187000° on the 30° slope facing 170° — stated in the publication; the sun at the zenith gives the tilt (Duffie & Beckman, Solar Engineering of Thermal Processes, 4th ed., Eq. 1.6.3); D&B Example 1.6.1 (35°, from memory).`, tests: [...SPA_TESTS, 'tests/core/sun/surfaceAngles.test.ts'] },
   },
   {
     name: 'INCIDENCEAT',
@@ -163,6 +181,7 @@ export const SUN_FUNCTIONS: readonly FunctionDescriptor[] = [
       return incidenceAngle(s.altitude, s.azimuth, a.surfaceTilt as number, a.surfaceAzimuth as number);
     },
     examples: [{ args: ['2003-10-17T12:30:30', '39.742476', '-105.1786', '-7', '170', '30', '1830.14', '820', '11', '67'], note: '25.187: the NREL SPA worked example' }],
+    outsideCheck: { source: `${SPA_REPORT}: incidence 25.187000° on the 30° slope facing 170° at the example instant — stated in the publication.`, tests: [...SPA_TESTS] },
   },
   {
     name: 'PROFILEANGLE',
@@ -180,6 +199,7 @@ export const SUN_FUNCTIONS: readonly FunctionDescriptor[] = [
       { args: ['45', '120', '180'], note: '63.43: tan Ω = tan 45° / cos 60°' },
       { args: ['45', '0', '180'], note: '#N/A: the sun in the north is behind a south wall' },
     ],
+    outsideCheck: { source: 'The profile angle tan Ω = tan β / cos γ (Duffie & Beckman, Solar Engineering of Thermal Processes, 4th ed., Eq. 1.9.1a) evaluated by hand: β 30°, γ 60° → 49.106605°; γ 0° → Ω = β — from the published equations.', tests: ['tests/fixtures/formulas.ts', 'tests/core/sun/surfaceAngles.test.ts'] },
   },
   {
     name: 'SHADOWANGLE',
@@ -192,6 +212,7 @@ export const SUN_FUNCTIONS: readonly FunctionDescriptor[] = [
       { args: ['120', '180'], note: '60: morning sun to the right of a south window seen from outside' },
       { args: ['240', '180'], note: '-60: afternoon sun to the left' },
     ],
+    outsideCheck: { source: `${SPA_REPORT}: a surface facing 170° with the sun at 194.340241° gives −24.340241° (the textbook surface-solar azimuth with the sign of docs/conventions.md#horizontal-shadow-angle).`, tests: ['tests/fixtures/formulas.ts', 'tests/core/sun/surfaceAngles.test.ts'] },
   },
 ];
 

@@ -1,7 +1,7 @@
 /**
  * The shape of a worksheet-function descriptor: the single description of each function, from which
- * Excel's functions.json, the CLI's `call` and `list`, the README reference and the fuzz tests are
- * all derived.
+ * Excel's functions.json, the CLI's `call` and `list`, the function reference in docs/ and the fuzz
+ * tests are all derived.
  */
 import type { SunpaneError } from '../core/common';
 
@@ -85,6 +85,19 @@ export interface ResultDescriptor {
   kind?: 'number' | 'dateTime' | 'text';
 }
 
+/**
+ * How a function's results are checked against something this project did not write: the source
+ * (publication with table or example number, or npm library with version, labelled as in
+ * docs/methods.md#how-the-outside-checks-are-labelled) and the test files that hold the function, or
+ * the core code it calls, to that source. Shown in the function reference; every descriptor has one.
+ */
+export interface OutsideCheck {
+  /** The source and its label, in a sentence or two. */
+  source: string;
+  /** Repository paths of the test files that make the check (each must exist; checked by tests/docs). */
+  tests: readonly string[];
+}
+
 export interface FunctionDescriptor {
   /** Worksheet name without the namespace: uppercase letters and digits, e.g. `SUNALTITUDE`. */
   name: string;
@@ -108,4 +121,6 @@ export interface FunctionDescriptor {
   refuses?(args: Args): string | undefined;
   /** Worked examples for the reference: arguments as typed in a cell (text), and what they show. */
   examples?: readonly { args: readonly string[]; note: string }[];
+  /** The outside check of this function (for the reference; dropped from the add-in bundle). */
+  outsideCheck: OutsideCheck;
 }

@@ -19,6 +19,7 @@ const RATIO: FunctionDescriptor = {
   name: 'RATIO',
   summary: 'a divided by b (test descriptor)',
   category: 'Gain and load',
+  outsideCheck: { source: 'none: a toy descriptor for the plumbing tests', tests: [] },
   params: [
     { name: 'a', kind: 'number', min: 0, max: 10, description: 'dividend' },
     { name: 'b', kind: 'number', min: 1, max: 5, default: 2, description: 'divisor' },
@@ -40,6 +41,7 @@ const STAIRS: FunctionDescriptor = {
   name: 'STAIRS',
   summary: 'a ragged table (test descriptor)',
   category: 'Gain and load',
+  outsideCheck: { source: 'none: a toy descriptor for the plumbing tests', tests: [] },
   params: [{ name: 'n', kind: 'number', min: 0, max: 3, integer: true, description: 'rows' }],
   result: { shape: 'spill', description: 'rows 1..n' },
   evaluate: ({ n }) => Array.from({ length: n as number }, (_, i) => Array.from({ length: i + 1 }, (_, j) => j + 1)),

@@ -14,6 +14,7 @@ const SAMPLE: FunctionDescriptor = {
   name: 'SAMPLE',
   summary: 'Sample quantity for the metadata test.',
   category: 'Sky and irradiance',
+  outsideCheck: { source: 'none: a toy descriptor for the plumbing tests', tests: [] },
   params: [
     { name: 'latitude', kind: 'number', unit: '°', min: -90, max: 90, description: 'site latitude, north positive' },
     { name: 'albedo', kind: 'number', min: 0, max: 1, default: 0.2, description: 'ground reflectance' },

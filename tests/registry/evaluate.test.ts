@@ -10,6 +10,7 @@ const ADD: FunctionDescriptor = {
   name: 'TOYADD',
   summary: 'a + b × scale',
   category: 'Time and sun',
+  outsideCheck: { source: 'none: a toy descriptor for the plumbing tests', tests: [] },
   params: [
     { name: 'a', kind: 'number', min: 0, max: 10, description: 'first' },
     { name: 'b', kind: 'number', min: -5, max: 5, description: 'second' },
@@ -26,6 +27,7 @@ const LIST: FunctionDescriptor = {
   name: 'TOYSUM',
   summary: 'sum of a list',
   category: 'Time and sun',
+  outsideCheck: { source: 'none: a toy descriptor for the plumbing tests', tests: [] },
   params: [{ name: 'values', kind: 'numberList', min: 0, max: 90, length: { min: 2, max: 4 }, ascending: true, description: 'values' }],
   result: { shape: 'spill', description: 'the list and its sum' },
   evaluate: (args) => [[...(args.values as number[]), (args.values as number[]).reduce((s, v) => s + v, 0)]],
@@ -91,6 +93,7 @@ describe('series with gaps', () => {
     name: 'TOYSERIES',
     summary: 'count of missing values',
     category: 'Gain and load',
+    outsideCheck: { source: 'none: a toy descriptor for the plumbing tests', tests: [] },
     params: [{ name: 'dni', kind: 'numberList', min: 0, max: 2000, optional: true, gapsAreMissing: true, description: 'series' }],
     result: { shape: 'spill', description: 'values' },
     evaluate: (args) => [(args.dni as number[] | undefined)?.map((v) => (Number.isNaN(v) ? -1 : v)) ?? []],
