@@ -1,6 +1,6 @@
 /**
- * Sun-position benchmark: the same 8760 hourly instants of 2025 at one site (Denver-like, 39.74° N
- * 105.18° W, UTC−7, 1830 m), mid-hour, through
+ * Sun-position benchmark: the same 8760 hourly instants of 2025 at one site (the NREL SPA report's
+ * example site, 39.74° N 105.18° W, UTC−7, 1830 m), mid-hour, through
  * - our direct NREL SPA (`sunPosition`, one call per hour),
  * - our annual fast path (`annualSunPath`, slow terms once a day),
  * - suncalc 2.0.2 `getPosition` (low-precision model),

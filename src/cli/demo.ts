@@ -22,7 +22,8 @@ import { COLOURS, type ExcelJS, NUMBER_FORMATS, type TableCell, addDataTable, ad
 export const DEMO_HELP = `usage: sunpane demo [--out DIR]
 
 Writes DIR/sunpane-demo.xlsx (default DIR: out/demo) for an invented building, ${DEMO_BUILDING.name},
-on two invented example sites (one in each hemisphere) under a clear sky, and prints a summary.
+on two example sites (invented names, rounded real coordinates; one in each hemisphere) under a
+clear sky, and prints a summary.
 
 Sheets: Overview (the building, annual gain by site and facing, best shading option),
 Schedule (the windows), Summary (each window's year, SUM/MAX totals), Monthly (gain by month
@@ -156,7 +157,7 @@ function addOverview(wb: ExcelJS.Workbook, results: DemoResults): { cell: string
   const ws = wb.addWorksheet('Overview');
   ws.getCell('A1').value = `${DEMO_BUILDING.name} — Sunpane demo`;
   ws.getCell('A1').font = { bold: true, size: 14 };
-  ws.getCell('A2').value = `An invented building on invented example sites, clear-sky year ${DEMO_YEAR}; every input is made up.`;
+  ws.getCell('A2').value = `An invented building on two example sites (invented names; rounded real coordinates chosen as example locations), clear-sky year ${DEMO_YEAR}; every other input is made up.`;
   ws.getCell('A3').value = 'Results are estimates by published methods; design needs a qualified engineer and the local code.';
   ws.getCell('A3').font = { italic: true, color: { argb: COLOURS.note } };
   const top = 5;

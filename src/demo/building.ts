@@ -1,8 +1,9 @@
 /**
  * The demo building: an INVENTED two-storey design studio, "Ferngate Studios", placed on two
- * invented example sites — Brackwater (temperate north) and Kestrel Heads (southern temperate) —
- * with windows facing all four ways and a few shading choices. Every number here is made up for the
- * demonstration (typical-looking, not from any real building or product).
+ * example sites with invented names (rounded real coordinates, src/demo/sites.ts) — Brackwater
+ * (temperate north) and Kestrel Heads (southern temperate) — with windows facing all four ways and a
+ * few shading choices. Every other number here is made up for the demonstration (typical-looking, not
+ * from any real building or product).
  */
 import type { Shading } from '../core/shading';
 import type { WindowSpec } from '../core/gain';

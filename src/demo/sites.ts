@@ -1,10 +1,11 @@
 /**
  * Example sites for the demo, the task pane's site picker and the CLI examples.
  *
- * These are EXAMPLES of our own choosing, not a climate database: the place names are fictional,
- * the coordinates were picked to cover a spread of latitudes (temperate north, hot and dry,
- * near-equatorial, southern temperate, beyond the Arctic Circle), and the turbidity values are
- * invented, typical-looking numbers for a clear-sky demonstration only. Do not use them for design.
+ * These are EXAMPLES of our own choosing, not a climate database. The coordinates are rounded real
+ * locations (to 0.1°), chosen as example locations to cover a spread of climates: temperate north,
+ * hot and dry, near-equatorial, southern temperate, beyond the Arctic Circle. The place names are
+ * invented and name none of those places; the turbidity and ground reflectance values are invented,
+ * typical-looking numbers for a clear-sky demonstration only. Do not use them for design.
  */
 import type { Site } from '../core/sun';
 

@@ -197,7 +197,7 @@ describe('sunpane schedule', () => {
     const input = writeTemp(dir, 'windows.csv', text);
     const r = await run('schedule', '--in', input, '--out', path.join(dir, 'out.csv'));
     expect(r.code).toBe(1);
-    expect(r.err).toBe(`sunpane: ${input} line 3 ("East meeting room"), column "Width [m]": is blank but required`);
+    expect(r.err).toBe(`sunpane: ${input} line 4 ("East meeting room"), column "Width [m]": is blank but required`);
     expect(fs.readdirSync(dir)).toEqual(['windows.csv']);
   });
 
@@ -206,11 +206,11 @@ describe('sunpane schedule', () => {
     const base = fs.readFileSync(SCHEDULE, 'utf8');
     const r1 = await run('schedule', '--in', writeTemp(dir, 'a.csv', base.replace(',0.5,2,,,,0.15', ',1.5,2,,,,0.15')), '--out', path.join(dir, 'o.csv'));
     expect(r1.code).toBe(1);
-    expect(r1.err).toMatch(/a\.csv line 5 \("North studio"\), column "SHGC": glazing\.shgc = 1\.5 is not allowed: must be a number from 0 to 1$/);
+    expect(r1.err).toMatch(/a\.csv line 6 \("North studio"\), column "SHGC": glazing\.shgc = 1\.5 is not allowed: must be a number from 0 to 1$/);
     const r2 = await run('schedule', '--in', writeTemp(dir, 'b.csv', base.replace('South office,brackwater,2026,180,3.0', 'South office,brackwater,2026,south,3.0')), '--out', path.join(dir, 'o.csv'));
-    expect(r2.err).toMatch(/b\.csv line 2, column "Faces \[°\]": "south" is not a number$/);
+    expect(r2.err).toMatch(/b\.csv line 3, column "Faces \[°\]": "south" is not a number$/);
     const r3 = await run('schedule', '--in', writeTemp(dir, 'c.csv', base.replace('Panes,', 'Pains,')), '--out', path.join(dir, 'o.csv'));
-    expect(r3.err).toMatch(/c\.csv line 1: unknown column "Pains"/);
+    expect(r3.err).toMatch(/c\.csv line 2: unknown column "Pains"/);
   });
 
   it('applies one hourly weather file to every window', async () => {

@@ -15,3 +15,22 @@ test('the README points to the generated function reference instead of carrying 
   expect(README).toContain('docs/functions.md');
   expect(README).not.toContain('<!-- reference:start');
 });
+
+test('the README stays short: at most 15,000 bytes', () => {
+  expect(Buffer.byteLength(README, 'utf8')).toBeLessThanOrEqual(15_000);
+});
+
+test('the README carries the safety caution', () => {
+  expect(README).toMatch(/results are estimates by published methods/i);
+  expect(README).toContain('design decisions need a qualified engineer and the local energy code');
+});
+
+test('every picture the README shows is in docs/images and under 200 KB (`npm run pictures` makes them)', () => {
+  const pictures = [...README.matchAll(/(?:!\[[^\]]*\]\(|src=")(docs\/images\/[^)"]+)/g)].map((m) => m[1]);
+  expect(pictures.length).toBeGreaterThanOrEqual(2);
+  for (const p of pictures) {
+    const file = path.resolve(__dirname, '../..', p);
+    expect(fs.existsSync(file)).toBe(true);
+    expect(fs.statSync(file).size).toBeLessThan(200 * 1024);
+  }
+});

@@ -1,7 +1,7 @@
 /**
  * Surface angles (src/core/sun/surfaceAngles.ts). Outside checks: the NREL SPA worked example's incidence angle
  * on its 30° slope (Reda & Andreas 2008, in tests/reference/spa-worked-example.test.ts) and, here,
- * Duffie & Beckman, *Solar Engineering of Thermal Processes* (4th ed.), Example 1.6.1 (Madison,
+ * Duffie & Beckman, *Solar Engineering of Thermal Processes* (4th ed.), Example 1.6.1 (latitude 43° N,
  * 13 February, 10:30 solar time, surface tilted 45° facing 15° west of south: θ = 35°, printed to the
  * whole degree) — from memory, tolerance 0.5°; and the same book's long form of the incidence angle in
  * declination, latitude and hour angle (Eq. 1.6.2, from memory), an independent route to the same angle. The remaining tests are geometric invariants, several checked by an independent
@@ -55,7 +55,7 @@ describe('incidence angle', () => {
   });
 
   test('matches Duffie & Beckman Example 1.6.1 (θ = 35°, from memory) and their long form Eq. 1.6.2', () => {
-    // Madison φ = 43°, 13 February δ = −14°, 10:30 solar time ω = −22.5°: sun altitude and azimuth
+    // The example: φ = 43°, 13 February δ = −14°, 10:30 solar time ω = −22.5°: sun altitude and azimuth
     // from the textbook's relations, then the incidence on a 45° surface facing 15° west of south.
     const [phi, delta, omega, slope, gamma] = [43 * RAD, -14 * RAD, -22.5 * RAD, 45 * RAD, 15 * RAD];
     const altitude = asin(cos(phi) * cos(delta) * cos(omega) + sin(phi) * sin(delta)) / RAD;
