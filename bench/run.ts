@@ -8,6 +8,7 @@ const SECTIONS: { file: string; exportName: string }[] = [
   { file: './sun', exportName: 'sunBench' },
   { file: './shading', exportName: 'shadingBench' },
   { file: './annual', exportName: 'annualBench' },
+  { file: './viewFactors', exportName: 'viewFactorsBench' },
 ];
 
 function main(): void {

@@ -33,6 +33,7 @@ interface ThreeApi {
   MeshBasicMaterial: new (opts: { side: number }) => unknown;
   Mesh: new (geometry: unknown, material: unknown) => { updateMatrixWorld(force?: boolean): void };
   DoubleSide: number;
+  Ray: new (origin?: Vec3, direction?: Vec3) => { origin: Vec3; direction: Vec3; intersectTriangle(a: Vec3, b: Vec3, c: Vec3, backfaceCulling: boolean, target: Vec3): Vec3 | null };
 }
 
 // three.js 0.187 is ES-module-only (its CommonJS entry re-exports the module through Node's
@@ -46,10 +47,13 @@ function loadThreeCore(): ThreeApi {
   const at = source.lastIndexOf('\nexport {');
   if (at < 0 || source.slice(0, at).includes('\nexport ')) throw new Error(`unexpected layout of ${file}`);
   const body = `${source.slice(0, at)}\nreturn {${source.slice(at + '\nexport {'.length).replace(/};?\s*$/, '')}};`;
-  return new Function(body)() as ThreeApi;
+  // Math is handed in as a parameter: under Jest the code runs in a vm context, where every lookup
+  // of a global (Math.abs in the ray/triangle test) goes through the context's interceptor and costs
+  // about 25 times a local one.
+  return new Function('Math', body)(Math) as ThreeApi;
 }
 
-const { sin, cos, PI } = Math;
+const { sin, cos, PI, imul } = Math;
 const D2R = PI / 180;
 
 export interface RaycastWindow {
@@ -69,6 +73,10 @@ export class RaycastScene {
   private readonly u: [number, number, number];
   private readonly v: [number, number, number] = [0, 0, 1];
   private readonly n: [number, number, number];
+  /** The same rectangles as triangles in double precision, for {@link directionOpen}. */
+  private readonly triangles: Vec3[] = [];
+  private readonly ray = new THREE.Ray();
+  private readonly hit = new THREE.Vector3();
 
   constructor(private readonly win: RaycastWindow) {
     const s = win.surfaceAzimuth * D2R;
@@ -116,6 +124,8 @@ export class RaycastScene {
     g.setIndex([0, 1, 2, 0, 2, 3]);
     g.computeBoundingSphere();
     g.computeBoundingBox();
+    const [v0, v1, v2, v3] = [p0, p1, p2, p3].map((p) => new THREE.Vector3(p[0], p[1], p[2]));
+    this.triangles.push(v0, v1, v2, v0, v2, v3);
     const mesh = new THREE.Mesh(g, new THREE.MeshBasicMaterial({ side: THREE.DoubleSide }));
     mesh.updateMatrixWorld(true);
     this.meshes.push(mesh);
@@ -146,6 +156,28 @@ export class RaycastScene {
     return this.raycaster.intersectObjects(this.meshes, false).length === 0;
   }
 
+  /** Unit vectors of the window frame in world coordinates: right (seen from outside), up, outward normal. */
+  frame(): { right: readonly number[]; up: readonly number[]; normal: readonly number[] } {
+    return { right: this.u, up: this.v, normal: this.n };
+  }
+
+  /**
+   * Does the ray from glass point (x, y) in the WORLD direction (dx, dy, dz) (unit, dz up) leave the
+   * window's devices, reveal and wall behind? three.js `Ray.intersectTriangle` (Möller–Trumbore) on
+   * every triangle, both faces, in double precision.
+   */
+  directionOpen(x: number, y: number, dx: number, dy: number, dz: number): boolean {
+    const R = this.win.shading.revealDepth ?? 0;
+    const p = this.world(x, y, -R);
+    this.ray.origin.set(p[0], p[1], p[2]);
+    this.ray.direction.set(dx, dy, dz);
+    const t = this.triangles;
+    for (let i = 0; i < t.length; i += 3) {
+      if (this.ray.intersectTriangle(t[i], t[i + 1], t[i + 2], false, this.hit) !== null) return false;
+    }
+    return true;
+  }
+
   /**
    * Sunlit fraction by jittered stratified sampling: one uniformly random point in each cell of an
    * n × n grid over the glass (`random` gives uniform numbers in [0, 1)).
@@ -168,8 +200,8 @@ export function seededRandom(seed: number): () => number {
   let t = seed >>> 0;
   return () => {
     t = (t + 0x6d2b79f5) >>> 0;
-    let r = Math.imul(t ^ (t >>> 15), 1 | t);
-    r = (r + Math.imul(r ^ (r >>> 7), 61 | r)) ^ r;
+    let r = imul(t ^ (t >>> 15), 1 | t);
+    r = (r + imul(r ^ (r >>> 7), 61 | r)) ^ r;
     return ((r ^ (r >>> 14)) >>> 0) / 4294967296;
   };
 }
