@@ -10,9 +10,9 @@
  * the glass (a uniform point on the unit disc in the glass plane, lifted onto the hemisphere —
  * Malley's method) make F the probability that a ray reaches the sky: F ≈ (rays to the open sky) / N.
  * A ray reaches the sky when it points above the horizon (world z > 0), meets no triangle, and passes
- * above the skyline at its compass azimuth (the skyline is not geometry: its definition, elevation
- * by azimuth sector, DESIGN.md, is applied to the ray's altitude and azimuth); the ground when it
- * points below the horizon and meets no triangle. The glass average comes from drawing the ray's
+ * above the skyline at its compass azimuth (the skyline is not geometry: its definition, an
+ * elevation by azimuth sector, docs/conventions.md#skyline, is applied to the ray's altitude and
+ * azimuth); the ground when it points below the horizon and meets no triangle. The glass average comes from drawing the ray's
  * start on the glass too.
  *
  * The horizon band share (directions 0…6.5° above the horizon, weighted by cos θ) is estimated
