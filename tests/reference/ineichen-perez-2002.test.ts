@@ -57,3 +57,21 @@ describe('Ineichen–Perez (2002) clear sky', () => {
     expect(() => ineichenPerezClearSky(30, 172, 3, 20000)).toThrow(/^elevation/);
   });
 });
+
+describe('Ineichen–Perez clear sky at high sites', () => {
+  test('direct normal never exceeds the extraterrestrial value (Spencer 1971), even at 8,000–9,000 m with the sun high', () => {
+    // Physical bound: no atmosphere adds to the beam. Without the cap the formula's b = 0.664 + 0.163/fh1
+    // gives b·I0·exp(−0.09 m (TL − 1)) > I0 above about 6,000 m at TL 1.
+    for (const elevation of [6000, 7000, 8000, 9000]) {
+      for (const altitude of [30, 60, 90]) {
+        for (const day of [3, 172]) {
+          const r = ineichenPerezClearSky(altitude, day, 1, elevation);
+          expect(r.dni).toBeLessThanOrEqual(extraterrestrialSpencer(day) + 1e-9);
+        }
+      }
+    }
+    const r = ineichenPerezClearSky(90, 3, 1, 9000);
+    expect(r.dni).toBeCloseTo(extraterrestrialSpencer(3), 6);
+    expect(r.dhi).toBeGreaterThanOrEqual(0);
+  });
+});

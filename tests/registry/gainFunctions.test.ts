@@ -49,13 +49,13 @@ describe('gain worksheet functions', () => {
     expect(tilted.argument).toBe('surfaceTilt');
   });
 
-  test('GAINSTEPS spills a heading and 21 steps whose window-gain line is WINDOWGAIN', () => {
+  test('GAINSTEPS spills a heading and 25 steps whose window-solar-gain line is WINDOWGAIN', () => {
     const table = call('GAINSTEPS', [...HOUR, ...GLASS]);
     expect(table[0]).toEqual(['step', 'quantity', 'value', 'unit', 'method']);
-    expect(table).toHaveLength(22);
-    const line = table.find((r) => r[1] === 'window gain')!;
+    expect(table).toHaveLength(26);
+    const line = table.find((r) => r[1] === 'window solar gain')!;
     expect(line[2]).toBeCloseTo(call('WINDOWGAIN', [...HOUR, ...GLASS])[0][0] as number, 9);
-    expect(table.slice(1).map((r) => r[0])).toEqual(Array.from({ length: 21 }, (_, i) => i + 1));
+    expect(table.slice(1).map((r) => r[0])).toEqual(Array.from({ length: 25 }, (_, i) => i + 1));
   });
 
   test('COOLINGLOAD spills 24 rows and keeps a constant gain', () => {

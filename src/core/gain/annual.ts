@@ -25,11 +25,13 @@
  */
 import { SunpaneError, DEG, RAD, acosClamped, wrap180 } from '../common';
 import { type PreparedWindow, monthlyValue, prepareWindow } from './windowGain';
+import { outdoorTemperatureSource } from './windowSpec';
+import { DAILY_RANGE_FRACTIONS } from './outdoorTemperature';
 import { ashraeClearSky, decomposeErbs, extraterrestrialSpencer, ineichenPerezClearSky, type PlaneParts, type PreparedPlane, preparePlane } from '../sky';
 import type { ShgcCurve } from '../glazing';
 import { type PreparedShading, prepareShading } from '../shading';
 import { annualSunPath } from '../sun';
-import { daysInMonth } from '../time';
+import { daysInMonth, describeDaylightSaving, standardToClock } from '../time';
 import type { WindowSpec } from './window';
 
 /** One window's year, hour by hour. Every column has `hours` entries; row i is the hour ending at stampSerial[i]. */
@@ -42,6 +44,12 @@ export interface AnnualSeries {
   glassArea: number;
   /** Local standard-time serial at the END of each hour. */
   stampSerial: Float64Array;
+  /** The same stamps on the local clock (the same array as `stampSerial` without daylight saving). */
+  clockStamp: Float64Array;
+  /** The clock convention in words (daylight-saving rule, or standard time all year). */
+  clockRule: string;
+  /** How a supplied series' rows were fitted to the year, in words (undefined for clear skies). */
+  yearFit?: string;
   /** Sun at the middle of the hour [°]. */
   sunAltitude: Float64Array;
   sunAzimuth: Float64Array;
@@ -67,6 +75,18 @@ export interface AnnualSeries {
   gain: Float64Array;
   radiant: Float64Array;
   convective: Float64Array;
+  /** The solar gain by part [W]: transmitted beam, and diffuse (sky + ground). */
+  gainBeam: Float64Array;
+  gainDiffuse: Float64Array;
+  /** Outdoor dry-bulb [°C] (NaN without a source or on a missing row) and the conduction gain U·A·ΔT [W] (0 without a U-value). */
+  dryBulb: Float64Array;
+  conduction: Float64Array;
+  /** True when the window has a U-value (the conduction column is then meaningful). */
+  hasConduction: boolean;
+  /** True when an interior shade is present (the beam then goes to the non-solar radiant time series). */
+  interiorShade: boolean;
+  /** Radiant shares of the beam, diffuse and conduction gains [-]. */
+  radiantFractions: { beam: number; diffuse: number; conduction: number };
   /** 1 where the weather series has no value for the hour (gain etc. 0), else 0. */
   missing: Uint8Array;
 }
@@ -109,12 +129,21 @@ export function annualOfPrepared(w: PreparedWindow): AnnualSeries {
   const path = annualSunPath(spec.year, spec.site, { trig, slowColumns: false });
   if (path.hours !== n) throw new SunpaneError('year', spec.year, `sun path has ${path.hours} hours, expected ${n}`);
   // The sun path's columns are fresh arrays of this call: the series takes them over without copying.
+  const rule = spec.site.daylightSaving;
+  let clockStamp = path.stampSerial;
+  if (rule !== undefined) {
+    clockStamp = new Float64Array(n);
+    for (let i = 0; i < n; i++) clockStamp[i] = standardToClock(path.stampSerial[i] - 1 / 48, rule) + 1 / 48; // the hour's middle decides
+  }
   const out: AnnualSeries = {
     name: spec.name,
     year: spec.year,
     hours: n,
     glassArea: w.glassArea,
     stampSerial: path.stampSerial,
+    clockStamp,
+    clockRule: describeDaylightSaving(rule),
+    yearFit: w.yearFit?.text,
     sunAltitude: path.altitude,
     sunAzimuth: path.azimuth,
     incidence: col(),
@@ -129,6 +158,13 @@ export function annualOfPrepared(w: PreparedWindow): AnnualSeries {
     gain: col(),
     radiant: col(),
     convective: col(),
+    gainBeam: col(),
+    gainDiffuse: col(),
+    dryBulb: col().fill(Number.NaN),
+    conduction: col(),
+    hasConduction: spec.glazing.uValue !== undefined,
+    interiorShade: w.interiorShade,
+    radiantFractions: { beam: w.radiantFraction, diffuse: w.radiantFractionDiffuse, conduction: w.radiantFractionConduction },
     missing: new Uint8Array(n),
   };
   fillWeather(w, path.altitude, path.zenith, out);
@@ -137,7 +173,7 @@ export function annualOfPrepared(w: PreparedWindow): AnnualSeries {
   const surfAz = spec.surfaceAzimuth;
   // Checked once here; per hour only the kernels run (the same ones the checked functions use).
   const shade = w.vertical ? prepareShading({ width: spec.width, height: spec.height }, spec.shading, surfAz) : undefined;
-  const plane = preparePlane({ surfaceTilt: tilt, surfaceAzimuth: surfAz, groundAlbedo: spec.groundAlbedo, skyModel: spec.skyModel, skyViewFactor: w.skyViewFactor });
+  const plane = preparePlane({ surfaceTilt: tilt, surfaceAzimuth: surfAz, groundAlbedo: spec.groundAlbedo, skyModel: w.skyModel, skyViewFactor: w.skyViewFactor });
   const dniExtra = plane.needsDniExtra ? dniExtraByDay() : NO_DNI_EXTRA;
 
   // Three short passes over the year, each a function of its own (as in src/core/sun/sunPath.ts: short
@@ -146,8 +182,48 @@ export function annualOfPrepared(w: PreparedWindow): AnnualSeries {
   // front of the window; irradiance and gain for the hours with light.
   hourlyAngles(n, Math.cos(tilt * RAD), Math.sin(tilt * RAD), Math.cos(surfAz * RAD), Math.sin(surfAz * RAD), out.incidence, out.profileAngle);
   hourlyShading(n, shade, w.curve, surfAz, path.altitude, path.azimuth, out.incidence, out.sunlitFraction, out.shgc);
-  hourlyGain(n, plane, dniExtra, w.glassArea * w.interiorAttenuation, w.radiantFraction, w.curve.diffuse, path.altitude, out);
+  if (out.hasConduction) hourlyConduction(w, out); // before the gain: a missing dry-bulb marks its hour missing
+  hourlyGain(n, plane, dniExtra, w.solarArea * w.interiorAttenuation, w.solarArea * w.interiorAttenuationDiffuse, w.radiantFraction, w.radiantFractionDiffuse, w.curve.diffuse, path.altitude, out);
   return out;
+}
+
+/**
+ * The outdoor dry-bulb and conduction gain U·A·(T_out − T_in) of every hour: from the supplied
+ * series (fitted to the year by date) or the design-day profile of each month (fractions of daily
+ * range by hour ending, src/core/gain/outdoorTemperature.ts). A missing dry-bulb row gives NaN and
+ * no conduction, and marks the hour missing.
+ */
+function hourlyConduction(w: PreparedWindow, out: AnnualSeries): void {
+  const weather = w.spec.weather;
+  const n = out.hours;
+  const tIn = w.spec.indoorTemperature as number;
+  const ua = w.conductance;
+  const { dryBulb, conduction, missing } = out;
+  if (outdoorTemperatureSource(weather) === 'series') {
+    const series = (weather as { dryBulb: ArrayLike<number> }).dryBulb;
+    const rowOf = w.yearFit!.rowOf;
+    for (let i = 0; i < n; i++) {
+      const t = series[rowOf[i]];
+      if (!Number.isFinite(t)) {
+        missing[i] = 1;
+        continue;
+      }
+      dryBulb[i] = t;
+      conduction[i] = ua * (t - tIn);
+    }
+    return;
+  }
+  const d = weather as { dryBulbMax: number[]; dailyRange: number[] };
+  const months = monthOfDay(w.spec.year);
+  for (let day = 0; day * 24 < n; day++) {
+    const tMax = monthlyValue(d.dryBulbMax, months[day]);
+    const range = monthlyValue(d.dailyRange, months[day]);
+    for (let h = 0; h < 24; h++) {
+      const t = tMax - DAILY_RANGE_FRACTIONS[h] * range; // row h is the hour ending h + 1
+      dryBulb[day * 24 + h] = t;
+      conduction[day * 24 + h] = ua * (t - tIn);
+    }
+  }
 }
 
 /** Zeros by day of the year, for sky models that need no extraterrestrial irradiance. */
@@ -263,14 +339,16 @@ function hourlyShading(
  * @param n - number of hours
  * @param plane - the prepared plane
  * @param dniExtra - extraterrestrial normal irradiance by day of the year [W/m²] (index 1…366)
- * @param k - glass area × interior attenuation [m²]
- * @param fr - radiant fraction of the gain [-]
+ * @param kb - area × beam interior attenuation [m²]
+ * @param kd - area × diffuse interior attenuation [m²]
+ * @param frb - radiant fraction of the beam gain [-]
+ * @param frd - radiant fraction of the diffuse gain [-]
  * @param shgcDiffuse - diffuse SHGC [-]
  * @param alt - sun altitude [°]
- * @param out - the series: reads dni, dhi, missing, sunlitFraction, shgc; fills beam, sky, ground, gain, radiant, convective
+ * @param out - the series: reads dni, dhi, missing, sunlitFraction, shgc; fills beam, sky, ground, gain (and its beam and diffuse parts), radiant, convective
  */
-function hourlyGain(n: number, plane: PreparedPlane, dniExtra: Float64Array, k: number, fr: number, shgcDiffuse: number, alt: Float64Array, out: AnnualSeries): void {
-  const { dni: dniColumn, dhi: dhiColumn, missing, sunlitFraction, shgc, beam, sky, ground, gain, radiant, convective } = out;
+function hourlyGain(n: number, plane: PreparedPlane, dniExtra: Float64Array, kb: number, kd: number, frb: number, frd: number, shgcDiffuse: number, alt: Float64Array, out: AnnualSeries): void {
+  const { dni: dniColumn, dhi: dhiColumn, missing, sunlitFraction, shgc, beam, sky, ground, gain, radiant, convective, gainBeam, gainDiffuse } = out;
   const sinAlt = SIN_ALT_SCRATCH;
   const cosT = COS_THETA_SCRATCH;
   const parts: PlaneParts = { beam: 0, sky: 0, ground: 0, total: 0 };
@@ -283,13 +361,18 @@ function hourlyGain(n: number, plane: PreparedPlane, dniExtra: Float64Array, k: 
     if (dhi === 0 && (dni === 0 || !sunUp)) continue; // dark hour: irradiance and gain stay 0
     plane.irradiance(parts, sunUp ? dni : 0, dhi, a, sinAlt[i], cosT[i], dniExtra[((i / 24) | 0) + 1]);
     // Gain equation of src/core/gain/windowGain.ts windowGainParts, inlined for the hourly path.
-    const q = k * (parts.beam * sunlitFraction[i] * shgc[i] + (parts.sky + parts.ground) * shgcDiffuse);
+    const qb = kb * parts.beam * sunlitFraction[i] * shgc[i];
+    const qd = kd * (parts.sky + parts.ground) * shgcDiffuse;
+    const q = qb + qd;
+    const r = frb * qb + frd * qd;
     beam[i] = parts.beam;
     sky[i] = parts.sky;
     ground[i] = parts.ground;
     gain[i] = q;
-    radiant[i] = fr * q;
-    convective[i] = (1 - fr) * q;
+    gainBeam[i] = qb;
+    gainDiffuse[i] = qd;
+    radiant[i] = r;
+    convective[i] = q - r;
   }
 }
 
@@ -333,9 +416,10 @@ function fillWeather(w: PreparedWindow, alt: Float64Array, zen: Float64Array, ou
     case 'measured': {
       const dniIn = weather.dni;
       const dhiIn = weather.dhi;
+      const rowOf = w.yearFit!.rowOf;
       for (let i = 0; i < n; i++) {
-        const b = dniIn[i];
-        const d = dhiIn[i];
+        const b = dniIn[rowOf[i]];
+        const d = dhiIn[rowOf[i]];
         if (Number.isFinite(b) && Number.isFinite(d)) {
           dni[i] = b;
           dhi[i] = d;
@@ -345,8 +429,9 @@ function fillWeather(w: PreparedWindow, alt: Float64Array, zen: Float64Array, ou
     }
     case 'globalHorizontal': {
       const ghiIn = weather.ghi;
+      const rowOf = w.yearFit!.rowOf;
       for (let i = 0; i < n; i++) {
-        const ghi = ghiIn[i];
+        const ghi = ghiIn[rowOf[i]];
         if (!Number.isFinite(ghi)) {
           missing[i] = 1;
           continue;

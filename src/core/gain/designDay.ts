@@ -4,7 +4,7 @@
  * load/designDay.ts.
  */
 import { SunpaneError, requireRange } from '../common';
-import { civilToSerial } from '../time';
+import { civilToSerial, standardToClock } from '../time';
 import { gainOfPrepared, prepareWindow, type PreparedWindow } from './windowGain';
 import type { Weather, WindowSpec } from './window';
 
@@ -25,14 +25,23 @@ export interface DesignDayGainMonth {
   month: number;
   /** Day of the month. */
   day: number;
-  /** Window gain of each hour [W]; index 0 is the hour ending 01:00, sun at its middle. */
+  /** Window solar gain of each hour [W]; index 0 is the hour ending 01:00 (local standard time), sun at its middle. */
   hourlyGain: number[];
+  /** The solar gain by part [W]: transmitted beam, and diffuse (sky + ground). */
+  hourlyBeam: number[];
+  hourlyDiffuse: number[];
+  /** Conduction gain U·A·(T_out − T_in) of each hour [W] (zeros without a U-value). */
+  hourlyConduction: number[];
+  /** Outdoor dry-bulb of each hour [°C] (empty without a U-value). */
+  hourlyDryBulb: number[];
   /** Hour ending (1…24, local standard time) of the largest gain; the earliest on ties. */
   peakHour: number;
   /** The largest hourly gain [W] (0 when the sun never reaches the window that day). */
   peakGain: number;
   /** Local serial at the end of the peak hour. */
   peakStamp: number;
+  /** The peak hour's end on the local clock (serial; equals `peakStamp` without daylight saving). */
+  peakClockStamp: number;
 }
 
 /** Default day of the month for design days. */
@@ -68,9 +77,22 @@ export function designDayGains(spec: WindowSpec, options: DesignDayGainOptions =
   for (let month = 1; month <= 12; month++) {
     const midnight = civilToSerial(spec.year, month, day);
     const hourlyGain: number[] = [];
-    for (let h = 0; h < 24; h++) hourlyGain.push(gainOfPrepared(w, midnight + (h + 0.5) / 24).gain.total);
+    const hourlyBeam: number[] = [];
+    const hourlyDiffuse: number[] = [];
+    const hourlyConduction: number[] = [];
+    const hourlyDryBulb: number[] = [];
+    for (let h = 0; h < 24; h++) {
+      const hour = gainOfPrepared(w, midnight + (h + 0.5) / 24);
+      hourlyGain.push(hour.gain.total);
+      hourlyBeam.push(hour.gain.beam);
+      hourlyDiffuse.push(hour.gain.sky + hour.gain.ground);
+      hourlyConduction.push(hour.gain.conduction);
+      if (hour.outdoorTemperature !== undefined) hourlyDryBulb.push(hour.outdoorTemperature);
+    }
     const peak = peakOfDay(hourlyGain);
-    months.push({ month, day, hourlyGain, peakHour: peak.index + 1, peakGain: peak.value, peakStamp: midnight + (peak.index + 1) / 24 });
+    const peakStamp = midnight + (peak.index + 1) / 24;
+    const peakClockStamp = standardToClock(peakStamp - 1 / 48, spec.site.daylightSaving) + 1 / 48;
+    months.push({ month, day, hourlyGain, hourlyBeam, hourlyDiffuse, hourlyConduction, hourlyDryBulb, peakHour: peak.index + 1, peakGain: peak.value, peakStamp, peakClockStamp });
   }
   return { months, window: w };
 }

@@ -12,16 +12,33 @@ import type { Shading } from '../shading';
 import type { SkyModel } from '../sky';
 import type { Site } from '../sun';
 
-/** Where the irradiance comes from. */
+/**
+ * Outdoor dry-bulb on clear design days: the day's highest temperature and its daily range, each 12
+ * monthly values (January first) or one for the year; the hours follow the fractions of daily
+ * range (src/core/gain/outdoorTemperature.ts).
+ */
+export interface DesignTemperatures {
+  /** Highest dry-bulb of the day [°C], −60…60. */
+  dryBulbMax?: number[];
+  /** Daily range of dry-bulb [K], 0…40. */
+  dailyRange?: number[];
+}
+
+/**
+ * Where the irradiance (and, for conduction, the outdoor dry-bulb) comes from. Hourly series hold
+ * one value per hour of the window's year (8760, or 8784 in a leap year); a typical year of 8760
+ * rows for a leap year, or a leap-year file of 8784 rows for another year, is fitted by date
+ * (29 February repeated or dropped, src/core/time/clock.ts).
+ */
 export type Weather =
   /** ASHRAE clear-sky model with a pseudo-optical depth pair per month (12 values each) or one pair all year. */
-  | { kind: 'ashraeClearSky'; tauB: number[]; tauD: number[] }
+  | ({ kind: 'ashraeClearSky'; tauB: number[]; tauD: number[] } & DesignTemperatures)
   /** Turbidity-based clear sky (Ineichen–Perez) with Linke turbidity per month (12) or one value. */
-  | { kind: 'ineichenClearSky'; linkeTurbidity: number[] }
-  /** The caller's hourly series: direct normal and diffuse horizontal [W/m²], one value per hour of the year; NaN marks a missing hour. */
-  | { kind: 'measured'; dni: Float64Array | number[]; dhi: Float64Array | number[] }
-  /** The caller's hourly global horizontal [W/m²], decomposed by Erbs et al. (1982); NaN marks a missing hour. */
-  | { kind: 'globalHorizontal'; ghi: Float64Array | number[] };
+  | ({ kind: 'ineichenClearSky'; linkeTurbidity: number[] } & DesignTemperatures)
+  /** The caller's hourly series: direct normal and diffuse horizontal [W/m²]; NaN marks a missing hour; optional dry-bulb [°C]. */
+  | { kind: 'measured'; dni: Float64Array | number[]; dhi: Float64Array | number[]; dryBulb?: Float64Array | number[] }
+  /** The caller's hourly global horizontal [W/m²], decomposed by Erbs et al. (1982); NaN marks a missing hour; optional dry-bulb [°C]. */
+  | { kind: 'globalHorizontal'; ghi: Float64Array | number[]; dryBulb?: Float64Array | number[] };
 
 /** One window, completely described. */
 export interface WindowSpec {
@@ -42,8 +59,13 @@ export interface WindowSpec {
   shading: Shading;
   /** Ground reflectance, 0…1. */
   groundAlbedo: number;
-  /** Sky-diffuse transposition model; default Perez 1990 for measured weather. */
-  skyModel: SkyModel;
+  /**
+   * Sky-diffuse transposition model; omitted: the handbook's clear-day procedure (`ashraeClearDay`)
+   * on ASHRAE τb/τd clear skies, Perez 1990 otherwise.
+   */
+  skyModel?: SkyModel;
+  /** Indoor air temperature [°C], −20…50, for the conduction gain (needed with `glazing.uValue`). */
+  indoorTemperature?: number;
   weather: Weather;
   /** Calendar year of the hourly series. */
   year: number;

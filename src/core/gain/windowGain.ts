@@ -16,12 +16,13 @@
  * instant evaluated is above the horizon.
  */
 import { SunpaneError, requireRange } from '../common';
-import { glassArea as glassAreaOf, interiorAttenuationOf, shgcCurve, type ShgcCurve } from '../glazing';
+import { glassArea as glassAreaOf, interiorAttenuationsOf, shgcBasisOf, shgcCurve, type ShgcCurve, solarArea } from '../glazing';
 import { hasShading, sunlitFraction, skylineSkyViewFactor } from '../shading';
-import { radiantFractionOf, validateWindowSpec } from './windowSpec';
-import { ashraeClearSky, decomposeErbs, ineichenPerezClearSky, planeIrradiance } from '../sky';
+import { outdoorTemperatureSource, radiantFractionsOf, skyModelOf, validateWindowSpec } from './windowSpec';
+import { ashraeClearSky, decomposeErbs, ineichenPerezClearSky, planeIrradiance, type SkyModel } from '../sky';
 import { sunPosition, type SunOptions, incidenceAngle, profileAngle } from '../sun';
-import { civilToSerial, dayOfYear, hoursInYear, serialToCivil, serialToUtcMs, requireSerial } from '../time';
+import { civilToSerial, clockToStandard, dayOfYear, fitYearOfHours, hoursInYear, serialToCivil, serialToUtcMs, requireSerial, standardToClock, type YearFit } from '../time';
+import { fractionOfDailyRange } from './outdoorTemperature';
 import type { Weather, WindowSpec } from './window';
 
 /** The inputs of the gain equation for one hour. */
@@ -40,10 +41,14 @@ export interface GainInput {
   shgcBeam: number;
   /** Hemispherical (diffuse) SHGC, 0…1. */
   shgcDiffuse: number;
-  /** Interior attenuation coefficient, 0…1 (1 = no interior shade). */
+  /** Interior attenuation coefficient of the beam (and of diffuse when `interiorAttenuationDiffuse` is not given), 0…1 (1 = no interior shade). */
   interiorAttenuation: number;
-  /** Radiant share of the gain, 0…1. */
+  /** Interior attenuation coefficient of diffuse light, 0…1; default `interiorAttenuation`. */
+  interiorAttenuationDiffuse?: number;
+  /** Radiant share of the beam gain (and of diffuse when `radiantFractionDiffuse` is not given), 0…1. */
   radiantFraction: number;
+  /** Radiant share of the diffuse gain, 0…1; default `radiantFraction`. */
+  radiantFractionDiffuse?: number;
 }
 
 /** Window solar gain split by source and by heat-transfer mode [W]. */
@@ -54,12 +59,14 @@ export interface GainParts {
   sky: number;
   /** Gain from ground-reflected light [W]. */
   ground: number;
-  /** beam + sky + ground [W]. */
+  /** beam + sky + ground: the solar gain [W]. */
   total: number;
-  /** Radiant part of the total [W]. */
+  /** Radiant part of the solar gain [W]. */
   radiant: number;
-  /** Convective part of the total [W]. */
+  /** Convective part of the solar gain [W]. */
   convective: number;
+  /** Conduction gain U · A · (T_out − T_in) [W], beside the solar gain (negative when heat flows out; 0 without a U-value). */
+  conduction: number;
 }
 
 /**
@@ -81,13 +88,15 @@ export function windowGainParts(input: GainInput): GainParts {
   const gb = requireRange('shgcBeam', input.shgcBeam, 0, 1);
   const gd = requireRange('shgcDiffuse', input.shgcDiffuse, 0, 1);
   const iac = requireRange('interiorAttenuation', input.interiorAttenuation, 0, 1);
+  const iacD = input.interiorAttenuationDiffuse === undefined ? iac : requireRange('interiorAttenuationDiffuse', input.interiorAttenuationDiffuse, 0, 1);
   const fr = requireRange('radiantFraction', input.radiantFraction, 0, 1);
-  const k = area * iac;
-  const beam = k * eb * f * gb; // beam through the sunlit glass
-  const sky = k * es * gd; // diffuse through all of the glass
-  const ground = k * eg * gd;
+  const frD = input.radiantFractionDiffuse === undefined ? fr : requireRange('radiantFractionDiffuse', input.radiantFractionDiffuse, 0, 1);
+  const beam = area * iac * eb * f * gb; // beam through the sunlit glass
+  const sky = area * iacD * es * gd; // diffuse through all of the glass
+  const ground = area * iacD * eg * gd;
   const total = beam + sky + ground;
-  return { beam, sky, ground, total, radiant: fr * total, convective: (1 - fr) * total };
+  const radiant = fr * beam + frD * (sky + ground);
+  return { beam, sky, ground, total, radiant, convective: total - radiant, conduction: 0 };
 }
 
 /** Direct normal and diffuse horizontal irradiance of one hour [W/m²]. */
@@ -100,6 +109,10 @@ export interface WeatherHour {
 export interface WindowGainHour {
   /** The local standard date-time the sun was evaluated at (serial). */
   dateTime: number;
+  /** The same instant on the local clock (serial; equals `dateTime` without daylight saving). */
+  clockTime: number;
+  /** How a supplied series' rows were fitted to the window's year, in words (undefined for clear skies). */
+  yearFit?: string;
   /** True when the weather series has no value for this hour: irradiance and gain are then 0. */
   missing: boolean;
   /** Where DNI and DHI came from, in words. */
@@ -124,8 +137,16 @@ export interface WindowGainHour {
   shgcDiffuse: number;
   interiorAttenuation: number;
   radiantFraction: number;
+  /** Interior attenuation of diffuse light and radiant share of the diffuse gain [-]. */
+  interiorAttenuationDiffuse: number;
+  radiantFractionDiffuse: number;
   /** Glass area [m²]. */
   glassArea: number;
+  /** Area the SHGC applies to [m²]: the glass area, or the rough opening for a whole-window SHGC. */
+  solarArea: number;
+  /** Outdoor and indoor dry-bulb [°C] for the conduction gain (undefined without a U-value). */
+  outdoorTemperature?: number;
+  indoorTemperature?: number;
   /** The gain [W]. */
   gain: GainParts;
 }
@@ -135,9 +156,24 @@ export interface PreparedWindow {
   spec: WindowSpec;
   curve: ShgcCurve;
   glassArea: number;
+  /** Area the SHGC applies to [m²] (glass area, or the rough opening for a whole-window SHGC). */
+  solarArea: number;
   skyViewFactor: number;
+  /** Interior attenuation of the beam [-] (the historical single coefficient). */
   interiorAttenuation: number;
+  interiorAttenuationDiffuse: number;
+  /** True when an interior shade is present (either attenuation below 1): the beam then goes to the non-solar radiant time series. */
+  interiorShade: boolean;
+  /** Radiant share of the beam gain [-]. */
   radiantFraction: number;
+  radiantFractionDiffuse: number;
+  radiantFractionConduction: number;
+  /** U · rough-opening area [W/K], 0 without a U-value. */
+  conductance: number;
+  /** The sky model after defaults (`ashraeClearDay` on τb/τd clear skies unless given). */
+  skyModel: SkyModel;
+  /** Row map of a supplied series to the year (undefined for clear skies). */
+  yearFit?: YearFit;
   vertical: boolean;
   shaded: boolean;
   sunOptions: SunOptions;
@@ -155,13 +191,25 @@ export function prepareWindow(spec: WindowSpec): PreparedWindow {
   if (site.pressure !== undefined) sunOptions.pressure = site.pressure;
   if (site.temperature !== undefined) sunOptions.temperature = site.temperature;
   const skyline = spec.shading.skyline;
+  const iac = interiorAttenuationsOf(spec.glazing);
+  const fr = radiantFractionsOf(spec.glazing);
+  const w = spec.weather;
+  const series = w.kind === 'measured' ? w.dni : w.kind === 'globalHorizontal' ? w.ghi : undefined;
   return {
     spec,
     curve: shgcCurve(spec.glazing),
     glassArea: glassAreaOf(spec.width, spec.height, spec.frameFraction),
+    solarArea: solarArea(spec.width, spec.height, spec.frameFraction, shgcBasisOf(spec.glazing)),
     skyViewFactor: skyline !== undefined ? skylineSkyViewFactor(skyline, spec.surfaceAzimuth) : 1,
-    interiorAttenuation: interiorAttenuationOf(spec.glazing),
-    radiantFraction: radiantFractionOf(spec.glazing),
+    interiorAttenuation: iac.beam,
+    interiorAttenuationDiffuse: iac.diffuse,
+    interiorShade: iac.shaded,
+    radiantFraction: fr.beam,
+    radiantFractionDiffuse: fr.diffuse,
+    radiantFractionConduction: fr.conduction,
+    conductance: (spec.glazing.uValue ?? 0) * spec.width * spec.height,
+    skyModel: skyModelOf(spec),
+    yearFit: series !== undefined ? fitYearOfHours(series.length, spec.year, w.kind === 'measured' ? 'weather.dni' : 'weather.ghi') : undefined,
     vertical: spec.surfaceTilt === 90,
     shaded: hasShading(spec.shading),
     sunOptions,
@@ -205,13 +253,14 @@ export function weatherFromSpec(w: PreparedWindow, hourIndex: number, month: num
       return { dni: c.dni, dhi: c.dhi };
     }
     case 'measured': {
-      const dni = weather.dni[hourIndex];
-      const dhi = weather.dhi[hourIndex];
+      const row = w.yearFit!.rowOf[hourIndex];
+      const dni = weather.dni[row];
+      const dhi = weather.dhi[row];
       if (!Number.isFinite(dni) || !Number.isFinite(dhi)) return undefined;
       return { dni, dhi };
     }
     case 'globalHorizontal': {
-      const ghi = weather.ghi[hourIndex];
+      const ghi = weather.ghi[w.yearFit!.rowOf[hourIndex]];
       if (!Number.isFinite(ghi)) return undefined;
       const d = decomposeErbs(ghi, sunZenith, doy);
       return { dni: d.dni, dhi: d.dhi };
@@ -228,7 +277,27 @@ export function hourIndexOf(w: PreparedWindow, serial: number): number {
   return index;
 }
 
-/** Gain of a prepared window at a local serial, with the hour's weather given or taken from the spec. */
+/**
+ * Outdoor dry-bulb [°C] of the hour containing a local standard serial: the supplied series' row, or
+ * the design-day profile of the month (hour ending, local standard time); NaN for a missing row,
+ * undefined without a source.
+ */
+export function outdoorTemperatureAt(w: PreparedWindow, serial: number, month: number): number | undefined {
+  const weather = w.spec.weather;
+  const source = outdoorTemperatureSource(weather);
+  if (source === undefined) return undefined;
+  if (source === 'series') {
+    const series = (weather as { dryBulb: ArrayLike<number> }).dryBulb;
+    const value = series[w.yearFit!.rowOf[hourIndexOf(w, serial)]];
+    return Number.isFinite(value) ? value : Number.NaN;
+  }
+  const d = weather as { dryBulbMax: number[]; dailyRange: number[] };
+  const hoursOfDay = (serial - Math.floor(serial)) * 24;
+  const hourEnding = Math.min(24, Math.floor(hoursOfDay + 1e-9) + 1);
+  return monthlyValue(d.dryBulbMax, month) - fractionOfDailyRange(hourEnding) * monthlyValue(d.dailyRange, month);
+}
+
+/** Gain of a prepared window at a local standard-time serial, with the hour's weather given or taken from the spec. */
 export function gainOfPrepared(w: PreparedWindow, serial: number, weatherHour?: WeatherHour): WindowGainHour {
   const { spec } = w;
   const { site } = spec;
@@ -262,12 +331,12 @@ export function gainOfPrepared(w: PreparedWindow, serial: number, weatherHour?: 
     surfaceAzimuth: spec.surfaceAzimuth,
     groundAlbedo: spec.groundAlbedo,
     dayOfYear: doy,
-    skyModel: spec.skyModel,
+    skyModel: w.skyModel,
     skyViewFactor: w.skyViewFactor,
   });
   const shgcBeam = incidence >= 90 ? 0 : w.curve.atAngle(incidence);
   const gain = windowGainParts({
-    glassArea: w.glassArea,
+    glassArea: w.solarArea,
     beam: plane.beam,
     sky: plane.sky,
     ground: plane.ground,
@@ -275,10 +344,20 @@ export function gainOfPrepared(w: PreparedWindow, serial: number, weatherHour?: 
     shgcBeam,
     shgcDiffuse: w.curve.diffuse,
     interiorAttenuation: w.interiorAttenuation,
+    interiorAttenuationDiffuse: w.interiorAttenuationDiffuse,
     radiantFraction: w.radiantFraction,
+    radiantFractionDiffuse: w.radiantFractionDiffuse,
   });
+  let outdoorTemperature: number | undefined;
+  if (w.conductance > 0 || spec.glazing.uValue !== undefined) {
+    outdoorTemperature = outdoorTemperatureAt(w, serial, month);
+    const dt = outdoorTemperature !== undefined && Number.isFinite(outdoorTemperature) ? outdoorTemperature - spec.indoorTemperature! : 0;
+    gain.conduction = w.conductance * dt; // U · A · (T_out − T_in)
+  }
   return {
     dateTime: serial,
+    clockTime: standardToClock(serial, site.daylightSaving),
+    yearFit: w.yearFit?.text,
     missing,
     weatherSource: missing ? `${weatherSource}: no value for this hour` : weatherSource,
     sunAltitude: sun.altitude,
@@ -296,7 +375,12 @@ export function gainOfPrepared(w: PreparedWindow, serial: number, weatherHour?: 
     shgcDiffuse: w.curve.diffuse,
     interiorAttenuation: w.interiorAttenuation,
     radiantFraction: w.radiantFraction,
+    interiorAttenuationDiffuse: w.interiorAttenuationDiffuse,
+    radiantFractionDiffuse: w.radiantFractionDiffuse,
     glassArea: w.glassArea,
+    solarArea: w.solarArea,
+    outdoorTemperature,
+    indoorTemperature: outdoorTemperature !== undefined ? spec.indoorTemperature : undefined,
     gain,
   };
 }
@@ -304,8 +388,9 @@ export function gainOfPrepared(w: PreparedWindow, serial: number, weatherHour?: 
 /**
  * Solar gain of one window at one instant.
  * @param spec - the window (validated here; errors name the field by its path)
- * @param dateTime - local standard date-time at which the sun is evaluated (serial); for an hourly
- *   row stamped at the end of its hour pass the middle of the hour (stamp − 1/48)
+ * @param dateTime - local date-time at which the sun is evaluated (serial): standard time, or clock
+ *   time when the site has a daylight-saving rule (converted here; see src/core/time/clock.ts);
+ *   for an hourly row stamped at the end of its hour pass the middle of the hour (stamp − 1/48)
  * @param weatherHour - the hour's direct normal and diffuse horizontal irradiance [W/m²], each
  *   0…2000; omitted: from `spec.weather` — the clear-sky model at this instant, or the supplied
  *   series' row for the hour containing `dateTime` (which must then fall in `spec.year`)
@@ -316,5 +401,6 @@ export function gainOfPrepared(w: PreparedWindow, serial: number, weatherHour?: 
  */
 export function windowGainAt(spec: WindowSpec, dateTime: number, weatherHour?: WeatherHour): WindowGainHour {
   requireSerial('dateTime', dateTime);
-  return gainOfPrepared(prepareWindow(spec), dateTime, weatherHour);
+  const w = prepareWindow(spec);
+  return gainOfPrepared(w, clockToStandard(dateTime, spec.site.daylightSaving), weatherHour);
 }

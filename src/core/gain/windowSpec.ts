@@ -5,11 +5,12 @@
  */
 import { SunpaneError, requireRange } from '../common';
 import { LINKE_MAX, LINKE_MIN, TAU_B_MAX, TAU_D_MAX, type SkyModel } from '../sky';
-import { hoursInYear, requireYear } from '../time';
-import { requireAngleTable, type Glazing } from '../glazing';
+import { fitYearOfHours, requireDaylightSaving, requireYear } from '../time';
+import { glazingTypeOf, interiorAttenuationsOf, requireAngleTable, requireTypeParameter, shgcBasisOf, type Glazing } from '../glazing';
 import { PATH_SHADING_NAMES, requireShading, requireVerticalForShading, type Shading } from '../shading';
 import type { Site } from '../sun';
 import type { Weather, WindowSpec } from './window';
+import { DAILY_RANGE_MAX, DRY_BULB_MAX, DRY_BULB_MIN } from './outdoorTemperature';
 
 /**
  * Default radiant fraction of the window gain: 1, all transmitted solar gain treated as radiant
@@ -18,12 +19,23 @@ import type { Weather, WindowSpec } from './window';
  * `glazing.radiantFraction` when the room or an interior shade calls for another split).
  */
 export const DEFAULT_RADIANT_FRACTION = 1;
+/**
+ * Default radiant fraction of the conduction gain through glazing: 0.46 (from memory: the
+ * fundamentals handbook's load-calculation chapter, radiative/convective split for fenestration
+ * conduction). Set `glazing.radiantFractionConduction` to use another.
+ */
+export const DEFAULT_CONDUCTION_RADIANT_FRACTION = 0.46;
+/** Largest U-value accepted [W/(m²·K)] (single glazing is about 6). */
+export const U_VALUE_MAX = 10;
+/** Range of indoor temperature accepted [°C]. */
+export const INDOOR_TEMPERATURE_MIN = -20;
+export const INDOOR_TEMPERATURE_MAX = 50;
 /** Largest window dimension and shading length accepted [m]. */
 export const MAX_LENGTH = 1000;
 /** Largest irradiance value accepted in a weather series [W/m²] (above any solar constant estimate). */
 export const MAX_IRRADIANCE = 2000;
 
-const SKY_MODELS: readonly SkyModel[] = ['isotropic', 'hayDavies', 'perez1990'];
+const SKY_MODELS: readonly SkyModel[] = ['isotropic', 'hayDavies', 'perez1990', 'ashraeClearDay'];
 const WEATHER_KINDS: readonly Weather['kind'][] = ['ashraeClearSky', 'ineichenClearSky', 'measured', 'globalHorizontal'];
 
 function requireObject(path: string, value: unknown): Record<string, unknown> {
@@ -43,14 +55,24 @@ function validateSite(site: Site): void {
   optionalRange('site.elevation', site.elevation, -500, 9000, 'm');
   optionalRange('site.pressure', site.pressure, 0, 1200, 'hPa', { exclusiveMin: true });
   optionalRange('site.temperature', site.temperature, -90, 60, '°C');
+  if (site.daylightSaving !== undefined) requireDaylightSaving(site.daylightSaving, 'site.daylightSaving');
 }
 
 function validateGlazing(glazing: Glazing): void {
   requireObject('glazing', glazing);
   requireRange('glazing.shgc', glazing.shgc, 0, 1);
   requireRange('glazing.panes', glazing.panes, 1, 4, undefined, { integer: true });
-  optionalRange('glazing.interiorAttenuation', glazing.interiorAttenuation, 0, 1);
+  const type = glazingTypeOf(glazing);
+  if (type === 'coated') requireTypeParameter(glazing.typeParameter, 'glazing.typeParameter');
+  if (type === 'table' && glazing.angleTable === undefined) throw new SunpaneError('glazing.angleTable', undefined, 'must be given for glazing type "table": a table of angles and SHGC values');
+  if (type !== 'table' && glazing.angleTable !== undefined) throw new SunpaneError('glazing.type', type, 'must be "table" (or left out) when an angle table is given: the table would otherwise be ignored');
+  shgcBasisOf(glazing);
+  interiorAttenuationsOf(glazing);
   optionalRange('glazing.radiantFraction', glazing.radiantFraction, 0, 1);
+  optionalRange('glazing.radiantFractionBeam', glazing.radiantFractionBeam, 0, 1);
+  optionalRange('glazing.radiantFractionDiffuse', glazing.radiantFractionDiffuse, 0, 1);
+  optionalRange('glazing.radiantFractionConduction', glazing.radiantFractionConduction, 0, 1);
+  optionalRange('glazing.uValue', glazing.uValue, 0, U_VALUE_MAX, 'W/(m²·K)');
   if (glazing.angleTable !== undefined) requireAngleTable(glazing.angleTable, 'glazing.angleTable');
 }
 
@@ -66,45 +88,70 @@ function validateMonthly(path: string, values: unknown, min: number, max: number
   for (let i = 0; i < values.length; i++) requireRange(`${path}[${i}]`, values[i], min, max, undefined, { exclusiveMin });
 }
 
-function validateSeries(path: string, values: unknown, hours: number, year: number): void {
+function validateSeries(path: string, values: unknown, year: number, min = 0, max = MAX_IRRADIANCE, unit = 'W/m²'): number {
   const ok = Array.isArray(values) || values instanceof Float64Array || values instanceof Float32Array;
-  if (!ok) throw new SunpaneError(path, values, `must be a list of ${hours} hourly values`);
+  if (!ok) throw new SunpaneError(path, values, 'must be a list of hourly values');
   const v = values as ArrayLike<number>;
-  if (v.length !== hours) {
-    throw new SunpaneError(path, Array.from(v), `must hold one value per hour of ${year}: ${hours} values`);
-  }
-  for (let i = 0; i < hours; i++) {
+  // 8760 or 8784 rows: fitted to the year by date (the rule is reported with the results).
+  fitYearOfHours(v.length, year, path);
+  for (let i = 0; i < v.length; i++) {
     const x = v[i];
-    if (typeof x !== 'number') throw new SunpaneError(`${path}[${i}]`, x, `must be a number from 0 to ${MAX_IRRADIANCE} W/m², or NaN for a missing hour`);
+    if (typeof x !== 'number') throw new SunpaneError(`${path}[${i}]`, x, `must be a number from ${min} to ${max} ${unit}, or NaN for a missing hour`);
     // Non-finite values mark missing hours (documented); finite ones must be physical.
-    if (Number.isFinite(x) && (x < 0 || x > MAX_IRRADIANCE)) {
-      throw new SunpaneError(`${path}[${i}]`, x, `must be a number from 0 to ${MAX_IRRADIANCE} W/m², or NaN for a missing hour`);
+    if (Number.isFinite(x) && (x < min || x > max)) {
+      throw new SunpaneError(`${path}[${i}]`, x, `must be a number from ${min} to ${max} ${unit}, or NaN for a missing hour`);
     }
   }
+  return v.length;
 }
 
 function validateWeather(weather: Weather, year: number): void {
   const w = requireObject('weather', weather);
   const kind = w.kind as Weather['kind'];
   if (!WEATHER_KINDS.includes(kind)) throw new SunpaneError('weather.kind', w.kind, `must be one of ${WEATHER_KINDS.map((k) => `"${k}"`).join(', ')}`);
-  const hours = hoursInYear(year);
   switch (weather.kind) {
     case 'ashraeClearSky':
       validateMonthly('weather.tauB', weather.tauB, 0, TAU_B_MAX, true);
       validateMonthly('weather.tauD', weather.tauD, 0, TAU_D_MAX, true);
       if (weather.tauB.length !== weather.tauD.length) throw new SunpaneError('weather.tauD', weather.tauD, `must hold as many values as weather.tauB (${weather.tauB.length})`);
+      validateDesignTemperatures(weather);
       break;
     case 'ineichenClearSky':
       validateMonthly('weather.linkeTurbidity', weather.linkeTurbidity, LINKE_MIN, LINKE_MAX, false);
+      validateDesignTemperatures(weather);
       break;
-    case 'measured':
-      validateSeries('weather.dni', weather.dni, hours, year);
-      validateSeries('weather.dhi', weather.dhi, hours, year);
+    case 'measured': {
+      const n = validateSeries('weather.dni', weather.dni, year);
+      if (validateSeries('weather.dhi', weather.dhi, year) !== n) throw new SunpaneError('weather.dhi', `${(weather.dhi as ArrayLike<number>).length} rows`, `must hold as many rows as weather.dni (${n})`);
+      validateDryBulbSeries(weather.dryBulb, n, year);
       break;
+    }
     case 'globalHorizontal':
-      validateSeries('weather.ghi', weather.ghi, hours, year);
+      validateDryBulbSeries(weather.dryBulb, validateSeries('weather.ghi', weather.ghi, year), year);
       break;
   }
+}
+
+function validateDryBulbSeries(values: unknown, rows: number, year: number): void {
+  if (values === undefined) return;
+  if (validateSeries('weather.dryBulb', values, year, DRY_BULB_MIN, DRY_BULB_MAX, '°C') !== rows) {
+    throw new SunpaneError('weather.dryBulb', `${(values as ArrayLike<number>).length} rows`, `must hold as many rows as the irradiance series (${rows})`);
+  }
+}
+
+function validateDesignTemperatures(weather: { dryBulbMax?: number[]; dailyRange?: number[] }): void {
+  if (weather.dryBulbMax !== undefined) validateMonthly('weather.dryBulbMax', weather.dryBulbMax, DRY_BULB_MIN, DRY_BULB_MAX, false);
+  if (weather.dailyRange !== undefined) validateMonthly('weather.dailyRange', weather.dailyRange, 0, DAILY_RANGE_MAX, false);
+  if ((weather.dryBulbMax === undefined) !== (weather.dailyRange === undefined)) {
+    const missing = weather.dryBulbMax === undefined ? 'weather.dryBulbMax' : 'weather.dailyRange';
+    throw new SunpaneError(missing, undefined, 'must be given with the other: the design-day dry-bulb needs its highest value and its daily range');
+  }
+}
+
+/** Where a window's outdoor dry-bulb comes from, or undefined when it has none. */
+export function outdoorTemperatureSource(weather: Weather): 'series' | 'designDay' | undefined {
+  if (weather.kind === 'measured' || weather.kind === 'globalHorizontal') return weather.dryBulb !== undefined ? 'series' : undefined;
+  return weather.dryBulbMax !== undefined ? 'designDay' : undefined;
 }
 
 /**
@@ -128,13 +175,32 @@ export function validateWindowSpec(spec: WindowSpec): WindowSpec {
   validateGlazing(spec.glazing);
   validateShading(spec.shading, spec.width, spec.height, spec.surfaceTilt);
   requireRange('groundAlbedo', spec.groundAlbedo, 0, 1);
-  if (!SKY_MODELS.includes(spec.skyModel)) throw new SunpaneError('skyModel', spec.skyModel, `must be one of ${SKY_MODELS.map((m) => `"${m}"`).join(', ')}`);
+  if (spec.skyModel !== undefined && !SKY_MODELS.includes(spec.skyModel)) throw new SunpaneError('skyModel', spec.skyModel, `must be one of ${SKY_MODELS.map((m) => `"${m}"`).join(', ')}`);
   const year = requireYear(spec.year, 'year');
   validateWeather(spec.weather, year);
+  optionalRange('indoorTemperature', spec.indoorTemperature, INDOOR_TEMPERATURE_MIN, INDOOR_TEMPERATURE_MAX, '°C');
+  if (spec.glazing.uValue !== undefined) {
+    if (spec.indoorTemperature === undefined) throw new SunpaneError('indoorTemperature', undefined, `must be given with glazing.uValue: the conduction gain needs the indoor temperature, from ${INDOOR_TEMPERATURE_MIN} to ${INDOOR_TEMPERATURE_MAX} °C`);
+    if (outdoorTemperatureSource(spec.weather) === undefined) {
+      const field = spec.weather.kind === 'measured' || spec.weather.kind === 'globalHorizontal' ? 'weather.dryBulb' : 'weather.dryBulbMax';
+      throw new SunpaneError(field, undefined, 'must be given with glazing.uValue: the conduction gain needs the outdoor dry-bulb (an hourly series, or on clear design days the highest dry-bulb and the daily range)');
+    }
+  }
   return spec;
+}
+
+/** The sky model of a window: as given, else `ashraeClearDay` on τb/τd clear skies and `perez1990` otherwise. */
+export function skyModelOf(spec: WindowSpec): SkyModel {
+  return spec.skyModel ?? (spec.weather.kind === 'ashraeClearSky' ? 'ashraeClearDay' : 'perez1990');
 }
 
 /** The radiant fraction of a glazing's gain, default applied. */
 export function radiantFractionOf(glazing: Glazing): number {
   return glazing.radiantFraction ?? DEFAULT_RADIANT_FRACTION;
+}
+
+/** Radiant fractions of the beam, diffuse and conduction gains, defaults applied. */
+export function radiantFractionsOf(glazing: Glazing): { beam: number; diffuse: number; conduction: number } {
+  const both = radiantFractionOf(glazing);
+  return { beam: glazing.radiantFractionBeam ?? both, diffuse: glazing.radiantFractionDiffuse ?? both, conduction: glazing.radiantFractionConduction ?? DEFAULT_CONDUCTION_RADIANT_FRACTION };
 }

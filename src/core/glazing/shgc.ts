@@ -2,15 +2,17 @@
  * Angle-dependent solar heat gain coefficient (SHGC) of a window's glazing, its hemispherical
  * (diffuse) value, the interior attenuation coefficient and the glass area.
  *
- * Two sources of the angular shape:
- * - physical: uncoated panes by Fresnel reflection and absorption ({@link shgcAtAngle});
- * - the user's table of SHGC by incidence angle ({@link shgcFromTable}), interpolated shape-
- *   preservingly (Fritsch & Carlson 1980).
+ * Three sources of the angular shape, chosen by the glazing type:
+ * - `clear` / `tinted`: uncoated panes by Fresnel reflection and absorption ({@link shgcAtAngle});
+ * - `coated`: low-e and spectrally selective units by Karlsson & Roos (2000) ({@link karlssonRoosModel});
+ * - `table`: the user's table of SHGC by incidence angle ({@link shgcFromTable}), interpolated
+ *   shape-preservingly (Fritsch & Carlson 1980).
  * SHGC at an incidence of 90° or more (sun behind the glass) is 0.
  */
 import { SunpaneError, requireRange, hemisphericalAverage, type MonotoneCubic, monotoneCubic } from '../common';
 import { paneExtinctionFor, paneStackTransmittance } from './fresnel';
-import type { AngleTable, Glazing } from './types';
+import { KR_TYPE_PARAMETER_MAX, KR_TYPE_PARAMETER_MIN, karlssonRoosModel } from './karlssonRoos';
+import type { AngleTable, Glazing, GlazingType, ShgcBasis } from './types';
 
 /** Panes accepted by the physical model. */
 export const PANES_MIN = 1;
@@ -43,6 +45,81 @@ function requirePanes(argument: string, value: unknown): number {
 
 function requireIncidence(value: unknown, argument = 'incidence'): number {
   return requireRange(argument, value, 0, 180, '°');
+}
+
+/** The glazing types accepted, in the order messages list them. */
+export const GLAZING_TYPES: readonly GlazingType[] = Object.freeze(['clear', 'tinted', 'coated', 'table'] as GlazingType[]);
+/** The SHGC bases accepted. */
+export const SHGC_BASES: readonly ShgcBasis[] = Object.freeze(['centreOfGlass', 'wholeWindow'] as ShgcBasis[]);
+
+/**
+ * Checks a glazing type; throws naming `argument` and listing the accepted types.
+ * @param value - the type as given
+ * @param argument - the name for messages
+ */
+export function requireGlazingType(value: unknown, argument = 'glazingType'): GlazingType {
+  if (!GLAZING_TYPES.includes(value as GlazingType)) throw new SunpaneError(argument, value, `must be one of ${GLAZING_TYPES.map((t) => `"${t}"`).join(', ')}`);
+  return value as GlazingType;
+}
+
+/** Checks an SHGC basis; throws naming `argument` and listing the accepted ones. */
+export function requireShgcBasis(value: unknown, argument = 'shgcBasis'): ShgcBasis {
+  if (!SHGC_BASES.includes(value as ShgcBasis)) throw new SunpaneError(argument, value, `must be one of ${SHGC_BASES.map((t) => `"${t}"`).join(', ')}`);
+  return value as ShgcBasis;
+}
+
+/** The glazing's type with its default applied: `table` with an angle table, else `clear`. Errors name `glazing.type`. */
+export function glazingTypeOf(glazing: Glazing): GlazingType {
+  if (glazing.type === undefined) return glazing.angleTable !== undefined ? 'table' : 'clear';
+  return requireGlazingType(glazing.type, 'glazing.type');
+}
+
+/** The glazing's SHGC basis, default `centreOfGlass`. Errors name `glazing.shgcBasis`. */
+export function shgcBasisOf(glazing: Glazing): ShgcBasis {
+  return glazing.shgcBasis === undefined ? 'centreOfGlass' : requireShgcBasis(glazing.shgcBasis, 'glazing.shgcBasis');
+}
+
+/** Checks a Karlsson–Roos glazing-type parameter q, 1…10. */
+export function requireTypeParameter(value: unknown, argument = 'glazingTypeParameter'): number {
+  if (value === undefined || value === null) {
+    throw new SunpaneError(argument, value, `must be given for a coated unit: the glazing-type parameter q of Karlsson & Roos (2000), from ${KR_TYPE_PARAMETER_MIN} to ${KR_TYPE_PARAMETER_MAX} (larger keeps the SHGC up to higher angles)`);
+  }
+  return requireRange(argument, value, KR_TYPE_PARAMETER_MIN, KR_TYPE_PARAMETER_MAX);
+}
+
+/**
+ * SHGC at an incidence angle for a glazing type given by its name.
+ *
+ * @param shgcNormal - SHGC at normal incidence [-], 0…1
+ * @param panes - number of panes, 1…4
+ * @param incidence - incidence angle [°], 0…180; 90 or more gives 0
+ * @param type - `clear` or `tinted` (Fresnel, {@link shgcAtAngle}) or `coated` (Karlsson & Roos 2000)
+ * @param typeParameter - q for `coated`, 1…10 (ignored otherwise)
+ * @returns SHGC at the angle [-], 0…shgcNormal
+ * @throws SunpaneError naming `glazingType` (listing the accepted types; `table` needs a table, so
+ *   it is refused here) or `glazingTypeParameter`
+ */
+export function shgcAtAngleOfType(shgcNormal: number, panes: number, incidence: number, type: string, typeParameter?: number): number {
+  const t = requireGlazingType(type);
+  if (t === 'table') throw new SunpaneError('glazingType', type, 'must be "clear", "tinted" or "coated" here (a table goes to the lookup functions)');
+  const s = requireShgc('shgcNormal', shgcNormal);
+  const n = requirePanes('panes', panes);
+  const theta = requireIncidence(incidence);
+  if (t !== 'coated') return physicalModel(s, n)(theta);
+  const q = requireTypeParameter(typeParameter);
+  return s * karlssonRoosModel(n, q)(theta);
+}
+
+/** Diffuse (hemispherical) SHGC for a glazing type given by its name; see {@link shgcAtAngleOfType}. */
+export function diffuseShgcOfType(shgcNormal: number, panes: number, type: string, typeParameter?: number): number {
+  const t = requireGlazingType(type);
+  if (t === 'table') throw new SunpaneError('glazingType', type, 'must be "clear", "tinted" or "coated" here (a table goes to the lookup functions)');
+  const s = requireShgc('shgcNormal', shgcNormal);
+  const n = requirePanes('panes', panes);
+  if (t !== 'coated') return hemisphericalAverage(physicalModel(s, n));
+  const q = requireTypeParameter(typeParameter);
+  const m = karlssonRoosModel(n, q);
+  return hemisphericalAverage((theta) => s * m(theta));
 }
 
 /** The physical angular model: SHGC(θ) = SHGCn · T(θ) / T(0) with K·L fitted so T(0) = SHGCn. */
@@ -176,7 +253,9 @@ export function shgcCurve(glazing: Glazing): ShgcCurve {
   let lookup: Float64Array;
   let model: (incidence: number) => number;
   let diffuse: number;
-  if (glazing.angleTable !== undefined) {
+  const type = glazingTypeOf(glazing);
+  if (type === 'table') {
+    if (glazing.angleTable === undefined) throw new SunpaneError('glazing.angleTable', undefined, 'must be given for glazing type "table": a table of angles and SHGC values');
     const { model: m, knots } = tableModel(requireAngleTable(glazing.angleTable, 'glazing.angleTable'));
     model = m;
     diffuse = hemisphericalAverage(m, knots);
@@ -184,13 +263,15 @@ export function shgcCurve(glazing: Glazing): ShgcCurve {
   } else {
     const s = requireShgc('glazing.shgc', glazing.shgc);
     const n = requirePanes('glazing.panes', glazing.panes);
-    // The physical model depends on these two numbers only: its lookup table and diffuse value are
-    // kept (a few recent glazings), so a window worked out again (e.g. its year, once per
-    // recalculation) does not redo the Fresnel integration or refill the table. Same values.
-    const key = `${s}|${n}`;
+    const q = type === 'coated' ? requireTypeParameter(glazing.typeParameter, 'glazing.typeParameter') : 0;
+    // The models depend on these numbers only: their lookup table and diffuse value are kept (a
+    // few recent glazings), so a window worked out again (e.g. its year, once per recalculation)
+    // does not redo the Fresnel integration or refill the table. Same values.
+    const key = `${type === 'coated' ? `kr${q}` : 'fresnel'}|${s}|${n}`;
     let kept = PHYSICAL_CURVES.get(key);
     if (kept === undefined) {
-      const m = physicalModel(s, n);
+      const kr = type === 'coated' ? karlssonRoosModel(n, q) : undefined;
+      const m = kr !== undefined ? (theta: number) => s * kr(theta) : physicalModel(s, n);
       kept = { model: m, lookup: emptyLookup(m), diffuse: hemisphericalAverage(m) };
       if (PHYSICAL_CURVES.size >= PHYSICAL_CURVES_KEPT) PHYSICAL_CURVES.delete(PHYSICAL_CURVES.keys().next().value as string);
       PHYSICAL_CURVES.set(key, kept);
@@ -226,20 +307,46 @@ function emptyLookup(model: (incidence: number) => number): Float64Array {
 
 /** How many physical-model curves {@link shgcCurve} keeps (the oldest goes first). */
 const PHYSICAL_CURVES_KEPT = 16;
-/** Physical-model curves by "shgc|panes": the model, its 0.1° table (filled as used) and diffuse SHGC. */
+/** Model curves by "model|shgc|panes": the model, its 0.1° table (filled as used) and diffuse SHGC. */
 const PHYSICAL_CURVES = new Map<string, { model: (incidence: number) => number; lookup: Float64Array; diffuse: number }>();
 
 /**
- * The interior attenuation coefficient of a glazing (blinds, curtains): a multiplier on the gain.
+ * The interior attenuation coefficients of a glazing (blinds, curtains) for the beam and for diffuse
+ * light: multipliers on those parts of the gain.
  *
- * @param glazing - its `interiorAttenuation`, 0…1, or none
- * @returns the coefficient [-], 0…1; 1 (no interior shading) when not given. Errors name
- * `glazing.interiorAttenuation`.
- * @remarks Gain with interior shading = gain of the bare glazing × IAC (ASHRAE Handbook—Fundamentals
- * (2013) ch. 15, the IAC definition; from memory).
+ * @param glazing - its `interiorAttenuationBeam` / `interiorAttenuationDiffuse`, each 0…1, or
+ *   `interiorAttenuation` for both, or none
+ * @returns `{ beam, diffuse, shaded }`: the coefficients [-], 0…1 (1 = no interior shading), and
+ *   whether an interior shade is present (either coefficient below 1). Errors name the field.
+ * @remarks Gain with interior shading = gain of the bare glazing × IAC, the beam and diffuse parts
+ * each with their own coefficient (ASHRAE Handbook—Fundamentals (2013) ch. 15, the IAC definition;
+ * from memory).
  */
+export function interiorAttenuationsOf(glazing: Glazing): { beam: number; diffuse: number; shaded: boolean } {
+  const both = glazing.interiorAttenuation === undefined ? 1 : requireRange('glazing.interiorAttenuation', glazing.interiorAttenuation, 0, 1);
+  const beam = glazing.interiorAttenuationBeam === undefined ? both : requireRange('glazing.interiorAttenuationBeam', glazing.interiorAttenuationBeam, 0, 1);
+  const diffuse = glazing.interiorAttenuationDiffuse === undefined ? both : requireRange('glazing.interiorAttenuationDiffuse', glazing.interiorAttenuationDiffuse, 0, 1);
+  return { beam, diffuse, shaded: beam < 1 || diffuse < 1 };
+}
+
+/** The interior attenuation coefficient for the beam ({@link interiorAttenuationsOf}). */
 export function interiorAttenuationOf(glazing: Glazing): number {
-  return glazing.interiorAttenuation === undefined ? 1 : requireRange('glazing.interiorAttenuation', glazing.interiorAttenuation, 0, 1);
+  return interiorAttenuationsOf(glazing).beam;
+}
+
+/**
+ * The area the SHGC applies to: the glass area for a centre-of-glass SHGC, the whole rough opening
+ * for a whole-window SHGC (the frame's share is then already in the rating and not subtracted again).
+ *
+ * @param width - rough-opening width [m], above 0
+ * @param height - rough-opening height [m], above 0
+ * @param frameFraction - frame share of the rough opening [-], 0 up to (not including) 1
+ * @param basis - `centreOfGlass` or `wholeWindow`
+ * @returns area [m²]
+ */
+export function solarArea(width: number, height: number, frameFraction: number, basis: ShgcBasis): number {
+  const glass = glassArea(width, height, frameFraction);
+  return basis === 'wholeWindow' ? width * height : glass;
 }
 
 /**

@@ -4,12 +4,18 @@
  * series and its peak.
  */
 import { type DesignDayGainMonth, type DesignDayGainOptions, designDayGains, peakOfDay, type WindowSpec } from '../gain';
-import { coolingLoad, requireRadiantTimeFactors } from './rts';
+import { requireRadiantTimeFactors } from './rts';
+import { type RoomSeries, windowCoolingLoad } from './windowLoad';
 
 /** Options of {@link designDayPeaks}. */
 export interface DesignDayOptions extends DesignDayGainOptions {
-  /** Radiant time factors r₀…r₂₃ (sum 1 ± 0.01): when given, the cooling load is worked out too. */
+  /**
+   * One series r₀…r₂₃ (sum 1 ± 0.01) used as both the solar and the non-solar series: when given,
+   * the cooling load is worked out too.
+   */
   factors?: ArrayLike<number>;
+  /** The room's solar and non-solar series (instead of `factors`). */
+  room?: RoomSeries;
 }
 
 /** One month's design day, with its cooling load when factors were given. */
@@ -29,16 +35,20 @@ export interface DesignDayMonth extends DesignDayGainMonth {
  * @param options - day of the month (1…28, default 21), radiant time factors, clear-sky weather
  * @returns 12 months, January first; a month whose design day has no sun on the window has peak 0
  *   at the first hour
- * @remarks Cooling load Q_θ = (1 − f_r) q_θ + Σ r_i f_r q_{θ−i} over the periodic day (Spitler,
- *   Fisher & Pedersen 1997, ASHRAE Trans. 103(2)) with f_r the glazing's radiant fraction.
+ * @remarks Cooling load by the radiant time series as published ({@link windowCoolingLoad}): beam
+ *   through the solar series (non-solar with an interior shade), diffuse and conduction through the
+ *   non-solar series, each with its radiant fraction, over the periodic day (Spitler, Fisher &
+ *   Pedersen 1997, ASHRAE Trans. 103(2)).
  * @throws SunpaneError naming `day`, `factors` or `weather.kind` / `clearSky.kind`
  */
 export function designDayPeaks(spec: WindowSpec, options: DesignDayOptions = {}): DesignDayMonth[] {
   const factors = options.factors !== undefined ? requireRadiantTimeFactors(options.factors) : undefined;
+  const room: RoomSeries | undefined = options.room ?? (factors ? { solar: factors, nonSolar: factors } : undefined);
   const { months, window } = designDayGains(spec, options);
-  if (!factors) return months;
+  if (!room) return months;
+  const fractions = { beam: window.radiantFraction, diffuse: window.radiantFractionDiffuse, conduction: window.radiantFractionConduction };
   return months.map((m): DesignDayMonth => {
-    const load = Array.from(coolingLoad(m.hourlyGain, factors, window.radiantFraction));
+    const load = Array.from(windowCoolingLoad({ beam: m.hourlyBeam, diffuse: m.hourlyDiffuse, conduction: m.hourlyConduction }, room, fractions, window.interiorShade).total);
     const lp = peakOfDay(load);
     return { ...m, coolingLoad: load, peakLoadHour: lp.index + 1, peakLoad: lp.value };
   });

@@ -98,7 +98,9 @@ export function ashraeClearSky(sunAltitude: number, dayOfYear: number, tauB: num
  * p the standard-atmosphere pressure at the elevation ({@link standardPressure}), as the formulation
  * is meant to be air-mass independent (from memory: with the relative air mass a high site would
  * get less global irradiance at low sun than a sea-level one, which is unphysical); I0 is the
- * extraterrestrial irradiance by Spencer (1971).
+ * extraterrestrial irradiance by Spencer (1971). The direct normal is also held at or below I0:
+ * the beam coefficient b = 0.664 + 0.163/fh1 exceeds 1 above about 1,900 m, and with the sun high
+ * above about 6,000 m the formula's beam would otherwise exceed the extraterrestrial value.
  */
 export function ineichenPerezClearSky(sunAltitude: number, dayOfYear: number, linkeTurbidity: number, elevation: number): ClearSky {
   const altitude = requireRange('sunAltitude', sunAltitude, -90, 90, '°');
@@ -118,7 +120,9 @@ export function ineichenPerezClearSky(sunAltitude: number, dayOfYear: number, li
   const b = 0.664 + 0.163 / fh1;
   const dniModel = b * i0 * exp(-0.09 * m * (tl - 1));
   const dniLimit = ghiPerCosZ * (1 - (0.1 - 0.2 * exp(-tl)) / (0.1 + 0.882 / fh1));
-  const dni = Math.max(0, min(dniModel, dniLimit));
+  // Never above the extraterrestrial value: at high sites (fh1 small) b exceeds 1 and the model's
+  // beam would pass I0 with the sun high (above about 6,000 m), which no atmosphere allows.
+  const dni = Math.max(0, min(dniModel, dniLimit, i0));
   const dhi = Math.max(0, ghi - dni * cosZ);
   return { dni, dhi, ghi };
 }

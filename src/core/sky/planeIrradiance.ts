@@ -7,15 +7,19 @@ import { RAD, SunpaneError, requireRange } from '../common';
 import { extraterrestrialSpencer, requireDayOfYear } from './extraterrestrial';
 import { PEREZ_1990_COMPOSITE, type PerezParts, perezPartsKernel } from './perez1990';
 import { incidenceAngle } from '../sun';
-import { COS_85, requireIrradiance } from './transposition';
+import { COS_85, requireIrradiance, verticalDiffuseRatioFromCosine } from './transposition';
 
 const { cos, sin } = Math;
 
-/** A sky-diffuse transposition model: isotropic, Hay–Davies (1980) or Perez et al. (1990). */
-export type SkyModel = 'isotropic' | 'hayDavies' | 'perez1990';
+/**
+ * A sky-diffuse transposition model: isotropic, Hay–Davies (1980), Perez et al. (1990), or the
+ * handbook's clear-day procedure (`ashraeClearDay`: the vertical-surface diffuse ratio Y and its
+ * tilted-surface form, meant for the ASHRAE τb/τd clear sky of design days).
+ */
+export type SkyModel = 'isotropic' | 'hayDavies' | 'perez1990' | 'ashraeClearDay';
 
 /** The sky-diffuse models {@link planeIrradiance} accepts. */
-export const SKY_MODELS: readonly SkyModel[] = Object.freeze(['isotropic', 'hayDavies', 'perez1990'] as SkyModel[]);
+export const SKY_MODELS: readonly SkyModel[] = Object.freeze(['isotropic', 'hayDavies', 'perez1990', 'ashraeClearDay'] as SkyModel[]);
 
 /** Inputs of {@link planeIrradiance}; each field is checked and an error names it. */
 export interface PlaneIrradianceInput {
@@ -64,7 +68,9 @@ export interface PlaneIrradiance {
  * spread isotropically by every model (no circumsolar disc); with the sun behind the plane
  * (incidence > 90°) the beam and circumsolar parts are 0.
  * @remarks beam = DNI max(0, cos θ); GHI = DNI sin β + DHI (sun up); ground = GHI ρg (1 − cos Σ)/2;
- * sky by {@link skyDiffuseIsotropic}, {@link skyDiffuseHayDavies} or {@link skyDiffusePerez1990},
+ * sky by {@link skyDiffuseIsotropic}, {@link skyDiffuseHayDavies}, {@link skyDiffusePerez1990} or the
+ * handbook's clear-day form Ed·(Y sin Σ + cos Σ) for Σ ≤ 90°, Ed·Y·sin Σ beyond
+ * ({@link skyDiffuseAshraeClearDay}; with the sun down it falls back to isotropic),
  * with E0n by Spencer (1971) and m by Kasten & Young (1989), then × skyViewFactor. (Duffie & Beckman,
  * Solar Engineering of Thermal Processes, 4th ed., §2.15–2.16.)
  */
@@ -83,7 +89,7 @@ export function planeIrradiance(input: PlaneIrradianceInput): PlaneIrradiance {
   const incidence = incidenceAngle(altitude, sunAzimuth, tilt, surfaceAzimuth);
   const plane = planeOf(tilt, albedo, model, svf);
   const out = { beam: 0, sky: 0, ground: 0, total: 0, incidence };
-  const e0 = model === 'isotropic' ? 0 : extraterrestrialSpencer(dayOfYear);
+  const e0 = model === 'isotropic' || model === 'ashraeClearDay' ? 0 : extraterrestrialSpencer(dayOfYear);
   planeKernel(out, plane, dni, dhi, altitude, sin(altitude * RAD), cos(incidence * RAD), e0);
   return out;
 }
@@ -101,8 +107,10 @@ interface PlaneConstants {
   tilt: number;
   /** (1 + cos Σ) / 2: isotropic sky view of the plane. */
   isotropicView: number;
-  /** sin Σ (Perez horizon band). */
+  /** sin Σ (Perez horizon band, clear-day Y term). */
   sinTilt: number;
+  /** cos Σ, floored at 0 (the clear-day form's horizontal-sky term is dropped for Σ > 90°). */
+  cosTiltUp: number;
   /** 1 − cos Σ (ground view, times 2). */
   oneMinusCosTilt: number;
   albedo: number;
@@ -119,6 +127,7 @@ function planeOf(tilt: number, albedo: number, model: SkyModel, skyViewFactor: n
     tilt,
     isotropicView: (1 + cosTilt) / 2,
     sinTilt: sin(tiltRad),
+    cosTiltUp: cosTilt > 0 ? cosTilt : 0,
     oneMinusCosTilt: 1 - cosTilt,
     albedo,
     skyViewFactor,
@@ -147,6 +156,8 @@ function planeKernel(out: PlaneParts, p: PlaneConstants, dni: number, dhi: numbe
   let sky: number;
   if (!sunUp || p.model === 'isotropic') {
     sky = dhi * p.isotropicView; // D&B Eq. 2.15.1
+  } else if (p.model === 'ashraeClearDay') {
+    sky = dhi * (verticalDiffuseRatioFromCosine(cosIncidence) * p.sinTilt + p.cosTiltUp); // ASHRAE ch. 14 clear-day tilted form
   } else if (p.model === 'hayDavies') {
     const ai = dni / dniExtra < 1 ? dni / dniExtra : 1;
     const rb = (cosIncidence > 0 ? cosIncidence : 0) / (sinAltitude > COS_85 ? sinAltitude : COS_85);
@@ -200,7 +211,7 @@ export function preparePlane(input: PlaneSurfaceInput): PreparedPlane {
   const svf = input.skyViewFactor === undefined ? 1 : requireRange('skyViewFactor', input.skyViewFactor, 0, 1);
   const plane = planeOf(tilt, albedo, model, svf);
   return {
-    needsDniExtra: model !== 'isotropic',
+    needsDniExtra: model !== 'isotropic' && model !== 'ashraeClearDay',
     irradiance: (out, dni, dhi, sunAltitude, sinAltitude, cosIncidence, dniExtra) => planeKernel(out, plane, dni, dhi, sunAltitude, sinAltitude, cosIncidence, dniExtra),
   };
 }

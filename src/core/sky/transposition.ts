@@ -99,7 +99,11 @@ export function skyDiffuseHayDavies(dhi: number, dni: number, dniExtra: number, 
  */
 export function ashraeVerticalDiffuseRatio(incidence: number): number {
   const theta = requireRange('incidence', incidence, 0, 180, '°');
-  const c = cos(theta * RAD);
+  return verticalDiffuseRatioFromCosine(cos(theta * RAD));
+}
+
+/** {@link ashraeVerticalDiffuseRatio} from cos θ (unchecked; the hourly kernels have the cosine). */
+export function verticalDiffuseRatioFromCosine(c: number): number {
   const y = 0.55 + 0.437 * c + 0.313 * c * c;
   return y > 0.45 ? y : 0.45;
 }
@@ -112,7 +116,8 @@ export function ashraeVerticalDiffuseRatio(incidence: number): number {
  * @param surfaceTilt - surface tilt [°], 0…180
  * @returns sky diffuse irradiance on the plane [W/m²], ≥ 0
  * @remarks Ed,T = Ed (Y sin Σ + cos Σ) for Σ ≤ 90°, Ed Y sin Σ for Σ > 90° — ASHRAE
- * Handbook—Fundamentals (2013) ch. 14, Eqs. 29–30 (from memory). Y by {@link ashraeVerticalDiffuseRatio}.
+ * Handbook—Fundamentals (2013) ch. 14, Eqs. 29–30 (from memory). The same form is the sky model
+ * `ashraeClearDay` of {@link planeIrradiance}. Y by {@link ashraeVerticalDiffuseRatio}.
  */
 export function skyDiffuseAshraeClearDay(dhi: number, incidence: number, surfaceTilt: number): number {
   const d = requireIrradiance('dhi', dhi);

@@ -1,6 +1,8 @@
 /**
- * A site: where a window is on the Earth, its clock offset and the air the sun's light crosses.
+ * A site: where a window is on the Earth, its clock (standard-time offset and daylight-saving rule)
+ * and the air the sun's light crosses.
  */
+import type { DaylightSavingRule } from '../time';
 
 /** Where the window is. */
 export interface Site {
@@ -16,4 +18,6 @@ export interface Site {
   pressure?: number;
   /** Mean air temperature [°C] for refraction; default 12. */
   temperature?: number;
+  /** The local clock's daylight-saving rule; none: local standard time all year. */
+  daylightSaving?: DaylightSavingRule;
 }

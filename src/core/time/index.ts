@@ -1,9 +1,11 @@
 /**
  * Time: spreadsheet serial numbers (1900 date system, local standard time), UTC instants, calendar
- * dates, Julian days and ΔT. Every calendar and serial calculation of the project lives here.
+ * dates, Julian days, ΔT, daylight-saving rules, the 1904 date system and the fitting of a
+ * typical year's rows to a calendar year. Every calendar and serial calculation of the project lives here.
  * Imports: common.
  *
  * This index is the folder's only public door: code outside the folder imports from here.
  */
-export { civilToSerial, dayOfYear, daysInMonth, formatSerialIso, hoursInYear, julianDay, MAX_SERIAL_EXCLUSIVE, MIN_SERIAL, parseIsoLocal, requireSerial, requireUtcOffset, requireYear, serialToCivil, serialToUtcMs, UTC_OFFSET_MAX, UTC_OFFSET_MIN, utcMsToSerial } from './calendar';
+export { civilToSerial, dayOfYear, daysInMonth, formatSerialIso, hoursInYear, isLeapYear, julianDay, MAX_SERIAL_EXCLUSIVE, MIN_SERIAL, parseIsoLocal, requireSerial, requireUtcOffset, requireYear, serialToCivil, serialToUtcMs, UTC_OFFSET_MAX, UTC_OFFSET_MIN, utcMsToSerial } from './calendar';
+export { clockToStandard, DATE_1904_OFFSET, type DateSystem, type DaylightSavingRule, describeDaylightSaving, DST_SHIFT_MAX, fitYearOfHours, fromSerial1900, inDaylightSaving, requireDateSystem, requireDaylightSaving, standardToClock, toSerial1900, type YearFit, type YearFitRule } from './clock';
 export { deltaTAt } from './deltaT';

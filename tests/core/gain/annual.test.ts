@@ -38,12 +38,28 @@ describe('annual series', () => {
     expect(s.stampSerial[8759]).toBeCloseTo(civilToSerial(2027, 1, 1, 0), 9);
   });
 
-  test('a leap year has 8784 rows and its supplied series must be 8784 long', () => {
+  test('a leap year has 8784 rows; a typical year of 8760 rows repeats 28 February for 29 February, and other row counts are refused', () => {
     const spec = baseSpec({ year: 2028 });
     expect(annualSeries(spec).hours).toBe(8784);
-    const bad = baseSpec({ year: 2028, weather: { kind: 'measured', dni: new Float64Array(8760), dhi: new Float64Array(8760) } });
+    const dni = Float64Array.from({ length: 8760 }, (_, i) => (i % 24 === 12 ? 500 + Math.floor(i / 24) : 0));
+    const typical = annualSeries(baseSpec({ year: 2028, weather: { kind: 'measured', dni, dhi: new Float64Array(8760) } }));
+    expect(typical.hours).toBe(8784);
+    expect(typical.yearFit).toMatch(/29 February repeats 28 February/);
+    expect(typical.dni[58 * 24 + 12]).toBe(500 + 58); // 28 February, day index 58
+    expect(typical.dni[59 * 24 + 12]).toBe(500 + 58); // 29 February: the same row again
+    expect(typical.dni[60 * 24 + 12]).toBe(500 + 59); // 1 March: the file's own 1 March
+    const bad = baseSpec({ year: 2028, weather: { kind: 'measured', dni: new Float64Array(8000), dhi: new Float64Array(8000) } });
     expect(() => annualSeries(bad)).toThrow(SunpaneError);
-    expect(() => annualSeries(bad)).toThrow(/^weather\.dni = a list of 8760 is not allowed: must hold one value per hour of 2028: 8784 values/);
+    expect(() => annualSeries(bad)).toThrow(/^weather\.dni = "8000 rows" is not allowed: must hold one value per hour of the year: 8784 for 2028/);
+  });
+
+  test('a leap-year file of 8784 rows for a common year drops its 29 February', () => {
+    const dni = Float64Array.from({ length: 8784 }, (_, i) => (i % 24 === 12 ? 500 + Math.floor(i / 24) : 0));
+    const s = annualSeries(baseSpec({ year: 2026, weather: { kind: 'measured', dni, dhi: new Float64Array(8784) } }));
+    expect(s.hours).toBe(8760);
+    expect(s.yearFit).toMatch(/29 February is dropped/);
+    expect(s.dni[58 * 24 + 12]).toBe(500 + 58);
+    expect(s.dni[59 * 24 + 12]).toBe(500 + 60); // 1 March takes the file's 1 March (day index 60)
   });
 
   test('agrees with the one-hour calculation at sampled hours (shaded window, Perez sky, clear sky)', () => {

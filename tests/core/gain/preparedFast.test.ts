@@ -389,7 +389,7 @@ describe('annual series hour by hour equals the checked functions at its own sun
         surfaceAzimuth: spec.surfaceAzimuth,
         groundAlbedo: spec.groundAlbedo,
         dayOfYear: Math.floor(i / 24) + 1,
-        skyModel: spec.skyModel,
+        skyModel: spec.skyModel ?? "perez1990",
         skyViewFactor: w.skyViewFactor,
       });
       const scale = s.dni[i] + s.dhi[i];

@@ -143,7 +143,8 @@ describe('window description validation', () => {
     expect(refusal({ ...s, surfaceTilt: 30, shading: { revealDepth: 0.1 } })).toBe('surfaceTilt');
     expect(refusal({ ...s, weather: { kind: 'ashraeClearSky', tauB: [0.4, 0.5], tauD: [2.3] } })).toBe('weather.tauB');
     expect(refusal({ ...s, weather: { kind: 'ashraeClearSky', tauB: new Array(12).fill(0.4).map((v, i) => (i === 3 ? 0 : v)), tauD: new Array(12).fill(2) } })).toBe('weather.tauB[3]');
-    expect(refusal({ ...s, weather: { kind: 'measured', dni: new Float64Array(8784), dhi: new Float64Array(8760) } })).toBe('weather.dni');
+    expect(refusal({ ...s, weather: { kind: 'measured', dni: new Float64Array(8000), dhi: new Float64Array(8760) } })).toBe('weather.dni');
+    expect(refusal({ ...s, weather: { kind: 'measured', dni: new Float64Array(8784), dhi: new Float64Array(8760) } })).toBe('weather.dhi');
     const dhi = new Float64Array(8760);
     dhi[17] = -5;
     expect(refusal({ ...s, weather: { kind: 'measured', dni: new Float64Array(8760), dhi } })).toBe('weather.dhi[17]');
@@ -155,7 +156,7 @@ describe('window description validation', () => {
   test('messages say the value and the allowed range', () => {
     const s = baseSpec();
     expect(() => validateWindowSpec({ ...s, glazing: { ...s.glazing, shgc: 1.3 } })).toThrow('glazing.shgc = 1.3 is not allowed: must be a number from 0 to 1');
-    expect(() => validateWindowSpec({ ...s, weather: { kind: 'measured', dni: new Float64Array(100), dhi: new Float64Array(8760) } })).toThrow(/^weather\.dni = a list of 100 is not allowed: must hold one value per hour of 2026: 8760 values/);
+    expect(() => validateWindowSpec({ ...s, weather: { kind: 'measured', dni: new Float64Array(100), dhi: new Float64Array(8760) } })).toThrow(/^weather\.dni = "100 rows" is not allowed: must hold one value per hour of the year: 8760 for 2026/);
   });
 
   test('a missing hour (NaN) in a measured series is accepted', () => {
