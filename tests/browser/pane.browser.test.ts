@@ -372,7 +372,7 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     await setField(page, 'year', String(YEAR));
     await page.click('#run-year');
     await waitForStatus(page, /ranges the form points at/);
-    expect(await page.textContent('#dniAddress-msg')).toBe(`weather.dni = a list of 100 is not allowed: must hold one value per hour of ${YEAR}: 8760 values`);
+    expect(await page.textContent('#dniAddress-msg')).toBe(`weather.dni = "100 rows" is not allowed: must hold one value per hour of the year: 8760 for ${YEAR} (a typical year of 8760 or a leap-year file of 8784 is also fitted)`);
     expect(await host.sheetNames(page)).toEqual(['Weather']);
     await page.screenshot({ path: path.join(ARTIFACTS, 'pane-bad-input.png'), fullPage: true });
     await page.close();
