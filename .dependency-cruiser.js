@@ -52,9 +52,9 @@ module.exports = {
     },
     {
       name: 'shared-layers-below-adapters',
-      comment: 'registry, demo, schedule and io sit on the core; they never import an adapter.',
+      comment: 'registry, demo, schedule, io and outputs sit on the core; they never import an adapter.',
       severity: 'error',
-      from: { path: '^src/(registry|demo|schedule|io)/' },
+      from: { path: '^src/(registry|demo|schedule|io|outputs)/' },
       to: { path: '^src/(functions|taskpane|cli)/' },
     },
     {
@@ -73,10 +73,17 @@ module.exports = {
     },
     {
       name: 'shared-layers-no-node',
-      comment: 'registry, demo, schedule and io also run in the add-in: no Node built-ins.',
+      comment: 'registry, demo, schedule, io and outputs also run in the add-in: no Node built-ins.',
       severity: 'error',
-      from: { path: '^src/(registry|demo|schedule|io|functions|taskpane)/' },
+      from: { path: '^src/(registry|demo|schedule|io|outputs|functions|taskpane)/' },
       to: { dependencyTypes: ['core'] },
+    },
+    {
+      name: 'outputs-on-nothing-but-core',
+      comment: 'What every output shares (hourly columns, caution, palette, formulas) depends on the core at most.',
+      severity: 'error',
+      from: { path: '^src/outputs/' },
+      to: { path: '^src/(registry|demo|schedule)/' },
     },
     {
       name: 'adapters-apart',

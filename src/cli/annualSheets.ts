@@ -1,67 +1,56 @@
 /**
- * One window's year as output: the hourly columns (for CSV and for a workbook sheet), the monthly
- * summary sheet with native SUM/MAX formulas, and the day × hour heat map of the gain.
+ * One window's year as output: the hourly columns (for CSV and for a workbook sheet, the same
+ * header words, order and units as the pane: src/outputs/hourlyColumns.ts), the monthly summary
+ * sheet whose months are formulas over the hourly table (the pane's formulas), with the month ×
+ * hour block of mean gain, and the day × hour heat map of the gain. Every sheet starts with its
+ * title and the caution.
  */
 import type { AnnualSeries, AnnualSummary } from '../core/gain';
 import { formatSerialIso } from '../core/time';
+import { HOURLY_COLUMNS, HOURLY_HEADERS, type HourlyKey, hourlyColumn } from '../outputs/hourlyColumns';
+import { monthHourMeanFormula, monthlyGainFormula, monthlySumFormula, tableColumnRef } from '../outputs/hourlyFormulas';
 import { csvLine, formatFixed } from './csv';
-import { type ExcelJS, NUMBER_FORMATS, type TableCell, type TableColumn, type TablePlacement, addColourScale, addDataTable, address, fitOnOnePage, freezeAt, serialToCellDate, setFormula, setLabel, styleHeader } from './workbook';
-
-/** One hourly output column: header, number format, CSV decimals and where the value comes from. */
-interface HourlyColumn extends TableColumn {
-  decimals: number;
-  value: (s: AnnualSeries, i: number) => number;
-}
+import { type ExcelJS, NUMBER_FORMATS, type TableCell, type TablePlacement, addColourScale, addDataTable, addSheetHeading, address, fitOnOnePage, freezeAt, serialToCellDate, setFormula, setLabel, styleHeader } from './workbook';
 
 /** Header of the stamp column (the hour's END, local standard time). */
-export const STAMP_HEADER = 'hour ending (local standard time)';
-
-/** The hourly columns, in order, after the stamp column. */
-export const HOURLY_COLUMNS: readonly HourlyColumn[] = [
-  { header: 'sun altitude [°]', numFmt: NUMBER_FORMATS.angle, decimals: 3, value: (s, i) => s.sunAltitude[i] },
-  { header: 'sun azimuth [°]', numFmt: NUMBER_FORMATS.angle, decimals: 3, value: (s, i) => s.sunAzimuth[i] },
-  { header: 'incidence [°]', numFmt: NUMBER_FORMATS.angle, decimals: 3, value: (s, i) => s.incidence[i] },
-  { header: 'profile angle [°]', numFmt: NUMBER_FORMATS.angle, decimals: 3, value: (s, i) => s.profileAngle[i] },
-  { header: 'sunlit fraction', numFmt: NUMBER_FORMATS.fraction, decimals: 4, value: (s, i) => s.sunlitFraction[i] },
-  { header: 'direct normal [W/m²]', numFmt: NUMBER_FORMATS.irradiance, decimals: 2, value: (s, i) => s.dni[i] },
-  { header: 'diffuse horizontal [W/m²]', numFmt: NUMBER_FORMATS.irradiance, decimals: 2, value: (s, i) => s.dhi[i] },
-  { header: 'beam on window [W/m²]', numFmt: NUMBER_FORMATS.irradiance, decimals: 2, value: (s, i) => s.beam[i] },
-  { header: 'sky diffuse on window [W/m²]', numFmt: NUMBER_FORMATS.irradiance, decimals: 2, value: (s, i) => s.sky[i] },
-  { header: 'ground reflected on window [W/m²]', numFmt: NUMBER_FORMATS.irradiance, decimals: 2, value: (s, i) => s.ground[i] },
-  { header: 'SHGC at angle', numFmt: NUMBER_FORMATS.shgc, decimals: 4, value: (s, i) => s.shgc[i] },
-  { header: 'gain [W]', numFmt: NUMBER_FORMATS.watts, decimals: 2, value: (s, i) => s.gain[i] },
-  { header: 'missing weather', numFmt: NUMBER_FORMATS.integer, decimals: 0, value: (s, i) => s.missing[i] },
-];
+export const STAMP_HEADER = hourlyColumn('stampSerial').header;
 
 /** The gain column's header (used by formulas that refer to it). */
-export const GAIN_HEADER = 'gain [W]';
+export const GAIN_HEADER = hourlyColumn('gain').header;
 
 /** Month names for summaries. */
 export const MONTHS = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'] as const;
 
-/** The hourly year as CSV text: a header line and one line per hour (stamp as ISO 8601 local). */
+const valueOf = (s: AnnualSeries, key: HourlyKey, i: number): number => (s[key] as ArrayLike<number>)[i];
+
+/** The hourly year as CSV text: the header line and one line per hour (stamp as ISO 8601 local). */
 export function hourlyCsv(series: AnnualSeries, onRow?: () => void): string {
-  const lines = [csvLine([STAMP_HEADER, ...HOURLY_COLUMNS.map((c) => c.header)])];
+  const lines = [csvLine([...HOURLY_HEADERS])];
+  const rest = HOURLY_COLUMNS.slice(1);
   for (let i = 0; i < series.hours; i++) {
-    lines.push(csvLine([formatSerialIso(series.stampSerial[i]), ...HOURLY_COLUMNS.map((c) => formatFixed(c.value(series, i), c.decimals))]));
+    lines.push(csvLine([formatSerialIso(series.stampSerial[i]), ...rest.map((c) => formatFixed(valueOf(series, c.key, i), c.csvDecimals))]));
     onRow?.();
   }
   return `${lines.join('\n')}\n`;
 }
 
 /**
- * Adds the hourly year as an Excel table on its own sheet, header frozen.
+ * Adds the hourly year as an Excel table on its own sheet, under the title and the caution; header
+ * row and stamp column frozen.
  * @returns the table's placement (for formulas on other sheets)
  */
-export function addHourlySheet(wb: ExcelJS.Workbook, sheet: string, tableName: string, series: AnnualSeries, onRow?: () => void): TablePlacement {
+export function addHourlySheet(wb: ExcelJS.Workbook, sheet: string, tableName: string, series: AnnualSeries, onRow?: () => void, title = `${series.name}: hourly solar gain, ${series.year}`): TablePlacement {
   const ws = wb.addWorksheet(sheet);
+  const top = addSheetHeading(ws, title, ['Rows are hour-ending, local standard time; the sun is taken at the middle of the hour.']);
   const rows: TableCell[][] = new Array(series.hours);
+  const rest = HOURLY_COLUMNS.slice(1);
   for (let i = 0; i < series.hours; i++) {
-    rows[i] = [serialToCellDate(series.stampSerial[i]), ...HOURLY_COLUMNS.map((c) => c.value(series, i))];
+    rows[i] = [serialToCellDate(series.stampSerial[i]), ...rest.map((c) => valueOf(series, c.key, i))];
     onRow?.();
   }
-  const placement = addDataTable(ws, tableName, { row: 1, column: 1 }, [{ header: STAMP_HEADER, numFmt: NUMBER_FORMATS.dateTime, width: 18 }, ...HOURLY_COLUMNS], rows);
-  freezeAt(ws, 2, 2);
+  const placement = addDataTable(ws, tableName, { row: top, column: 1 }, HOURLY_COLUMNS.map((c, k) => ({ header: c.header, numFmt: c.numFmt, width: k === 0 ? 18 : 13 })), rows);
+  ws.getRow(top).height = 45;
+  freezeAt(ws, top + 1, 2);
   return placement;
 }
 
@@ -73,6 +62,10 @@ export interface MonthlyCells {
   maxMonthKWh: { cell: string; expected: number };
   /** Address of the peak hour (MAX over the hourly gain column), when the hourly sheet exists. */
   peakW?: { cell: string; expected: number };
+  /** Each month's gain, a SUMIFS over the hourly table (when the hourly sheet exists). */
+  months: { cell: string; expected: number }[];
+  /** The month × hour block of mean gain [W], each a SUMPRODUCT over the hourly table. */
+  monthHour: { cell: string; expected: number }[];
 }
 
 /** Quotes a sheet name for a formula reference. */
@@ -81,45 +74,85 @@ export function sheetRef(sheet: string): string {
 }
 
 /**
- * Fills a sheet with the monthly summary of one window: a table of month, gain and missing hours, then the
- * annual total (SUM), the largest month (MAX) and — when the hourly sheet is given — the peak hour
- * (MAX over its gain column), all native formulas with cached results.
+ * Mean gain [W] for each month and hour ending 1…24, as the month × hour formulas work it out: rows
+ * whose mid-hour falls in the month and hour of day, summed, over the days of the month.
+ */
+export function monthHourMeans(series: AnnualSeries): number[][] {
+  const sums = Array.from({ length: 12 }, () => new Array<number>(24).fill(0));
+  for (let i = 0; i < series.hours; i++) {
+    const mid = new Date(Math.round((series.stampSerial[i] - 1 / 48 - 25_569) * 86_400_000));
+    sums[mid.getUTCMonth()][mid.getUTCHours()] += series.gain[i];
+  }
+  return sums.map((row, m) => row.map((x) => x / new Date(Date.UTC(series.year, m + 1, 0)).getUTCDate()));
+}
+
+/**
+ * Fills a sheet with the monthly summary of one window: under the title and the caution, a table
+ * of month, gain and missing hours — with the hourly sheet given, each a SUMIFS formula over the
+ * hourly table (the pane's formulas, src/outputs/hourlyFormulas.ts) — then the annual total (SUM),
+ * the largest month (MAX), the peak hour (MAX over the hourly gain column) and, beside them, the
+ * month × hour block of mean gain with our colour scale. Every formula carries its cached result.
  */
 export function addMonthlySheet(
   ws: ExcelJS.Worksheet,
   tableName: string,
   summary: AnnualSummary,
-  hourly?: { sheet: string; placement: TablePlacement },
+  hourly?: { sheet: string; placement: TablePlacement; series: AnnualSeries },
+  title = 'Solar gain by month',
 ): MonthlyCells {
   const sheet = ws.name;
+  const top = addSheetHeading(ws, title);
   const rows = MONTHS.map((m, k) => [m, summary.monthlyKWh[k], summary.monthlyMissingHours[k]]);
-  const t = addDataTable(
-    ws,
-    tableName,
-    { row: 1, column: 1 },
-    [{ header: 'month', width: 10 }, { header: 'gain [kWh]', numFmt: NUMBER_FORMATS.kwh, width: 14 }, { header: 'missing hours', numFmt: NUMBER_FORMATS.integer, width: 15 }],
-    rows,
-  );
-  freezeAt(ws, 2);
+  const gainHeader = 'Solar gain (kWh)';
+  const missingHeader = 'Weather missing (h)';
+  const t = addDataTable(ws, tableName, { row: top, column: 1 }, [{ header: 'Month', width: 10 }, { header: gainHeader, numFmt: NUMBER_FORMATS.kwh, width: 16 }, { header: missingHeader, numFmt: NUMBER_FORMATS.integer, width: 16 }], rows);
+  const cells: MonthlyCells = { annualKWh: { cell: '', expected: 0 }, maxMonthKWh: { cell: '', expected: 0 }, months: [], monthHour: [] };
+  const ref = hourly ? tableColumnRef(hourly.placement.name) : undefined;
+  if (hourly && ref) {
+    MONTHS.forEach((_, k) => {
+      const row = top + 1 + k;
+      setFormula(ws, address(row, 2), monthlyGainFormula(ref, hourly.series.year, k + 1), summary.monthlyKWh[k], NUMBER_FORMATS.kwh);
+      setFormula(ws, address(row, 3), monthlySumFormula(ref, 'missing', hourly.series.year, k + 1), summary.monthlyMissingHours[k], NUMBER_FORMATS.integer);
+      cells.months.push({ cell: `${sheet}!${address(row, 2)}`, expected: summary.monthlyKWh[k] });
+    });
+  }
+  freezeAt(ws, top + 1);
   const labelRow = t.lastRow + 2;
-  const gainRange = t.bodyRange('gain [kWh]');
+  const gainRange = t.bodyRange(gainHeader);
   const maxMonth = Math.max(...summary.monthlyKWh);
-  setLabel(ws, address(labelRow, 1), 'year');
+  setLabel(ws, address(labelRow, 1), 'Year');
   setFormula(ws, address(labelRow, 2), `SUM(${gainRange})`, summary.annualKWh, NUMBER_FORMATS.kwh);
-  setFormula(ws, address(labelRow, 3), `SUM(${t.bodyRange('missing hours')})`, summary.missingHours, NUMBER_FORMATS.integer);
-  setLabel(ws, address(labelRow + 1, 1), 'largest month');
+  setFormula(ws, address(labelRow, 3), `SUM(${t.bodyRange(missingHeader)})`, summary.missingHours, NUMBER_FORMATS.integer);
+  setLabel(ws, address(labelRow + 1, 1), 'Largest month');
   setFormula(ws, address(labelRow + 1, 2), `MAX(${gainRange})`, maxMonth, NUMBER_FORMATS.kwh);
-  const cells: MonthlyCells = {
-    annualKWh: { cell: `${sheet}!${address(labelRow, 2)}`, expected: summary.annualKWh },
-    maxMonthKWh: { cell: `${sheet}!${address(labelRow + 1, 2)}`, expected: maxMonth },
-  };
-  if (hourly) {
-    setLabel(ws, address(labelRow + 2, 1), 'peak hour [W]');
+  cells.annualKWh = { cell: `${sheet}!${address(labelRow, 2)}`, expected: summary.annualKWh };
+  cells.maxMonthKWh = { cell: `${sheet}!${address(labelRow + 1, 2)}`, expected: maxMonth };
+  if (hourly && ref) {
+    setLabel(ws, address(labelRow + 2, 1), 'Peak hour (W)');
     setFormula(ws, address(labelRow + 2, 2), `MAX(${sheetRef(hourly.sheet)}!${hourly.placement.bodyRange(GAIN_HEADER)})`, summary.peakW, NUMBER_FORMATS.watts);
     cells.peakW = { cell: `${sheet}!${address(labelRow + 2, 2)}`, expected: summary.peakW };
+
+    // The month × hour block, as in the pane.
+    const left = 5;
+    ws.getCell(top - 1, left).value = 'Mean solar gain (W) by month and hour ending';
+    ws.getCell(top - 1, left).font = { bold: true };
+    ws.getCell(top, left).value = 'Month';
+    for (let h = 1; h <= 24; h++) ws.getCell(top, left + h).value = h;
+    styleHeader(ws, top, left, left + 24);
+    const means = monthHourMeans(hourly.series);
+    MONTHS.forEach((m, k) => {
+      ws.getCell(top + 1 + k, left).value = m;
+      for (let h = 1; h <= 24; h++) {
+        const cell = address(top + 1 + k, left + h);
+        setFormula(ws, cell, monthHourMeanFormula(ref, hourly.series.year, k + 1, h), means[k][h - 1], NUMBER_FORMATS.watts);
+        cells.monthHour.push({ cell: `${sheet}!${cell}`, expected: means[k][h - 1] });
+      }
+    });
+    ws.getColumn(left).width = 8;
+    for (let h = 1; h <= 24; h++) ws.getColumn(left + h).width = 6;
+    addColourScale(ws, `${address(top + 1, left + 1)}:${address(top + 12, left + 24)}`);
   }
-  ws.getColumn(1).width = 16;
-  fitOnOnePage(ws, 'portrait');
+  fitOnOnePage(ws, 'landscape');
   return cells;
 }
 
@@ -129,10 +162,8 @@ export function addMonthlySheet(
  */
 export function addHeatMapSheet(wb: ExcelJS.Workbook, sheet: string, series: AnnualSeries, title: string): void {
   const ws = wb.addWorksheet(sheet);
-  ws.getCell('A1').value = title;
-  ws.getCell('A1').font = { bold: true, size: 12 };
-  const headerRow = 2;
-  ws.getCell(headerRow, 1).value = 'day';
+  const headerRow = addSheetHeading(ws, title);
+  ws.getCell(headerRow, 1).value = 'Day';
   for (let h = 1; h <= 24; h++) ws.getCell(headerRow, h + 1).value = h;
   styleHeader(ws, headerRow, 1, 25);
   const days = Math.floor(series.hours / 24);

@@ -10,6 +10,7 @@ import { glassArea } from '../core/glazing';
 import type { Shading } from '../core/shading';
 import { DEMO_BUILDING, DEMO_HOURLY_TAG, DEMO_YEAR, type DemoWindow, SHADING_OPTIONS, demoWindows } from '../demo/building';
 import { EXAMPLE_SITES, findExampleSite } from '../demo/sites';
+import { CAUTION } from '../outputs/caution';
 import type { Output } from './call';
 import { MONTHS, addHeatMapSheet, addHourlySheet, addMonthlySheet } from './annualSheets';
 import { checkOutput, ensureFolder } from './atomicWrite';
@@ -17,7 +18,7 @@ import { type Flags, parseFlags } from './flags';
 import { type DemoFormulaSet, addFormulaSheet, demoFormulas } from './demoFormulas';
 import { ProgressBar } from './progress';
 import { type SummaryTotals, type WindowResult, addSummaryTable, windowResult } from './schedule';
-import { COLOURS, type ExcelJS, NUMBER_FORMATS, type TableCell, addDataTable, address, fitOnOnePage, freezeAt, newWorkbook, saveWorkbook, setFormula, setLabel, styleHeader } from './workbook';
+import { type ExcelJS, NUMBER_FORMATS, type TableCell, addDataTable, addSheetHeading, address, fillContentsSheet, fitOnOnePage, freezeAt, newWorkbook, saveWorkbook, setFormula, setLabel, styleHeader } from './workbook';
 
 export const DEMO_HELP = `usage: sunpane demo [--out DIR]
 
@@ -131,7 +132,7 @@ export function demoSummaryText(results: DemoResults, file: string): string[] {
   for (const b of bestOptions(results)) {
     lines.push(`  least gain on ${b.tag}: ${b.option} (${Math.round(b.kwh)} kWh, ${Math.round(b.saving * 100)} % below no shading)`);
   }
-  lines.push(`wrote ${file}`);
+  lines.push(`wrote ${file}`, CAUTION);
   return lines;
 }
 
@@ -155,12 +156,7 @@ export interface DemoCheckCells {
 
 function addOverview(wb: ExcelJS.Workbook, results: DemoResults): { cell: string; expected: number }[] {
   const ws = wb.addWorksheet('Overview');
-  ws.getCell('A1').value = `${DEMO_BUILDING.name} — Sunpane demo`;
-  ws.getCell('A1').font = { bold: true, size: 14 };
-  ws.getCell('A2').value = `An invented building on two example sites (invented names; rounded real coordinates chosen as example locations), clear-sky year ${DEMO_YEAR}; every other input is made up.`;
-  ws.getCell('A3').value = 'Results are estimates by published methods; design needs a qualified engineer and the local code.';
-  ws.getCell('A3').font = { italic: true, color: { argb: COLOURS.note } };
-  const top = 5;
+  const top = addSheetHeading(ws, `${DEMO_BUILDING.name} — Sunpane demo`, [`An invented building on two example sites (invented names; rounded real coordinates chosen as example locations), clear-sky year ${DEMO_YEAR}; every other input is made up.`]);
   const rows: TableCell[][] = gainBySiteAndFacing(results).map(({ siteId, byFacing }) => {
     const s = findExampleSite(siteId)!;
     return [s.label, s.site.latitude, s.site.longitude, s.site.utcOffset, ...FACINGS.map((f) => byFacing[f])];
@@ -170,17 +166,17 @@ function addOverview(wb: ExcelJS.Workbook, results: DemoResults): { cell: string
     'GainBySite',
     { row: top, column: 1 },
     [
-      { header: 'site', width: 26 },
-      { header: 'latitude [°]', numFmt: NUMBER_FORMATS.angle, width: 13 },
-      { header: 'longitude [°]', numFmt: NUMBER_FORMATS.angle, width: 14 },
-      { header: 'UTC offset [h]', numFmt: '0.0#', width: 14 },
-      ...FACINGS.map((f) => ({ header: `${f}-facing [kWh]`, numFmt: NUMBER_FORMATS.kwh, width: 15 })),
+      { header: 'Site', width: 26 },
+      { header: 'Latitude (°)', numFmt: NUMBER_FORMATS.angle, width: 12 },
+      { header: 'Longitude (°)', numFmt: NUMBER_FORMATS.angle, width: 12 },
+      { header: 'UTC offset (h)', numFmt: '0.0#', width: 12 },
+      ...FACINGS.map((f) => ({ header: `${f}-facing (kWh)`, numFmt: NUMBER_FORMATS.kwh, width: 13 })),
     ],
     rows,
   );
   const checks: { cell: string; expected: number }[] = [];
   const totalCol = 5 + FACINGS.length;
-  ws.getCell(top, totalCol).value = 'all facings [kWh]';
+  ws.getCell(top, totalCol).value = 'All facings (kWh)';
   styleHeader(ws, top, totalCol, totalCol);
   ws.getColumn(totalCol).width = 18;
   rows.forEach((r, k) => {
@@ -214,6 +210,7 @@ function addOverview(wb: ExcelJS.Workbook, results: DemoResults): { cell: string
 
 function addSchedule(wb: ExcelJS.Workbook, results: DemoResults): void {
   const ws = wb.addWorksheet('Schedule');
+  const top = addSheetHeading(ws, `${DEMO_BUILDING.name}: window schedule`);
   const rows: TableCell[][] = results.windows.map((w) => [
     w.tag,
     findExampleSite(w.siteId)?.label ?? w.siteId,
@@ -230,56 +227,58 @@ function addSchedule(wb: ExcelJS.Workbook, results: DemoResults): void {
   addDataTable(
     ws,
     'Schedule',
-    { row: 1, column: 1 },
+    { row: top, column: 1 },
     [
-      { header: 'window', width: 10 },
-      { header: 'site', width: 24 },
-      { header: 'room', width: 14 },
-      { header: 'facing [°]', numFmt: NUMBER_FORMATS.angle, width: 11 },
-      { header: 'width [m]', numFmt: NUMBER_FORMATS.length, width: 11 },
-      { header: 'height [m]', numFmt: NUMBER_FORMATS.length, width: 11 },
-      { header: 'frame share', numFmt: NUMBER_FORMATS.fraction, width: 12 },
-      { header: 'glass area [m²]', numFmt: NUMBER_FORMATS.area, width: 15 },
-      { header: 'SHGC', numFmt: NUMBER_FORMATS.shgc, width: 8 },
-      { header: 'panes', numFmt: NUMBER_FORMATS.integer, width: 8 },
-      { header: 'shading', width: 44 },
+      { header: 'Window', width: 10 },
+      { header: 'Site', width: 24 },
+      { header: 'Room', width: 14 },
+      { header: 'Faces (°)', numFmt: NUMBER_FORMATS.angle, width: 11 },
+      { header: 'Width (m)', numFmt: NUMBER_FORMATS.length, width: 11 },
+      { header: 'Height (m)', numFmt: NUMBER_FORMATS.length, width: 11 },
+      { header: 'Frame share (0-1)', numFmt: NUMBER_FORMATS.fraction, width: 12 },
+      { header: 'Glass area (m²)', numFmt: NUMBER_FORMATS.area, width: 12 },
+      { header: 'SHGC (0-1)', numFmt: NUMBER_FORMATS.shgc, width: 10 },
+      { header: 'Panes', numFmt: NUMBER_FORMATS.integer, width: 8 },
+      { header: 'Outside shading', width: 44 },
     ],
     rows,
   );
-  freezeAt(ws, 2, 2);
+  freezeAt(ws, top + 1, 2);
   fitOnOnePage(ws);
 }
 
 function addMonthlyMatrix(wb: ExcelJS.Workbook, results: DemoResults): { cell: string; expected: number }[] {
   const ws = wb.addWorksheet('Monthly');
+  const top = addSheetHeading(ws, `${DEMO_BUILDING.name}: solar gain by month and window (kWh), clear-sky ${DEMO_YEAR}`);
   const rows: TableCell[][] = MONTHS.map((m, k) => [m, ...results.windows.map((w) => w.summary.monthlyKWh[k])]);
   const t = addDataTable(
     ws,
     'MonthlyByWindow',
-    { row: 1, column: 1 },
-    [{ header: 'month', width: 9 }, ...results.windows.map((w) => ({ header: `${w.tag} [kWh]`, numFmt: NUMBER_FORMATS.kwh, width: 13 }))],
+    { row: top, column: 1 },
+    [{ header: 'Month', width: 9 }, ...results.windows.map((w) => ({ header: `${w.tag} (kWh)`, numFmt: NUMBER_FORMATS.kwh, width: 11 }))],
     rows,
   );
   const sumRow = t.lastRow + 1;
   const maxRow = t.lastRow + 2;
-  setLabel(ws, address(sumRow, 1), 'year');
-  setLabel(ws, address(maxRow, 1), 'top month');
+  setLabel(ws, address(sumRow, 1), 'Year');
+  setLabel(ws, address(maxRow, 1), 'Top month');
   const checks: { cell: string; expected: number }[] = [];
   results.windows.forEach((w) => {
-    const h = `${w.tag} [kWh]`;
+    const h = `${w.tag} (kWh)`;
     const col = t.columnOf(h);
-    const top = Math.max(...w.summary.monthlyKWh);
+    const topMonth = Math.max(...w.summary.monthlyKWh);
     setFormula(ws, address(sumRow, col), `SUM(${t.bodyRange(h)})`, w.summary.annualKWh, NUMBER_FORMATS.kwh);
-    setFormula(ws, address(maxRow, col), `MAX(${t.bodyRange(h)})`, top, NUMBER_FORMATS.kwh);
-    checks.push({ cell: `Monthly!${address(sumRow, col)}`, expected: w.summary.annualKWh }, { cell: `Monthly!${address(maxRow, col)}`, expected: top });
+    setFormula(ws, address(maxRow, col), `MAX(${t.bodyRange(h)})`, topMonth, NUMBER_FORMATS.kwh);
+    checks.push({ cell: `Monthly!${address(sumRow, col)}`, expected: w.summary.annualKWh }, { cell: `Monthly!${address(maxRow, col)}`, expected: topMonth });
   });
-  freezeAt(ws, 2, 2);
+  freezeAt(ws, t.headerRow + 1, 2);
   fitOnOnePage(ws);
   return checks;
 }
 
 function addOptions(wb: ExcelJS.Workbook, results: DemoResults): { cell: string; expected: number }[] {
   const ws = wb.addWorksheet('Options');
+  const top = addSheetHeading(ws, `${DEMO_BUILDING.name}: outside shading options compared, clear-sky ${DEMO_YEAR}`, ['Saving = 1 − annual gain ÷ annual gain of the same window with no outside shading.']);
   const rows: TableCell[][] = results.options.map((o) => [
     o.tag,
     o.option,
@@ -292,21 +291,21 @@ function addOptions(wb: ExcelJS.Workbook, results: DemoResults): { cell: string;
   const t = addDataTable(
     ws,
     'ShadingOptions',
-    { row: 1, column: 1 },
+    { row: top, column: 1 },
     [
-      { header: 'window', width: 10 },
-      { header: 'shading option', width: 20 },
-      { header: 'annual gain [kWh]', numFmt: NUMBER_FORMATS.kwh, width: 18 },
-      { header: 'peak gain [W]', numFmt: NUMBER_FORMATS.watts, width: 14 },
-      { header: 'sunlit hours', numFmt: NUMBER_FORMATS.integer, width: 13 },
-      { header: 'mean sunlit fraction', numFmt: NUMBER_FORMATS.fraction, width: 20 },
-      { header: 'below no shading', numFmt: NUMBER_FORMATS.percent, width: 17 },
+      { header: 'Window', width: 10 },
+      { header: 'Shading option', width: 20 },
+      { header: 'Annual gain (kWh)', numFmt: NUMBER_FORMATS.kwh, width: 14 },
+      { header: 'Peak gain (W)', numFmt: NUMBER_FORMATS.watts, width: 12 },
+      { header: 'Hours with beam on the glass (h)', numFmt: NUMBER_FORMATS.integer, width: 14 },
+      { header: 'Mean sunlit fraction (0-1)', numFmt: NUMBER_FORMATS.fraction, width: 14 },
+      { header: 'Saving vs no shading (%)', numFmt: NUMBER_FORMATS.percent, width: 14 },
     ],
     rows,
   );
   const checks: { cell: string; expected: number }[] = [];
-  const gainCol = t.columnOf('annual gain [kWh]');
-  const savingCol = t.columnOf('below no shading');
+  const gainCol = t.columnOf('Annual gain (kWh)');
+  const savingCol = t.columnOf('Saving vs no shading (%)');
   results.options.forEach((o, k) => {
     const row = t.headerRow + 1 + k;
     const noneIndex = results.options.findIndex((x) => x.tag === o.tag && x.option === 'none');
@@ -317,7 +316,7 @@ function addOptions(wb: ExcelJS.Workbook, results: DemoResults): { cell: string;
     setFormula(ws, cell, `1-${address(row, gainCol)}/${address(noneRow, gainCol)}`, expected, NUMBER_FORMATS.percent);
     checks.push({ cell: `Options!${cell}`, expected });
   });
-  freezeAt(ws, 2, 3);
+  freezeAt(ws, t.headerRow + 1, 3);
   fitOnOnePage(ws);
   return checks;
 }
@@ -325,11 +324,13 @@ function addOptions(wb: ExcelJS.Workbook, results: DemoResults): { cell: string;
 /** Builds the whole demo workbook; returns it with the formula cells a spreadsheet must reproduce. */
 export function buildDemoWorkbook(results: DemoResults, onHour?: () => void): { workbook: ExcelJS.Workbook; checks: DemoCheckCells } {
   const wb = newWorkbook(`Sunpane demo: ${DEMO_BUILDING.name}`);
+  const contents = wb.addWorksheet('Contents');
   const overview = addOverview(wb, results);
   addSchedule(wb, results);
   const summarySheet = wb.addWorksheet('Summary');
-  const summary = addSummaryTable(summarySheet, 'WindowSummary', 1, results.windows);
-  freezeAt(summarySheet, 2, 2);
+  const summaryTop = addSheetHeading(summarySheet, `${DEMO_BUILDING.name}: each window's year, clear-sky ${DEMO_YEAR}`);
+  const summary = addSummaryTable(summarySheet, 'WindowSummary', summaryTop, results.windows);
+  freezeAt(summarySheet, summaryTop + 1, 2);
   fitOnOnePage(summarySheet);
   const monthly = addMonthlyMatrix(wb, results);
   const options = addOptions(wb, results);
@@ -341,9 +342,22 @@ export function buildDemoWorkbook(results: DemoResults, onHour?: () => void): { 
   // The monthly sheet refers to the hourly one, which comes last (its many printed pages follow
   // the one-page sheets).
   const yearSheet = wb.addWorksheet(`Year ${hourlyWindow.tag}`);
-  const placement = addHourlySheet(wb, hourlySheet, `Hourly_${hourlyWindow.tag}`, series, onHour);
-  const yearCells = addMonthlySheet(yearSheet, `Year_${hourlyWindow.tag}`, summarizeAnnual(series), { sheet: hourlySheet, placement });
-  const hourly = [yearCells.annualKWh, yearCells.maxMonthKWh, ...(yearCells.peakW ? [yearCells.peakW] : [])];
+  const placement = addHourlySheet(wb, hourlySheet, `Hourly_${hourlyWindow.tag}`, series, onHour, `${hourlyWindow.spec.name}: hourly solar gain, clear-sky ${DEMO_YEAR}`);
+  const yearCells = addMonthlySheet(yearSheet, `Year_${hourlyWindow.tag}`, summarizeAnnual(series), { sheet: hourlySheet, placement, series }, `${hourlyWindow.spec.name}: solar gain by month, clear-sky ${DEMO_YEAR}`);
+  const tag = hourlyWindow.tag;
+  fillContentsSheet(contents, `${DEMO_BUILDING.name} — Sunpane demo workbook`, [`An invented building on two example sites (invented names; rounded real coordinates chosen as example locations), clear-sky year ${DEMO_YEAR}; every other input is made up.`], [
+    { sheet: 'Contents', holds: 'This list.' },
+    { sheet: 'Overview', holds: 'The building in brief: annual solar gain by site and facing, the shading option with the least gain, the example sites.' },
+    { sheet: 'Schedule', holds: 'The windows: site, room, facing, size, frame share, glass area, SHGC, panes and outside shading.' },
+    { sheet: 'Summary', holds: "Each window's year: annual and monthly solar gain, peak hour, hours with beam on the glass, mean sunlit fraction; totals as formulas; a chart of annual gain by window." },
+    { sheet: 'Monthly', holds: 'Solar gain by month for every window, with yearly totals and the top month as formulas.' },
+    { sheet: 'Options', holds: 'Outside shading options compared on the equator-facing office window of each site: annual and peak gain, saving against no shading; a chart of annual gain by option.' },
+    { sheet: 'Formulas', holds: 'Sunpane worksheet functions on one window at one hour, with named input cells; the results recalculate in Excel when the add-in is loaded.' },
+    { sheet: `Heat map ${tag}`, holds: `Solar gain (W) of window ${tag} for every hour of the year, one row per day, coloured from least to most.` },
+    { sheet: `Year ${tag}`, holds: `Window ${tag} by month, as formulas over its hourly table: gain, missing hours, the year, the peak hour, mean gain by month and hour ending; a chart of the annual profile.` },
+    { sheet: `Hourly ${tag}`, holds: `The hourly year of window ${tag} as a table (8760 rows; left out of the printed pages).` },
+  ]);
+  const hourly = [yearCells.annualKWh, yearCells.maxMonthKWh, ...(yearCells.peakW ? [yearCells.peakW] : []), ...yearCells.months, ...yearCells.monthHour];
   return { workbook: wb, checks: { summary, monthly, options, overview, hourly } };
 }
 

@@ -16,7 +16,7 @@ import type { DemoWindow } from '../demo/building';
 import { applyFunction } from '../registry/evaluate';
 import { NAMESPACE, findFunction } from '../registry';
 import { NotAvailable, type RawArg } from '../registry/types';
-import { type ExcelJS, NUMBER_FORMATS, addDataTable, address, fitOnOnePage, freezeAt, serialToCellDate, setFormula, styleHeader } from './workbook';
+import { type ExcelJS, NUMBER_FORMATS, addDataTable, addSheetHeading, address, fitOnOnePage, freezeAt, serialToCellDate, setFormula, styleHeader } from './workbook';
 
 /** One input cell of the formula sheet. */
 export interface DemoInput {
@@ -71,7 +71,7 @@ export function storedFormula(text: string): string {
 }
 
 /** First row of the input block and of the formula table on the sheet. */
-const INPUT_TOP = 5;
+const INPUT_TOP = 7;
 
 /** The input cells: the demo's equator-facing office window on 21 June at 14:00 (invented clear-sky depths). */
 export function demoInputs(window: DemoWindow): DemoInput[] {
@@ -230,13 +230,14 @@ export function demoFormulas(window: DemoWindow): DemoFormulaSet {
 export function addFormulaSheet(wb: ExcelJS.Workbook, sheet: string, set: DemoFormulaSet): void {
   const { inputs, formulas } = set;
   const ws = wb.addWorksheet(sheet);
-  ws.getCell('A1').value = 'Sunpane worksheet functions — examples';
-  ws.getCell('A1').font = { bold: true, size: 13 };
-  ws.getCell('A2').value = 'Results were worked out by Sunpane when the file was written.';
-  ws.getCell('A3').value = 'They recalculate in Excel once the Sunpane add-in is installed; elsewhere they may show #NAME?.';
-  ws.getCell(INPUT_TOP, 1).value = 'input';
-  ws.getCell(INPUT_TOP, 2).value = 'value';
-  ws.getCell(INPUT_TOP, 3).value = 'unit';
+  const free = addSheetHeading(ws, 'Sunpane worksheet functions — examples', [
+    'Results were worked out by Sunpane when the file was written.',
+    'They recalculate in Excel when the Sunpane add-in is loaded (open its pane once); elsewhere they may show #NAME?.',
+  ]);
+  if (free > INPUT_TOP) throw new Error('internal error: the formula sheet heading overlaps its inputs');
+  ws.getCell(INPUT_TOP, 1).value = 'Input';
+  ws.getCell(INPUT_TOP, 2).value = 'Value';
+  ws.getCell(INPUT_TOP, 3).value = 'Unit';
   styleHeader(ws, INPUT_TOP, 1, 3);
   inputs.forEach((x, i) => {
     ws.getCell(inputRow(i), 1).value = x.label;
@@ -250,7 +251,7 @@ export function addFormulaSheet(wb: ExcelJS.Workbook, sheet: string, set: DemoFo
     ws,
     'ExampleFormulas',
     { row: top, column: 1 },
-    [{ header: 'quantity', width: 40 }, { header: 'formula', width: 60 }, { header: 'result', width: 16 }, { header: 'unit', width: 8 }],
+    [{ header: 'Quantity', width: 40 }, { header: 'Formula', width: 60 }, { header: 'Result', width: 16 }, { header: 'Unit', width: 8 }],
     formulas.map((f) => [f.label, `=${f.formula}`, null, f.unit]),
   );
   formulas.forEach((f, k) => {
@@ -260,6 +261,6 @@ export function addFormulaSheet(wb: ExcelJS.Workbook, sheet: string, set: DemoFo
     if (typeof f.result === 'number') setFormula(ws, cell, storedFormula(f.formula), f.result, f.numFmt);
     else ws.getCell(cell).value = f.result;
   });
-  freezeAt(ws, 4);
+  freezeAt(ws, INPUT_TOP + 1);
   fitOnOnePage(ws);
 }

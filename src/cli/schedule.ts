@@ -9,6 +9,7 @@ import ExcelJS from 'exceljs';
 import { annualSeries, type AnnualSummary, summarizeAnnual, type Weather, type WindowSpec, validateWindowSpec } from '../core/gain';
 import { SunpaneError } from '../core/common';
 import { formatSerialIso } from '../core/time';
+import { CAUTION } from '../outputs/caution';
 import type { Output } from './call';
 import { MONTHS } from './annualSheets';
 import { checkOutput, describeFsError, writeFileAtomic } from './atomicWrite';
@@ -20,7 +21,7 @@ import { ProgressBar } from './progress';
 import { weatherColumns } from './table';
 import { describeMissing, readWeatherFile } from './weatherCsv';
 import { windowFromJson } from './windowJson';
-import { NUMBER_FORMATS, type TableCell, addDataTable, address, freezeAt, newWorkbook, saveWorkbook, serialToCellDate, setFormula, setLabel } from './workbook';
+import { NUMBER_FORMATS, type TableCell, addDataTable, addSheetHeading, address, fillContentsSheet, freezeAt, newWorkbook, saveWorkbook, serialToCellDate, setFormula, setLabel } from './workbook';
 import { type MatchedHeaders, type ScheduleColumn, SCHEDULE_COLUMNS, SITE_KEY, columnForHeader, columnsForPath, headerKey, matchHeaders, requiredColumns, splitListCell } from '../schedule/columns';
 
 const SCHEDULE_FLAGS = { in: true, weather: true, dni: true, dhi: true, ghi: true, out: true, force: false, help: false } as const;
@@ -224,17 +225,17 @@ export interface WindowResult {
 
 /** The summary columns (headers of our own), shared by CSV, workbook and demo. */
 export const SUMMARY_HEADERS = [
-  'window',
-  'latitude [°]',
-  'facing [°]',
-  'glass area [m²]',
-  'annual gain [kWh]',
-  'peak gain [W]',
-  'peak hour ending',
-  'sunlit hours',
-  'mean sunlit fraction',
-  'missing hours',
-  ...MONTHS.map((m) => `${m} [kWh]`),
+  'Window',
+  'Latitude (°)',
+  'Faces (°)',
+  'Glass area (m²)',
+  'Annual gain (kWh)',
+  'Peak gain (W)',
+  'Peak hour ending',
+  'Hours with beam on the glass (h)',
+  'Mean sunlit fraction (0-1)',
+  'Weather missing (h)',
+  ...MONTHS.map((m) => `${m} (kWh)`),
 ] as const;
 
 /** The summary as CSV text. */
@@ -291,23 +292,23 @@ export function addSummaryTable(ws: ExcelJS.Worksheet, tableName: string, topRow
   const t = addDataTable(ws, tableName, { row: topRow, column: 1 }, SUMMARY_HEADERS.map((header, k) => ({ header, numFmt: numFmts[k], width: widths[k] })), rows);
   const totalRow = t.lastRow + 1;
   const sum = (xs: number[]) => xs.reduce((a, b) => a + b, 0);
-  setLabel(ws, address(totalRow, 1), 'all windows');
+  setLabel(ws, address(totalRow, 1), 'All windows');
   const cell = (header: string) => address(totalRow, t.columnOf(header));
   const area = sum(results.map((r) => r.glassArea));
   const annual = sum(results.map((r) => r.summary.annualKWh));
   const peak = Math.max(0, ...results.map((r) => r.summary.peakW));
-  setFormula(ws, cell('glass area [m²]'), `SUM(${t.bodyRange('glass area [m²]')})`, area, NUMBER_FORMATS.area);
-  setFormula(ws, cell('annual gain [kWh]'), `SUM(${t.bodyRange('annual gain [kWh]')})`, annual, NUMBER_FORMATS.kwh);
-  setFormula(ws, cell('peak gain [W]'), `MAX(${t.bodyRange('peak gain [W]')})`, peak, NUMBER_FORMATS.watts);
+  setFormula(ws, cell('Glass area (m²)'), `SUM(${t.bodyRange('Glass area (m²)')})`, area, NUMBER_FORMATS.area);
+  setFormula(ws, cell('Annual gain (kWh)'), `SUM(${t.bodyRange('Annual gain (kWh)')})`, annual, NUMBER_FORMATS.kwh);
+  setFormula(ws, cell('Peak gain (W)'), `MAX(${t.bodyRange('Peak gain (W)')})`, peak, NUMBER_FORMATS.watts);
   for (const m of MONTHS) {
-    const h = `${m} [kWh]`;
+    const h = `${m} (kWh)`;
     setFormula(ws, cell(h), `SUM(${t.bodyRange(h)})`, sum(results.map((r) => r.summary.monthlyKWh[MONTHS.indexOf(m)])), NUMBER_FORMATS.kwh);
   }
   const sheet = ws.name;
   return {
-    annualKWh: { cell: `${sheet}!${cell('annual gain [kWh]')}`, expected: annual },
-    peakW: { cell: `${sheet}!${cell('peak gain [W]')}`, expected: peak },
-    glassArea: { cell: `${sheet}!${cell('glass area [m²]')}`, expected: area },
+    annualKWh: { cell: `${sheet}!${cell('Annual gain (kWh)')}`, expected: annual },
+    peakW: { cell: `${sheet}!${cell('Peak gain (W)')}`, expected: peak },
+    glassArea: { cell: `${sheet}!${cell('Glass area (m²)')}`, expected: area },
   };
 }
 
@@ -372,13 +373,20 @@ export async function scheduleCommand(argv: readonly string[], io: Output): Prom
   if (kind === 'csv') await writeFileAtomic(out, summaryCsv(results), force);
   else {
     const wb = newWorkbook('Sunpane window schedule');
+    const contents = wb.addWorksheet('Contents');
     const ws = wb.addWorksheet('Summary');
-    addSummaryTable(ws, 'Summary', 1, results);
-    freezeAt(ws, 2, 2);
+    const top = addSheetHeading(ws, `Window schedule: each window's year (${path.basename(input)})`);
+    addSummaryTable(ws, 'Summary', top, results);
+    freezeAt(ws, top + 1, 2);
+    fillContentsSheet(contents, 'Sunpane window schedule', [`From ${path.basename(input)}.`], [
+      { sheet: 'Contents', holds: 'This list.' },
+      { sheet: 'Summary', holds: "One row per window: its year's solar gain, peak hour, hours with beam on the glass, mean sunlit fraction, missing weather hours and gain by month; totals of all windows as formulas." },
+    ]);
     await saveWorkbook(wb, out, force);
   }
   const total = results.reduce((a, r) => a + r.summary.annualKWh, 0);
   io.out(`${results.length} window${results.length === 1 ? '' : 's'}: ${total.toFixed(1)} kWh of solar gain a year in all`);
   io.out(`wrote ${path.normalize(out)}`);
+  io.out(CAUTION);
   return 0;
 }

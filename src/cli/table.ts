@@ -5,16 +5,16 @@
 import * as path from 'node:path';
 import { type AnnualSeries, annualSeries, type AnnualSummary, summarizeAnnual, type WindowSpec, validateWindowSpec } from '../core/gain';
 import { formatSerialIso } from '../core/time';
+import { CAUTION } from '../outputs/caution';
 import type { Output } from './call';
 import { addHeatMapSheet, addHourlySheet, addMonthlySheet, hourlyCsv } from './annualSheets';
 import { checkOutput, writeFileAtomic } from './atomicWrite';
-import { escapeFormulaText } from '../io/textCells';
 import { CliInputError, CliUsageError } from './cliError';
 import { type Flags, outputKind, parseFlags, requireFlag } from './flags';
 import { ProgressBar } from './progress';
 import { type WeatherColumns, describeMissing, readWeatherFile } from './weatherCsv';
 import { readWindowFile } from './windowJson';
-import { newWorkbook, saveWorkbook } from './workbook';
+import { fillContentsSheet, newWorkbook, saveWorkbook } from './workbook';
 
 export const TABLE_HELP = `usage: sunpane table --window FILE.json [--weather FILE.csv (--dni COL --dhi COL | --ghi COL)] --out FILE.xlsx|FILE.csv
 
@@ -42,6 +42,14 @@ skyModel ("perez1990"), weather {kind: "ineichenClearSky", linkeTurbidity} or
 {kind: "ashraeClearSky", tauB, tauD}. Defaults in brackets. Example: examples/east-office.json
 
 Exit codes: 0 done, 1 bad input (the message names the field, row or line), 2 wrong usage.`;
+
+/** What each sheet of the `table` workbook holds. */
+export const TABLE_CONTENTS = [
+  { sheet: 'Contents', holds: 'This list.' },
+  { sheet: 'Monthly', holds: 'Solar gain and missing weather hours by month, as formulas over the Hourly table; the year, the largest month and the peak hour; mean gain by month and hour ending (colour scale); a chart of the annual profile.' },
+  { sheet: 'Heat map', holds: 'Solar gain (W) of every hour of the year, one row per day, coloured from least to most.' },
+  { sheet: 'Hourly', holds: 'The hourly year as a table: sun position, incidence and profile angles, sunlit fraction, irradiance, SHGC at incidence and solar gain, hour-ending in local standard time.' },
+] as const;
 
 const TABLE_FLAGS = { window: true, weather: true, dni: true, dhi: true, ghi: true, out: true, force: false, help: false } as const;
 
@@ -110,15 +118,18 @@ export async function tableCommand(argv: readonly string[], io: Output): Promise
     await writeFileAtomic(out, text, force);
   } else {
     const wb = newWorkbook(`Sunpane: ${spec.name}`);
+    const contents = wb.addWorksheet('Contents');
     const hourlySheet = 'Hourly';
     const monthlySheet = wb.addWorksheet('Monthly');
-    addHeatMapSheet(wb, 'Heat map', series, escapeFormulaText(`${spec.name}: gain [W] by day and hour ending`));
+    addHeatMapSheet(wb, 'Heat map', series, `${spec.name}: solar gain (W) by day and hour ending, ${series.year}`);
     const placement = addHourlySheet(wb, hourlySheet, 'Hourly', series, () => bar.tick());
     bar.finish();
-    addMonthlySheet(monthlySheet, 'Monthly', summary, { sheet: hourlySheet, placement });
+    addMonthlySheet(monthlySheet, 'Monthly', summary, { sheet: hourlySheet, placement, series }, `${spec.name}: solar gain by month, ${series.year}`);
+    fillContentsSheet(contents, `Sunpane: ${spec.name}, ${series.year}`, [`From ${path.basename(windowFile)}${flags.has('weather') ? ` and ${path.basename(flags.get('weather') ?? '')}` : ' (clear sky)'}.`], TABLE_CONTENTS);
     await saveWorkbook(wb, out, force);
   }
   io.out(tableSummaryLine(series, summary));
   io.out(`wrote ${path.normalize(out)}`);
+  io.out(CAUTION);
   return 0;
 }

@@ -4,6 +4,9 @@
  * results, and a day × hour colour-scale heat map. The command line's only spreadsheet writer.
  */
 import ExcelJS from 'exceljs';
+import { escapeFormulaText } from '../io/textCells';
+import { CAUTION } from '../outputs/caution';
+import { PALETTE, argbColour } from '../outputs/palette';
 import { type OutputOptions, writeFileAtomic } from './atomicWrite';
 
 /** Number formats used across Sunpane workbooks. */
@@ -34,15 +37,31 @@ export interface TableColumn {
 /** A cell value in a data table: number, text, a date, or blank. */
 export type TableCell = number | string | Date | null;
 
-/** Our own colours (ARGB). Header fill and heat-map stops are Sunpane's: deep slate → amber → ember. */
+/** Our own colours as ARGB, from the one palette of every output (src/outputs/palette.ts). */
 export const COLOURS = Object.freeze({
-  headerFill: 'FF2F4858',
-  headerText: 'FFFFFFFF',
-  heatLow: 'FFF4F1E8',
-  heatMid: 'FFF2B134',
-  heatHigh: 'FFB23A1E',
-  note: 'FF5A6470',
+  headerFill: argbColour(PALETTE.headerFill),
+  headerText: argbColour(PALETTE.headerText),
+  heatLow: argbColour(PALETTE.heatLow),
+  heatMid: argbColour(PALETTE.heatMid),
+  heatHigh: argbColour(PALETTE.heatHigh),
+  note: argbColour(PALETTE.note),
 });
+
+/**
+ * Writes a sheet's heading from A1: the title (bold), any description lines, then the caution
+ * every sheet carries (italic, grey), and a blank row.
+ * @returns the first row below the heading (1-based), where a table's header goes
+ */
+export function addSheetHeading(sheet: ExcelJS.Worksheet, title: string, lines: readonly string[] = []): number {
+  // Titles carry users' words (window labels): never let them read as formulas.
+  sheet.getCell('A1').value = escapeFormulaText(title);
+  sheet.getCell('A1').font = { bold: true, size: 13 };
+  lines.forEach((l, i) => (sheet.getCell(2 + i, 1).value = escapeFormulaText(l)));
+  const caution = sheet.getCell(2 + lines.length, 1);
+  caution.value = CAUTION;
+  caution.font = { italic: true, color: { argb: COLOURS.note } };
+  return 4 + lines.length;
+}
 
 const TABLE_STYLE = 'TableStyleMedium2';
 
@@ -77,6 +96,8 @@ export { cleanSheetName as sheetName } from '../io/sheetNames';
 
 /** Where a data table sits on its sheet (1-based), for formulas that refer to it. */
 export interface TablePlacement {
+  /** The table's name (valid, as written). */
+  name: string;
   firstRow: number;
   /** Row of the header. */
   headerRow: number;
@@ -105,8 +126,9 @@ export function addDataTable(
   columns: readonly TableColumn[],
   rows: readonly (readonly TableCell[])[],
 ): TablePlacement {
+  const validName = tableName(name);
   sheet.addTable({
-    name: tableName(name),
+    name: validName,
     ref: address(topLeft.row, topLeft.column),
     headerRow: true,
     totalsRow: false,
@@ -132,6 +154,7 @@ export function addDataTable(
   };
   const lastRow = topLeft.row + Math.max(rows.length, 1);
   return {
+    name: validName,
     firstRow: topLeft.row,
     headerRow: topLeft.row,
     lastRow,
@@ -139,6 +162,27 @@ export function addDataTable(
     columnOf,
     bodyRange: (header) => `${address(topLeft.row + 1, columnOf(header))}:${address(lastRow, columnOf(header))}`,
   };
+}
+
+/** One line of a workbook's contents sheet. */
+export interface ContentsEntry {
+  sheet: string;
+  holds: string;
+}
+
+/**
+ * Fills a workbook's first sheet (made first, filled last) with what each sheet holds: a table of
+ * sheet (a link to it) and contents, under the title, a description and the caution.
+ */
+export function fillContentsSheet(ws: ExcelJS.Worksheet, title: string, lines: readonly string[], entries: readonly ContentsEntry[]): void {
+  const top = addSheetHeading(ws, title, lines);
+  const t = addDataTable(ws, 'Contents', { row: top, column: 1 }, [{ header: 'Sheet', width: 22 }, { header: 'What it holds', width: 100 }], entries.map((e) => [e.sheet, e.holds]));
+  entries.forEach((e, k) => {
+    const c = ws.getCell(t.headerRow + 1 + k, 1);
+    c.value = { text: e.sheet, hyperlink: `#'${e.sheet.replace(/'/g, "''")}'!A1` } as ExcelJS.CellHyperlinkValue;
+    ws.getCell(t.headerRow + 1 + k, 2).alignment = { wrapText: true, vertical: 'top' };
+  });
+  freezeAt(ws, top + 1);
 }
 
 /** Freezes the rows above `row` and the columns left of `column` (both 1-based; 1 freezes none). */

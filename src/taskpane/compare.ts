@@ -102,7 +102,7 @@ export interface OptionFigures {
 }
 
 /** Header of the comparison table (our own wording). */
-export const COMPARE_HEADER = ['Shading option', 'Solar gain kWh/yr', 'Peak gain W', 'Cut vs no shading %', 'Shaded share of sun-on-wall hours'] as const;
+export const COMPARE_HEADER = ['Shading option', 'Solar gain (kWh/yr)', 'Peak gain (W)', 'Cut vs no shading (%)', 'Shaded share, sun on the wall (0-1)'] as const;
 
 /** The comparison rows: reference first. Cut = 1 − annual / annual of the unshaded window. */
 export function comparisonRows(results: readonly { label: string; figures: OptionFigures }[]): (number | string)[][] {

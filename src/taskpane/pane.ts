@@ -4,6 +4,7 @@
  * engine.ts and writes to a new sheet through the Excel request context it is given.
  */
 import { SunpaneError } from '../core/common';
+import { CAUTION } from '../outputs/caution';
 import type { WindowSpec } from '../core/gain';
 import { COMPARE_FORMATS, COMPARE_HEADER, MAX_OPTIONS, OPTION_FIELDS, type ShadingOption, comparisonRows, optionSpecs } from './compare';
 import { makeReplaceDialog } from './dialog';
@@ -20,8 +21,8 @@ import { drawSunPath } from './sunPathView';
 import { writeSmallTableSheet } from './tableSheet';
 import { writeYearSheet } from './yearSheet';
 
-/** The caution shown in the pane and on every result sheet. */
-export const CAUTION = 'Results are estimates by published methods; design decisions need a qualified engineer and the local energy code.';
+/** The caution shown in the pane and on every result sheet (one text for every output). */
+export { CAUTION };
 
 /** What the pane needs from its host. */
 export interface PaneHost {
@@ -210,12 +211,12 @@ export function createPane(doc: Document, host: PaneHost): void {
       await breathe();
       const result: YearResult = runYear(ready.spec);
       const plan = await planSheet(`${ready.spec.name} hourly`, await sheetNamesOf(host.run), store, askReplace);
-      const name = await writeYearSheet(host.run, plan, { title: `Sunpane hourly solar gain: ${ready.spec.name}`, lines: describeSpec(ready.spec) }, result.series, result.figures, {
+      const written = await writeYearSheet(host.run, { ...plan, tableBase: `${ready.spec.name} hourly` }, { title: `Sunpane hourly solar gain: ${ready.spec.name}`, lines: describeSpec(ready.spec) }, result.series, result.figures, {
         onProgress: (done, total) => setProgress(done, total, `Writing rows: ${done} of ${total}`),
         cancelled: () => cancelRequested,
       });
-      store.remember(name);
-      say(`Wrote "${name}": ${result.figures.annualKWh.toFixed(0)} kWh in the year, peak ${result.figures.peakW.toFixed(0)} W.`, 'ok');
+      store.remember(written.sheet);
+      say(`Wrote "${written.sheet}" (table ${written.table}): ${result.figures.annualKWh.toFixed(0)} kWh in the year, peak ${result.figures.peakW.toFixed(0)} W.`, 'ok');
     } catch (err) {
       reportFailure(err);
     } finally {
@@ -362,7 +363,7 @@ export function createPane(doc: Document, host: PaneHost): void {
       const plan = await planSheet(`${ready.spec.name} options`, await sheetNamesOf(host.run), store, askReplace);
       const name = await writeSmallTableSheet(host.run, plan, {
         title: `Sunpane shading options: ${ready.spec.name}`,
-        lines: [...describeSpec(ready.spec).slice(0, 2), 'Cut = 1 − annual gain ÷ annual gain with no outside shading. Shaded share = 1 − mean glass-in-sun share over the hours the sun is in front of the wall.', CAUTION],
+        lines: [...describeSpec(ready.spec).slice(0, 2), 'Cut = 1 − annual gain ÷ annual gain with no outside shading. Shaded share = 1 − mean sunlit fraction over the hours the sun is in front of the wall.', CAUTION],
         header: COMPARE_HEADER,
         rows: comparisonRows(results),
         formats: COMPARE_FORMATS,

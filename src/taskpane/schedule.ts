@@ -148,7 +148,7 @@ function readRow(line: readonly unknown[], present: readonly { column: ScheduleC
 }
 
 /** Header of the summary sheet's table (our own wording). */
-export const SUMMARY_HEADER = ['Window', 'Faces °', 'Glass m²', 'Solar gain kWh/yr', 'kWh per m² of glass', 'Peak gain W', 'Peak at (hour ending)', 'Mean glass-in-sun share', 'Hours with missing weather'] as const;
+export const SUMMARY_HEADER = ['Window', 'Faces (°)', 'Glass area (m²)', 'Solar gain (kWh/yr)', 'Per glass area (kWh/m²·yr)', 'Peak gain (W)', 'Peak at (hour ending)', 'Mean sunlit fraction, sun on the wall (0-1)', 'Weather missing (h)'] as const;
 
 /** One summary row from a window's yearly figures. */
 export function summaryRow(spec: WindowSpec, fig: { annualKWh: number; peakW: number; peakStamp?: number; meanSunlitFraction: number; missingHours: number; glassArea: number }): (number | string)[] {

@@ -6,6 +6,7 @@
 import { escapeFormulaText } from '../io/textCells';
 import { cellAddress, rangeAddress } from './blocks';
 import type { RunBatch } from './resultSheets';
+import { tableNamesIn, uniqueTableName } from './tableNames';
 import { HEAD_FILL } from './yearSheet';
 
 export interface SmallTable {
@@ -42,7 +43,9 @@ export async function writeSmallTableSheet(run: RunBatch, target: { name: string
     const all = sheet.getRange(rangeAddress(top, 0, t.rows.length + 1, width));
     all.values = [t.header.slice(), ...t.rows.map(textSafeRow)];
     all.numberFormat = [t.header.map(() => '@'), ...t.rows.map(() => t.formats.slice())];
+    const tableName = uniqueTableName(target.name, await tableNamesIn(ctx));
     const table = sheet.tables.add(rangeAddress(top, 0, t.rows.length + 1, width), true);
+    table.name = tableName;
     table.style = 'TableStyleMedium16';
     const header = sheet.getRange(rangeAddress(top, 0, 1, width));
     header.format.fill.color = HEAD_FILL;

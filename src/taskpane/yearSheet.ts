@@ -1,36 +1,27 @@
 /**
- * Writes one window's hourly year to a new sheet: a heading, the hourly rows as an Excel table
- * (written in blocks of rows with a sync after each, so that no request nears Excel on the web's
- * 5 MB limit), a monthly summary with a column chart, and a day × hour heat map of the gain with a
- * colour scale.
+ * Writes one window's hourly year to a new sheet: a heading (ending with the caution), the hourly
+ * rows as an Excel table named after the window (written in blocks of rows with a sync after each,
+ * so that no request nears Excel on the web's 5 MB limit), and beside it, as formulas over that
+ * table (src/outputs/hourlyFormulas.ts) — so that editing an hour updates them — the monthly
+ * summary with a column chart of the annual profile, the year's key figures, and a month × hour
+ * block of mean gain with a colour scale.
  *
  * Cancel: the run stops after the block being written and deletes the half-written sheet, so the
  * workbook is left as it was before the run (apart from an earlier result sheet the user had
  * already agreed to replace).
  */
 import { escapeFormulaText } from '../io/textCells';
-import { DEFAULT_BLOCK_ROWS, cellAddress, rangeAddress, roundForSheet, rowBlocks } from './blocks';
+import { HOURLY_COLUMNS, type HourlyKey } from '../outputs/hourlyColumns';
+import { type ColumnRef, monthHourMeanFormula, monthlyGainFormula, tableColumnRef, yearFigureFormulas } from '../outputs/hourlyFormulas';
+import { PALETTE, hexColour } from '../outputs/palette';
+import { DEFAULT_BLOCK_ROWS, cellAddress, columnLetters, rangeAddress, roundForSheet, rowBlocks } from './blocks';
 import { type RunBatch, RunCancelled } from './resultSheets';
+import { tableNamesIn, uniqueTableName } from './tableNames';
 
 /** The hourly columns the sheet shows (one value per hour of the year). */
-export interface HourColumns {
-  stampSerial: ArrayLike<number>;
-  sunAltitude: ArrayLike<number>;
-  sunAzimuth: ArrayLike<number>;
-  incidence: ArrayLike<number>;
-  profileAngle: ArrayLike<number>;
-  sunlitFraction: ArrayLike<number>;
-  dni: ArrayLike<number>;
-  dhi: ArrayLike<number>;
-  beam: ArrayLike<number>;
-  sky: ArrayLike<number>;
-  ground: ArrayLike<number>;
-  shgc: ArrayLike<number>;
-  gain: ArrayLike<number>;
-  missing: ArrayLike<number>;
-}
+export type HourColumns = Record<HourlyKey, ArrayLike<number>>;
 
-/** The yearly figures the sheet's summary shows. */
+/** The yearly figures the pane reports when done (the sheet itself holds formulas). */
 export interface YearFigures {
   monthlyKWh: readonly number[];
   annualKWh: number;
@@ -43,45 +34,22 @@ export interface YearFigures {
   glassArea: number;
 }
 
-/** One column of the hourly table: our header, where its values come from, how they are shown. */
-interface ColumnDef {
-  header: string;
-  key: keyof HourColumns;
-  decimals: number;
-  format: string;
-}
-
-/** The hourly table's columns, in order (header names of our own). */
-export const HOUR_TABLE_COLUMNS: readonly ColumnDef[] = [
-  { header: 'Hour ending (local standard time)', key: 'stampSerial', decimals: 6, format: 'yyyy-mm-dd hh:mm' },
-  { header: 'Sun altitude °', key: 'sunAltitude', decimals: 2, format: '0.00' },
-  { header: 'Sun azimuth °', key: 'sunAzimuth', decimals: 2, format: '0.00' },
-  { header: 'Incidence on glass °', key: 'incidence', decimals: 2, format: '0.00' },
-  { header: 'Profile angle °', key: 'profileAngle', decimals: 2, format: '0.00' },
-  { header: 'Glass in sun (share)', key: 'sunlitFraction', decimals: 3, format: '0.000' },
-  { header: 'Direct normal W/m²', key: 'dni', decimals: 1, format: '0.0' },
-  { header: 'Diffuse horizontal W/m²', key: 'dhi', decimals: 1, format: '0.0' },
-  { header: 'Beam on glass W/m²', key: 'beam', decimals: 1, format: '0.0' },
-  { header: 'Sky diffuse on glass W/m²', key: 'sky', decimals: 1, format: '0.0' },
-  { header: 'Ground light on glass W/m²', key: 'ground', decimals: 1, format: '0.0' },
-  { header: 'SHGC at this angle', key: 'shgc', decimals: 3, format: '0.000' },
-  { header: 'Solar gain W', key: 'gain', decimals: 1, format: '0.0' },
-  { header: 'Weather missing (1 = yes)', key: 'missing', decimals: 0, format: '0' },
-];
-
 /** Row (0-based) of the hourly table's header. */
 export const TABLE_HEADER_ROW = 4;
 /** First column (0-based) of the monthly summary. */
-export const SUMMARY_COLUMN = HOUR_TABLE_COLUMNS.length + 1;
-/** First column (0-based) of the heat map. */
-export const HEAT_COLUMN = SUMMARY_COLUMN + 6;
+export const SUMMARY_COLUMN = HOURLY_COLUMNS.length + 1;
+/** First column (0-based) of the month × hour block. */
+export const HEAT_COLUMN = SUMMARY_COLUMN + 4;
 
 const MONTHS = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
 
-/** Our heat-map colours: low = pale sand, middle = amber, high = brick. */
-export const HEAT_COLOURS = { low: '#F7F3E8', middle: '#F2B441', high: '#A63A1E' };
-/** Heading colour of our sheets. */
-export const HEAD_FILL = '#1F5C66';
+/** Our colour-scale stops for the month × hour block (src/outputs/palette.ts). */
+export const HEAT_COLOURS = { low: hexColour(PALETTE.heatLow), middle: hexColour(PALETTE.heatMid), high: hexColour(PALETTE.heatHigh) };
+/** Header fill of our tables. */
+export const HEAD_FILL = hexColour(PALETTE.headerFill);
+
+/** Header of the monthly summary block (units in parentheses). */
+export const MONTHLY_HEADER = ['Month', 'Solar gain (kWh)', 'Per glass area (kWh/m²)'] as const;
 
 /** What the caller wants done while writing. */
 export interface WriteControl {
@@ -102,44 +70,53 @@ export interface YearHeading {
 export function hourRows(cols: HourColumns, start: number, end: number): (number | string)[][] {
   const rows: (number | string)[][] = [];
   for (let i = start; i < end; i++) {
-    rows.push(HOUR_TABLE_COLUMNS.map((c) => roundForSheet(cols[c.key][i], c.decimals)));
+    rows.push(HOURLY_COLUMNS.map((c) => roundForSheet(cols[c.key][i], c.sheetDecimals)));
   }
   return rows;
+}
+
+/** The year of an hourly table: that of its middle row (the first stamp may be the 1st at 01:00). */
+function yearOf(cols: HourColumns): number {
+  const serial = cols.stampSerial[Math.floor(cols.stampSerial.length / 2)];
+  return new Date(Math.round((serial - 25_569) * 86_400_000)).getUTCFullYear();
 }
 
 /**
- * The day × hour grid of the gain [W]: one row per day, 24 hour-ending columns, read straight from
- * the hourly series (row i of the series is day ⌊i / 24⌋, hour i mod 24).
+ * The monthly summary block as formulas (header row, 12 months, the year): gain by SUMIFS over the
+ * table, per glass area against the glass-area cell `areaCell`.
  */
-export function dayHourGrid(cols: HourColumns): (number | string)[][] {
-  const hours = cols.gain.length;
-  const rows: (number | string)[][] = [];
-  for (let d = 0; d * 24 < hours; d++) {
-    const row: (number | string)[] = [roundForSheet(Math.floor(cols.stampSerial[d * 24]), 0)];
-    for (let h = 0; h < 24; h++) row.push(d * 24 + h < hours ? roundForSheet(cols.gain[d * 24 + h], 0) : '');
-    rows.push(row);
-  }
+export function monthlyFormulas(ref: ColumnRef, year: number, monthRow0: number, column: number, areaCell: string): (number | string)[][] {
+  const gainCell = (r: number) => cellAddress(r, column + 1);
+  const rows: (number | string)[][] = [[...MONTHLY_HEADER]];
+  MONTHS.forEach((m, k) => {
+    const r = monthRow0 + 1 + k;
+    rows.push([m, `=${monthlyGainFormula(ref, year, k + 1)}`, `=IF(${areaCell}>0,${gainCell(r)}/${areaCell},0)`]);
+  });
+  const first = gainCell(monthRow0 + 1);
+  const last = gainCell(monthRow0 + 12);
+  const yearRow = monthRow0 + 13;
+  rows.push(['Year', `=SUM(${first}:${last})`, `=IF(${areaCell}>0,${gainCell(yearRow)}/${areaCell},0)`]);
   return rows;
 }
 
-/** The monthly summary block (header row + 12 months + year). */
-export function monthlyRows(fig: YearFigures): (number | string)[][] {
-  const rows: (number | string)[][] = [['Month', 'Solar gain kWh', 'kWh per m² of glass']];
-  fig.monthlyKWh.forEach((kwh, m) => rows.push([MONTHS[m], roundForSheet(kwh, 2), roundForSheet(fig.glassArea > 0 ? kwh / fig.glassArea : 0, 2)]));
-  rows.push(['Year', roundForSheet(fig.annualKWh, 2), roundForSheet(fig.glassArea > 0 ? fig.annualKWh / fig.glassArea : 0, 2)]);
-  return rows;
-}
-
-/** Key figures under the monthly summary. */
-export function keyFigureRows(fig: YearFigures): (number | string)[][] {
+/** Key figures under the monthly summary: label, formula (or the glass area, an input), unit. */
+export function keyFigureRows(ref: ColumnRef, glassArea: number): (number | string)[][] {
+  const f = yearFigureFormulas(ref);
   return [
-    ['Peak gain W', roundForSheet(fig.peakW, 1), ''],
-    ['Peak at (hour ending)', fig.peakStamp === undefined ? '' : roundForSheet(fig.peakStamp, 6), ''],
-    ['Hours with sun on the glass', fig.sunlitHours, ''],
-    ['Mean glass-in-sun share', roundForSheet(fig.meanSunlitFraction, 3), ''],
-    ['Hours with missing weather', fig.missingHours, ''],
-    ['Glass area m²', roundForSheet(fig.glassArea, 3), ''],
+    ['Peak gain (W)', `=${f.peakW}`],
+    ['Peak at (hour ending)', `=${f.peakStamp}`],
+    ['Hours with beam on the glass (h)', `=${f.sunlitHours}`],
+    ['Mean sunlit fraction, sun on the wall (0-1)', `=${f.meanSunlitFraction}`],
+    ['Hours with weather missing (h)', `=${f.missingHours}`],
+    ['Glass area (m²)', roundForSheet(glassArea, 3)],
   ];
+}
+
+/** The month × hour block: header (month, hours ending 1…24) and 12 rows of mean-gain formulas. */
+export function monthHourFormulas(ref: ColumnRef, year: number): string[][] {
+  const rows: string[][] = [['Month', ...Array.from({ length: 24 }, (_, h) => String(h + 1))]];
+  MONTHS.forEach((m, k) => rows.push([m, ...Array.from({ length: 24 }, (_, h) => `=${monthHourMeanFormula(ref, year, k + 1, h + 1)}`)]));
+  return rows;
 }
 
 /** True when the host declares the ExcelApi requirement set `version` (false outside Office). */
@@ -151,26 +128,32 @@ function checkCancel(control: WriteControl): boolean {
   return control.cancelled?.() === true;
 }
 
+/** What the run wrote. */
+export interface WrittenYear {
+  sheet: string;
+  table: string;
+}
+
 /**
- * Writes the year to a new sheet named `sheetName` (already chosen free by the caller; `replaces`
- * is deleted first). Returns the sheet's name. Throws {@link RunCancelled} after removing the
- * partial sheet when the user cancels.
+ * Writes the year to a new sheet named `target.name` (already chosen free by the caller;
+ * `replaces` is deleted first), its table named from `target.tableBase` (unique in the workbook).
+ * Throws {@link RunCancelled} after removing the partial sheet when the user cancels.
  */
 export async function writeYearSheet(
   run: RunBatch,
-  target: { name: string; replaces?: string },
+  target: { name: string; replaces?: string; tableBase?: string },
   heading: YearHeading,
   cols: HourColumns,
   fig: YearFigures,
   control: WriteControl = {},
-): Promise<string> {
+): Promise<WrittenYear> {
   const total = cols.gain.length;
-  const width = HOUR_TABLE_COLUMNS.length;
+  const width = HOURLY_COLUMNS.length;
   const firstDataRow = TABLE_HEADER_ROW + 1;
   const blocks = rowBlocks(total, control.blockRows ?? DEFAULT_BLOCK_ROWS);
 
-  // 1. The sheet, its heading and the table header.
-  await run(async (ctx) => {
+  // 1. The sheet, its heading and the table header; the table's name, free in the workbook.
+  const tableName = await run(async (ctx) => {
     if (target.replaces) ctx.workbook.worksheets.getItem(target.replaces).delete();
     const sheet = ctx.workbook.worksheets.add(target.name);
     const head = sheet.getRange(rangeAddress(0, 0, 1 + heading.lines.length, 1));
@@ -178,8 +161,9 @@ export async function writeYearSheet(
     head.values = [[escapeFormulaText(heading.title)], ...heading.lines.map((l) => [escapeFormulaText(l)])];
     sheet.getRange(cellAddress(0, 0)).format.font.bold = true;
     const header = sheet.getRange(rangeAddress(TABLE_HEADER_ROW, 0, 1, width));
-    header.values = [HOUR_TABLE_COLUMNS.map((c) => c.header)];
+    header.values = [HOURLY_COLUMNS.map((c) => c.header)];
     await ctx.sync();
+    return uniqueTableName(target.tableBase ?? target.name, await tableNamesIn(ctx));
   });
 
   const removePartial = async (): Promise<never> => {
@@ -203,50 +187,52 @@ export async function writeYearSheet(
       const rows = block.end - block.start;
       const range = ctx.workbook.worksheets.getItem(target.name).getRange(rangeAddress(firstDataRow + block.start, 0, rows, width));
       range.values = hourRows(cols, block.start, block.end);
-      range.numberFormat = Array.from({ length: rows }, () => HOUR_TABLE_COLUMNS.map((c) => c.format));
+      range.numberFormat = Array.from({ length: rows }, () => HOURLY_COLUMNS.map((c) => c.numFmt));
       await ctx.sync();
     });
     control.onProgress?.(block.end, total);
   }
   if (checkCancel(control)) return removePartial();
 
-  // 3. Table, summary, chart, heat map, panes.
+  // 3. Table, then the formulas over it: monthly summary and chart, key figures, month × hour block.
   await run(async (ctx) => {
     const sheet = ctx.workbook.worksheets.getItem(target.name);
     const table = sheet.tables.add(rangeAddress(TABLE_HEADER_ROW, 0, total + 1, width), true);
+    table.name = tableName;
     table.style = 'TableStyleLight9';
+    const ref = tableColumnRef(tableName);
+    const year = yearOf(cols);
 
-    const monthly = monthlyRows(fig);
+    const keyRow = TABLE_HEADER_ROW + 15;
+    const areaCell = `$${columnLetters(SUMMARY_COLUMN + 1)}$${keyRow + 5 + 1}`;
+    const monthly = monthlyFormulas(ref, year, TABLE_HEADER_ROW, SUMMARY_COLUMN, areaCell);
     const monthRange = sheet.getRange(rangeAddress(TABLE_HEADER_ROW, SUMMARY_COLUMN, monthly.length, 3));
-    monthRange.values = monthly;
-    monthRange.numberFormat = monthly.map((_, i) => (i === 0 ? ['@', '@', '@'] : ['@', '0.00', '0.00']));
+    monthRange.formulas = monthly;
+    monthRange.numberFormat = monthly.map((_, i) => (i === 0 ? ['@', '@', '@'] : ['@', '#,##0.0', '0.00']));
     const monthHead = sheet.getRange(rangeAddress(TABLE_HEADER_ROW, SUMMARY_COLUMN, 1, 3));
     monthHead.format.font.bold = true;
     monthHead.format.fill.color = HEAD_FILL;
-    monthHead.format.font.color = '#FFFFFF';
-    const keys = keyFigureRows(fig);
-    const keyRow = TABLE_HEADER_ROW + monthly.length + 1;
-    const keyRange = sheet.getRange(rangeAddress(keyRow, SUMMARY_COLUMN, keys.length, 3));
-    keyRange.values = keys;
-    keyRange.numberFormat = keys.map((_, i) => ['@', i === 1 ? 'yyyy-mm-dd hh:mm' : i === 3 ? '0.000' : '0.0', '@']);
+    monthHead.format.font.color = hexColour(PALETTE.headerText);
+    const keys = keyFigureRows(ref, fig.glassArea);
+    const keyRange = sheet.getRange(rangeAddress(keyRow, SUMMARY_COLUMN, keys.length, 2));
+    keyRange.formulas = keys;
+    keyRange.numberFormat = keys.map((_, i) => ['@', i === 1 ? 'yyyy-mm-dd hh:mm' : i === 3 ? '0.000' : i === 5 ? '0.00' : '#,##0']);
 
     const chartData = sheet.getRange(rangeAddress(TABLE_HEADER_ROW, SUMMARY_COLUMN, 13, 2));
     const chart = sheet.charts.add('ColumnClustered', chartData, 'Columns');
-    chart.title.text = 'Solar gain by month (kWh)';
+    chart.title.text = 'Annual profile: solar gain by month (kWh)';
     chart.legend.position = 'Bottom';
     const chartTop = keyRow + keys.length + 1;
-    chart.setPosition(cellAddress(chartTop, SUMMARY_COLUMN), cellAddress(chartTop + 15, SUMMARY_COLUMN + 4));
+    chart.setPosition(cellAddress(chartTop, SUMMARY_COLUMN), cellAddress(chartTop + 15, SUMMARY_COLUMN + 2));
 
-    const grid = dayHourGrid(cols);
-    const heatHead = ['Day', ...Array.from({ length: 24 }, (_, h) => `${String(h + 1).padStart(2, '0')}h`)];
-    sheet.getRange(cellAddress(TABLE_HEADER_ROW - 1, HEAT_COLUMN)).values = [['Solar gain W, day × hour ending']];
+    const block = monthHourFormulas(ref, year);
+    sheet.getRange(cellAddress(TABLE_HEADER_ROW - 1, HEAT_COLUMN)).values = [['Mean solar gain (W) by month and hour ending']];
     const heatHeader = sheet.getRange(rangeAddress(TABLE_HEADER_ROW, HEAT_COLUMN, 1, 25));
-    heatHeader.values = [heatHead];
     heatHeader.format.font.bold = true;
-    const heat = sheet.getRange(rangeAddress(TABLE_HEADER_ROW + 1, HEAT_COLUMN, grid.length, 25));
-    heat.values = grid;
-    heat.numberFormat = grid.map(() => ['yyyy-mm-dd', ...new Array<string>(24).fill('0')]);
-    const cells = sheet.getRange(rangeAddress(TABLE_HEADER_ROW + 1, HEAT_COLUMN + 1, grid.length, 24));
+    const heat = sheet.getRange(rangeAddress(TABLE_HEADER_ROW, HEAT_COLUMN, block.length, 25));
+    heat.formulas = block;
+    heat.numberFormat = block.map((_, i) => ['@', ...new Array<string>(24).fill(i === 0 ? '@' : '#,##0')]);
+    const cells = sheet.getRange(rangeAddress(TABLE_HEADER_ROW + 1, HEAT_COLUMN + 1, 12, 24));
     const scale = cells.conditionalFormats.add('ColorScale');
     scale.colorScale.criteria = {
       minimum: { formula: null as unknown as string, type: 'LowestValue', color: HEAT_COLOURS.low },
@@ -260,5 +246,5 @@ export async function writeYearSheet(
     await ctx.sync();
   });
   control.onProgress?.(total, total);
-  return target.name;
+  return { sheet: target.name, table: tableName };
 }

@@ -70,6 +70,23 @@
     return { sheet: sheet, range: s.slice(i + 1) };
   }
 
+  /** True when a formula's parentheses and brackets pair up outside its string literals. */
+  function balanced(f) {
+    var depth = { '(': 0, '[': 0 };
+    var quoted = false;
+    for (var i = 0; i < f.length; i++) {
+      var ch = f.charAt(i);
+      if (ch === '"') quoted = !quoted;
+      else if (quoted) continue;
+      else if (ch === "'" && (f.charAt(i + 1) === '[' || f.charAt(i + 1) === ']' || f.charAt(i + 1) === '#' || f.charAt(i + 1) === "'")) i++;
+      else if (ch === '(' || ch === '[') depth[ch]++;
+      else if (ch === ')') depth['(']--;
+      else if (ch === ']') depth['[']--;
+      if (depth['('] < 0 || depth['['] < 0) return false;
+    }
+    return !quoted && depth['('] === 0 && depth['['] === 0;
+  }
+
   function createExcelHost(options) {
     options = options || {};
     var state = {
@@ -333,6 +350,14 @@
         });
         return proxy;
       };
+      var collection = this;
+      this.load = function (props) {
+        record(ctx, 'tables', 'load', [props], function () {
+          var sheet = resolveSheet ? resolveSheet() : undefined;
+          collection.items = state.tables.filter(function (t) { return !sheet || t.sheet === sheet; }).map(function (t) { return { name: t.name }; });
+        });
+        return collection;
+      };
       this.getItemOrNullObject = function (name) {
         var found;
         var proxy = new TableProxy(ctx, function () {
@@ -423,6 +448,26 @@
                 else if (typeof v === 'string' && /^[=+\-@]/.test(v)) s.formulaCells.add(key);
                 if (v === null || v === '') s.cells.delete(key);
                 else s.cells.set(key, v);
+              }
+            }
+          });
+        },
+      });
+      // Formulas are kept as the text written (this stand-in does not calculate); plain values pass through.
+      Object.defineProperty(range, 'formulas', {
+        set: function (formulas) {
+          record(ctx, label, 'range.formulas', [formulas], function () {
+            var s = sheetOf();
+            var box = parseA1(addr());
+            checkShape(box, formulas, 'formulas');
+            for (var r = 0; r < formulas.length; r++) {
+              for (var c = 0; c < formulas[r].length; c++) {
+                var f = formulas[r][c];
+                if (typeof f === 'number' && !isFinite(f)) throw HostError('InvalidArgument', 'A formula array holds a number that is not finite');
+                if (typeof f === 'string' && f.charAt(0) === '=' && !balanced(f)) throw HostError('InvalidArgument', 'The formula ' + f + ' has unbalanced brackets or quotes');
+                var key = cellKey(box.r0 + r, box.c0 + c);
+                if (f === null || f === '') s.cells.delete(key);
+                else s.cells.set(key, f);
               }
             }
           });

@@ -8,6 +8,9 @@
  * the core and what it writes. Screenshots go to test-artifacts/.
  */
 import * as fs from 'node:fs';
+import * as os from 'node:os';
+import ExcelJS from 'exceljs';
+import { run } from '../cli/run';
 import * as path from 'node:path';
 import type { Browser, Page } from 'playwright-core';
 import { annualSeries } from '../../src/core/gain/annual';
@@ -16,6 +19,9 @@ import { SunpaneError } from '../../src/core/common/errors';
 import type { WindowSpec } from '../../src/core/gain/window';
 import { validateWindowSpec } from '../../src/core/gain/windowSpec';
 import { EXAMPLE_SITES } from '../../src/demo/sites';
+import { CAUTION } from '../../src/outputs/caution';
+import { HOURLY_HEADERS } from '../../src/outputs/hourlyColumns';
+import { monthHourMeanFormula, monthlyGainFormula, tableColumnRef, yearFigureFormulas } from '../../src/outputs/hourlyFormulas';
 import { launchBrowser, openAddinPage } from './chromium';
 
 const HOST_JS = fs.readFileSync(path.join(__dirname, 'excel-host.js'), 'utf8');
@@ -25,6 +31,8 @@ const YEAR = 2025;
 type Cell = string | number | boolean;
 
 let browser: Browser;
+/** The pane's hourly header row, as read from its sheet by the year test (compared with the CLI's). */
+let paneHourlyHeader: string[] | undefined;
 
 beforeAll(async () => {
   fs.mkdirSync(ARTIFACTS, { recursive: true });
@@ -41,6 +49,12 @@ async function openPane(settings?: unknown): Promise<Page> {
   await page.setViewportSize({ width: 420, height: 900 });
   await page.waitForSelector('#run-year');
   return page;
+}
+
+/** True when the caution is one of the first six rows of column A of a sheet the pane wrote. */
+async function cautionRows(page: Page, sheet: string): Promise<boolean> {
+  const column = await host.read(page, sheet, 'A1:A6');
+  return column.some((r) => r[0] === CAUTION);
 }
 
 async function setField(page: Page, id: string, value: string): Promise<void> {
@@ -98,7 +112,7 @@ async function enterDemoWindow(page: Page): Promise<void> {
 describe('the task pane in Chromium with a fake Excel host', () => {
   test('the pane shows the caution, and every box and button can be reached by keyboard and has a label', async () => {
     const page = await openPane();
-    expect(await page.textContent('#caution')).toBe('Results are estimates by published methods; design decisions need a qualified engineer and the local energy code.');
+    expect(await page.textContent('#caution')).toBe(CAUTION);
     const unlabelled = await page.evaluate(() =>
       Array.from(document.querySelectorAll('input, select')).filter((el) => !document.querySelector(`label[for="${el.id}"]`)).map((el) => el.id || el.outerHTML),
     );
@@ -120,10 +134,11 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     const summary = summarizeAnnual(series);
     expect(series.hours).toBe(8760);
 
-    // Header row 5, hourly rows 6…8765 (columns A…N).
-    const header = await host.read(page, 'Demo west hourly', 'A5:N5');
-    expect(header[0][0]).toBe('Hour ending (local standard time)');
-    expect(header[0][12]).toBe('Solar gain W');
+    // Header row 5, hourly rows 6…8765 (columns A…N), in a table named after the window.
+    const tableAt = (await host.eval<{ name: string; address: string }[]>(page, 'host.tables()')).find((t) => t.name === 'Demo_west_hourly')!.address;
+    const header = await host.read(page, 'Demo west hourly', tableAt.replace(/:([A-Z]+)\d+$/, ':$15').replace(/^([A-Z]+)\d+/, '$15'));
+    paneHourlyHeader = header[0] as string[];
+    expect(header[0]).toEqual([...HOURLY_HEADERS]);
     const rows = await host.read(page, 'Demo west hourly', 'A6:N8765');
     expect(rows).toHaveLength(8760);
     expect(await host.read(page, 'Demo west hourly', 'A8766:A8766')).toEqual([['']]);
@@ -139,23 +154,26 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     // An afternoon hour with the sun on this west window is partly shaded by the overhang.
     const afternoon = rows.findIndex((r) => (r[5] as number) > 0 && (r[5] as number) < 1);
     expect(afternoon).toBeGreaterThan(-1);
-
-    // Monthly summary in P5:R18 (year row 18), in kWh; the gain column adds up to the same year.
-    const monthly = await host.read(page, 'Demo west hourly', 'P5:R18');
-    expect(monthly[0]).toEqual(['Month', 'Solar gain kWh', 'kWh per m² of glass']);
-    expect(monthly[13][0]).toBe('Year');
-    expect(Math.abs((monthly[13][1] as number) - summary.annualKWh)).toBeLessThanOrEqual(0.005);
-    for (let m = 0; m < 12; m++) expect(Math.abs((monthly[m + 1][1] as number) - summary.monthlyKWh[m])).toBeLessThanOrEqual(0.005);
     const columnSum = rows.reduce((s, r) => s + (r[12] as number), 0) / 1000;
     expect(Math.abs(columnSum - summary.annualKWh)).toBeLessThan(0.5);
-    const peak = await host.read(page, 'Demo west hourly', 'P20:Q21');
-    expect(Math.abs((peak[0][1] as number) - summary.peakW)).toBeLessThanOrEqual(0.05);
-    expect(peak[1][1] as number).toBeCloseTo(summary.peakStamp, 5);
 
-    // Heat map: day × hour of the gain, rows = days.
-    const heat = await host.read(page, 'Demo west hourly', 'V6:AT6');
-    expect(heat[0][0] as number).toBe(Math.floor(series.stampSerial[0]));
-    expect(Math.abs((heat[0][16] as number) - series.gain[15])).toBeLessThanOrEqual(0.5);
+    // Monthly summary in P5:R18 and the key figures: formulas over the table, the very text that
+    // LibreOffice recalculates to the core's values in the demo workbook (tests/libreoffice).
+    const ref = tableColumnRef('Demo_west_hourly');
+    const monthly = await host.read(page, 'Demo west hourly', 'P5:R18');
+    expect(monthly[0]).toEqual(['Month', 'Solar gain (kWh)', 'Per glass area (kWh/m²)']);
+    for (let m = 0; m < 12; m++) expect(monthly[m + 1][1]).toBe(`=${monthlyGainFormula(ref, YEAR, m + 1)}`);
+    expect(monthly[13]).toEqual(['Year', '=SUM(Q6:Q17)', '=IF($Q$25>0,Q18/$Q$25,0)']);
+    const keys = await host.read(page, 'Demo west hourly', 'P20:Q25');
+    expect(keys[0]).toEqual(['Peak gain (W)', `=${yearFigureFormulas(ref).peakW}`]);
+    expect(keys[1]).toEqual(['Peak at (hour ending)', `=${yearFigureFormulas(ref).peakStamp}`]);
+    expect(keys[5][0]).toBe('Glass area (m²)');
+    expect(keys[5][1] as number).toBeCloseTo(series.glassArea, 3);
+
+    // Month × hour block of mean gain, T5:AR17, formulas too.
+    const block = await host.read(page, 'Demo west hourly', 'T5:AR17');
+    expect(block[0][0]).toBe('Month');
+    expect(block[6][16]).toBe(`=${monthHourMeanFormula(ref, YEAR, 6, 16)}`);
 
     // The host's record: blocks of ≤ 2,000 rows, each request under 5 MB, a table, a chart, a colour scale, frozen header.
     const syncs = await host.eval<{ bytes: number; valueRows: number[]; refused?: boolean }[]>(page, 'host.state.syncs');
@@ -164,16 +182,41 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     expect(blockRows.reduce((a, b) => a + b, 0)).toBe(8760);
     expect(Math.max(...blockRows)).toBeLessThanOrEqual(2000);
     const tables = await host.eval<{ name: string; sheet: string; address: string }[]>(page, 'host.tables()');
-    expect(tables).toContainEqual(expect.objectContaining({ sheet: 'Demo west hourly', address: 'A5:N8765' }));
-    const charts = await host.eval<{ type: string; source: string }[]>(page, 'host.charts("Demo west hourly")');
-    expect(charts).toHaveLength(1);
-    const cfs = await host.eval<{ type: string; criteria: { minimum: { color: string } } }[]>(page, 'host.conditionalFormats("Demo west hourly")');
-    expect(cfs[0].type).toBe('ColorScale');
+    expect(tables).toEqual([expect.objectContaining({ name: 'Demo_west_hourly', sheet: 'Demo west hourly', address: 'A5:N8765' })]);
+    const charts = await host.eval<{ type: string; source: string; title: string }[]>(page, 'host.charts("Demo west hourly")');
+    expect(charts).toEqual([expect.objectContaining({ type: 'ColumnClustered', source: 'P5:Q17', title: 'Annual profile: solar gain by month (kWh)' })]);
+    const cfs = await host.eval<{ type: string; address: string; criteria: { minimum: { color: string } } }[]>(page, 'host.conditionalFormats("Demo west hourly")');
+    expect(cfs).toEqual([expect.objectContaining({ type: 'ColorScale', address: 'U6:AR17' })]);
     expect(cfs[0].criteria.minimum.color).toBe('#F7F3E8');
+    expect(await cautionRows(page, 'Demo west hourly')).toBe(true);
     expect(await host.eval<number>(page, 'host.sheet("Demo west hourly").frozenRows')).toBe(5);
     const calls = await host.eval<{ op: string }[]>(page, 'host.state.calls');
     expect(calls.some((c) => c.op === 'suspendApiCalculationUntilNextSync')).toBe(true);
     await page.close();
+  });
+
+  test('the hourly table has one header row — the same words, order and units — in the pane, the CSV, the workbook and the demo', async () => {
+    if (!paneHourlyHeader) throw new Error("the pane's header row is read by the previous test, which did not get that far");
+    const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'sunpane-headers-'));
+    const windowFile = path.join(__dirname, '..', '..', 'examples', 'east-office.json');
+    expect((await run('table', '--window', windowFile, '--out', path.join(dir, 'east.csv'))).code).toBe(0);
+    const csvHeader = fs.readFileSync(path.join(dir, 'east.csv'), 'utf8').split('\n')[0].split(',');
+    expect((await run('table', '--window', windowFile, '--out', path.join(dir, 'east.xlsx'))).code).toBe(0);
+    expect((await run('demo', '--out', dir)).code).toBe(0);
+    /** The header row of the hourly table (found by its place in the file, not by its words). */
+    const xlsxHeader = async (file: string, sheet: string) => {
+      const wb = new ExcelJS.Workbook();
+      await wb.xlsx.readFile(file);
+      const ws = wb.getWorksheet(sheet)!;
+      const ref = (ws.getTables()[0] as unknown as { table: { tableRef: string } }).table.tableRef;
+      const [first, last] = ref.split(':').map((a) => ws.getCell(a));
+      const row = ws.getRow(Number(first.row));
+      return Array.from({ length: Number(last.col) - Number(first.col) + 1 }, (_, k) => row.getCell(Number(first.col) + k).value);
+    };
+    const workbookHeader = await xlsxHeader(path.join(dir, 'east.xlsx'), 'Hourly');
+    const demoHeader = await xlsxHeader(path.join(dir, 'sunpane-demo.xlsx'), 'Hourly BW-S1');
+    expect(paneHourlyHeader.length).toBe(14);
+    expect({ csv: csvHeader, workbook: workbookHeader, demo: demoHeader }).toEqual({ csv: paneHourlyHeader, workbook: paneHourlyHeader, demo: paneHourlyHeader });
   });
 
   test('an earlier result sheet is never overwritten without asking, and a user sheet of the same name is left alone', async () => {
@@ -242,7 +285,9 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     await page.click('#run-schedule');
     await waitForStatus(page, /Wrote|problem/);
     const rows = await host.read(page, 'Schedule results', 'A5:I8');
-    expect(rows[0]).toEqual(['Window', 'Faces °', 'Glass m²', 'Solar gain kWh/yr', 'kWh per m² of glass', 'Peak gain W', 'Peak at (hour ending)', 'Mean glass-in-sun share', 'Hours with missing weather']);
+    expect(rows[0]).toEqual(['Window', 'Faces (°)', 'Glass area (m²)', 'Solar gain (kWh/yr)', 'Per glass area (kWh/m²·yr)', 'Peak gain (W)', 'Peak at (hour ending)', 'Mean sunlit fraction, sun on the wall (0-1)', 'Weather missing (h)']);
+    expect(await cautionRows(page, 'Schedule results')).toBe(true);
+    expect(await host.eval<{ name: string }[]>(page, 'host.tables()')).toContainEqual(expect.objectContaining({ name: 'Schedule_results', sheet: 'Schedule results' }));
     expect(rows.slice(1).map((r) => r[0])).toEqual(['N1', 'E1', 'W1']);
     const east: WindowSpec = {
       name: 'E1',
@@ -296,7 +341,9 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     await page.click('#run-compare');
     await waitForStatus(page, /Wrote|refused|Fix|option/);
     const rows = await host.read(page, 'Window A options', 'A7:E11');
-    expect(rows[0]).toEqual(['Shading option', 'Solar gain kWh/yr', 'Peak gain W', 'Cut vs no shading %', 'Shaded share of sun-on-wall hours']);
+    expect(rows[0]).toEqual(['Shading option', 'Solar gain (kWh/yr)', 'Peak gain (W)', 'Cut vs no shading (%)', 'Shaded share, sun on the wall (0-1)']);
+    expect(await cautionRows(page, 'Window A options')).toBe(true);
+    expect(await host.eval<{ name: string }[]>(page, 'host.tables()')).toContainEqual(expect.objectContaining({ name: 'Window_A_options', sheet: 'Window A options' }));
     expect(rows.slice(1).map((r) => r[0])).toEqual(['No outside shading', 'Short overhang', 'Deep overhang', 'Overhang and fins']);
     const all = await host.read(page, 'Window A options', 'A8:E12');
     expect(all[4][0]).toBe('Deep set-back');

@@ -7,6 +7,8 @@ import { spawnSync } from 'node:child_process';
 import * as fs from 'node:fs';
 import * as path from 'node:path';
 import ExcelJS from 'exceljs';
+import { CAUTION } from '../../src/outputs/caution';
+import { sheetsWithoutCaution } from '../support/caution';
 import { EXAMPLES, ROOT, expectSaved, run, tempDir } from './run';
 
 const WINDOW = path.join(EXAMPLES, 'east-office.json');
@@ -54,6 +56,7 @@ describe('sunpane table', () => {
     const lines = fs.readFileSync(out, 'utf8').trimEnd().split('\n');
     expect(lines.length).toBe(1 + 8760);
     expectSaved('table-east-head.txt', lines.slice(0, 25).join('\n'));
+    expect(r.out.split('\n').at(-1)).toBe(CAUTION);
     expect(r.out).toMatch(/^East meeting room: \d+\.\d kWh in 2026, peak \d+ W in the hour ending 2026-\d\d-\d\dT\d\d:00, \d+ sunlit hours\nwrote /);
   });
 
@@ -64,10 +67,14 @@ describe('sunpane table', () => {
     expect(r.code).toBe(0);
     const wb = new ExcelJS.Workbook();
     await wb.xlsx.readFile(out);
-    expect(wb.worksheets.map((w) => w.name)).toEqual(['Monthly', 'Heat map', 'Hourly']);
+    expect(wb.worksheets.map((w) => w.name)).toEqual(['Contents', 'Monthly', 'Heat map', 'Hourly']);
     const hourly = wb.getWorksheet('Hourly')!;
-    expect(hourly.rowCount).toBe(8761);
-    expect(hourly.getCell('G12').value).toBe(311.7); // direct normal in the hour ending 2026-01-01 11:00 (weather file line 13)
+    // Title, note, caution, a blank row, then the table: header in row 5, the hour ending 01:00 in row 6.
+    expect(hourly.rowCount).toBe(5 + 8760);
+    expect(hourly.getCell('G16').value).toBe(311.7); // direct normal in the hour ending 2026-01-01 11:00 (weather file line 13)
+    // The caution on every sheet and at the end of the printed summary.
+    expect(sheetsWithoutCaution(wb)).toEqual([]);
+    expect(r.out.split('\n').at(-1)).toBe(CAUTION);
     expect(fs.readdirSync(dir)).toEqual(['east.xlsx']);
   });
 
@@ -184,11 +191,16 @@ describe('sunpane schedule', () => {
     await wb.xlsx.readFile(out);
     const sheet = wb.getWorksheet('Summary')!;
     expect(sheet.getTables().length).toBe(1);
-    const total = sheet.getCell('E4').value as ExcelJS.CellFormulaValue;
-    expect(total.formula).toBe('SUM(E2:E3)');
-    const e2 = sheet.getCell('E2').value as number;
-    const e3 = sheet.getCell('E3').value as number;
+    // Title, caution, a blank row; the table's header in row 4, the windows in rows 5 and 6.
+    const total = sheet.getCell('E7').value as ExcelJS.CellFormulaValue;
+    expect(total.formula).toBe('SUM(E5:E6)');
+    const e2 = sheet.getCell('E5').value as number;
+    const e3 = sheet.getCell('E6').value as number;
     expect(total.result).toBeCloseTo(e2 + e3, 9);
+    // The caution on every sheet and at the end of the printed summary.
+    expect(wb.worksheets.map((w) => w.name)).toEqual(['Contents', 'Summary']);
+    expect(sheetsWithoutCaution(wb)).toEqual([]);
+    expect(r.out.split('\n').at(-1)).toBe(CAUTION);
   });
 
   it('names the line, window and column of a row with a required field missing', async () => {

@@ -14,11 +14,11 @@ import * as path from 'node:path';
 /** CSV export options: comma, double quote, UTF-8, from line 1, raw values (not as shown), every sheet to its own file (LibreOffice ≥ 7.2). */
 export const CSV_ALL_SHEETS = 'csv:Text - txt - csv (StarCalc):44,34,76,1,,0,false,true,false,false,false,-1';
 
-// Recalculation on load: 0 = always (1 never, 2 ask) for OOXML and ODF files.
-const PROFILE_SETTINGS = `<?xml version="1.0" encoding="UTF-8"?>
+// Recalculation on load: 0 = always, 1 = never (2 ask) for OOXML and ODF files.
+const profileSettings = (recalc: boolean) => `<?xml version="1.0" encoding="UTF-8"?>
 <oor:items xmlns:oor="http://openoffice.org/2001/registry" xmlns:xs="http://www.w3.org/2001/XMLSchema" xmlns:xsi="http://www.w3.org/2001/XMLSchema-instance">
-<item oor:path="/org.openoffice.Office.Calc/Formula/Load"><prop oor:name="OOXMLRecalcMode" oor:op="fuse"><value>0</value></prop></item>
-<item oor:path="/org.openoffice.Office.Calc/Formula/Load"><prop oor:name="ODFRecalcMode" oor:op="fuse"><value>0</value></prop></item>
+<item oor:path="/org.openoffice.Office.Calc/Formula/Load"><prop oor:name="OOXMLRecalcMode" oor:op="fuse"><value>${recalc ? 0 : 1}</value></prop></item>
+<item oor:path="/org.openoffice.Office.Calc/Formula/Load"><prop oor:name="ODFRecalcMode" oor:op="fuse"><value>${recalc ? 0 : 1}</value></prop></item>
 </oor:items>
 `;
 
@@ -52,12 +52,15 @@ export interface Conversion {
  * @param input - file to open
  * @param convertTo - the `--convert-to` argument, e.g. `xlsx`, `ods`, `pdf` or {@link CSV_ALL_SHEETS}
  * @param outDir - folder for the output (created; should be empty)
+ * @param options - `recalc: false` shows the results stored in the file (what LibreOffice itself
+ *   computed when it wrote an ods, or our cached results) instead of recalculating every formula
+ *   on load, for checks of shape, print and drawing that need no new numbers
  * @returns the files that appeared in `outDir`
  */
-export function convert(input: string, convertTo: string, outDir: string): Conversion {
+export function convert(input: string, convertTo: string, outDir: string, options: { recalc?: boolean } = {}): Conversion {
   const profile = fs.mkdtempSync(path.join(os.tmpdir(), 'sunpane-lo-profile-'));
   fs.mkdirSync(path.join(profile, 'user'), { recursive: true });
-  fs.writeFileSync(path.join(profile, 'user', 'registrymodifications.xcu'), PROFILE_SETTINGS);
+  fs.writeFileSync(path.join(profile, 'user', 'registrymodifications.xcu'), profileSettings(options.recalc ?? true));
   fs.mkdirSync(outDir, { recursive: true });
   try {
     const r = spawnSync(

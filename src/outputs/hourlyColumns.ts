@@ -1,0 +1,67 @@
+/**
+ * The hourly table's columns: one set of header words, one order and one unit notation (the unit
+ * in parentheses after the words) for the pane's sheet, the command line's CSV and workbook, and
+ * the demo workbook. Each column is a field of the core's annual series.
+ */
+
+/** Fields of an annual series that the hourly table shows, in table order. */
+export type HourlyKey =
+  | 'stampSerial'
+  | 'sunAltitude'
+  | 'sunAzimuth'
+  | 'incidence'
+  | 'profileAngle'
+  | 'sunlitFraction'
+  | 'dni'
+  | 'dhi'
+  | 'beam'
+  | 'sky'
+  | 'ground'
+  | 'shgc'
+  | 'gain'
+  | 'missing';
+
+/** One hourly column. */
+export interface HourlyColumn {
+  key: HourlyKey;
+  /** Header words with the unit in parentheses. */
+  header: string;
+  /** Number format of the column's cells in a workbook. */
+  numFmt: string;
+  /** Decimals kept in CSV output. */
+  csvDecimals: number;
+  /** Decimals of the values the pane sends to Excel (smaller requests; the format shows fewer). */
+  sheetDecimals: number;
+}
+
+const ANGLE = '0.00';
+const IRRADIANCE = '0.0';
+const FRACTION = '0.000';
+
+/** The hourly columns, in order. */
+export const HOURLY_COLUMNS: readonly HourlyColumn[] = Object.freeze([
+  { key: 'stampSerial', header: 'Hour ending (local standard time)', numFmt: 'yyyy-mm-dd hh:mm', csvDecimals: 6, sheetDecimals: 6 },
+  { key: 'sunAltitude', header: 'Sun altitude (°)', numFmt: ANGLE, csvDecimals: 3, sheetDecimals: 2 },
+  { key: 'sunAzimuth', header: 'Sun azimuth (°)', numFmt: ANGLE, csvDecimals: 3, sheetDecimals: 2 },
+  { key: 'incidence', header: 'Incidence angle (°)', numFmt: ANGLE, csvDecimals: 3, sheetDecimals: 2 },
+  { key: 'profileAngle', header: 'Profile angle (°)', numFmt: ANGLE, csvDecimals: 3, sheetDecimals: 2 },
+  { key: 'sunlitFraction', header: 'Sunlit fraction (0-1)', numFmt: FRACTION, csvDecimals: 4, sheetDecimals: 3 },
+  { key: 'dni', header: 'Direct normal (W/m²)', numFmt: IRRADIANCE, csvDecimals: 2, sheetDecimals: 1 },
+  { key: 'dhi', header: 'Diffuse horizontal (W/m²)', numFmt: IRRADIANCE, csvDecimals: 2, sheetDecimals: 1 },
+  { key: 'beam', header: 'Beam on glass (W/m²)', numFmt: IRRADIANCE, csvDecimals: 2, sheetDecimals: 1 },
+  { key: 'sky', header: 'Sky diffuse on glass (W/m²)', numFmt: IRRADIANCE, csvDecimals: 2, sheetDecimals: 1 },
+  { key: 'ground', header: 'Ground-reflected on glass (W/m²)', numFmt: IRRADIANCE, csvDecimals: 2, sheetDecimals: 1 },
+  { key: 'shgc', header: 'SHGC at incidence (0-1)', numFmt: FRACTION, csvDecimals: 4, sheetDecimals: 3 },
+  { key: 'gain', header: 'Solar gain (W)', numFmt: '#,##0', csvDecimals: 2, sheetDecimals: 1 },
+  { key: 'missing', header: 'Weather missing (1 = yes)', numFmt: '0', csvDecimals: 0, sheetDecimals: 0 },
+] as HourlyColumn[]);
+
+/** The header row, in order. */
+export const HOURLY_HEADERS: readonly string[] = Object.freeze(HOURLY_COLUMNS.map((c) => c.header));
+
+/** The column of `key`. */
+export function hourlyColumn(key: HourlyKey): HourlyColumn {
+  const c = HOURLY_COLUMNS.find((x) => x.key === key);
+  if (!c) throw new Error(`no hourly column ${key}`);
+  return c;
+}

@@ -1,0 +1,63 @@
+/**
+ * Worksheet formulas over the hourly table, the same text for the pane (Excel JavaScript API) and
+ * the workbooks the command line writes, so that a summary follows the rows it sums: edit an hour
+ * and the months, the year and the month × hour block follow. They refer to the table's columns
+ * by structured reference (`Table[[Header]]`), which grows with the table.
+ *
+ * Month of a row: the month of the middle of its hour, as the core's annual summary counts it. A
+ * row is stamped at the END of its hour, so the hour ending at midnight on the 1st belongs to the
+ * month before: stamps after DATE(y, m, 1) and up to DATE(y, m + 1, 1).
+ */
+import { type HourlyKey, hourlyColumn } from './hourlyColumns';
+
+export type { HourlyKey };
+
+/** How a formula names a column of the hourly table. */
+export type ColumnRef = (key: HourlyKey) => string;
+
+/**
+ * A structured reference to a column of an Excel table. In a column specifier the characters
+ * `[ ] # '` are escaped by a preceding `'`; the double brackets let any other character stand.
+ */
+export function tableColumnRef(table: string): ColumnRef {
+  return (key) => `${table}[[${hourlyColumn(key).header.replace(/(['#[\]])/g, "'$1")}]]`;
+}
+
+/** The sum of column `key` over the rows of month `month` (1…12) of `year`. */
+export function monthlySumFormula(ref: ColumnRef, key: HourlyKey, year: number, month: number): string {
+  const t = ref('stampSerial');
+  return `SUMIFS(${ref(key)},${t},">"&DATE(${year},${month},1),${t},"<="&DATE(${year},${month + 1},1))`;
+}
+
+/** Solar gain of month `month` (1…12) of `year` [kWh]. */
+export function monthlyGainFormula(ref: ColumnRef, year: number, month: number): string {
+  return `${monthlySumFormula(ref, 'gain', year, month)}/1000`;
+}
+
+/**
+ * Mean solar gain [W] in the hour ending at `hourEnding` (1…24) over the days of month `month`:
+ * the rows whose mid-hour falls in that month and that hour of the day, summed, over the days of
+ * the month.
+ */
+export function monthHourMeanFormula(ref: ColumnRef, year: number, month: number, hourEnding: number): string {
+  const mid = `(${ref('stampSerial')}-1/48)`;
+  return `SUMPRODUCT((MONTH(${mid})=${month})*(HOUR(${mid})=${hourEnding - 1})*${ref('gain')})/DAY(DATE(${year},${month + 1},0))`;
+}
+
+/** The year's figures as formulas over the table, by the core summary's definitions. */
+export function yearFigureFormulas(ref: ColumnRef): {
+  peakW: string;
+  peakStamp: string;
+  sunlitHours: string;
+  meanSunlitFraction: string;
+  missingHours: string;
+} {
+  const g = ref('gain');
+  return {
+    peakW: `MAX(${g})`,
+    peakStamp: `INDEX(${ref('stampSerial')},MATCH(MAX(${g}),${g},0))`,
+    sunlitHours: `COUNTIFS(${ref('beam')},">0",${ref('sunlitFraction')},">0",${ref('missing')},0)`,
+    meanSunlitFraction: `IFERROR(AVERAGEIFS(${ref('sunlitFraction')},${ref('sunAltitude')},">0",${ref('incidence')},"<90"),0)`,
+    missingHours: `SUM(${ref('missing')})`,
+  };
+}
