@@ -1,7 +1,7 @@
 /**
  * Sunpane's own colour tokens for what it writes into workbooks (sheet headings, table headers,
  * colour scales, chart series), as six-digit hex RGB. The pane's own controls follow the Office
- * theme (Fluent design tokens, src/taskpane/theme.ts); the data colours are these, everywhere.
+ * theme (Fluent design tokens); the data colours are these, everywhere.
  */
 export const PALETTE = Object.freeze({
   /** Body text and chart axes. */
