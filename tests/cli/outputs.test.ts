@@ -49,10 +49,11 @@ describe('labels from the user are written as text, never as formulas', () => {
     const wb = new ExcelJS.Workbook();
     await wb.xlsx.readFile(out);
     const ws = wb.getWorksheet('Summary')!;
-    const labels = HOSTILE.map((_, i) => ws.getCell(2 + i, 1));
+    // Under the title and the caution, the table's header is in row 4 and the windows start in row 5.
+    const labels = HOSTILE.map((_, i) => ws.getCell(5 + i, 1));
     expect(labels.map((c) => c.value)).toEqual(HOSTILE.map((h) => `'${h}`));
     for (const c of labels) expect(c.type).toBe(ExcelJS.ValueType.String);
-    for (let row = 2; row < 2 + HOSTILE.length; row++) {
+    for (let row = 5; row < 5 + HOSTILE.length; row++) {
       ws.getRow(row).eachCell((c) => expect(c.type).not.toBe(ExcelJS.ValueType.Formula));
     }
   });
@@ -85,7 +86,7 @@ describe('existing outputs are kept', () => {
     const out = writeTemp(dir, 's.csv', 'earlier result');
     const r = await run('schedule', '--in', path.join(EXAMPLES, 'windows.csv'), '--out', out, '--force');
     expect(r.code).toBe(0);
-    expect(fs.readFileSync(out, 'utf8')).toMatch(/^window,/);
+    expect(fs.readFileSync(out, 'utf8')).toMatch(/^Window,/);
   });
 
   it('a read-only output is never replaced, even with --force', async () => {
