@@ -18,23 +18,24 @@ import { CliInputError } from './cliError';
 import { csvLine, formatFixed, parseCsv } from './csv';
 import { outputKind, parseFlags, requireFlag } from './flags';
 import { ProgressBar } from './progress';
-import { weatherColumns } from './table';
-import { describeMissing, readWeatherFile } from './weatherCsv';
+import { WEATHER_FLAGS, checkWeatherTable, readWeatherTable, weatherRequest } from './weatherCsv';
 import { windowFromJson } from './windowJson';
 import { NUMBER_FORMATS, type TableCell, addDataTable, addSheetHeading, address, fillContentsSheet, freezeAt, newWorkbook, saveWorkbook, serialToCellDate, setFormula, setLabel } from './workbook';
 import { type MatchedHeaders, type ScheduleColumn, SCHEDULE_COLUMNS, SITE_KEY, columnForHeader, columnsForPath, headerKey, matchHeaders, requiredColumns, splitListCell } from '../schedule/columns';
 
-const SCHEDULE_FLAGS = { in: true, weather: true, dni: true, dhi: true, ghi: true, out: true, force: false, help: false } as const;
+const SCHEDULE_FLAGS = { in: true, ...WEATHER_FLAGS, out: true, force: false, help: false } as const;
 
-export const SCHEDULE_HELP = `usage: sunpane schedule --in FILE.csv|FILE.xlsx [--weather FILE.csv (--dni COL --dhi COL | --ghi COL)] --out FILE.xlsx|FILE.csv
+export const SCHEDULE_HELP = `usage: sunpane schedule --in FILE.csv|FILE.xlsx [--weather FILE.csv (--dni COL --dhi COL | --ghi COL) ...] --out FILE.xlsx|FILE.csv
 
 Works out each window's year and writes one summary row per window: annual and monthly gain
 [kWh], peak hour [W] and when, sunlit hours, mean sunlit fraction, missing hours.
 
   --in FILE      the window schedule: a CSV file, or the first sheet of a workbook; a header row,
                  then one row per window; blank cells take the default (in brackets below)
-  --weather FILE hourly weather for every window (as in \`sunpane table --help\`); without it each
-                 row needs a clear sky (Linke turbidity, or both optical depths) or an example site
+  --weather FILE hourly weather for every window, with the options of \`sunpane table --help\`
+                 (--dni, --dhi, --ghi, --time, --hour-stamp, --typical-year, --units, --decimal,
+                 --max-unusable), checked for each window's year and site; without it each row
+                 needs a clear sky (Linke turbidity, or both optical depths) or an example site
   --out FILE     .csv or .xlsx (a table with SUM/MAX totals)
   --force        replace FILE if it exists (a read-only file is never replaced)
   --help         this text
@@ -312,6 +313,15 @@ export function addSummaryTable(ws: ExcelJS.Worksheet, tableName: string, topRow
   };
 }
 
+/** A clear sky standing in while a window's year and site are checked before its weather is read. */
+const STAND_IN_WEATHER: Weather = { kind: 'ineichenClearSky', linkeTurbidity: [3] };
+
+/** What the weather check depends on: the year and everything of the site that moves the sun. */
+function siteKey(spec: WindowSpec): string {
+  const { latitude, longitude, utcOffset, elevation, pressure, temperature } = spec.site;
+  return [spec.year, latitude, longitude, utcOffset, elevation, pressure, temperature].join('|');
+}
+
 /** Computes one window's year and summary. */
 export function windowResult(spec: WindowSpec): WindowResult {
   const series = annualSeries(spec);
@@ -331,7 +341,6 @@ export async function scheduleCommand(argv: readonly string[], io: Output): Prom
   const force = { force: flags.has('force') };
   checkOutput(out, force);
   const inKind = /\.xlsx$/i.test(input) ? 'xlsx' : 'csv';
-  const columns = weatherColumns(flags);
   let rows: ScheduleRow[];
   if (inKind === 'xlsx') rows = await scheduleFromXlsx(input);
   else {
@@ -345,17 +354,24 @@ export async function scheduleCommand(argv: readonly string[], io: Output): Prom
   }
   if (rows.length === 0) throw new CliInputError(`${input} has a header but no windows`);
   const specs = rows.map((row) => ({ row, ...windowFromRow(row) }));
-  const weatherByYear = new Map<number, Weather>();
-  const weatherFile = flags.get('weather');
+  const weather = weatherRequest(flags);
+  const table = weather ? readWeatherTable(weather.file, weather.columns) : undefined;
+  // One check per year and site (the checks look at the sun there); each report printed once.
+  const weatherBySite = new Map<string, Weather>();
+  const reported = new Set<string>();
   for (const s of specs) {
-    if (weatherFile !== undefined && columns !== undefined) {
-      let w = weatherByYear.get(s.spec.year);
+    if (weather && table) {
+      validateWindowSpec({ ...s.spec, weather: STAND_IN_WEATHER });
+      const key = siteKey(s.spec);
+      let w = weatherBySite.get(key);
       if (!w) {
-        const read = readWeatherFile(weatherFile, s.spec.year, columns);
-        const note = describeMissing(weatherFile, read);
-        if (note) io.err(note);
-        w = read.weather;
-        weatherByYear.set(s.spec.year, w);
+        const checked = checkWeatherTable(table, weather.file, s.spec.year, s.spec.site, weather.reading);
+        for (const line of checked.report) {
+          if (!reported.has(line)) io.err(line);
+          reported.add(line);
+        }
+        w = checked.check.weather!;
+        weatherBySite.set(key, w);
       }
       s.spec.weather = w;
     } else if (!s.hasWeather) {

@@ -9,24 +9,20 @@ import { CAUTION } from '../outputs/caution';
 import type { Output } from './call';
 import { addHeatMapSheet, addHourlySheet, addMonthlySheet, hourlyCsv } from './annualSheets';
 import { checkOutput, writeFileAtomic } from './atomicWrite';
-import { CliInputError, CliUsageError } from './cliError';
-import { type Flags, outputKind, parseFlags, requireFlag } from './flags';
+import { CliInputError } from './cliError';
+import { outputKind, parseFlags, requireFlag } from './flags';
 import { ProgressBar } from './progress';
-import { type WeatherColumns, describeMissing, readWeatherFile } from './weatherCsv';
+import { WEATHER_FLAGS, WEATHER_HELP, type WeatherRequest, checkWeatherTable, readWeatherTable, weatherRequest } from './weatherCsv';
 import { readWindowFile } from './windowJson';
 import { fillContentsSheet, newWorkbook, saveWorkbook } from './workbook';
 
-export const TABLE_HELP = `usage: sunpane table --window FILE.json [--weather FILE.csv (--dni COL --dhi COL | --ghi COL)] --out FILE.xlsx|FILE.csv
+export const TABLE_HELP = `usage: sunpane table --window FILE.json [--weather FILE.csv (--dni COL --dhi COL | --ghi COL) ...] --out FILE.xlsx|FILE.csv
 
 Writes one window's hourly year: 8760 rows (8784 in a leap year), each stamped at the END of its
 hour in local standard time, the sun taken at mid-hour.
 
   --window FILE.json   the window (see "window file" below)
-  --weather FILE.csv   hourly weather, one row per hour of the window's year (optional header line);
-                       a blank, non-numeric, negative or above-2000 value marks its hour missing
-  --dni COL --dhi COL  columns of direct normal and diffuse horizontal irradiance [W/m²]
-  --ghi COL            or a column of global horizontal irradiance [W/m²] (split by Erbs et al. 1982)
-                       COL is a header name or a 1-based column number
+${WEATHER_HELP}
   --out FILE           .csv: the hourly columns; .xlsx: hourly table, monthly summary, heat map
   --force              replace FILE if it exists (a read-only file is never replaced)
   --help               this text
@@ -41,7 +37,8 @@ gap, extensionAbove, extensionBelow}, revealDepth, skyline [°...]}, groundAlbed
 skyModel ("perez1990"), weather {kind: "ineichenClearSky", linkeTurbidity} or
 {kind: "ashraeClearSky", tauB, tauD}. Defaults in brackets. Example: examples/east-office.json
 
-Exit codes: 0 done, 1 bad input (the message names the field, row or line), 2 wrong usage.`;
+Exit codes: 0 done, 1 bad input (the message names the field, row or line; weather that cannot be
+used), 2 wrong usage.`;
 
 /** What each sheet of the `table` workbook holds. */
 export const TABLE_CONTENTS = [
@@ -51,41 +48,34 @@ export const TABLE_CONTENTS = [
   { sheet: 'Hourly', holds: 'The hourly year as a table: sun position, incidence and profile angles, sunlit fraction, irradiance, SHGC at incidence and solar gain, hour-ending in local standard time.' },
 ] as const;
 
-const TABLE_FLAGS = { window: true, weather: true, dni: true, dhi: true, ghi: true, out: true, force: false, help: false } as const;
+const TABLE_FLAGS = { window: true, ...WEATHER_FLAGS, out: true, force: false, help: false } as const;
 
-/** Reads the --weather/--dni/--dhi/--ghi flags into a column choice; usage errors for bad combinations. */
-export function weatherColumns(flags: Flags): WeatherColumns | undefined {
-  const [dni, dhi, ghi] = [flags.get('dni'), flags.get('dhi'), flags.get('ghi')];
-  if (!flags.has('weather')) {
-    if (dni !== undefined || dhi !== undefined || ghi !== undefined) throw new CliUsageError('--dni, --dhi and --ghi pick columns of a --weather file: give --weather FILE.csv too');
-    return undefined;
-  }
-  if (ghi !== undefined && (dni !== undefined || dhi !== undefined)) throw new CliUsageError('give either --dni and --dhi, or --ghi, not both');
-  if (ghi !== undefined) return { ghi };
-  if (dni === undefined || dhi === undefined) throw new CliUsageError('--weather needs its columns: --dni COL --dhi COL, or --ghi COL');
-  return { dni, dhi };
-}
-
-/** A window with its weather resolved and validated, and a note on missing hours (for stderr). */
+/** A window with its weather resolved and validated, and the weather report (for stderr). */
 export interface ResolvedWindow {
   spec: WindowSpec;
-  missingNote?: string;
+  /** Lines about the weather file (problems within the limit, notes); empty when nothing to say. */
+  weatherReport: string[];
 }
 
-/** Reads the window file and the weather file (if any); validates the result. */
-export function resolveWindow(windowFile: string, weatherFile: string | undefined, columns: WeatherColumns | undefined): ResolvedWindow {
+/**
+ * Reads the window file and the weather file (if any), checks the weather for the window's year
+ * and site (src/io/weather.ts), validates the result.
+ * @throws CliInputError with the weather report when the weather cannot be used
+ */
+export function resolveWindow(windowFile: string, weather: WeatherRequest | undefined): ResolvedWindow {
   const { spec, hasWeather } = readWindowFile(windowFile);
-  let missingNote: string | undefined;
-  if (weatherFile !== undefined && columns !== undefined) {
-    if (typeof spec.year !== 'number' || !Number.isInteger(spec.year)) validateWindowSpec(spec);
-    const w = readWeatherFile(weatherFile, spec.year, columns);
-    spec.weather = w.weather;
-    missingNote = describeMissing(weatherFile, w);
+  let weatherReport: string[] = [];
+  if (weather !== undefined) {
+    // The year and the site are checked first: the weather is checked against them.
+    validateWindowSpec({ ...spec, weather: { kind: 'ineichenClearSky', linkeTurbidity: [3] } });
+    const checked = checkWeatherTable(readWeatherTable(weather.file, weather.columns), weather.file, spec.year, spec.site, weather.reading);
+    spec.weather = checked.check.weather!;
+    weatherReport = checked.report;
   } else if (!hasWeather) {
     throw new CliInputError(`${windowFile}: the window has no "weather": add a clear-sky model ("weather": {"kind": "ineichenClearSky", "linkeTurbidity": 3}) or give hourly weather with --weather FILE.csv`);
   }
   validateWindowSpec(spec);
-  return { spec, missingNote };
+  return { spec, weatherReport };
 }
 
 /** The text `table` prints when done: the window's year in one line, and where it went. */
@@ -106,9 +96,8 @@ export async function tableCommand(argv: readonly string[], io: Output): Promise
   const kind = outputKind(out, ['csv', 'xlsx']);
   const force = { force: flags.has('force') };
   checkOutput(out, force);
-  const columns = weatherColumns(flags);
-  const { spec, missingNote } = resolveWindow(windowFile, flags.get('weather'), columns);
-  if (missingNote) io.err(missingNote);
+  const { spec, weatherReport } = resolveWindow(windowFile, weatherRequest(flags));
+  for (const line of weatherReport) io.err(line);
   const series = annualSeries(spec);
   const summary = summarizeAnnual(series);
   const bar = new ProgressBar('writing hours', series.hours);

@@ -1,150 +1,275 @@
 /**
- * The hourly weather file: a CSV with one row per hour of the year, read into the `measured`
- * (direct normal + diffuse horizontal) or `globalHorizontal` {@link Weather} of a window.
+ * The hourly weather file of `sunpane table` and `sunpane schedule`: a CSV file read into the
+ * table of cells that src/io/weather.ts checks (the pane's weather ranges go through the same
+ * checks, so both report the same problems in the same words).
  *
  * Format (Sunpane's own, deliberately plain):
- * - comma-separated (semicolons are accepted when a line has no comma); double quotes allowed;
- *   blank lines and lines starting with `#` are skipped;
- * - an optional header line; columns are picked by the `--dni`, `--dhi` or `--ghi` flags, each a
- *   header name (case-insensitive) or a 1-based column number; a header is required when a name
- *   is used, and is recognised by a non-numeric value in a picked column of the first line;
- * - then exactly one row per hour of the window's year, in order: 8760 rows, 8784 in a leap year;
- *   row k is the hour ENDING at k:00 local standard time on 1 January (weather-data practice);
- * - values in W/m². A blank, non-numeric, negative or implausibly high value (above
- *   {@link MAX_PLAUSIBLE_IRRADIANCE}) marks that hour missing; so does a row too short to hold a
- *   picked column. The core counts missing hours (their gain is not estimated); the reader lists
- *   their line numbers.
+ * - comma-separated, or semicolon-separated when the first line that is not a comment has a
+ *   semicolon (the usual form with decimal commas); double quotes allowed; blank lines and lines
+ *   starting with `#` are skipped;
+ * - an optional header line; columns are picked by the `--dni`, `--dhi`, `--ghi` and `--time`
+ *   flags, each a header name (case-insensitive; a unit in brackets may be left out) or a 1-based
+ *   column number; a header is required when a name is used, and is recognised by a text that is
+ *   not a number in a picked column of the first line;
+ * - a time-stamp column (ISO 8601, e.g. `2026-01-01T01:00`): `--time COL`, or found as the first
+ *   column whose first value is a stamp; `--time none` reads the rows in order instead, exactly one
+ *   per hour of the window's year;
+ * - units in each header (`direct normal [W/m²]`, `[Wh/m2]`, `[kJ/m2]`) or by `--units`;
+ * - every line has as many fields as the header: a line with more (decimal commas in a
+ *   comma-separated file split each number in two) or too few to reach a picked column cannot be
+ *   read, and is reported.
  */
 import * as fs from 'node:fs';
-import { hoursInYear } from '../core/time';
-import { MAX_IRRADIANCE, type Weather } from '../core/gain';
-import { CliInputError, CliUsageError } from './cliError';
+import { type Site } from '../core/sun';
+import { readCsvText } from '../io/csvText';
+import { type DecimalMark, readNumberText } from '../io/numberText';
+import { readStampText } from '../io/stampText';
+import {
+  DEFAULT_MAX_UNUSABLE_PERCENT,
+  HOUR_STAMPS,
+  type HourStamp,
+  type WeatherAdvice,
+  type WeatherCheck,
+  type WeatherColumn,
+  type WeatherTable,
+  type WeatherUnit,
+  checkWeather,
+  describeWeatherCheck,
+  readUnitText,
+} from '../io/weather';
 import { describeFsError } from './atomicWrite';
-import { parseCsv, type CsvLine } from './csv';
+import { CliInputError, CliUsageError } from './cliError';
+import type { Flags } from './flags';
 
-/** Above this irradiance [W/m²] a value is treated as a recording error and its hour as missing (the core's limit). */
-export const MAX_PLAUSIBLE_IRRADIANCE = MAX_IRRADIANCE;
-
-/** Which columns hold the weather: direct normal + diffuse horizontal, or global horizontal only. */
-export type WeatherColumns = { dni: string; dhi: string; ghi?: undefined } | { ghi: string; dni?: undefined; dhi?: undefined };
-
-/** One value that made its hour missing. */
-export interface MissingValue {
-  /** 1-based line number in the file. */
-  line: number;
-  /** The quantity (`dni`, `dhi`, `ghi`). */
-  quantity: string;
-  /** The text found ('' when blank or absent). */
-  text: string;
-  reason: string;
+/** Which columns hold the weather (header names or 1-based numbers); `time: 'none'` for no stamps. */
+export interface WeatherColumns {
+  dni?: string;
+  dhi?: string;
+  ghi?: string;
+  time?: string;
 }
 
-/** The weather read from a file, with the hours it could not read. */
-export interface WeatherFile {
-  weather: Weather;
-  /** Number of hours marked missing. */
-  missingHours: number;
-  /** Each refused value (an hour can have more than one). */
-  missing: MissingValue[];
+/** How the user asked the weather to be read (the flags besides the columns). */
+export interface WeatherReading {
+  unit?: WeatherUnit;
+  decimalMark?: DecimalMark;
+  typicalYear?: boolean;
+  hourStamp?: HourStamp;
+  maxUnusablePercent?: number;
 }
 
-interface ColumnPick {
-  quantity: string;
-  index: number;
+/** The command line's names for its weather options, for advice in messages. */
+export const CLI_WEATHER_ADVICE: WeatherAdvice = {
+  unit: '--units W/m2|Wh/m2|kJ/m2',
+  decimal: '--decimal point|comma',
+  typicalYear: '--typical-year',
+  hourStamp: (c) => `--hour-stamp ${c}`,
+  maxUnusable: '--max-unusable PERCENT sets it',
+};
+
+/** A header without a unit in brackets, for matching a column name (`direct normal [W/m²]` → `direct normal`). */
+function headerKey(h: string): string {
+  return h
+    .replace(/[([][^)\]]*[)\]]/g, '')
+    .trim()
+    .toLowerCase();
 }
 
-function isNumeric(text: string): boolean {
-  return text.trim() !== '' && Number.isFinite(Number(text));
+function isNumberText(text: string): boolean {
+  return readNumberText(text, 'point') !== undefined || readNumberText(text, 'comma') !== undefined;
 }
 
 /** Resolves a `--dni`-style flag value to a 0-based column index. */
-function pickColumn(quantity: string, spec: string, header: string[] | undefined, file: string): number {
+function pickColumn(flag: string, spec: string, header: string[] | undefined, file: string): number {
   const t = spec.trim();
   if (/^\d+$/.test(t)) {
     const n = Number(t);
-    if (n < 1) throw new CliUsageError(`--${quantity} ${spec}: column numbers start at 1`);
+    if (n < 1) throw new CliUsageError(`--${flag} ${spec}: column numbers start at 1`);
     return n - 1;
   }
-  if (!header) throw new CliInputError(`--${quantity} ${spec}: ${file} has no header line to find a column named "${spec}" (give a column number instead)`);
-  const index = header.findIndex((h) => h.toLowerCase() === t.toLowerCase());
-  if (index < 0) throw new CliInputError(`--${quantity} ${spec}: ${file} has no column named "${spec}" (its columns: ${header.join(', ')})`);
+  if (!header) throw new CliInputError(`--${flag} ${spec}: ${file} has no header line to find a column named "${spec}" (give a column number instead)`);
+  let index = header.findIndex((h) => h.toLowerCase() === t.toLowerCase());
+  if (index < 0) index = header.findIndex((h) => headerKey(h) === headerKey(t));
+  if (index < 0) throw new CliInputError(`--${flag} ${spec}: ${file} has no column named "${spec}" (its columns: ${header.join(', ')})`);
   return index;
 }
 
-/** Reads one value; NaN (with a reason) when it marks the hour missing. */
-function readValue(fields: string[], index: number): { value: number; text: string; reason?: string } {
-  if (index >= fields.length) return { value: NaN, text: '', reason: `the row has only ${fields.length} columns` };
-  const text = fields[index];
-  if (text === '') return { value: NaN, text, reason: 'blank' };
-  if (!isNumeric(text)) return { value: NaN, text, reason: 'not a number' };
-  const value = Number(text);
-  if (value < 0) return { value: NaN, text, reason: 'negative' };
-  if (value > MAX_PLAUSIBLE_IRRADIANCE) return { value: NaN, text, reason: `above ${MAX_PLAUSIBLE_IRRADIANCE} W/m²` };
-  return { value, text };
-}
-
 /**
- * Reads hourly weather from CSV text.
+ * Reads weather CSV text into a table of cells for {@link checkWeather}.
  * @param text - the file content
  * @param file - the file name, for messages
- * @param year - the window's calendar year (fixes the row count: 8760 or 8784)
  * @param columns - the picked columns
- * @throws CliInputError for a wrong row count (expected vs found) or a column that does not exist
+ * @throws CliInputError for a column that does not exist; CliUsageError for a column number below 1
  */
-export function weatherFromCsv(text: string, file: string, year: number, columns: WeatherColumns): WeatherFile {
-  const lines = parseCsv(text);
-  if (lines.length === 0) throw new CliInputError(`${file} is empty: expected ${hoursInYear(year)} hourly rows for ${year}`);
-  const wanted: [string, string][] = columns.ghi !== undefined ? [['ghi', columns.ghi]] : [['dni', columns.dni], ['dhi', columns.dhi]];
-  const first = lines[0].fields;
-  const byName = wanted.some(([, spec]) => !/^\d+$/.test(spec.trim()));
-  const firstIsHeader = byName || wanted.some(([, spec]) => /^\d+$/.test(spec.trim()) && !isNumeric(first[Number(spec) - 1] ?? ''));
+export function weatherTableFromCsv(text: string, file: string, columns: WeatherColumns): WeatherTable {
+  const { lines, separator } = readCsvText(text);
+  const wanted = (['dni', 'dhi', 'ghi'] as const).filter((q) => columns[q] !== undefined).map((q) => [q, columns[q]!] as const);
+  const first = lines[0]?.fields ?? [];
+  const byName = [...wanted.map(([, s]) => s), ...(columns.time !== undefined && columns.time !== 'none' ? [columns.time] : [])].some((s) => !/^\d+$/.test(s.trim()));
+  const firstIsHeader =
+    lines.length > 0 &&
+    (byName ||
+      wanted.some(([, s]) => {
+        const cell = first[Number(s) - 1] ?? '';
+        return cell.trim() !== '' && !isNumberText(cell);
+      }));
   const header = firstIsHeader ? first : undefined;
-  const picks: ColumnPick[] = wanted.map(([quantity, spec]) => ({ quantity, index: pickColumn(quantity, spec, header, file) }));
-  const rows: CsvLine[] = firstIsHeader ? lines.slice(1) : lines;
-  const expected = hoursInYear(year);
-  if (rows.length !== expected) {
-    const lastLine = rows.length > 0 ? `, lines ${rows[0].line}–${rows[rows.length - 1].line}` : '';
-    throw new CliInputError(
-      `${file}: expected ${expected} hourly rows for ${year} (one per hour, the first ending at 01:00 on 1 January), found ${rows.length}${lastLine}`,
-    );
+  const body = firstIsHeader ? lines.slice(1) : lines;
+  const picks = wanted.map(([q, spec]) => ({ q, index: pickColumn(q, spec, header, file) }));
+
+  let timeIndex: number | undefined;
+  if (columns.time !== undefined && columns.time.trim().toLowerCase() !== 'none') timeIndex = pickColumn('time', columns.time, header, file);
+  else if (columns.time === undefined && body.length > 0) {
+    const taken = new Set(picks.map((p) => p.index));
+    const k = body[0].fields.findIndex((f, i) => !taken.has(i) && readStampText(f) !== undefined);
+    if (k >= 0) timeIndex = k;
   }
-  const series = picks.map(() => new Float64Array(expected));
-  const missing: MissingValue[] = [];
-  let missingHours = 0;
-  rows.forEach((row, h) => {
-    let rowMissing = false;
-    picks.forEach((pick, k) => {
-      const r = readValue(row.fields, pick.index);
-      series[k][h] = r.value;
-      if (r.reason) {
-        rowMissing = true;
-        missing.push({ line: row.line, quantity: pick.quantity, text: r.text, reason: r.reason });
-      }
-    });
-    if (rowMissing) {
-      missingHours++;
-      for (const s of series) s[h] = NaN;
-    }
+
+  // Lines whose fields do not line up with the header (or with the usual line, without one).
+  const counts = new Map<number, number>();
+  for (const l of body) counts.set(l.fields.length, (counts.get(l.fields.length) ?? 0) + 1);
+  const usual = header?.length ?? [...counts.entries()].sort((a, b) => b[1] - a[1])[0]?.[0] ?? 0;
+  const needed = Math.max(...picks.map((p) => p.index), timeIndex ?? -1) + 1;
+  const brokenRows = new Map<number, string>();
+  let tooMany = false;
+  body.forEach((l, k) => {
+    const extra = l.fields.slice(usual);
+    if (extra.some((f) => f !== '')) {
+      brokenRows.set(k, `${l.fields.length} fields where ${header ? 'the header has' : 'most lines have'} ${usual}`);
+      tooMany = true;
+    } else if (l.fields.length < needed) brokenRows.set(k, `${l.fields.length} field${l.fields.length === 1 ? '' : 's'}, too few to reach column ${needed}`);
   });
-  const weather: Weather = columns.ghi !== undefined ? { kind: 'globalHorizontal', ghi: series[0] } : { kind: 'measured', dni: series[0], dhi: series[1] };
-  return { weather, missingHours, missing };
+
+  const column = (index: number): WeatherColumn => ({
+    ...(header ? { header: header[index] } : {}),
+    cells: body.map((l) => l.fields[index]),
+  });
+  const table: WeatherTable = {
+    columns: Object.fromEntries(picks.map((p) => [p.q, column(p.index)])),
+    rows: body.length,
+    where: (row) => `line ${body[row].line}`,
+    brokenRows,
+    ...(timeIndex !== undefined ? { stamps: column(timeIndex) } : {}),
+    ...(tooMany && separator === ','
+      ? { brokenHint: 'decimal commas in a comma-separated file split each number in two: separate the fields with semicolons, or put each number in quotes' }
+      : {}),
+  };
+  return table;
 }
 
-/** Reads a weather file from disk; see {@link weatherFromCsv}. */
-export function readWeatherFile(file: string, year: number, columns: WeatherColumns): WeatherFile {
+/** Reads a weather file from disk into a table; see {@link weatherTableFromCsv}. */
+export function readWeatherTable(file: string, columns: WeatherColumns): WeatherTable {
   let text: string;
   try {
     text = fs.readFileSync(file, 'utf8');
   } catch (err) {
     throw new CliInputError(`cannot read the weather file ${file}: ${describeFsError(err)}`);
   }
-  return weatherFromCsv(text, file, year, columns);
+  return weatherTableFromCsv(text, file, columns);
 }
 
-/** A short account of missing hours for stderr: the count and the first few lines with reasons. */
-export function describeMissing(file: string, w: WeatherFile, shown = 8): string | undefined {
-  if (w.missingHours === 0) return undefined;
-  const items = w.missing.slice(0, shown).map((m) => `line ${m.line} ${m.quantity} ${m.text === '' ? '' : `"${m.text}" `}(${m.reason})`);
-  const more = w.missing.length > shown ? `, and ${w.missing.length - shown} more` : '';
-  return `${file}: ${w.missingHours} hour${w.missingHours === 1 ? '' : 's'} missing — ${items.join('; ')}${more}`;
+/** A weather file checked for one window's year and site, with its report for stderr. */
+export interface CheckedWeather {
+  check: WeatherCheck;
+  /** Lines for stderr (problems, notes); empty when there is nothing to say. */
+  report: string[];
+}
+
+/**
+ * Checks a weather table for a year and site (src/io/weather.ts).
+ * @throws CliInputError with the whole report when the weather cannot be used
+ */
+export function checkWeatherTable(table: WeatherTable, file: string, year: number, site: Site, reading: WeatherReading = {}): CheckedWeather {
+  const check = checkWeather(table, { year, site, ...reading, advice: CLI_WEATHER_ADVICE });
+  const report = describeWeatherCheck(check, file, CLI_WEATHER_ADVICE);
+  if (!check.usable) throw new CliInputError(report.join('\n'));
+  return { check, report };
+}
+
+/** The weather flags of `table` and `schedule` (see {@link WEATHER_HELP}). */
+export const WEATHER_FLAGS = {
+  weather: true,
+  dni: true,
+  dhi: true,
+  ghi: true,
+  time: true,
+  units: true,
+  decimal: true,
+  'typical-year': false,
+  'hour-stamp': true,
+  'max-unusable': true,
+} as const;
+
+/** The weather flags' lines of a help text. */
+export const WEATHER_HELP = `  --weather FILE.csv   hourly weather (a header line is optional; # lines are comments; fields
+                       separated by commas, or by semicolons when the first line has one)
+  --dni COL --dhi COL  columns of direct normal and diffuse horizontal irradiance
+  --ghi COL            or a column of global horizontal irradiance (split by Erbs et al. 1982);
+                       with --dni and --dhi as well, it is used to check them
+                       COL is a header name (a unit in brackets may be left out) or a 1-based
+                       column number
+  --time COL           the column of time stamps (ISO 8601, e.g. 2026-01-01T01:00; a zone such as
+                       Z or +01:00 is converted); default: the first column holding stamps;
+                       "none": the rows are the year's hours in order
+  --hour-stamp end|start|middle   what a stamp marks (default end: the row stamped 01:00 is the
+                       first hour of the year)
+  --typical-year       the stamps are of a typical year: read them by month, day and hour as the
+                       window's year, whatever year they state
+  --units W/m2|Wh/m2|kJ/m2   units of the columns, unless their headers say (e.g. "dni [W/m2]");
+                       Wh/m2 and kJ/m2 are sums over each hour; default W/m2
+  --decimal point|comma   the decimal mark (default: found from the file)
+  --max-unusable PERCENT  refuse the weather when more of the year's hours than this cannot be
+                       used (default ${DEFAULT_MAX_UNUSABLE_PERCENT})
+
+  Every hour is checked: stamps (other years, gaps, repeats, order), numbers, physical limits at
+  the sun's position, light keeping time with the sun. Problems are listed by kind with their
+  lines; an unusable hour is left out of the totals (never read as zero).`;
+
+/** The weather file and how to read it, from the flags; undefined without --weather. */
+export interface WeatherRequest {
+  file: string;
+  columns: WeatherColumns;
+  reading: WeatherReading;
+}
+
+/**
+ * Reads the weather flags.
+ * @throws CliUsageError for a weather flag without --weather, a bad combination of columns, or an option value not allowed
+ */
+export function weatherRequest(flags: Flags): WeatherRequest | undefined {
+  const given = (Object.keys(WEATHER_FLAGS) as (keyof typeof WEATHER_FLAGS)[]).filter((k) => k !== 'weather' && flags.has(k));
+  const file = flags.get('weather');
+  if (file === undefined) {
+    if (given.length) throw new CliUsageError(`${given.map((g) => `--${g}`).join(', ')} ${given.length > 1 ? 'are' : 'is'} about a --weather file: give --weather FILE.csv too`);
+    return undefined;
+  }
+  const [dni, dhi, ghi, time] = [flags.get('dni'), flags.get('dhi'), flags.get('ghi'), flags.get('time')];
+  if ((dni === undefined) !== (dhi === undefined)) throw new CliUsageError('--dni and --dhi go together (with --ghi as well to check them), or give --ghi alone');
+  if (dni === undefined && ghi === undefined) throw new CliUsageError('--weather needs its columns: --dni COL --dhi COL, or --ghi COL');
+  const columns: WeatherColumns = { ...(dni !== undefined ? { dni, dhi } : {}), ...(ghi !== undefined ? { ghi } : {}), ...(time !== undefined ? { time } : {}) };
+  const reading: WeatherReading = {};
+  const units = flags.get('units');
+  if (units !== undefined) {
+    const unit = readUnitText(units);
+    if (!unit) throw new CliUsageError(`--units ${units}: must be W/m2, Wh/m2 or kJ/m2`);
+    reading.unit = unit;
+  }
+  const decimal = flags.get('decimal');
+  if (decimal !== undefined) {
+    if (decimal !== 'point' && decimal !== 'comma') throw new CliUsageError(`--decimal ${decimal}: must be point or comma`);
+    reading.decimalMark = decimal;
+  }
+  const stamp = flags.get('hour-stamp');
+  if (stamp !== undefined) {
+    if (!(HOUR_STAMPS as readonly string[]).includes(stamp)) throw new CliUsageError(`--hour-stamp ${stamp}: must be ${HOUR_STAMPS.join(', ')}`);
+    reading.hourStamp = stamp as HourStamp;
+  }
+  if (flags.has('typical-year')) reading.typicalYear = true;
+  const limit = flags.get('max-unusable');
+  if (limit !== undefined) {
+    const p = Number(limit.replace(/%$/, ''));
+    if (limit.trim() === '' || !Number.isFinite(p) || p < 0 || p > 100) throw new CliUsageError(`--max-unusable ${limit}: must be a percentage from 0 to 100`);
+    reading.maxUnusablePercent = p;
+  }
+  return { file, columns, reading };
 }

@@ -66,8 +66,8 @@ export function inventedWeatherYear(site: ExampleSite, year: number, seed = 2026
   return { stampSerial: Float64Array.from(path.stampSerial), dni, dhi };
 }
 
-/** Header of the invented weather CSV (columns picked with `--dni "direct normal" --dhi "diffuse horizontal"`). */
-export const INVENTED_WEATHER_HEADER = 'hour ending,direct normal,diffuse horizontal';
+/** Header of the invented weather CSV, units stated (columns picked with `--dni "direct normal" --dhi "diffuse horizontal"`). */
+export const INVENTED_WEATHER_HEADER = 'hour ending,direct normal [W/m²],diffuse horizontal [W/m²]';
 
 /**
  * The invented weather year as the CSV text of examples/ (a comment line, a header, then one row

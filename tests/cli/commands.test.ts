@@ -87,7 +87,9 @@ describe('sunpane table', () => {
     const out = path.join(dir, 'east.csv');
     const r = await run('table', '--window', WINDOW, '--weather', weather, '--dni', '2', '--dhi', '3', '--out', out);
     expect(r.code).toBe(0);
-    expect(r.err).toBe(`${weather}: 2 hours missing — line 13 dni "oops" (not a number); line 14 dni (blank)`);
+    expect(r.err).toBe(
+      `${weather}: 2 of 8760 hours cannot be used (0.02 %), within the 1 % allowed; their gain is left out of the totals:\n  2 values that are not numbers: line 13 direct normal "oops"; line 14 direct normal (blank)`,
+    );
     expect(r.out).toMatch(/2 hours missing \(not in the total\)/);
     const rows = fs.readFileSync(out, 'utf8').split('\n');
     expect(rows[11].split(',').at(-1)).toBe('1');
@@ -95,24 +97,35 @@ describe('sunpane table', () => {
     expect(rows[13].split(',').at(-1)).toBe('0');
   });
 
-  it('refuses a weather file with an hour missing, naming the rows expected and found', async () => {
+  it('places the rows of a weather file by their stamps: a row left out is an hour reported and left out of the totals', async () => {
     const dir = tempDir();
     const lines = weatherLines();
-    lines.splice(500, 1);
+    lines.splice(500, 1); // line 501: the hour ending 2026-01-21T19:00
     const weather = writeTemp(dir, 'short.csv', lines.join('\n'));
-    const r = await run('table', '--window', WINDOW, '--weather', weather, '--ghi', '2', '--out', path.join(dir, 'x.csv'));
-    expect(r.code).toBe(1);
-    expect(r.err).toMatch(/short\.csv: expected 8760 hourly rows for 2026 .*found 8759/);
-    expect(fs.readdirSync(dir)).toEqual(['short.csv']);
+    const out = path.join(dir, 'x.csv');
+    const r = await run('table', '--window', WINDOW, '--weather', weather, '--dni', '2', '--dhi', '3', '--out', out);
+    expect(r.code).toBe(0);
+    expect(r.err).toBe(`${weather}: 1 of 8760 hours cannot be used (0.01 %), within the 1 % allowed; their gain is left out of the totals:\n  1 hour with no row: hour ending 2026-01-21T19:00`);
+    const rows = fs.readFileSync(out, 'utf8').split('\n');
+    expect(rows[499].split(',')[0]).toBe('2026-01-21T19:00');
+    expect(rows[499].split(',').at(-1)).toBe('1');
+    const inOrder = await run('table', '--window', WINDOW, '--weather', weather, '--dni', '2', '--dhi', '3', '--time', 'none', '--out', path.join(dir, 'y.csv'));
+    expect(inOrder.code).toBe(1);
+    expect(inOrder.err).toMatch(/short\.csv cannot be used: expected 8760 hourly rows for 2026 .*found 8759/);
+    expect(fs.readdirSync(dir).sort()).toEqual(['short.csv', 'x.csv']);
   });
 
-  it("refuses a weather year that does not match the window's (leap) year", async () => {
+  it("refuses a weather file for another year than the window's, saying which year it is for", async () => {
     const dir = tempDir();
     const json = JSON.parse(fs.readFileSync(WINDOW, 'utf8'));
     const window = writeTemp(dir, 'w.json', JSON.stringify({ ...json, year: 2028 }));
     const r = await run('table', '--window', window, ...WEATHER_FLAGS, '--out', path.join(dir, 'x.csv'));
     expect(r.code).toBe(1);
-    expect(r.err).toMatch(/expected 8784 hourly rows for 2028 .*found 8760/);
+    expect(r.err).toMatch(/cannot be used: no row could be placed in 2028 by its stamp \(the stamps are for 2026: set the window's year to 2026, or, if the file is a typical year, say so \(--typical-year\)\)/);
+    const typical = await run('table', '--window', window, ...WEATHER_FLAGS, '--typical-year', '--out', path.join(dir, 'y.csv'));
+    expect(typical.code).toBe(0);
+    expect(typical.err).toMatch(/24 hours with no row: hours ending 2028-02-29T01:00 to 2028-03-01T00:00 \(24 h\)/);
+    expect(typical.err).toMatch(/stamps of a typical year \(2026–2027\) read by month, day and hour as 2028/);
   });
 
   it.each([
@@ -154,9 +167,13 @@ describe('sunpane table', () => {
     [['--out', 'x.csv'], /--window FILE\.json \(the window\) is required/],
     [['--window', 'w.json', '--out', 'x.txt'], /must end in \.csv or \.xlsx/],
     [['--window', 'w.json', '--out', 'x.csv', '--colour', 'red'], /unknown flag --colour/],
-    [['--window', 'w.json', '--out', 'x.csv', '--dni', '2'], /give --weather FILE\.csv too/],
-    [['--window', 'w.json', '--out', 'x.csv', '--weather', 'w.csv', '--dni', '2'], /--dni COL --dhi COL, or --ghi COL/],
-    [['--window', 'w.json', '--out', 'x.csv', '--weather', 'w.csv', '--dni', '2', '--dhi', '3', '--ghi', '4'], /either --dni and --dhi, or --ghi/],
+    [['--window', 'w.json', '--out', 'x.csv', '--dni', '2'], /--dni is about a --weather file: give --weather FILE\.csv too/],
+    [['--window', 'w.json', '--out', 'x.csv', '--weather', 'w.csv', '--dni', '2'], /--dni and --dhi go together/],
+    [['--window', 'w.json', '--out', 'x.csv', '--weather', 'w.csv', '--dhi', '3', '--ghi', '4'], /--dni and --dhi go together \(with --ghi as well to check them\), or give --ghi alone/],
+    [['--window', 'w.json', '--out', 'x.csv', '--weather', 'w.csv'], /--weather needs its columns/],
+    [['--window', 'w.json', '--out', 'x.csv', '--weather', 'w.csv', '--ghi', '2', '--units', 'MJ/m2'], /--units MJ\/m2: must be W\/m2, Wh\/m2 or kJ\/m2/],
+    [['--window', 'w.json', '--out', 'x.csv', '--weather', 'w.csv', '--ghi', '2', '--max-unusable', '120'], /--max-unusable 120: must be a percentage from 0 to 100/],
+    [['--window', 'w.json', '--out', 'x.csv', '--typical-year'], /--typical-year is about a --weather file/],
     [['stray'], /unexpected argument "stray"/],
   ])('answers wrong usage with exit code 2 and the usage line (%#)', async (args, message) => {
     const r = await run('table', ...args);
