@@ -4,6 +4,8 @@
  * `glazing.shgc` lands beside the SHGC box).
  */
 import { EXAMPLE_SITES } from '../demo/sites';
+import { HOUR_STAMPS } from '../io/weather';
+import { HOUR_STAMP_LABELS } from './weather';
 
 export type SectionId = 'site' | 'facing' | 'opening' | 'glass' | 'shade' | 'sky' | 'run';
 
@@ -37,6 +39,7 @@ export type FormValues = Record<string, string>;
 const physical = (v: FormValues) => v.glassModel !== 'table';
 const table = (v: FormValues) => v.glassModel === 'table';
 const weatherIs = (...kinds: string[]) => (v: FormValues) => kinds.includes(v.weatherSource);
+const hourly = weatherIs('measured', 'globalHorizontal');
 
 export const SECTIONS: readonly { id: SectionId; title: string }[] = [
   { id: 'site', title: 'Place' },
@@ -132,9 +135,38 @@ export const FIELDS: readonly FieldDef[] = [
   { id: 'linkeTurbidity', label: 'Linke turbidity (1 or 12 monthly values)', section: 'sky', kind: 'list', initial: '3', paths: ['weather.linkeTurbidity'], visible: weatherIs('ineichenClearSky') },
   { id: 'tauB', label: 'Beam optical depth τb (1 or 12 values)', section: 'sky', kind: 'list', initial: '0.4', paths: ['weather.tauB'], visible: weatherIs('ashraeClearSky') },
   { id: 'tauD', label: 'Diffuse optical depth τd (1 or 12 values)', section: 'sky', kind: 'list', initial: '2.2', paths: ['weather.tauD'], visible: weatherIs('ashraeClearSky') },
-  { id: 'dniAddress', label: 'Direct normal column', unit: 'W/m²', section: 'sky', kind: 'address', initial: '', paths: ['weather.dni'], visible: weatherIs('measured'), hint: 'one cell per hour of the year, hour-ending' },
-  { id: 'dhiAddress', label: 'Diffuse horizontal column', unit: 'W/m²', section: 'sky', kind: 'address', initial: '', paths: ['weather.dhi'], visible: weatherIs('measured') },
-  { id: 'ghiAddress', label: 'Global horizontal column', unit: 'W/m²', section: 'sky', kind: 'address', initial: '', paths: ['weather.ghi'], visible: weatherIs('globalHorizontal'), hint: 'split into beam and diffuse by Erbs et al. (1982)' },
+  { id: 'dniAddress', label: 'Direct normal column', section: 'sky', kind: 'address', initial: '', paths: ['weather.dni'], visible: weatherIs('measured'), hint: 'one cell per hour of the year, hour-ending' },
+  { id: 'dhiAddress', label: 'Diffuse horizontal column', section: 'sky', kind: 'address', initial: '', paths: ['weather.dhi'], visible: weatherIs('measured') },
+  { id: 'ghiAddress', label: 'Global horizontal column', section: 'sky', kind: 'address', initial: '', paths: ['weather.ghi'], visible: weatherIs('globalHorizontal'), hint: 'split into beam and diffuse by Erbs et al. (1982)' },
+  { id: 'timeAddress', label: 'Time stamps column (optional)', section: 'sky', kind: 'address', initial: '', paths: ['weather.stamps'], visible: hourly, hint: 'date-times; without it the rows are the hours in order from 01:00 on 1 January' },
+  { id: 'hourStamp', label: 'Each stamp marks', section: 'sky', kind: 'select', initial: 'end', options: HOUR_STAMPS.map((s) => ({ value: s, label: HOUR_STAMP_LABELS[s] })), visible: hourly },
+  {
+    id: 'stampYear',
+    label: 'The stamps are of',
+    section: 'sky',
+    kind: 'select',
+    initial: '',
+    options: [
+      { value: '', label: 'the year below' },
+      { value: 'typical', label: 'a typical year (read by month, day and hour)' },
+    ],
+    visible: hourly,
+  },
+  {
+    id: 'weatherUnit',
+    label: 'Units of the weather columns',
+    section: 'sky',
+    kind: 'select',
+    initial: '',
+    options: [
+      { value: '', label: 'as their headers say, else W/m²' },
+      { value: 'W/m²', label: 'W/m² (mean over the hour)' },
+      { value: 'Wh/m²', label: 'Wh/m² (sum over the hour)' },
+      { value: 'kJ/m²', label: 'kJ/m² (sum over the hour)' },
+    ],
+    visible: hourly,
+  },
+  { id: 'maxUnusable', label: 'Unusable hours allowed', unit: '%', section: 'sky', kind: 'number', initial: '1', paths: ['weather.maxUnusable'], visible: hourly, hint: 'more than this share of the year and the weather is refused' },
 
   { id: 'year', label: 'Year', section: 'run', kind: 'number', initial: String(new Date().getFullYear()), paths: ['year'] },
 ];

@@ -15,7 +15,7 @@ import { applyVisibility, fillForm, readForm, renderForm, showProblems } from '.
 import { PaneStore, type SettingsStore } from './persist';
 import { type AskReplace, type RunBatch, RunCancelled, planSheet, sheetNamesOf } from './resultSheets';
 import { SCHEDULE_HELP, SUMMARY_FORMATS, SUMMARY_HEADER, readSchedule, summaryRow } from './schedule';
-import { readNamedTable, readSheetData } from './sheetData';
+import { readNamedTable, readSheetData, withCheckedWeather } from './sheetData';
 import { type SheetData, buildWindowSpec, findProblems, isClean } from './spec';
 import { drawSunPath } from './sunPathView';
 import { writeSmallTableSheet } from './tableSheet';
@@ -167,7 +167,10 @@ export function createPane(doc: Document, host: PaneHost): void {
   /** Lets the pane repaint between long steps. */
   const breathe = () => new Promise<void>((r) => setTimeout(r, 0));
 
+  /** What the last weather check had to say (problems within the limit, notes), shown under the form. */
+  let weatherLines: string[] = [];
   async function withSheetData(values: FormValues): Promise<{ spec: WindowSpec; data: SheetData } | undefined> {
+    weatherLines = [];
     if (!checkForm()) {
       say('Fix the marked boxes on the Window tab first.', 'error');
       return undefined;
@@ -183,12 +186,33 @@ export function createPane(doc: Document, host: PaneHost): void {
       }
       throw err;
     }
+    // Hourly weather: checked as the command line checks it (src/io/weather.ts), for the form's year and site.
+    try {
+      const base = buildWindowSpec(values, {});
+      const checked = withCheckedWeather(data, values, base.site, base.year);
+      weatherLines = checked.lines;
+      if (!checked.usable) {
+        const box = values.weatherSource === 'globalHorizontal' ? 'ghiAddress' : 'dniAddress';
+        showProblems(doc, { byField: { [box]: checked.lines[0] ?? '' }, general: checked.lines.slice(1) }, formGeneral);
+        say('The weather columns cannot be used: see the Window tab.', 'error');
+        return undefined;
+      }
+      data = checked.data;
+    } catch (err) {
+      if (err instanceof SunpaneError) {
+        showProblems(doc, { byField: fieldMessage(err), general: [] }, formGeneral);
+        say(err.message, 'error');
+        return undefined;
+      }
+      throw err;
+    }
     const problems = findProblems(values, validateSpec, data);
     if (!isClean(problems)) {
       showProblems(doc, problems, formGeneral);
       say('The ranges the form points at hold values the calculation cannot use: see the marked boxes.', 'error');
       return undefined;
     }
+    if (weatherLines.length) formGeneral.textContent = weatherLines.join('\n');
     return { spec: buildWindowSpec(values, data), data };
   }
   function fieldMessage(err: SunpaneError): Record<string, string> {

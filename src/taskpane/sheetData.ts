@@ -1,6 +1,7 @@
 /**
  * Reads what the form points at on the user's sheets: the glazing angle table, the skyline and the
- * hourly weather columns, and a schedule table by name. Reading only; errors name the form field
+ * hourly weather columns (checked by src/io/weather.ts through ./weather.ts), and a schedule table
+ * by name. Reading only; errors name the form field
  * (by its WindowSpec path) in the core's words.
  */
 import { SunpaneError } from '../core/common';
@@ -8,6 +9,8 @@ import { RANGE_ADDRESS_HELP, type RangeRef, parseRangeAddress } from './addresse
 import type { FormValues } from './fields';
 import type { RunBatch } from './resultSheets';
 import { type SheetData, neededAddresses } from './spec';
+import type { Site } from '../core/sun';
+import { type SheetWeather, checkFormWeather, weatherTableFromRanges } from './weather';
 
 type Cell = string | number | boolean | null;
 
@@ -31,9 +34,25 @@ export function columnValues(values: readonly (readonly Cell[])[]): (number | st
   return out;
 }
 
-/** Weather columns: blank or text cells are marked missing (NaN) — the core counts them. */
-export function weatherColumn(values: readonly (readonly Cell[])[]): number[] {
-  return columnValues(values).map((v) => (typeof v === 'number' ? v : NaN));
+/** 1-based sheet row of the first cell of an A1 range (`B2:B8761` → 2). */
+function topRowOf(range: string): number {
+  const rows = range.split(':').map((c) => Number(/(\d+)$/.exec(c)?.[1] ?? '1'));
+  return Math.min(...rows);
+}
+
+/**
+ * Checks the weather ranges read by {@link readSheetData} (src/io/weather.ts, as the command line
+ * does) for the form's year and site, and puts the usable series into the data.
+ * @returns the data with `dni`/`dhi` or `ghi` filled when the weather can be used, and the report's lines
+ * @throws SunpaneError naming the box for ranges of different lengths or a bad limit
+ */
+export function withCheckedWeather(data: SheetData, form: FormValues, site: Site, year: number): { data: SheetData; usable: boolean; lines: string[] } {
+  if (!data.weatherRanges) return { data, usable: true, lines: [] };
+  const { check, lines } = checkFormWeather(weatherTableFromRanges(data.weatherRanges), form, site, year);
+  if (!check.usable || !check.weather) return { data, usable: false, lines };
+  const w = check.weather;
+  const series = w.kind === 'measured' ? { dni: Array.from(w.dni), dhi: Array.from(w.dhi) } : w.kind === 'globalHorizontal' ? { ghi: Array.from(w.ghi) } : {};
+  return { data: { ...data, ...series }, usable: true, lines };
 }
 
 /** A two-column angle table (angle, SHGC), skipping blank rows and a text header row. */
@@ -73,8 +92,10 @@ export async function readSheetData(run: RunBatch, form: FormValues): Promise<Sh
       throw err;
     }
     const data: SheetData = {};
+    const weather: SheetWeather = { columns: {} };
     wanted.forEach((w, i) => {
       const values = ranges[i].values as Cell[][];
+      const range = { address: form[w.field.id].trim(), topRow: topRowOf(w.ref.range), values };
       switch (w.field.id) {
         case 'angleTableAddress':
           data.angleTable = angleTableOf(values);
@@ -83,16 +104,20 @@ export async function readSheetData(run: RunBatch, form: FormValues): Promise<Sh
           data.skyline = columnValues(values).filter((v) => !(typeof v === 'number' && Number.isNaN(v))) as number[];
           break;
         case 'dniAddress':
-          data.dni = weatherColumn(values);
+          weather.columns.dni = range;
           break;
         case 'dhiAddress':
-          data.dhi = weatherColumn(values);
+          weather.columns.dhi = range;
           break;
         case 'ghiAddress':
-          data.ghi = weatherColumn(values);
+          weather.columns.ghi = range;
+          break;
+        case 'timeAddress':
+          weather.stamps = range;
           break;
       }
     });
+    if (Object.keys(weather.columns).length > 0) data.weatherRanges = weather;
     return data;
   });
 }

@@ -9,15 +9,19 @@ import type { AngleTable } from '../core/glazing';
 import type { Shading } from '../core/shading';
 import type { Weather, WindowSpec } from '../core/gain';
 import { RANGE_ADDRESS_HELP, parseRangeAddress } from './addresses';
+import type { SheetWeather } from './weather';
 import { FIELDS, FIELD_BY_ID, type FieldDef, type FormValues, fieldForArgument } from './fields';
 
 /** Data the form refers to on sheets, once read. */
 export interface SheetData {
   angleTable?: AngleTable;
   skyline?: number[];
+  /** The hourly weather, once checked (NaN marks an unusable hour). */
   dni?: number[];
   dhi?: number[];
   ghi?: number[];
+  /** The weather ranges as read, before the check (see ./weather.ts). */
+  weatherRanges?: SheetWeather;
 }
 
 /** Checks a WindowSpec; throws SunpaneError naming the field path (the core's validateWindowSpec). */
@@ -58,9 +62,12 @@ function isZero(values: FormValues, id: string): boolean {
   return num(values, id) === 0;
 }
 
+/** Address boxes that may stay blank: the skyline, the weather's time stamps. */
+const OPTIONAL_ADDRESSES = new Set(['skylineAddress', 'timeAddress']);
+
 /** Which sheet ranges the form needs read before a run, by field id. */
 export function neededAddresses(values: FormValues): FieldDef[] {
-  return FIELDS.filter((f) => f.kind === 'address' && (f.visible ? f.visible(values) : true) && (f.id !== 'skylineAddress' || (values[f.id] ?? '').trim() !== ''));
+  return FIELDS.filter((f) => f.kind === 'address' && (f.visible ? f.visible(values) : true) && (!OPTIONAL_ADDRESSES.has(f.id) || (values[f.id] ?? '').trim() !== ''));
 }
 
 /**

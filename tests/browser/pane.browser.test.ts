@@ -418,8 +418,10 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     await setField(page, 'dhiAddress', 'Weather!B1:B100');
     await setField(page, 'year', String(YEAR));
     await page.click('#run-year');
-    await waitForStatus(page, /ranges the form points at/);
-    expect(await page.textContent('#dniAddress-msg')).toBe(`weather.dni = "100 rows" is not allowed: must hold one value per hour of the year: 8760 for ${YEAR} (a typical year of 8760 or a leap-year file of 8784 is also fitted)`);
+    await waitForStatus(page, /weather columns cannot be used/);
+    expect(await page.textContent('#dniAddress-msg')).toBe(
+      `The weather columns cannot be used: expected 8760 hourly rows for ${YEAR} (one per hour, the first ending at 01:00 on 1 January; a typical year of 8760 or a leap-year file of 8784 is also fitted), found 100, row 1 to row 100; or give the rows their time stamps`,
+    );
     expect(await host.sheetNames(page)).toEqual(['Weather']);
     await page.screenshot({ path: path.join(ARTIFACTS, 'pane-bad-input.png'), fullPage: true });
     await page.close();

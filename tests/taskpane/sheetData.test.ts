@@ -2,7 +2,7 @@
 import { SunpaneError } from '../../src/core/common/errors';
 import { initialValues } from '../../src/taskpane/fields';
 import type { RunBatch } from '../../src/taskpane/resultSheets';
-import { angleTableOf, readNamedTable, readSheetData, weatherColumn } from '../../src/taskpane/sheetData';
+import { angleTableOf, readNamedTable, readSheetData } from '../../src/taskpane/sheetData';
 // eslint-disable-next-line @typescript-eslint/no-require-imports
 const { createExcelHost } = require('../browser/excel-host.js');
 
@@ -16,10 +16,6 @@ describe('sheet data for the form', () => {
   test('an angle table may have a text header row; blank rows are skipped', () => {
     expect(angleTableOf([['Angle', 'SHGC'], [0, 0.5], ['', ''], [60, '0.4'], [90, 0]])).toEqual({ angles: [0, 60, 90], values: [0.5, 0.4, 0] });
     expect(() => angleTableOf([[0], [10]])).toThrow(SunpaneError);
-  });
-
-  test('blank or text weather cells become missing hours (NaN), numbers stay', () => {
-    expect(weatherColumn([[500], [''], ['n/a'], ['12.5']])).toEqual([500, NaN, NaN, 12.5]);
   });
 
   test('the skyline, the angle table and both weather columns are read in one request from their sheets', async () => {
@@ -37,7 +33,16 @@ describe('sheet data for the form', () => {
       dhiAddress: "'My weather'!B1:B3",
     });
     expect(host.state.syncs.length - syncsBefore).toBe(1);
-    expect(data).toEqual({ skyline: [10, 20, 15], angleTable: { angles: [0, 40, 70, 90], values: [0.55, 0.5, 0.3, 0] }, dni: [800, 0, NaN], dhi: [100, 0, 50] });
+    expect(data).toEqual({
+      skyline: [10, 20, 15],
+      angleTable: { angles: [0, 40, 70, 90], values: [0.55, 0.5, 0.3, 0] },
+      weatherRanges: {
+        columns: {
+          dni: { address: "'My weather'!A1:A3", topRow: 1, values: [[800], [0], ['']] },
+          dhi: { address: "'My weather'!B1:B3", topRow: 1, values: [[100], [0], [50]] },
+        },
+      },
+    });
   });
 
   test('a range on a sheet that does not exist is reported naming the field', async () => {
