@@ -21,8 +21,13 @@ const { resolveHost, manifestForHost, manifestForIdentity } = require('./scripts
 const ROOT = __dirname;
 const SRC = path.join(ROOT, 'src');
 const OFFICE_JS = 'https://appsforoffice.microsoft.com/lib/1/hosted/office.js';
-/** Functions + pane JavaScript, minified, excluding office.js [bytes]: 150 KB until the core gained glazing types, conduction, the load by part and the clock (156.3 KB then), 165 KB until the pane took on the shared weather reader and checks (src/io/weather.ts). */
-const BUDGET_BYTES = 165 * 1024;
+/**
+ * Functions + pane JavaScript, minified, excluding office.js [bytes]: 150 KB until the core gained
+ * glazing types, conduction, the load by part and the clock (156.3 KB then); 165 KB until the pane
+ * took on the command line's weather reader and checks (src/io/weather.ts and its helpers: 159.4 ->
+ * 177.3 KB).
+ */
+const BUDGET_BYTES = 180 * 1024;
 const DEV_PORT = 3000;
 
 /**

@@ -14,7 +14,7 @@
 import { type Weather, MAX_IRRADIANCE } from '../core/gain';
 import { COMPARISON_MIN_GHI, IRRADIANCE_FLOOR, closureTolerance, diffuseRatioLimit, extraterrestrialSpencer, physicalIrradianceLimits } from '../core/sky';
 import { type Site, annualSunPath } from '../core/sun';
-import { civilToSerial, formatSerialIso, hoursInYear, serialToCivil } from '../core/time';
+import { civilToSerial, fitYearOfHours, formatSerialIso, hoursInYear, serialToCivil } from '../core/time';
 import { type DecimalMark, type PlacedText, findDecimalMark, readNumberText } from './numberText';
 import { type CivilStamp, readStampText, stampFromSerial } from './stampText';
 
@@ -46,6 +46,8 @@ const DARK_LIGHT_MAX = 10;
 const LIGHT_THRESHOLD = 1;
 /** Fewest days with a sunrise and a sunset in both the data and the sun for the timing check. */
 const TIMING_MIN_DAYS = 20;
+/** Hour index (0-based, from 1 January 00:00) of 29 February 00:00 in a leap year. */
+const FEB29_HOUR = 59 * 24;
 /** Examples shown per problem. */
 const SHOWN = 4;
 
@@ -318,11 +320,16 @@ export function checkWeather(table: WeatherTable, options: WeatherOptions): Weat
       const hint = problems.hintOf('outside');
       refusals.push(`no row could be placed in ${year} by its stamp${hint ? ` (${hint})` : ''}`);
     }
-  } else if (table.rows !== n) {
-    refusals.push(`expected ${n} hourly rows for ${year} (one per hour, the first ending at 01:00 on 1 January), found ${table.rows}${table.rows > 0 ? `, ${table.where(0)} to ${table.where(table.rows - 1)}` : ''}; or give the rows their time stamps`);
+  } else if (table.rows !== 8760 && table.rows !== 8784) {
+    refusals.push(
+      `expected ${n} hourly rows for ${year} (one per hour, the first ending at 01:00 on 1 January; a typical year of 8760 or a leap-year file of 8784 is also fitted), found ${table.rows}${table.rows > 0 ? `, ${table.where(0)} to ${table.where(table.rows - 1)}` : ''}; or give the rows their time stamps`,
+    );
   } else {
-    for (let i = 0; i < n; i++) slotRow[i] = i;
+    // Rows in order; a file of the other length is fitted by date as the core fits series (src/core/time/clock.ts).
+    const fit = fitYearOfHours(table.rows, year);
+    slotRow.set(fit.rowOf);
     notes.push(`no time stamps: rows read in order, the first as the hour ending 01:00 on 1 January ${year}`);
+    if (fit.rule !== 'asGiven') notes.push(fit.text);
   }
   if (refusals.length) return { ...refused(), problems: problems.list() };
 
@@ -506,6 +513,7 @@ function placeByStamps(
   const yearsOutside = new Map<number, number>();
   const yearsSeen = new Set<number>();
   let startOfYearFirst = false;
+  let feb29Dropped = 0;
   for (let row = 0; row < table.rows; row++) {
     if (table.brokenRows?.has(row)) {
       problems.add('broken', `${table.where(row)} (${table.brokenRows.get(row)})`);
@@ -526,7 +534,7 @@ function placeByStamps(
       // The hour's own start, in the stamp's year, then its month, day and time in the window's year.
       const start = serialToCivil(civilToSerial(s.year, s.month, s.day, s.hour, s.minute, s.second) + (zoneShift - shiftMinutes) / 1440);
       if (start.month === 2 && start.day === 29 && hoursInYear(year) === 8760) {
-        problems.add('outside', `${table.where(row)} "${text}" (29 February)`);
+        feb29Dropped++;
         continue;
       }
       minutes = (civilToSerial(year, start.month, start.day) - firstDay) * 1440 + start.hour * 60 + start.minute + Math.round(start.second) / 60;
@@ -570,6 +578,17 @@ function placeByStamps(
   }
   if (zoned !== undefined && zoned !== siteOffsetMinutes) {
     notes.push(`stamps with a time zone converted to the window's standard time (UTC${site.utcOffset >= 0 ? '+' : ''}${site.utcOffset})`);
+  }
+  if (options.typicalYear && feb29Dropped > 0) notes.push(`29 February's ${feb29Dropped} row${feb29Dropped > 1 ? 's' : ''} dropped: ${year} has no 29 February`);
+  if (options.typicalYear && hoursInYear(year) === 8784) {
+    // A typical year has no 29 February: as the trade fits one to a leap year, that day repeats 28 February.
+    const feb29 = FEB29_HOUR;
+    let empty = true;
+    for (let i = feb29; i < feb29 + 24; i++) if (slotRow[i] >= 0) empty = false;
+    if (empty) {
+      for (let i = feb29; i < feb29 + 24; i++) slotRow[i] = slotRow[i - 24];
+      notes.push(`a typical year fitted to leap year ${year}: 29 February repeats 28 February's hours`);
+    }
   }
   if (options.typicalYear) {
     const ys = [...yearsSeen];

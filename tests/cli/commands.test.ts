@@ -124,7 +124,7 @@ describe('sunpane table', () => {
     expect(r.err).toMatch(/cannot be used: no row could be placed in 2028 by its stamp \(the stamps are for 2026: set the window's year to 2026, or, if the file is a typical year, say so \(--typical-year\)\)/);
     const typical = await run('table', '--window', window, ...WEATHER_FLAGS, '--typical-year', '--out', path.join(dir, 'y.csv'));
     expect(typical.code).toBe(0);
-    expect(typical.err).toMatch(/24 hours with no row: hours ending 2028-02-29T01:00 to 2028-03-01T00:00 \(24 h\)/);
+    expect(typical.err).toMatch(/a typical year fitted to leap year 2028: 29 February repeats 28 February's hours/);
     expect(typical.err).toMatch(/stamps of a typical year \(2026–2027\) read by month, day and hour as 2028/);
   });
 

@@ -77,7 +77,7 @@ describe('weather CSV', () => {
     expect(r.check.usable).toBe(true);
     expect(r.lines).toEqual(['w.csv: no unit stated for direct normal and diffuse horizontal: read as W/m² (state it in the header, e.g. "direct normal [W/m²]", or --units W/m2|Wh/m2|kJ/m2)', 'w.csv: no time stamps: rows read in order, the first as the hour ending 01:00 on 1 January 2026']);
     const short = read(csv('t,direct normal,diffuse horizontal', comma).split('\n').slice(0, -2).join('\n'), { dni: 'direct normal', dhi: 'diffuse horizontal', time: 'none' } as never);
-    expect(short.check.refusals[0]).toBe('expected 8760 hourly rows for 2026 (one per hour, the first ending at 01:00 on 1 January), found 8759, line 2 to line 8760; or give the rows their time stamps');
+    expect(short.check.refusals[0]).toBe('expected 8760 hourly rows for 2026 (one per hour, the first ending at 01:00 on 1 January; a typical year of 8760 or a leap-year file of 8784 is also fitted), found 8759, line 2 to line 8760; or give the rows their time stamps');
   });
 
   test('refuses a column name the header does not have, listing the columns; a column number below 1 is wrong usage', () => {

@@ -70,11 +70,24 @@ describe('time stamps', () => {
     expect(c.lines).toEqual(['w.csv: stamps of a typical year (2019–2020) read by month, day and hour as 2026']);
   });
 
-  test('a typical year of 365 days used for a leap year has the 24 hours of 29 February reported as having no row', () => {
+  test('a typical year used for a leap year: 29 February repeats 28 February, as the core fits a 8760-row series (noted)', () => {
     const c = check(table(), { year: 2028, typicalYear: true });
-    expect(c.unusableHours).toBe(24);
+    expect(c.unusableHours).toBe(0);
     expect(c.usable).toBe(true);
-    expect(c.lines).toContain('  24 hours with no row: hours ending 2028-02-29T01:00 to 2028-03-01T00:00 (24 h)');
+    expect(c.lines).toEqual(["w.csv: a typical year fitted to leap year 2028: 29 February repeats 28 February's hours", 'w.csv: stamps of a typical year (2026–2027) read by month, day and hour as 2028']);
+    if (c.weather?.kind !== 'measured') throw new Error('kind');
+    const feb28Noon = 58 * 24 + 11;
+    expect(c.weather.dni[feb28Noon + 24]).toBe(W.dni[feb28Noon]);
+    expect(c.weather.dni[feb28Noon + 48]).toBe(W.dni[feb28Noon + 24]); // 1 March keeps its own hours
+  });
+
+  test('rows in order without stamps: 8760 rows for a leap year are fitted as the core fits them, other counts refused', () => {
+    const noStamps = (t: WeatherTable): WeatherTable => ({ ...t, stamps: undefined });
+    const leap = check(noStamps(table()), { year: 2028 });
+    expect(leap.usable).toBe(true);
+    expect(leap.notes).toEqual(['no time stamps: rows read in order, the first as the hour ending 01:00 on 1 January 2028', "typical year of 8760 rows fitted to leap year 2028: 29 February repeats 28 February's hours"]);
+    const short = check(noStamps(table((r) => r.slice(0, 8000))));
+    expect(short.refusals).toEqual(['expected 8760 hourly rows for 2026 (one per hour, the first ending at 01:00 on 1 January; a typical year of 8760 or a leap-year file of 8784 is also fitted), found 8000, line 2 to line 8001; or give the rows their time stamps']);
   });
 
   test('hour-beginning stamps read as hour-ending: the stamps and the sun both say so, and the file is refused', () => {

@@ -62,7 +62,7 @@ describe('the pane reads weather as the command line does', () => {
     const table = weatherTableFromRanges({ columns: { dni: { address: 'A1:A100', topRow: 1, values: Array.from({ length: 100 }, () => [500]) }, dhi: { address: 'B1:B100', topRow: 1, values: Array.from({ length: 100 }, () => [100]) } } });
     const { check, lines } = checkFormWeather(table, initialValues(), SITE, 2026);
     expect(check.usable).toBe(false);
-    expect(lines[0]).toBe('The weather columns cannot be used: expected 8760 hourly rows for 2026 (one per hour, the first ending at 01:00 on 1 January), found 100, row 1 to row 100; or give the rows their time stamps');
+    expect(lines[0]).toBe('The weather columns cannot be used: expected 8760 hourly rows for 2026 (one per hour, the first ending at 01:00 on 1 January; a typical year of 8760 or a leap-year file of 8784 is also fitted), found 100, row 1 to row 100; or give the rows their time stamps');
   });
 
   test('ranges of different lengths, and a limit that is not a percentage, are named by their box', () => {
