@@ -39,6 +39,8 @@
  *   },                               //   gap and extensions default 0
  *   "groundAlbedo": 0.2,             // ground reflectance 0…1, default 0.2
  *   "skyModel": "perez1990",         // "isotropic" | "hayDavies" | "perez1990" (default)
+ *   "diffuseShading": "viewFactors", // "viewFactors" (default): devices cut sky and ground light too;
+ *                                    // "beamOnly": the earlier treatment, for comparison
  *   "weather": { "kind": "ineichenClearSky", "linkeTurbidity": 3.2 }
  *       // or { "kind": "ashraeClearSky", "tauB": 0.35, "tauD": 2.3 }; numbers or lists of 12 (by month).
  *       // Optional when hourly weather comes from a CSV file (`--weather`), or when `site` names an
@@ -52,7 +54,7 @@ import type { Fin, Overhang, Shading } from '../core/shading';
 import type { Glazing } from '../core/glazing';
 import type { Site } from '../core/sun';
 import type { SkyModel } from '../core/sky';
-import type { Weather, WindowSpec } from '../core/gain';
+import type { DiffuseShading, Weather, WindowSpec } from '../core/gain';
 import { findExampleSite, EXAMPLE_SITES } from '../demo/sites';
 import { CliInputError } from './cliError';
 import { describeFsError } from './atomicWrite';
@@ -70,9 +72,10 @@ export const WINDOW_DEFAULTS = Object.freeze({
 });
 
 /** The top-level fields of a window file. */
-const WINDOW_FIELDS = ['name', 'year', 'site', 'surfaceAzimuth', 'surfaceTilt', 'width', 'height', 'frameFraction', 'glazing', 'shading', 'groundAlbedo', 'skyModel', 'weather'];
+const WINDOW_FIELDS = ['name', 'year', 'site', 'surfaceAzimuth', 'surfaceTilt', 'width', 'height', 'frameFraction', 'glazing', 'shading', 'groundAlbedo', 'skyModel', 'diffuseShading', 'weather'];
 
 const SKY_MODELS: readonly SkyModel[] = ['isotropic', 'hayDavies', 'perez1990'];
+const DIFFUSE_SHADINGS: readonly DiffuseShading[] = ['viewFactors', 'beamOnly'];
 
 type Json = Record<string, unknown>;
 
@@ -288,6 +291,9 @@ export function windowFromJson(json: unknown): WindowFile {
   const skyModelText = r.text('skyModel', WINDOW_DEFAULTS.skyModel);
   const skyModel = SKY_MODELS.find((m) => m.toLowerCase() === skyModelText.toLowerCase());
   if (!skyModel) throw new SunpaneError('skyModel', skyModelText, `must be one of ${SKY_MODELS.map((m) => `"${m}"`).join(', ')}`);
+  const diffuseText = r.text('diffuseShading', 'viewFactors');
+  const diffuseShading = DIFFUSE_SHADINGS.find((m) => m.toLowerCase() === diffuseText.toLowerCase());
+  if (!diffuseShading) throw new SunpaneError('diffuseShading', diffuseText, `must be one of ${DIFFUSE_SHADINGS.map((m) => `"${m}"`).join(', ')}`);
   const given = readWeather(r);
   const weather = given ?? exampleWeather;
   return {
@@ -303,6 +309,7 @@ export function windowFromJson(json: unknown): WindowFile {
       shading,
       groundAlbedo,
       skyModel,
+      ...(diffuseShading === 'beamOnly' ? { diffuseShading } : {}),
       weather: weather ?? { kind: 'measured', dni: [], dhi: [] },
       year,
     },

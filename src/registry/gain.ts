@@ -42,9 +42,10 @@ const P = {
   quantity: {
     name: 'quantity',
     kind: 'choice',
-    choices: ['gain', 'radiant', 'convective', 'beam', 'sky', 'ground', 'dni', 'dhi', 'sunlit', 'shgc', 'incidence', 'profile', 'altitude', 'azimuth', 'stamp'],
+    choices: ['gain', 'radiant', 'convective', 'beam', 'sky', 'ground', 'skyunshaded', 'groundunshaded', 'dni', 'dhi', 'sunlit', 'skyview', 'groundview', 'horizonshare', 'shgc', 'incidence', 'profile', 'altitude', 'azimuth', 'stamp'],
     default: 'gain',
-    description: 'column of the hourly series: gain, radiant, convective [W]; beam, sky, ground on the window, dni, dhi [W/m²]; sunlit fraction; shgc; incidence, profile, altitude, azimuth [°]; stamp (end of hour)',
+    description:
+      'column of the hourly series: gain, radiant, convective [W]; beam on the window plane, sky and ground reaching the glass, skyunshaded and groundunshaded on the bare window, dni, dhi [W/m²]; sunlit fraction; the window’s skyview and groundview ratios and horizonshare (0…1, the same every hour); shgc; incidence, profile, altitude, azimuth [°]; stamp (end of hour)',
   },
   day: { name: 'day', kind: 'number', integer: true, min: 1, max: 28, default: 21, description: 'day of each month for the clear design day' },
   factors: { name: 'factors', kind: 'numberList', min: 0, max: 1, length: { exact: 24 }, description: 'the 24 radiant time factors r0…r23 of the room (from your handbook or room model), summing to 1' },
@@ -293,6 +294,8 @@ const SERIES_COLUMN: Record<string, keyof AnnualSeries> = {
   beam: 'beam',
   sky: 'sky',
   ground: 'ground',
+  skyunshaded: 'skyUnshaded',
+  groundunshaded: 'groundUnshaded',
   dni: 'dni',
   dhi: 'dhi',
   sunlit: 'sunlitFraction',
@@ -304,7 +307,13 @@ const SERIES_COLUMN: Record<string, keyof AnnualSeries> = {
   stamp: 'stampSerial',
 };
 /** Columns that depend on the weather (shown as #N/A on a missing hour). */
-const WEATHER_COLUMNS = new Set(['gain', 'radiant', 'convective', 'beam', 'sky', 'ground', 'dni', 'dhi']);
+const WEATHER_COLUMNS = new Set(['gain', 'radiant', 'convective', 'beam', 'sky', 'ground', 'skyunshaded', 'groundunshaded', 'dni', 'dhi']);
+/** The window's diffuse-shading ratios, constant over the year (one value repeated on every row). */
+const DIFFUSE_CONSTANTS: Record<string, (s: AnnualSeries) => number> = {
+  skyview: (s) => s.diffuse.skyViewRatio,
+  groundview: (s) => s.diffuse.groundViewRatio,
+  horizonshare: (s) => s.diffuse.horizonShare,
+};
 
 function yearSpec(a: Args): WindowSpec {
   const weather: Weather = a.dni !== undefined && a.dhi !== undefined ? { kind: 'measured', dni: a.dni as number[], dhi: a.dhi as number[] } : clearSkyOf(a);
@@ -334,9 +343,15 @@ const WINDOWYEAR: FunctionDescriptor = {
     requireWeatherArgs(a);
     const series = asParams(() => annualSeries(yearSpec(a)));
     const key = a.quantity as string;
+    const out: OutTable = new Array(series.hours);
+    const constant = DIFFUSE_CONSTANTS[key];
+    if (constant !== undefined) {
+      const v = constant(series);
+      for (let i = 0; i < series.hours; i++) out[i] = [v];
+      return out;
+    }
     const column = series[SERIES_COLUMN[key]] as Float64Array;
     const weatherDependent = WEATHER_COLUMNS.has(key);
-    const out: OutTable = new Array(series.hours);
     for (let i = 0; i < series.hours; i++) out[i] = [weatherDependent && series.missing[i] === 1 ? new NotAvailable('no weather value for this hour') : column[i]];
     return out;
   },
@@ -344,6 +359,7 @@ const WINDOWYEAR: FunctionDescriptor = {
   examples: [
     { args: ['2026', '40', '-105', '-7', '180', '1.5', '1.2', '0.4', '"gain"', '', '', '0.4', '2.3'], note: 'hourly clear-sky gain of a south window for the whole year' },
     { args: ['2026', '40', '-105', '-7', '180', '1.5', '1.2', '0.4', '"sunlit"', '', '', '0.4', '2.3', '', '', '', '', '', '', '0.8'], note: 'hourly sunlit fraction under a 0.8 m overhang' },
+    { args: ['2026', '40', '-105', '-7', '180', '1.5', '1.2', '0.4', '"sky"', '', '', '0.4', '2.3', '', '', '', '', '', '', '0.8'], note: 'hourly sky diffuse reaching the glass under the same overhang ("skyunshaded" gives the bare window’s, "skyview" the ratio between them for an isotropic sky)' },
   ],
   outsideCheck: { source: 'Every hour held to the checked one-hour functions (see WINDOWGAIN) within 1e-12 (relative for irradiances), and the year\'s sun path held to the direct NREL SPA within 1e-4° (which is checked against the report\'s worked example, astronomy-engine 2.1.19 and suncalc 2.0.2); rows stamped at the end of each hour, 8760 or 8784 of them.', tests: ['tests/core/gain/annual.test.ts', 'tests/core/gain/preparedFast.test.ts', 'tests/core/sun/sunPath.test.ts', 'tests/registry/gainFunctions.test.ts'] },
 };

@@ -1,6 +1,7 @@
 /**
  * Worksheet-function descriptors: sunlit fraction of a window behind an overhang, fins, a reveal and
- * a skyline; shadow depth and width of long devices; a month × hour sunlit mask. Every descriptor
+ * a skyline; the window's view factors to the open sky and ground; shadow depth and width of long
+ * devices; a month × hour sunlit mask. Every descriptor
  * reads its arguments and calls the core (src/core/shading/sunlit.ts, src/core/shading/shadingMask.ts).
  *
  * Argument order: sun angles and surface azimuth, the window, then the devices, all optional with
@@ -8,7 +9,7 @@
  * (src/registry/gain.ts) so that one name means one thing.
  */
 import { SunpaneError } from '../core/common';
-import { shadowDepth, shadowWidth, sunlitFraction, type WindowOpening, MASK_DEFAULT_YEAR, monthHourMask, type Shading } from '../core/shading';
+import { shadowDepth, shadowWidth, sunlitFraction, type WindowOpening, MASK_DEFAULT_YEAR, monthHourMask, type Shading, windowViewFactors } from '../core/shading';
 import { GLOSSARY } from './glossary';
 import { type Args, type FunctionDescriptor, NotAvailable, type OutsideCheck, type ParamDescriptor } from './types';
 
@@ -163,6 +164,34 @@ export const SHADING_FUNCTIONS: readonly FunctionDescriptor[] = [
       { args: ['20', '250', '220', '1.2', '1.5', '', '', '', '', '', '', '', '', '', '', '', '{0,0,0,0,0,0,0,0,30,0,0,0}'], note: '0: a 30° building in the west-south-west hides the sun at 20°' },
     ],
     outsideCheck: SUNLIT_CHECK,
+  },
+  {
+    name: 'VIEWFACTORS',
+    summary: "What a window's glass still sees of the open sky and ground past overhang, fins, reveal and skyline: view factors, their ratios to the bare window and the open share of the horizon band",
+    category: 'Shading',
+    params: [GLOSSARY.surfaceAzimuth, ...WINDOW, ...FULL_SET],
+    result: {
+      shape: 'spill',
+      columns: ['skyViewFactor', 'groundViewFactor', 'skyViewRatio', 'groundViewRatio', 'horizonShare'],
+      min: 0,
+      max: 1,
+      description:
+        'one row: glass-averaged view factor to the open sky and to the open ground (½ each for a bare vertical window), each over the bare window’s ½ (the share of the isotropic sky diffuse and of the ground-reflected light that reaches the glass), and the open share of the sky 0–6.5° above the horizon; devices and skyline block together, black; numerical error at most 0.002',
+    },
+    refuses: (a) => overhangProblem(a) ?? finProblem(a),
+    evaluate: (a) => {
+      const vf = windowViewFactors(openingOf(a), fullShadingOf(a), num(a, 'surfaceAzimuth'));
+      return [[vf.sky, vf.ground, vf.skyRatio, vf.groundRatio, vf.horizonShare]];
+    },
+    examples: [
+      { args: ['180', '1.2', '1.5', '1', '0', '100', '100'], note: 'a 1.0 m overhang at the head running 100 m each side: sky 0.2676 (ratio 0.5352, the crossed-strings value of a long overhang), ground 0.5, horizon band 0.941' },
+      { args: ['180', '2.4', '2.1', '', '', '', '', '', '', '', '', '', '', '0.15'], note: 'glass set back 0.15 m: sky and ground 0.4397 each (ratio 0.8793), horizon band 0.934' },
+    ],
+    outsideCheck: {
+      source:
+        "Hottel's crossed-strings method (a long overhang, derived in the test; to 1e-7); the catalogue of configuration factors (Howell; Siegel & Howell appendix): strip to a parallel rectangle 0.3886 and to a perpendicular rectangle 0.2153 as published, C-11 and C-14 from memory; and three.js 0.187.0 ray casting, a cosine-weighted hemisphere integration over 200 random windows within 0.003 — produced by a named library; in the formula table, a uniform skyline by the view-factor definition.",
+      tests: ['tests/reference/crossed-strings-overhang.test.ts', 'tests/reference/configuration-factors.test.ts', 'tests/reference/raycast-view-factors.test.ts', 'tests/fixtures/formulas.ts'],
+    },
   },
   {
     name: 'SHADOWDEPTH',

@@ -40,7 +40,8 @@ function windowIrradiance(a: Args) {
     groundAlbedo: a.groundAlbedo as number,
     dayOfYear: a.dayOfYear as number,
     skyModel: MODEL_OF[a.skyModel as ModelChoice],
-    skyViewFactor: a.skyViewFactor as number,
+    // The whole sky diffuse (isotropic, circumsolar and horizon parts alike) × skyViewFactor.
+    shade: { isotropic: a.skyViewFactor as number, circumsolar: a.skyViewFactor as number, horizon: a.skyViewFactor as number, ground: 1 },
   });
 }
 
@@ -187,10 +188,23 @@ export const SKY_FUNCTIONS: readonly FunctionDescriptor[] = [
     name: 'VERTICALDIFFUSERATIO',
     summary: 'ASHRAE clear-day ratio of sky diffuse on a vertical surface to diffuse horizontal, from the incidence angle.',
     category: 'Sky and irradiance',
-    params: [{ name: 'incidence', kind: 'number', unit: '°', min: 0, max: 180, description: 'incidence angle of the sun on the vertical surface (above 90: sun behind it)' }],
-    result: { shape: 'value', min: 0.45, max: 1.3, description: 'Y = max(0.45, 0.55 + 0.437 cos θ + 0.313 cos² θ); multiply by the clear-sky diffuse horizontal' },
-    evaluate: (a) => ashraeVerticalDiffuseRatio(a.incidence as number),
-    examples: [{ args: ['60'], note: 'sun 60° off the wall normal: 0.8168' }],
+    params: [
+      { name: 'incidence', kind: 'number', unit: '°', min: 0, max: 180, description: 'incidence angle of the sun on the vertical surface (above 90: sun behind it)' },
+      {
+        name: 'skyViewRatio',
+        kind: 'number',
+        min: 0,
+        max: 1,
+        default: 1,
+        description: "a shaded window's sky view ratio (the skyRatio column of VIEWFACTORS); the ratio has no separate circumsolar part, so all of it is scaled — on the safe side when the devices also hide the sun",
+      },
+    ],
+    result: { shape: 'value', min: 0, max: 1.3, description: 'Y × skyViewRatio, Y = max(0.45, 0.55 + 0.437 cos θ + 0.313 cos² θ); multiply by the clear-sky diffuse horizontal' },
+    evaluate: (a) => ashraeVerticalDiffuseRatio(a.incidence as number) * (a.skyViewRatio as number),
+    examples: [
+      { args: ['60'], note: 'sun 60° off the wall normal: 0.8468' },
+      { args: ['60', '0.55'], note: 'the same behind devices that leave 55 % of the sky in view: 0.4657' },
+    ],
     outsideCheck: { source: 'ASHRAE Handbook—Fundamentals (2013) ch. 14: Y = max(0.45, 0.55 + 0.437 cos θ + 0.313 cos² θ) — the formula from memory: 1.3 at 0°, 0.55 at 90°, 0.45 at its floor.', tests: ['tests/reference/ashrae-clear-sky.test.ts', 'tests/fixtures/formulas.ts'] },
   },
 ];

@@ -91,6 +91,13 @@ describe('window JSON', () => {
     expect(refusal(json).argument).toBe(field);
   });
 
+  it('reads diffuseShading: view factors by default, "beamOnly" for the earlier treatment, anything else refused', () => {
+    expect(windowFromJson(MINIMAL).spec.diffuseShading).toBeUndefined();
+    expect(windowFromJson({ ...MINIMAL, diffuseShading: 'beamonly' }).spec.diffuseShading).toBe('beamOnly');
+    expect(windowFromJson({ ...MINIMAL, diffuseShading: 'viewFactors' }).spec.diffuseShading).toBeUndefined();
+    expect(refusal({ ...MINIMAL, diffuseShading: 'none' }).argument).toBe('diffuseShading');
+  });
+
   it('ignores note fields starting with an underscore or named comment', () => {
     expect(() => windowFromJson({ ...MINIMAL, _note: 'x', comment: 'y' })).not.toThrow();
   });

@@ -24,6 +24,8 @@
  * ratio is 0.005.
  */
 import { windowViewFactors } from '../../src/core/shading/viewFactors';
+import { windowGainAt } from '../../src/core/gain/windowGain';
+import type { WindowSpec } from '../../src/core/gain/window';
 
 type P2 = readonly [number, number]; // (z out from the wall, y up)
 
@@ -116,5 +118,39 @@ describe("Hottel's crossed strings: an infinitely long overhang over a window", 
       // and the narrower window sees less sky than the 2-D section
       expect(vf.sky).toBeLessThan(wide.sky);
     }
+  });
+});
+
+describe('the overcast hour of the issue: the overhang now cuts the sky diffuse', () => {
+  // A 1.2 × 1.5 m south window under a 1.0 m overhang at the head running 100 m each side; direct
+  // normal 0, diffuse horizontal 200 W/m², isotropic sky, ground albedo 0: all the gain is sky
+  // diffuse, so the shaded gain over the bare window's gain is the sky view ratio.
+  const spec: WindowSpec = {
+    name: 'overcast check',
+    site: { latitude: 51.5, longitude: 0, utcOffset: 0 },
+    surfaceAzimuth: 180,
+    surfaceTilt: 90,
+    width: 1.2,
+    height: 1.5,
+    frameFraction: 0,
+    glazing: { shgc: 0.6, panes: 2 },
+    shading: { overhang: { projection: 1, gap: 0, extensionLeft: 100, extensionRight: 100 } },
+    groundAlbedo: 0,
+    skyModel: 'isotropic',
+    weather: { kind: 'ashraeClearSky', tauB: [0.4], tauD: [2.3] },
+    year: 2026,
+  };
+  const hour = { dni: 0, dhi: 200 };
+  const when = 46224.5; // 2026-07-21 12:00
+
+  test('gain ratio shaded / bare within 0.005 of the crossed-strings 0.5352; the earlier beam-only treatment gave the bare gain', () => {
+    const bare = windowGainAt({ ...spec, shading: {} }, when, hour).gain.total;
+    const shaded = windowGainAt(spec, when, hour);
+    const beamOnly = windowGainAt({ ...spec, diffuseShading: 'beamOnly' }, when, hour).gain.total;
+    const strings = skyByStrings(1.5, 0, 1.0) / 0.5;
+    expect(Math.abs(shaded.gain.total / bare - strings)).toBeLessThan(0.005);
+    expect(Math.abs(shaded.skyViewRatio - strings)).toBeLessThan(0.005);
+    expect(beamOnly).toBeCloseTo(bare, 10);
+    expect(bare).toBeGreaterThan(80);
   });
 });

@@ -21,6 +21,8 @@ const NOON = '2026-07-21T12:30';
 const HOUR = [NOON, 40, -105, -7, 180, 2, 1.5, 0.6, null, null, 0.4, 2.3];
 // panes, frameFraction, groundAlbedo, skyModel, surfaceTilt, interiorAttenuation
 const GLASS = [2, 0.1, 0.2, 'perez', 90, 1];
+// GAINSTEPS rows for a window with no interior shade: sun, angles, shading, weather, the three diffuse ratios, irradiance bare and shaded, SHGC, area, gain.
+const STEPS = 29;
 
 describe('gain worksheet functions', () => {
   test('WINDOWGAIN equals the core gain of the same window', () => {
@@ -49,13 +51,26 @@ describe('gain worksheet functions', () => {
     expect(tilted.argument).toBe('surfaceTilt');
   });
 
-  test('GAINSTEPS spills a heading and 25 steps whose window-solar-gain line is WINDOWGAIN', () => {
+  test('GAINSTEPS spills a heading and its steps, whose window-solar-gain line is WINDOWGAIN', () => {
     const table = call('GAINSTEPS', [...HOUR, ...GLASS]);
     expect(table[0]).toEqual(['step', 'quantity', 'value', 'unit', 'method']);
-    expect(table).toHaveLength(26);
+    expect(table).toHaveLength(STEPS + 1);
     const line = table.find((r) => r[1] === 'window solar gain')!;
     expect(line[2]).toBeCloseTo(call('WINDOWGAIN', [...HOUR, ...GLASS])[0][0] as number, 9);
-    expect(table.slice(1).map((r) => r[0])).toEqual(Array.from({ length: 25 }, (_, i) => i + 1));
+    expect(table.slice(1).map((r) => r[0])).toEqual(Array.from({ length: STEPS }, (_, i) => i + 1));
+  });
+
+  test('GAINSTEPS shows each diffuse ratio and where it came from; the shaded sky is the bare sky cut by them', () => {
+    // The same hour under a 0.8 m overhang, 0.2 m above the head, reaching 0.3 m past each jamb.
+    const table = call('GAINSTEPS', [...HOUR, ...GLASS, 1, 0.8, 0.2, 0.3, 0.3]);
+    const row = (q: string) => table.find((r) => r[1] === q)!;
+    const ratio = row('sky view ratio');
+    expect(ratio[2] as number).toBeGreaterThan(0.5);
+    expect(ratio[2] as number).toBeLessThan(0.9);
+    expect(ratio[4]).toMatch(/view factor to the open sky 0\.\d{4} ÷ ½/);
+    expect(row('ground view ratio')[2]).toBeCloseTo(1, 9); // an overhang hides no ground
+    expect(row('sky diffuse on the window')[2] as number).toBeLessThan(row('sky diffuse on the bare window')[2] as number);
+    expect(row('sky diffuse on the window')[4]).toMatch(/isotropic part × sky view ratio \+ circumsolar \(F1\) part × sunlit fraction \+ horizon \(F2\) part × horizon band share/);
   });
 
   test('COOLINGLOAD spills 24 rows and keeps a constant gain', () => {
@@ -87,6 +102,30 @@ describe('gain worksheet functions', () => {
     const cell = wrong()[0][0] as SunpaneError;
     expect(cell).toBeInstanceOf(SunpaneError);
     expect(cell.argument).toBe('dni');
+  });
+
+  test('WINDOWYEAR returns the diffuse shading: sky and ground reaching the glass, on the bare window, and the constant ratios', () => {
+    // year, site and window, quantity, no series, τb τd, glass, radiant fraction, then a 0.8 m overhang and 0.1 m fins
+    const args = (q: string) => [2026, 40, -105, -7, 180, 1.5, 1.2, 0.4, q, null, null, 0.4, 2.3, ...GLASS, 1, 0.8, 0.1, 0.2, 0.2, 0.3, 0.05];
+    const sky = call('WINDOWYEAR', args('sky')).map((r) => r[0] as number);
+    const bare = call('WINDOWYEAR', args('skyunshaded')).map((r) => r[0] as number);
+    const ground = call('WINDOWYEAR', args('ground')).map((r) => r[0] as number);
+    const groundBare = call('WINDOWYEAR', args('groundunshaded')).map((r) => r[0] as number);
+    const skyView = call('WINDOWYEAR', args('skyview')).map((r) => r[0] as number);
+    const groundView = call('WINDOWYEAR', args('groundview')).map((r) => r[0] as number);
+    const band = call('WINDOWYEAR', args('horizonshare')).map((r) => r[0] as number);
+    expect(new Set(skyView).size).toBe(1);
+    expect(skyView[0]).toBeGreaterThan(0.4);
+    expect(skyView[0]).toBeLessThan(0.9);
+    expect(groundView[0]).toBeLessThan(1); // the fins hide some ground
+    expect(band[0]).toBeGreaterThan(0);
+    let lit = 0;
+    for (let i = 0; i < sky.length; i++) {
+      expect(sky[i]).toBeLessThanOrEqual(bare[i] + 1e-9);
+      expect(ground[i]).toBeCloseTo(groundBare[i] * groundView[0], 9);
+      if (bare[i] > 0) lit++;
+    }
+    expect(lit).toBeGreaterThan(4000);
   });
 
   test('WINDOWYEAR marks a blank or text weather cell missing (#N/A) instead of reading it as zero', () => {

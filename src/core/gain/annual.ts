@@ -32,7 +32,7 @@ import type { ShgcCurve } from '../glazing';
 import { type PreparedShading, prepareShading } from '../shading';
 import { annualSunPath } from '../sun';
 import { daysInMonth, describeDaylightSaving, standardToClock } from '../time';
-import type { WindowSpec } from './window';
+import type { DiffuseShading, WindowSpec } from './window';
 
 /** One window's year, hour by hour. Every column has `hours` entries; row i is the hour ending at stampSerial[i]. */
 export interface AnnualSeries {
@@ -65,10 +65,21 @@ export interface AnnualSeries {
   /** Direct normal and diffuse horizontal irradiance used [W/m²] (0 on missing rows). */
   dni: Float64Array;
   dhi: Float64Array;
-  /** Irradiance on the window plane [W/m²]: beam (unshaded), sky diffuse, ground reflected. */
+  /**
+   * Irradiance [W/m²]: beam on the window plane (unshaded; the sunlit fraction applies in the gain),
+   * sky diffuse and ground reflected as they reach the glass past the window's devices and skyline.
+   */
   beam: Float64Array;
   sky: Float64Array;
   ground: Float64Array;
+  /** Sky diffuse and ground reflected on the bare window plane (no devices, no skyline) [W/m²]. */
+  skyUnshaded: Float64Array;
+  groundUnshaded: Float64Array;
+  /**
+   * The window's diffuse shading, constant over the year: sky and ground view ratios and the open
+   * share of the horizon band (0…1 each, 1 for a bare window), and the treatment used.
+   */
+  diffuse: { skyViewRatio: number; groundViewRatio: number; horizonShare: number; diffuseShading: DiffuseShading };
   /** SHGC for the beam at the incidence angle; 0 when no beam can reach the glass (sun down or behind the window). */
   shgc: Float64Array;
   /** Window solar gain [W], and its radiant and convective parts. */
@@ -154,6 +165,9 @@ export function annualOfPrepared(w: PreparedWindow): AnnualSeries {
     beam: col(),
     sky: col(),
     ground: col(),
+    skyUnshaded: col(),
+    groundUnshaded: col(),
+    diffuse: { skyViewRatio: w.shade.isotropic, groundViewRatio: w.shade.ground, horizonShare: w.shade.horizon, diffuseShading: w.beamOnly ? 'beamOnly' : 'viewFactors' },
     shgc: col(),
     gain: col(),
     radiant: col(),
@@ -173,7 +187,8 @@ export function annualOfPrepared(w: PreparedWindow): AnnualSeries {
   const surfAz = spec.surfaceAzimuth;
   // Checked once here; per hour only the kernels run (the same ones the checked functions use).
   const shade = w.vertical ? prepareShading({ width: spec.width, height: spec.height }, spec.shading, surfAz) : undefined;
-  const plane = preparePlane({ surfaceTilt: tilt, surfaceAzimuth: surfAz, groundAlbedo: spec.groundAlbedo, skyModel: w.skyModel, skyViewFactor: w.skyViewFactor });
+  // The window's diffuse shading (view factors, worked out once in prepareWindow) goes in as constants.
+  const plane = preparePlane({ surfaceTilt: tilt, surfaceAzimuth: surfAz, groundAlbedo: spec.groundAlbedo, skyModel: w.skyModel, shade: w.shade });
   const dniExtra = plane.needsDniExtra ? dniExtraByDay() : NO_DNI_EXTRA;
 
   // Three short passes over the year, each a function of its own (as in src/core/sun/sunPath.ts: short
@@ -183,7 +198,7 @@ export function annualOfPrepared(w: PreparedWindow): AnnualSeries {
   hourlyAngles(n, Math.cos(tilt * RAD), Math.sin(tilt * RAD), Math.cos(surfAz * RAD), Math.sin(surfAz * RAD), out.incidence, out.profileAngle);
   hourlyShading(n, shade, w.curve, surfAz, path.altitude, path.azimuth, out.incidence, out.sunlitFraction, out.shgc);
   if (out.hasConduction) hourlyConduction(w, out); // before the gain: a missing dry-bulb marks its hour missing
-  hourlyGain(n, plane, dniExtra, w.solarArea * w.interiorAttenuation, w.solarArea * w.interiorAttenuationDiffuse, w.radiantFraction, w.radiantFractionDiffuse, w.curve.diffuse, path.altitude, out);
+  hourlyGain(n, plane, dniExtra, w.solarArea * w.interiorAttenuation, w.solarArea * w.interiorAttenuationDiffuse, w.radiantFraction, w.radiantFractionDiffuse, w.curve.diffuse, w.beamOnly ? w.skylineSky : -1, path.altitude, out);
   return out;
 }
 
@@ -344,14 +359,16 @@ function hourlyShading(
  * @param frb - radiant fraction of the beam gain [-]
  * @param frd - radiant fraction of the diffuse gain [-]
  * @param shgcDiffuse - diffuse SHGC [-]
+ * @param circumsolarFixed - the multiplier on the circumsolar part in the beam-only treatment, or −1:
+ *   the hour's sunlit fraction ({@link circumsolarShade})
  * @param alt - sun altitude [°]
- * @param out - the series: reads dni, dhi, missing, sunlitFraction, shgc; fills beam, sky, ground, gain (and its beam and diffuse parts), radiant, convective
+ * @param out - the series: reads dni, dhi, missing, sunlitFraction, shgc; fills beam, sky, ground, their unshaded columns, gain (and its beam and diffuse parts), radiant, convective
  */
-function hourlyGain(n: number, plane: PreparedPlane, dniExtra: Float64Array, kb: number, kd: number, frb: number, frd: number, shgcDiffuse: number, alt: Float64Array, out: AnnualSeries): void {
-  const { dni: dniColumn, dhi: dhiColumn, missing, sunlitFraction, shgc, beam, sky, ground, gain, radiant, convective, gainBeam, gainDiffuse } = out;
+function hourlyGain(n: number, plane: PreparedPlane, dniExtra: Float64Array, kb: number, kd: number, frb: number, frd: number, shgcDiffuse: number, circumsolarFixed: number, alt: Float64Array, out: AnnualSeries): void {
+  const { dni: dniColumn, dhi: dhiColumn, missing, sunlitFraction, shgc, beam, sky, ground, skyUnshaded, groundUnshaded, gain, radiant, convective, gainBeam, gainDiffuse } = out;
   const sinAlt = SIN_ALT_SCRATCH;
   const cosT = COS_THETA_SCRATCH;
-  const parts: PlaneParts = { beam: 0, sky: 0, ground: 0, total: 0 };
+  const parts: PlaneParts = { beam: 0, sky: 0, ground: 0, total: 0, skyUnshaded: 0, groundUnshaded: 0 };
   for (let i = 0; i < n; i++) {
     if (missing[i] === 1) continue;
     const dni = dniColumn[i];
@@ -359,15 +376,18 @@ function hourlyGain(n: number, plane: PreparedPlane, dniExtra: Float64Array, kb:
     const a = alt[i];
     const sunUp = a > 0;
     if (dhi === 0 && (dni === 0 || !sunUp)) continue; // dark hour: irradiance and gain stay 0
-    plane.irradiance(parts, sunUp ? dni : 0, dhi, a, sinAlt[i], cosT[i], dniExtra[((i / 24) | 0) + 1]);
+    const lit = sunlitFraction[i];
+    plane.irradiance(parts, sunUp ? dni : 0, dhi, a, sinAlt[i], cosT[i], dniExtra[((i / 24) | 0) + 1], circumsolarFixed < 0 ? lit : circumsolarFixed);
     // Gain equation of src/core/gain/windowGain.ts windowGainParts, inlined for the hourly path.
-    const qb = kb * parts.beam * sunlitFraction[i] * shgc[i];
+    const qb = kb * parts.beam * lit * shgc[i];
     const qd = kd * (parts.sky + parts.ground) * shgcDiffuse;
     const q = qb + qd;
     const r = frb * qb + frd * qd;
     beam[i] = parts.beam;
     sky[i] = parts.sky;
     ground[i] = parts.ground;
+    skyUnshaded[i] = parts.skyUnshaded;
+    groundUnshaded[i] = parts.groundUnshaded;
     gain[i] = q;
     gainBeam[i] = qb;
     gainDiffuse[i] = qd;

@@ -2,6 +2,7 @@
  * The gain explanation: one hour's window gain as an ordered table of steps, from sun position to
  * watts, each with its value, unit and the method used — for checking a consultant's number by hand.
  */
+import { hasShading, HORIZON_BAND_DEG } from '../shading';
 import { clockToStandard, describeDaylightSaving, formatSerialIso, requireSerial } from '../time';
 import { glazingTypeOf, shgcBasisOf } from '../glazing';
 import { gainOfPrepared, prepareWindow, type WeatherHour, type WindowGainHour } from './windowGain';
@@ -21,12 +22,23 @@ export interface GainStep {
   method: string;
 }
 
-const SKY_MODEL_TEXT: Record<NonNullable<WindowSpec['skyModel']>, string> = {
-  isotropic: 'isotropic sky: DHI · (1 + cos tilt) / 2 × sky view factor',
-  hayDavies: 'Hay–Davies sky (circumsolar + isotropic) × sky view factor',
-  perez1990: 'Perez et al. (1990) sky, composite coefficients × sky view factor',
-  ashraeClearDay: "handbook clear-day procedure: DHI · (Y sin tilt + cos tilt), Y = max(0.45, 0.55 + 0.437 cos θ + 0.313 cos² θ) × sky view factor",
+type Model = NonNullable<WindowSpec['skyModel']>;
+
+const SKY_MODEL_TEXT: Record<Model, string> = {
+  isotropic: 'isotropic sky DHI · (1 + cos tilt) / 2, × sky view ratio',
+  hayDavies: 'Hay–Davies sky: isotropic part × sky view ratio + circumsolar part × sunlit fraction',
+  perez1990: 'Perez et al. (1990) sky, composite coefficients: isotropic part × sky view ratio + circumsolar (F1) part × sunlit fraction + horizon (F2) part × horizon band share',
+  ashraeClearDay: 'handbook clear-day procedure: DHI · (Y sin tilt + cos tilt), Y = max(0.45, 0.55 + 0.437 cos θ + 0.313 cos² θ); no separate circumsolar part, so all of it × sky view ratio',
 };
+
+const SKY_MODEL_TEXT_BEAM_ONLY: Record<Model, string> = {
+  isotropic: 'isotropic sky DHI · (1 + cos tilt) / 2, × the skyline’s sky view (beam-only treatment)',
+  hayDavies: 'Hay–Davies sky (circumsolar + isotropic) × the skyline’s sky view (beam-only treatment)',
+  perez1990: 'Perez et al. (1990) sky, composite coefficients, × the skyline’s sky view (beam-only treatment)',
+  ashraeClearDay: 'handbook clear-day procedure DHI · (Y sin tilt + cos tilt) × the skyline’s sky view (beam-only treatment)',
+};
+
+const SKY_MODEL_NAME: Record<Model, string> = { isotropic: 'isotropic sky', hayDavies: 'Hay–Davies sky', perez1990: 'Perez et al. (1990) sky', ashraeClearDay: 'handbook clear-day procedure' };
 
 /** The angular model of the glazing, in words. */
 function shgcModelText(spec: WindowSpec): string {
@@ -39,6 +51,28 @@ function shgcModelText(spec: WindowSpec): string {
     default:
       return `${glazingTypeOf(g)} panes: Fresnel reflection + absorption model, ${g.panes} pane(s), scaled to SHGC ${g.shgc} at normal incidence`;
   }
+}
+
+/** Where the diffuse ratios of a window came from, in words. */
+function viewText(spec: WindowSpec, h: WindowGainHour): { sky: string; ground: string; horizon: string } {
+  if (h.diffuseShading === 'beamOnly') {
+    const skyline = spec.shading.skyline ? 'the skyline’s sky view' : 'open horizon';
+    return {
+      sky: `${skyline}; devices left out of the diffuse (beam-only treatment)`,
+      ground: 'not cut (beam-only treatment)',
+      horizon: `${skyline} (beam-only treatment)`,
+    };
+  }
+  if (spec.surfaceTilt !== 90 || !hasShading(spec.shading)) {
+    return { sky: 'nothing shades the window: the bare window’s ½ ÷ ½', ground: 'nothing shades the window: ½ ÷ ½', horizon: 'nothing shades the window' };
+  }
+  const sky = h.skyViewRatio / 2;
+  const ground = h.groundViewRatio / 2;
+  return {
+    sky: `glass-averaged, cosine-weighted view factor to the open sky ${sky.toFixed(4)} ÷ ½ (bare window): overhang, fins, reveal and skyline together, a direction blocked by several counted once; devices black`,
+    ground: `view factor to the open ground ${ground.toFixed(4)} ÷ ½: overhang, fins and reveal together; devices black`,
+    horizon: `open share of the sky 0–${HORIZON_BAND_DEG}° above the horizon, cosine-weighted, past devices and skyline (the Perez sky’s horizon brightening)`,
+  };
 }
 
 /** The step table of an hour already worked out. */
@@ -57,10 +91,16 @@ export function stepsOf(spec: WindowSpec, h: WindowGainHour): GainStep[] {
   add('sunlit fraction', h.sunlitFraction, '', 'union of the shadow polygons of overhang, fins and reveal on the glazing; 0 when the sun is down, behind the wall or behind the skyline');
   add('direct normal irradiance', h.dni, 'W/m²', h.yearFit ? `${h.weatherSource}; ${h.yearFit}` : h.weatherSource);
   add('diffuse horizontal irradiance', h.dhi, 'W/m²', h.weatherSource);
-  add('sky view factor', h.skyViewFactor, '', spec.shading.skyline ? 'share of the open-sky diffuse that the skyline leaves visible' : 'open horizon');
+  const view = viewText(spec, h);
+  add('sky view ratio', h.skyViewRatio, '', view.sky);
+  add('ground view ratio', h.groundViewRatio, '', view.ground);
+  add('horizon band share', h.horizonShare, '', view.horizon);
   add('beam on the window', h.beam, 'W/m²', 'DNI × cos θ (unshaded; 0 with the sun down or behind the window)');
-  add('sky diffuse on the window', h.sky, 'W/m²', SKY_MODEL_TEXT[skyModelOf(spec)]);
-  add('ground-reflected on the window', h.ground, 'W/m²', `GHI × albedo ${spec.groundAlbedo} × (1 − cos tilt) / 2`);
+  const model = skyModelOf(spec);
+  add('sky diffuse on the bare window', h.skyUnshaded, 'W/m²', `${SKY_MODEL_NAME[model]}, no devices and no skyline`);
+  add('sky diffuse on the window', h.sky, 'W/m²', h.diffuseShading === 'beamOnly' ? SKY_MODEL_TEXT_BEAM_ONLY[model] : SKY_MODEL_TEXT[model]);
+  add('ground-reflected on the bare window', h.groundUnshaded, 'W/m²', `GHI × albedo ${spec.groundAlbedo} × (1 − cos tilt) / 2`);
+  add('ground-reflected on the window', h.ground, 'W/m²', h.diffuseShading === 'beamOnly' ? 'as on the bare window (beam-only treatment)' : 'ground-reflected on the bare window × ground view ratio');
   add('SHGC at the incidence angle', h.shgcBeam, '', shgcModel);
   add('diffuse SHGC', h.shgcDiffuse, '', 'hemispherical average 2 ∫ SHGC(θ) cos θ sin θ dθ');
   const shaded = h.interiorAttenuation < 1 || h.interiorAttenuationDiffuse < 1;
@@ -90,7 +130,8 @@ export function stepsOf(spec: WindowSpec, h: WindowGainHour): GainStep[] {
  *   time when the site has a daylight-saving rule
  * @param weatherHour - DNI and DHI of the hour [W/m²]; omitted: from `spec.weather`
  * @returns the ordered steps: sun altitude and azimuth → incidence and profile angles → sunlit
- *   fraction → DNI, DHI → irradiance on the window by part → SHGC at the angle, diffuse SHGC →
+ *   fraction → DNI, DHI → sky and ground view ratios and horizon band share → irradiance on the bare
+ *   window and on the shaded window by part → SHGC at the angle, diffuse SHGC →
  *   interior attenuation → glass area → gain by part [W] → radiant and convective parts. At night the
  *   irradiance and gain steps are 0.
  * @remarks Same calculation as {@link windowGainAt}; see src/core/gain/windowGain.ts for the equation and source.

@@ -9,7 +9,7 @@ export { type AnnualSeries, annualSeries } from './annual';
 export { type AnnualSummary, summarizeAnnual } from './annualSummary';
 export { type DesignDayGainMonth, type DesignDayGainOptions, designDayGains, peakOfDay } from './designDay';
 export { gainSteps } from './gainSteps';
-export { type Weather, type WindowSpec } from './window';
+export { type DiffuseShading, type Weather, type WindowSpec } from './window';
 export { type DesignTemperatures } from './window';
 export { DAILY_RANGE_FRACTIONS, DAILY_RANGE_MAX, designDayDryBulb, DRY_BULB_MAX, DRY_BULB_MIN } from './outdoorTemperature';
 export { windowGainAt } from './windowGain';

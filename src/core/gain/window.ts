@@ -69,4 +69,14 @@ export interface WindowSpec {
   weather: Weather;
   /** Calendar year of the hourly series. */
   year: number;
+  /**
+   * How shading devices act on the diffuse light (docs/diffuse-shading.md): `"viewFactors"` (the
+   * default) — the overhang, fins, reveal and skyline cut the sky-diffuse and ground-reflected light
+   * by the window's view factors; `"beamOnly"` — the earlier treatment, kept for comparison: devices
+   * cut only the beam, the skyline scales the whole sky diffuse by its sky view, the ground is not cut.
+   */
+  diffuseShading?: DiffuseShading;
 }
+
+/** The two treatments of diffuse light behind shading devices ({@link WindowSpec.diffuseShading}). */
+export type DiffuseShading = 'viewFactors' | 'beamOnly';

@@ -4,8 +4,12 @@
  *
  *   Q = A_glass · IAC · [E_beam · F_sunlit · SHGC(θ) + (E_sky + E_ground) · SHGC_diffuse]
  *
- * with E the irradiance on the window plane [W/m²] (beam unshaded, sky diffuse through the skyline's
- * sky view factor), F_sunlit the sunlit fraction of the glazing, SHGC(θ) the solar heat gain
+ * with E the irradiance [W/m²]: E_beam on the window plane (unshaded), E_sky and E_ground reaching
+ * the glass past the window's overhang, fins, reveal and skyline — the isotropic sky through the
+ * sky view ratio, the circumsolar part through the sunlit fraction, the horizon brightening through
+ * the open share of the horizon band, the ground-reflected light through the ground view ratio
+ * (docs/diffuse-shading.md; `diffuseShading: "beamOnly"` gives the earlier treatment, where the
+ * devices cut only the beam) — F_sunlit the sunlit fraction of the glazing, SHGC(θ) the solar heat gain
  * coefficient at the beam's incidence angle, SHGC_diffuse its hemispherical average and IAC the
  * interior attenuation coefficient. Source: ASHRAE Handbook—Fundamentals (2013) ch. 15, the
  * fenestration solar heat gain equations (beam, diffuse and interior attenuation terms; from
@@ -17,13 +21,13 @@
  */
 import { SunpaneError, requireRange } from '../common';
 import { glassArea as glassAreaOf, interiorAttenuationsOf, shgcBasisOf, shgcCurve, type ShgcCurve, solarArea } from '../glazing';
-import { hasShading, sunlitFraction, skylineSkyViewFactor } from '../shading';
+import { BARE_VIEW_FACTORS, hasShading, sunlitFraction, skylineSkyViewFactor, type WindowViewFactors, windowViewFactors } from '../shading';
 import { outdoorTemperatureSource, radiantFractionsOf, skyModelOf, validateWindowSpec } from './windowSpec';
 import { ashraeClearSky, decomposeErbs, ineichenPerezClearSky, planeIrradiance, type SkyModel } from '../sky';
 import { sunPosition, type SunOptions, incidenceAngle, profileAngle } from '../sun';
 import { civilToSerial, clockToStandard, dayOfYear, fitYearOfHours, hoursInYear, serialToCivil, serialToUtcMs, requireSerial, standardToClock, type YearFit } from '../time';
 import { fractionOfDailyRange } from './outdoorTemperature';
-import type { Weather, WindowSpec } from './window';
+import type { DiffuseShading, Weather, WindowSpec } from './window';
 
 /** The inputs of the gain equation for one hour. */
 export interface GainInput {
@@ -31,9 +35,9 @@ export interface GainInput {
   glassArea: number;
   /** Beam irradiance on the window plane, unshaded [W/m²], ≥ 0. */
   beam: number;
-  /** Sky-diffuse irradiance on the window plane [W/m²], ≥ 0. */
+  /** Sky-diffuse irradiance reaching the glass [W/m²], ≥ 0 (already through the window's view of the sky). */
   sky: number;
-  /** Ground-reflected irradiance on the window plane [W/m²], ≥ 0. */
+  /** Ground-reflected irradiance reaching the glass [W/m²], ≥ 0 (already through the window's view of the ground). */
   ground: number;
   /** Sunlit fraction of the glazed area, 0…1. */
   sunlitFraction: number;
@@ -92,7 +96,7 @@ export function windowGainParts(input: GainInput): GainParts {
   const fr = requireRange('radiantFraction', input.radiantFraction, 0, 1);
   const frD = input.radiantFractionDiffuse === undefined ? fr : requireRange('radiantFractionDiffuse', input.radiantFractionDiffuse, 0, 1);
   const beam = area * iac * eb * f * gb; // beam through the sunlit glass
-  const sky = area * iacD * es * gd; // diffuse through all of the glass
+  const sky = area * iacD * es * gd; // diffuse as it reaches the glass (view factors already applied)
   const ground = area * iacD * eg * gd;
   const total = beam + sky + ground;
   const radiant = fr * beam + frD * (sky + ground);
@@ -125,14 +129,23 @@ export interface WindowGainHour {
   profileAngle: number;
   /** Sunlit fraction of the glazed area, 0…1. */
   sunlitFraction: number;
-  /** Multiplier on sky diffuse from the skyline, 0…1. */
-  skyViewFactor: number;
+  /** The window's sky view ratio (sky view factor ÷ ½), 0…1: the share of the isotropic sky diffuse reaching the glass. */
+  skyViewRatio: number;
+  /** The window's ground view ratio (ground view factor ÷ ½), 0…1. */
+  groundViewRatio: number;
+  /** Open share of the horizon band (0…6.5°), 0…1: the share of the horizon brightening reaching the glass. */
+  horizonShare: number;
+  /** How devices act on the diffuse light: by view factors, or the earlier beam-only treatment. */
+  diffuseShading: DiffuseShading;
   dni: number;
   dhi: number;
-  /** Irradiance on the window plane [W/m²]: beam unshaded, sky diffuse, ground reflected. */
+  /** Irradiance [W/m²]: beam on the window plane (unshaded), sky diffuse and ground reflected reaching the glass. */
   beam: number;
   sky: number;
   ground: number;
+  /** Sky diffuse and ground-reflected irradiance on the bare window plane (no devices, no skyline) [W/m²]. */
+  skyUnshaded: number;
+  groundUnshaded: number;
   shgcBeam: number;
   shgcDiffuse: number;
   interiorAttenuation: number;
@@ -158,7 +171,14 @@ export interface PreparedWindow {
   glassArea: number;
   /** Area the SHGC applies to [m²] (glass area, or the rough opening for a whole-window SHGC). */
   solarArea: number;
-  skyViewFactor: number;
+  /** What the glass sees of the open sky, ground and horizon band (the bare window's when nothing shades). */
+  viewFactors: WindowViewFactors;
+  /** True for the earlier beam-only treatment of diffuse light ({@link WindowSpec.diffuseShading}). */
+  beamOnly: boolean;
+  /** The constant multipliers on the isotropic sky, the horizon band and the ground. */
+  shade: { isotropic: number; horizon: number; ground: number };
+  /** Beam-only treatment: the skyline's sky view, which then multiplies the circumsolar part too. */
+  skylineSky: number;
   /** Interior attenuation of the beam [-] (the historical single coefficient). */
   interiorAttenuation: number;
   interiorAttenuationDiffuse: number;
@@ -195,12 +215,20 @@ export function prepareWindow(spec: WindowSpec): PreparedWindow {
   const fr = radiantFractionsOf(spec.glazing);
   const w = spec.weather;
   const series = w.kind === 'measured' ? w.dni : w.kind === 'globalHorizontal' ? w.ghi : undefined;
+  const vertical = spec.surfaceTilt === 90;
+  // Per window, never per hour (devices are refused on tilted windows, so a tilted one is bare).
+  const viewFactors = vertical ? windowViewFactors({ width: spec.width, height: spec.height }, spec.shading, spec.surfaceAzimuth) : { ...BARE_VIEW_FACTORS };
+  const beamOnly = spec.diffuseShading === 'beamOnly';
+  const skylineSky = skyline !== undefined ? skylineSkyViewFactor(skyline, spec.surfaceAzimuth) : 1;
   return {
     spec,
     curve: shgcCurve(spec.glazing),
     glassArea: glassAreaOf(spec.width, spec.height, spec.frameFraction),
     solarArea: solarArea(spec.width, spec.height, spec.frameFraction, shgcBasisOf(spec.glazing)),
-    skyViewFactor: skyline !== undefined ? skylineSkyViewFactor(skyline, spec.surfaceAzimuth) : 1,
+    viewFactors,
+    beamOnly,
+    shade: beamOnly ? { isotropic: skylineSky, horizon: skylineSky, ground: 1 } : { isotropic: viewFactors.skyRatio, horizon: viewFactors.horizonShare, ground: viewFactors.groundRatio },
+    skylineSky,
     interiorAttenuation: iac.beam,
     interiorAttenuationDiffuse: iac.diffuse,
     interiorShade: iac.shaded,
@@ -210,12 +238,21 @@ export function prepareWindow(spec: WindowSpec): PreparedWindow {
     conductance: (spec.glazing.uValue ?? 0) * spec.width * spec.height,
     skyModel: skyModelOf(spec),
     yearFit: series !== undefined ? fitYearOfHours(series.length, spec.year, w.kind === 'measured' ? 'weather.dni' : 'weather.ghi') : undefined,
-    vertical: spec.surfaceTilt === 90,
+    vertical,
     shaded: hasShading(spec.shading),
     sunOptions,
     yearStart: civilToSerial(spec.year, 1, 1),
     hours: hoursInYear(spec.year),
   };
+}
+
+/**
+ * The multiplier on the circumsolar part of the sky diffuse for an hour: the beam's sunlit fraction
+ * (the circumsolar light comes from the sun's direction, so what shades the sun shades it), or, in
+ * the beam-only treatment, the skyline's sky view as before.
+ */
+export function circumsolarShade(w: PreparedWindow, sunlit: number): number {
+  return w.beamOnly ? w.skylineSky : sunlit;
 }
 
 /** Value of a 12-monthly or single-value list for a month 1…12. */
@@ -332,7 +369,7 @@ export function gainOfPrepared(w: PreparedWindow, serial: number, weatherHour?: 
     groundAlbedo: spec.groundAlbedo,
     dayOfYear: doy,
     skyModel: w.skyModel,
-    skyViewFactor: w.skyViewFactor,
+    shade: { ...w.shade, circumsolar: circumsolarShade(w, lit) },
   });
   const shgcBeam = incidence >= 90 ? 0 : w.curve.atAngle(incidence);
   const gain = windowGainParts({
@@ -365,12 +402,17 @@ export function gainOfPrepared(w: PreparedWindow, serial: number, weatherHour?: 
     incidence,
     profileAngle: profile,
     sunlitFraction: lit,
-    skyViewFactor: w.skyViewFactor,
+    skyViewRatio: w.shade.isotropic,
+    groundViewRatio: w.shade.ground,
+    horizonShare: w.shade.horizon,
+    diffuseShading: w.beamOnly ? 'beamOnly' : 'viewFactors',
     dni,
     dhi,
     beam: plane.beam,
     sky: plane.sky,
     ground: plane.ground,
+    skyUnshaded: plane.skyUnshaded,
+    groundUnshaded: plane.groundUnshaded,
     shgcBeam,
     shgcDiffuse: w.curve.diffuse,
     interiorAttenuation: w.interiorAttenuation,

@@ -9,7 +9,7 @@ import { fitYearOfHours, requireDaylightSaving, requireYear } from '../time';
 import { glazingTypeOf, interiorAttenuationsOf, requireAngleTable, requireTypeParameter, shgcBasisOf, type Glazing } from '../glazing';
 import { PATH_SHADING_NAMES, requireShading, requireVerticalForShading, type Shading } from '../shading';
 import type { Site } from '../sun';
-import type { Weather, WindowSpec } from './window';
+import type { DiffuseShading, Weather, WindowSpec } from './window';
 import { DAILY_RANGE_MAX, DRY_BULB_MAX, DRY_BULB_MIN } from './outdoorTemperature';
 
 /**
@@ -36,6 +36,7 @@ export const MAX_LENGTH = 1000;
 export const MAX_IRRADIANCE = 2000;
 
 const SKY_MODELS: readonly SkyModel[] = ['isotropic', 'hayDavies', 'perez1990', 'ashraeClearDay'];
+const DIFFUSE_SHADINGS: readonly DiffuseShading[] = ['viewFactors', 'beamOnly'];
 const WEATHER_KINDS: readonly Weather['kind'][] = ['ashraeClearSky', 'ineichenClearSky', 'measured', 'globalHorizontal'];
 
 function requireObject(path: string, value: unknown): Record<string, unknown> {
@@ -175,6 +176,9 @@ export function validateWindowSpec(spec: WindowSpec): WindowSpec {
   validateGlazing(spec.glazing);
   validateShading(spec.shading, spec.width, spec.height, spec.surfaceTilt);
   requireRange('groundAlbedo', spec.groundAlbedo, 0, 1);
+  if (spec.diffuseShading !== undefined && !DIFFUSE_SHADINGS.includes(spec.diffuseShading)) {
+    throw new SunpaneError('diffuseShading', spec.diffuseShading, `must be one of ${DIFFUSE_SHADINGS.map((m) => `"${m}"`).join(', ')} (default "viewFactors")`);
+  }
   if (spec.skyModel !== undefined && !SKY_MODELS.includes(spec.skyModel)) throw new SunpaneError('skyModel', spec.skyModel, `must be one of ${SKY_MODELS.map((m) => `"${m}"`).join(', ')}`);
   const year = requireYear(spec.year, 'year');
   validateWeather(spec.weather, year);

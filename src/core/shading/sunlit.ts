@@ -179,14 +179,20 @@ export function hasShading(shading: Shading): boolean {
 }
 
 /**
- * Refuses shading devices on a window that is not vertical (the shadow geometry here is for
- * vertical walls). A skyline alone is fine at any tilt for the beam test, but this module's sky
- * view factor is for vertical windows, so a skyline is refused too.
+ * Refuses shading devices on a window that is not vertical: the shadow polygons and the view factors
+ * (src/core/shading/viewFactors.ts) are worked out for a vertical wall, where the devices stand
+ * square to the glass and the horizon crosses it level. A skyline alone would do for the beam at any
+ * tilt, but its sky view is for vertical windows too, so it is refused as well.
  * @throws SunpaneError naming `surfaceTilt` when tilt ≠ 90° and any device or skyline is given
  */
 export function requireVerticalForShading(surfaceTilt: number, shading: Shading): void {
   if (hasShading(shading) && surfaceTilt !== 90) {
-    throw new SunpaneError('surfaceTilt', surfaceTilt, 'must be 90 ° (a vertical wall) when shading devices or a skyline are given');
+    throw new SunpaneError(
+      'surfaceTilt',
+      surfaceTilt,
+      'must be 90 ° (a vertical wall) when shading devices or a skyline are given',
+      'the shadows and the sky and ground view factors of overhangs, fins, reveals and skylines are worked out for vertical walls only; remove the devices or skyline for a tilted window',
+    );
   }
 }
 

@@ -1,6 +1,14 @@
 /**
  * Irradiance on a window plane from direct normal and diffuse horizontal irradiance: beam, sky
- * diffuse (isotropic, Hay–Davies or Perez 1990) and ground-reflected parts.
+ * diffuse (isotropic, Hay–Davies or Perez 1990) and ground-reflected parts — on the bare plane and
+ * on the glass of a shaded window.
+ *
+ * A shaded window (docs/diffuse-shading.md) receives each part of the diffuse light through its own
+ * multiplier, worked out by the shading folder and handed in as plain numbers ({@link DiffuseShade}):
+ * the isotropic part of the sky through the sky view ratio, the circumsolar part (Hay–Davies
+ * Ai·Rb, Perez F1) through the beam's sunlit fraction of the hour (it comes from the sun's
+ * direction), the horizon-brightening part (Perez F2) through the open share of the horizon band,
+ * and the ground-reflected light through the ground view ratio.
  */
 import { airMassKastenYoungFromSine } from './airMass';
 import { RAD, SunpaneError, requireRange } from '../common';
@@ -41,20 +49,54 @@ export interface PlaneIrradianceInput {
   dayOfYear: number;
   /** Sky-diffuse model. */
   skyModel: SkyModel;
-  /** Multiplier 0…1 on the sky diffuse for a skyline that hides part of the sky; default 1 (open). */
-  skyViewFactor?: number;
+  /** What a shaded window keeps of each part of the diffuse light; default all 1 (an unshaded plane). */
+  shade?: DiffuseShade;
+}
+
+/**
+ * How much of each part of the diffuse light reaches the glass of a shaded window, each 0…1 (1 = all
+ * of it, the bare plane). Plain numbers: the shading folder works them out (view factors and the
+ * sunlit fraction), this folder only applies them.
+ */
+export interface DiffuseShade {
+  /** Multiplier on the isotropic part of the sky diffuse: the window's sky view ratio. */
+  isotropic: number;
+  /** Multiplier on the circumsolar part (Hay–Davies Ai·Rb, Perez F1): the beam's sunlit fraction of the hour. */
+  circumsolar: number;
+  /** Multiplier on the horizon-brightening part (Perez F2): the open share of the horizon band. */
+  horizon: number;
+  /** Multiplier on the ground-reflected irradiance: the window's ground view ratio. */
+  ground: number;
+}
+
+/** An unshaded plane. */
+const NO_SHADE: Readonly<DiffuseShade> = Object.freeze({ isotropic: 1, circumsolar: 1, horizon: 1, ground: 1 });
+
+/** Checks a {@link DiffuseShade}: each multiplier 0…1, errors naming `shade.<part>`. */
+function requireShade(shade: DiffuseShade | undefined): DiffuseShade {
+  if (shade === undefined) return NO_SHADE;
+  if (shade === null || typeof shade !== 'object') throw new SunpaneError('shade', shade, 'must be the four diffuse multipliers (isotropic, circumsolar, horizon, ground), each 0…1');
+  requireRange('shade.isotropic', shade.isotropic, 0, 1);
+  requireRange('shade.circumsolar', shade.circumsolar, 0, 1);
+  requireRange('shade.horizon', shade.horizon, 0, 1);
+  requireRange('shade.ground', shade.ground, 0, 1);
+  return shade;
 }
 
 /** Irradiance on the window plane [W/m²] and the incidence angle [°]. */
 export interface PlaneIrradiance {
   /** Beam on the plane, DNI · max(0, cos θ) [W/m²]; 0 with the sun below the horizon or behind the plane. */
   beam: number;
-  /** Sky diffuse on the plane, after the sky view factor [W/m²]. */
+  /** Sky diffuse reaching the glass, each part through its multiplier of `shade` [W/m²]. */
   sky: number;
-  /** Ground-reflected on the plane [W/m²]. */
+  /** Ground-reflected reaching the glass, through the ground multiplier [W/m²]. */
   ground: number;
   /** beam + sky + ground [W/m²]. */
   total: number;
+  /** Sky diffuse on the bare plane (no shade) [W/m²]. */
+  skyUnshaded: number;
+  /** Ground-reflected on the bare plane [W/m²]. */
+  groundUnshaded: number;
   /** Incidence angle of the sun on the plane [°], 0…180 (> 90: sun behind the plane). */
   incidence: number;
 }
@@ -63,16 +105,20 @@ export interface PlaneIrradiance {
  * Irradiance on a window plane by the chosen sky model.
  *
  * @param input - see {@link PlaneIrradianceInput}; errors name the field (`dni`, `groundAlbedo`, `skyModel`...)
- * @returns beam, sky diffuse, ground-reflected and total irradiance on the plane [W/m²] and the
- * incidence angle [°]. With the sun at or below the horizon the beam is 0 and any diffuse given is
- * spread isotropically by every model (no circumsolar disc); with the sun behind the plane
- * (incidence > 90°) the beam and circumsolar parts are 0.
+ * @returns beam (unshaded), sky diffuse and ground-reflected reaching the glass through `shade`, their
+ * total, the same sky and ground on the bare plane [W/m²], and the incidence angle [°]. With the sun
+ * at or below the horizon the beam is 0 and any diffuse given is spread isotropically by every model
+ * (no circumsolar disc); with the sun behind the plane (incidence > 90°) the beam and circumsolar
+ * parts are 0.
  * @remarks beam = DNI max(0, cos θ); GHI = DNI sin β + DHI (sun up); ground = GHI ρg (1 − cos Σ)/2;
  * sky by {@link skyDiffuseIsotropic}, {@link skyDiffuseHayDavies}, {@link skyDiffusePerez1990} or the
  * handbook's clear-day form Ed·(Y sin Σ + cos Σ) for Σ ≤ 90°, Ed·Y·sin Σ beyond
  * ({@link skyDiffuseAshraeClearDay}; with the sun down it falls back to isotropic),
- * with E0n by Spencer (1971) and m by Kasten & Young (1989), then × skyViewFactor. (Duffie & Beckman,
- * Solar Engineering of Thermal Processes, 4th ed., §2.15–2.16.)
+ * with E0n by Spencer (1971) and m by Kasten & Young (1989) (Duffie & Beckman, Solar Engineering of
+ * Thermal Processes, 4th ed., §2.15–2.16). Shaded: isotropic part × shade.isotropic + circumsolar
+ * part × shade.circumsolar + horizon part × shade.horizon (the sum floored at 0, as the Perez total
+ * is), ground × shade.ground; the clear-day form has no separate circumsolar or horizon part, so all
+ * of it goes × shade.isotropic (docs/diffuse-shading.md).
  */
 export function planeIrradiance(input: PlaneIrradianceInput): PlaneIrradiance {
   const dni = requireIrradiance('dni', input.dni);
@@ -84,13 +130,13 @@ export function planeIrradiance(input: PlaneIrradianceInput): PlaneIrradiance {
   const albedo = requireRange('groundAlbedo', input.groundAlbedo, 0, 1);
   const dayOfYear = requireDayOfYear(input.dayOfYear);
   const model = requireSkyModel(input.skyModel);
-  const svf = input.skyViewFactor === undefined ? 1 : requireRange('skyViewFactor', input.skyViewFactor, 0, 1);
+  const shade = requireShade(input.shade);
 
   const incidence = incidenceAngle(altitude, sunAzimuth, tilt, surfaceAzimuth);
-  const plane = planeOf(tilt, albedo, model, svf);
-  const out = { beam: 0, sky: 0, ground: 0, total: 0, incidence };
+  const plane = planeOf(tilt, albedo, model, shade);
+  const out = { beam: 0, sky: 0, ground: 0, total: 0, skyUnshaded: 0, groundUnshaded: 0, incidence };
   const e0 = model === 'isotropic' || model === 'ashraeClearDay' ? 0 : extraterrestrialSpencer(dayOfYear);
-  planeKernel(out, plane, dni, dhi, altitude, sin(altitude * RAD), cos(incidence * RAD), e0);
+  planeKernel(out, plane, dni, dhi, altitude, sin(altitude * RAD), cos(incidence * RAD), e0, shade.circumsolar);
   return out;
 }
 
@@ -101,7 +147,7 @@ function requireSkyModel(model: SkyModel): SkyModel {
   return model;
 }
 
-/** The hour-independent part of a plane: its tilt's view factors, albedo, sky model and sky view. */
+/** The hour-independent part of a plane: its tilt's view factors, albedo, sky model and shade. */
 interface PlaneConstants {
   model: SkyModel;
   tilt: number;
@@ -114,12 +160,15 @@ interface PlaneConstants {
   /** 1 − cos Σ (ground view, times 2). */
   oneMinusCosTilt: number;
   albedo: number;
-  skyViewFactor: number;
+  /** Multipliers on the isotropic sky, the horizon band and the ground ({@link DiffuseShade}). */
+  isotropicShade: number;
+  horizonShade: number;
+  groundShade: number;
   /** Scratch record for the Perez parts (one per plane: no allocation per hour). */
   perez: PerezParts;
 }
 
-function planeOf(tilt: number, albedo: number, model: SkyModel, skyViewFactor: number): PlaneConstants {
+function planeOf(tilt: number, albedo: number, model: SkyModel, shade: Omit<DiffuseShade, 'circumsolar'>): PlaneConstants {
   const tiltRad = tilt * RAD;
   const cosTilt = cos(tiltRad);
   return {
@@ -130,7 +179,9 @@ function planeOf(tilt: number, albedo: number, model: SkyModel, skyViewFactor: n
     cosTiltUp: cosTilt > 0 ? cosTilt : 0,
     oneMinusCosTilt: 1 - cosTilt,
     albedo,
-    skyViewFactor,
+    isotropicShade: shade.isotropic,
+    horizonShade: shade.horizon,
+    groundShade: shade.ground,
     perez: { epsilon: 1, delta: 0, bin: 1, f1: 0, f2: 0, isotropic: 0, circumsolar: 0, horizon: 0, total: 0 },
   };
 }
@@ -142,39 +193,56 @@ export interface PlaneParts {
   sky: number;
   ground: number;
   total: number;
+  skyUnshaded: number;
+  groundUnshaded: number;
 }
 
 /**
  * The one implementation of the plane irradiance, behind {@link planeIrradiance} and
  * {@link preparePlane}: inputs already checked, the sun given by its altitude, the sine of the
- * altitude and the cosine of the incidence angle; writes `out`.
+ * altitude and the cosine of the incidence angle, `circumsolar` the hour's multiplier on the
+ * circumsolar part (the sunlit fraction); writes `out`.
  */
-function planeKernel(out: PlaneParts, p: PlaneConstants, dni: number, dhi: number, altitude: number, sinAltitude: number, cosIncidence: number, dniExtra: number): void {
+function planeKernel(out: PlaneParts, p: PlaneConstants, dni: number, dhi: number, altitude: number, sinAltitude: number, cosIncidence: number, dniExtra: number, circumsolar: number): void {
   const sunUp = altitude > 0;
   const beam = sunUp && cosIncidence > 0 ? dni * cosIncidence : 0;
   const ghi = (sunUp ? dni * sinAltitude : 0) + dhi;
   let sky: number;
+  let skyUnshaded: number;
   if (!sunUp || p.model === 'isotropic') {
-    sky = dhi * p.isotropicView; // D&B Eq. 2.15.1
+    skyUnshaded = dhi * p.isotropicView; // D&B Eq. 2.15.1
+    sky = skyUnshaded * p.isotropicShade;
   } else if (p.model === 'ashraeClearDay') {
-    sky = dhi * (verticalDiffuseRatioFromCosine(cosIncidence) * p.sinTilt + p.cosTiltUp); // ASHRAE ch. 14 clear-day tilted form
+    skyUnshaded = dhi * (verticalDiffuseRatioFromCosine(cosIncidence) * p.sinTilt + p.cosTiltUp); // ASHRAE ch. 14 clear-day tilted form
+    sky = skyUnshaded * p.isotropicShade; // no separate circumsolar part: all of it × the sky view ratio
   } else if (p.model === 'hayDavies') {
     const ai = dni / dniExtra < 1 ? dni / dniExtra : 1;
     const rb = (cosIncidence > 0 ? cosIncidence : 0) / (sinAltitude > COS_85 ? sinAltitude : COS_85);
-    sky = dhi * ((1 - ai) * p.isotropicView + ai * rb); // D&B Eq. 2.16.4
+    const isotropic = dhi * (1 - ai) * p.isotropicView;
+    const disc = dhi * ai * rb;
+    skyUnshaded = isotropic + disc; // D&B Eq. 2.16.4
+    sky = isotropic * p.isotropicShade + disc * circumsolar;
   } else {
-    sky = perezPartsKernel(p.perez, p.isotropicView, p.sinTilt, dhi, dni, dniExtra, 90 - altitude, sinAltitude, airMassKastenYoungFromSine(altitude, sinAltitude), cosIncidence, PEREZ_1990_COMPOSITE).total;
+    const parts = perezPartsKernel(p.perez, p.isotropicView, p.sinTilt, dhi, dni, dniExtra, 90 - altitude, sinAltitude, airMassKastenYoungFromSine(altitude, sinAltitude), cosIncidence, PEREZ_1990_COMPOSITE);
+    skyUnshaded = parts.total;
+    const shaded = parts.isotropic * p.isotropicShade + parts.circumsolar * circumsolar + parts.horizon * p.horizonShade;
+    sky = shaded > 0 ? shaded : 0; // floored at 0 as the Perez total is
   }
-  sky *= p.skyViewFactor;
-  const ground = (ghi * p.albedo * p.oneMinusCosTilt) / 2; // D&B Eq. 2.15.1
+  const groundUnshaded = (ghi * p.albedo * p.oneMinusCosTilt) / 2; // D&B Eq. 2.15.1
+  const ground = groundUnshaded * p.groundShade;
   out.beam = beam;
   out.sky = sky;
   out.ground = ground;
   out.total = beam + sky + ground;
+  out.skyUnshaded = skyUnshaded;
+  out.groundUnshaded = groundUnshaded;
 }
 
 /** The plane fields of {@link PlaneIrradianceInput}: everything that does not change by the hour. */
-export type PlaneSurfaceInput = Pick<PlaneIrradianceInput, 'surfaceTilt' | 'surfaceAzimuth' | 'groundAlbedo' | 'skyModel' | 'skyViewFactor'>;
+export type PlaneSurfaceInput = Pick<PlaneIrradianceInput, 'surfaceTilt' | 'surfaceAzimuth' | 'groundAlbedo' | 'skyModel'> & {
+  /** The window's constant multipliers (isotropic sky, horizon band, ground); the circumsolar one comes by the hour. Default all 1. */
+  shade?: Omit<DiffuseShade, 'circumsolar'>;
+};
 
 /** A window plane checked once, for the irradiance of many hours (e.g. every hour of a year). */
 export interface PreparedPlane {
@@ -183,7 +251,7 @@ export interface PreparedPlane {
   /**
    * Irradiance on the plane for one hour, the same as {@link planeIrradiance} for the prepared plane,
    * without argument checks, written into `out`.
-   * @param out - record to fill (beam, sky, ground, total [W/m²])
+   * @param out - record to fill (beam, sky, ground, total, skyUnshaded, groundUnshaded [W/m²])
    * @param dni - direct normal irradiance [W/m²], 0…2000 (not checked)
    * @param dhi - diffuse horizontal irradiance [W/m²], 0…2000 (not checked)
    * @param sunAltitude - [°] −90…90 (not checked)
@@ -191,14 +259,15 @@ export interface PreparedPlane {
    * @param cosIncidence - cos of the incidence angle on the plane [-], −1…1
    * @param dniExtra - extraterrestrial normal irradiance of the day [W/m²] (Spencer 1971, as
    *   {@link planeIrradiance} uses); any value when {@link needsDniExtra} is false
+   * @param circumsolar - the hour's multiplier on the circumsolar part, 0…1 (the sunlit fraction; 1 unshaded)
    */
-  irradiance(out: PlaneParts, dni: number, dhi: number, sunAltitude: number, sinAltitude: number, cosIncidence: number, dniExtra: number): void;
+  irradiance(out: PlaneParts, dni: number, dhi: number, sunAltitude: number, sinAltitude: number, cosIncidence: number, dniExtra: number, circumsolar: number): void;
 }
 
 /**
  * Checks a window plane once and returns its hourly irradiance function.
- * @param input - surface tilt [°] 0…180, surface azimuth [°] 0…360, albedo 0…1, sky model and sky
- *   view factor 0…1 (default 1); errors name the field as {@link planeIrradiance}
+ * @param input - surface tilt [°] 0…180, surface azimuth [°] 0…360, albedo 0…1, sky model and the
+ *   window's constant shade multipliers, each 0…1 (default 1); errors name the field as {@link planeIrradiance}
  * @returns {@link PreparedPlane}
  * @remarks Same kernel and formulas as {@link planeIrradiance} (see there); the caller supplies the
  * sun's sine and incidence cosine it already has, and the day's extraterrestrial irradiance.
@@ -208,10 +277,10 @@ export function preparePlane(input: PlaneSurfaceInput): PreparedPlane {
   requireRange('surfaceAzimuth', input.surfaceAzimuth, 0, 360, '°');
   const albedo = requireRange('groundAlbedo', input.groundAlbedo, 0, 1);
   const model = requireSkyModel(input.skyModel);
-  const svf = input.skyViewFactor === undefined ? 1 : requireRange('skyViewFactor', input.skyViewFactor, 0, 1);
-  const plane = planeOf(tilt, albedo, model, svf);
+  const shade = input.shade === undefined ? NO_SHADE : requireShade({ ...input.shade, circumsolar: 1 });
+  const plane = planeOf(tilt, albedo, model, shade);
   return {
     needsDniExtra: model !== 'isotropic' && model !== 'ashraeClearDay',
-    irradiance: (out, dni, dhi, sunAltitude, sinAltitude, cosIncidence, dniExtra) => planeKernel(out, plane, dni, dhi, sunAltitude, sinAltitude, cosIncidence, dniExtra),
+    irradiance: (out, dni, dhi, sunAltitude, sinAltitude, cosIncidence, dniExtra, circumsolar) => planeKernel(out, plane, dni, dhi, sunAltitude, sinAltitude, cosIncidence, dniExtra, circumsolar),
   };
 }

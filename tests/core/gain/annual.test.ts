@@ -12,6 +12,7 @@ import { windowGainAt } from '../../../src/core/gain/windowGain';
 import { ashraeClearSky } from '../../../src/core/sky/clearSky';
 import { annualSunPath } from '../../../src/core/sun/sunPath';
 import { civilToSerial } from '../../../src/core/time/calendar';
+import { skylineSkyViewFactor } from '../../../src/core/shading/skyline';
 import { baseSpec, shadedSpec } from './gainFixtures';
 
 /** Synthetic measured weather: clear-sky DNI/DHI at the mid-hour sun, scaled down on some days. */
@@ -157,5 +158,66 @@ describe('annual series', () => {
     const noonJul = (181 + 14) * 24 + 12;
     expect(s.dni[noonJan]).toBe(one.dni[noonJan]);
     expect(s.dni[noonJul]).toBeLessThan(one.dni[noonJul]);
+  });
+});
+
+describe('diffuse shading in the annual series (docs/diffuse-shading.md)', () => {
+  test('the sky and ground reaching the glass are the bare window’s cut by the view factors; the beam is unchanged', () => {
+    for (const skyModel of ['isotropic', 'hayDavies', 'perez1990'] as const) {
+      const shaded = annualSeries(shadedSpec({ skyModel }));
+      const bare = annualSeries(baseSpec({ skyModel }));
+      const { skyViewRatio, groundViewRatio, horizonShare, diffuseShading } = shaded.diffuse;
+      expect(diffuseShading).toBe('viewFactors');
+      expect(skyViewRatio).toBeGreaterThan(0.3);
+      expect(skyViewRatio).toBeLessThan(0.9);
+      expect(groundViewRatio).toBeLessThan(1);
+      expect(horizonShare).toBeLessThan(1);
+      expect(bare.diffuse).toEqual({ skyViewRatio: 1, groundViewRatio: 1, horizonShare: 1, diffuseShading: 'viewFactors' });
+      // Worst deviations over the year (one expect each: expect in a loop of 8760 is slow under Jest).
+      let beam = 0;
+      let unshaded = 0;
+      let ground = 0;
+      let above = 0;
+      let isotropic = 0;
+      for (let i = 0; i < shaded.hours; i++) {
+        beam = Math.max(beam, Math.abs(shaded.beam[i] - bare.beam[i]));
+        unshaded = Math.max(unshaded, Math.abs(shaded.skyUnshaded[i] - bare.sky[i]), Math.abs(shaded.groundUnshaded[i] - bare.ground[i]));
+        ground = Math.max(ground, Math.abs(shaded.ground[i] - bare.ground[i] * groundViewRatio));
+        above = Math.max(above, shaded.sky[i] - bare.sky[i]);
+        isotropic = Math.max(isotropic, Math.abs(shaded.sky[i] - bare.sky[i] * skyViewRatio));
+      }
+      expect(beam).toBe(0);
+      expect(unshaded).toBe(0);
+      expect(ground).toBeLessThan(1e-9);
+      expect(above).toBeLessThanOrEqual(1e-9);
+      if (skyModel === 'isotropic') expect(isotropic).toBeLessThan(1e-9);
+    }
+  });
+
+  test('"beamOnly" is the earlier treatment: the whole sky × the skyline’s sky view, the ground uncut', () => {
+    const spec = shadedSpec({ diffuseShading: 'beamOnly' });
+    const s = annualSeries(spec);
+    const svf = skylineSkyViewFactor(spec.shading.skyline!, spec.surfaceAzimuth);
+    expect(s.diffuse.diffuseShading).toBe('beamOnly');
+    expect(s.diffuse.skyViewRatio).toBe(svf);
+    let sky = 0;
+    let ground = 0;
+    for (let i = 0; i < s.hours; i++) {
+      sky = Math.max(sky, Math.abs(s.sky[i] - s.skyUnshaded[i] * svf));
+      ground = Math.max(ground, Math.abs(s.ground[i] - s.groundUnshaded[i]));
+    }
+    expect(sky).toBeLessThan(1e-9);
+    expect(ground).toBe(0);
+    // and the devices now take more than that away
+    expect(summarizeAnnual(annualSeries(shadedSpec())).annualKWh).toBeLessThan(summarizeAnnual(s).annualKWh);
+  });
+
+  test('a bad diffuseShading is refused naming it', () => {
+    expect(() => annualSeries(baseSpec({ diffuseShading: 'none' as never }))).toThrow(SunpaneError);
+    try {
+      annualSeries(baseSpec({ diffuseShading: 'none' as never }));
+    } catch (err) {
+      expect((err as SunpaneError).argument).toBe('diffuseShading');
+    }
   });
 });

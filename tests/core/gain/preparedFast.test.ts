@@ -12,7 +12,7 @@ import fc from 'fast-check';
 import { RAD, wrap180 } from '../../../src/core/common/angles';
 import { annualSeries } from '../../../src/core/gain/annual';
 import { SunpaneError } from '../../../src/core/common/errors';
-import { prepareWindow } from '../../../src/core/gain/windowGain';
+import { circumsolarShade, prepareWindow } from '../../../src/core/gain/windowGain';
 import { airMassKastenYoung, airMassKastenYoungFromSine, airMassKastenYoungUnchecked } from '../../../src/core/sky/airMass';
 import { PEREZ_1990_COMPOSITE, PEREZ_EPSILON_EDGES, perezBin, perezParts, perezPartsKernel } from '../../../src/core/sky/perez1990';
 import { type PlaneParts, planeIrradiance, preparePlane, type SkyModel } from '../../../src/core/sky/planeIrradiance';
@@ -133,11 +133,11 @@ describe('prepared plane equals planeIrradiance', () => {
     groundAlbedo: fc.double({ min: 0, max: 1, noNaN: true }),
     dayOfYear: fc.integer({ min: 1, max: 366 }),
     skyModel: fc.constantFrom<SkyModel>('isotropic', 'hayDavies', 'perez1990'),
-    skyViewFactor: fc.double({ min: 0, max: 1, noNaN: true }),
+    shade: fc.record({ isotropic: fc.double({ min: 0, max: 1, noNaN: true }), circumsolar: fc.double({ min: 0, max: 1, noNaN: true }), horizon: fc.double({ min: 0, max: 1, noNaN: true }), ground: fc.double({ min: 0, max: 1, noNaN: true }) }),
   });
 
   test('over random suns (at, below and above the horizon, in front of and behind the plane), planes and models', () => {
-    const out: PlaneParts = { beam: 0, sky: 0, ground: 0, total: 0 };
+    const out: PlaneParts = { beam: 0, sky: 0, ground: 0, total: 0, skyUnshaded: 0, groundUnshaded: 0 };
     fc.assert(
       fc.property(planeArb, (input) => {
         const checked = planeIrradiance(input);
@@ -147,12 +147,14 @@ describe('prepared plane equals planeIrradiance', () => {
         const cosIncidence =
           Math.sin(betaRad) * Math.cos(input.surfaceTilt * RAD) +
           Math.cos(betaRad) * Math.sin(input.surfaceTilt * RAD) * Math.cos((input.sunAzimuth - input.surfaceAzimuth) * RAD);
-        plane.irradiance(out, input.dni, input.dhi, input.sunAltitude, Math.sin(betaRad), cosIncidence, extraterrestrialSpencer(input.dayOfYear));
+        plane.irradiance(out, input.dni, input.dhi, input.sunAltitude, Math.sin(betaRad), cosIncidence, extraterrestrialSpencer(input.dayOfYear), input.shade.circumsolar);
         const scale = input.dni + input.dhi;
         expect(closeTo(out.beam, checked.beam, scale)).toBe(true);
         expect(closeTo(out.sky, checked.sky, scale)).toBe(true);
         expect(closeTo(out.ground, checked.ground, scale)).toBe(true);
         expect(closeTo(out.total, checked.total, scale)).toBe(true);
+        expect(closeTo(out.skyUnshaded, checked.skyUnshaded, scale)).toBe(true);
+        expect(closeTo(out.groundUnshaded, checked.groundUnshaded, scale)).toBe(true);
         expect(plane.needsDniExtra).toBe(input.skyModel !== 'isotropic');
       }),
       { numRuns: 3000, seed: 9 },
@@ -161,10 +163,11 @@ describe('prepared plane equals planeIrradiance', () => {
 
   test('bad plane fields are refused at preparation, naming the field', () => {
     const good = { surfaceTilt: 90, surfaceAzimuth: 180, groundAlbedo: 0.2, skyModel: 'perez1990' as SkyModel };
-    for (const [field, value] of [['surfaceTilt', 181], ['surfaceAzimuth', -1], ['groundAlbedo', 2], ['skyModel', 'cloudy'], ['skyViewFactor', 1.5]] as const) {
+    for (const [field, value] of [['surfaceTilt', 181], ['surfaceAzimuth', -1], ['groundAlbedo', 2], ['skyModel', 'cloudy'], ['shade.horizon', 1.5]] as const) {
       let caught: unknown;
       try {
-        preparePlane({ ...good, [field]: value } as typeof good);
+        const input = field === 'shade.horizon' ? { ...good, shade: { isotropic: 1, horizon: value, ground: 1 } } : { ...good, [field]: value };
+        preparePlane(input as typeof good);
       } catch (err) {
         caught = err;
       }
@@ -389,13 +392,15 @@ describe('annual series hour by hour equals the checked functions at its own sun
         surfaceAzimuth: spec.surfaceAzimuth,
         groundAlbedo: spec.groundAlbedo,
         dayOfYear: Math.floor(i / 24) + 1,
-        skyModel: spec.skyModel ?? "perez1990",
-        skyViewFactor: w.skyViewFactor,
+        skyModel: spec.skyModel ?? 'perez1990',
+        shade: { ...w.shade, circumsolar: circumsolarShade(w, lit) },
       });
       const scale = s.dni[i] + s.dhi[i];
       expect(closeTo(s.beam[i], p.beam, scale)).toBe(true);
       expect(closeTo(s.sky[i], p.sky, scale)).toBe(true);
       expect(closeTo(s.ground[i], p.ground, scale)).toBe(true);
+      expect(closeTo(s.skyUnshaded[i], p.skyUnshaded, scale)).toBe(true);
+      expect(closeTo(s.groundUnshaded[i], p.groundUnshaded, scale)).toBe(true);
       expect(Math.abs(s.incidence[i] - p.incidence)).toBeLessThan(1e-9);
     }
     expect(front).toBeGreaterThan(2000);

@@ -8,7 +8,8 @@ import { airMassKastenYoung } from '../../../src/core/sky/airMass';
 import { extraterrestrialSpencer } from '../../../src/core/sky/extraterrestrial';
 import { groundReflected, skyDiffuseAshraeClearDay, skyDiffuseHayDavies, skyDiffuseIsotropic, ashraeVerticalDiffuseRatio } from '../../../src/core/sky/transposition';
 import { planeIrradiance, type PlaneIrradianceInput } from '../../../src/core/sky/planeIrradiance';
-import { skyDiffusePerez1990 } from '../../../src/core/sky/perez1990';
+import { perezParts, skyDiffusePerez1990 } from '../../../src/core/sky/perez1990';
+import { incidenceAngle } from '../../../src/core/sun/surfaceAngles';
 import { expectArgumentError } from '../../support/expectError';
 
 const cosd = (d: number) => Math.cos((d * Math.PI) / 180);
@@ -78,12 +79,46 @@ describe('planeIrradiance', () => {
     }
   });
 
-  test('the sky view factor scales the sky diffuse only', () => {
-    const open = planeIrradiance(base);
-    const hidden = planeIrradiance({ ...base, skyViewFactor: 0.4 });
-    expect(hidden.sky).toBeCloseTo(open.sky * 0.4, 9);
-    expect(hidden.beam).toBe(open.beam);
-    expect(hidden.ground).toBe(open.ground);
+  test('a shaded window: each part of the diffuse goes through its own multiplier (docs/diffuse-shading.md)', () => {
+    const shade = { isotropic: 0.55, circumsolar: 0.3, horizon: 0.7, ground: 0.8 };
+    const theta = incidenceAngle(base.sunAltitude, base.sunAzimuth, base.surfaceTilt, base.surfaceAzimuth);
+    const cosTheta = cosd(theta);
+    const e0 = extraterrestrialSpencer(base.dayOfYear);
+    // Perez: isotropic × sky view ratio, circumsolar × sunlit fraction, horizon × band share.
+    const parts = perezParts(90, 180, base.dhi, base.dni, e0, 90 - base.sunAltitude, base.sunAzimuth, airMassKastenYoung(base.sunAltitude));
+    const perez = planeIrradiance({ ...base, shade });
+    expect(perez.sky).toBeCloseTo(parts.isotropic * 0.55 + parts.circumsolar * 0.3 + parts.horizon * 0.7, 9);
+    expect(perez.skyUnshaded).toBeCloseTo(parts.total, 9);
+    expect(perez.ground).toBeCloseTo(perez.groundUnshaded * 0.8, 9);
+    expect(perez.beam).toBe(planeIrradiance(base).beam);
+    // Hay–Davies: (1 − Ai) isotropic × sky view ratio, Ai Rb circumsolar × sunlit fraction.
+    const ai = base.dni / e0;
+    const rb = cosTheta / sind(base.sunAltitude);
+    const hd = planeIrradiance({ ...base, skyModel: 'hayDavies', shade });
+    expect(hd.sky).toBeCloseTo(base.dhi * ((1 - ai) * 0.5 * 0.55 + ai * rb * 0.3), 9);
+    expect(hd.skyUnshaded).toBeCloseTo(skyDiffuseHayDavies(base.dhi, base.dni, e0, cosTheta, 90 - base.sunAltitude, 90), 9);
+    // Isotropic: all of it × sky view ratio.
+    const iso = planeIrradiance({ ...base, skyModel: 'isotropic', shade });
+    expect(iso.sky).toBeCloseTo(base.dhi * 0.5 * 0.55, 9);
+    expect(iso.total).toBeCloseTo(iso.beam + iso.sky + iso.ground, 9);
+  });
+
+  test('no shade is the unshaded window, and the unshaded parts are reported as such', () => {
+    for (const skyModel of ['isotropic', 'hayDavies', 'perez1990'] as const) {
+      const open = planeIrradiance({ ...base, skyModel });
+      const ones = planeIrradiance({ ...base, skyModel, shade: { isotropic: 1, circumsolar: 1, horizon: 1, ground: 1 } });
+      expect(ones).toEqual(open);
+      expect(open.sky).toBe(open.skyUnshaded);
+      expect(open.ground).toBe(open.groundUnshaded);
+    }
+  });
+
+  test('at night every model spreads the diffuse isotropically, so only the sky view ratio applies', () => {
+    for (const skyModel of ['isotropic', 'hayDavies', 'perez1990'] as const) {
+      const r = planeIrradiance({ ...base, skyModel, sunAltitude: -5, dni: 0, dhi: 10, shade: { isotropic: 0.5, circumsolar: 0, horizon: 0, ground: 0.25 } });
+      expect(r.sky).toBeCloseTo(2.5, 9);
+      expect(r.ground).toBeCloseTo(0.25, 9);
+    }
   });
 
   test('random valid inputs give finite, non-negative parts for every model', () => {
@@ -99,11 +134,13 @@ describe('planeIrradiance', () => {
           groundAlbedo: fc.double({ min: 0, max: 1, noNaN: true }),
           dayOfYear: fc.double({ min: 1, max: 366, noNaN: true }),
           skyModel: fc.constantFrom('isotropic' as const, 'hayDavies' as const, 'perez1990' as const),
-          skyViewFactor: fc.double({ min: 0, max: 1, noNaN: true }),
+          shade: fc.record({ isotropic: fc.double({ min: 0, max: 1, noNaN: true }), circumsolar: fc.double({ min: 0, max: 1, noNaN: true }), horizon: fc.double({ min: 0, max: 1, noNaN: true }), ground: fc.double({ min: 0, max: 1, noNaN: true }) }),
         }),
         (input) => {
           const r = planeIrradiance(input);
-          for (const v of [r.beam, r.sky, r.ground, r.total, r.incidence]) {
+          expect(r.sky).toBeLessThanOrEqual(r.skyUnshaded + 1e-9);
+          expect(r.ground).toBeLessThanOrEqual(r.groundUnshaded + 1e-9);
+          for (const v of [r.beam, r.sky, r.ground, r.total, r.incidence, r.skyUnshaded, r.groundUnshaded]) {
             expect(Number.isFinite(v)).toBe(true);
             expect(v).toBeGreaterThanOrEqual(0);
           }
@@ -119,7 +156,10 @@ describe('planeIrradiance', () => {
     expectError(() => planeIrradiance({ ...base, dhi: Number.NaN }), 'dhi');
     expectError(() => planeIrradiance({ ...base, groundAlbedo: 1.5 }), 'groundAlbedo');
     expectError(() => planeIrradiance({ ...base, groundAlbedo: -0.1 }), 'groundAlbedo');
-    expectError(() => planeIrradiance({ ...base, skyViewFactor: 2 }), 'skyViewFactor');
+    expectError(() => planeIrradiance({ ...base, shade: { isotropic: 2, circumsolar: 1, horizon: 1, ground: 1 } }), 'shade.isotropic');
+    expectError(() => planeIrradiance({ ...base, shade: { isotropic: 1, circumsolar: Number.NaN, horizon: 1, ground: 1 } }), 'shade.circumsolar');
+    expectError(() => planeIrradiance({ ...base, shade: { isotropic: 1, circumsolar: 1, horizon: -0.1, ground: 1 } }), 'shade.horizon');
+    expectError(() => planeIrradiance({ ...base, shade: { isotropic: 1, circumsolar: 1, horizon: 1, ground: 1.1 } }), 'shade.ground');
     expectError(() => planeIrradiance({ ...base, dayOfYear: 0 }), 'dayOfYear');
     expectError(() => planeIrradiance({ ...base, surfaceTilt: 190 }), 'surfaceTilt');
     expectError(() => planeIrradiance({ ...base, skyModel: 'cloudy' as never }), 'skyModel');
