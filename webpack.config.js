@@ -25,9 +25,10 @@ const OFFICE_JS = 'https://appsforoffice.microsoft.com/lib/1/hosted/office.js';
  * Functions + pane JavaScript, minified, excluding office.js [bytes]: 150 KB until the core gained
  * glazing types, conduction, the load by part and the clock (156.3 KB then); 165 KB until the pane
  * took on the command line's weather reader and checks (src/io/weather.ts and its helpers: 159.4 ->
- * 177.3 KB).
+ * 177.3 KB); 180 KB until devices cut the diffuse light too (the view-factor integration 5.9 KB,
+ * the diffuse wiring and the new step texts 5.3 KB: 177.3 -> 188.4 KB).
  */
-const BUDGET_BYTES = 180 * 1024;
+const BUDGET_BYTES = 190 * 1024;
 const DEV_PORT = 3000;
 
 /**
