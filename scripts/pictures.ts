@@ -5,8 +5,8 @@
  *   headless Chromium at the width of a task pane (350 px), with office.js replaced by the browser
  *   tests' stand-in Excel host, after entering an invented window at an example site;
  * - docs/images/demo-options.png: the Options sheet of the demo workbook (`sunpane demo`), printed
- *   to PDF by LibreOffice headless (the other sheets hidden for the print) and rasterised with
- *   pdftoppm.
+ *   to PDF by LibreOffice headless (the other sheets hidden for the print; its bar chart is
+ *   drawn from the DrawingML parts the workbook writer adds) and rasterised with pdftoppm.
  *
  * Needs what the tests need: `npm run build` and `npm run build:cli` first (the npm script does
  * both), Debian's chromium, soffice and pdftoppm. Each picture must stay under 200 KB.
@@ -15,7 +15,8 @@ import { execFileSync } from 'node:child_process';
 import * as fs from 'node:fs';
 import * as os from 'node:os';
 import * as path from 'node:path';
-import ExcelJS from 'exceljs';
+import { buildDemoWorkbook, computeDemo } from '../src/cli/demo';
+import { saveWorkbook } from '../src/cli/workbook';
 import { launchBrowser, openAddinPage } from '../tests/browser/chromium';
 import { convert } from '../tests/libreoffice/soffice';
 
@@ -70,27 +71,22 @@ async function panePictures(): Promise<void> {
 async function workbookPicture(): Promise<void> {
   const work = fs.mkdtempSync(path.join(os.tmpdir(), 'sunpane-pictures-'));
   try {
-    execFileSync(process.execPath, [path.join(ROOT, 'bin', 'sunpane.js'), 'demo', '--out', work], { stdio: 'ignore' });
-    const book = new ExcelJS.Workbook();
-    await book.xlsx.readFile(path.join(work, 'sunpane-demo.xlsx'));
+    // The demo workbook as `sunpane demo` builds it, charts included, with the other sheets hidden.
+    const built = buildDemoWorkbook(computeDemo());
+    const book = built.workbook;
     if (!book.getWorksheet(WORKBOOK_SHEET)) throw new Error(`the demo workbook has no sheet ${WORKBOOK_SHEET}`);
-    for (const sheet of book.worksheets) {
-      if (sheet.name !== WORKBOOK_SHEET) sheet.state = 'hidden';
-      else {
-        sheet.pageSetup.orientation = 'landscape';
-        sheet.pageSetup.fitToPage = true;
-        sheet.pageSetup.fitToWidth = 1;
-        sheet.pageSetup.fitToHeight = 1;
-      }
-    }
+    for (const sheet of book.worksheets) if (sheet.name !== WORKBOOK_SHEET) sheet.state = 'hidden';
     book.views = [{ x: 0, y: 0, width: 10000, height: 20000, firstSheet: 0, activeTab: book.worksheets.findIndex((s) => s.name === WORKBOOK_SHEET), visibility: 'visible' }];
     const single = path.join(work, 'options.xlsx');
-    await book.xlsx.writeFile(single);
+    await saveWorkbook(book, single, {}, built.charts);
     const pdfDir = path.join(work, 'pdf');
     const pdf = convert(single, 'pdf', pdfDir).files.find((f) => f.endsWith('.pdf'));
     if (!pdf) throw new Error('LibreOffice wrote no PDF');
     // Crop the page to the printed table: the words' bounding boxes (pdftotext -bbox, in points) plus a margin.
-    const boxes = [...execFileSync('pdftotext', ['-bbox', '-f', '1', '-l', '1', pdf, '-'], { encoding: 'utf8' }).matchAll(/xMin="([\d.]+)" yMin="([\d.]+)" xMax="([\d.]+)" yMax="([\d.]+)"/g)].map((m) => m.slice(1, 5).map(Number));
+    // The page footer (sheet name, page number) is left out.
+    const bbox = execFileSync('pdftotext', ['-bbox', '-f', '1', '-l', '1', pdf, '-'], { encoding: 'utf8' });
+    const pageHeight = Number(/<page width="[\d.]+" height="([\d.]+)"/.exec(bbox)?.[1] ?? 842);
+    const boxes = [...bbox.matchAll(/xMin="([\d.]+)" yMin="([\d.]+)" xMax="([\d.]+)" yMax="([\d.]+)"/g)].map((m) => m.slice(1, 5).map(Number)).filter((b) => b[1] < pageHeight - 50);
     if (boxes.length === 0) throw new Error('the printed sheet has no text');
     const margin = 12;
     const scale = DPI / 72;

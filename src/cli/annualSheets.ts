@@ -9,8 +9,10 @@ import type { AnnualSeries, AnnualSummary } from '../core/gain';
 import { formatSerialIso } from '../core/time';
 import { HOURLY_COLUMNS, HOURLY_HEADERS, type HourlyKey, hourlyColumn } from '../outputs/hourlyColumns';
 import { monthHourMeanFormula, monthlyGainFormula, monthlySumFormula, tableColumnRef } from '../outputs/hourlyFormulas';
+import { PALETTE } from '../outputs/palette';
 import { csvLine, formatFixed } from './csv';
-import { type ExcelJS, NUMBER_FORMATS, type TableCell, type TablePlacement, addColourScale, addDataTable, addSheetHeading, address, fitOnOnePage, freezeAt, serialToCellDate, setFormula, setLabel, styleHeader } from './workbook';
+import { type SheetChart, cellRef, columnRef } from './xlsxCharts';
+import { type ExcelJS, NUMBER_FORMATS, type TableCell, type TablePlacement, addColourScale, addDataTable, addSheetHeading, address, freezeAt, serialToCellDate, setFormula, setLabel, styleHeader } from './workbook';
 
 /** Header of the stamp column (the hour's END, local standard time). */
 export const STAMP_HEADER = hourlyColumn('stampSerial').header;
@@ -66,6 +68,8 @@ export interface MonthlyCells {
   months: { cell: string; expected: number }[];
   /** The month × hour block of mean gain [W], each a SUMPRODUCT over the hourly table. */
   monthHour: { cell: string; expected: number }[];
+  /** The annual profile: a column chart of the months' gain, under the summary. */
+  chart: SheetChart;
 }
 
 /** Quotes a sheet name for a formula reference. */
@@ -105,8 +109,29 @@ export function addMonthlySheet(
   const rows = MONTHS.map((m, k) => [m, summary.monthlyKWh[k], summary.monthlyMissingHours[k]]);
   const gainHeader = 'Solar gain (kWh)';
   const missingHeader = 'Weather missing (h)';
-  const t = addDataTable(ws, tableName, { row: top, column: 1 }, [{ header: 'Month', width: 10 }, { header: gainHeader, numFmt: NUMBER_FORMATS.kwh, width: 16 }, { header: missingHeader, numFmt: NUMBER_FORMATS.integer, width: 16 }], rows);
-  const cells: MonthlyCells = { annualKWh: { cell: '', expected: 0 }, maxMonthKWh: { cell: '', expected: 0 }, months: [], monthHour: [] };
+  const t = addDataTable(ws, tableName, { row: top, column: 1 }, [{ header: 'Month', width: 14 }, { header: gainHeader, numFmt: NUMBER_FORMATS.kwh, width: 16 }, { header: missingHeader, numFmt: NUMBER_FORMATS.integer, width: 16 }], rows);
+  const chartTop = t.lastRow + 6;
+  const chart: SheetChart = {
+    sheet,
+    kind: 'column',
+    title: 'Annual profile: solar gain by month (kWh)',
+    valueAxisTitle: 'Solar gain (kWh)',
+    valueFormat: '#,##0',
+    series: [
+      {
+        name: gainHeader,
+        nameRef: cellRef(sheet, 'B', top),
+        categories: [...MONTHS],
+        categoriesRef: columnRef(sheet, 'A', top + 1, top + 12),
+        values: summary.monthlyKWh,
+        valuesRef: columnRef(sheet, 'B', top + 1, top + 12),
+        colour: PALETTE.series[0],
+      },
+    ],
+    from: { col: 0, row: chartTop },
+    to: { col: 9, row: chartTop + 18 },
+  };
+  const cells: MonthlyCells = { annualKWh: { cell: '', expected: 0 }, maxMonthKWh: { cell: '', expected: 0 }, months: [], monthHour: [], chart };
   const ref = hourly ? tableColumnRef(hourly.placement.name) : undefined;
   if (hourly && ref) {
     MONTHS.forEach((_, k) => {
@@ -152,7 +177,6 @@ export function addMonthlySheet(
     for (let h = 1; h <= 24; h++) ws.getColumn(left + h).width = 6;
     addColourScale(ws, `${address(top + 1, left + 1)}:${address(top + 12, left + 24)}`);
   }
-  fitOnOnePage(ws, 'landscape');
   return cells;
 }
 
@@ -182,5 +206,4 @@ export function addHeatMapSheet(wb: ExcelJS.Workbook, sheet: string, series: Ann
   for (let h = 2; h <= 25; h++) ws.getColumn(h).width = 6;
   addColourScale(ws, `${address(headerRow + 1, 2)}:${address(headerRow + days, 25)}`);
   freezeAt(ws, headerRow + 1, 2);
-  fitOnOnePage(ws, 'portrait');
 }

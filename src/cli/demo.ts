@@ -17,8 +17,10 @@ import { checkOutput, ensureFolder } from './atomicWrite';
 import { type Flags, parseFlags } from './flags';
 import { type DemoFormulaSet, addFormulaSheet, demoFormulas } from './demoFormulas';
 import { ProgressBar } from './progress';
-import { type SummaryTotals, type WindowResult, addSummaryTable, windowResult } from './schedule';
-import { type ExcelJS, NUMBER_FORMATS, type TableCell, addDataTable, addSheetHeading, address, fillContentsSheet, fitOnOnePage, freezeAt, newWorkbook, saveWorkbook, setFormula, setLabel, styleHeader } from './workbook';
+import { type SummaryTotals, type WindowResult, addSummaryTable, summaryChart, windowResult } from './schedule';
+import { type SheetChart, cellRef, columnRef } from './xlsxCharts';
+import { PALETTE } from '../outputs/palette';
+import { type ExcelJS, NUMBER_FORMATS, type TableCell, addDataTable, addSheetHeading, address, columnLetter, fillContentsSheet, freezeAt, newWorkbook, saveWorkbook, setFormula, setLabel, styleHeader } from './workbook';
 
 export const DEMO_HELP = `usage: sunpane demo [--out DIR]
 
@@ -167,7 +169,7 @@ function addOverview(wb: ExcelJS.Workbook, results: DemoResults): { cell: string
     { row: top, column: 1 },
     [
       { header: 'Site', width: 26 },
-      { header: 'Latitude (°)', numFmt: NUMBER_FORMATS.angle, width: 12 },
+      { header: 'Latitude (°)', numFmt: NUMBER_FORMATS.angle, width: 16 },
       { header: 'Longitude (°)', numFmt: NUMBER_FORMATS.angle, width: 12 },
       { header: 'UTC offset (h)', numFmt: '0.0#', width: 12 },
       ...FACINGS.map((f) => ({ header: `${f}-facing (kWh)`, numFmt: NUMBER_FORMATS.kwh, width: 13 })),
@@ -204,7 +206,6 @@ function addOverview(wb: ExcelJS.Workbook, results: DemoResults): { cell: string
     ws.getCell(row, 2).value = s.description;
   }
   freezeAt(ws, top + 1);
-  fitOnOnePage(ws);
   return checks;
 }
 
@@ -244,7 +245,6 @@ function addSchedule(wb: ExcelJS.Workbook, results: DemoResults): void {
     rows,
   );
   freezeAt(ws, top + 1, 2);
-  fitOnOnePage(ws);
 }
 
 function addMonthlyMatrix(wb: ExcelJS.Workbook, results: DemoResults): { cell: string; expected: number }[] {
@@ -272,11 +272,10 @@ function addMonthlyMatrix(wb: ExcelJS.Workbook, results: DemoResults): { cell: s
     checks.push({ cell: `Monthly!${address(sumRow, col)}`, expected: w.summary.annualKWh }, { cell: `Monthly!${address(maxRow, col)}`, expected: topMonth });
   });
   freezeAt(ws, t.headerRow + 1, 2);
-  fitOnOnePage(ws);
   return checks;
 }
 
-function addOptions(wb: ExcelJS.Workbook, results: DemoResults): { cell: string; expected: number }[] {
+function addOptions(wb: ExcelJS.Workbook, results: DemoResults): { checks: { cell: string; expected: number }[]; chart: SheetChart } {
   const ws = wb.addWorksheet('Options');
   const top = addSheetHeading(ws, `${DEMO_BUILDING.name}: outside shading options compared, clear-sky ${DEMO_YEAR}`, ['Saving = 1 − annual gain ÷ annual gain of the same window with no outside shading.']);
   const rows: TableCell[][] = results.options.map((o) => [
@@ -317,12 +316,29 @@ function addOptions(wb: ExcelJS.Workbook, results: DemoResults): { cell: string;
     checks.push({ cell: `Options!${cell}`, expected });
   });
   freezeAt(ws, t.headerRow + 1, 3);
-  fitOnOnePage(ws);
-  return checks;
+  // A bar chart of annual gain by option, one series per compared window (rows grouped by window).
+  const tags = [...new Set(results.options.map((o) => o.tag))];
+  const series = tags.map((tag, k) => {
+    const first = results.options.findIndex((o) => o.tag === tag);
+    const rows = results.options.filter((o) => o.tag === tag);
+    const r0 = t.headerRow + 1 + first;
+    return {
+      name: tag,
+      nameRef: cellRef('Options', 'A', r0),
+      categories: rows.map((o) => o.option),
+      categoriesRef: columnRef('Options', 'B', r0, r0 + rows.length - 1),
+      values: rows.map((o) => o.result.summary.annualKWh),
+      valuesRef: columnRef('Options', columnLetter(gainCol), r0, r0 + rows.length - 1),
+      colour: PALETTE.series[k % PALETTE.series.length],
+    };
+  });
+  const below = t.lastRow + 2;
+  const chart: SheetChart = { sheet: 'Options', kind: 'bar', title: 'Annual solar gain by shading option (kWh)', valueAxisTitle: 'Solar gain (kWh/yr)', valueFormat: '#,##0', series, from: { col: 0, row: below }, to: { col: 6, row: below + 20 } };
+  return { checks, chart };
 }
 
 /** Builds the whole demo workbook; returns it with the formula cells a spreadsheet must reproduce. */
-export function buildDemoWorkbook(results: DemoResults, onHour?: () => void): { workbook: ExcelJS.Workbook; checks: DemoCheckCells } {
+export function buildDemoWorkbook(results: DemoResults, onHour?: () => void): { workbook: ExcelJS.Workbook; checks: DemoCheckCells; charts: SheetChart[] } {
   const wb = newWorkbook(`Sunpane demo: ${DEMO_BUILDING.name}`);
   const contents = wb.addWorksheet('Contents');
   const overview = addOverview(wb, results);
@@ -331,9 +347,8 @@ export function buildDemoWorkbook(results: DemoResults, onHour?: () => void): { 
   const summaryTop = addSheetHeading(summarySheet, `${DEMO_BUILDING.name}: each window's year, clear-sky ${DEMO_YEAR}`);
   const summary = addSummaryTable(summarySheet, 'WindowSummary', summaryTop, results.windows);
   freezeAt(summarySheet, summaryTop + 1, 2);
-  fitOnOnePage(summarySheet);
   const monthly = addMonthlyMatrix(wb, results);
-  const options = addOptions(wb, results);
+  const { checks: options, chart: optionsChart } = addOptions(wb, results);
   addFormulaSheet(wb, 'Formulas', results.formulas);
   const hourlyWindow = results.windows.find((w) => w.tag === DEMO_HOURLY_TAG) ?? results.windows[0];
   const series = annualSeries(hourlyWindow.spec);
@@ -358,7 +373,8 @@ export function buildDemoWorkbook(results: DemoResults, onHour?: () => void): { 
     { sheet: `Hourly ${tag}`, holds: `The hourly year of window ${tag} as a table (8760 rows; left out of the printed pages).` },
   ]);
   const hourly = [yearCells.annualKWh, yearCells.maxMonthKWh, ...(yearCells.peakW ? [yearCells.peakW] : []), ...yearCells.months, ...yearCells.monthHour];
-  return { workbook: wb, checks: { summary, monthly, options, overview, hourly } };
+  const charts = [summaryChart('Summary', summaryTop, results.windows), optionsChart, yearCells.chart];
+  return { workbook: wb, checks: { summary, monthly, options, overview, hourly }, charts };
 }
 
 /** Reads `--out` (default out/demo). */
@@ -388,9 +404,9 @@ export async function demoCommand(argv: readonly string[], io: Output): Promise<
   }
   bar.finish();
   const writing = new ProgressBar('hourly sheet', demoWindows()[0].spec.year % 4 === 0 ? 8784 : 8760);
-  const { workbook } = buildDemoWorkbook(results, () => writing.tick());
+  const { workbook, charts } = buildDemoWorkbook(results, () => writing.tick());
   writing.finish();
-  await saveWorkbook(workbook, file, force);
+  await saveWorkbook(workbook, file, force, charts);
   for (const line of demoSummaryText(results, path.normalize(file))) io.out(line);
   return 0;
 }

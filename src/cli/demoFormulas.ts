@@ -16,10 +16,11 @@ import type { DemoWindow } from '../demo/building';
 import { applyFunction } from '../registry/evaluate';
 import { NAMESPACE, findFunction } from '../registry';
 import { NotAvailable, type RawArg } from '../registry/types';
-import { type ExcelJS, NUMBER_FORMATS, addDataTable, addSheetHeading, address, fitOnOnePage, freezeAt, serialToCellDate, setFormula, styleHeader } from './workbook';
+import { type ExcelJS, NUMBER_FORMATS, addDataTable, addSheetHeading, address, freezeAt, serialToCellDate, setFormula, styleHeader } from './workbook';
 
 /** One input cell of the formula sheet. */
 export interface DemoInput {
+  /** The parameter name it feeds, and the defined name of its cell. */
   key: string;
   label: string;
   value: number | string;
@@ -205,7 +206,8 @@ export function demoFormulas(window: DemoWindow): DemoFormulaSet {
       } else if ('input' in src) {
         const i = inputIndex.get(src.input);
         if (i === undefined) throw new Error(`internal error: no demo input ${src.input}`);
-        refs.push(`$B$${inputRow(i)}`);
+        // Inputs by their defined names (the glossary's parameter names), so a formula reads like its function's signature.
+        refs.push(inputs[i].key);
         raw.push(inputs[i].value);
       } else {
         const k = out.findIndex((f) => f.label === src.formula);
@@ -238,20 +240,24 @@ export function addFormulaSheet(wb: ExcelJS.Workbook, sheet: string, set: DemoFo
   ws.getCell(INPUT_TOP, 1).value = 'Input';
   ws.getCell(INPUT_TOP, 2).value = 'Value';
   ws.getCell(INPUT_TOP, 3).value = 'Unit';
-  styleHeader(ws, INPUT_TOP, 1, 3);
+  ws.getCell(INPUT_TOP, 4).value = 'Named range';
+  styleHeader(ws, INPUT_TOP, 1, 4);
   inputs.forEach((x, i) => {
+    // Each input cell is a named range, named as the function parameter it feeds.
+    wb.definedNames.add(`'${sheet.replace(/'/g, "''")}'!$B$${inputRow(i)}`, x.key);
     ws.getCell(inputRow(i), 1).value = x.label;
     const v = ws.getCell(inputRow(i), 2);
     v.value = x.numFmt === NUMBER_FORMATS.dateTime && typeof x.value === 'number' ? serialToCellDate(x.value) : x.value;
     if (x.numFmt) v.numFmt = x.numFmt;
     ws.getCell(inputRow(i), 3).value = x.unit;
+    ws.getCell(inputRow(i), 4).value = x.key;
   });
   const top = formulaTop(inputs.length);
   const t = addDataTable(
     ws,
     'ExampleFormulas',
     { row: top, column: 1 },
-    [{ header: 'Quantity', width: 40 }, { header: 'Formula', width: 60 }, { header: 'Result', width: 16 }, { header: 'Unit', width: 8 }],
+    [{ header: 'Quantity', width: 50 }, { header: 'Formula', width: 60 }, { header: 'Result', width: 16 }, { header: 'Unit', width: 8 }],
     formulas.map((f) => [f.label, `=${f.formula}`, null, f.unit]),
   );
   formulas.forEach((f, k) => {
@@ -262,5 +268,4 @@ export function addFormulaSheet(wb: ExcelJS.Workbook, sheet: string, set: DemoFo
     else ws.getCell(cell).value = f.result;
   });
   freezeAt(ws, INPUT_TOP + 1);
-  fitOnOnePage(ws);
 }

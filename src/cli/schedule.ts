@@ -20,7 +20,9 @@ import { outputKind, parseFlags, requireFlag } from './flags';
 import { ProgressBar } from './progress';
 import { WEATHER_FLAGS, checkWeatherTable, readWeatherTable, weatherRequest } from './weatherCsv';
 import { windowFromJson } from './windowJson';
-import { NUMBER_FORMATS, type TableCell, addDataTable, addSheetHeading, address, fillContentsSheet, freezeAt, newWorkbook, saveWorkbook, serialToCellDate, setFormula, setLabel } from './workbook';
+import { PALETTE } from '../outputs/palette';
+import { type SheetChart, cellRef, columnRef } from './xlsxCharts';
+import { NUMBER_FORMATS, type TableCell, addDataTable, addSheetHeading, address, columnLetter, fillContentsSheet, freezeAt, newWorkbook, saveWorkbook, serialToCellDate, setFormula, setLabel } from './workbook';
 import { type MatchedHeaders, type ScheduleColumn, SCHEDULE_COLUMNS, SITE_KEY, columnForHeader, columnsForPath, headerKey, matchHeaders, requiredColumns, splitListCell } from '../schedule/columns';
 
 const SCHEDULE_FLAGS = { in: true, ...WEATHER_FLAGS, out: true, force: false, help: false } as const;
@@ -322,6 +324,37 @@ function siteKey(spec: WindowSpec): string {
   return [spec.year, latitude, longitude, utcOffset, elevation, pressure, temperature].join('|');
 }
 
+/**
+ * A bar chart of each window's annual solar gain, under the summary table that `addSummaryTable`
+ * put at `topRow` (its header row) on `sheet`.
+ */
+export function summaryChart(sheet: string, topRow: number, results: readonly WindowResult[]): SheetChart {
+  const first = topRow + 1;
+  const last = topRow + results.length;
+  const annual = columnLetter(SUMMARY_HEADERS.indexOf('Annual gain (kWh)') + 1);
+  const below = last + 2;
+  return {
+    sheet,
+    kind: 'bar',
+    title: 'Annual solar gain by window (kWh)',
+    valueAxisTitle: 'Solar gain (kWh/yr)',
+    valueFormat: '#,##0',
+    series: [
+      {
+        name: 'Annual gain (kWh)',
+        nameRef: cellRef(sheet, annual, topRow),
+        categories: results.map((r) => r.spec.name),
+        categoriesRef: columnRef(sheet, 'A', first, last),
+        values: results.map((r) => r.summary.annualKWh),
+        valuesRef: columnRef(sheet, annual, first, last),
+        colour: PALETTE.series[0],
+      },
+    ],
+    from: { col: 0, row: below + 1 },
+    to: { col: 7, row: below + 1 + Math.max(14, Math.ceil(results.length * 1.4) + 6) },
+  };
+}
+
 /** Computes one window's year and summary. */
 export function windowResult(spec: WindowSpec): WindowResult {
   const series = annualSeries(spec);
@@ -389,16 +422,18 @@ export async function scheduleCommand(argv: readonly string[], io: Output): Prom
   if (kind === 'csv') await writeFileAtomic(out, summaryCsv(results), force);
   else {
     const wb = newWorkbook('Sunpane window schedule');
+    const charts: SheetChart[] = [];
     const contents = wb.addWorksheet('Contents');
     const ws = wb.addWorksheet('Summary');
     const top = addSheetHeading(ws, `Window schedule: each window's year (${path.basename(input)})`);
     addSummaryTable(ws, 'Summary', top, results);
+    charts.push(summaryChart('Summary', top, results));
     freezeAt(ws, top + 1, 2);
     fillContentsSheet(contents, 'Sunpane window schedule', [`From ${path.basename(input)}.`], [
       { sheet: 'Contents', holds: 'This list.' },
-      { sheet: 'Summary', holds: "One row per window: its year's solar gain, peak hour, hours with beam on the glass, mean sunlit fraction, missing weather hours and gain by month; totals of all windows as formulas." },
+      { sheet: 'Summary', holds: "One row per window: its year's solar gain, peak hour, hours with beam on the glass, mean sunlit fraction, missing weather hours and gain by month; totals of all windows as formulas; a chart of annual gain by window." },
     ]);
-    await saveWorkbook(wb, out, force);
+    await saveWorkbook(wb, out, force, charts);
   }
   const total = results.reduce((a, r) => a + r.summary.annualKWh, 0);
   io.out(`${results.length} window${results.length === 1 ? '' : 's'}: ${total.toFixed(1)} kWh of solar gain a year in all`);

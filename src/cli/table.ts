@@ -113,9 +113,9 @@ export async function tableCommand(argv: readonly string[], io: Output): Promise
     addHeatMapSheet(wb, 'Heat map', series, `${spec.name}: solar gain (W) by day and hour ending, ${series.year}`);
     const placement = addHourlySheet(wb, hourlySheet, 'Hourly', series, () => bar.tick());
     bar.finish();
-    addMonthlySheet(monthlySheet, 'Monthly', summary, { sheet: hourlySheet, placement, series }, `${spec.name}: solar gain by month, ${series.year}`);
+    const monthly = addMonthlySheet(monthlySheet, 'Monthly', summary, { sheet: hourlySheet, placement, series }, `${spec.name}: solar gain by month, ${series.year}`);
     fillContentsSheet(contents, `Sunpane: ${spec.name}, ${series.year}`, [`From ${path.basename(windowFile)}${flags.has('weather') ? ` and ${path.basename(flags.get('weather') ?? '')}` : ' (clear sky)'}.`], TABLE_CONTENTS);
-    await saveWorkbook(wb, out, force);
+    await saveWorkbook(wb, out, force, [monthly.chart]);
   }
   io.out(tableSummaryLine(series, summary));
   io.out(`wrote ${path.normalize(out)}`);

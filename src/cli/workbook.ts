@@ -8,6 +8,7 @@ import { escapeFormulaText } from '../io/textCells';
 import { CAUTION } from '../outputs/caution';
 import { PALETTE, argbColour } from '../outputs/palette';
 import { type OutputOptions, writeFileAtomic } from './atomicWrite';
+import { type SheetChart, addChartsToXlsx } from './xlsxCharts';
 
 /** Number formats used across Sunpane workbooks. */
 export const NUMBER_FORMATS = Object.freeze({
@@ -146,6 +147,7 @@ export function addDataTable(
       for (let i = 0; i < rows.length; i++) sheet.getCell(topLeft.row + 1 + i, topLeft.column + k).numFmt = c.numFmt;
     }
   });
+  fitRowHeight(sheet, topLeft.row);
   const headers = columns.map((c) => c.header);
   const columnOf = (header: string): number => {
     const k = headers.indexOf(header);
@@ -183,6 +185,45 @@ export function fillContentsSheet(ws: ExcelJS.Worksheet, title: string, lines: r
     ws.getCell(t.headerRow + 1 + k, 2).alignment = { wrapText: true, vertical: 'top' };
   });
   freezeAt(ws, top + 1);
+}
+
+/** Points of row height per line of body text (11 pt type). */
+const LINE_HEIGHT = 15;
+
+/**
+ * Lines a text takes in a wrapped cell of `width` characters: words are kept whole, a bold
+ * character counts 1.1.
+ */
+export function wrappedLines(text: string, width: number, bold = false): number {
+  const room = Math.max(1, width - 1);
+  let lines = 1;
+  let used = 0;
+  for (const word of text.split(/\s+/)) {
+    const w = word.length * (bold ? 1.1 : 1);
+    if (used > 0 && used + 1 + w > room) {
+      lines++;
+      used = w;
+    } else used += (used > 0 ? 1 : 0) + w;
+    while (used > room) {
+      lines++;
+      used -= room;
+    }
+  }
+  return lines;
+}
+
+/**
+ * Sets the height of a row with wrapped text to fit its longest cell (spreadsheet programs keep a
+ * row's stored height, and a header that needs two lines would otherwise be cut).
+ */
+export function fitRowHeight(sheet: ExcelJS.Worksheet, row: number): void {
+  let lines = 1;
+  sheet.getRow(row).eachCell((cell) => {
+    if (typeof cell.value !== 'string' || !cell.alignment?.wrapText) return;
+    lines = Math.max(lines, wrappedLines(cell.value, sheet.getColumn(Number(cell.col)).width ?? 8.43, cell.font?.bold === true));
+  });
+  const r = sheet.getRow(row);
+  r.height = Math.max(r.height ?? 0, lines * LINE_HEIGHT + 3);
 }
 
 /** Freezes the rows above `row` and the columns left of `column` (both 1-based; 1 freezes none). */
@@ -235,16 +276,54 @@ export function addColourScale(sheet: ExcelJS.Worksheet, range: string): void {
   });
 }
 
-/** Prints a sheet on one page (scaled to fit), for PDF output and printing. */
-export function fitOnOnePage(sheet: ExcelJS.Worksheet, orientation: 'portrait' | 'landscape' = 'landscape'): void {
+/** Width of a column that has none of its own, in characters (the spreadsheet default, about 8.43). */
+const DEFAULT_COLUMN_WIDTH = 8.43;
+
+function columnWidth(sheet: ExcelJS.Worksheet, column: number): number {
+  return sheet.getColumn(column).width ?? DEFAULT_COLUMN_WIDTH;
+}
+
+/**
+ * How a sheet prints, for handing the workbook on: A4, fitted to the page width (and, for a sheet of
+ * up to 60 rows, to one page), the table's header row repeated at the top of every page, a footer with the
+ * sheet's name and page number, and a print area over the used cells and the charts — widened until
+ * the heading's longest line (title, description, caution) fits, so that no line is cut at the
+ * area's edge. Portrait, unless the area is wider than about 120 characters and no taller than a
+ * page or two. ExcelJS writes the area and the repeated rows as the defined names
+ * `_xlnm.Print_Area` and `_xlnm.Print_Titles` (ECMA-376 Part 1 §18.2.6).
+ * @param titleRow - the header row to repeat (1-based); by default the last frozen row
+ * @param reach - the last row and column (1-based) anything is drawn in, e.g. a chart's corner
+ */
+export function setPrintLayout(sheet: ExcelJS.Worksheet, titleRow?: number, reach: { row: number; column: number } = { row: 0, column: 0 }): void {
+  const frozen = sheet.views[0]?.state === 'frozen' ? (sheet.views[0] as { ySplit?: number }).ySplit ?? 0 : 0;
+  const repeat = titleRow ?? (frozen > 0 ? frozen : undefined);
+  const lastRow = Math.max(sheet.rowCount, reach.row, 1);
+  let lastColumn = Math.max(sheet.columnCount, reach.column, 1);
+  let heading = 0;
+  for (let r = 1; r <= 6; r++) {
+    const v = sheet.getCell(r, 1).value;
+    if (typeof v === 'string') heading = Math.max(heading, v.length * (r === 1 ? 1.35 : 1.05));
+  }
+  let width = 0;
+  for (let c = 1; c <= lastColumn; c++) width += columnWidth(sheet, c);
+  while (width < heading) width += columnWidth(sheet, ++lastColumn);
   sheet.pageSetup = {
-    orientation,
+    ...sheet.pageSetup,
+    paperSize: 9,
+    orientation: width > 120 && lastRow <= 80 ? 'landscape' : 'portrait',
     fitToPage: true,
     fitToWidth: 1,
-    fitToHeight: 1,
-    paperSize: 9,
-    margins: { left: 0.4, right: 0.4, top: 0.5, bottom: 0.5, header: 0.2, footer: 0.2 },
+    // A sheet of up to 60 rows (a table and its chart) on one page; a long one as many pages tall as it takes.
+    fitToHeight: lastRow <= 60 ? 1 : 0,
+    horizontalCentered: false,
+    margins: { left: 0.5, right: 0.5, top: 0.6, bottom: 0.6, header: 0.3, footer: 0.3 },
+    // ExcelJS puts a `$` before each corner as given (`A$1` comes out as the absolute `$A$1`); it
+    // does not double an apostrophe in the sheet name, so such a sheet prints all its cells instead.
+    // A hidden sheet gets none: LibreOffice prints a hidden sheet that has a print area.
+    printArea: sheet.name.includes("'") || (sheet.state ?? 'visible') !== 'visible' ? undefined : `A$1:${columnLetter(lastColumn)}$${lastRow}`,
+    printTitlesRow: repeat ? `${repeat}:${repeat}` : undefined,
   };
+  sheet.headerFooter = { ...sheet.headerFooter, oddFooter: '&L&A&RPage &P of &N' };
 }
 
 /** A new workbook with Sunpane's document properties. */
@@ -258,9 +337,27 @@ export function newWorkbook(title: string): ExcelJS.Workbook {
 }
 
 /** Serialises a workbook and writes it atomically (temporary file, then rename; see atomicWrite.ts). */
-export async function saveWorkbook(wb: ExcelJS.Workbook, file: string, options: OutputOptions = {}): Promise<void> {
+export async function saveWorkbook(wb: ExcelJS.Workbook, file: string, options: OutputOptions = {}, charts: readonly SheetChart[] = []): Promise<void> {
+  await writeFileAtomic(file, await workbookBytes(wb, charts), options);
+}
+
+/**
+ * The xlsx package of a workbook ready to hand on: every sheet's print layout set
+ * ({@link setPrintLayout}, reaching over its charts), and the charts written in as DrawingML parts
+ * (xlsxCharts.ts).
+ */
+export async function workbookBytes(wb: ExcelJS.Workbook, charts: readonly SheetChart[] = []): Promise<Uint8Array> {
+  for (const ws of wb.worksheets) {
+    // Rows with wrapped text (headers) tall enough for it, now that every column has its width.
+    const wrapped = new Set<number>();
+    ws.eachRow((row, n) => row.eachCell((c) => void (c.alignment?.wrapText && typeof c.value === 'string' && wrapped.add(n))));
+    for (const n of wrapped) fitRowHeight(ws, n);
+    const own = charts.filter((c) => c.sheet === ws.name);
+    // A chart anchored to 0-based cell (col, row) with no offset ends at that cell's top-left corner: 1-based row `row`, column `col`.
+    setPrintLayout(ws, undefined, { row: Math.max(0, ...own.map((c) => c.to.row)), column: Math.max(0, ...own.map((c) => c.to.col)) });
+  }
   const buffer = await wb.xlsx.writeBuffer();
-  await writeFileAtomic(file, new Uint8Array(buffer as ArrayBuffer), options);
+  return addChartsToXlsx(new Uint8Array(buffer as ArrayBuffer), charts);
 }
 
 /** A Date in UTC that shows a local standard-time serial's wall-clock time in a spreadsheet cell. */

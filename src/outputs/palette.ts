@@ -15,8 +15,8 @@ export const PALETTE = Object.freeze({
   heatLow: 'F7F3E8',
   heatMid: 'F2B441',
   heatHigh: 'A63A1E',
-  /** Chart series, in order. */
-  series: Object.freeze(['1F5C66', 'E08A3C', '6B7F2A', '7A4E9C'] as const),
+  /** Chart series, in order (apart from the header fill and the colour scale, so a chart's bars are its own). */
+  series: Object.freeze(['2E6DA4', 'D9822B', '5B7F2A', '7A4E9C'] as const),
 });
 
 /** `#RRGGBB`, as the Excel JavaScript API takes colours. */

@@ -8,6 +8,7 @@
 import { SunpaneError } from '../core/common';
 import type { Shading } from '../core/shading';
 import type { WindowSpec } from '../core/gain';
+import { withoutPath } from './messages';
 import { readNumberText } from './spec';
 
 /** Most options compared at once. */
@@ -28,13 +29,13 @@ export interface ShadingOption {
 /** The option boxes, in table order, with our column titles. */
 export const OPTION_FIELDS: readonly { key: keyof ShadingOption; title: string; short: string }[] = [
   { key: 'label', title: 'Option', short: 'Name' },
-  { key: 'overhangDepth', title: 'Overhang depth m', short: 'Overhang m' },
-  { key: 'overhangGap', title: 'Overhang gap m', short: 'Gap above m' },
-  { key: 'overhangReach', title: 'Overhang reach m', short: 'Reach m' },
-  { key: 'setBack', title: 'Set-back m', short: 'Set-back m' },
-  { key: 'leftFinDepth', title: 'Left fin m', short: 'Left fin m' },
-  { key: 'rightFinDepth', title: 'Right fin m', short: 'Right fin m' },
-  { key: 'finGap', title: 'Fin gap m', short: 'Fin gap m' },
+  { key: 'overhangDepth', title: 'Overhang depth (m)', short: 'Overhang (m)' },
+  { key: 'overhangGap', title: 'Overhang gap (m)', short: 'Gap above (m)' },
+  { key: 'overhangReach', title: 'Overhang reach (m)', short: 'Reach (m)' },
+  { key: 'setBack', title: 'Set-back (m)', short: 'Set-back (m)' },
+  { key: 'leftFinDepth', title: 'Left fin depth (m)', short: 'Left fin (m)' },
+  { key: 'rightFinDepth', title: 'Right fin depth (m)', short: 'Right fin (m)' },
+  { key: 'finGap', title: 'Fin gap (m)', short: 'Fin gap (m)' },
 ];
 
 /** Starting options for a new workbook (edit freely). */
@@ -63,14 +64,26 @@ export function optionShading(option: ShadingOption, skyline?: number[]): Shadin
 
 /** The column title an option's validation message belongs to. */
 export function optionColumnFor(argument: string): string | undefined {
-  if (argument.startsWith('shading.overhang.projection')) return 'Overhang depth m';
-  if (argument.startsWith('shading.overhang.gap')) return 'Overhang gap m';
-  if (argument.startsWith('shading.overhang')) return 'Overhang reach m';
-  if (argument.startsWith('shading.leftFin.projection')) return 'Left fin m';
-  if (argument.startsWith('shading.rightFin.projection')) return 'Right fin m';
-  if (argument.startsWith('shading.leftFin') || argument.startsWith('shading.rightFin')) return 'Fin gap m';
-  if (argument.startsWith('shading.revealDepth')) return 'Set-back m';
+  if (argument.startsWith('shading.overhang.projection')) return 'Overhang depth (m)';
+  if (argument.startsWith('shading.overhang.gap')) return 'Overhang gap (m)';
+  if (argument.startsWith('shading.overhang')) return 'Overhang reach (m)';
+  if (argument.startsWith('shading.leftFin.projection')) return 'Left fin depth (m)';
+  if (argument.startsWith('shading.rightFin.projection')) return 'Right fin depth (m)';
+  if (argument.startsWith('shading.leftFin') || argument.startsWith('shading.rightFin')) return 'Fin gap (m)';
+  if (argument.startsWith('shading.revealDepth')) return 'Set-back (m)';
   return undefined;
+}
+
+/**
+ * A refused option value, with the message in the user's words too: the option by its number and
+ * label, the box by its column title (`Option 2 "Deep overhang", Overhang gap m: "high" is not allowed: …`).
+ */
+export class OptionProblem extends SunpaneError {
+  readonly inUserWords: string;
+  constructor(err: SunpaneError, option: number, label: string, column: string | undefined) {
+    super(err.argument, err.value, err.allowed, `option ${option} "${label}"${column ? `, column "${column}"` : ''}`);
+    this.inUserWords = `Option ${option} "${label}"${column ? `, ${column}` : ''}: ${withoutPath(err.message)}`;
+  }
 }
 
 /** The specs to run: the unshaded window first, then each option. Throws naming the option. */
@@ -88,7 +101,7 @@ export function optionSpecs(base: WindowSpec, options: readonly ShadingOption[],
     } catch (err) {
       if (!(err instanceof SunpaneError) || i === 0) throw err;
       const column = optionColumnFor(err.argument);
-      throw new SunpaneError(err.argument, err.value, err.allowed, `option ${i} "${o.label}"${column ? `, column "${column}"` : ''}`);
+      throw new OptionProblem(err, i, o.label, column);
     }
   });
   return out;

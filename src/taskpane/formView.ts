@@ -4,6 +4,7 @@
  */
 import { h } from './dom';
 import { FIELDS, type FieldDef, type FormValues, SECTIONS } from './fields';
+import { inUserWords, withoutPath } from './messages';
 import type { FormProblems } from './spec';
 
 function control(doc: Document, f: FieldDef, value: string): HTMLInputElement | HTMLSelectElement {
@@ -33,7 +34,7 @@ export function renderForm(doc: Document, root: HTMLElement, values: FormValues)
   for (const s of SECTIONS) {
     const set = h(doc, 'fieldset', { id: `section-${s.id}` }, h(doc, 'legend', {}, s.title));
     for (const f of FIELDS.filter((x) => x.section === s.id)) {
-      const label = h(doc, 'label', { for: f.id }, f.label, f.unit ? h(doc, 'span', { className: 'unit' }, ` ${f.unit}`) : undefined);
+      const label = h(doc, 'label', { for: f.id }, f.label, f.unit ? h(doc, 'span', { className: 'unit' }, ` (${f.unit})`) : undefined);
       const wrap = h(doc, 'div', { className: `field field-${f.kind}`, id: `${f.id}-field` }, label, control(doc, f, values[f.id] ?? f.initial));
       if (f.hint) wrap.append(h(doc, 'div', { className: 'hint', id: `${f.id}-hint` }, f.hint));
       wrap.append(h(doc, 'div', { className: 'msg', id: `${f.id}-msg`, role: 'alert' }));
@@ -75,7 +76,8 @@ export function showProblems(doc: Document, problems: FormProblems, general: HTM
   for (const f of FIELDS) {
     const msg = doc.getElementById(`${f.id}-msg`);
     const el = doc.getElementById(f.id);
-    const text = problems.byField[f.id] ?? '';
+    // The core's message, naming the box by its label rather than by the window's field path.
+    const text = problems.byField[f.id] ? inUserWords(problems.byField[f.id], f.label) : '';
     if (msg) msg.textContent = text;
     if (el) {
       if (text) el.setAttribute('aria-invalid', 'true');
@@ -83,6 +85,6 @@ export function showProblems(doc: Document, problems: FormProblems, general: HTM
     }
     if (text) marked++;
   }
-  general.textContent = problems.general.join(' ');
+  general.textContent = problems.general.map((m) => withoutPath(m)).join(' ');
   return marked;
 }

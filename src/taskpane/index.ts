@@ -6,6 +6,7 @@
 import { type PaneHost, createPane } from './pane';
 import type { SettingsStore } from './persist';
 import type { RunBatch } from './resultSheets';
+import { applyTheme } from './theme';
 
 export { createPane } from './pane';
 
@@ -22,8 +23,9 @@ function documentSettings(): SettingsStore | undefined {
   return Office.context?.document?.settings as unknown as SettingsStore | undefined;
 }
 
-/** Builds the pane into the page's #sunpane-root. */
+/** Builds the pane into the page's #sunpane-root, in the Office theme's colours. */
 export function startPane(doc: Document): void {
+  applyTheme(doc);
   const host: PaneHost = { run: excelRun, settings: documentSettings() };
   createPane(doc, host);
 }

@@ -6,11 +6,12 @@
 import { SunpaneError } from '../core/common';
 import { CAUTION } from '../outputs/caution';
 import type { WindowSpec } from '../core/gain';
-import { COMPARE_FORMATS, COMPARE_HEADER, MAX_OPTIONS, OPTION_FIELDS, type ShadingOption, comparisonRows, optionSpecs } from './compare';
+import { COMPARE_FORMATS, COMPARE_HEADER, MAX_OPTIONS, OPTION_FIELDS, OptionProblem, type ShadingOption, comparisonRows, optionSpecs } from './compare';
 import { makeReplaceDialog } from './dialog';
 import { byId, h } from './dom';
 import { type YearResult, runYear, validateSpec } from './engine';
-import { FIELD_BY_ID, type FormValues, applyExampleSite } from './fields';
+import { FIELD_BY_ID, type FormValues, applyExampleSite, fieldForArgument } from './fields';
+import { inUserWords } from './messages';
 import { applyVisibility, fillForm, readForm, renderForm, showProblems } from './formView';
 import { PaneStore, type SettingsStore } from './persist';
 import { type AskReplace, type RunBatch, RunCancelled, planSheet, sheetNamesOf } from './resultSheets';
@@ -68,28 +69,31 @@ export function createPane(doc: Document, host: PaneHost): void {
   const store = new PaneStore(host.settings);
   const state = store.state;
 
-  // ---- frame --------------------------------------------------------------------------------
+  // ---- frame: heading, caution, tabs, the scrolling panels, and a footer that always shows the
+  // primary action of the tab in view (reachable at the pane's narrowest without scrolling) --------
   root.append(
     h(doc, 'header', { className: 'brand' }, h(doc, 'span', { className: 'mark', 'aria-hidden': 'true' }), h(doc, 'div', {}, h(doc, 'h1', {}, 'Sunpane'), h(doc, 'p', {}, 'Sun and shade on a window, hour by hour'))),
     h(doc, 'p', { className: 'caution', id: 'caution', role: 'note' }, CAUTION),
   );
   const tablist = h(doc, 'div', { role: 'tablist', className: 'tabs', 'aria-label': 'Pane sections' });
-  root.append(tablist);
+  const panelBox = h(doc, 'main', { className: 'panels', id: 'panels' });
+  root.append(tablist, panelBox);
   const panels: Record<string, HTMLElement> = {};
   for (const t of TABS) {
     const b = h(doc, 'button', { type: 'button', role: 'tab', id: `tab-${t.id}`, 'aria-controls': `panel-${t.id}` }, t.title);
     b.addEventListener('click', () => selectTab(t.id));
     b.addEventListener('keydown', (e) => {
       const i = TABS.findIndex((x) => x.id === t.id);
-      if (e.key === 'ArrowRight' || e.key === 'ArrowLeft') {
-        const next = TABS[(i + (e.key === 'ArrowRight' ? 1 : TABS.length - 1)) % TABS.length];
-        selectTab(next.id);
-        byId(doc, `tab-${next.id}`).focus();
-      }
+      const to = e.key === 'ArrowRight' ? i + 1 : e.key === 'ArrowLeft' ? i - 1 : e.key === 'Home' ? 0 : e.key === 'End' ? TABS.length - 1 : undefined;
+      if (to === undefined) return;
+      e.preventDefault();
+      const next = TABS[(to + TABS.length) % TABS.length];
+      selectTab(next.id);
+      byId(doc, `tab-${next.id}`).focus();
     });
     tablist.append(b);
-    panels[t.id] = h(doc, 'section', { role: 'tabpanel', id: `panel-${t.id}`, 'aria-labelledby': `tab-${t.id}` });
-    root.append(panels[t.id]);
+    panels[t.id] = h(doc, 'section', { role: 'tabpanel', id: `panel-${t.id}`, 'aria-labelledby': `tab-${t.id}`, tabindex: 0 });
+    panelBox.append(panels[t.id]);
   }
   const progress = h(doc, 'div', { id: 'progress', className: 'progress' },
     h(doc, 'label', { for: 'progress-bar', id: 'progress-text' }, 'Working…'),
@@ -97,8 +101,12 @@ export function createPane(doc: Document, host: PaneHost): void {
     h(doc, 'button', { type: 'button', id: 'cancel' }, 'Cancel'));
   progress.hidden = true;
   const status = h(doc, 'div', { id: 'status', className: 'status', role: 'status', 'aria-live': 'polite' });
-  root.append(progress, status);
-  const askReplace: AskReplace = makeReplaceDialog(doc, root);
+  const footerActions = h(doc, 'div', { className: 'actions', id: 'primary-actions' });
+  const footer = h(doc, 'footer', { className: 'footer', id: 'footer' }, progress, status, footerActions);
+  root.append(footer);
+  const askReplace: AskReplace = makeReplaceDialog(doc, doc.body);
+  /** The footer's primary button of each tab. */
+  const primaryOf: Record<string, HTMLButtonElement> = {};
 
   function selectTab(id: string): void {
     for (const t of TABS) {
@@ -107,6 +115,7 @@ export function createPane(doc: Document, host: PaneHost): void {
       b.setAttribute('aria-selected', String(on));
       b.tabIndex = on ? 0 : -1;
       panels[t.id].hidden = !on;
+      if (primaryOf[t.id]) primaryOf[t.id].hidden = !on;
     }
     if (id === 'sunpath') void redrawSunPath();
   }
@@ -117,7 +126,9 @@ export function createPane(doc: Document, host: PaneHost): void {
   renderForm(doc, form, state.form);
   const formGeneral = h(doc, 'div', { className: 'msg general', id: 'form-msg', role: 'alert' });
   const runYearButton = h(doc, 'button', { type: 'button', id: 'run-year', className: 'primary' }, 'Write hourly year to a new sheet');
-  formPanel.append(form, formGeneral, h(doc, 'div', { className: 'actions' }, runYearButton));
+  formPanel.append(form, formGeneral);
+  primaryOf.window = runYearButton;
+  footerActions.append(runYearButton);
   applyVisibility(doc, state.form);
 
   let checkTimer: ReturnType<typeof setTimeout> | undefined;
@@ -181,7 +192,7 @@ export function createPane(doc: Document, host: PaneHost): void {
     } catch (err) {
       if (err instanceof SunpaneError) {
         showProblems(doc, { byField: fieldMessage(err), general: [] }, formGeneral);
-        say(err.message, 'error');
+        say(userWords(err), 'error');
         return undefined;
       }
       throw err;
@@ -219,9 +230,15 @@ export function createPane(doc: Document, host: PaneHost): void {
     for (const [id, f] of FIELD_BY_ID) if ((f.paths ?? []).some((p) => err.argument.startsWith(p))) return { [id]: err.message };
     return {};
   }
+  /** A core message named as the user knows the thing refused (a box's label, the table name). */
+  function userWords(err: SunpaneError): string {
+    if (err.argument === 'table') return inUserWords(err.message, 'Excel table name');
+    const field = fieldForArgument(err.argument);
+    return field ? inUserWords(err.message, field.label) : err.message;
+  }
   function reportFailure(err: unknown): void {
     if (err instanceof RunCancelled) say(err.message, 'info');
-    else if (err instanceof SunpaneError) say(err.message, 'error');
+    else if (err instanceof SunpaneError) say(userWords(err), 'error');
     else say(`Excel refused the request: ${(err as Error)?.message ?? String(err)}`, 'error');
   }
 
@@ -262,9 +279,10 @@ export function createPane(doc: Document, host: PaneHost): void {
     h(doc, 'p', { className: 'help', id: 'schedule-help' }, SCHEDULE_HELP),
     h(doc, 'p', { className: 'help' }, 'Place, glass model, sky, weather and year come from the Window tab unless the row gives them.'),
     h(doc, 'div', { className: 'field' }, h(doc, 'label', { for: 'schedule-table' }, 'Excel table name'), tableInput),
-    h(doc, 'div', { className: 'actions' }, schedButton),
     schedProblems,
   );
+  primaryOf.schedule = schedButton;
+  footerActions.append(schedButton);
   schedButton.addEventListener('click', () => void runScheduleAction());
   async function runScheduleAction(): Promise<void> {
     schedProblems.textContent = '';
@@ -322,8 +340,10 @@ export function createPane(doc: Document, host: PaneHost): void {
     h(doc, 'p', { className: 'help' }, `The window on the Window tab with up to ${MAX_OPTIONS} sets of outside shading, each against the same window with none (a skyline stays: it is the surroundings). Depths in m; 0 or blank = no such device; the reach is past each jamb.`),
     optTable,
     optMsg,
-    h(doc, 'div', { className: 'actions' }, addOption, compareButton),
+    h(doc, 'div', { className: 'actions' }, addOption),
   );
+  primaryOf.options = compareButton;
+  footerActions.append(compareButton);
   function renderOptions(): void {
     optTable.textContent = '';
     state.options.forEach((o, i) => {
@@ -337,16 +357,14 @@ export function createPane(doc: Document, host: PaneHost): void {
           store.saveSoon();
         });
         card.append(h(doc, 'div', { className: c.key === 'label' ? 'field wide' : 'field' }, h(doc, 'label', { for: id, title: c.title }, c.short), input));
-        if (c.key === 'label') {
-          const remove = h(doc, 'button', { type: 'button', className: 'link', id: `opt-${i}-remove`, 'aria-label': `Remove option ${i + 1}` }, 'Remove');
-          remove.addEventListener('click', () => {
-            state.options.splice(i, 1);
-            store.saveSoon();
-            renderOptions();
-          });
-          card.append(h(doc, 'div', { className: 'field end' }, remove));
-        }
       }
+      const remove = h(doc, 'button', { type: 'button', className: 'link', id: `opt-${i}-remove`, 'aria-label': `Remove option ${i + 1}` }, 'Remove');
+      remove.addEventListener('click', () => {
+        state.options.splice(i, 1);
+        store.saveSoon();
+        renderOptions();
+      });
+      card.append(h(doc, 'div', { className: 'field end' }, remove));
       optTable.append(card);
     });
     addOption.disabled = state.options.length >= MAX_OPTIONS;
@@ -369,7 +387,7 @@ export function createPane(doc: Document, host: PaneHost): void {
       specs = optionSpecs(ready.spec, state.options, validateSpec);
     } catch (err) {
       if (err instanceof SunpaneError) {
-        optMsg.textContent = err.message;
+        optMsg.textContent = err instanceof OptionProblem ? err.inUserWords : userWords(err);
         say('An option has a value the calculation cannot use; nothing was written.', 'error');
         return;
       }
@@ -404,10 +422,13 @@ export function createPane(doc: Document, host: PaneHost): void {
   }
 
   // ---- sun path ------------------------------------------------------------------------------
-  const redrawSunPath = drawSunPath(doc, panels.sunpath, () => {
+  const sunPath = drawSunPath(doc, panels.sunpath, () => {
     state.form = readForm(doc);
     return state.form;
   }, validateSpec, host.run);
+  const redrawSunPath = sunPath.redraw;
+  primaryOf.sunpath = sunPath.drawButton;
+  footerActions.append(sunPath.drawButton);
 
   selectTab('window');
   checkForm();

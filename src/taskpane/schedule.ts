@@ -13,6 +13,7 @@ import type { WindowSpec } from '../core/gain';
 import { EXAMPLE_SITES } from '../demo/sites';
 import { SCHEDULE_COLUMNS, SITE_KEY, SKYLINE_KEY, type ScheduleColumn, columnForHeader, headerKey, matchHeaders, requiredColumns } from '../schedule/columns';
 import { FIELDS, type FieldDef, type FormValues, applyExampleSite, fieldForArgument } from './fields';
+import { withoutPath } from './messages';
 import { type SheetData, type SpecValidator, buildWindowSpec, readListText } from './spec';
 
 export { headerKey };
@@ -143,7 +144,7 @@ function readRow(line: readonly unknown[], present: readonly { column: ScheduleC
     const field = fieldForArgument(err.argument);
     const column = field ? fieldToColumn.get(field.id) : undefined;
     const where = column ? `column "${column}"` : field ? `form box "${field.label}"` : 'form';
-    return { label, column, where, message: err.message };
+    return { label, column, where, message: withoutPath(err.message) };
   }
 }
 

@@ -3,7 +3,10 @@
  * on the rim, north up, bearings clockwise), with the sun's tracks for chosen days, whole-hour
  * marks, the skyline, and the window's shading mask laid under them in bands: sun fully shaded,
  * partly shaded, not shaded, and behind the wall. Pure text out (an SVG string), so it can be
- * drawn in the pane and checked in node alike.
+ * drawn in the pane and checked in node alike. Its lettering is at least 12 units high in a
+ * 320-unit-wide picture, so it stays 11 px or more wherever the pane shows the picture 300 px wide
+ * or wider; the key to its colours is HTML beside it ({@link sunPathLegend}). The sky disc, grid and
+ * rim carry classes the pane's stylesheet colours for the light or dark theme.
  */
 import type { MaskGrid, SunTrack } from './engine';
 
@@ -21,6 +24,8 @@ export const SUN_PATH_COLOURS = {
 };
 
 const SIZE = 320;
+/** Height of the picture's lettering in its own units (the picture is 320 units wide). */
+export const TEXT_SIZE = 12;
 const CX = 160;
 const CY = 160;
 const R = 136;
@@ -44,13 +49,9 @@ function sector(az0: number, az1: number, alt0: number, alt1: number): string {
   return `M${f(p1.x)} ${f(p1.y)}A${f(r0)} ${f(r0)} 0 0 1 ${f(p2.x)} ${f(p2.y)}L${f(p3.x)} ${f(p3.y)}A${f(r1)} ${f(r1)} 0 0 0 ${f(p4.x)} ${f(p4.y)}Z`;
 }
 
-const MONTH_NAMES = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
-
 /** What to draw. */
 export interface SunPathDrawing {
   tracks: readonly SunTrack[];
-  /** Labels of the tracks, e.g. "21 Jun"; default from month and day. */
-  trackLabels?: readonly string[];
   mask?: MaskGrid;
   /** Direction the glass faces [°]. */
   surfaceAzimuth: number;
@@ -68,11 +69,9 @@ function escapeXml(text: string): string {
 export function sunPathSvg(d: SunPathDrawing): string {
   const c = SUN_PATH_COLOURS;
   const parts: string[] = [];
-  const legendTop = SIZE + 8;
-  const height = legendTop + 84;
-  parts.push(`<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 ${SIZE} ${height}" width="100%" role="img" aria-labelledby="sp-title sp-desc" class="sun-path">`);
+  parts.push(`<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 ${SIZE} ${SIZE}" width="100%" role="img" aria-labelledby="sp-title sp-desc" class="sun-path">`);
   parts.push(`<title id="sp-title">Sun path and shading mask</title><desc id="sp-desc">${escapeXml(d.caption)}</desc>`);
-  parts.push(`<circle cx="${CX}" cy="${CY}" r="${R}" fill="${c.open}"/>`);
+  parts.push(`<circle class="sky" cx="${CX}" cy="${CY}" r="${R}" fill="${c.open}"/>`);
 
   // Mask bands: partly shaded cells in three steps of shaded share (a third, two thirds).
   if (d.mask) {
@@ -103,20 +102,20 @@ export function sunPathSvg(d: SunPathDrawing): string {
   // Altitude rings and bearing spokes.
   for (const alt of [15, 30, 45, 60, 75]) {
     const r = (R * (90 - alt)) / 90;
-    parts.push(`<circle cx="${CX}" cy="${CY}" r="${f(r)}" fill="none" stroke="${c.grid}" stroke-width="0.5" stroke-dasharray="${alt % 30 === 0 ? '' : '2 3'}"/>`);
-    if (alt % 30 === 0) parts.push(`<text x="${CX + 2}" y="${f(CY - r - 2)}" font-size="8" fill="${c.grid}">${alt}°</text>`);
+    parts.push(`<circle class="grid" cx="${CX}" cy="${CY}" r="${f(r)}" fill="none" stroke="${c.grid}" stroke-width="0.5" stroke-dasharray="${alt % 30 === 0 ? '' : '2 3'}"/>`);
+    if (alt % 30 === 0) parts.push(`<text x="${CX + 2}" y="${f(CY - r - 2)}" font-size="${TEXT_SIZE}" fill="${c.rim}">${alt}°</text>`);
   }
   for (let az = 0; az < 360; az += 30) {
     const p = project(0, az);
-    parts.push(`<line x1="${CX}" y1="${CY}" x2="${f(p.x)}" y2="${f(p.y)}" stroke="${c.grid}" stroke-width="0.4"/>`);
+    parts.push(`<line class="grid" x1="${CX}" y1="${CY}" x2="${f(p.x)}" y2="${f(p.y)}" stroke="${c.grid}" stroke-width="0.4"/>`);
   }
-  parts.push(`<circle cx="${CX}" cy="${CY}" r="${R}" fill="none" stroke="${c.rim}" stroke-width="1.2"/>`);
+  parts.push(`<circle class="rim" cx="${CX}" cy="${CY}" r="${R}" fill="none" stroke="${c.rim}" stroke-width="1.2"/>`);
   const compass: [string, number][] = [['N', 0], ['E', 90], ['S', 180], ['W', 270]];
   for (const [label, az] of compass) {
     const a = (az * Math.PI) / 180;
     const x = CX + (R + 11) * Math.sin(a);
     const y = CY - (R + 11) * Math.cos(a) + 4;
-    parts.push(`<text x="${f(x)}" y="${f(y)}" font-size="11" font-weight="600" text-anchor="middle" fill="${c.rim}">${label}</text>`);
+    parts.push(`<text x="${f(x)}" y="${f(y)}" font-size="${TEXT_SIZE + 1}" font-weight="600" text-anchor="middle" fill="${c.rim}">${label}</text>`);
   }
 
   // The window's facing direction.
@@ -144,35 +143,37 @@ export function sunPathSvg(d: SunPathDrawing): string {
       if (p.altitude <= 0 || Math.abs(p.hour - Math.round(p.hour)) > 1e-9 || p.hour >= 24) continue;
       const q = project(p.altitude, p.azimuth);
       parts.push(`<circle class="hour" cx="${f(q.x)}" cy="${f(q.y)}" r="2.2" fill="${colour}"/>`);
-      if (i === 0) parts.push(`<text x="${f(q.x + 3)}" y="${f(q.y - 3)}" font-size="7" fill="${c.rim}">${p.hour}</text>`);
+      // Every second hour is lettered on the first track, so the labels do not crowd.
+      if (i === 0 && p.hour % 2 === 0) parts.push(`<text x="${f(q.x + 3)}" y="${f(q.y - 3)}" font-size="${TEXT_SIZE}" fill="${c.rim}">${p.hour}</text>`);
     }
   });
 
-  // Legend: track lines, then mask swatches, flowed into rows across the width.
-  const labels = d.trackLabels ?? d.tracks.map((t) => `${t.day} ${MONTH_NAMES[t.month - 1]}`);
-  const items: { label: string; draw: (x: number, y: number) => string }[] = [
-    ...labels.map((label, i) => ({ label, draw: (x: number, y: number) => `<line x1="${x}" y1="${y - 3}" x2="${x + 12}" y2="${y - 3}" stroke="${c.tracks[i % c.tracks.length]}" stroke-width="2"/>` })),
-    ...([
-      ['not shaded', c.open],
-      ['< ⅓ shaded', c.part[0]],
-      ['⅓–⅔', c.part[1]],
-      ['> ⅔', c.part[2]],
-      ['fully shaded', c.full],
-      ['behind the wall', c.behind],
-    ] as const).map(([label, colour]) => ({ label, draw: (x: number, y: number) => `<rect x="${x + 1}" y="${y - 8}" width="10" height="10" fill="${colour}" stroke="${c.rim}" stroke-width="0.5"/>` })),
-  ];
-  let lx = 8;
-  let ly = legendTop + 10;
-  items.forEach((item, i) => {
-    const w = 18 + item.label.length * 4.4;
-    if ((lx + w > SIZE - 4 && lx > 8) || i === labels.length) {
-      lx = 8;
-      ly += 15;
-    }
-    parts.push(item.draw(lx, ly), `<text x="${lx + 15}" y="${ly}" font-size="8.5" fill="${c.rim}">${escapeXml(item.label)}</text>`);
-    lx += w + 8;
-  });
-  d.caption.split('; ').forEach((line, i) => parts.push(`<text x="8" y="${ly + 17 + i * 11}" font-size="8.5" fill="${c.rim}">${escapeXml(line)}</text>`));
   parts.push('</svg>');
   return parts.join('');
+}
+
+/** One entry of the key to the picture. */
+export interface LegendEntry {
+  label: string;
+  colour: string;
+  /** A band whose colour follows the pane's theme (the stylesheet's `.swatch.<band>`), if any. */
+  band?: 'open' | 'behind';
+  /** `line`: a sun track; `swatch`: a band of the shading mask. */
+  kind: 'line' | 'swatch';
+}
+
+/** The key to the picture's colours: the tracks, then the bands of the shading mask. */
+export function sunPathLegend(trackLabels: readonly string[]): LegendEntry[] {
+  const c = SUN_PATH_COLOURS;
+  return [
+    ...trackLabels.map((label, i) => ({ label, colour: c.tracks[i % c.tracks.length], kind: 'line' as const })),
+    ...([
+      ['not shaded', c.open, 'open'],
+      ['less than ⅓ shaded', c.part[0], undefined],
+      ['⅓ to ⅔ shaded', c.part[1], undefined],
+      ['more than ⅔ shaded', c.part[2], undefined],
+      ['fully shaded', c.full, undefined],
+      ['sun behind the wall', c.behind, 'behind'],
+    ] as const).map(([label, colour, band]) => ({ label, colour, band, kind: 'swatch' as const })),
+  ];
 }

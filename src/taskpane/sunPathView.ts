@@ -9,7 +9,8 @@ import type { FormValues } from './fields';
 import type { RunBatch } from './resultSheets';
 import { readSheetData } from './sheetData';
 import { type SpecValidator, buildWindowSpec, findProblems, isClean, readNumberText } from './spec';
-import { sunPathSvg } from './sunPathSvg';
+import { inUserWords } from './messages';
+import { sunPathLegend, sunPathSvg } from './sunPathSvg';
 
 /** Days whose tracks are drawn: the 21st of June, March (≈ September) and December. */
 export const TRACK_DAYS: readonly (readonly [number, number])[] = [
@@ -18,25 +19,37 @@ export const TRACK_DAYS: readonly (readonly [number, number])[] = [
   [12, 21],
 ];
 const TRACK_LABELS = ['21 Jun', '21 Mar ≈ 23 Sep', '21 Dec'];
+const POINT_X = 'From left jamb (m, blank = middle)';
+const POINT_Y = 'Above sill (m, blank = middle)';
 
-/** Builds the tab into `panel`; returns the function that (re)draws it. */
-export function drawSunPath(doc: Document, panel: HTMLElement, getForm: () => FormValues, validate: SpecValidator, run?: RunBatch): () => Promise<void> {
+/** Builds the tab into `panel`; returns the function that (re)draws it and its draw button (for the pane's footer). */
+export function drawSunPath(doc: Document, panel: HTMLElement, getForm: () => FormValues, validate: SpecValidator, run?: RunBatch): { redraw: () => Promise<void>; drawButton: HTMLButtonElement } {
   const whole = h(doc, 'input', { type: 'radio', name: 'mask-of', id: 'mask-whole', value: 'whole', checked: true });
   const point = h(doc, 'input', { type: 'radio', name: 'mask-of', id: 'mask-point', value: 'point' });
   const px = h(doc, 'input', { type: 'text', id: 'mask-x', autocomplete: 'off', inputmode: 'decimal', 'aria-describedby': 'mask-x-msg' });
   const py = h(doc, 'input', { type: 'text', id: 'mask-y', autocomplete: 'off', inputmode: 'decimal', 'aria-describedby': 'mask-y-msg' });
-  const drawButton = h(doc, 'button', { type: 'button', id: 'draw-sun-path' }, 'Redraw');
+  const drawButton = h(doc, 'button', { type: 'button', id: 'draw-sun-path', className: 'primary' }, 'Draw the sun path');
   const figure = h(doc, 'div', { id: 'sun-path', className: 'sun-path-box' });
+  const caption = h(doc, 'p', { id: 'sun-path-caption', className: 'sun-path-caption' });
+  const legend = h(doc, 'ul', { id: 'sun-path-legend', className: 'sun-path-legend', 'aria-label': 'Key to the sun path' });
+  for (const item of sunPathLegend(TRACK_LABELS)) {
+    const mark = h(doc, 'span', { className: item.kind === 'line' ? 'line' : `swatch${item.band ? ` ${item.band}` : ''}`, 'aria-hidden': 'true' });
+    // Colours through the CSS object model: the page's Content-Security-Policy allows no style attributes.
+    if (item.kind === 'line') mark.style.borderTopColor = item.colour;
+    else if (!item.band) mark.style.backgroundColor = item.colour;
+    legend.append(h(doc, 'li', {}, mark, item.label));
+  }
   const msg = h(doc, 'div', { id: 'sun-path-msg', className: 'msg general', role: 'alert' });
   panel.append(
     h(doc, 'fieldset', { className: 'inline' },
       h(doc, 'legend', {}, 'Shading mask of'),
       h(doc, 'div', { className: 'radio' }, whole, h(doc, 'label', { for: 'mask-whole' }, 'the whole glass')),
       h(doc, 'div', { className: 'radio' }, point, h(doc, 'label', { for: 'mask-point' }, 'one point of the glass')),
-      h(doc, 'div', { className: 'field small' }, h(doc, 'label', { for: 'mask-x' }, 'from left jamb (m, blank = middle)'), px, h(doc, 'div', { className: 'msg', id: 'mask-x-msg' })),
-      h(doc, 'div', { className: 'field small' }, h(doc, 'label', { for: 'mask-y' }, 'above sill (m, blank = middle)'), py, h(doc, 'div', { className: 'msg', id: 'mask-y-msg' })),
-      drawButton),
+      h(doc, 'div', { className: 'field small' }, h(doc, 'label', { for: 'mask-x' }, POINT_X), px, h(doc, 'div', { className: 'msg', id: 'mask-x-msg' })),
+      h(doc, 'div', { className: 'field small' }, h(doc, 'label', { for: 'mask-y' }, POINT_Y), py, h(doc, 'div', { className: 'msg', id: 'mask-y-msg' }))),
     figure,
+    caption,
+    legend,
     msg,
     h(doc, 'p', { className: 'help' }, 'Centre = sun overhead, rim = horizon, north up. Dots mark whole hours of local standard time. The mask shows, for the sun in each part of the sky, how much of the glass (or the chosen point) is shaded by the overhang, fins and set-back; the skyline is drawn in green.'),
   );
@@ -72,9 +85,9 @@ export function drawSunPath(doc: Document, panel: HTMLElement, getForm: () => Fo
       const mask = shadingMask(spec, at);
       const tracks = sunTracks(spec, TRACK_DAYS);
       const where = at ? `point ${at.x} m from the left jamb, ${at.y} m above the sill` : 'whole glass';
+      caption.textContent = `${spec.name}, facing ${spec.surfaceAzimuth}°, latitude ${spec.site.latitude}°, ${spec.year}; mask of the ${where}.`;
       figure.innerHTML = sunPathSvg({
         tracks,
-        trackLabels: TRACK_LABELS,
         mask,
         surfaceAzimuth: spec.surfaceAzimuth,
         skyline: spec.shading.skyline,
@@ -83,12 +96,12 @@ export function drawSunPath(doc: Document, panel: HTMLElement, getForm: () => Fo
     } catch (err) {
       if (!(err instanceof SunpaneError)) throw err;
       const box = err.argument === 'x' ? 'mask-x-msg' : err.argument === 'y' ? 'mask-y-msg' : undefined;
-      if (box) byId(doc, box).textContent = err.message;
+      if (box) byId(doc, box).textContent = inUserWords(err.message, err.argument === 'x' ? POINT_X : POINT_Y);
       else msg.textContent = err.message;
     }
   }
   drawButton.addEventListener('click', () => void redraw());
   whole.addEventListener('change', () => void redraw());
   point.addEventListener('change', () => void redraw());
-  return redraw;
+  return { redraw, drawButton };
 }

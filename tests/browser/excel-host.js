@@ -14,7 +14,8 @@
  * Use in the browser: serve this file as office.js; it defines window.Office, window.Excel and
  * window.__excelHost (state and helpers for the test). Use in node: require it and call
  * createExcelHost() for { Excel, Office, host } without touching globals.
- * Options may be preset in the page as window.__excelHostOptions = { settings: {...}, syncDelayMs }.
+ * Options may be preset in the page as window.__excelHostOptions = { settings: {...}, syncDelayMs, theme }
+ * (theme: the Office theme colours, e.g. { bodyBackgroundColor: '#262626', bodyForegroundColor: '#FFFFFF' }).
  */
 (function (root) {
   'use strict';
@@ -555,6 +556,8 @@
       AsyncResultStatus: { Succeeded: 'succeeded', Failed: 'failed' },
       context: {
         document: { settings: settingsApi },
+        // The host's theme colours (Office.context.officeTheme); a test may give dark ones.
+        officeTheme: options.theme || { bodyBackgroundColor: '#FFFFFF', bodyForegroundColor: '#000000', controlBackgroundColor: '#FFFFFF', controlForegroundColor: '#000000' },
         requirements: {
           isSetSupported: function (name, version) {
             if (name !== 'ExcelApi') return false;

@@ -22,6 +22,7 @@ import { EXAMPLE_SITES } from '../../src/demo/sites';
 import { CAUTION } from '../../src/outputs/caution';
 import { HOURLY_HEADERS } from '../../src/outputs/hourlyColumns';
 import { monthHourMeanFormula, monthlyGainFormula, tableColumnRef, yearFigureFormulas } from '../../src/outputs/hourlyFormulas';
+import { inUserWords } from '../../src/taskpane/messages';
 import { launchBrowser, openAddinPage } from './chromium';
 
 const HOST_JS = fs.readFileSync(path.join(__dirname, 'excel-host.js'), 'utf8');
@@ -256,9 +257,20 @@ describe('the task pane in Chromium with a fake Excel host', () => {
 
     await page.click('#run-year');
     await page.waitForSelector('#confirm-backdrop:not([hidden])');
-    await page.keyboard.press('Enter'); // focus starts on "Replace it"
+    // The safe choice has the focus: Enter keeps both.
+    expect(await page.evaluate(() => document.activeElement?.id)).toBe('confirm-keep');
+    await page.keyboard.press('Enter');
+    await waitForStatus(page, /Wrote "Window A B hourly \(3\)"/);
+    expect((await host.sheetNames(page)).filter((n) => n.startsWith('Window A B'))).toHaveLength(3);
+
+    // Replacing takes a deliberate move: Tab to "Replace it" (focus stays inside the dialog), then Enter.
+    await page.click('#run-year');
+    await page.waitForSelector('#confirm-backdrop:not([hidden])');
+    await page.keyboard.press('Tab');
+    expect(await page.evaluate(() => document.activeElement?.id)).toBe('confirm-replace');
+    await page.keyboard.press('Enter');
     await waitForStatus(page, /Wrote "Window A B hourly"/);
-    expect((await host.sheetNames(page)).filter((n) => n.startsWith('Window A B'))).toHaveLength(2);
+    expect((await host.sheetNames(page)).filter((n) => n.startsWith('Window A B'))).toHaveLength(3);
     await page.close();
   });
 
@@ -318,14 +330,14 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     await waitForStatus(page, /problem/);
     const problems = await page.$$eval('#schedule-problems li', (lis) => lis.map((li) => li.textContent));
     expect(problems).toEqual([
-      'Row 1 (Bad A), column "Width": width = blank is not allowed: must be a number above 0 and up to 1000 m',
-      'Row 2 (Bad B), column "SHGC": glazing.shgc = 1.4 is not allowed: must be a number from 0 to 1',
+      'Row 1 (Bad A), column "Width": blank is not allowed: must be a number above 0 and up to 1000 m',
+      'Row 2 (Bad B), column "SHGC": 1.4 is not allowed: must be a number from 0 to 1',
     ]);
     expect(await host.sheetNames(page)).toEqual(sheetsBefore);
 
     await page.fill('#schedule-table', 'NoSuchTable');
     await page.click('#run-schedule');
-    expect(await waitForStatus(page, /table/)).toContain('table = "NoSuchTable" is not allowed');
+    expect(await waitForStatus(page, /table/)).toContain('Excel table name: "NoSuchTable" is not allowed');
     await page.close();
   });
 
@@ -379,7 +391,7 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     const sheets = await host.sheetNames(page);
     await page.click('#run-compare');
     await waitForStatus(page, /option/);
-    expect(await page.textContent('#options-msg')).toBe('shading.overhang.projection = -1 is not allowed: must be a number from 0 to 1000 m (option 2 "Deep overhang", column "Overhang depth m")');
+    expect(await page.textContent('#options-msg')).toBe('Option 2 "Deep overhang", Overhang depth (m): -1 is not allowed: must be a number from 0 to 1000 m');
     expect(await host.sheetNames(page)).toEqual(sheets);
     await page.close();
   });
@@ -399,8 +411,10 @@ describe('the task pane in Chromium with a fake Excel host', () => {
       }
       throw new Error('expected the core to refuse');
     };
-    expect(await page.textContent('#shgc-msg')).toBe(expected((s) => (s.glazing.shgc = 1.4)));
-    expect(await page.textContent('#latitude-msg')).toBe(expected((s) => (s.site.latitude = 'north' as never)));
+    // The core's message, naming the box by its label (the user's words), not by the field path.
+    expect(await page.textContent('#shgc-msg')).toBe(inUserWords(expected((s) => (s.glazing.shgc = 1.4)), 'SHGC at normal incidence'));
+    expect(await page.textContent('#shgc-msg')).toBe('SHGC at normal incidence: 1.4 is not allowed: must be a number from 0 to 1');
+    expect(await page.textContent('#latitude-msg')).toBe(inUserWords(expected((s) => (s.site.latitude = 'north' as never)), 'Latitude'));
     expect(await page.getAttribute('#shgc', 'aria-invalid')).toBe('true');
     await page.click('#run-year');
     expect(await waitForStatus(page, /Fix/)).toBe('Fix the marked boxes on the Window tab first.');
@@ -412,7 +426,7 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     await page.selectOption('#weatherSource', 'measured');
     await setField(page, 'dniAddress', 'B2 to B8761');
     await page.waitForFunction(() => (document.getElementById('dniAddress-msg')?.textContent ?? '') !== '');
-    expect(await page.textContent('#dniAddress-msg')).toContain('weather.dni = "B2 to B8761" is not allowed: must be a range address');
+    expect(await page.textContent('#dniAddress-msg')).toContain('Direct normal column: "B2 to B8761" is not allowed: must be a range address');
     await page.evaluate(() => (window as never as { __excelHost: { addUserSheet(n: string, v: unknown[][]): void } }).__excelHost.addUserSheet('Weather', Array.from({ length: 100 }, () => [500, 100])));
     await setField(page, 'dniAddress', 'Weather!A1:A100');
     await setField(page, 'dhiAddress', 'Weather!B1:B100');
@@ -494,7 +508,7 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     await page.fill('#mask-x', '5');
     await page.click('#draw-sun-path');
     await page.waitForFunction(() => (document.getElementById('mask-x-msg')?.textContent ?? '') !== '');
-    expect(await page.textContent('#mask-x-msg')).toBe('x = 5 is not allowed: must be a number from 0 to 1.8');
+    expect(await page.textContent('#mask-x-msg')).toBe('From left jamb (m, blank = middle): 5 is not allowed: must be a number from 0 to 1.8');
 
     await page.click('#tab-window');
     await page.selectOption('#examplePlace', 'kestrelHeads');

@@ -20,6 +20,14 @@ let dir: string;
 let stdout: string;
 let wb: ExcelJS.Workbook;
 
+/** The address on the formula sheet of a reference: `$B$9`, or a defined name of one cell there. */
+function cellOf(ref: string): string {
+  if (/^\$?[A-Z]+\$?\d+$/.test(ref)) return ref.replace(/\$/g, '');
+  const ranges = wb.definedNames.getRanges(ref).ranges;
+  if (ranges.length !== 1) throw new Error(`no defined name ${ref}`);
+  return ranges[0].split('!')[1].replace(/\$/g, '');
+}
+
 /** The number a cell holds (dates as 1900-system serials, formulas by their cached result). */
 function numberOf(v: ExcelJS.CellValue): number {
   if (typeof v === 'number') return v;
@@ -153,6 +161,20 @@ describe('sunpane demo', () => {
     expect(count).toBeGreaterThan(40);
   });
 
+  it('names every input cell of the formula sheet after the parameter it feeds, and the formulas use the names', () => {
+    const ws = wb.getWorksheet('Formulas')!;
+    const names = ['dateTime', 'latitude', 'longitude', 'utcOffset', 'surfaceAzimuth', 'width', 'height', 'shgc', 'tauB', 'tauD'];
+    for (const name of names) {
+      const ranges = wb.definedNames.getRanges(name).ranges;
+      expect({ name, ranges: ranges.length }).toEqual({ name, ranges: 1 });
+      expect(ranges[0]).toMatch(/^'?Formulas'?!\$B\$\d+$/);
+      // The named cell holds a value and its row is labelled.
+      expect(ws.getCell(cellOf(name)).value).not.toBeNull();
+    }
+    const gain = (ws.getColumn(3).values as ExcelJS.CellValue[]).find((v) => typeof v === 'object' && v !== null && 'formula' in v && (v.formula ?? '').includes('WINDOWGAIN')) as ExcelJS.CellFormulaValue;
+    expect(gain.formula).toMatch(/^_xldudf_SUNPANE_WINDOWGAIN\(dateTime,latitude,longitude,utcOffset,surfaceAzimuth,width,height,shgc,/);
+  });
+
   it('caches every SUNPANE formula as the registered function gives for the cells it refers to', () => {
     const registeredNames = new Set(functionsMetadata(FUNCTIONS).functions.map((f) => f.name));
     const ws = wb.getWorksheet('Formulas')!;
@@ -169,7 +191,7 @@ describe('sunpane demo', () => {
         expect(registeredNames.has(m[1])).toBe(true);
         const fn = findFunction(m[1]);
         expect(fn).toBeDefined();
-        const args = m[2].split(',').map((ref) => (ref === '' ? null : numberOf(ws.getCell(ref.replace(/\$/g, '')).value)));
+        const args = m[2].split(',').map((ref) => (ref === '' ? null : numberOf(ws.getCell(cellOf(ref)).value)));
         const table = applyFunction(fn!, args);
         expect(typeof table[0][0]).toBe('number');
         // 1e-8: a cached time of day comes back through a millisecond Date (1 ms ≈ 1.2e-8 day).

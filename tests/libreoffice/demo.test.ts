@@ -70,7 +70,7 @@ beforeAll(async () => {
   checks = built.checks;
   sheetNames = built.workbook.worksheets.map((w) => w.name);
   demoFile = path.join(work, 'sunpane-demo.xlsx');
-  await saveWorkbook(built.workbook, demoFile);
+  await saveWorkbook(built.workbook, demoFile, {}, built.charts);
   csvSheets = sheetsOf(convert(demoFile, CSV_ALL_SHEETS, path.join(work, 'csv')), 'sunpane-demo');
 });
 

@@ -1,7 +1,7 @@
 /** Shading options compared against the unshaded window. */
 import type { WindowSpec } from '../../src/core/gain/window';
 import { validateWindowSpec } from '../../src/core/gain/windowSpec';
-import { comparisonRows, optionShading, optionSpecs, starterOptions } from '../../src/taskpane/compare';
+import { OptionProblem, comparisonRows, optionShading, optionSpecs, starterOptions } from '../../src/taskpane/compare';
 import { initialValues } from '../../src/taskpane/fields';
 import { buildWindowSpec } from '../../src/taskpane/spec';
 
@@ -24,7 +24,13 @@ describe('shading options', () => {
     expect(specs[0].spec.shading).toEqual({});
     const bad = [...starterOptions()];
     bad[1] = { ...bad[1], overhangGap: 'high' };
-    expect(() => optionSpecs(base, bad, validate)).toThrow('shading.overhang.gap = "high" is not allowed: must be a number from 0 to 1000 m (option 2 "Deep overhang", column "Overhang gap m")');
+    expect(() => optionSpecs(base, bad, validate)).toThrow('shading.overhang.gap = "high" is not allowed: must be a number from 0 to 1000 m (option 2 "Deep overhang", column "Overhang gap (m)")');
+    try {
+      optionSpecs(base, bad, validate);
+    } catch (err) {
+      expect((err as OptionProblem).inUserWords).toBe('Option 2 "Deep overhang", Overhang gap (m): "high" is not allowed: must be a number from 0 to 1000 m');
+    }
+    expect.assertions(5);
     expect(() => optionSpecs(base, new Array(7).fill(starterOptions()[0]), validate)).toThrow(/at most 6/);
   });
 

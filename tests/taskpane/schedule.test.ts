@@ -83,7 +83,7 @@ describe('the window schedule', () => {
     ]);
   });
 
-  test('every bad row is named with its column and the core message, and no row is returned for it', () => {
+  test('every bad row is named with its column and the core message (without the field path: the column names it), and no row is returned for it', () => {
     const { rows, problems } = readSchedule(
       [
         ['Window', 'Faces', 'Width', 'Height', 'Fin gap', 'Left fin depth'],
@@ -98,10 +98,10 @@ describe('the window schedule', () => {
     );
     expect(rows.map((r) => r.spec.name)).toEqual(['D']);
     expect(problems.map((p) => p.message)).toEqual([
-      'Row 1 (A), column "Faces": surfaceAzimuth = 400 is not allowed: must be a number from 0 to 360 °',
+      'Row 1 (A), column "Faces": 400 is not allowed: must be a number from 0 to 360 °',
       'Row 2, column "Window": blank is not allowed: every window needs a label.',
-      'Row 3 (C), column "Fin gap": shading.leftFin.gap = -0.2 is not allowed: must be a number from 0 to 1000 m',
-      'Row 5 (E), column "Width": width = blank is not allowed: must be a number above 0 and up to 1000 m',
+      'Row 3 (C), column "Fin gap": -0.2 is not allowed: must be a number from 0 to 1000 m',
+      'Row 5 (E), column "Width": blank is not allowed: must be a number above 0 and up to 1000 m',
     ]);
   });
 
