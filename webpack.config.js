@@ -26,9 +26,11 @@ const OFFICE_JS = 'https://appsforoffice.microsoft.com/lib/1/hosted/office.js';
  * glazing types, conduction, the load by part and the clock (156.3 KB then); 165 KB until the pane
  * took on the command line's weather reader and checks (src/io/weather.ts and its helpers: 159.4 ->
  * 177.3 KB); 180 KB until devices cut the diffuse light too (the view-factor integration 5.9 KB,
- * the diffuse wiring and the new step texts 5.3 KB: 177.3 -> 188.4 KB).
+ * the diffuse wiring and the new step texts 5.3 KB: 177.3 -> 188.4 KB); 190 KB until the pane took
+ * the Office look (Fluent token values for the light and dark themes, the footer layout, keyboard
+ * and dialog focus handling, the sun-path key, messages in the user's words: 188.4 -> 194.2 KB).
  */
-const BUDGET_BYTES = 190 * 1024;
+const BUDGET_BYTES = 198 * 1024;
 const DEV_PORT = 3000;
 
 /**
