@@ -5,6 +5,7 @@
  */
 import { escapeFormulaText } from '../io/textCells';
 import { cellAddress, rangeAddress } from './blocks';
+import { PALETTE, hexColour } from '../outputs/palette';
 import type { RunBatch } from './resultSheets';
 import { tableNamesIn, uniqueTableName } from './tableNames';
 import { HEAD_FILL } from './yearSheet';
@@ -62,6 +63,8 @@ export async function writeSmallTableSheet(run: RunBatch, target: { name: string
       const chart = sheet.charts.add('BarClustered', src, 'Columns');
       chart.title.text = t.chartTitle ?? t.header[t.chartColumn];
       chart.legend.position = 'Bottom';
+      // Bars in our palette's first series colour, as in the command line's workbooks.
+      chart.series.getItemAt(0).format.fill.setSolidColor(hexColour(PALETTE.series[0]));
       chart.setPosition(cellAddress(top + t.rows.length + 3, 0), cellAddress(top + t.rows.length + 20, 4));
     }
     sheet.freezePanes.freezeRows(top + 1);

@@ -222,6 +222,8 @@ export async function writeYearSheet(
     const chart = sheet.charts.add('ColumnClustered', chartData, 'Columns');
     chart.title.text = 'Annual profile: solar gain by month (kWh)';
     chart.legend.position = 'Bottom';
+    // Bars in our palette's first series colour, as in the command line's workbooks.
+    chart.series.getItemAt(0).format.fill.setSolidColor(hexColour(PALETTE.series[0]));
     const chartTop = keyRow + keys.length + 1;
     chart.setPosition(cellAddress(chartTop, SUMMARY_COLUMN), cellAddress(chartTop + 15, SUMMARY_COLUMN + 2));
 

@@ -309,6 +309,20 @@
             Object.defineProperty(proxy.axes[axis].title, 'text', { set: function (v) { record(ctx, 'chart', 'chart.axisTitle', [axis, v], function () { chart.axisTitles[axis] = v; }); } });
           });
           Object.defineProperty(proxy, 'name', { set: function (v) { record(ctx, 'chart', 'chart.name', [v], function () { chart.name = v; }); } });
+          chart.seriesColours = [];
+          proxy.series = {
+            getItemAt: function (i) {
+              return {
+                format: {
+                  fill: {
+                    setSolidColor: function (colour) {
+                      record(ctx, 'chart', 'series.fill.setSolidColor', [i, colour], function () { chart.seriesColours[i] = colour; });
+                    },
+                  },
+                },
+              };
+            },
+          };
           return proxy;
         },
       };

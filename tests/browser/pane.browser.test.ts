@@ -384,7 +384,7 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     // A deeper overhang never lets in more than a shorter one of the same gap.
     expect(all[2][1] as number).toBeLessThan(all[1][1] as number);
     const charts = await host.eval<{ type: string; title: string }[]>(page, 'host.charts("Window A options")');
-    expect(charts).toEqual([expect.objectContaining({ type: 'BarClustered', title: 'Solar gain by shading option (kWh/yr)' })]);
+    expect(charts).toEqual([expect.objectContaining({ type: 'BarClustered', title: 'Solar gain by shading option (kWh/yr)', seriesColours: ['#2E6DA4'] })]);
 
     // A bad option value is named with the option, and nothing is written.
     await page.fill('#opt-1-overhangDepth', '-1');

@@ -85,7 +85,7 @@ describe('the hourly year sheet', () => {
     expect(cfs).toEqual([expect.objectContaining({ type: 'ColorScale', address: `${columnLetters(HEAT_COLUMN + 1)}6:${columnLetters(HEAT_COLUMN + 24)}17` })]);
     expect(cfs[0].criteria.maximum.color).toBe('#A63A1E');
     const charts = host.charts('East 1 hourly');
-    expect(charts).toEqual([expect.objectContaining({ type: 'ColumnClustered', source: `${col(0)}5:${col(1)}17`, title: 'Annual profile: solar gain by month (kWh)' })]);
+    expect(charts).toEqual([expect.objectContaining({ type: 'ColumnClustered', source: `${col(0)}5:${col(1)}17`, title: 'Annual profile: solar gain by month (kWh)', seriesColours: ['#2E6DA4'] })]);
   });
 
   test('a second table from the same window gets its own valid name', async () => {
