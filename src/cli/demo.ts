@@ -52,6 +52,11 @@ export interface OptionResult {
   tag: string;
   option: string;
   result: WindowResult;
+  /**
+   * The same window under the earlier beam-only treatment of diffuse light (devices cut only the
+   * beam; `diffuseShading: "beamOnly"`), for the before/after columns: annual gain [kWh], peak [W].
+   */
+  beamOnly: { annualKWh: number; peakW: number };
 }
 
 /** Everything the demo computed: for the workbook, the text summary and the tests. */
@@ -84,7 +89,8 @@ export function computeDemo(onStep: () => void = () => undefined): DemoResults {
   for (const w of optionWindows(schedule)) {
     for (const o of SHADING_OPTIONS) {
       const spec = { ...w.spec, name: `${w.tag} ${o.option}`, shading: o.shading as Shading };
-      options.push({ tag: w.tag, option: o.option, result: windowResult(validateWindowSpec(spec)) });
+      const before = summarizeAnnual(annualSeries(validateWindowSpec({ ...spec, diffuseShading: 'beamOnly' })));
+      options.push({ tag: w.tag, option: o.option, result: windowResult(validateWindowSpec(spec)), beamOnly: { annualKWh: before.annualKWh, peakW: before.peakW } });
       onStep();
     }
   }
@@ -277,12 +283,20 @@ function addMonthlyMatrix(wb: ExcelJS.Workbook, results: DemoResults): { cell: s
 
 function addOptions(wb: ExcelJS.Workbook, results: DemoResults): { checks: { cell: string; expected: number }[]; chart: SheetChart } {
   const ws = wb.addWorksheet('Options');
-  const top = addSheetHeading(ws, `${DEMO_BUILDING.name}: outside shading options compared, clear-sky ${DEMO_YEAR}`, ['Saving = 1 − annual gain ÷ annual gain of the same window with no outside shading.']);
+  const top = addSheetHeading(ws, `${DEMO_BUILDING.name}: outside shading options compared, clear-sky ${DEMO_YEAR}`, [
+    'Saving = 1 − annual gain ÷ annual gain of the same window with no outside shading.',
+    'Beam-only: the earlier treatment, in which the devices cut only the beam; now they cut the sky and ground light too.',
+    'Beam and diffuse cuts: the share of the year’s beam, and of its sky and ground light, that the shading keeps off the glass.',
+  ]);
   const rows: TableCell[][] = results.options.map((o) => [
     o.tag,
     o.option,
     o.result.summary.annualKWh,
     o.result.summary.peakW,
+    o.beamOnly.annualKWh,
+    o.beamOnly.peakW,
+    o.result.summary.beamCut,
+    o.result.summary.diffuseCut,
     o.result.summary.sunlitHours,
     o.result.summary.meanSunlitFraction,
     null,
@@ -294,11 +308,15 @@ function addOptions(wb: ExcelJS.Workbook, results: DemoResults): { checks: { cel
     [
       { header: 'Window', width: 10 },
       { header: 'Shading option', width: 20 },
-      { header: 'Annual gain (kWh)', numFmt: NUMBER_FORMATS.kwh, width: 14 },
-      { header: 'Peak gain (W)', numFmt: NUMBER_FORMATS.watts, width: 12 },
-      { header: 'Hours with beam on the glass (h)', numFmt: NUMBER_FORMATS.integer, width: 14 },
-      { header: 'Mean sunlit fraction (0-1)', numFmt: NUMBER_FORMATS.fraction, width: 14 },
-      { header: 'Saving vs no shading (%)', numFmt: NUMBER_FORMATS.percent, width: 14 },
+      { header: 'Annual gain (kWh)', numFmt: NUMBER_FORMATS.kwh, width: 18 },
+      { header: 'Peak gain (W)', numFmt: NUMBER_FORMATS.watts, width: 14 },
+      { header: 'Annual gain, beam-only (kWh)', numFmt: NUMBER_FORMATS.kwh, width: 28 },
+      { header: 'Peak gain, beam-only (W)', numFmt: NUMBER_FORMATS.watts, width: 24 },
+      { header: 'Beam cut (%)', numFmt: NUMBER_FORMATS.percent, width: 13 },
+      { header: 'Diffuse cut (%)', numFmt: NUMBER_FORMATS.percent, width: 15 },
+      { header: 'Hours with beam on the glass (h)', numFmt: NUMBER_FORMATS.integer, width: 30 },
+      { header: 'Mean sunlit fraction (0-1)', numFmt: NUMBER_FORMATS.fraction, width: 25 },
+      { header: 'Saving vs no shading (%)', numFmt: NUMBER_FORMATS.percent, width: 24 },
     ],
     rows,
   );

@@ -3,7 +3,8 @@
  * the year, against the same window with no overhang, fins or set-back (the skyline, being the
  * surroundings, stays). Figures per option: annual gain, peak gain, the cut in annual gain against
  * the unshaded window, and the mean shaded share of the glass over the hours the sun is in front
- * of the wall (1 − mean sunlit fraction, from the core's annual summary).
+ * of the wall (1 − mean sunlit fraction, from the core's annual summary), and how much of the
+ * beam and — beside it — of the sky-diffuse and ground-reflected light the option takes away.
  */
 import { SunpaneError } from '../core/common';
 import type { Shading } from '../core/shading';
@@ -112,12 +113,20 @@ export interface OptionFigures {
   annualKWh: number;
   peakW: number;
   meanSunlitFraction: number;
+  /** Share of the year's beam the option's shading takes away, 0…1 (the core's annual summary). */
+  beamCut: number;
+  /** Share of the year's sky-diffuse and ground-reflected light it takes away, 0…1. */
+  diffuseCut: number;
 }
 
-/** Header of the comparison table (our own wording). */
-export const COMPARE_HEADER = ['Shading option', 'Solar gain (kWh/yr)', 'Peak gain (W)', 'Cut vs no shading (%)', 'Shaded share, sun on the wall (0-1)'] as const;
+/** Header of the comparison table (our own wording): the diffuse cut stands beside the beam cut. */
+export const COMPARE_HEADER = ['Shading option', 'Solar gain (kWh/yr)', 'Peak gain (W)', 'Cut vs no shading (%)', 'Beam cut by shading (%)', 'Diffuse cut by shading (%)', 'Shaded share, sun on the wall (0-1)'] as const;
 
-/** The comparison rows: reference first. Cut = 1 − annual / annual of the unshaded window. */
+/**
+ * The comparison rows: reference first. Cut = 1 − annual / annual of the unshaded window; beam and
+ * diffuse cuts = the share of the year's beam and of its sky and ground light that the option's
+ * shading (devices and skyline) takes away from the glass.
+ */
 export function comparisonRows(results: readonly { label: string; figures: OptionFigures }[]): (number | string)[][] {
   const ref = results[0]?.figures.annualKWh ?? 0;
   const round = (x: number, d: number) => Math.round(x * 10 ** d) / 10 ** d;
@@ -126,8 +135,10 @@ export function comparisonRows(results: readonly { label: string; figures: Optio
     round(r.figures.annualKWh, 1),
     round(r.figures.peakW, 1),
     round(ref > 0 ? (1 - r.figures.annualKWh / ref) * 100 : 0, 1),
+    round(r.figures.beamCut * 100, 1),
+    round(r.figures.diffuseCut * 100, 1),
     round(1 - r.figures.meanSunlitFraction, 3),
   ]);
 }
 
-export const COMPARE_FORMATS = ['@', '0.0', '0.0', '0.0', '0.000'];
+export const COMPARE_FORMATS = ['@', '0.0', '0.0', '0.0', '0.0', '0.0', '0.000'];

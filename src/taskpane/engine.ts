@@ -33,6 +33,8 @@ export function runYear(spec: WindowSpec): YearResult {
     peakStamp: summary.peakW > 0 ? summary.peakStamp : undefined,
     sunlitHours: summary.sunlitHours,
     meanSunlitFraction: summary.meanSunlitFraction,
+    beamCut: summary.beamCut,
+    diffuseCut: summary.diffuseCut,
     missingHours: summary.missingHours,
     glassArea: series.glassArea,
   };

@@ -257,7 +257,8 @@ export function createPane(doc: Document, host: PaneHost): void {
         cancelled: () => cancelRequested,
       });
       store.remember(written.sheet);
-      say(`Wrote "${written.sheet}" (table ${written.table}): ${result.figures.annualKWh.toFixed(0)} kWh in the year, peak ${result.figures.peakW.toFixed(0)} W.`, 'ok');
+      const cuts = `shading takes ${(result.figures.beamCut * 100).toFixed(0)} % of the beam and ${(result.figures.diffuseCut * 100).toFixed(0)} % of the diffuse light`;
+      say(`Wrote "${written.sheet}" (table ${written.table}): ${result.figures.annualKWh.toFixed(0)} kWh in the year, peak ${result.figures.peakW.toFixed(0)} W; ${cuts}.`, 'ok');
     } catch (err) {
       reportFailure(err);
     } finally {
@@ -405,7 +406,11 @@ export function createPane(doc: Document, host: PaneHost): void {
       const plan = await planSheet(`${ready.spec.name} options`, await sheetNamesOf(host.run), store, askReplace);
       const name = await writeSmallTableSheet(host.run, plan, {
         title: `Sunpane shading options: ${ready.spec.name}`,
-        lines: [...describeSpec(ready.spec).slice(0, 2), 'Cut = 1 − annual gain ÷ annual gain with no outside shading. Shaded share = 1 − mean sunlit fraction over the hours the sun is in front of the wall.', CAUTION],
+        lines: [
+          ...describeSpec(ready.spec).slice(0, 2),
+          'Cut = 1 − annual gain ÷ annual gain with no outside shading. Beam and diffuse cuts: the share of the year’s beam, and of its sky and ground light, that the shading (devices and skyline) keeps off the glass. Shaded share = 1 − mean sunlit fraction over the hours the sun is in front of the wall.',
+          CAUTION,
+        ],
         header: COMPARE_HEADER,
         rows: comparisonRows(results),
         formats: COMPARE_FORMATS,

@@ -30,6 +30,9 @@ export interface YearFigures {
   peakStamp?: number;
   sunlitHours: number;
   meanSunlitFraction: number;
+  /** Shares of the year's beam and of its sky and ground light the window's shading takes away, 0…1. */
+  beamCut: number;
+  diffuseCut: number;
   missingHours: number;
   glassArea: number;
 }
@@ -99,8 +102,12 @@ export function monthlyFormulas(ref: ColumnRef, year: number, monthRow0: number,
   return rows;
 }
 
-/** Key figures under the monthly summary: label, formula (or the glass area, an input), unit. */
-export function keyFigureRows(ref: ColumnRef, glassArea: number): (number | string)[][] {
+/**
+ * Key figures under the monthly summary: label, formula (or a value), unit. The glass area is an
+ * input; the beam and diffuse cuts of the shading are the core's values (the table holds what
+ * reaches the glass, not what a bare window would get).
+ */
+export function keyFigureRows(ref: ColumnRef, fig: Pick<YearFigures, 'glassArea' | 'beamCut' | 'diffuseCut'>): (number | string)[][] {
   const f = yearFigureFormulas(ref);
   return [
     ['Peak gain (W)', `=${f.peakW}`],
@@ -108,7 +115,9 @@ export function keyFigureRows(ref: ColumnRef, glassArea: number): (number | stri
     ['Hours with beam on the glass (h)', `=${f.sunlitHours}`],
     ['Mean sunlit fraction, sun on the wall (0-1)', `=${f.meanSunlitFraction}`],
     ['Hours with weather missing (h)', `=${f.missingHours}`],
-    ['Glass area (m²)', roundForSheet(glassArea, 3)],
+    ['Glass area (m²)', roundForSheet(fig.glassArea, 3)],
+    ['Beam cut by shading (%)', roundForSheet(fig.beamCut * 100, 1)],
+    ['Diffuse cut by shading (%)', roundForSheet(fig.diffuseCut * 100, 1)],
   ];
 }
 
@@ -213,10 +222,10 @@ export async function writeYearSheet(
     monthHead.format.font.bold = true;
     monthHead.format.fill.color = HEAD_FILL;
     monthHead.format.font.color = hexColour(PALETTE.headerText);
-    const keys = keyFigureRows(ref, fig.glassArea);
+    const keys = keyFigureRows(ref, fig);
     const keyRange = sheet.getRange(rangeAddress(keyRow, SUMMARY_COLUMN, keys.length, 2));
     keyRange.formulas = keys;
-    keyRange.numberFormat = keys.map((_, i) => ['@', i === 1 ? 'yyyy-mm-dd hh:mm' : i === 3 ? '0.000' : i === 5 ? '0.00' : '#,##0']);
+    keyRange.numberFormat = keys.map((_, i) => ['@', i === 1 ? 'yyyy-mm-dd hh:mm' : i === 3 ? '0.000' : i === 5 ? '0.00' : i >= 6 ? '0.0' : '#,##0']);
 
     const chartData = sheet.getRange(rangeAddress(TABLE_HEADER_ROW, SUMMARY_COLUMN, 13, 2));
     const chart = sheet.charts.add('ColumnClustered', chartData, 'Columns');

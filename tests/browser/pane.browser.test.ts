@@ -133,6 +133,8 @@ describe('the task pane in Chromium with a fake Excel host', () => {
 
     const series = annualSeries(DEMO);
     const summary = summarizeAnnual(series);
+    // The annual summary gives the diffuse cut beside the beam cut (the core's numbers).
+    expect(status).toContain(`shading takes ${(summary.beamCut * 100).toFixed(0)} % of the beam and ${(summary.diffuseCut * 100).toFixed(0)} % of the diffuse light`);
     expect(series.hours).toBe(8760);
 
     // Header row 5, hourly rows 6…8765 (columns A…N), in a table named after the window.
@@ -170,6 +172,11 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     expect(keys[1]).toEqual(['Peak at (hour ending)', `=${yearFigureFormulas(ref).peakStamp}`]);
     expect(keys[5][0]).toBe('Glass area (m²)');
     expect(keys[5][1] as number).toBeCloseTo(series.glassArea, 3);
+    const cuts = await host.read(page, 'Demo west hourly', 'P26:Q27');
+    expect(cuts).toEqual([
+      ['Beam cut by shading (%)', Math.round(summary.beamCut * 100 * 10) / 10],
+      ['Diffuse cut by shading (%)', Math.round(summary.diffuseCut * 100 * 10) / 10],
+    ]);
 
     // Month × hour block of mean gain, T5:AR17, formulas too.
     const block = await host.read(page, 'Demo west hourly', 'T5:AR17');
@@ -352,12 +359,12 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     await page.screenshot({ path: path.join(ARTIFACTS, 'pane-options.png'), fullPage: true });
     await page.click('#run-compare');
     await waitForStatus(page, /Wrote|refused|Fix|option/);
-    const rows = await host.read(page, 'Window A options', 'A7:E11');
-    expect(rows[0]).toEqual(['Shading option', 'Solar gain (kWh/yr)', 'Peak gain (W)', 'Cut vs no shading (%)', 'Shaded share, sun on the wall (0-1)']);
+    const rows = await host.read(page, 'Window A options', 'A7:G11');
+    expect(rows[0]).toEqual(['Shading option', 'Solar gain (kWh/yr)', 'Peak gain (W)', 'Cut vs no shading (%)', 'Beam cut by shading (%)', 'Diffuse cut by shading (%)', 'Shaded share, sun on the wall (0-1)']);
     expect(await cautionRows(page, 'Window A options')).toBe(true);
     expect(await host.eval<{ name: string }[]>(page, 'host.tables()')).toContainEqual(expect.objectContaining({ name: 'Window_A_options', sheet: 'Window A options' }));
     expect(rows.slice(1).map((r) => r[0])).toEqual(['No outside shading', 'Short overhang', 'Deep overhang', 'Overhang and fins']);
-    const all = await host.read(page, 'Window A options', 'A8:E12');
+    const all = await host.read(page, 'Window A options', 'A8:G12');
     expect(all[4][0]).toBe('Deep set-back');
     const bare: WindowSpec = {
       name: 'Window A',
@@ -380,7 +387,11 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     const deep = summarizeAnnual(annualSeries({ ...bare, shading: { overhang: { projection: 1.0, gap: 0.2, extensionLeft: 0.5, extensionRight: 0.5 } } }));
     expect(Math.abs((all[2][1] as number) - deep.annualKWh)).toBeLessThanOrEqual(0.05);
     expect(all[2][3] as number).toBeCloseTo((1 - deep.annualKWh / ref.annualKWh) * 100, 1);
-    expect(all[2][4] as number).toBeCloseTo(1 - deep.meanSunlitFraction, 3);
+    expect(all[2][4] as number).toBeCloseTo(deep.beamCut * 100, 1);
+    expect(all[2][5] as number).toBeCloseTo(deep.diffuseCut * 100, 1);
+    expect(all[2][5] as number).toBeGreaterThan(5); // the overhang takes sky light too, beside the beam
+    expect(all[0][5]).toBe(0);
+    expect(all[2][6] as number).toBeCloseTo(1 - deep.meanSunlitFraction, 3);
     // A deeper overhang never lets in more than a shorter one of the same gap.
     expect(all[2][1] as number).toBeLessThan(all[1][1] as number);
     const charts = await host.eval<{ type: string; title: string }[]>(page, 'host.charts("Window A options")');

@@ -88,6 +88,46 @@ describe('sunpane demo', () => {
     expectSaved('demo-summary.txt', lines.slice(0, 5).join('\n'));
   });
 
+  it('states for each shading option the annual and peak gain under the earlier beam-only treatment and now, as the README does', () => {
+    const ws = wb.getWorksheet('Options')!;
+    let header = 0;
+    ws.eachRow((row, r) => {
+      if (header === 0 && row.getCell(2).value === 'Shading option') header = r;
+    });
+    const heads = (ws.getRow(header).values as ExcelJS.CellValue[]).map((v) => String(v ?? ''));
+    const col = (h: string) => heads.indexOf(h);
+    const rows: { tag: string; option: string; now: number; before: number; peak: number; peakBefore: number; diffuseCut: number }[] = [];
+    for (let r = header + 1; r <= ws.rowCount && ws.getCell(r, 1).value; r++) {
+      const at = (h: string) => numberOf(ws.getCell(r, col(h)).value);
+      rows.push({
+        tag: String(ws.getCell(r, 1).value),
+        option: String(ws.getCell(r, 2).value),
+        now: at('Annual gain (kWh)'),
+        before: at('Annual gain, beam-only (kWh)'),
+        peak: at('Peak gain (W)'),
+        peakBefore: at('Peak gain, beam-only (W)'),
+        diffuseCut: at('Diffuse cut (%)'),
+      });
+    }
+    expect(rows).toHaveLength(8);
+    for (const o of rows) {
+      if (o.option === 'none') {
+        expect(o.now).toBeCloseTo(o.before, 9); // nothing shades: both treatments agree
+        expect(o.diffuseCut).toBe(0);
+      } else {
+        expect(o.now).toBeLessThan(o.before); // devices now cut the diffuse light too
+        expect(o.peak).toBeLessThanOrEqual(o.peakBefore);
+        expect(o.diffuseCut).toBeGreaterThan(0.05);
+      }
+    }
+    // The README's table (rounded to whole kWh and W) is these numbers.
+    const readme = fs.readFileSync(path.resolve(__dirname, '../../README.md'), 'utf8');
+    for (const o of rows) {
+      const line = readme.split('\n').find((l) => l.startsWith(`| ${o.tag} | ${o.option} |`));
+      expect(line).toBe(`| ${o.tag} | ${o.option} | ${Math.round(o.before)} → ${Math.round(o.now)} | ${Math.round(o.peakBefore)} → ${Math.round(o.peak)} |`);
+    }
+  });
+
   it('carries the caution on every sheet', () => {
     expect(wb.worksheets.length).toBe(10);
     expect(sheetsWithoutCaution(wb)).toEqual([]);

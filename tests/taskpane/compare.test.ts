@@ -34,14 +34,14 @@ describe('shading options', () => {
     expect(() => optionSpecs(base, new Array(7).fill(starterOptions()[0]), validate)).toThrow(/at most 6/);
   });
 
-  test('the cut is 1 − annual ÷ unshaded annual in %, and the shaded share is 1 − mean sunlit share', () => {
+  test('the cut is 1 − annual ÷ unshaded annual in %, beam and diffuse cuts side by side in %, and the shaded share is 1 − mean sunlit share', () => {
     const rows = comparisonRows([
-      { label: 'none', figures: { annualKWh: 400, peakW: 900, meanSunlitFraction: 1 } },
-      { label: 'deep', figures: { annualKWh: 300, peakW: 600, meanSunlitFraction: 0.62 } },
+      { label: 'none', figures: { annualKWh: 400, peakW: 900, meanSunlitFraction: 1, beamCut: 0, diffuseCut: 0 } },
+      { label: 'deep', figures: { annualKWh: 300, peakW: 600, meanSunlitFraction: 0.62, beamCut: 0.4123, diffuseCut: 0.2049 } },
     ]);
     expect(rows).toEqual([
-      ['none', 400, 900, 0, 0],
-      ['deep', 300, 600, 25, 0.38],
+      ['none', 400, 900, 0, 0, 0, 0],
+      ['deep', 300, 600, 25, 41.2, 20.5, 0.38],
     ]);
   });
 });

@@ -39,7 +39,7 @@ describe('labels from the user are written as text', () => {
     const n = 8760;
     const col = () => new Float64Array(n);
     const cols = { stampSerial: Float64Array.from({ length: n }, (_, i) => 45658 + (i + 1) / 24), sunAltitude: col(), sunAzimuth: col(), incidence: col(), profileAngle: col(), sunlitFraction: col(), dni: col(), dhi: col(), beam: col(), sky: col(), ground: col(), shgc: col(), gain: col(), missing: new Uint8Array(n) };
-    const fig = { monthlyKWh: new Array(12).fill(0), annualKWh: 0, peakW: 0, peakStamp: 45700.5, sunlitHours: 0, meanSunlitFraction: 0, missingHours: 0, glassArea: 1 };
+    const fig = { monthlyKWh: new Array(12).fill(0), annualKWh: 0, peakW: 0, peakStamp: 45700.5, sunlitHours: 0, meanSunlitFraction: 0, beamCut: 0, diffuseCut: 0, missingHours: 0, glassArea: 1 };
     const lines = HOSTILE.slice(0, 3); // the sheet has room for three lines above its table
     await writeYearSheet(run, { name: 'Y' }, { title: 'Sunpane hourly solar gain', lines }, cols, fig);
     expect(host.formulaCells('Y')).toEqual([]);

@@ -32,7 +32,7 @@ function columns(): HourColumns {
     missing: new Uint8Array(HOURS),
   };
 }
-const FIGURES: YearFigures = { monthlyKWh: new Array(12).fill(100.123), annualKWh: 1201.476, peakW: 999.26, peakStamp: 45700.5, sunlitHours: 3000, meanSunlitFraction: 0.8, missingHours: 0, glassArea: 2.3 };
+const FIGURES: YearFigures = { monthlyKWh: new Array(12).fill(100.123), annualKWh: 1201.476, peakW: 999.26, peakStamp: 45700.5, sunlitHours: 3000, meanSunlitFraction: 0.8, beamCut: 0.31234, diffuseCut: 0.18765, missingHours: 0, glassArea: 2.3 };
 
 function setup() {
   const { Excel, host } = createExcelHost();
@@ -74,6 +74,11 @@ describe('the hourly year sheet', () => {
     );
     expect(jan[2]).toBe(`=IF($${col(1)}$25>0,${col(1)}6/$${col(1)}$25,0)`);
     expect(host.read('East 1 hourly', `${col(0)}25:${col(1)}25`)).toEqual([['Glass area (m²)', 2.3]]);
+    // The shading's cuts of the beam and, beside it, of the diffuse light: the core's values, in %.
+    expect(host.read('East 1 hourly', `${col(0)}26:${col(1)}27`)).toEqual([
+      ['Beam cut by shading (%)', 31.2],
+      ['Diffuse cut by shading (%)', 18.8],
+    ]);
     expect(host.read('East 1 hourly', `${col(0)}20:${col(1)}20`)).toEqual([['Peak gain (W)', '=MAX(East_1_hourly[[Solar gain (W)]])']]);
     const block = host.read('East 1 hourly', `${columnLetters(HEAT_COLUMN)}5:${columnLetters(HEAT_COLUMN + 24)}17`);
     expect(block[0]).toEqual(['Month', ...Array.from({ length: 24 }, (_, h) => String(h + 1))]);

@@ -1,6 +1,7 @@
 /**
  * Summary of a window's annual hourly series: monthly and annual energy, the peak hour, sunlit
- * hours, mean sunlit fraction while the sun is on the wall, and the count of missing hours.
+ * hours, mean sunlit fraction while the sun is on the wall, how much of the beam and of the diffuse
+ * light the window's shading takes away over the year, and the count of missing hours.
  */
 import { type AnnualSeries, monthOfDay } from './annual';
 
@@ -23,6 +24,17 @@ export interface AnnualSummary {
   meanSunlitFraction: number;
   /** Hours the sun is above the horizon and in front of the window [h]. */
   sunOnWallHours: number;
+  /**
+   * Share of the year's beam on the glass that the shading takes away, 0…1:
+   * 1 − Σ beam · sunlit fraction · SHGC(θ) ÷ Σ beam · SHGC(θ) (0 when no beam reaches the window).
+   */
+  beamCut: number;
+  /**
+   * Share of the year's sky-diffuse and ground-reflected light that the shading (devices and
+   * skyline) takes away, 0…1: 1 − Σ (sky + ground) ÷ Σ (sky + ground on the bare window)
+   * (docs/diffuse-shading.md; 0 without diffuse light).
+   */
+  diffuseCut: number;
   /** Hours without weather values [h]; their gain is not in the totals. */
   missingHours: number;
   /** Missing hours per month, January first [h]. */
@@ -33,7 +45,7 @@ export interface AnnualSummary {
  * Adds up an annual series. Each row is one hour, so its gain in W is its energy in Wh.
  * @param series - from {@link annualSeries}
  * @returns monthly and annual kWh, peak W and its stamp, sunlit hours, mean sunlit fraction with
- *   the sun on the wall, and missing hours (overall and by month) so that a total with gaps is
+ *   the sun on the wall, the beam and diffuse cuts of the shading, and missing hours (overall and by month) so that a total with gaps is
  *   never mistaken for a complete one
  * @remarks The month of a row is the month of the middle of its hour (the stamp of the hour ending
  *   at midnight on the 31st belongs to that 31st).
@@ -47,6 +59,10 @@ export function summarizeAnnual(series: AnnualSeries): AnnualSummary {
   let sunOnWallHours = 0;
   let sunlitSum = 0;
   let missingHours = 0;
+  let beamKept = 0;
+  let beamAll = 0;
+  let diffuseKept = 0;
+  let diffuseAll = 0;
   const months = monthOfDay(series.year);
   for (let i = 0; i < series.hours; i++) {
     const month = months[(i / 24) | 0];
@@ -61,6 +77,11 @@ export function summarizeAnnual(series: AnnualSeries): AnnualSummary {
         peakIndex = i;
       }
       if (series.beam[i] > 0 && series.sunlitFraction[i] > 0) sunlitHours++;
+      const b = series.beam[i] * series.shgc[i];
+      beamAll += b;
+      beamKept += b * series.sunlitFraction[i];
+      diffuseKept += series.sky[i] + series.ground[i];
+      diffuseAll += series.skyUnshaded[i] + series.groundUnshaded[i];
     }
     if (series.sunAltitude[i] > 0 && series.incidence[i] < 90) {
       sunOnWallHours++;
@@ -76,7 +97,16 @@ export function summarizeAnnual(series: AnnualSeries): AnnualSummary {
     sunlitHours,
     meanSunlitFraction: sunOnWallHours > 0 ? sunlitSum / sunOnWallHours : 0,
     sunOnWallHours,
+    beamCut: cutOf(beamKept, beamAll),
+    diffuseCut: cutOf(diffuseKept, diffuseAll),
     missingHours,
     monthlyMissingHours,
   };
+}
+
+/** 1 − kept ÷ all, within 0…1 (0 when there is nothing to cut). */
+function cutOf(kept: number, all: number): number {
+  if (!(all > 0)) return 0;
+  const cut = 1 - kept / all;
+  return cut < 0 ? 0 : cut > 1 ? 1 : cut;
 }

@@ -221,3 +221,23 @@ describe('diffuse shading in the annual series (docs/diffuse-shading.md)', () =>
     }
   });
 });
+
+describe('the beam and diffuse cuts of the summary', () => {
+  test('a bare window cuts nothing; an overhang cuts the isotropic sky by its view ratio and no ground', () => {
+    const bare = summarizeAnnual(annualSeries(baseSpec({ skyModel: 'isotropic' })));
+    expect(bare.beamCut).toBe(0);
+    expect(bare.diffuseCut).toBe(0);
+    const series = annualSeries(baseSpec({ skyModel: 'isotropic', shading: { overhang: { projection: 1, gap: 0.1, extensionLeft: 0.5, extensionRight: 0.5 } } }));
+    const s = summarizeAnnual(series);
+    let sky = 0;
+    let ground = 0;
+    for (let i = 0; i < series.hours; i++) {
+      sky += series.skyUnshaded[i];
+      ground += series.groundUnshaded[i];
+    }
+    // Isotropic sky: the kept diffuse is ratio × sky + ground, so the cut is (1 − ratio) × sky share.
+    expect(s.diffuseCut).toBeCloseTo(((1 - series.diffuse.skyViewRatio) * sky) / (sky + ground), 9);
+    expect(s.beamCut).toBeGreaterThan(0.1);
+    expect(s.beamCut).toBeLessThan(1);
+  });
+});
