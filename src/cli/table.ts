@@ -34,7 +34,8 @@ site id), surfaceAzimuth [°], surfaceTilt [°] (90), width, height [m], frameFr
 glazing {shgc, panes (2), angleTable?, interiorAttenuation (1), radiantFraction?},
 shading {overhang {projection, gap, extensionLeft, extensionRight}, leftFin/rightFin {projection,
 gap, extensionAbove, extensionBelow}, revealDepth, skyline [°...]}, groundAlbedo (0.2),
-skyModel ("perez1990"), weather {kind: "ineichenClearSky", linkeTurbidity} or
+skyModel ("perez1990"), diffuseShading ("viewFactors"; "beamOnly": devices cut only the beam, the
+earlier treatment), weather {kind: "ineichenClearSky", linkeTurbidity} or
 {kind: "ashraeClearSky", tauB, tauD}. Defaults in brackets. Example: examples/east-office.json
 
 Exit codes: 0 done, 1 bad input (the message names the field, row or line; weather that cannot be
