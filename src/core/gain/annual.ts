@@ -23,26 +23,31 @@
  * supplied series marks that row missing: `missing[i] = 1`, and its irradiance and gain are 0 —
  * the summary counts these hours so they never pass for dark ones.
  */
-import { SunpaneError, DEG, RAD, acosClamped, wrap180 } from '../common';
-import { type PreparedWindow, monthlyValue, prepareWindow } from './windowGain';
-import { outdoorTemperatureSource } from './windowSpec';
+import { SunpaneError, DEG, RAD, acosClamped, requireRange, wrap180 } from '../common';
+import { type PreparedWindow, monthlyValue, prepareWindow } from './prepared';
+import { MAX_IRRADIANCE, outdoorTemperatureSource } from './windowSpec';
 import { DAILY_RANGE_FRACTIONS } from './outdoorTemperature';
 import { ashraeClearSky, decomposeErbs, extraterrestrialSpencer, ineichenPerezClearSky, type PlaneParts, type PreparedPlane, preparePlane } from '../sky';
 import type { ShgcCurve } from '../glazing';
 import { type PreparedShading, prepareShading } from '../shading';
-import { annualSunPath } from '../sun';
-import { daysInMonth, describeDaylightSaving, standardToClock } from '../time';
+import { annualSunPath, type SunPathYear } from '../sun';
+import { daysInMonth, describeDaylightSaving, standardToClock, type TimeConvention } from '../time';
 import type { DiffuseShading, WindowSpec } from './window';
 
-/** One window's year, hour by hour. Every column has `hours` entries; row i is the hour ending at stampSerial[i]. */
+/**
+ * One window's year, hour by hour. Every column has `hours` entries; row i is the hour stamped
+ * stampSerial[i], read by `timeConvention` (hour ending at the stamp, or the instant itself).
+ */
 export interface AnnualSeries {
   name: string;
   year: number;
+  /** How the rows are stamped: `hourEnding` (end of the hour, sun at mid-hour) or `instant` (top of the hour, sun there). */
+  timeConvention: TimeConvention;
   /** 8760, or 8784 in a leap year. */
   hours: number;
   /** Glass area [m²]. */
   glassArea: number;
-  /** Local standard-time serial at the END of each hour. */
+  /** Local standard-time serial of each row's stamp: the END of its hour (`hourEnding`) or its start (`instant`). */
   stampSerial: Float64Array;
   /** The same stamps on the local clock (the same array as `stampSerial` without daylight saving). */
   clockStamp: Float64Array;
@@ -50,7 +55,7 @@ export interface AnnualSeries {
   clockRule: string;
   /** How a supplied series' rows were fitted to the year, in words (undefined for clear skies). */
   yearFit?: string;
-  /** Sun at the middle of the hour [°]. */
+  /** Sun at the middle of the hour (`hourEnding`) or at the stamp (`instant`) [°]. */
   sunAltitude: Float64Array;
   sunAzimuth: Float64Array;
   /** Incidence angle on the glass [°], 0…180 (> 90: sun behind the window). */
@@ -137,18 +142,21 @@ export function annualOfPrepared(w: PreparedWindow): AnnualSeries {
   // The sun path writes the sines and cosines of the sun's altitude and azimuth into scratch
   // columns of this module (no allocation for them; one call runs at a time).
   const trig = { sinAltitude: SIN_ALT_SCRATCH, cosAltitude: COS_ALT_SCRATCH, sinAzimuth: SIN_GAMMA_SCRATCH, cosAzimuth: COS_GAMMA_SCRATCH };
-  const path = annualSunPath(spec.year, spec.site, { trig, slowColumns: false });
+  const path = annualSunPath(spec.year, spec.site, { at: sunPathAt(w.convention), trig, slowColumns: false });
   if (path.hours !== n) throw new SunpaneError('year', spec.year, `sun path has ${path.hours} hours, expected ${n}`);
   // The sun path's columns are fresh arrays of this call: the series takes them over without copying.
   const rule = spec.site.daylightSaving;
   let clockStamp = path.stampSerial;
   if (rule !== undefined) {
     clockStamp = new Float64Array(n);
-    for (let i = 0; i < n; i++) clockStamp[i] = standardToClock(path.stampSerial[i] - 1 / 48, rule) + 1 / 48; // the hour's middle decides
+    // An hour-ending row moves with its hour's middle; an instant row with itself.
+    const half = w.convention === 'hourEnding' ? 1 / 48 : 0;
+    for (let i = 0; i < n; i++) clockStamp[i] = standardToClock(path.stampSerial[i] - half, rule) + half;
   }
   const out: AnnualSeries = {
     name: spec.name,
     year: spec.year,
+    timeConvention: w.convention,
     hours: n,
     glassArea: w.glassArea,
     stampSerial: path.stampSerial,
@@ -181,8 +189,23 @@ export function annualOfPrepared(w: PreparedWindow): AnnualSeries {
     radiantFractions: { beam: w.radiantFraction, diffuse: w.radiantFractionDiffuse, conduction: w.radiantFractionConduction },
     missing: new Uint8Array(n),
   };
-  fillWeather(w, path.altitude, path.zenith, out);
+  fillWeather(w, path.altitude, path.zenith, out, 0, n);
+  runPasses(w, path.altitude, path.azimuth, out, 0, n);
+  return out;
+}
 
+/** Where the sun path evaluates each hour for a time convention. */
+function sunPathAt(convention: TimeConvention): 'middle' | 'start' {
+  return convention === 'instant' ? 'start' : 'middle';
+}
+
+/**
+ * The hourly passes over rows `from` … `to` − 1 (the whole year, or one row): angles, then shading
+ * and SHGC, then conduction (with a U-value), then irradiance and gain. The sun's sines and cosines
+ * must be in the scratch columns at those rows, and the weather columns of `out` filled.
+ */
+function runPasses(w: PreparedWindow, altitude: Float64Array, azimuth: Float64Array, out: AnnualSeries, from: number, to: number): void {
+  const { spec } = w;
   const tilt = spec.surfaceTilt;
   const surfAz = spec.surfaceAzimuth;
   // Checked once here; per hour only the kernels run (the same ones the checked functions use).
@@ -191,15 +214,164 @@ export function annualOfPrepared(w: PreparedWindow): AnnualSeries {
   const plane = preparePlane({ surfaceTilt: tilt, surfaceAzimuth: surfAz, groundAlbedo: spec.groundAlbedo, skyModel: w.skyModel, shade: w.shade });
   const dniExtra = plane.needsDniExtra ? dniExtraByDay() : NO_DNI_EXTRA;
 
-  // Three short passes over the year, each a function of its own (as in src/core/sun/sunPath.ts: short
+  // Short passes over the year, each a function of its own (as in src/core/sun/sunPath.ts: short
   // loops with few live values run much faster than one long loop body, and a function of its own
   // keeps its type feedback): angles for every hour; shading and SHGC for the hours with the sun in
   // front of the window; irradiance and gain for the hours with light.
-  hourlyAngles(n, Math.cos(tilt * RAD), Math.sin(tilt * RAD), Math.cos(surfAz * RAD), Math.sin(surfAz * RAD), out.incidence, out.profileAngle);
-  hourlyShading(n, shade, w.curve, surfAz, path.altitude, path.azimuth, out.incidence, out.sunlitFraction, out.shgc);
-  if (out.hasConduction) hourlyConduction(w, out); // before the gain: a missing dry-bulb marks its hour missing
-  hourlyGain(n, plane, dniExtra, w.solarArea * w.interiorAttenuation, w.solarArea * w.interiorAttenuationDiffuse, w.radiantFraction, w.radiantFractionDiffuse, w.curve.diffuse, w.beamOnly ? w.skylineSky : -1, path.altitude, out);
-  return out;
+  hourlyAngles(from, to, Math.cos(tilt * RAD), Math.sin(tilt * RAD), Math.cos(surfAz * RAD), Math.sin(surfAz * RAD), out.incidence, out.profileAngle);
+  hourlyShading(from, to, shade, w.curve, surfAz, altitude, azimuth, out.incidence, out.sunlitFraction, out.shgc);
+  if (out.hasConduction) hourlyConduction(w, out, from, to); // before the gain: a missing dry-bulb marks its hour missing
+  hourlyGain(from, to, plane, dniExtra, w.solarArea * w.interiorAttenuation, w.solarArea * w.interiorAttenuationDiffuse, w.radiantFraction, w.radiantFractionDiffuse, w.curve.diffuse, w.beamOnly ? w.skylineSky : -1, altitude, out);
+}
+
+/** One row of a window's year, worked out alone: the row's values of the columns of {@link AnnualSeries}. */
+export interface AnnualRow {
+  /** Row index in the year. */
+  row: number;
+  stampSerial: number;
+  sunAltitude: number;
+  sunAzimuth: number;
+  incidence: number;
+  profileAngle: number;
+  sunlitFraction: number;
+  dni: number;
+  dhi: number;
+  beam: number;
+  sky: number;
+  ground: number;
+  skyUnshaded: number;
+  groundUnshaded: number;
+  shgc: number;
+  gain: number;
+  radiant: number;
+  convective: number;
+  gainBeam: number;
+  gainDiffuse: number;
+  dryBulb: number;
+  conduction: number;
+  /** True when the weather has no value for the row. */
+  missing: boolean;
+}
+
+/** Sun paths of recent one-row calls, by year, site and convention (a few kept, oldest dropped first). */
+const PATH_CACHE = new Map<string, SunPathYear>();
+const PATH_CACHE_SIZE = 6;
+
+function cachedSunPath(w: PreparedWindow): SunPathYear {
+  const { site, year } = w.spec;
+  const key = [year, site.latitude, site.longitude, site.utcOffset, site.elevation, site.pressure, site.temperature, w.convention].join('|');
+  let path = PATH_CACHE.get(key);
+  if (path === undefined) {
+    path = annualSunPath(year, site, { at: sunPathAt(w.convention), trig: true, slowColumns: false });
+    if (PATH_CACHE.size >= PATH_CACHE_SIZE) PATH_CACHE.delete(PATH_CACHE.keys().next().value as string);
+  } else PATH_CACHE.delete(key);
+  PATH_CACHE.set(key, path);
+  return path;
+}
+
+/** Scratch series for one-row calls: full-length columns, only the computed row is meaningful. */
+let rowScratch: AnnualSeries | undefined;
+
+function scratchSeries(w: PreparedWindow, path: SunPathYear): AnnualSeries {
+  const n = 8784;
+  if (rowScratch === undefined) {
+    const col = () => new Float64Array(n);
+    rowScratch = {
+      name: '',
+      year: 0,
+      timeConvention: 'hourEnding',
+      hours: 0,
+      glassArea: 0,
+      stampSerial: col(),
+      clockStamp: col(),
+      clockRule: '',
+      sunAltitude: col(),
+      sunAzimuth: col(),
+      incidence: col(),
+      profileAngle: col(),
+      sunlitFraction: col(),
+      dni: col(),
+      dhi: col(),
+      beam: col(),
+      sky: col(),
+      ground: col(),
+      skyUnshaded: col(),
+      groundUnshaded: col(),
+      diffuse: { skyViewRatio: 1, groundViewRatio: 1, horizonShare: 1, diffuseShading: 'viewFactors' },
+      shgc: col(),
+      gain: col(),
+      radiant: col(),
+      convective: col(),
+      gainBeam: col(),
+      gainDiffuse: col(),
+      dryBulb: col(),
+      conduction: col(),
+      hasConduction: false,
+      interiorShade: false,
+      radiantFractions: { beam: 0, diffuse: 0, conduction: 0 },
+      missing: new Uint8Array(n),
+    };
+  }
+  rowScratch.name = w.spec.name;
+  rowScratch.year = w.spec.year;
+  rowScratch.timeConvention = w.convention;
+  rowScratch.hours = path.hours;
+  rowScratch.glassArea = w.glassArea;
+  rowScratch.hasConduction = w.spec.glazing.uValue !== undefined;
+  return rowScratch;
+}
+
+/**
+ * One row of the window's year, by the same passes and the same sun path as {@link annualSeries}:
+ * the numbers are those of the year's row, to the last bit (a one-hour function at a row's stamp
+ * and the hourly table agree exactly).
+ * @param w - the prepared window
+ * @param row - 0 … hours − 1
+ * @param weatherHour - the row's DNI and DHI [W/m²] instead of the window's weather (each checked 0…2000)
+ * @returns the row's values
+ * @throws SunpaneError naming `dni` or `dhi` for a bad given value
+ */
+export function annualRowOfPrepared(w: PreparedWindow, row: number, weatherHour?: { dni: number; dhi: number }): AnnualRow {
+  const path = cachedSunPath(w);
+  if (!(row >= 0 && row < path.hours)) throw new SunpaneError('row', row, `must be a row of ${w.spec.year}: 0 to ${path.hours - 1}`);
+  const out = scratchSeries(w, path);
+  SIN_ALT_SCRATCH[row] = path.sinAltitude![row];
+  COS_ALT_SCRATCH[row] = path.cosAltitude![row];
+  SIN_GAMMA_SCRATCH[row] = path.sinAzimuth![row];
+  COS_GAMMA_SCRATCH[row] = path.cosAzimuth![row];
+  for (const c of [out.incidence, out.profileAngle, out.sunlitFraction, out.dni, out.dhi, out.beam, out.sky, out.ground, out.skyUnshaded, out.groundUnshaded, out.shgc, out.gain, out.radiant, out.convective, out.gainBeam, out.gainDiffuse, out.conduction]) c[row] = 0;
+  out.dryBulb[row] = Number.NaN;
+  out.missing[row] = 0;
+  if (weatherHour !== undefined) {
+    out.dni[row] = requireRange('dni', weatherHour.dni, 0, MAX_IRRADIANCE, 'W/m²');
+    out.dhi[row] = requireRange('dhi', weatherHour.dhi, 0, MAX_IRRADIANCE, 'W/m²');
+  } else fillWeather(w, path.altitude, path.zenith, out, row, row + 1);
+  runPasses(w, path.altitude, path.azimuth, out, row, row + 1);
+  return {
+    row,
+    stampSerial: path.stampSerial[row],
+    sunAltitude: path.altitude[row],
+    sunAzimuth: path.azimuth[row],
+    incidence: out.incidence[row],
+    profileAngle: out.profileAngle[row],
+    sunlitFraction: out.sunlitFraction[row],
+    dni: out.dni[row],
+    dhi: out.dhi[row],
+    beam: out.beam[row],
+    sky: out.sky[row],
+    ground: out.ground[row],
+    skyUnshaded: out.skyUnshaded[row],
+    groundUnshaded: out.groundUnshaded[row],
+    shgc: out.shgc[row],
+    gain: out.gain[row],
+    radiant: out.radiant[row],
+    convective: out.convective[row],
+    gainBeam: out.gainBeam[row],
+    gainDiffuse: out.gainDiffuse[row],
+    dryBulb: out.dryBulb[row],
+    conduction: out.conduction[row],
+    missing: out.missing[row] === 1,
+  };
 }
 
 /**
@@ -208,16 +380,15 @@ export function annualOfPrepared(w: PreparedWindow): AnnualSeries {
  * range by hour ending, src/core/gain/outdoorTemperature.ts). A missing dry-bulb row gives NaN and
  * no conduction, and marks the hour missing.
  */
-function hourlyConduction(w: PreparedWindow, out: AnnualSeries): void {
+function hourlyConduction(w: PreparedWindow, out: AnnualSeries, from: number, to: number): void {
   const weather = w.spec.weather;
-  const n = out.hours;
   const tIn = w.spec.indoorTemperature as number;
   const ua = w.conductance;
   const { dryBulb, conduction, missing } = out;
   if (outdoorTemperatureSource(weather) === 'series') {
     const series = (weather as { dryBulb: ArrayLike<number> }).dryBulb;
     const rowOf = w.yearFit!.rowOf;
-    for (let i = 0; i < n; i++) {
+    for (let i = from; i < to; i++) {
       const t = series[rowOf[i]];
       if (!Number.isFinite(t)) {
         missing[i] = 1;
@@ -230,13 +401,16 @@ function hourlyConduction(w: PreparedWindow, out: AnnualSeries): void {
   }
   const d = weather as { dryBulbMax: number[]; dailyRange: number[] };
   const months = monthOfDay(w.spec.year);
-  for (let day = 0; day * 24 < n; day++) {
+  // Row h of a day: hourEnding — the hour ending h + 1 (the profile's value h); instant — the
+  // instant h:00 (the profile's value at hour h, which for 00:00 is that of 24:00).
+  const shift = w.convention === 'instant' ? 23 : 0;
+  for (let day = (from / 24) | 0; day * 24 < to; day++) {
     const tMax = monthlyValue(d.dryBulbMax, months[day]);
     const range = monthlyValue(d.dailyRange, months[day]);
-    for (let h = 0; h < 24; h++) {
-      const t = tMax - DAILY_RANGE_FRACTIONS[h] * range; // row h is the hour ending h + 1
-      dryBulb[day * 24 + h] = t;
-      conduction[day * 24 + h] = ua * (t - tIn);
+    for (let i = Math.max(from, day * 24); i < Math.min(to, day * 24 + 24); i++) {
+      const t = tMax - DAILY_RANGE_FRACTIONS[(i - day * 24 + shift) % 24] * range;
+      dryBulb[i] = t;
+      conduction[i] = ua * (t - tIn);
     }
   }
 }
@@ -276,7 +450,8 @@ const COS_THETA_SCRATCH = new Float64Array(8784);
  * cosines come with the sun path (within a few ulps of Math.sin / Math.cos of its columns), those of
  * γ = surface azimuth − sun azimuth by the difference formulas. Leaves sin γ, cos γ and cos θ in the
  * scratch columns for the later passes.
- * @param n - number of hours
+ * @param from - first row
+ * @param n - row after the last
  * @param cosTilt - cos Σ
  * @param sinTilt - sin Σ
  * @param cosSurf - cos of the surface azimuth
@@ -284,14 +459,14 @@ const COS_THETA_SCRATCH = new Float64Array(8784);
  * @param incidence - filled with θ [°], 0…180
  * @param profileAngle - filled with Ω [°] (180, not −180, for the sun straight behind)
  */
-function hourlyAngles(n: number, cosTilt: number, sinTilt: number, cosSurf: number, sinSurf: number, incidence: Float64Array, profileAngle: Float64Array): void {
+function hourlyAngles(from: number, n: number, cosTilt: number, sinTilt: number, cosSurf: number, sinSurf: number, incidence: Float64Array, profileAngle: Float64Array): void {
   const sinAlt = SIN_ALT_SCRATCH;
   const cosAlt = COS_ALT_SCRATCH;
   const sinG = SIN_GAMMA_SCRATCH; // in: sin of the sun azimuth; out: sin γ
   const cosG = COS_GAMMA_SCRATCH; // in: cos of the sun azimuth; out: cos γ
   const cosT = COS_THETA_SCRATCH;
   const deg = DEG;
-  for (let i = 0; i < n; i++) {
+  for (let i = from; i < n; i++) {
     const sinBeta = sinAlt[i];
     const cosBeta = cosAlt[i];
     const sinA = sinG[i];
@@ -312,7 +487,8 @@ function hourlyAngles(n: number, cosTilt: number, sinTilt: number, cosSurf: numb
  * Pass 2 of {@link annualOfPrepared}: sunlit fraction and beam SHGC for the hours with the sun up and
  * in front of the window (θ < 90°); other rows stay 0 (no shadow work with the sun down or behind
  * the wall). Geometry for every such row, missing weather or not.
- * @param n - number of hours
+ * @param from - first row
+ * @param n - row after the last
  * @param shade - the prepared shading of a vertical window, or undefined (sunlit fraction 1)
  * @param curve - the glazing's SHGC curve
  * @param surfAz - surface azimuth [°]
@@ -323,6 +499,7 @@ function hourlyAngles(n: number, cosTilt: number, sinTilt: number, cosSurf: numb
  * @param shgc - filled with SHGC(θ)
  */
 function hourlyShading(
+  from: number,
   n: number,
   shade: PreparedShading | undefined,
   curve: ShgcCurve,
@@ -337,7 +514,7 @@ function hourlyShading(
   const cosAlt = COS_ALT_SCRATCH;
   const sinG = SIN_GAMMA_SCRATCH;
   const cosG = COS_GAMMA_SCRATCH;
-  for (let i = 0; i < n; i++) {
+  for (let i = from; i < n; i++) {
     const a = alt[i];
     const theta = incidence[i];
     if (!(a > 0 && theta < 90)) continue;
@@ -351,7 +528,8 @@ function hourlyShading(
 /**
  * Pass 3 of {@link annualOfPrepared}: irradiance on the plane and gain for the hours with weather
  * and light; missing and dark rows stay 0.
- * @param n - number of hours
+ * @param from - first row
+ * @param n - row after the last
  * @param plane - the prepared plane
  * @param dniExtra - extraterrestrial normal irradiance by day of the year [W/m²] (index 1…366)
  * @param kb - area × beam interior attenuation [m²]
@@ -364,12 +542,12 @@ function hourlyShading(
  * @param alt - sun altitude [°]
  * @param out - the series: reads dni, dhi, missing, sunlitFraction, shgc; fills beam, sky, ground, their unshaded columns, gain (and its beam and diffuse parts), radiant, convective
  */
-function hourlyGain(n: number, plane: PreparedPlane, dniExtra: Float64Array, kb: number, kd: number, frb: number, frd: number, shgcDiffuse: number, circumsolarFixed: number, alt: Float64Array, out: AnnualSeries): void {
+function hourlyGain(from: number, n: number, plane: PreparedPlane, dniExtra: Float64Array, kb: number, kd: number, frb: number, frd: number, shgcDiffuse: number, circumsolarFixed: number, alt: Float64Array, out: AnnualSeries): void {
   const { dni: dniColumn, dhi: dhiColumn, missing, sunlitFraction, shgc, beam, sky, ground, skyUnshaded, groundUnshaded, gain, radiant, convective, gainBeam, gainDiffuse } = out;
   const sinAlt = SIN_ALT_SCRATCH;
   const cosT = COS_THETA_SCRATCH;
   const parts: PlaneParts = { beam: 0, sky: 0, ground: 0, total: 0, skyUnshaded: 0, groundUnshaded: 0 };
-  for (let i = 0; i < n; i++) {
+  for (let i = from; i < n; i++) {
     if (missing[i] === 1) continue;
     const dni = dniColumn[i];
     const dhi = dhiColumn[i];
@@ -397,22 +575,21 @@ function hourlyGain(n: number, plane: PreparedPlane, dniExtra: Float64Array, kb:
 }
 
 /**
- * Fills the dni, dhi and missing columns from the window's weather, one loop per kind (no switch
+ * Fills the dni, dhi and missing columns of rows `from` … `to` − 1 from the window's weather, one loop per kind (no switch
  * per hour): clear-sky models at each hour's sun (0 with the sun down), a supplied series as given
  * (a non-finite value marks the row missing), or a supplied GHI series split by Erbs et al.
  */
-function fillWeather(w: PreparedWindow, alt: Float64Array, zen: Float64Array, out: AnnualSeries): void {
+function fillWeather(w: PreparedWindow, alt: Float64Array, zen: Float64Array, out: AnnualSeries, from: number, to: number): void {
   const weather = w.spec.weather;
-  const n = out.hours;
   const { dni, dhi, missing } = out;
   const months = monthOfDay(w.spec.year);
   switch (weather.kind) {
     case 'ashraeClearSky':
-      for (let day = 0; day * 24 < n; day++) {
+      for (let day = (from / 24) | 0; day * 24 < to; day++) {
         const month = months[day];
         const tauB = monthlyValue(weather.tauB, month);
         const tauD = monthlyValue(weather.tauD, month);
-        for (let i = day * 24; i < day * 24 + 24; i++) {
+        for (let i = Math.max(from, day * 24); i < Math.min(to, day * 24 + 24); i++) {
           if (!(alt[i] > 0)) continue; // sun down: no irradiance (the columns start at 0)
           const c = ashraeClearSky(alt[i], day + 1, tauB, tauD);
           dni[i] = c.dni;
@@ -422,9 +599,9 @@ function fillWeather(w: PreparedWindow, alt: Float64Array, zen: Float64Array, ou
       return;
     case 'ineichenClearSky': {
       const elevation = w.spec.site.elevation ?? 0;
-      for (let day = 0; day * 24 < n; day++) {
+      for (let day = (from / 24) | 0; day * 24 < to; day++) {
         const linke = monthlyValue(weather.linkeTurbidity, months[day]);
-        for (let i = day * 24; i < day * 24 + 24; i++) {
+        for (let i = Math.max(from, day * 24); i < Math.min(to, day * 24 + 24); i++) {
           if (!(alt[i] > 0)) continue;
           const c = ineichenPerezClearSky(alt[i], day + 1, linke, elevation);
           dni[i] = c.dni;
@@ -437,7 +614,7 @@ function fillWeather(w: PreparedWindow, alt: Float64Array, zen: Float64Array, ou
       const dniIn = weather.dni;
       const dhiIn = weather.dhi;
       const rowOf = w.yearFit!.rowOf;
-      for (let i = 0; i < n; i++) {
+      for (let i = from; i < to; i++) {
         const b = dniIn[rowOf[i]];
         const d = dhiIn[rowOf[i]];
         if (Number.isFinite(b) && Number.isFinite(d)) {
@@ -450,7 +627,7 @@ function fillWeather(w: PreparedWindow, alt: Float64Array, zen: Float64Array, ou
     case 'globalHorizontal': {
       const ghiIn = weather.ghi;
       const rowOf = w.yearFit!.rowOf;
-      for (let i = 0; i < n; i++) {
+      for (let i = from; i < to; i++) {
         const ghi = ghiIn[rowOf[i]];
         if (!Number.isFinite(ghi)) {
           missing[i] = 1;

@@ -5,7 +5,8 @@
  */
 import { SunpaneError, requireRange } from '../common';
 import { civilToSerial, standardToClock } from '../time';
-import { gainOfPrepared, prepareWindow, type PreparedWindow } from './windowGain';
+import { prepareWindow, type PreparedWindow } from './prepared';
+import { gainAtStamp } from './windowGain';
 import type { Weather, WindowSpec } from './window';
 
 /** Options of {@link designDayGains}. */
@@ -25,7 +26,11 @@ export interface DesignDayGainMonth {
   month: number;
   /** Day of the month. */
   day: number;
-  /** Window solar gain of each hour [W]; index 0 is the hour ending 01:00 (local standard time), sun at its middle. */
+  /**
+   * Window solar gain of each hour [W], read by the window's time convention (local standard time):
+   * `hourEnding` — index 0 is the hour ending 01:00, sun at its middle; `instant` — index 0 is
+   * 00:00, sun at that instant.
+   */
   hourlyGain: number[];
   /** The solar gain by part [W]: transmitted beam, and diffuse (sky + ground). */
   hourlyBeam: number[];
@@ -34,13 +39,16 @@ export interface DesignDayGainMonth {
   hourlyConduction: number[];
   /** Outdoor dry-bulb of each hour [°C] (empty without a U-value). */
   hourlyDryBulb: number[];
-  /** Hour ending (1…24, local standard time) of the largest gain; the earliest on ties. */
+  /**
+   * Hour of the largest gain (local standard time), the earliest on ties: the hour ending 1…24
+   * (`hourEnding`) or the instant's hour 0…23 (`instant`).
+   */
   peakHour: number;
   /** The largest hourly gain [W] (0 when the sun never reaches the window that day). */
   peakGain: number;
-  /** Local serial at the end of the peak hour. */
+  /** Local serial of the peak hour's stamp (its end for `hourEnding`, the instant for `instant`). */
   peakStamp: number;
-  /** The peak hour's end on the local clock (serial; equals `peakStamp` without daylight saving). */
+  /** The peak hour's stamp on the local clock (serial; equals `peakStamp` without daylight saving). */
   peakClockStamp: number;
 }
 
@@ -61,7 +69,9 @@ export function peakOfDay(values: ArrayLike<number>): { index: number; value: nu
  * @returns 12 months, January first, and the prepared window (for the radiant fraction and
  *   anything else a caller needs); a month whose design day has no sun on the window has peak 0
  *   at the first hour
- * @remarks Gain as in gain/windowGain.ts at the middle of each hour of spec.year's design day.
+ * @remarks Gain as in gain/windowGain.ts for each hour of spec.year's design day, read by the
+ *   window's time convention (default: hour ending, sun at mid-hour); each hour is a row of the
+ *   window's year, with the same numbers as the annual series.
  * @throws SunpaneError naming `day` or `weather.kind` / `clearSky.kind` (a measured weather series
  *   and no clear-sky model given)
  */
@@ -74,6 +84,8 @@ export function designDayGains(spec: WindowSpec, options: DesignDayGainOptions =
   }
   const w = prepareWindow(options.clearSky ? { ...spec, weather: options.clearSky } : spec);
   const months: DesignDayGainMonth[] = [];
+  const first = w.convention === 'hourEnding' ? 1 : 0; // stamp of the day's first hour, in hours after midnight
+  const half = w.convention === 'hourEnding' ? 1 / 48 : 0; // an hour-ending stamp moves on the clock with its hour's middle
   for (let month = 1; month <= 12; month++) {
     const midnight = civilToSerial(spec.year, month, day);
     const hourlyGain: number[] = [];
@@ -82,7 +94,7 @@ export function designDayGains(spec: WindowSpec, options: DesignDayGainOptions =
     const hourlyConduction: number[] = [];
     const hourlyDryBulb: number[] = [];
     for (let h = 0; h < 24; h++) {
-      const hour = gainOfPrepared(w, midnight + (h + 0.5) / 24);
+      const hour = gainAtStamp(w, midnight + (h + first) / 24);
       hourlyGain.push(hour.gain.total);
       hourlyBeam.push(hour.gain.beam);
       hourlyDiffuse.push(hour.gain.sky + hour.gain.ground);
@@ -90,9 +102,9 @@ export function designDayGains(spec: WindowSpec, options: DesignDayGainOptions =
       if (hour.outdoorTemperature !== undefined) hourlyDryBulb.push(hour.outdoorTemperature);
     }
     const peak = peakOfDay(hourlyGain);
-    const peakStamp = midnight + (peak.index + 1) / 24;
-    const peakClockStamp = standardToClock(peakStamp - 1 / 48, spec.site.daylightSaving) + 1 / 48;
-    months.push({ month, day, hourlyGain, hourlyBeam, hourlyDiffuse, hourlyConduction, hourlyDryBulb, peakHour: peak.index + 1, peakGain: peak.value, peakStamp, peakClockStamp });
+    const peakStamp = midnight + (peak.index + first) / 24;
+    const peakClockStamp = standardToClock(peakStamp - half, spec.site.daylightSaving) + half;
+    months.push({ month, day, hourlyGain, hourlyBeam, hourlyDiffuse, hourlyConduction, hourlyDryBulb, peakHour: peak.index + first, peakGain: peak.value, peakStamp, peakClockStamp });
   }
   return { months, window: w };
 }

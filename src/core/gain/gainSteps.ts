@@ -1,11 +1,13 @@
 /**
- * The gain explanation: one hour's window gain as an ordered table of steps, from sun position to
+ * The gain explanation: one hour's window gain as an ordered table of steps, from the instant the
+ * sun is taken at (the first step, so the time convention is never hidden) and the sun position to
  * watts, each with its value, unit and the method used — for checking a consultant's number by hand.
  */
 import { hasShading, HORIZON_BAND_DEG } from '../shading';
-import { clockToStandard, describeDaylightSaving, formatSerialIso, requireSerial } from '../time';
+import { describeDaylightSaving, formatSerialIso, requireStamp } from '../time';
 import { glazingTypeOf, shgcBasisOf } from '../glazing';
-import { gainOfPrepared, prepareWindow, type WeatherHour, type WindowGainHour } from './windowGain';
+import { prepareWindow } from './prepared';
+import { forHour, gainAtStamp, standardStamp, type WeatherHour, type WindowGainHour } from './windowGain';
 import { skyModelOf } from './windowSpec';
 import type { WindowSpec } from './window';
 
@@ -82,8 +84,8 @@ export function stepsOf(spec: WindowSpec, h: WindowGainHour): GainStep[] {
   const shgcModel = shgcModelText(spec);
   const when = formatSerialIso(h.dateTime);
   const rule = spec.site.daylightSaving;
-  add('local clock time', h.clockTime, 'date-time', `${formatSerialIso(h.clockTime)} on the clock; ${describeDaylightSaving(rule)}`);
-  add('local standard time', h.dateTime, 'date-time', rule ? `${when}: clock time less the daylight-saving shift inside the period` : 'the clock keeps standard time all year');
+  add('sun evaluated at', h.dateTime, 'date-time', instantText(h));
+  add('local clock time', h.clockTime, 'date-time', `${formatSerialIso(h.clockTime)} on the clock; ${describeDaylightSaving(rule)}${rule ? '; standard time is clock time less the daylight-saving shift inside the period' : ''}`);
   add('sun altitude', h.sunAltitude, '°', `NREL SPA (Reda & Andreas 2008) at ${when} local standard time, with refraction`);
   add('sun azimuth', h.sunAzimuth, '°', 'NREL SPA, clockwise from north');
   add('incidence angle', h.incidence, '°', 'angle between the sun and the window normal: cos θ = sin β cos Σ + cos β sin Σ cos(φ − ψ)');
@@ -123,13 +125,24 @@ export function stepsOf(spec: WindowSpec, h: WindowGainHour): GainStep[] {
   return rows.map((r, i) => ({ step: i + 1, ...r }));
 }
 
+/** Where the sun was taken, in words: the date-time as given, the convention, the instant used. */
+function instantText(h: WindowGainHour): string {
+  const given = formatSerialIso(h.stamp);
+  const used = formatSerialIso(h.dateTime);
+  const row = h.row !== undefined ? `; row ${h.row + 1} of the hourly year` : '';
+  return h.convention === 'hourEnding'
+    ? `local standard time ${used}: the middle of the hour ending ${given} (time convention hourEnding)${row}`
+    : `local standard time ${used}: the date-time itself (time convention instant)${row}`;
+}
+
 /**
- * The gain of one window at one instant, explained step by step.
+ * The gain of one window for one hour, explained step by step.
  * @param spec - the window (validated; errors name the field by its path)
- * @param dateTime - local date-time at which the sun is evaluated (serial): standard time, or clock
- *   time when the site has a daylight-saving rule
+ * @param dateTime - local date-time (serial): standard time, or clock time when the site has a
+ *   daylight-saving rule; read by the window's `timeConvention` (default `hourEnding`: the hour
+ *   ending at `dateTime`, sun at mid-hour)
  * @param weatherHour - DNI and DHI of the hour [W/m²]; omitted: from `spec.weather`
- * @returns the ordered steps: sun altitude and azimuth → incidence and profile angles → sunlit
+ * @returns the ordered steps: the instant the sun was taken at, clock time → sun altitude and azimuth → incidence and profile angles → sunlit
  *   fraction → DNI, DHI → sky and ground view ratios and horizon band share → irradiance on the bare
  *   window and on the shaded window by part → SHGC at the angle, diffuse SHGC →
  *   interior attenuation → glass area → gain by part [W] → radiant and convective parts. At night the
@@ -137,7 +150,7 @@ export function stepsOf(spec: WindowSpec, h: WindowGainHour): GainStep[] {
  * @remarks Same calculation as {@link windowGainAt}; see src/core/gain/windowGain.ts for the equation and source.
  */
 export function gainSteps(spec: WindowSpec, dateTime: number, weatherHour?: WeatherHour): GainStep[] {
-  requireSerial('dateTime', dateTime);
-  const w = prepareWindow(spec);
-  return stepsOf(spec, gainOfPrepared(w, clockToStandard(dateTime, spec.site.daylightSaving), weatherHour));
+  const w = prepareWindow(forHour(spec, dateTime));
+  requireStamp('dateTime', dateTime, w.convention);
+  return stepsOf(spec, gainAtStamp(w, standardStamp(w, dateTime), weatherHour));
 }

@@ -11,6 +11,7 @@ import type { Glazing } from '../glazing';
 import type { Shading } from '../shading';
 import type { SkyModel } from '../sky';
 import type { Site } from '../sun';
+import type { TimeConvention } from '../time';
 
 /**
  * Outdoor dry-bulb on clear design days: the day's highest temperature and its daily range, each 12
@@ -76,6 +77,11 @@ export interface WindowSpec {
    * cut only the beam, the skyline scales the whole sky diffuse by its sky view, the ground is not cut.
    */
   diffuseShading?: DiffuseShading;
+  /**
+   * How date-times and hourly rows are read: `hourEnding` (default; rows stamped at the end of
+   * their hour, sun at mid-hour) or `instant` (rows stamped at the top of the hour, sun at the stamp).
+   */
+  timeConvention?: TimeConvention;
 }
 
 /** The two treatments of diffuse light behind shading devices ({@link WindowSpec.diffuseShading}). */

@@ -19,15 +19,16 @@
  * is 0 and only the diffuse parts (possibly 0) remain. The beam counts only when the sun at the
  * instant evaluated is above the horizon.
  */
-import { SunpaneError, requireRange } from '../common';
-import { glassArea as glassAreaOf, interiorAttenuationsOf, shgcBasisOf, shgcCurve, type ShgcCurve, solarArea } from '../glazing';
-import { BARE_VIEW_FACTORS, hasShading, sunlitFraction, skylineSkyViewFactor, type WindowViewFactors, windowViewFactors } from '../shading';
-import { outdoorTemperatureSource, radiantFractionsOf, skyModelOf, validateWindowSpec } from './windowSpec';
-import { ashraeClearSky, decomposeErbs, ineichenPerezClearSky, planeIrradiance, type SkyModel } from '../sky';
-import { sunPosition, type SunOptions, incidenceAngle, profileAngle } from '../sun';
-import { civilToSerial, clockToStandard, dayOfYear, fitYearOfHours, hoursInYear, serialToCivil, serialToUtcMs, requireSerial, standardToClock, type YearFit } from '../time';
-import { fractionOfDailyRange } from './outdoorTemperature';
-import type { DiffuseShading, Weather, WindowSpec } from './window';
+import { requireRange } from '../common';
+import { sunlitFraction } from '../shading';
+import { planeIrradiance } from '../sky';
+import { sunPosition, incidenceAngle, profileAngle } from '../sun';
+import { clockToStandard, dayOfYear, DEFAULT_TIME_CONVENTION, evaluationSerial, requireStamp, rowOfSerial, rowStamp, serialToCivil, serialToUtcMs, standardToClock, type TimeConvention } from '../time';
+import { type AnnualRow, annualRowOfPrepared } from './annual';
+import { circumsolarShade, hourIndexOf, outdoorTemperatureAt, type PreparedWindow, prepareWindow, type WeatherHour, weatherFromSpec, weatherSourceText } from './prepared';
+import type { DiffuseShading, WindowSpec } from './window';
+
+export type { WeatherHour };
 
 /** The inputs of the gain equation for one hour. */
 export interface GainInput {
@@ -103,16 +104,16 @@ export function windowGainParts(input: GainInput): GainParts {
   return { beam, sky, ground, total, radiant, convective: total - radiant, conduction: 0 };
 }
 
-/** Direct normal and diffuse horizontal irradiance of one hour [W/m²]. */
-export interface WeatherHour {
-  dni: number;
-  dhi: number;
-}
-
 /** Everything about one hour's gain, from sun position to watts. */
 export interface WindowGainHour {
+  /** The date-time as given, in local standard time (serial), read by {@link convention}. */
+  stamp: number;
+  /** How the date-time was read: `hourEnding` (sun at mid-hour) or `instant`. */
+  convention: TimeConvention;
   /** The local standard date-time the sun was evaluated at (serial). */
   dateTime: number;
+  /** The row of the window's year this hour is (its numbers are that row's), or undefined off the rows' stamps. */
+  row: number | undefined;
   /** The same instant on the local clock (serial; equals `dateTime` without daylight saving). */
   clockTime: number;
   /** How a supplied series' rows were fitted to the window's year, in words (undefined for clear skies). */
@@ -164,178 +165,87 @@ export interface WindowGainHour {
   gain: GainParts;
 }
 
-/** A validated window with everything that does not change from hour to hour worked out once. */
-export interface PreparedWindow {
-  spec: WindowSpec;
-  curve: ShgcCurve;
-  glassArea: number;
-  /** Area the SHGC applies to [m²] (glass area, or the rough opening for a whole-window SHGC). */
-  solarArea: number;
-  /** What the glass sees of the open sky, ground and horizon band (the bare window's when nothing shades). */
-  viewFactors: WindowViewFactors;
-  /** True for the earlier beam-only treatment of diffuse light ({@link WindowSpec.diffuseShading}). */
-  beamOnly: boolean;
-  /** The constant multipliers on the isotropic sky, the horizon band and the ground. */
-  shade: { isotropic: number; horizon: number; ground: number };
-  /** Beam-only treatment: the skyline's sky view, which then multiplies the circumsolar part too. */
-  skylineSky: number;
-  /** Interior attenuation of the beam [-] (the historical single coefficient). */
-  interiorAttenuation: number;
-  interiorAttenuationDiffuse: number;
-  /** True when an interior shade is present (either attenuation below 1): the beam then goes to the non-solar radiant time series. */
-  interiorShade: boolean;
-  /** Radiant share of the beam gain [-]. */
-  radiantFraction: number;
-  radiantFractionDiffuse: number;
-  radiantFractionConduction: number;
-  /** U · rough-opening area [W/K], 0 without a U-value. */
-  conductance: number;
-  /** The sky model after defaults (`ashraeClearDay` on τb/τd clear skies unless given). */
-  skyModel: SkyModel;
-  /** Row map of a supplied series to the year (undefined for clear skies). */
-  yearFit?: YearFit;
-  vertical: boolean;
-  shaded: boolean;
-  sunOptions: SunOptions;
-  /** Serial of 1 January 00:00 of spec.year. */
-  yearStart: number;
-  hours: number;
+/** How close to a row's stamp a date-time must be to be that row [days]: about 9 ms. */
+const ON_STAMP = 1e-7;
+
+/** The row of the window's year whose stamp a date-time is, or undefined when it is none. */
+export function rowAtStamp(w: PreparedWindow, stamp: number): number | undefined {
+  const row = rowOfSerial(w.yearStart, stamp, w.convention);
+  if (row < 0 || row >= w.hours) return undefined;
+  return Math.abs(rowStamp(w.yearStart, row, w.convention) - stamp) < ON_STAMP ? row : undefined;
 }
 
-/** Validates a window and works out its hour-independent quantities. */
-export function prepareWindow(spec: WindowSpec): PreparedWindow {
-  validateWindowSpec(spec);
-  const { site } = spec;
-  const sunOptions: SunOptions = {};
-  if (site.elevation !== undefined) sunOptions.elevation = site.elevation;
-  if (site.pressure !== undefined) sunOptions.pressure = site.pressure;
-  if (site.temperature !== undefined) sunOptions.temperature = site.temperature;
-  const skyline = spec.shading.skyline;
-  const iac = interiorAttenuationsOf(spec.glazing);
-  const fr = radiantFractionsOf(spec.glazing);
-  const w = spec.weather;
-  const series = w.kind === 'measured' ? w.dni : w.kind === 'globalHorizontal' ? w.ghi : undefined;
-  const vertical = spec.surfaceTilt === 90;
-  // Per window, never per hour (devices are refused on tilted windows, so a tilted one is bare).
-  const viewFactors = vertical ? windowViewFactors({ width: spec.width, height: spec.height }, spec.shading, spec.surfaceAzimuth) : { ...BARE_VIEW_FACTORS };
-  const beamOnly = spec.diffuseShading === 'beamOnly';
-  const skylineSky = skyline !== undefined ? skylineSkyViewFactor(skyline, spec.surfaceAzimuth) : 1;
+/**
+ * Gain of a prepared window for a local standard date-time read by the window's time convention,
+ * with the hour's weather given or taken from the window. At a row's stamp the numbers are the
+ * year's row (the same passes and sun path as the annual series, {@link annualRowOfPrepared});
+ * between stamps the same equations run at the evaluation instant with the sun by the direct SPA.
+ */
+export function gainAtStamp(w: PreparedWindow, stamp: number, weatherHour?: WeatherHour): WindowGainHour {
+  const instant = evaluationSerial(stamp, w.convention);
+  const row = rowAtStamp(w, stamp);
+  if (row !== undefined) return hourOfRow(w, annualRowOfPrepared(w, row, weatherHour), stamp, instant, weatherHour !== undefined);
+  return gainOfPrepared(w, instant, weatherHour, stamp);
+}
+
+/** The hour's explanation from a row of the year (every number the row's). */
+function hourOfRow(w: PreparedWindow, r: AnnualRow, stamp: number, instant: number, given: boolean): WindowGainHour {
+  const { spec } = w;
+  const { month } = serialToCivil(instant);
+  const source = given ? 'given for this hour' : weatherSourceText(spec.weather, month);
+  const kd = w.solarArea * w.interiorAttenuationDiffuse;
+  const gd = w.curve.diffuse;
+  const conducts = spec.glazing.uValue !== undefined;
   return {
-    spec,
-    curve: shgcCurve(spec.glazing),
-    glassArea: glassAreaOf(spec.width, spec.height, spec.frameFraction),
-    solarArea: solarArea(spec.width, spec.height, spec.frameFraction, shgcBasisOf(spec.glazing)),
-    viewFactors,
-    beamOnly,
-    shade: beamOnly ? { isotropic: skylineSky, horizon: skylineSky, ground: 1 } : { isotropic: viewFactors.skyRatio, horizon: viewFactors.horizonShare, ground: viewFactors.groundRatio },
-    skylineSky,
-    interiorAttenuation: iac.beam,
-    interiorAttenuationDiffuse: iac.diffuse,
-    interiorShade: iac.shaded,
-    radiantFraction: fr.beam,
-    radiantFractionDiffuse: fr.diffuse,
-    radiantFractionConduction: fr.conduction,
-    conductance: (spec.glazing.uValue ?? 0) * spec.width * spec.height,
-    skyModel: skyModelOf(spec),
-    yearFit: series !== undefined ? fitYearOfHours(series.length, spec.year, w.kind === 'measured' ? 'weather.dni' : 'weather.ghi') : undefined,
-    vertical,
-    shaded: hasShading(spec.shading),
-    sunOptions,
-    yearStart: civilToSerial(spec.year, 1, 1),
-    hours: hoursInYear(spec.year),
+    stamp,
+    convention: w.convention,
+    dateTime: instant,
+    row: r.row,
+    clockTime: standardToClock(instant, spec.site.daylightSaving),
+    yearFit: w.yearFit?.text,
+    missing: r.missing,
+    weatherSource: r.missing ? `${source}: no value for this hour` : source,
+    sunAltitude: r.sunAltitude,
+    sunAzimuth: r.sunAzimuth,
+    incidence: r.incidence,
+    profileAngle: r.profileAngle,
+    sunlitFraction: r.sunlitFraction,
+    skyViewRatio: w.shade.isotropic,
+    groundViewRatio: w.shade.ground,
+    horizonShare: w.shade.horizon,
+    diffuseShading: w.beamOnly ? 'beamOnly' : 'viewFactors',
+    dni: r.dni,
+    dhi: r.dhi,
+    beam: r.beam,
+    sky: r.sky,
+    ground: r.ground,
+    skyUnshaded: r.skyUnshaded,
+    groundUnshaded: r.groundUnshaded,
+    shgcBeam: r.shgc,
+    shgcDiffuse: gd,
+    interiorAttenuation: w.interiorAttenuation,
+    radiantFraction: w.radiantFraction,
+    interiorAttenuationDiffuse: w.interiorAttenuationDiffuse,
+    radiantFractionDiffuse: w.radiantFractionDiffuse,
+    glassArea: w.glassArea,
+    solarArea: w.solarArea,
+    outdoorTemperature: conducts ? r.dryBulb : undefined,
+    indoorTemperature: conducts ? spec.indoorTemperature : undefined,
+    gain: { beam: r.gainBeam, sky: kd * r.sky * gd, ground: kd * r.ground * gd, total: r.gain, radiant: r.radiant, convective: r.convective, conduction: r.conduction },
   };
 }
 
 /**
- * The multiplier on the circumsolar part of the sky diffuse for an hour: the beam's sunlit fraction
- * (the circumsolar light comes from the sun's direction, so what shades the sun shades it), or, in
- * the beam-only treatment, the skyline's sky view as before.
+ * Gain of a prepared window with the sun at a given instant (the direct path), with the hour's
+ * weather given or taken from the spec.
+ * @param w - the prepared window
+ * @param serial - local standard serial of the instant the sun is evaluated at
+ * @param weatherHour - the hour's DNI and DHI; omitted: the window's weather (a supplied series'
+ *   row is the one `stamp` belongs to)
+ * @param stamp - the date-time as given, read by the window's convention (default: the stamp whose
+ *   evaluation instant is `serial`)
  */
-export function circumsolarShade(w: PreparedWindow, sunlit: number): number {
-  return w.beamOnly ? w.skylineSky : sunlit;
-}
-
-/** Value of a 12-monthly or single-value list for a month 1…12. */
-export function monthlyValue(values: readonly number[], month: number): number {
-  return values.length === 12 ? values[month - 1] : values[0];
-}
-
-/** Words describing a weather source, for the explanation. */
-export function weatherSourceText(weather: Weather, month: number): string {
-  switch (weather.kind) {
-    case 'ashraeClearSky':
-      return `ASHRAE clear-sky model, τb ${monthlyValue(weather.tauB, month)}, τd ${monthlyValue(weather.tauD, month)} (Gueymard & Thevenard 2013)`;
-    case 'ineichenClearSky':
-      return `Ineichen & Perez (2002) clear sky, Linke turbidity ${monthlyValue(weather.linkeTurbidity, month)}`;
-    case 'measured':
-      return 'supplied hourly series';
-    case 'globalHorizontal':
-      return 'supplied global horizontal split by Erbs et al. (1982)';
-  }
-}
-
-/**
- * Irradiance of the hour from the window's weather: clear-sky models at the sun's altitude, or the
- * supplied series' row `hourIndex`. Returns undefined for a missing row.
- */
-export function weatherFromSpec(w: PreparedWindow, hourIndex: number, month: number, doy: number, sunAltitude: number, sunZenith: number): WeatherHour | undefined {
-  const weather = w.spec.weather;
-  switch (weather.kind) {
-    case 'ashraeClearSky': {
-      const c = ashraeClearSky(sunAltitude, doy, monthlyValue(weather.tauB, month), monthlyValue(weather.tauD, month));
-      return { dni: c.dni, dhi: c.dhi };
-    }
-    case 'ineichenClearSky': {
-      const c = ineichenPerezClearSky(sunAltitude, doy, monthlyValue(weather.linkeTurbidity, month), w.spec.site.elevation ?? 0);
-      return { dni: c.dni, dhi: c.dhi };
-    }
-    case 'measured': {
-      const row = w.yearFit!.rowOf[hourIndex];
-      const dni = weather.dni[row];
-      const dhi = weather.dhi[row];
-      if (!Number.isFinite(dni) || !Number.isFinite(dhi)) return undefined;
-      return { dni, dhi };
-    }
-    case 'globalHorizontal': {
-      const ghi = weather.ghi[w.yearFit!.rowOf[hourIndex]];
-      if (!Number.isFinite(ghi)) return undefined;
-      const d = decomposeErbs(ghi, sunZenith, doy);
-      return { dni: d.dni, dhi: d.dhi };
-    }
-  }
-}
-
-/** Row of the year's hourly series whose hour contains the serial, or throws naming `dateTime`. */
-export function hourIndexOf(w: PreparedWindow, serial: number): number {
-  const index = Math.floor((serial - w.yearStart) * 24 + 1e-9);
-  if (index < 0 || index >= w.hours) {
-    throw new SunpaneError('dateTime', serial, `must fall in ${w.spec.year}, the year of the window's weather series`);
-  }
-  return index;
-}
-
-/**
- * Outdoor dry-bulb [°C] of the hour containing a local standard serial: the supplied series' row, or
- * the design-day profile of the month (hour ending, local standard time); NaN for a missing row,
- * undefined without a source.
- */
-export function outdoorTemperatureAt(w: PreparedWindow, serial: number, month: number): number | undefined {
-  const weather = w.spec.weather;
-  const source = outdoorTemperatureSource(weather);
-  if (source === undefined) return undefined;
-  if (source === 'series') {
-    const series = (weather as { dryBulb: ArrayLike<number> }).dryBulb;
-    const value = series[w.yearFit!.rowOf[hourIndexOf(w, serial)]];
-    return Number.isFinite(value) ? value : Number.NaN;
-  }
-  const d = weather as { dryBulbMax: number[]; dailyRange: number[] };
-  const hoursOfDay = (serial - Math.floor(serial)) * 24;
-  const hourEnding = Math.min(24, Math.floor(hoursOfDay + 1e-9) + 1);
-  return monthlyValue(d.dryBulbMax, month) - fractionOfDailyRange(hourEnding) * monthlyValue(d.dailyRange, month);
-}
-
-/** Gain of a prepared window at a local standard-time serial, with the hour's weather given or taken from the spec. */
-export function gainOfPrepared(w: PreparedWindow, serial: number, weatherHour?: WeatherHour): WindowGainHour {
+export function gainOfPrepared(w: PreparedWindow, serial: number, weatherHour?: WeatherHour, stamp = w.convention === 'hourEnding' ? serial + 1 / 48 : serial): WindowGainHour {
   const { spec } = w;
   const { site } = spec;
   const utcMs = serialToUtcMs(serial, site.utcOffset);
@@ -349,7 +259,7 @@ export function gainOfPrepared(w: PreparedWindow, serial: number, weatherHour?: 
     weatherSource = 'given for this hour';
   } else {
     const clear = spec.weather.kind === 'ashraeClearSky' || spec.weather.kind === 'ineichenClearSky';
-    weather = weatherFromSpec(w, clear ? 0 : hourIndexOf(w, serial), month, doy, sun.altitude, sun.zenith);
+    weather = weatherFromSpec(w, clear ? 0 : hourIndexOf(w, stamp), month, doy, sun.altitude, sun.zenith);
     weatherSource = weatherSourceText(spec.weather, month);
   }
   const incidence = incidenceAngle(sun.altitude, sun.azimuth, spec.surfaceTilt, spec.surfaceAzimuth);
@@ -387,12 +297,15 @@ export function gainOfPrepared(w: PreparedWindow, serial: number, weatherHour?: 
   });
   let outdoorTemperature: number | undefined;
   if (w.conductance > 0 || spec.glazing.uValue !== undefined) {
-    outdoorTemperature = outdoorTemperatureAt(w, serial, month);
+    outdoorTemperature = outdoorTemperatureAt(w, stamp, month);
     const dt = outdoorTemperature !== undefined && Number.isFinite(outdoorTemperature) ? outdoorTemperature - spec.indoorTemperature! : 0;
     gain.conduction = w.conductance * dt; // U · A · (T_out − T_in)
   }
   return {
+    stamp,
+    convention: w.convention,
     dateTime: serial,
+    row: undefined,
     clockTime: standardToClock(serial, site.daylightSaving),
     yearFit: w.yearFit?.text,
     missing,
@@ -428,21 +341,46 @@ export function gainOfPrepared(w: PreparedWindow, serial: number, weatherHour?: 
 }
 
 /**
- * Solar gain of one window at one instant.
- * @param spec - the window (validated here; errors name the field by its path)
- * @param dateTime - local date-time at which the sun is evaluated (serial): standard time, or clock
- *   time when the site has a daylight-saving rule (converted here; see src/core/time/clock.ts);
- *   for an hourly row stamped at the end of its hour pass the middle of the hour (stamp − 1/48)
+ * Solar gain of one window for one hour.
+ * @param spec - the window (validated here; errors name the field by its path). Its
+ *   `timeConvention` says how `dateTime` is read: `hourEnding` (default) — the hour ending at
+ *   `dateTime`, sun at its middle; `instant` — the sun at `dateTime`
+ * @param dateTime - local date-time (serial): standard time, or clock time when the site has a
+ *   daylight-saving rule (converted here; see src/core/time/clock.ts)
  * @param weatherHour - the hour's direct normal and diffuse horizontal irradiance [W/m²], each
- *   0…2000; omitted: from `spec.weather` — the clear-sky model at this instant, or the supplied
- *   series' row for the hour containing `dateTime` (which must then fall in `spec.year`)
- * @returns sun, angles, sunlit fraction, irradiance, SHGCs, glass area and the gain parts [W]; at
- *   night or with the sun behind the window the beam gain is 0; a missing row gives `missing: true`
- *   and zero irradiance and gain
+ *   0…2000; omitted: from `spec.weather` — the clear-sky model, or the supplied series' row for the
+ *   hour `dateTime` names (which must then fall in `spec.year`)
+ * @returns sun, angles, sunlit fraction, irradiance, SHGCs, areas and the gain parts [W]; at night
+ *   or with the sun behind the window the beam gain is 0; a missing row gives `missing: true` and
+ *   zero irradiance and gain. At a row's stamp of the year the numbers are exactly those of that
+ *   row of {@link annualSeries} (for a clear sky, of the year the hour falls in).
  * @remarks See the module comment for the gain equation and its source.
  */
 export function windowGainAt(spec: WindowSpec, dateTime: number, weatherHour?: WeatherHour): WindowGainHour {
-  requireSerial('dateTime', dateTime);
-  const w = prepareWindow(spec);
-  return gainOfPrepared(w, clockToStandard(dateTime, spec.site.daylightSaving), weatherHour);
+  const w = prepareWindow(forHour(spec, dateTime));
+  requireStamp('dateTime', dateTime, w.convention);
+  return gainAtStamp(w, standardStamp(w, dateTime), weatherHour);
+}
+
+/**
+ * A date-time read by the window's convention, from the local clock to local standard time: an
+ * hour-ending stamp moves with its hour's middle (as the annual series' clock stamps do), an
+ * instant moves itself. Unchanged without a daylight-saving rule.
+ */
+export function standardStamp(w: PreparedWindow, dateTime: number): number {
+  const rule = w.spec.site.daylightSaving;
+  if (rule === undefined) return dateTime;
+  return w.convention === 'hourEnding' ? clockToStandard(dateTime - 1 / 48, rule) + 1 / 48 : clockToStandard(dateTime, rule);
+}
+
+/**
+ * The window for the hour a date-time names: under a clear sky the year of the series is the year
+ * the hour falls in (so the hour is a row of it); supplied hourly weather keeps its own year.
+ */
+export function forHour(spec: WindowSpec, dateTime: number): WindowSpec {
+  const clear = spec?.weather?.kind === 'ashraeClearSky' || spec?.weather?.kind === 'ineichenClearSky';
+  if (!clear || typeof dateTime !== 'number' || !Number.isFinite(dateTime)) return spec;
+  const convention = spec.timeConvention === 'instant' ? 'instant' : DEFAULT_TIME_CONVENTION;
+  const year = serialToCivil(evaluationSerial(dateTime, convention)).year;
+  return year === spec.year || year < 1901 || year > 9998 ? spec : { ...spec, year };
 }

@@ -5,7 +5,7 @@
  */
 import { SunpaneError, requireRange } from '../common';
 import { LINKE_MAX, LINKE_MIN, TAU_B_MAX, TAU_D_MAX, type SkyModel } from '../sky';
-import { fitYearOfHours, requireDaylightSaving, requireYear } from '../time';
+import { fitYearOfHours, requireDaylightSaving, requireTimeConvention, requireYear } from '../time';
 import { glazingTypeOf, interiorAttenuationsOf, requireAngleTable, requireTypeParameter, shgcBasisOf, type Glazing } from '../glazing';
 import { PATH_SHADING_NAMES, requireShading, requireVerticalForShading, type Shading } from '../shading';
 import type { Site } from '../sun';
@@ -190,6 +190,7 @@ export function validateWindowSpec(spec: WindowSpec): WindowSpec {
       throw new SunpaneError(field, undefined, 'must be given with glazing.uValue: the conduction gain needs the outdoor dry-bulb (an hourly series, or on clear design days the highest dry-bulb and the daily range)');
     }
   }
+  requireTimeConvention(spec.timeConvention);
   return spec;
 }
 

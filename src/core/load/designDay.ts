@@ -22,7 +22,7 @@ export interface DesignDayOptions extends DesignDayGainOptions {
 export interface DesignDayMonth extends DesignDayGainMonth {
   /** Cooling load of each hour by the radiant time series [W], when factors were given. */
   coolingLoad?: number[];
-  /** Hour ending (1…24) of the largest cooling load, when factors were given. */
+  /** Hour of the largest cooling load, when factors were given: hour ending 1…24, or 0…23 for the time convention `instant` (as `peakHour`). */
   peakLoadHour?: number;
   /** The largest cooling load [W], when factors were given. */
   peakLoad?: number;
@@ -46,10 +46,11 @@ export function designDayPeaks(spec: WindowSpec, options: DesignDayOptions = {})
   const room: RoomSeries | undefined = options.room ?? (factors ? { solar: factors, nonSolar: factors } : undefined);
   const { months, window } = designDayGains(spec, options);
   if (!room) return months;
+  const first = window.convention === 'hourEnding' ? 1 : 0;
   const fractions = { beam: window.radiantFraction, diffuse: window.radiantFractionDiffuse, conduction: window.radiantFractionConduction };
   return months.map((m): DesignDayMonth => {
     const load = Array.from(windowCoolingLoad({ beam: m.hourlyBeam, diffuse: m.hourlyDiffuse, conduction: m.hourlyConduction }, room, fractions, window.interiorShade).total);
     const lp = peakOfDay(load);
-    return { ...m, coolingLoad: load, peakLoadHour: lp.index + 1, peakLoad: lp.value };
+    return { ...m, coolingLoad: load, peakLoadHour: lp.index + first, peakLoad: lp.value };
   });
 }

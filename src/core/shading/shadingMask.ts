@@ -8,7 +8,7 @@
 import { requireRange } from '../common';
 import { pointSunlit, requireShading, sunlitFraction, type WindowOpening } from './sunlit';
 import { sunPosition, type Site } from '../sun';
-import { civilToSerial, requireUtcOffset, requireYear, serialToUtcMs } from '../time';
+import { civilToSerial, hourFraction, requireTimeConvention, requireUtcOffset, requireYear, serialToUtcMs, type TimeConvention } from '../time';
 import type { Shading } from './types';
 
 /** The default year of the month × hour mask (any year gives the same mask to within 0.3° of sun). */
@@ -73,35 +73,44 @@ export interface MonthHourOptions {
   day?: number;
   /** Calendar year, 1901…9998; default {@link MASK_DEFAULT_YEAR}. */
   year?: number;
+  /**
+   * `hourEnding` (default): columns are the hours ending 01:00 … 24:00, sun at mid-hour;
+   * `instant`: columns are the instants 00:00 … 23:00.
+   */
+  timeConvention?: TimeConvention;
 }
 
 /**
  * Sunlit fraction of a window for each hour of one day in every month: 12 rows (January first) ×
- * 24 columns (hour ending 1:00 … 24:00 local standard time, sun at the middle of the hour).
+ * 24 columns (hour ending 1:00 … 24:00 local standard time, sun at the middle of the hour; or, with
+ * the `instant` time convention, the instants 00:00 … 23:00).
  *
  * @param site - latitude, longitude, UTC offset [h], optional elevation, pressure, temperature
  * @param window - glass width and height [length] > 0
  * @param shading - overhang, fins, reveal, skyline
  * @param surfaceAzimuth - direction the window faces [°] clockwise from north
- * @param options - `day` of each month 1…28 (default 21), `year` (default {@link MASK_DEFAULT_YEAR})
+ * @param options - `day` of each month 1…28 (default 21), `year` (default {@link MASK_DEFAULT_YEAR}),
+ *   `timeConvention` (default `hourEnding`)
  * @returns 12 × 24 sunlit fractions 0…1; 0 for hours with the sun down, behind the wall or below
  * the skyline
  * @remarks Sun position by the NREL SPA (Reda & Andreas 2008) via src/core/sun/spa.ts; hourly stamps at
- * the END of the hour with the sun at mid-hour (docs/conventions.md#hourly-rows).
- * @throws SunpaneError naming `day`, `year`, `utcOffset`, `latitude`, `longitude`, or any window or
- * shading argument
+ * the END of the hour with the sun at mid-hour by default, or at the top of the hour with the instant
+ * time convention (docs/conventions.md#hourly-rows).
+ * @throws SunpaneError naming `day`, `year`, `timeConvention`, `utcOffset`, `latitude`, `longitude`,
+ * or any window or shading argument
  */
 export function monthHourMask(site: Site, window: WindowOpening, shading: Shading, surfaceAzimuth: number, options: MonthHourOptions = {}): number[][] {
   requireShading(window, shading);
   const day = requireRange('day', options.day ?? 21, 1, 28, undefined, { integer: true });
   const year = requireYear(options.year ?? MASK_DEFAULT_YEAR);
   const utcOffset = requireUtcOffset(site.utcOffset);
+  const minute = hourFraction(requireTimeConvention(options.timeConvention)) * 60;
   const sunOptions = { elevation: site.elevation, pressure: site.pressure, temperature: site.temperature };
   const rows: number[][] = [];
   for (let month = 1; month <= 12; month++) {
     const row: number[] = [];
-    for (let hourEnding = 1; hourEnding <= 24; hourEnding++) {
-      const serial = civilToSerial(year, month, day, hourEnding - 1, 30);
+    for (let hour = 0; hour < 24; hour++) {
+      const serial = civilToSerial(year, month, day, hour, minute);
       const sun = sunPosition(serialToUtcMs(serial, utcOffset), site.latitude, site.longitude, sunOptions);
       row.push(sunlitFraction(window, shading, sun.altitude, sun.azimuth, surfaceAzimuth));
     }

@@ -9,5 +9,5 @@
 export { sunEvents } from './events';
 export { type Site } from './site';
 export { standardPressure, type SunOptions, type SunPosition, sunPosition } from './spa';
-export { annualSunPath } from './sunPath';
+export { annualSunPath, type SunPathYear } from './sunPath';
 export { incidenceAngle, profileAngle, wallSolarAzimuth } from './surfaceAngles';

@@ -75,8 +75,13 @@ export interface SunPathYear {
 }
 
 export interface SunPathOptions {
-  /** Where in each hour the sun is evaluated: `middle` (default, docs/conventions.md#hourly-rows) or `end` (the stamp). */
-  at?: 'middle' | 'end';
+  /**
+   * Where in each hour the sun is evaluated and how rows are stamped: `middle` (default: rows
+   * stamped at the end of each hour, sun at mid-hour — the `hourEnding` time convention, docs/conventions.md#hourly-rows), `end`
+   * (stamped at the end, sun at the stamp) or `start` (stamped at the start, sun at the stamp — the
+   * `instant` convention: rows 00:00 … 23:00).
+   */
+  at?: 'middle' | 'end' | 'start';
   /** ΔT = TT − UT [s], −100…10000; default Espenak & Meeus (2006) per day. */
   deltaT?: number;
   /**
@@ -108,7 +113,7 @@ export interface SunTrigColumns {
  * @param site - latitude [°] −90…90, longitude [°] −180…180, utcOffset [h] −12…14, and optional
  *   elevation [m], pressure [hPa], temperature [°C] as for {@link sunPosition}
  * @param options - `at`: `middle` (default) evaluates the sun at the middle of each hour, `end` at the
- *   stamp; `deltaT` [s]; `trig`: also the sines and cosines of altitude and azimuth (`true`: fresh
+ *   stamp, `start` at the start of each hour (stamped there); `deltaT` [s]; `trig`: also the sines and cosines of altitude and azimuth (`true`: fresh
  *   columns; or columns to fill, each at least as long as the year has hours); `slowColumns`:
  *   false leaves the declination and equation-of-time columns empty (default true)
  * @returns typed arrays, one value per hour; at night the altitude is simply negative
@@ -124,7 +129,7 @@ export function annualSunPath(year: number, site: Site, options: SunPathOptions 
   requireSite(latitude, longitude, 'site.');
   requireUtcOffset(utcOffset, 'site.utcOffset');
   const at = options.at ?? 'middle';
-  if (at !== 'middle' && at !== 'end') throw new SunpaneError('at', at, 'must be "middle" or "end"');
+  if (at !== 'middle' && at !== 'end' && at !== 'start') throw new SunpaneError('at', at, 'must be "middle", "end" or "start"');
   const trig = options.trig ?? false;
   if (typeof trig !== 'boolean' && !isTrigColumns(trig, hoursInYear(year)))
     throw new SunpaneError('trig', trig, 'must be true, false or four Float64Array columns (sinAltitude, cosAltitude, sinAzimuth, cosAzimuth) as long as the year');
@@ -135,7 +140,7 @@ export function annualSunPath(year: number, site: Site, options: SunPathOptions 
   const hours = hoursInYear(year);
   const startSerial = civilToSerial(year, 1, 1);
   const yearStartMs = serialToUtcMs(startSerial, utcOffset);
-  const shiftMs = (at === 'end' ? 1 : 0.5) * MS_PER_HOUR;
+  const shiftMs = (at === 'end' ? 1 : at === 'start' ? 0 : 0.5) * MS_PER_HOUR;
 
   // Nodes at 0 h UT every NODE_STEP_DAYS days, two before and three after the span of the instants.
   const firstDay = floor((yearStartMs + shiftMs) / MS_PER_DAY) - 2 * NODE_STEP_DAYS;
@@ -207,7 +212,7 @@ export function annualSunPath(year: number, site: Site, options: SunPathOptions 
   // The hourly passes are functions of their own: a loop that the engine optimises while it runs
   // (on-stack replacement) leaves the code after it without type feedback, and a property read there
   // (a module import, an option) made the optimised annualSunPath bail out on every call.
-  hourlyHourAngles(hours, startSerial, yearStartMs, shiftMs, longitude, g, stampSerial);
+  hourlyHourAngles(hours, startSerial, at === 'start' ? 0 : 1, yearStartMs, shiftMs, longitude, g, stampSerial);
   hourlyVectors(hours, sinLat, cosLat, x, y, g, a, b, altitude, zenith, azimuth, SOUTH_SCRATCH);
   const refractionScale = ((o.pressure / 1010) * (283 / (273 + o.temperature)) * 1.02) / 60; // Eq. 42, constant part
   if (sinAltitude && cosAltitude && sinAzimuth && cosAzimuth)
@@ -228,15 +233,16 @@ function isTrigColumns(value: unknown, hours: number): value is SunTrigColumns {
  * vector pass: two short loops run faster than one long one).
  * @param hours - number of hours
  * @param startSerial - local serial of the start of the year
+ * @param stampHour - 1: rows stamped at the end of their hour; 0: at its start
  * @param yearStartMs - UTC time of the start of the year [ms since 1970]
  * @param shiftMs - where in the hour the sun is evaluated [ms]
  * @param longitude - site longitude [°]
  * @param g - in: per hour, α − Δψ cos ε [°]; out: the hour angle H [°], not reduced
  * @param stampSerial - filled with the row stamps
  */
-function hourlyHourAngles(hours: number, startSerial: number, yearStartMs: number, shiftMs: number, longitude: number, g: Float64Array, stampSerial: Float64Array): void {
+function hourlyHourAngles(hours: number, startSerial: number, stampHour: number, yearStartMs: number, shiftMs: number, longitude: number, g: Float64Array, stampSerial: Float64Array): void {
   for (let i = 0; i < hours; i++) {
-    stampSerial[i] = startSerial + (i + 1) / 24;
+    stampSerial[i] = startSerial + (i + stampHour) / 24;
     // Eq. 27 with 360.98564736629·D split as 360·frac(D) + 0.98564736629·D to keep H small and exact.
     const days = (yearStartMs + i * MS_PER_HOUR + shiftMs) * (1 / MS_PER_DAY) - DAYS_UNIX_TO_J2000; // JD − 2451545
     const jc = days * (1 / 36_525);

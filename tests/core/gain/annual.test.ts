@@ -8,7 +8,8 @@
 import { SunpaneError } from '../../../src/core/common/errors';
 import { annualSeries } from '../../../src/core/gain/annual';
 import { summarizeAnnual } from '../../../src/core/gain/annualSummary';
-import { windowGainAt } from '../../../src/core/gain/windowGain';
+import { gainOfPrepared, windowGainAt } from '../../../src/core/gain/windowGain';
+import { prepareWindow } from '../../../src/core/gain/prepared';
 import { ashraeClearSky } from '../../../src/core/sky/clearSky';
 import { annualSunPath } from '../../../src/core/sun/sunPath';
 import { civilToSerial } from '../../../src/core/time/calendar';
@@ -63,12 +64,55 @@ describe('annual series', () => {
     expect(s.dni[59 * 24 + 12]).toBe(500 + 60); // 1 March takes the file's 1 March (day index 60)
   });
 
-  test('agrees with the one-hour calculation at sampled hours (shaded window, Perez sky, clear sky)', () => {
+  test('the one-hour gain at every row stamp is that row, to the last bit, under either time convention', () => {
+    for (const timeConvention of ['hourEnding', 'instant'] as const) {
+      const spec = shadedSpec({ timeConvention });
+      const s = annualSeries(spec);
+      for (let i = 0; i < s.hours; i++) {
+        const h = windowGainAt(spec, s.stampSerial[i]);
+        if (h.gain.total !== s.gain[i] || h.sunAltitude !== s.sunAltitude[i] || h.sunlitFraction !== s.sunlitFraction[i] || h.row !== i) {
+          throw new Error(`${timeConvention} row ${i}: one-hour ${h.gain.total} W, annual ${s.gain[i]} W`);
+        }
+      }
+      // the stamps: hour ending 01:00 … 24:00, or instants 00:00 … 23:00
+      expect(s.stampSerial[0]).toBeCloseTo(civilToSerial(2026, 1, 1, timeConvention === 'hourEnding' ? 1 : 0), 9);
+      expect(windowGainAt(spec, s.stampSerial[4000]).dateTime).toBeCloseTo(s.stampSerial[4000] - (timeConvention === 'hourEnding' ? 1 / 48 : 0), 12);
+    }
+  });
+
+  test('with daylight saving and conduction, the one-hour gain at every clock stamp is that row, under either time convention', () => {
+    // clocks forward 29 March 2026 02:00, back 25 October 03:00 (daylight time), by 1 h
+    const daylightSaving = { start: civilToSerial(2026, 3, 29, 2), end: civilToSerial(2026, 10, 25, 3), shift: 1 };
+    for (const timeConvention of ['hourEnding', 'instant'] as const) {
+      const spec = shadedSpec({
+        timeConvention,
+        site: { ...shadedSpec().site, daylightSaving },
+        indoorTemperature: 24,
+        glazing: { shgc: 0.4, panes: 2, type: 'coated', typeParameter: 4, uValue: 1.6 },
+        weather: { kind: 'ashraeClearSky', tauB: [0.4], tauD: [2.3], dryBulbMax: [33], dailyRange: [11] },
+      });
+      const s = annualSeries(spec);
+      expect(s.timeConvention).toBe(timeConvention);
+      for (let i = 0; i < s.hours; i += 7) {
+        const h = windowGainAt(spec, s.clockStamp[i]);
+        if (h.row !== i || h.gain.total !== s.gain[i] || h.gain.conduction !== s.conduction[i] || h.outdoorTemperature !== s.dryBulb[i]) {
+          throw new Error(`${timeConvention} row ${i}: one-hour row ${h.row}, ${h.gain.total} W / ${h.gain.conduction} W, annual ${s.gain[i]} W / ${s.conduction[i]} W`);
+        }
+      }
+      // July: clock time runs one hour ahead of the rows' standard-time stamps
+      const july = 181 * 24 + 12;
+      expect(s.clockStamp[july] - s.stampSerial[july]).toBeCloseTo(1 / 24, 9);
+    }
+  });
+
+  test('agrees with the direct one-hour calculation (full SPA at mid-hour) (shaded window, Perez sky, clear sky)', () => {
     const spec = shadedSpec();
     const s = annualSeries(spec);
     let daylight = 0;
     for (let i = 5; i < s.hours; i += 53) {
-      const h = windowGainAt(spec, s.stampSerial[i] - 1 / 48);
+      // the direct path: the sun by the full SPA at mid-hour
+      const h = gainOfPrepared(prepareWindow(spec), s.stampSerial[i] - 1 / 48, undefined, s.stampSerial[i]);
+      expect(h.row).toBeUndefined();
       // The annual sun path interpolates the SPA's slow terms (≤ 1e-4° from the direct algorithm),
       // so angles agree to about 1e-4° and the gain to a small fraction of a watt.
       expect(s.sunAltitude[i]).toBeCloseTo(h.sunAltitude, 3);
@@ -92,7 +136,7 @@ describe('annual series', () => {
       const spec = shadedSpec({ weather, skyModel: 'hayDavies' });
       const s = annualSeries(spec);
       for (let i = 7; i < s.hours; i += 97) {
-        const h = windowGainAt(spec, s.stampSerial[i] - 1 / 48);
+        const h = gainOfPrepared(prepareWindow(spec), s.stampSerial[i] - 1 / 48, undefined, s.stampSerial[i]);
         expect(s.dni[i]).toBeCloseTo(h.dni, 1);
         expect(s.dhi[i]).toBeCloseTo(h.dhi, 1);
         expect(s.gain[i]).toBeCloseTo(h.gain.total, 0);

@@ -12,7 +12,7 @@ import fc from 'fast-check';
 import { RAD, wrap180 } from '../../../src/core/common/angles';
 import { annualSeries } from '../../../src/core/gain/annual';
 import { SunpaneError } from '../../../src/core/common/errors';
-import { circumsolarShade, prepareWindow } from '../../../src/core/gain/windowGain';
+import { circumsolarShade, prepareWindow } from '../../../src/core/gain/prepared';
 import { airMassKastenYoung, airMassKastenYoungFromSine, airMassKastenYoungUnchecked } from '../../../src/core/sky/airMass';
 import { PEREZ_1990_COMPOSITE, PEREZ_EPSILON_EDGES, perezBin, perezParts, perezPartsKernel } from '../../../src/core/sky/perez1990';
 import { type PlaneParts, planeIrradiance, preparePlane, type SkyModel } from '../../../src/core/sky/planeIrradiance';

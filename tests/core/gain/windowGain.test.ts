@@ -49,7 +49,7 @@ describe('gain of a window at one instant', () => {
     // Point the window at the sun: tilt = zenith, azimuth = sun azimuth, so the incidence is 0.
     const spec = baseSpec({ frameFraction: 0, glazing: { shgc: 0.5, panes: 2 }, groundAlbedo: 0 });
     const sun = sunPosition(serialToUtcMs(noon, spec.site.utcOffset), spec.site.latitude, spec.site.longitude, { elevation: spec.site.elevation });
-    const facing = { ...spec, surfaceTilt: sun.zenith, surfaceAzimuth: sun.azimuth };
+    const facing = { ...spec, surfaceTilt: sun.zenith, surfaceAzimuth: sun.azimuth, timeConvention: 'instant' as const };
     const h = windowGainAt(facing, noon, { dni: 800, dhi: 0 });
     expect(h.incidence).toBeLessThan(1e-4);
     expect(h.glassArea).toBeCloseTo(3, 12); // 2 m × 1.5 m × (1 − 0)

@@ -16,7 +16,7 @@ const FACTORS = (() => {
 })();
 
 describe('design-day peaks', () => {
-  test('twelve months, each peak the largest of its 24 hourly gains and equal to the one-hour gain', () => {
+  test('twelve months, each peak the largest of its 24 hourly gains and exactly the one-hour gain of its stamp', () => {
     const spec = shadedSpec({ surfaceAzimuth: 250 });
     const months = designDayPeaks(spec);
     expect(months.map((m) => m.month)).toEqual([1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 11, 12]);
@@ -24,9 +24,19 @@ describe('design-day peaks', () => {
       expect(m.day).toBe(21);
       expect(m.hourlyGain).toHaveLength(24);
       expect(m.peakGain).toBe(Math.max(...m.hourlyGain));
-      const mid = civilToSerial(2026, m.month, 21) + (m.peakHour - 0.5) / 24;
-      expect(windowGainAt(spec, mid).gain.total).toBeCloseTo(m.peakGain, 9);
       expect(m.peakStamp).toBeCloseTo(civilToSerial(2026, m.month, 21) + m.peakHour / 24, 12);
+      expect(windowGainAt(spec, m.peakStamp).gain.total).toBe(m.peakGain);
+    }
+  });
+
+  test('with the instant convention the hours are 00:00 … 23:00 and the peak is the gain at that instant', () => {
+    const spec = shadedSpec({ surfaceAzimuth: 250, timeConvention: 'instant' });
+    for (const m of designDayPeaks(spec)) {
+      expect(m.peakHour).toBeGreaterThanOrEqual(0);
+      expect(m.peakHour).toBeLessThanOrEqual(23);
+      expect(m.peakStamp).toBeCloseTo(civilToSerial(2026, m.month, 21) + m.peakHour / 24, 12);
+      expect(windowGainAt(spec, m.peakStamp).gain.total).toBe(m.peakGain);
+      expect(windowGainAt(spec, m.peakStamp).dateTime).toBe(m.peakStamp);
     }
   });
 
