@@ -28,9 +28,11 @@ const OFFICE_JS = 'https://appsforoffice.microsoft.com/lib/1/hosted/office.js';
  * 177.3 KB); 180 KB until devices cut the diffuse light too (the view-factor integration 5.9 KB,
  * the diffuse wiring and the new step texts 5.3 KB: 177.3 -> 188.4 KB); 190 KB until the pane took
  * the Office look (Fluent token values for the light and dark themes, the footer layout, keyboard
- * and dialog focus handling, the sun-path key, messages in the user's words: 188.4 -> 194.2 KB).
+ * and dialog focus handling, the sun-path key, messages in the user's words: 188.4 -> 194.2 KB); 198 KB until the window range: its reader and
+ * messages, the glossary's labels and older names and seven window functions beside the released
+ * positional ones, and the sun-position fast path for ranges (194.2 -> 223.6 KB).
  */
-const BUDGET_BYTES = 198 * 1024;
+const BUDGET_BYTES = 225 * 1024;
 const DEV_PORT = 3000;
 
 /**

@@ -9,6 +9,7 @@ const SECTIONS: { file: string; exportName: string }[] = [
   { file: './shading', exportName: 'shadingBench' },
   { file: './annual', exportName: 'annualBench' },
   { file: './viewFactors', exportName: 'viewFactorsBench' },
+  { file: './ranges', exportName: 'rangesBench' },
 ];
 
 function main(): void {

@@ -183,14 +183,19 @@ export function referenceFile(): string {
     '',
     '## How the functions take ranges',
     '',
-    'Any argument that takes one value also takes a range. Ranges of the same shape pair element by element, a single value pairs with every element, and the result spills with that shape; ranges of different shapes are refused. A blank cell or an omitted argument takes the default shown under "if blank". A bad element makes only its own result cell an error (`#VALUE!`), whose message names the argument, the value and the allowed range; a documented "no value" (no sunrise during polar day, the sun behind the wall) is `#N/A` with the reason. Arguments described as "a range of … numbers" take the whole range as one list. Units, angles, times and signs follow [conventions.md](conventions.md).',
+    'Any argument that takes one value also takes a range, as Excel\'s own functions do: the result has as many rows as the tallest argument and as many columns as the widest, an argument of one row is repeated down and one of one column across (so a column of hours against a row of windows gives a 2-D table), and a cell where a range has no partner is `#N/A`. Each cell of a range is read once. A blank cell or an omitted argument takes the default shown under "if blank". A bad element makes only its own result cell an error (`#VALUE!`), whose message names the argument, the value and the allowed range; a documented "no value" (no sunrise during polar day, the sun behind the wall) is `#N/A` with the reason. Arguments described as "a range of … numbers" take the whole range as one list. Units, angles, times and signs follow [conventions.md](conventions.md).',
+    '',
+    '## A window in one argument',
+    '',
+    'The window functions (`SOLARGAIN`, `SOLARGAINSTEPS`, `SOLARGAINPEAKS`, `SOLARGAINYEAR`, `WINDOWSUNLIT`, `WINDOWSUNLITMASK`) take the whole window as one range of window fields: names in the first column with values beside them, or a header row of names over a value row — a row of a window schedule. Several value rows (or columns) are several windows, one result each. The names are those of the glossary below, the same as the window file, the schedule and the pane; case, spaces and a unit in brackets do not matter, and older names are accepted. In a schedule table, `=SUNPANE.SOLARGAIN(VSTACK($A$5:$R$5,$A6:$R6),$E$2)` hands the function the header row and its own row. The older forms with every field a positional argument (`WINDOWGAIN`, `GAINSTEPS`, `PEAKGAINS`, `WINDOWYEAR`, `SUNLITFRACTION`, `SUNLITMASK`) stay for saved workbooks. The fields, their defaults and how one is added: [window-fields.md](window-fields.md).',
     '',
   );
-  out.push('## Glossary of shared parameters', '', 'One name means one thing in every function, the window file and the pane.', '');
-  out.push('| name | meaning | unit | allowed | if blank |', '|---|---|---|---|---|');
+  out.push('## Glossary of shared parameters', '', 'One name means one thing in every function, the window range, the window file, the schedule and the pane. A window field (✓) may be written by its name, its label or an older name; case, spaces and a unit in brackets do not matter.', '');
+  out.push('| name | meaning | unit | allowed | if blank | window field, also written |', '|---|---|---|---|---|---|');
   for (const p of Object.values(GLOSSARY)) {
     const a = argumentDoc(p);
-    out.push(`| \`${a.name}\` | ${cell(a.meaning)} | ${cell(a.unit)} | ${cell(a.allowed)} | ${cell(a.ifBlank)} |`);
+    const also = p.window ? `✓ ${[p.label, ...(p.aliases ?? [])].map((w) => `\`${w}\``).join(', ')}` : '';
+    out.push(`| \`${a.name}\` | ${cell(a.meaning)} | ${cell(a.unit)} | ${cell(a.allowed)} | ${cell(a.ifBlank)} | ${cell(also)} |`);
   }
   out.push('');
   const categories = [...new Set(FUNCTIONS.map((f) => f.category))];

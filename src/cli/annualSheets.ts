@@ -7,7 +7,7 @@
  */
 import type { AnnualSeries, AnnualSummary } from '../core/gain';
 import { formatSerialIso } from '../core/time';
-import { HOURLY_COLUMNS, HOURLY_HEADERS, type HourlyKey, hourlyColumn } from '../outputs/hourlyColumns';
+import { HOURLY_COLUMNS, type HourlyKey, hourlyColumn, hourlyColumnsFor, hourlyHeadersFor } from '../outputs/hourlyColumns';
 import { monthHourMeanFormula, monthlyGainFormula, monthlySumFormula, tableColumnRef } from '../outputs/hourlyFormulas';
 import { PALETTE } from '../outputs/palette';
 import { csvLine, formatFixed } from './csv';
@@ -16,6 +16,20 @@ import { type ExcelJS, NUMBER_FORMATS, type TableCell, type TablePlacement, addC
 
 /** Header of the stamp column (the hour's END, local standard time). */
 export const STAMP_HEADER = hourlyColumn('stampSerial').header;
+/** Header of the stamp column of a year read with the time convention `instant`. */
+export const INSTANT_HEADER = hourlyColumn('stampSerial', 'instant').header;
+
+/** The stamp column's header for a series: how its rows are stamped. */
+export function stampHeader(series: AnnualSeries): string {
+  return hourlyColumn('stampSerial', series.timeConvention).header;
+}
+
+/** How the rows of a series are stamped, in words (a sheet's note under its title). */
+export function rowsNote(series: AnnualSeries): string {
+  return series.timeConvention === 'instant'
+    ? 'Rows are instants at the top of each hour, local standard time; the sun is taken at the instant (time convention instant).'
+    : 'Rows are hour-ending, local standard time; the sun is taken at the middle of the hour (time convention hourEnding).';
+}
 
 /** The gain column's header (used by formulas that refer to it). */
 export const GAIN_HEADER = hourlyColumn('gain').header;
@@ -27,7 +41,7 @@ const valueOf = (s: AnnualSeries, key: HourlyKey, i: number): number => (s[key] 
 
 /** The hourly year as CSV text: the header line and one line per hour (stamp as ISO 8601 local). */
 export function hourlyCsv(series: AnnualSeries, onRow?: () => void): string {
-  const lines = [csvLine([...HOURLY_HEADERS])];
+  const lines = [csvLine([...hourlyHeadersFor(series.timeConvention)])];
   const rest = HOURLY_COLUMNS.slice(1);
   for (let i = 0; i < series.hours; i++) {
     lines.push(csvLine([formatSerialIso(series.stampSerial[i]), ...rest.map((c) => formatFixed(valueOf(series, c.key, i), c.csvDecimals))]));
@@ -43,14 +57,14 @@ export function hourlyCsv(series: AnnualSeries, onRow?: () => void): string {
  */
 export function addHourlySheet(wb: ExcelJS.Workbook, sheet: string, tableName: string, series: AnnualSeries, onRow?: () => void, title = `${series.name}: hourly solar gain, ${series.year}`): TablePlacement {
   const ws = wb.addWorksheet(sheet);
-  const top = addSheetHeading(ws, title, ['Rows are hour-ending, local standard time; the sun is taken at the middle of the hour.']);
+  const top = addSheetHeading(ws, title, [rowsNote(series)]);
   const rows: TableCell[][] = new Array(series.hours);
   const rest = HOURLY_COLUMNS.slice(1);
   for (let i = 0; i < series.hours; i++) {
     rows[i] = [serialToCellDate(series.stampSerial[i]), ...rest.map((c) => valueOf(series, c.key, i))];
     onRow?.();
   }
-  const placement = addDataTable(ws, tableName, { row: top, column: 1 }, HOURLY_COLUMNS.map((c, k) => ({ header: c.header, numFmt: c.numFmt, width: k === 0 ? 18 : 13 })), rows);
+  const placement = addDataTable(ws, tableName, { row: top, column: 1 }, hourlyColumnsFor(series.timeConvention).map((c, k) => ({ header: c.header, numFmt: c.numFmt, width: k === 0 ? 18 : 13 })), rows);
   ws.getRow(top).height = 45;
   freezeAt(ws, top + 1, 2);
   return placement;
@@ -78,13 +92,14 @@ export function sheetRef(sheet: string): string {
 }
 
 /**
- * Mean gain [W] for each month and hour ending 1…24, as the month × hour formulas work it out: rows
- * whose mid-hour falls in the month and hour of day, summed, over the days of the month.
+ * Mean gain [W] for each month and hour of the day (hour ending 1…24, or instants 0…23), as the
+ * month × hour formulas work it out: rows whose hour falls in the month and hour of day, summed, over the days of the month.
  */
 export function monthHourMeans(series: AnnualSeries): number[][] {
   const sums = Array.from({ length: 12 }, () => new Array<number>(24).fill(0));
   for (let i = 0; i < series.hours; i++) {
-    const mid = new Date(Math.round((series.stampSerial[i] - 1 / 48 - 25_569) * 86_400_000));
+    const inside = series.timeConvention === 'instant' ? 1 / 48 : -1 / 48; // a point inside the row's hour
+    const mid = new Date(Math.round((series.stampSerial[i] + inside - 25_569) * 86_400_000));
     sums[mid.getUTCMonth()][mid.getUTCHours()] += series.gain[i];
   }
   return sums.map((row, m) => row.map((x) => x / new Date(Date.UTC(series.year, m + 1, 0)).getUTCDate()));
@@ -132,7 +147,7 @@ export function addMonthlySheet(
     to: { col: 9, row: chartTop + 18 },
   };
   const cells: MonthlyCells = { annualKWh: { cell: '', expected: 0 }, maxMonthKWh: { cell: '', expected: 0 }, months: [], monthHour: [], chart };
-  const ref = hourly ? tableColumnRef(hourly.placement.name) : undefined;
+  const ref = hourly ? tableColumnRef(hourly.placement.name, hourly.series.timeConvention) : undefined;
   if (hourly && ref) {
     MONTHS.forEach((_, k) => {
       const row = top + 1 + k;
@@ -159,10 +174,11 @@ export function addMonthlySheet(
 
     // The month × hour block, as in the pane.
     const left = 5;
-    ws.getCell(top - 1, left).value = 'Mean solar gain (W) by month and hour ending';
+    const instant = hourly.series.timeConvention === 'instant';
+    ws.getCell(top - 1, left).value = instant ? 'Mean solar gain (W) by month and hour (instant)' : 'Mean solar gain (W) by month and hour ending';
     ws.getCell(top - 1, left).font = { bold: true };
     ws.getCell(top, left).value = 'Month';
-    for (let h = 1; h <= 24; h++) ws.getCell(top, left + h).value = h;
+    for (let h = 1; h <= 24; h++) ws.getCell(top, left + h).value = instant ? h - 1 : h;
     styleHeader(ws, top, left, left + 24);
     const means = monthHourMeans(hourly.series);
     MONTHS.forEach((m, k) => {
@@ -182,13 +198,14 @@ export function addMonthlySheet(
 
 /**
  * Adds the day × hour heat map of the gain [W]: one row per day, one column per hour (the hour
- * ending at 1:00 … 24:00), coloured by a three-stop colour scale; header row and date column frozen.
+ * ending at 1:00 … 24:00, or for instant rows the instants 0:00 … 23:00), coloured by a three-stop colour scale; header row and date column frozen.
  */
 export function addHeatMapSheet(wb: ExcelJS.Workbook, sheet: string, series: AnnualSeries, title: string): void {
   const ws = wb.addWorksheet(sheet);
   const headerRow = addSheetHeading(ws, title);
   ws.getCell(headerRow, 1).value = 'Day';
-  for (let h = 1; h <= 24; h++) ws.getCell(headerRow, h + 1).value = h;
+  const first = series.timeConvention === 'instant' ? 0 : 1;
+  for (let h = 0; h < 24; h++) ws.getCell(headerRow, h + 2).value = h + first;
   styleHeader(ws, headerRow, 1, 25);
   const days = Math.floor(series.hours / 24);
   for (let d = 0; d < days; d++) {

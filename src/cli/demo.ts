@@ -11,16 +11,20 @@ import type { Shading } from '../core/shading';
 import { DEMO_BUILDING, DEMO_HOURLY_TAG, DEMO_YEAR, type DemoWindow, SHADING_OPTIONS, demoWindows } from '../demo/building';
 import { EXAMPLE_SITES, findExampleSite } from '../demo/sites';
 import { CAUTION } from '../outputs/caution';
+import { civilToSerial } from '../core/time';
+import { applyFunction } from '../registry/evaluate';
+import { NAMESPACE, findFunction } from '../registry';
+import { GLOSSARY } from '../registry/glossary';
 import type { Output } from './call';
 import { MONTHS, addHeatMapSheet, addHourlySheet, addMonthlySheet } from './annualSheets';
 import { checkOutput, ensureFolder } from './atomicWrite';
 import { type Flags, parseFlags } from './flags';
-import { type DemoFormulaSet, addFormulaSheet, demoFormulas } from './demoFormulas';
+import { type DemoFormulaSet, addFormulaSheet, demoFormulas, storedFormula } from './demoFormulas';
 import { ProgressBar } from './progress';
 import { type SummaryTotals, type WindowResult, addSummaryTable, summaryChart, windowResult } from './schedule';
 import { type SheetChart, cellRef, columnRef } from './xlsxCharts';
 import { PALETTE } from '../outputs/palette';
-import { type ExcelJS, NUMBER_FORMATS, type TableCell, addDataTable, addSheetHeading, address, columnLetter, fillContentsSheet, freezeAt, newWorkbook, saveWorkbook, setFormula, setLabel, styleHeader } from './workbook';
+import { type ExcelJS, NUMBER_FORMATS, type TableCell, addDataTable, addSheetHeading, address, columnLetter, fillContentsSheet, freezeAt, newWorkbook, saveWorkbook, serialToCellDate, setFormula, setLabel, styleHeader } from './workbook';
 
 export const DEMO_HELP = `usage: sunpane demo [--out DIR]
 
@@ -29,7 +33,7 @@ on two example sites (invented names, rounded real coordinates; one in each hemi
 clear sky, and prints a summary.
 
 Sheets: Overview (the building, annual gain by site and facing, best shading option),
-Schedule (the windows), Summary (each window's year, SUM/MAX totals), Monthly (gain by month
+Schedule (the windows as a window schedule table, one SUNPANE.SOLARGAIN formula per row), Summary (each window's year, SUM/MAX totals), Monthly (gain by month
 and window), Options (shading options compared on the equator-facing office window),
 Hourly ${DEMO_HOURLY_TAG} (8760 hours), Year ${DEMO_HOURLY_TAG} (monthly, peak), Heat map ${DEMO_HOURLY_TAG} (day × hour),
 Formulas (example SUNPANE.* worksheet formulas with cached results; they recalculate in Excel
@@ -144,15 +148,6 @@ export function demoSummaryText(results: DemoResults, file: string): string[] {
   return lines;
 }
 
-function describeShading(s: Shading): string {
-  const parts: string[] = [];
-  if (s.overhang) parts.push(`overhang ${s.overhang.projection} m`);
-  if (s.leftFin || s.rightFin) parts.push(`fins ${(s.leftFin ?? s.rightFin)!.projection} m`);
-  if (s.revealDepth) parts.push(`reveal ${s.revealDepth} m`);
-  if (s.skyline) parts.push('neighbouring block (skyline)');
-  return parts.length > 0 ? parts.join(' + ') : 'none';
-}
-
 /** Formula cells whose values a spreadsheet program must reproduce (for the LibreOffice check). */
 export interface DemoCheckCells {
   summary: SummaryTotals;
@@ -160,6 +155,7 @@ export interface DemoCheckCells {
   options: { cell: string; expected: number }[];
   overview: { cell: string; expected: number }[];
   hourly: { cell: string; expected: number }[];
+  formulas: { cell: string; expected: number }[];
 }
 
 function addOverview(wb: ExcelJS.Workbook, results: DemoResults): { cell: string; expected: number }[] {
@@ -215,42 +211,119 @@ function addOverview(wb: ExcelJS.Workbook, results: DemoResults): { cell: string
   return checks;
 }
 
-function addSchedule(wb: ExcelJS.Workbook, results: DemoResults): void {
+/** The window fields of the demo schedule, in column order (the block a gain formula reads). */
+const SCHEDULE_FIELDS = [
+  'name',
+  'site',
+  'year',
+  'surfaceAzimuth',
+  'width',
+  'height',
+  'frameFraction',
+  'shgc',
+  'panes',
+  'overhangProjection',
+  'overhangGap',
+  'overhangExtension',
+  'finProjection',
+  'finGap',
+  'finExtensionAbove',
+  'finExtensionBelow',
+  'revealDepth',
+  'skyline',
+] as const;
+
+/** A demo window as a row of schedule cells (blank where it has no such device). */
+export function scheduleRowOf(w: DemoWindow): (string | number)[] {
+  const s = w.spec.shading;
+  const o = s.overhang;
+  const fin = s.leftFin ?? s.rightFin;
+  if (o && o.extensionLeft !== o.extensionRight) throw new Error(`internal error: ${w.tag} has an overhang reaching unequally past its jambs`);
+  if (s.leftFin && s.rightFin && JSON.stringify(s.leftFin) !== JSON.stringify(s.rightFin)) throw new Error(`internal error: ${w.tag} has unequal fins`);
+  const cells: Record<(typeof SCHEDULE_FIELDS)[number], string | number> = {
+    name: w.spec.name,
+    site: w.siteId,
+    year: w.spec.year,
+    surfaceAzimuth: w.spec.surfaceAzimuth,
+    width: w.spec.width,
+    height: w.spec.height,
+    frameFraction: w.spec.frameFraction,
+    shgc: w.spec.glazing.shgc,
+    panes: w.spec.glazing.panes,
+    overhangProjection: o?.projection ?? '',
+    overhangGap: o?.gap ?? '',
+    overhangExtension: o?.extensionLeft ?? '',
+    finProjection: fin?.projection ?? '',
+    finGap: fin?.gap ?? '',
+    finExtensionAbove: fin?.extensionAbove ?? '',
+    finExtensionBelow: fin?.extensionBelow ?? '',
+    revealDepth: s.revealDepth ?? '',
+    skyline: s.skyline ? s.skyline.join(' ') : '',
+  };
+  return SCHEDULE_FIELDS.map((k) => cells[k]);
+}
+
+/** The header row of the demo schedule's window fields: the glossary labels. */
+export function scheduleHeader(): string[] {
+  return SCHEDULE_FIELDS.map((k) => GLOSSARY[k].label);
+}
+
+/** The design hour of the schedule's gain column: 21 July of the demo year, the hour ending 16:00. */
+export function scheduleHour(): number {
+  return civilToSerial(DEMO_YEAR, 7, 21, 16, 0, 0);
+}
+
+/** Column of the schedule's design-hour cell (E, wide enough for a date-time beside the label). */
+const HOUR_COLUMN = 5;
+
+/**
+ * The window schedule: an Excel table whose first columns are window fields (headers = glossary
+ * labels), and a gain column with one short formula per row that hands the function its own row
+ * with the header row — `SUNPANE.SOLARGAIN(VSTACK(header, row), hour)` — cached by our core.
+ * @returns the formula cells with the values they hold (for the tests)
+ */
+function addSchedule(wb: ExcelJS.Workbook, results: DemoResults): { cell: string; formula: string; expected: number }[] {
   const ws = wb.addWorksheet('Schedule');
-  const top = addSheetHeading(ws, `${DEMO_BUILDING.name}: window schedule`);
-  const rows: TableCell[][] = results.windows.map((w) => [
-    w.tag,
-    findExampleSite(w.siteId)?.label ?? w.siteId,
-    w.room,
-    w.spec.surfaceAzimuth,
-    w.spec.width,
-    w.spec.height,
-    w.spec.frameFraction,
-    glassArea(w.spec.width, w.spec.height, w.spec.frameFraction),
-    w.spec.glazing.shgc,
-    w.spec.glazing.panes,
-    describeShading(w.spec.shading),
+  const top = addSheetHeading(ws, `${DEMO_BUILDING.name}: window schedule`, [
+    'Each row is one window, described by the window fields (the same names as the functions, the window file and the pane). The gain column calls SUNPANE.SOLARGAIN with the header row stacked on its own row; results were worked out by Sunpane when the file was written.',
   ]);
-  addDataTable(
+  ws.getCell(top, 1).value = 'Design hour (hour ending, local standard time)';
+  const hourCell = ws.getCell(top, HOUR_COLUMN);
+  hourCell.value = serialToCellDate(scheduleHour());
+  hourCell.numFmt = NUMBER_FORMATS.dateTime;
+  const hourRef = `$${address(top, HOUR_COLUMN).replace(/\d+$/, '')}$${top}`;
+  const header = scheduleHeader();
+  const fieldCount = header.length;
+  const rows: TableCell[][] = results.windows.map((w) => [...scheduleRowOf(w), w.room, glassArea(w.spec.width, w.spec.height, w.spec.frameFraction), null]);
+  const gainHeader = 'Solar gain in the design hour (W)';
+  const t = addDataTable(
     ws,
     'Schedule',
-    { row: top, column: 1 },
+    { row: top + 2, column: 1 },
     [
-      { header: 'Window', width: 10 },
-      { header: 'Site', width: 24 },
+      ...header.map((h, k) => ({ header: h, width: k === 0 ? 18 : k === fieldCount - 1 ? 26 : Math.max(9, Math.min(14, h.length + 1)) })),
       { header: 'Room', width: 14 },
-      { header: 'Faces (°)', numFmt: NUMBER_FORMATS.angle, width: 11 },
-      { header: 'Width (m)', numFmt: NUMBER_FORMATS.length, width: 11 },
-      { header: 'Height (m)', numFmt: NUMBER_FORMATS.length, width: 11 },
-      { header: 'Frame share (0-1)', numFmt: NUMBER_FORMATS.fraction, width: 12 },
-      { header: 'Glass area (m²)', numFmt: NUMBER_FORMATS.area, width: 12 },
-      { header: 'SHGC (0-1)', numFmt: NUMBER_FORMATS.shgc, width: 10 },
-      { header: 'Panes', numFmt: NUMBER_FORMATS.integer, width: 8 },
-      { header: 'Outside shading', width: 44 },
+      { header: 'Glass area (m²)', numFmt: NUMBER_FORMATS.area, width: 15 },
+      { header: gainHeader, numFmt: NUMBER_FORMATS.watts, width: 18 },
     ],
     rows,
   );
-  freezeAt(ws, top + 1, 2);
+  const fn = findFunction('SOLARGAIN')!;
+  const lastField = address(t.headerRow, fieldCount).replace(/\d+$/, '');
+  const headerRef = `$A$${t.headerRow}:$${lastField}$${t.headerRow}`;
+  const out: { cell: string; formula: string; expected: number }[] = [];
+  results.windows.forEach((w, k) => {
+    const row = t.headerRow + 1 + k;
+    const cells = scheduleRowOf(w);
+    const value = applyFunction(fn, [[header, cells], scheduleHour()])[0][0];
+    if (typeof value !== 'number') throw new Error(`the demo's schedule row of ${w.tag} was refused: ${String((value as Error).message ?? value)}`);
+    const formula = `${NAMESPACE}.SOLARGAIN(_xlfn.VSTACK(${headerRef},$A${row}:$${lastField}${row}),${hourRef})`;
+    const cell = address(row, t.columnOf(gainHeader));
+    setFormula(ws, cell, storedFormula(formula), value, NUMBER_FORMATS.watts);
+    out.push({ cell: `Schedule!${cell}`, formula, expected: value });
+  });
+  freezeAt(ws, t.headerRow + 1, 2);
+  return out;
 }
 
 function addMonthlyMatrix(wb: ExcelJS.Workbook, results: DemoResults): { cell: string; expected: number }[] {
@@ -356,22 +429,22 @@ function addOptions(wb: ExcelJS.Workbook, results: DemoResults): { checks: { cel
 }
 
 /** Builds the whole demo workbook; returns it with the formula cells a spreadsheet must reproduce. */
-export function buildDemoWorkbook(results: DemoResults, onHour?: () => void): { workbook: ExcelJS.Workbook; checks: DemoCheckCells; charts: SheetChart[] } {
+export function buildDemoWorkbook(results: DemoResults, onHour?: () => void): { workbook: ExcelJS.Workbook; checks: DemoCheckCells; charts: SheetChart[]; schedule: { cell: string; formula: string; expected: number }[] } {
   const wb = newWorkbook(`Sunpane demo: ${DEMO_BUILDING.name}`);
   const contents = wb.addWorksheet('Contents');
   const overview = addOverview(wb, results);
-  addSchedule(wb, results);
+  const schedule = addSchedule(wb, results);
   const summarySheet = wb.addWorksheet('Summary');
   const summaryTop = addSheetHeading(summarySheet, `${DEMO_BUILDING.name}: each window's year, clear-sky ${DEMO_YEAR}`);
   const summary = addSummaryTable(summarySheet, 'WindowSummary', summaryTop, results.windows);
   freezeAt(summarySheet, summaryTop + 1, 2);
   const monthly = addMonthlyMatrix(wb, results);
   const { checks: options, chart: optionsChart } = addOptions(wb, results);
-  addFormulaSheet(wb, 'Formulas', results.formulas);
+  const formulaChecks = addFormulaSheet(wb, 'Formulas', results.formulas);
   const hourlyWindow = results.windows.find((w) => w.tag === DEMO_HOURLY_TAG) ?? results.windows[0];
   const series = annualSeries(hourlyWindow.spec);
   const hourlySheet = `Hourly ${hourlyWindow.tag}`;
-  addHeatMapSheet(wb, `Heat map ${hourlyWindow.tag}`, series, `${hourlyWindow.spec.name}: solar gain [W] by day and hour ending, clear-sky ${DEMO_YEAR}`);
+  addHeatMapSheet(wb, `Heat map ${hourlyWindow.tag}`, series, `${hourlyWindow.spec.name}: solar gain (W) by day and hour ending, clear-sky ${DEMO_YEAR}`);
   // The monthly sheet refers to the hourly one, which comes last (its many printed pages follow
   // the one-page sheets).
   const yearSheet = wb.addWorksheet(`Year ${hourlyWindow.tag}`);
@@ -381,18 +454,18 @@ export function buildDemoWorkbook(results: DemoResults, onHour?: () => void): { 
   fillContentsSheet(contents, `${DEMO_BUILDING.name} — Sunpane demo workbook`, [`An invented building on two example sites (invented names; rounded real coordinates chosen as example locations), clear-sky year ${DEMO_YEAR}; every other input is made up.`], [
     { sheet: 'Contents', holds: 'This list.' },
     { sheet: 'Overview', holds: 'The building in brief: annual solar gain by site and facing, the shading option with the least gain, the example sites.' },
-    { sheet: 'Schedule', holds: 'The windows: site, room, facing, size, frame share, glass area, SHGC, panes and outside shading.' },
+    { sheet: 'Schedule', holds: 'The windows as a window schedule table (one row per window, the window fields as columns) with one SUNPANE.SOLARGAIN formula per row: the solar gain in the design hour.' },
     { sheet: 'Summary', holds: "Each window's year: annual and monthly solar gain, peak hour, hours with beam on the glass, mean sunlit fraction; totals as formulas; a chart of annual gain by window." },
     { sheet: 'Monthly', holds: 'Solar gain by month for every window, with yearly totals and the top month as formulas.' },
     { sheet: 'Options', holds: 'Outside shading options compared on the equator-facing office window of each site: annual and peak gain, saving against no shading; a chart of annual gain by option.' },
-    { sheet: 'Formulas', holds: 'Sunpane worksheet functions on one window at one hour, with named input cells; the results recalculate in Excel when the add-in is loaded.' },
+    { sheet: 'Formulas', holds: 'Sunpane worksheet functions on one window, described once in a block of window fields, at one hour; the results recalculate in Excel when the add-in is loaded.' },
     { sheet: `Heat map ${tag}`, holds: `Solar gain (W) of window ${tag} for every hour of the year, one row per day, coloured from least to most.` },
     { sheet: `Year ${tag}`, holds: `Window ${tag} by month, as formulas over its hourly table: gain, missing hours, the year, the peak hour, mean gain by month and hour ending; a chart of the annual profile.` },
     { sheet: `Hourly ${tag}`, holds: `The hourly year of window ${tag} as a table (8760 rows; left out of the printed pages).` },
   ]);
   const hourly = [yearCells.annualKWh, yearCells.maxMonthKWh, ...(yearCells.peakW ? [yearCells.peakW] : []), ...yearCells.months, ...yearCells.monthHour];
   const charts = [summaryChart('Summary', summaryTop, results.windows), optionsChart, yearCells.chart];
-  return { workbook: wb, checks: { summary, monthly, options, overview, hourly }, charts };
+  return { workbook: wb, checks: { summary, monthly, options, overview, hourly, formulas: formulaChecks }, charts, schedule };
 }
 
 /** Reads `--out` (default out/demo). */

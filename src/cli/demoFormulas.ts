@@ -1,11 +1,11 @@
 /**
- * The demo's sheet of example worksheet formulas: a block of input cells (one of the demo windows
- * on a midsummer afternoon) and Sunpane functions applied to them, written as real
- * `SUNPANE.<NAME>(...)` formulas whose cached results come from our core through the same
- * `applyFunction` the add-in uses. In the file each call is stored the way Excel itself saves a
- * call to an add-in's custom function, `_xldudf_SUNPANE_<NAME>(...)` (docs/platform.md), so that
- * Excel links it to the add-in when the add-in is loaded; other programs show the cached value
- * until they recalculate (then #NAME?).
+ * The demo's sheet of example worksheet formulas: one of the demo windows described ONCE, as a
+ * block of glossary fields (labels in the first column, values beside them), a design hour, and
+ * Sunpane functions applied to them — the window functions take the block as one argument. They
+ * are written as real formulas, stored the way Excel saves a call to an add-in's custom function,
+ * `_xldudf_SUNPANE_<NAME>(...)` (docs/platform.md), with cached results that come from our core
+ * through the same `applyFunction` the add-in uses. They recalculate in Excel once the add-in is
+ * installed; other programs show the cached value until they recalculate (then #NAME?).
  *
  * Functions are looked up with `findFunction`, and arguments are given by parameter name, so a
  * renamed function or parameter makes the demo fail loudly rather than write a dead formula.
@@ -15,17 +15,17 @@ import { civilToSerial } from '../core/time';
 import type { DemoWindow } from '../demo/building';
 import { applyFunction } from '../registry/evaluate';
 import { NAMESPACE, findFunction } from '../registry';
-import { NotAvailable, type RawArg } from '../registry/types';
+import { GLOSSARY, type GlossaryEntry } from '../registry/glossary';
+import { NotAvailable, type RawArg, type Scalar } from '../registry/types';
 import { type ExcelJS, NUMBER_FORMATS, addDataTable, addSheetHeading, address, freezeAt, serialToCellDate, setFormula, styleHeader } from './workbook';
 
-/** One input cell of the formula sheet. */
+/** One field of the demo window block. */
 export interface DemoInput {
-  /** The parameter name it feeds, and the defined name of its cell. */
+  /** Glossary name of the field, and the defined name of its value cell. */
   key: string;
+  /** The field's label, written in the block's first column (the reader accepts it as the name). */
   label: string;
   value: number | string;
-  unit: string;
-  numFmt?: string;
 }
 
 /** One example formula with its cached result. */
@@ -44,14 +44,16 @@ export interface DemoFormula {
   rawArgs: (RawArg | undefined)[];
 }
 
-/** The input cells and the formulas that refer to them. */
+/** The design hour, the window block and the formulas that refer to them. */
 export interface DemoFormulaSet {
+  /** The design hour: a stamp read as hour ending (the sun at mid-hour). */
+  hour: number;
   inputs: DemoInput[];
   formulas: DemoFormula[];
 }
 
-/** A formula argument: an input key, or an earlier formula's label (its result cell). */
-type ArgSource = { input: string } | { formula: string };
+/** A formula argument: a window field's value cell, the whole window block, the hour, the mid-hour instant, or an earlier formula's result. */
+type ArgSource = { input: string } | { window: true } | { hour: true } | { midHour: true } | { formula: string };
 
 interface FormulaPlan {
   label: string;
@@ -71,108 +73,76 @@ export function storedFormula(text: string): string {
   return text.replace(new RegExp(`\\b${NAMESPACE}\\.([A-Z][A-Z0-9_]*)\\(`, 'g'), `_xldudf_${NAMESPACE}_$1(`);
 }
 
-/** First row of the input block and of the formula table on the sheet. */
-const INPUT_TOP = 7;
+/** Rows of the sheet (1-based), under the title, its three lines and the caution: the design hour, the mid-hour instant, the block's header. */
+const HOUR_ROW = 7;
+const MID_ROW = 8;
+const BLOCK_HEADER = 10;
 
-/** The input cells: the demo's equator-facing office window on 21 June at 14:00 (invented clear-sky depths). */
+/** The window fields the block gives, from the demo window (the invented clear sky by τb and τd). */
 export function demoInputs(window: DemoWindow): DemoInput[] {
   const { spec } = window;
   const o = spec.shading.overhang;
+  const field = (g: GlossaryEntry, value: number | string): DemoInput => ({ key: g.name, label: g.label, value });
+  const G = GLOSSARY;
   return [
-    { key: 'dateTime', label: 'date-time (local standard time)', value: civilToSerial(spec.year, 6, 21, 14, 0, 0), unit: '', numFmt: NUMBER_FORMATS.dateTime },
-    { key: 'latitude', label: 'latitude', value: spec.site.latitude, unit: '°' },
-    { key: 'longitude', label: 'longitude', value: spec.site.longitude, unit: '°' },
-    { key: 'utcOffset', label: 'UTC offset', value: spec.site.utcOffset, unit: 'h' },
-    { key: 'surfaceAzimuth', label: 'window facing', value: spec.surfaceAzimuth, unit: '°' },
-    { key: 'width', label: 'window width', value: spec.width, unit: 'm' },
-    { key: 'height', label: 'window height', value: spec.height, unit: 'm' },
-    { key: 'shgc', label: 'SHGC at normal incidence', value: spec.glazing.shgc, unit: '' },
-    { key: 'frameFraction', label: 'frame share', value: spec.frameFraction, unit: '' },
-    { key: 'tauB', label: 'clear-sky beam depth τb (invented)', value: 0.36, unit: '' },
-    { key: 'tauD', label: 'clear-sky diffuse depth τd (invented)', value: 2.4, unit: '' },
-    { key: 'overhangProjection', label: 'overhang depth', value: o?.projection ?? 0, unit: 'm' },
-    { key: 'overhangGap', label: 'overhang gap above head', value: o?.gap ?? 0, unit: 'm' },
-    { key: 'overhangExtensionLeft', label: 'overhang beyond left jamb', value: o?.extensionLeft ?? 0, unit: 'm' },
-    { key: 'overhangExtensionRight', label: 'overhang beyond right jamb', value: o?.extensionRight ?? 0, unit: 'm' },
+    field(G.name, spec.name),
+    field(G.latitude, spec.site.latitude),
+    field(G.longitude, spec.site.longitude),
+    field(G.utcOffset, spec.site.utcOffset),
+    field(G.elevation, spec.site.elevation ?? 0),
+    field(G.surfaceAzimuth, spec.surfaceAzimuth),
+    field(G.width, spec.width),
+    field(G.height, spec.height),
+    field(G.frameFraction, spec.frameFraction),
+    field(G.shgc, spec.glazing.shgc),
+    field(G.panes, spec.glazing.panes),
+    field(G.overhangProjection, o?.projection ?? 0),
+    field(G.overhangGap, o?.gap ?? 0),
+    field(G.overhangExtension, o?.extensionLeft ?? 0),
+    field(G.tauB, 0.36),
+    field(G.tauD, 2.4),
   ];
 }
 
-const SITE_ARGS = { latitude: { input: 'latitude' }, longitude: { input: 'longitude' }, utcOffset: { input: 'utcOffset' } } as const;
-const WHEN_WHERE = { dateTime: { input: 'dateTime' }, ...SITE_ARGS } as const;
+/** The design hour: 21 June of the demo year, the hour ending 15:00 (the sun at 14:30). */
+export function demoHour(window: DemoWindow): number {
+  return civilToSerial(window.spec.year, 6, 21, 15, 0, 0);
+}
+
+const WHEN_WHERE = { dateTime: { midHour: true }, latitude: { input: 'latitude' }, longitude: { input: 'longitude' }, utcOffset: { input: 'utcOffset' } } as const;
 
 /** The example formulas, by function name and parameter name. */
 const PLANS: readonly FormulaPlan[] = [
-  { label: 'sun altitude', name: 'SUNALTITUDE', args: { ...WHEN_WHERE }, unit: '°', numFmt: '0.00' },
-  { label: 'sun azimuth', name: 'SUNAZIMUTH', args: { ...WHEN_WHERE }, unit: '°', numFmt: '0.00' },
-  { label: 'sunrise', name: 'SUNRISE', args: { date: { input: 'dateTime' }, ...SITE_ARGS }, unit: '', numFmt: 'hh:mm' },
-  { label: 'sunset', name: 'SUNSET', args: { date: { input: 'dateTime' }, ...SITE_ARGS }, unit: '', numFmt: 'hh:mm' },
+  { label: 'solar gain of the window in the design hour', name: 'SOLARGAIN', args: { window: { window: true }, dateTime: { hour: true } }, unit: 'W', numFmt: NUMBER_FORMATS.watts },
+  { label: 'sun altitude at mid-hour', name: 'SUNALTITUDE', args: { ...WHEN_WHERE }, unit: '°', numFmt: '0.00' },
+  { label: 'sun azimuth at mid-hour', name: 'SUNAZIMUTH', args: { ...WHEN_WHERE }, unit: '°', numFmt: '0.00' },
+  { label: 'sunrise', name: 'SUNRISE', args: { date: { hour: true }, latitude: { input: 'latitude' }, longitude: { input: 'longitude' }, utcOffset: { input: 'utcOffset' } }, unit: '', numFmt: 'hh:mm' },
+  { label: 'sunset', name: 'SUNSET', args: { date: { hour: true }, latitude: { input: 'latitude' }, longitude: { input: 'longitude' }, utcOffset: { input: 'utcOffset' } }, unit: '', numFmt: 'hh:mm' },
   { label: 'incidence angle on the window', name: 'INCIDENCEAT', args: { ...WHEN_WHERE, surfaceAzimuth: { input: 'surfaceAzimuth' } }, unit: '°', numFmt: '0.00' },
   {
     label: 'profile angle',
     name: 'PROFILEANGLE',
-    args: { sunAltitude: { formula: 'sun altitude' }, sunAzimuth: { formula: 'sun azimuth' }, surfaceAzimuth: { input: 'surfaceAzimuth' } },
+    args: { sunAltitude: { formula: 'sun altitude at mid-hour' }, sunAzimuth: { formula: 'sun azimuth at mid-hour' }, surfaceAzimuth: { input: 'surfaceAzimuth' } },
     unit: '°',
     numFmt: '0.00',
   },
   {
-    label: 'sunlit fraction of the glass under the overhang',
-    name: 'SUNLITFRACTION',
-    args: {
-      sunAltitude: { formula: 'sun altitude' },
-      sunAzimuth: { formula: 'sun azimuth' },
-      surfaceAzimuth: { input: 'surfaceAzimuth' },
-      width: { input: 'width' },
-      height: { input: 'height' },
-      overhangProjection: { input: 'overhangProjection' },
-      overhangGap: { input: 'overhangGap' },
-      overhangExtensionLeft: { input: 'overhangExtensionLeft' },
-      overhangExtensionRight: { input: 'overhangExtensionRight' },
-    },
+    label: 'sunlit fraction of the glass under its overhang',
+    name: 'WINDOWSUNLIT',
+    args: { window: { window: true }, sunAltitude: { formula: 'sun altitude at mid-hour' }, sunAzimuth: { formula: 'sun azimuth at mid-hour' } },
     unit: '',
     numFmt: NUMBER_FORMATS.fraction,
   },
-  {
-    label: 'SHGC at this incidence angle',
-    name: 'SHGCANGLE',
-    args: { incidence: { formula: 'incidence angle on the window' }, shgcNormal: { input: 'shgc' } },
-    unit: '',
-    numFmt: NUMBER_FORMATS.shgc,
-  },
-  {
-    label: 'glass area',
-    name: 'GLASSAREA',
-    args: { width: { input: 'width' }, height: { input: 'height' }, frameFraction: { input: 'frameFraction' } },
-    unit: 'm²',
-    numFmt: NUMBER_FORMATS.area,
-  },
-  {
-    label: 'window solar gain this hour (clear sky, overhang)',
-    name: 'WINDOWGAIN',
-    args: {
-      ...WHEN_WHERE,
-      surfaceAzimuth: { input: 'surfaceAzimuth' },
-      width: { input: 'width' },
-      height: { input: 'height' },
-      shgcNormal: { input: 'shgc' },
-      tauB: { input: 'tauB' },
-      tauD: { input: 'tauD' },
-      frameFraction: { input: 'frameFraction' },
-      overhangProjection: { input: 'overhangProjection' },
-      overhangGap: { input: 'overhangGap' },
-      overhangExtensionLeft: { input: 'overhangExtensionLeft' },
-      overhangExtensionRight: { input: 'overhangExtensionRight' },
-    },
-    unit: 'W',
-    numFmt: NUMBER_FORMATS.watts,
-  },
+  { label: 'SHGC at this incidence angle', name: 'SHGCANGLE', args: { incidence: { formula: 'incidence angle on the window' }, shgc: { input: 'shgc' } }, unit: '', numFmt: NUMBER_FORMATS.shgc },
+  { label: 'glass area', name: 'GLASSAREA', args: { width: { input: 'width' }, height: { input: 'height' }, frameFraction: { input: 'frameFraction' } }, unit: 'm²', numFmt: NUMBER_FORMATS.area },
 ];
 
-/** Row of the i-th input cell (1-based sheet row); values sit in column B. */
+/** Row of the i-th field of the block (1-based sheet row); labels in column A, values in column B. */
 function inputRow(i: number): number {
-  return INPUT_TOP + 1 + i;
+  return BLOCK_HEADER + 1 + i;
 }
 
-/** First row of the formula table's body. */
+/** First row of the formula table (its header). */
 function formulaTop(inputs: number): number {
   return inputRow(inputs) + 2;
 }
@@ -183,7 +153,10 @@ function formulaTop(inputs: number): number {
  */
 export function demoFormulas(window: DemoWindow): DemoFormulaSet {
   const inputs = demoInputs(window);
+  const hour = demoHour(window);
   const inputIndex = new Map(inputs.map((x, i) => [x.key, i]));
+  const block = `$A$${inputRow(0)}:$B$${inputRow(inputs.length - 1)}`;
+  const blockCells: Scalar[][] = inputs.map((x) => [x.label, x.value]);
   const out: DemoFormula[] = [];
   const resultRow = (k: number) => formulaTop(inputs.length) + 1 + k;
   for (const plan of PLANS) {
@@ -203,15 +176,24 @@ export function demoFormulas(window: DemoWindow): DemoFormulaSet {
       if (!src) {
         refs.push('');
         raw.push(undefined);
+      } else if ('window' in src) {
+        refs.push(block);
+        raw.push(blockCells);
+      } else if ('hour' in src) {
+        refs.push(`$B$${HOUR_ROW}`);
+        raw.push(hour);
+      } else if ('midHour' in src) {
+        refs.push(`$B$${MID_ROW}`);
+        raw.push(hour - 1 / 48);
       } else if ('input' in src) {
         const i = inputIndex.get(src.input);
-        if (i === undefined) throw new Error(`internal error: no demo input ${src.input}`);
-        // Inputs by their defined names (the glossary's parameter names), so a formula reads like its function's signature.
+        if (i === undefined) throw new Error(`demo formula "${plan.label}": no field ${src.input} in the window block`);
+        // Fields by their defined names (the glossary's names), so a formula reads like its function's signature.
         refs.push(inputs[i].key);
         raw.push(inputs[i].value);
       } else {
         const k = out.findIndex((f) => f.label === src.formula);
-        if (k < 0 || typeof out[k].result !== 'number') throw new Error(`internal error: demo formula ${src.formula} is not a number`);
+        if (k < 0 || typeof out[k].result !== 'number') throw new Error(`demo formula "${plan.label}": ${src.formula} is not a number`);
         refs.push(`$C$${resultRow(k)}`);
         raw.push(out[k].result as number);
       }
@@ -222,35 +204,41 @@ export function demoFormulas(window: DemoWindow): DemoFormulaSet {
     const result = cell instanceof NotAvailable ? '#N/A' : (cell as number | string);
     out.push({ label: plan.label, name: fn.name, formula: `${NAMESPACE}.${fn.name}(${refs.join(',')})`, result, unit: plan.unit, numFmt: plan.numFmt, rawArgs: raw });
   }
-  return { inputs, formulas: out };
+  return { hour, inputs, formulas: out };
 }
 
 /**
- * Adds the formula sheet: title, the input block, and a table of quantity / formula text / result
- * (the live formula with its cached value) / unit.
+ * Adds the formula sheet: title, the design hour and its mid-hour instant (a native formula), the
+ * window block (field label | value) and a table of quantity / formula text / result (the live
+ * formula with its cached value) / unit.
  */
-export function addFormulaSheet(wb: ExcelJS.Workbook, sheet: string, set: DemoFormulaSet): void {
+export function addFormulaSheet(wb: ExcelJS.Workbook, sheet: string, set: DemoFormulaSet): { cell: string; expected: number }[] {
   const { inputs, formulas } = set;
   const ws = wb.addWorksheet(sheet);
   const free = addSheetHeading(ws, 'Sunpane worksheet functions — examples', [
+    `The window is described once, in the block A${inputRow(0)}:B${inputRow(inputs.length - 1)} (field names in A, values in B); window functions take the block as one argument.`,
     'Results were worked out by Sunpane when the file was written.',
     'They recalculate in Excel when the Sunpane add-in is loaded (open its pane once); elsewhere they may show #NAME?.',
   ]);
-  if (free > INPUT_TOP) throw new Error('internal error: the formula sheet heading overlaps its inputs');
-  ws.getCell(INPUT_TOP, 1).value = 'Input';
-  ws.getCell(INPUT_TOP, 2).value = 'Value';
-  ws.getCell(INPUT_TOP, 3).value = 'Unit';
-  ws.getCell(INPUT_TOP, 4).value = 'Named range';
-  styleHeader(ws, INPUT_TOP, 1, 4);
+  if (free > HOUR_ROW) throw new Error('the formula sheet heading overlaps its inputs');
+  ws.getCell(HOUR_ROW, 1).value = 'Design hour (hour ending, local standard time)';
+  const hourCell = ws.getCell(HOUR_ROW, 2);
+  hourCell.value = serialToCellDate(set.hour);
+  hourCell.numFmt = NUMBER_FORMATS.dateTime;
+  ws.getCell(MID_ROW, 1).value = 'Sun taken at (mid-hour, time convention hourEnding)';
+  setFormula(ws, `B${MID_ROW}`, `B${HOUR_ROW}-1/48`, set.hour - 1 / 48, NUMBER_FORMATS.dateTime);
+  ws.getCell(BLOCK_HEADER, 1).value = 'Window field';
+  ws.getCell(BLOCK_HEADER, 2).value = 'Value';
+  ws.getCell(BLOCK_HEADER, 3).value = 'Unit';
+  ws.getCell(BLOCK_HEADER, 4).value = 'Named range';
+  styleHeader(ws, BLOCK_HEADER, 1, 4);
   inputs.forEach((x, i) => {
-    // Each input cell is a named range, named as the function parameter it feeds.
-    wb.definedNames.add(`'${sheet.replace(/'/g, "''")}'!$B$${inputRow(i)}`, x.key);
     ws.getCell(inputRow(i), 1).value = x.label;
-    const v = ws.getCell(inputRow(i), 2);
-    v.value = x.numFmt === NUMBER_FORMATS.dateTime && typeof x.value === 'number' ? serialToCellDate(x.value) : x.value;
-    if (x.numFmt) v.numFmt = x.numFmt;
-    ws.getCell(inputRow(i), 3).value = x.unit;
+    ws.getCell(inputRow(i), 2).value = x.value;
+    ws.getCell(inputRow(i), 3).value = GLOSSARY[x.key as keyof typeof GLOSSARY]?.unit ?? '';
     ws.getCell(inputRow(i), 4).value = x.key;
+    // Each value cell is a named range, named as the field: the functions that take single values refer to it by name.
+    wb.definedNames.add(`'${sheet.replace(/'/g, "''")}'!$B$${inputRow(i)}`, x.key);
   });
   const top = formulaTop(inputs.length);
   const t = addDataTable(
@@ -267,5 +255,6 @@ export function addFormulaSheet(wb: ExcelJS.Workbook, sheet: string, set: DemoFo
     if (typeof f.result === 'number') setFormula(ws, cell, storedFormula(f.formula), f.result, f.numFmt);
     else ws.getCell(cell).value = f.result;
   });
-  freezeAt(ws, INPUT_TOP + 1);
+  freezeAt(ws, BLOCK_HEADER + 1);
+  return [{ cell: `${sheet}!B${MID_ROW}`, expected: set.hour - 1 / 48 }];
 }

@@ -19,11 +19,11 @@ import { csvLine, formatFixed, parseCsv } from './csv';
 import { outputKind, parseFlags, requireFlag } from './flags';
 import { ProgressBar } from './progress';
 import { WEATHER_FLAGS, checkWeatherTable, readWeatherTable, weatherRequest } from './weatherCsv';
-import { windowFromJson } from './windowJson';
 import { PALETTE } from '../outputs/palette';
 import { type SheetChart, cellRef, columnRef } from './xlsxCharts';
+import { fieldsOf, windowSpecFromFields } from '../registry/windowRange';
 import { NUMBER_FORMATS, type TableCell, addDataTable, addSheetHeading, address, columnLetter, fillContentsSheet, freezeAt, newWorkbook, saveWorkbook, serialToCellDate, setFormula, setLabel } from './workbook';
-import { type MatchedHeaders, type ScheduleColumn, SCHEDULE_COLUMNS, SITE_KEY, columnForHeader, columnsForPath, headerKey, matchHeaders, requiredColumns, splitListCell } from '../schedule/columns';
+import { type MatchedHeaders, type ScheduleColumn, SCHEDULE_COLUMNS, columnForHeader, matchHeaders, requiredColumns } from '../schedule/columns';
 
 const SCHEDULE_FLAGS = { in: true, ...WEATHER_FLAGS, out: true, force: false, help: false } as const;
 
@@ -42,18 +42,18 @@ Works out each window's year and writes one summary row per window: annual and m
   --force        replace FILE if it exists (a read-only file is never replaced)
   --help         this text
 
-Schedule columns, the same as in the task pane (any case; the unit in brackets may be left out;
-the older name is accepted too). Required: ${requiredColumns('cli').map((c) => c.header).join(', ')},
+Schedule columns: the window fields, the same as in the task pane, the window file and the
+worksheet functions' window range. A header is the label or the field name (any case; the unit in
+brackets may be left out; older names are accepted too). Required: ${requiredColumns('cli').map((c) => c.header).join(', ')},
 and a place: Site, or Latitude, Longitude and UTC offset. Lists are space-separated.
-  ${'header'.padEnd(25)}${'or'.padEnd(24)}meaning (blank means)
+  ${'header'.padEnd(32)}${'field name'.padEnd(24)}meaning
 ${SCHEDULE_COLUMNS.map(helpLine).join('\n')}
 
 Example: examples/windows.csv. Errors name the row and the column.
 Exit codes: 0 done, 1 bad input, 2 wrong usage.`;
 
 function helpLine(c: ScheduleColumn): string {
-  const older = c.aliases.filter((a) => headerKey(a) !== headerKey(c.header)).join(', ');
-  return `  ${c.header.padEnd(25)}${older.padEnd(24)}${c.help}`;
+  return `  ${c.header.padEnd(32)}${c.key.padEnd(24)}${c.help}`;
 }
 
 /** One schedule row as read: where it is (for messages) and its cells by column key. */
@@ -66,89 +66,26 @@ export interface ScheduleRow {
   headers: ReadonlyMap<string, string>;
 }
 
-function setPath(obj: Record<string, unknown>, dotted: string, value: unknown): void {
-  const keys = dotted.split('.');
-  let o = obj;
-  for (const k of keys.slice(0, -1)) {
-    if (typeof o[k] !== 'object' || o[k] === null) o[k] = {};
-    o = o[k] as Record<string, unknown>;
-  }
-  o[keys[keys.length - 1]] = value;
-}
-
-/** How a column is named in a message: as written in the file, else by its header. */
-function columnName(column: ScheduleColumn, row: ScheduleRow): string {
-  return `column "${row.headers.get(column.key) ?? column.header}"`;
-}
-
-/** The column a window-file path came from: one the file has if possible, else the first that fills it. */
-function columnOfPath(p: string, row: ScheduleRow): ScheduleColumn | undefined {
-  const candidates = columnsForPath(p.replace(/\[\d+\]$/, ''));
-  return candidates.find((c) => row.headers.has(c.key)) ?? candidates[0];
-}
-
-function readCellValue(column: ScheduleColumn, raw: string | number, row: ScheduleRow): unknown {
-  if (column.kind === 'text') return String(raw).trim();
-  const number = (t: string) => {
-    const n = Number(t);
-    if (!Number.isFinite(n)) throw new CliInputError(`${row.where}, ${columnName(column, row)}: "${t}" is not a number`);
-    return n;
-  };
-  if (column.kind === 'list') return splitListCell(raw).map(number);
-  return typeof raw === 'number' ? raw : number(raw.trim());
-}
-
 /**
- * A fin given only the shared gap or extensions while the other side has a depth is no fin: the
- * both-sides columns apply to each fin that has a depth.
- */
-function dropFinsWithoutDepth(shading: Record<string, unknown> | undefined): void {
-  if (!shading) return;
-  const hasDepth = (side: string) => (shading[side] as Record<string, unknown> | undefined)?.projection !== undefined;
-  for (const [side, other] of [['leftFin', 'rightFin'], ['rightFin', 'leftFin']]) {
-    if (shading[side] && !hasDepth(side) && hasDepth(other)) delete shading[side];
-  }
-}
-
-/**
- * Turns one schedule row into a window spec (weather resolved later if the row has none).
- * @throws CliInputError naming the row and the column
+ * Turns one schedule row into a window spec (weather resolved later if the row has none), by the
+ * same reader as the window file and the worksheet functions (src/registry/windowRange.ts).
+ * @throws CliInputError naming the row and the column as written in the file
  */
 export function windowFromRow(row: ScheduleRow): { spec: WindowSpec; hasWeather: boolean } {
-  const json: Record<string, unknown> = {};
-  const label = () => (typeof json.name === 'string' && json.name !== '' ? ` ("${json.name}")` : '');
+  const entries: { field: ScheduleColumn['field']; written: string; cell: string | number }[] = [];
   for (const column of SCHEDULE_COLUMNS) {
     const raw = row.cells.get(column.key);
-    if (raw === undefined || (typeof raw === 'string' && raw.trim() === '')) continue;
-    const value = readCellValue(column, raw, row);
-    // Site comes before the coordinates in the column list, so a site id is already set here.
-    if (column.paths[0].startsWith('site.') && typeof json.site === 'string') throw placeTwice(row, label());
-    for (const p of column.paths) setPath(json, p, value);
+    if (raw === undefined) continue;
+    entries.push({ field: column.field, written: `column "${row.headers.get(column.key) ?? column.header}"`, cell: raw });
   }
-  const weather = json.weather as Record<string, unknown> | undefined;
-  if (weather) weather.kind = weather.linkeTurbidity !== undefined ? 'ineichenClearSky' : 'ashraeClearSky';
-  dropFinsWithoutDepth(json.shading as Record<string, unknown> | undefined);
+  const name = row.cells.get('name');
+  const label = typeof name === 'string' && name.trim() !== '' ? ` ("${name.trim()}")` : '';
   try {
-    const file = windowFromJson(json);
-    if (file.hasWeather) validateWindowSpec(file.spec);
-    return file;
+    return windowSpecFromFields(fieldsOf(entries), { prefix: (f) => `column "${f.label}"` });
   } catch (err) {
-    if (err instanceof SunpaneError) {
-      if (err.argument === 'site' && (err.value === undefined || err.value === null)) {
-        throw new CliInputError(`${row.where}${label()}: no site: fill the column Site (an example site id) or Latitude, Longitude and UTC offset`);
-      }
-      const column = columnOfPath(err.argument === 'glazing' ? 'glazing.shgc' : err.argument, row);
-      const blank = err.value === undefined || err.value === null;
-      if (!column) throw new CliInputError(`${row.where}${label()}, field ${err.argument}: ${err.message}`);
-      const missing = blank ? (row.headers.has(column.key) ? 'is blank but required' : 'is required but the schedule has no such column') : err.message;
-      throw new CliInputError(`${row.where}${label()}, ${columnName(column, row)}: ${missing}`);
-    }
+    if (err instanceof SunpaneError) throw new CliInputError(`${row.where}${label}, ${err.message}`);
     throw err;
   }
-}
-
-function placeTwice(row: ScheduleRow, label: string): CliInputError {
-  return new CliInputError(`${row.where}${label}: give either an example site (column "${row.headers.get(SITE_KEY) ?? 'Site'}") or its own latitude, longitude, UTC offset and elevation, not both`);
 }
 
 /** Matches the header row; unknown or repeated headers and a missing label column are errors. */
@@ -163,7 +100,7 @@ function readHeader(headers: readonly string[], where: string): MatchedHeaders {
     const first = matched.written.get(columnForHeader(r.header)!.key);
     throw new CliInputError(`${where}: columns "${first}" and "${r.header}" are the same column; keep one`);
   }
-  const label = SCHEDULE_COLUMNS[0];
+  const label = SCHEDULE_COLUMNS.find((c) => c.key === 'name')!;
   if (!matched.written.has(label.key)) throw new CliInputError(`${where}: the header row has no "${label.header}" column`);
   return matched;
 }

@@ -14,12 +14,14 @@ import { outputKind, parseFlags, requireFlag } from './flags';
 import { ProgressBar } from './progress';
 import { WEATHER_FLAGS, WEATHER_HELP, type WeatherRequest, checkWeatherTable, readWeatherTable, weatherRequest } from './weatherCsv';
 import { readWindowFile } from './windowJson';
+import { windowFieldLines } from '../registry/windowRange';
 import { fillContentsSheet, newWorkbook, saveWorkbook } from './workbook';
 
 export const TABLE_HELP = `usage: sunpane table --window FILE.json [--weather FILE.csv (--dni COL --dhi COL | --ghi COL) ...] --out FILE.xlsx|FILE.csv
 
 Writes one window's hourly year: 8760 rows (8784 in a leap year), each stamped at the END of its
-hour in local standard time, the sun taken at mid-hour.
+hour in local standard time, the sun taken at mid-hour (the window's timeConvention "hourEnding",
+the default; "instant" stamps rows 00:00 … 23:00 and takes the sun at the stamp).
 
   --window FILE.json   the window (see "window file" below)
 ${WEATHER_HELP}
@@ -27,16 +29,17 @@ ${WEATHER_HELP}
   --force              replace FILE if it exists (a read-only file is never replaced)
   --help               this text
 
-Without --weather the window file's "weather" (a clear-sky model) is used.
+Without --weather the window file's own clear sky is used (linkeTurbidity, or tauB and tauD, or an example site).
 
-Window file (JSON): name, year, site ({latitude, longitude, utcOffset, elevation?} or an example
-site id), surfaceAzimuth [°], surfaceTilt [°] (90), width, height [m], frameFraction (0),
-glazing {shgc, panes (2), angleTable?, interiorAttenuation (1), radiantFraction?},
-shading {overhang {projection, gap, extensionLeft, extensionRight}, leftFin/rightFin {projection,
-gap, extensionAbove, extensionBelow}, revealDepth, skyline [°...]}, groundAlbedo (0.2),
-skyModel ("perez1990"), diffuseShading ("viewFactors"; "beamOnly": devices cut only the beam, the
-earlier treatment), weather {kind: "ineichenClearSky", linkeTurbidity} or
-{kind: "ashraeClearSky", tauB, tauD}. Defaults in brackets. Example: examples/east-office.json
+Window file (JSON): one object whose keys are the window fields, the same names as the worksheet
+functions' window range and the schedule's columns (any case; older names accepted), e.g.
+  {"name": "East office", "year": 2026, "latitude": 52.2, "longitude": 4.9, "utcOffset": 1,
+   "surfaceAzimuth": 90, "width": 1.8, "height": 1.5, "shgc": 0.4, "overhangProjection": 0.6,
+   "linkeTurbidity": 3.2}
+The older nested form (site {…}, glazing {…}, shading {overhang {…}}, weather {kind, …}) is read too.
+Fields (blank or left out: the default after "blank:"):
+${windowFieldLines().map((l) => `  ${l}`).join('\n')}
+Example: examples/east-office.json
 
 Exit codes: 0 done, 1 bad input (the message names the field, row or line; weather that cannot be
 used), 2 wrong usage.`;
@@ -73,7 +76,7 @@ export function resolveWindow(windowFile: string, weather: WeatherRequest | unde
     spec.weather = checked.check.weather!;
     weatherReport = checked.report;
   } else if (!hasWeather) {
-    throw new CliInputError(`${windowFile}: the window has no "weather": add a clear-sky model ("weather": {"kind": "ineichenClearSky", "linkeTurbidity": 3}) or give hourly weather with --weather FILE.csv`);
+    throw new CliInputError(`${windowFile}: the window has no clear sky of its own: add "linkeTurbidity": 3 (or "tauB" and "tauD", or an example "site") or give hourly weather with --weather FILE.csv`);
   }
   validateWindowSpec(spec);
   return { spec, weatherReport };
@@ -82,7 +85,8 @@ export function resolveWindow(windowFile: string, weather: WeatherRequest | unde
 /** The text `table` prints when done: the window's year in one line, and where it went. */
 export function tableSummaryLine(series: AnnualSeries, summary: AnnualSummary): string {
   const missing = summary.missingHours > 0 ? `; ${summary.missingHours} hours missing (not in the total)` : '';
-  return `${series.name}: ${summary.annualKWh.toFixed(1)} kWh in ${series.year}, peak ${Math.round(summary.peakW)} W in the hour ending ${formatSerialIso(summary.peakStamp)}, ${summary.sunlitHours} sunlit hours${missing}`;
+  const when = series.timeConvention === 'instant' ? 'at' : 'in the hour ending';
+  return `${series.name}: ${summary.annualKWh.toFixed(1)} kWh in ${series.year}, peak ${Math.round(summary.peakW)} W ${when} ${formatSerialIso(summary.peakStamp)}, ${summary.sunlitHours} sunlit hours${missing}`;
 }
 
 /** Runs `sunpane table`. */
@@ -111,7 +115,7 @@ export async function tableCommand(argv: readonly string[], io: Output): Promise
     const contents = wb.addWorksheet('Contents');
     const hourlySheet = 'Hourly';
     const monthlySheet = wb.addWorksheet('Monthly');
-    addHeatMapSheet(wb, 'Heat map', series, `${spec.name}: solar gain (W) by day and hour ending, ${series.year}`);
+    addHeatMapSheet(wb, 'Heat map', series, `${spec.name}: solar gain (W) by day and ${series.timeConvention === 'instant' ? 'hour (instant)' : 'hour ending'}, ${series.year}`);
     const placement = addHourlySheet(wb, hourlySheet, 'Hourly', series, () => bar.tick());
     bar.finish();
     const monthly = addMonthlySheet(monthlySheet, 'Monthly', summary, { sheet: hourlySheet, placement, series }, `${spec.name}: solar gain by month, ${series.year}`);

@@ -1,81 +1,53 @@
 /**
  * The window file: one window described in JSON, read into a {@link WindowSpec}.
  *
- * The format is Sunpane's own; its field names are the WindowSpec / glossary names so that one
- * name means one thing in cells, files and the pane. Every error names the field by its path
- * (`glazing.shgc`, `shading.overhang.projection`). Unknown fields are refused (a typo would
- * otherwise silently drop a shading device; they are reported before anything else); fields whose name starts with `_` or equals
- * `comment` are ignored, for notes.
+ * Its keys are the glossary's window fields (src/registry/glossary.ts) — the same names as the
+ * worksheet functions' window range, the schedule's columns and the pane — read by the same reader
+ * (src/registry/windowRange.ts), so one name means one thing in cells, files and the pane:
  *
  * ```jsonc
  * {
- *   "name": "East office",           // required: label for tables and sheets
- *   "year": 2026,                    // required: calendar year of the hourly series, 1901…9998
- *   "site": {                        // required: an object, or the id of an example site ("brackwater")
- *     "latitude": 52.2,              //   [°] −90…90, north positive
- *     "longitude": 4.9,              //   [°] −180…180, east positive
- *     "utcOffset": 1,                //   [h] −12…14, standard time (no daylight saving)
- *     "elevation": 5,                //   [m], default 0
- *     "pressure": 1013,              //   [hPa], default: standard atmosphere at the elevation
- *     "temperature": 12              //   [°C], default 12
- *   },
- *   "surfaceAzimuth": 90,            // required: [°] direction the glass faces, clockwise from north
- *   "surfaceTilt": 90,               // [°] 0 = facing the sky, 90 = vertical (default)
- *   "width": 1.8, "height": 1.5,     // required: rough opening [m]
- *   "frameFraction": 0.15,           // frame share of the opening 0…<1, default 0
- *   "glazing": {                     // required
- *     "shgc": 0.4,                   //   required: SHGC at normal incidence 0…1
- *     "panes": 2,                    //   1…4 for the angular model, default 2
- *     "angleTable": { "angles": [0, 40, 60, 80, 90], "values": [0.4, 0.39, 0.35, 0.2, 0] }, // optional
- *     "interiorAttenuation": 1,      //   blinds/curtains 0…1, default 1 (none)
- *     "radiantFraction": 0.6         //   optional: radiant share for cooling load, default from the core
- *   },
- *   "shading": {                     // optional; every device optional, lengths [m]
- *     "overhang": { "projection": 0.6, "gap": 0.2, "extensionLeft": 0.3, "extensionRight": 0.3 },
- *     "leftFin":  { "projection": 0.4, "gap": 0.1, "extensionAbove": 0.2, "extensionBelow": 0 },
- *     "rightFin": { "projection": 0.4, "gap": 0.1, "extensionAbove": 0.2, "extensionBelow": 0 },
- *     "revealDepth": 0.15,           //   glass set back behind the wall face
- *     "skyline": [5, 5, 12, 20, 8, 0, 0, 3] // elevation angles [°] of equal azimuth sectors from north
- *   },                               //   gap and extensions default 0
- *   "groundAlbedo": 0.2,             // ground reflectance 0…1, default 0.2
- *   "skyModel": "perez1990",         // "isotropic" | "hayDavies" | "perez1990" (default)
- *   "diffuseShading": "viewFactors", // "viewFactors" (default): devices cut sky and ground light too;
- *                                    // "beamOnly": the earlier treatment, for comparison
- *   "weather": { "kind": "ineichenClearSky", "linkeTurbidity": 3.2 }
- *       // or { "kind": "ashraeClearSky", "tauB": 0.35, "tauD": 2.3 }; numbers or lists of 12 (by month).
- *       // Optional when hourly weather comes from a CSV file (`--weather`), or when `site` names an
- *       // example site (its invented clear-sky turbidity is used).
+ *   "name": "East office",          // label for tables and sheets
+ *   "year": 2026,                   // calendar year of the hourly series, 1901…9998
+ *   "latitude": 52.2, "longitude": 4.9, "utcOffset": 1, "elevation": 5,   // or "site": "brackwater"
+ *   "surfaceAzimuth": 90,           // [°] direction the glass faces, clockwise from north
+ *   "width": 1.8, "height": 1.5,    // rough opening [m]
+ *   "frameFraction": 0.15,          // frame share of the opening
+ *   "shgc": 0.4, "panes": 2,        // SHGC at normal incidence; or "shgcAngles"/"shgcValues" lists
+ *   "overhangProjection": 0.6, "overhangGap": 0.2, "overhangExtension": 0.3,
+ *   "finProjection": 0.4, "finGap": 0.1,   // both fins; leftFin… / rightFin… fields for one side
+ *   "revealDepth": 0.15,
+ *   "skyline": [5, 5, 12, 20, 8, 0, 0, 3],
+ *   "diffuseShading": "viewFactors", // default; "beamOnly": devices cut only the beam (the earlier treatment)
+ *   "linkeTurbidity": 3.2           // or "tauB" and "tauD"; one value or 12 by month
  * }
  * ```
+ *
+ * Every field and its default: docs/window-fields.md and `sunpane table --help`. The older nested
+ * form (`site: {latitude…}`, `glazing: {shgc…}`, `shading: {overhang: {projection…}}`,
+ * `weather: {kind, linkeTurbidity}`) is still read, into the same fields. Unknown keys are refused
+ * (a typo would otherwise silently drop a shading device; the nearest field name is suggested); keys
+ * starting with `_` or named `comment` are notes and ignored. Messages name a key as written in the
+ * file (a nested one by its path in the file).
  */
 import * as fs from 'node:fs';
 import { SunpaneError } from '../core/common';
-import type { Fin, Overhang, Shading } from '../core/shading';
-import type { Glazing } from '../core/glazing';
-import type { Site } from '../core/sun';
-import type { SkyModel } from '../core/sky';
-import type { DiffuseShading, Weather, WindowSpec } from '../core/gain';
-import { findExampleSite, EXAMPLE_SITES } from '../demo/sites';
+import type { WindowSpec } from '../core/gain';
+import { GLOSSARY, type GlossaryEntry, windowFieldFor } from '../registry/glossary';
+import { fieldsOf, unknownNameText, windowSpecFromFields } from '../registry/windowRange';
 import { CliInputError } from './cliError';
 import { describeFsError } from './atomicWrite';
 
-/** Defaults applied to omitted optional fields (documented above and in `sunpane table --help`). */
+/** Defaults applied to omitted optional fields (the glossary's; documented in `sunpane table --help`). */
 export const WINDOW_DEFAULTS = Object.freeze({
-  surfaceTilt: 90,
-  frameFraction: 0,
-  panes: 2,
-  interiorAttenuation: 1,
-  groundAlbedo: 0.2,
-  skyModel: 'perez1990' as SkyModel,
-  deviceGap: 0,
-  deviceExtension: 0,
+  surfaceTilt: GLOSSARY.surfaceTilt.default as number,
+  frameFraction: GLOSSARY.frameFraction.default as number,
+  panes: GLOSSARY.panes.default as number,
+  interiorAttenuation: GLOSSARY.interiorAttenuation.default as number,
+  groundAlbedo: GLOSSARY.groundAlbedo.default as number,
+  skyModel: GLOSSARY.skyModel.default as string,
+  timeConvention: GLOSSARY.timeConvention.default as string,
 });
-
-/** The top-level fields of a window file. */
-const WINDOW_FIELDS = ['name', 'year', 'site', 'surfaceAzimuth', 'surfaceTilt', 'width', 'height', 'frameFraction', 'glazing', 'shading', 'groundAlbedo', 'skyModel', 'diffuseShading', 'weather'];
-
-const SKY_MODELS: readonly SkyModel[] = ['isotropic', 'hayDavies', 'perez1990'];
-const DIFFUSE_SHADINGS: readonly DiffuseShading[] = ['viewFactors', 'beamOnly'];
 
 type Json = Record<string, unknown>;
 
@@ -83,238 +55,100 @@ function isObject(v: unknown): v is Json {
   return typeof v === 'object' && v !== null && !Array.isArray(v);
 }
 
-function join(path: string, key: string): string {
-  return path ? `${path}.${key}` : key;
+function isNote(key: string): boolean {
+  return key.startsWith('_') || key === 'comment';
 }
 
-/** Reads the fields of one JSON object by path, refusing unknown ones at the end. */
-class FieldReader {
-  constructor(
-    private readonly obj: Json,
-    private readonly path: string,
-  ) {}
+/** Keys of the older nested form: object → its keys → glossary field. */
+const NESTED: Readonly<Record<string, Readonly<Record<string, string>>>> = {
+  site: { latitude: 'latitude', longitude: 'longitude', utcOffset: 'utcOffset', elevation: 'elevation', pressure: 'pressure', temperature: 'temperature' },
+  glazing: { shgc: 'shgc', panes: 'panes', interiorAttenuation: 'interiorAttenuation', radiantFraction: 'radiantFraction' },
+  'glazing.angleTable': { angles: 'shgcAngles', values: 'shgcValues' },
+  shading: { revealDepth: 'revealDepth', skyline: 'skyline' },
+  'shading.overhang': { projection: 'overhangProjection', gap: 'overhangGap', extensionLeft: 'overhangExtensionLeft', extensionRight: 'overhangExtensionRight' },
+  'shading.leftFin': { projection: 'leftFinProjection', gap: 'leftFinGap', extensionAbove: 'leftFinExtensionAbove', extensionBelow: 'leftFinExtensionBelow' },
+  'shading.rightFin': { projection: 'rightFinProjection', gap: 'rightFinGap', extensionAbove: 'rightFinExtensionAbove', extensionBelow: 'rightFinExtensionBelow' },
+  weather: { linkeTurbidity: 'linkeTurbidity', tauB: 'tauB', tauD: 'tauD' },
+};
+/** Objects of the nested form inside each nested object. */
+const NESTED_OBJECTS: Readonly<Record<string, readonly string[]>> = { glazing: ['angleTable'], shading: ['overhang', 'leftFin', 'rightFin'] };
 
-  has(key: string): boolean {
-    return this.obj[key] !== undefined && this.obj[key] !== null;
-  }
+interface Entry {
+  field: GlossaryEntry;
+  written: string;
+  cell: string | number | readonly unknown[];
+}
 
-  raw(key: string): unknown {
-    return this.obj[key];
-  }
+function cellOf(key: string, v: unknown): string | number | readonly unknown[] {
+  if (typeof v === 'string' || typeof v === 'number' || Array.isArray(v)) return v;
+  throw new SunpaneError(key, v, Array.isArray(v) || isObject(v) ? 'must be a number, a text or a list of numbers' : 'must be a number, a text or a list of numbers');
+}
 
-  number(key: string, fallback?: number, unit?: string): number {
-    const v = this.raw(key);
-    if (v === undefined || v === null) {
-      if (fallback !== undefined) return fallback;
-      throw new SunpaneError(join(this.path, key), v, `is required: must be a number${unit ? ` in ${unit}` : ''}`);
+/** The entries of a nested object (`glazing`, `shading.overhang`, …), refusing unknown keys. */
+function nestedEntries(path: string, obj: Json, out: Entry[]): void {
+  const keys = NESTED[path];
+  for (const [key, v] of Object.entries(obj)) {
+    if (isNote(key) || v === undefined || v === null) continue;
+    const at = `${path}.${key}`;
+    if (path === 'weather' && key === 'kind') {
+      if (v !== 'ineichenClearSky' && v !== 'ashraeClearSky') {
+        throw new SunpaneError(at, v, 'must be "ineichenClearSky" or "ashraeClearSky" (hourly measured weather comes from a CSV file: --weather FILE.csv); or leave weather out and give linkeTurbidity, or tauB and tauD');
+      }
+      continue;
     }
-    if (typeof v !== 'number' || !Number.isFinite(v)) {
-      throw new SunpaneError(join(this.path, key), v, `must be a number${unit ? ` in ${unit}` : ''} (without quotes)`);
+    if ((NESTED_OBJECTS[path] ?? []).includes(key)) {
+      if (!isObject(v)) throw new SunpaneError(at, v, 'must be an object { ... }');
+      nestedEntries(at, v, out);
+      continue;
     }
-    return v;
-  }
-
-  optionalNumber(key: string, unit?: string): number | undefined {
-    return this.has(key) ? this.number(key, undefined, unit) : undefined;
-  }
-
-  text(key: string, fallback?: string): string {
-    const v = this.raw(key);
-    if (v === undefined || v === null || v === '') {
-      if (fallback !== undefined) return fallback;
-      throw new SunpaneError(join(this.path, key), v, 'is required: must be a text');
+    const name = keys?.[key];
+    if (name === undefined) {
+      const known = [...Object.keys(keys ?? {}), ...(NESTED_OBJECTS[path] ?? []), ...(path === 'weather' ? ['kind'] : [])];
+      throw new SunpaneError(at, v, `is not a field of ${path} (known: ${known.join(', ')})`);
     }
-    if (typeof v !== 'string') throw new SunpaneError(join(this.path, key), v, 'must be a text (in quotes)');
-    return v;
+    out.push({ field: GLOSSARY[name as keyof typeof GLOSSARY], written: at, cell: cellOf(at, v) });
   }
-
-  numberList(key: string, unit?: string): number[] {
-    const v = this.raw(key);
-    const p = join(this.path, key);
-    if (typeof v === 'number') return [this.number(key, undefined, unit)];
-    if (!Array.isArray(v)) throw new SunpaneError(p, v, `${v === undefined ? 'is required: ' : ''}must be a number or a list of numbers${unit ? ` in ${unit}` : ''}`);
-    return v.map((x, i) => {
-      if (typeof x !== 'number' || !Number.isFinite(x)) throw new SunpaneError(`${p}[${i}]`, x, `must be a number${unit ? ` in ${unit}` : ''}`);
-      return x;
-    });
+  if (path === 'shading.overhang' || path === 'shading.leftFin' || path === 'shading.rightFin') {
+    if (obj.projection === undefined || obj.projection === null) throw new SunpaneError(`${path}.projection`, null, 'is required: must be a number from 0 to 100 m (the device is given)');
   }
-
-  object(key: string): FieldReader | undefined {
-    const v = this.raw(key);
-    if (v === undefined || v === null) return undefined;
-    if (!isObject(v)) throw new SunpaneError(join(this.path, key), v, 'must be an object { ... }');
-    return new FieldReader(v, join(this.path, key));
-  }
-
-  requiredObject(key: string): FieldReader {
-    const r = this.object(key);
-    if (!r) throw new SunpaneError(join(this.path, key), undefined, 'is required: must be an object { ... }');
-    return r;
-  }
-
-  /**
-   * Throws for the first field not in `known` (a typo or an unsupported option) — checked before
-   * any value, so that a misspelt field is reported as such rather than as a missing one.
-   */
-  only(known: readonly string[]): this {
-    for (const key of Object.keys(this.obj)) {
-      if (known.includes(key) || key.startsWith('_') || key === 'comment') continue;
-      throw new SunpaneError(join(this.path, key), this.obj[key], `is not a field of ${this.path || 'the window'} (known fields: ${known.join(', ')})`);
-    }
-    return this;
-  }
-}
-
-function readSite(parent: FieldReader): { site: Site; exampleWeather?: Weather; exampleAlbedo?: number } {
-  const raw = parent.raw('site');
-  if (typeof raw === 'string') {
-    const example = findExampleSite(raw);
-    if (!example) {
-      throw new SunpaneError('site', raw, `must be an object with latitude, longitude and utcOffset, or one of the example sites ${EXAMPLE_SITES.map((s) => `"${s.id}"`).join(', ')}`);
-    }
-    return {
-      site: { ...example.site },
-      exampleWeather: { kind: 'ineichenClearSky', linkeTurbidity: [...example.linkeTurbidity] },
-      exampleAlbedo: example.groundAlbedo,
-    };
-  }
-  const r = parent.requiredObject('site').only(['latitude', 'longitude', 'utcOffset', 'elevation', 'pressure', 'temperature']);
-  const site: Site = {
-    latitude: r.number('latitude', undefined, '°'),
-    longitude: r.number('longitude', undefined, '°'),
-    utcOffset: r.number('utcOffset', undefined, 'h'),
-  };
-  const elevation = r.optionalNumber('elevation', 'm');
-  const pressure = r.optionalNumber('pressure', 'hPa');
-  const temperature = r.optionalNumber('temperature', '°C');
-  if (elevation !== undefined) site.elevation = elevation;
-  if (pressure !== undefined) site.pressure = pressure;
-  if (temperature !== undefined) site.temperature = temperature;
-  return { site };
-}
-
-function readGlazing(parent: FieldReader): Glazing {
-  const r = parent.requiredObject('glazing').only(['shgc', 'panes', 'angleTable', 'interiorAttenuation', 'radiantFraction']);
-  const glazing: Glazing = { shgc: r.number('shgc'), panes: r.number('panes', WINDOW_DEFAULTS.panes) };
-  const table = r.object('angleTable');
-  if (table) {
-    table.only(['angles', 'values']);
-    glazing.angleTable = { angles: table.numberList('angles', '°'), values: table.numberList('values') };
-  }
-  glazing.interiorAttenuation = r.number('interiorAttenuation', WINDOW_DEFAULTS.interiorAttenuation);
-  const radiant = r.optionalNumber('radiantFraction');
-  if (radiant !== undefined) glazing.radiantFraction = radiant;
-  return glazing;
-}
-
-function readOverhang(r: FieldReader): Overhang {
-  r.only(['projection', 'gap', 'extensionLeft', 'extensionRight']);
-  const o: Overhang = {
-    projection: r.number('projection', undefined, 'm'),
-    gap: r.number('gap', WINDOW_DEFAULTS.deviceGap, 'm'),
-    extensionLeft: r.number('extensionLeft', WINDOW_DEFAULTS.deviceExtension, 'm'),
-    extensionRight: r.number('extensionRight', WINDOW_DEFAULTS.deviceExtension, 'm'),
-  };
-  return o;
-}
-
-function readFin(r: FieldReader): Fin {
-  r.only(['projection', 'gap', 'extensionAbove', 'extensionBelow']);
-  const f: Fin = {
-    projection: r.number('projection', undefined, 'm'),
-    gap: r.number('gap', WINDOW_DEFAULTS.deviceGap, 'm'),
-    extensionAbove: r.number('extensionAbove', WINDOW_DEFAULTS.deviceExtension, 'm'),
-    extensionBelow: r.number('extensionBelow', WINDOW_DEFAULTS.deviceExtension, 'm'),
-  };
-  return f;
-}
-
-function readShading(parent: FieldReader): Shading {
-  const r = parent.object('shading');
-  if (!r) return {};
-  r.only(['overhang', 'leftFin', 'rightFin', 'revealDepth', 'skyline']);
-  const shading: Shading = {};
-  const overhang = r.object('overhang');
-  if (overhang) shading.overhang = readOverhang(overhang);
-  const left = r.object('leftFin');
-  if (left) shading.leftFin = readFin(left);
-  const right = r.object('rightFin');
-  if (right) shading.rightFin = readFin(right);
-  const reveal = r.optionalNumber('revealDepth', 'm');
-  if (reveal !== undefined) shading.revealDepth = reveal;
-  if (r.has('skyline')) shading.skyline = r.numberList('skyline', '°');
-  return shading;
-}
-
-function readWeather(parent: FieldReader): Weather | undefined {
-  const r = parent.object('weather');
-  if (!r) return undefined;
-  r.only(['kind', 'linkeTurbidity', 'tauB', 'tauD']);
-  const kind = r.text('kind');
-  let weather: Weather;
-  if (kind === 'ineichenClearSky') weather = { kind, linkeTurbidity: r.numberList('linkeTurbidity') };
-  else if (kind === 'ashraeClearSky') weather = { kind, tauB: r.numberList('tauB'), tauD: r.numberList('tauD') };
-  else {
-    throw new SunpaneError('weather.kind', kind, 'must be "ineichenClearSky" or "ashraeClearSky" (hourly measured weather comes from a CSV file: --weather FILE.csv)');
-  }
-  return weather;
 }
 
 /** The result of reading a window file: the spec, and whether its weather still has to be supplied. */
 export interface WindowFile {
   spec: WindowSpec;
-  /** False when the JSON gave no weather (then the caller must supply hourly weather). */
+  /** False when the JSON gave no sky (then the caller must supply hourly weather). */
   hasWeather: boolean;
 }
 
 /**
  * Reads a window description from parsed JSON.
- * @param json - the parsed file content
- * @returns the window; `spec.weather` is a placeholder clear sky when `hasWeather` is false
- * @throws SunpaneError naming the field path for a missing, mistyped or unknown field
+ * @param json - the parsed file content: flat glossary keys, or the older nested form
+ * @returns the window; `spec.weather` is a placeholder when `hasWeather` is false
+ * @throws SunpaneError naming the key as written for a missing, mistyped, out-of-range or unknown field
  */
 export function windowFromJson(json: unknown): WindowFile {
   if (!isObject(json)) throw new SunpaneError('window', json, 'must be a JSON object { ... } describing one window');
-  const r = new FieldReader(json, '').only(WINDOW_FIELDS);
-  const name = r.text('name');
-  const year = r.number('year');
-  if (!Number.isInteger(year)) throw new SunpaneError('year', year, 'must be a whole number (calendar year)');
-  const { site, exampleWeather, exampleAlbedo } = readSite(r);
-  const surfaceAzimuth = r.number('surfaceAzimuth', undefined, '°');
-  const surfaceTilt = r.number('surfaceTilt', WINDOW_DEFAULTS.surfaceTilt, '°');
-  const width = r.number('width', undefined, 'm');
-  const height = r.number('height', undefined, 'm');
-  const frameFraction = r.number('frameFraction', WINDOW_DEFAULTS.frameFraction);
-  const glazing = readGlazing(r);
-  const shading = readShading(r);
-  const groundAlbedo = r.number('groundAlbedo', exampleAlbedo ?? WINDOW_DEFAULTS.groundAlbedo);
-  const skyModelText = r.text('skyModel', WINDOW_DEFAULTS.skyModel);
-  const skyModel = SKY_MODELS.find((m) => m.toLowerCase() === skyModelText.toLowerCase());
-  if (!skyModel) throw new SunpaneError('skyModel', skyModelText, `must be one of ${SKY_MODELS.map((m) => `"${m}"`).join(', ')}`);
-  const diffuseText = r.text('diffuseShading', 'viewFactors');
-  const diffuseShading = DIFFUSE_SHADINGS.find((m) => m.toLowerCase() === diffuseText.toLowerCase());
-  if (!diffuseShading) throw new SunpaneError('diffuseShading', diffuseText, `must be one of ${DIFFUSE_SHADINGS.map((m) => `"${m}"`).join(', ')}`);
-  const given = readWeather(r);
-  const weather = given ?? exampleWeather;
-  return {
-    spec: {
-      name,
-      site,
-      surfaceAzimuth,
-      surfaceTilt,
-      width,
-      height,
-      frameFraction,
-      glazing,
-      shading,
-      groundAlbedo,
-      skyModel,
-      ...(diffuseShading === 'beamOnly' ? { diffuseShading } : {}),
-      weather: weather ?? { kind: 'measured', dni: [], dhi: [] },
-      year,
-    },
-    hasWeather: weather !== undefined,
-  };
+  const entries: Entry[] = [];
+  for (const [key, v] of Object.entries(json)) {
+    if (isNote(key) || v === undefined || v === null) continue;
+    if (NESTED[key] && (isObject(v) || key !== 'site')) {
+      if (!isObject(v)) throw new SunpaneError(key, v, 'must be an object { ... }');
+      nestedEntries(key, v, entries);
+      continue;
+    }
+    const field = windowFieldFor(key);
+    if (!field) throw new SunpaneError(key, v, unknownNameText(key).replace("the function's help", '`sunpane table --help`'));
+    entries.push({ field, written: key, cell: cellOf(key, v) });
+  }
+  const seen = new Map<string, string>();
+  for (const e of entries) {
+    const before = seen.get(e.field.name);
+    if (before !== undefined) throw new SunpaneError(e.written, e.cell, `gives the same field as ${before} (${e.field.name}): keep one`);
+    seen.set(e.field.name, e.written);
+  }
+  if (!seen.has('name')) throw new SunpaneError('name', null, 'is required: a text, the window’s label in tables and sheets');
+  const { spec, hasWeather } = windowSpecFromFields(fieldsOf(entries));
+  return { spec, hasWeather };
 }
 
 /**

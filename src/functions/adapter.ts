@@ -66,9 +66,22 @@ export function normaliseCell(value: unknown): Scalar {
 export function normaliseArg(value: unknown): RawArg | undefined {
   if (value === null || value === undefined) return undefined;
   if (!Array.isArray(value)) return normaliseCell(value);
-  const rows: Matrix = value.map((row) => (Array.isArray(row) ? row.map(normaliseCell) : [normaliseCell(row)]));
-  if (rows.length === 1 && rows[0].length === 1) return rows[0][0] === null ? undefined : rows[0][0];
-  return rows;
+  // Excel hands each call arrays of its own: cells are normalised in place, each read once.
+  const rows = value as unknown[];
+  for (let i = 0; i < rows.length; i++) {
+    const row = rows[i];
+    if (!Array.isArray(row)) {
+      rows[i] = [normaliseCell(row)];
+      continue;
+    }
+    for (let j = 0; j < row.length; j++) {
+      const c = row[j];
+      if (typeof c !== 'number' && typeof c !== 'string' && typeof c !== 'boolean' && c !== null) row[j] = normaliseCell(c);
+    }
+  }
+  const matrix = rows as Matrix;
+  if (matrix.length === 1 && matrix[0].length === 1) return matrix[0][0] === null ? undefined : matrix[0][0];
+  return matrix;
 }
 
 /** One result cell → what Excel shows. */
@@ -89,11 +102,16 @@ function toExcelCell(cell: OutCell, runtime: CustomFunctionsRuntime): ExcelCell 
 export function toExcelResult(table: OutTable, fnName: string, runtime: CustomFunctionsRuntime): ExcelResult {
   const width = table.reduce((w, row) => Math.max(w, row.length), 0);
   if (table.length === 0 || width === 0) return [[makeError(runtime, runtime.ErrorCode.notAvailable, `${fnName} has no rows to show for these arguments`)]];
-  return table.map((row) => {
-    const line = row.map((c) => toExcelCell(c, runtime));
+  // The table is the registry's own, made for this call: its cells are turned into Excel's in place.
+  const out = table as unknown as ExcelCell[][];
+  for (const line of out) {
+    for (let j = 0; j < line.length; j++) {
+      const c = line[j] as OutCell;
+      if (typeof c !== 'number' || !Number.isFinite(c)) line[j] = toExcelCell(c, runtime);
+    }
     while (line.length < width) line.push('');
-    return line;
-  });
+  }
+  return out;
 }
 
 /**

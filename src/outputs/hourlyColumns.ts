@@ -1,8 +1,11 @@
 /**
  * The hourly table's columns: one set of header words, one order and one unit notation (the unit
  * in parentheses after the words) for the pane's sheet, the command line's CSV and workbook, and
- * the demo workbook. Each column is a field of the core's annual series.
+ * the demo workbook. Each column is a field of the core's annual series. The stamp column's words
+ * follow the window's time convention (src/core/time/convention.ts): the hour ending at the stamp,
+ * or the instant itself.
  */
+import { DEFAULT_TIME_CONVENTION, type TimeConvention } from '../core/time';
 
 /** Fields of an annual series that the hourly table shows, in table order. */
 export type HourlyKey =
@@ -56,12 +59,27 @@ export const HOURLY_COLUMNS: readonly HourlyColumn[] = Object.freeze([
   { key: 'missing', header: 'Weather missing (1 = yes)', numFmt: '0', csvDecimals: 0, sheetDecimals: 0 },
 ] as HourlyColumn[]);
 
-/** The header row, in order. */
+/** The stamp column of a table whose rows are instants (time convention `instant`). */
+const INSTANT_STAMP: HourlyColumn = Object.freeze({ ...HOURLY_COLUMNS[0], header: 'Instant (local standard time)' });
+
+/** The hourly columns of a table read by a time convention (the stamp column's words differ). */
+export function hourlyColumnsFor(convention: TimeConvention = DEFAULT_TIME_CONVENTION): readonly HourlyColumn[] {
+  return convention === 'instant' ? INSTANT_COLUMNS : HOURLY_COLUMNS;
+}
+
+const INSTANT_COLUMNS: readonly HourlyColumn[] = Object.freeze([INSTANT_STAMP, ...HOURLY_COLUMNS.slice(1)]);
+
+/** The header row, in order (hour-ending stamps). */
 export const HOURLY_HEADERS: readonly string[] = Object.freeze(HOURLY_COLUMNS.map((c) => c.header));
 
-/** The column of `key`. */
-export function hourlyColumn(key: HourlyKey): HourlyColumn {
-  const c = HOURLY_COLUMNS.find((x) => x.key === key);
+/** The header row of a table read by a time convention. */
+export function hourlyHeadersFor(convention: TimeConvention = DEFAULT_TIME_CONVENTION): readonly string[] {
+  return hourlyColumnsFor(convention).map((c) => c.header);
+}
+
+/** The column of `key` (the stamp column's words by the time convention). */
+export function hourlyColumn(key: HourlyKey, convention: TimeConvention = DEFAULT_TIME_CONVENTION): HourlyColumn {
+  const c = hourlyColumnsFor(convention).find((x) => x.key === key);
   if (!c) throw new Error(`no hourly column ${key}`);
   return c;
 }

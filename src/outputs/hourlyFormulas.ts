@@ -4,28 +4,35 @@
  * and the months, the year and the month × hour block follow. They refer to the table's columns
  * by structured reference (`Table[[Header]]`), which grows with the table.
  *
- * Month of a row: the month of the middle of its hour, as the core's annual summary counts it. A
- * row is stamped at the END of its hour, so the hour ending at midnight on the 1st belongs to the
- * month before: stamps after DATE(y, m, 1) and up to DATE(y, m + 1, 1).
+ * Month of a row: the month of its day, as the core's annual summary counts it. Under the time
+ * convention `hourEnding` a row is stamped at the END of its hour, so the hour ending at midnight
+ * on the 1st belongs to the month before: stamps after DATE(y, m, 1) and up to DATE(y, m + 1, 1);
+ * under `instant` the stamps from DATE(y, m, 1) and before DATE(y, m + 1, 1).
  */
+import { DEFAULT_TIME_CONVENTION, type TimeConvention } from '../core/time';
 import { type HourlyKey, hourlyColumn } from './hourlyColumns';
 
 export type { HourlyKey };
 
-/** How a formula names a column of the hourly table. */
-export type ColumnRef = (key: HourlyKey) => string;
+/** How a formula names a column of the hourly table; `convention` is how the table's rows are stamped (default `hourEnding`). */
+export type ColumnRef = ((key: HourlyKey) => string) & { convention?: TimeConvention };
 
 /**
  * A structured reference to a column of an Excel table. In a column specifier the characters
  * `[ ] # '` are escaped by a preceding `'`; the double brackets let any other character stand.
+ * @param table - the table's name
+ * @param convention - how the table's rows are stamped (names the stamp column; default `hourEnding`)
  */
-export function tableColumnRef(table: string): ColumnRef {
-  return (key) => `${table}[[${hourlyColumn(key).header.replace(/(['#[\]])/g, "'$1")}]]`;
+export function tableColumnRef(table: string, convention: TimeConvention = DEFAULT_TIME_CONVENTION): ColumnRef {
+  const ref: ColumnRef = (key) => `${table}[[${hourlyColumn(key, convention).header.replace(/(['#[\]])/g, "'$1")}]]`;
+  ref.convention = convention;
+  return ref;
 }
 
 /** The sum of column `key` over the rows of month `month` (1…12) of `year`. */
 export function monthlySumFormula(ref: ColumnRef, key: HourlyKey, year: number, month: number): string {
   const t = ref('stampSerial');
+  if (ref.convention === 'instant') return `SUMIFS(${ref(key)},${t},">="&DATE(${year},${month},1),${t},"<"&DATE(${year},${month + 1},1))`;
   return `SUMIFS(${ref(key)},${t},">"&DATE(${year},${month},1),${t},"<="&DATE(${year},${month + 1},1))`;
 }
 
@@ -35,12 +42,13 @@ export function monthlyGainFormula(ref: ColumnRef, year: number, month: number):
 }
 
 /**
- * Mean solar gain [W] in the hour ending at `hourEnding` (1…24) over the days of month `month`:
- * the rows whose mid-hour falls in that month and that hour of the day, summed, over the days of
- * the month.
+ * Mean solar gain [W] in the day's `hourEnding`-th hour (1…24: the hour ending then, or for
+ * `instant` rows the instant an hour earlier, 0:00…23:00) over the days of month `month`: the rows
+ * whose hour falls in that month and that hour of the day, summed, over the days of the month.
  */
 export function monthHourMeanFormula(ref: ColumnRef, year: number, month: number, hourEnding: number): string {
-  const mid = `(${ref('stampSerial')}-1/48)`;
+  // A point inside the row's hour: its middle for hour-ending rows, just after the instant for instant rows.
+  const mid = ref.convention === 'instant' ? `(${ref('stampSerial')}+1/48)` : `(${ref('stampSerial')}-1/48)`;
   return `SUMPRODUCT((MONTH(${mid})=${month})*(HOUR(${mid})=${hourEnding - 1})*${ref('gain')})/DAY(DATE(${year},${month + 1},0))`;
 }
 

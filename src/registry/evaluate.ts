@@ -2,18 +2,24 @@
  * Reading arguments and broadcasting: the one place where any registered function is applied over
  * single values and ranges, for Excel and the CLI alike.
  *
- * Rules (like built-in worksheet functions):
- * - every `number` / `dateTime` / `choice` / `flag` parameter takes a single value or a range;
- *   ranges of equal shape pair element by element, and a single value (or 1 × 1 range) pairs with
- *   every element; other shapes are refused;
+ * Rules (like Excel's own functions):
+ * - every `number` / `dateTime` / `choice` / `flag` / `text` parameter takes a single value or a
+ *   range; the result has as many rows as the tallest argument and as many columns as the widest;
+ *   an argument of one row is repeated down, one of one column across (so a column against a row
+ *   gives a 2-D table), and a cell where a range has no partner is #N/A, as built-ins do;
+ * - a `window` parameter is one window or several (one per value row or column of the range), and
+ *   broadcasts like a column or a row of values (src/registry/windowRange.ts);
+ * - each cell of a range is read once, however often the broadcast uses it;
  * - a blank cell or omitted argument takes the parameter's default, if it has one;
  * - a bad element makes only its own result cell an error;
  * - `numberList` and `table` parameters take their whole range and are not broadcast;
- * - `spill` functions take single values for their broadcast parameters.
+ * - `spill` functions take single values (and one window) for their broadcast parameters.
  */
 import { SunpaneError, rangeText, requireRange } from '../core/common';
 import { parseIsoLocal, requireSerial } from '../core/time';
+import { choiceFor } from './glossary';
 import { type ArgValue, type Args, type FunctionDescriptor, type Matrix, NotAvailable, type OutCell, type OutTable, type ParamDescriptor, type RawArg, type Scalar } from './types';
+import { choiceText, readWindowRange } from './windowRange';
 
 function isMatrix(raw: RawArg | undefined): raw is Matrix {
   return Array.isArray(raw);
@@ -42,11 +48,13 @@ export function readScalar(param: ParamDescriptor, value: Scalar | undefined): A
       }
       return requireSerial(param.name, value);
     case 'choice': {
-      const text = String(value).trim().toLowerCase();
-      const hit = (param.choices ?? []).find((c) => c.toLowerCase() === text);
-      if (hit === undefined || typeof value === 'boolean') throw new SunpaneError(param.name, value, allowedText(param));
+      const hit = typeof value === 'string' ? choiceFor(param, value) : undefined;
+      if (hit === undefined) throw new SunpaneError(param.name, value, allowedText(param));
       return hit;
     }
+    case 'text':
+      if (typeof value !== 'string') throw new SunpaneError(param.name, value, allowedText(param));
+      return value.trim();
     case 'flag':
       if (typeof value === 'boolean') return value;
       if (value === 1 || value === 0) return value === 1;
@@ -57,9 +65,10 @@ export function readScalar(param: ParamDescriptor, value: Scalar | undefined): A
   }
 }
 
-/** Reads a whole-range parameter (`numberList` or `table`). */
+/** Reads a whole-range parameter (`numberList`, `choiceList` or `table`). */
 export function readRange(param: ParamDescriptor, raw: RawArg | undefined): ArgValue {
   const rows: Matrix = isMatrix(raw) ? raw : isBlank(raw as Scalar) ? [] : [[raw as Scalar]];
+  if (param.kind === 'choiceList') return readChoiceList(param, rows, raw);
   if (param.kind === 'table') {
     if (rows.length === 0 || rows.every((r) => r.every(isBlank))) {
       if (param.optional || param.default !== undefined) return undefined;
@@ -104,6 +113,26 @@ export function readRange(param: ParamDescriptor, raw: RawArg | undefined): ArgV
   return values;
 }
 
+function readChoiceList(param: ParamDescriptor, rows: Matrix, raw: RawArg | undefined): ArgValue {
+  const tokens: string[] = [];
+  for (const row of rows) {
+    for (const cell of row) {
+      if (isBlank(cell)) continue;
+      const token = typeof cell === 'string' ? choiceFor(param, cell) : undefined;
+      if (token === undefined) throw new SunpaneError(`${param.name} (value ${tokens.length + 1})`, cell, choiceText(param));
+      tokens.push(token);
+    }
+  }
+  if (tokens.length === 0) {
+    if (param.default !== undefined) return [String(param.default)];
+    if (param.optional) return undefined;
+    throw new SunpaneError(param.name, raw ?? null, `is required: ${choiceText(param)}`);
+  }
+  const max = param.length?.max;
+  if (max !== undefined && tokens.length > max) throw new SunpaneError(param.name, tokens, `must hold at most ${max} names`);
+  return tokens;
+}
+
 /** The allowed values of a parameter in words (shared by messages, Excel descriptions and docs). */
 export function allowedText(param: ParamDescriptor): string {
   switch (param.kind) {
@@ -112,7 +141,12 @@ export function allowedText(param: ParamDescriptor): string {
     case 'dateTime':
       return 'must be a date-time (serial number or ISO 8601 local text) from 1 March 1900 to 31 December 9999';
     case 'choice':
-      return `must be one of ${(param.choices ?? []).map((c) => `"${c}"`).join(', ')}`;
+    case 'choiceList':
+      return choiceText(param);
+    case 'text':
+      return 'must be a text';
+    case 'window':
+      return 'must be a range of window fields (names with values)';
     case 'flag':
       return 'must be TRUE or FALSE';
     case 'numberList':
@@ -122,20 +156,13 @@ export function allowedText(param: ParamDescriptor): string {
   }
 }
 
-function isBroadcast(param: ParamDescriptor): boolean {
-  return param.kind !== 'numberList' && param.kind !== 'table';
+function isWholeRange(param: ParamDescriptor): boolean {
+  return param.kind === 'numberList' || param.kind === 'choiceList' || param.kind === 'table';
 }
 
 function shapeOf(raw: RawArg | undefined): [number, number] {
   if (!isMatrix(raw)) return [1, 1];
   return [raw.length, raw.reduce((w, r) => Math.max(w, r.length), 0)];
-}
-
-function elementAt(raw: RawArg | undefined, i: number, j: number): Scalar | undefined {
-  if (!isMatrix(raw)) return raw;
-  const [rows, cols] = shapeOf(raw);
-  if (rows === 1 && cols === 1) return raw[0][0];
-  return raw[i]?.[j] ?? null;
 }
 
 /** Turns anything a function throws into a result cell; programming errors are re-thrown. */
@@ -144,66 +171,142 @@ function errorCell(err: unknown): OutCell {
   throw err;
 }
 
+/** One broadcast argument, read: its shape and each cell's value (or the error reading it), row-major. */
+interface ReadArg {
+  rows: number;
+  cols: number;
+  cells: (ArgValue | SunpaneError)[];
+}
+
+function readOnce(param: ParamDescriptor, value: Scalar | undefined): ArgValue | SunpaneError {
+  try {
+    return readScalar(param, value);
+  } catch (err) {
+    if (err instanceof SunpaneError) return err;
+    throw err;
+  }
+}
+
+/** Reads a broadcast argument: every cell once. */
+function readBroadcast(param: ParamDescriptor, raw: RawArg | undefined): ReadArg {
+  if (param.kind === 'window') {
+    if (raw === undefined || raw === null || raw === '') throw new SunpaneError(param.name, null, `is required: ${allowedText(param)}`);
+    const w = readWindowRange(raw, param.name);
+    return { rows: w.rows, cols: w.columns, cells: w.windows };
+  }
+  const [rows, cols] = shapeOf(raw);
+  if (rows === 0 || cols === 0) throw new SunpaneError(param.name, raw ?? null, 'must not be an empty range');
+  if (!isMatrix(raw)) return { rows: 1, cols: 1, cells: [readOnce(param, raw)] };
+  const cells: (ArgValue | SunpaneError)[] = new Array(rows * cols);
+  for (let i = 0; i < rows; i++) {
+    const line = raw[i];
+    for (let j = 0; j < cols; j++) cells[i * cols + j] = readOnce(param, line[j] ?? null);
+  }
+  return { rows, cols, cells };
+}
+
+/** The #N/A of a cell where one of the ranges has no value (they differ in size). */
+function noPartner(param: ParamDescriptor, arg: ReadArg): NotAvailable {
+  return new NotAvailable(`${param.name} has no value here: it is a ${arg.rows} × ${arg.cols} range and the other ranges are larger`);
+}
+
 /**
  * Applies a registered function to raw arguments (as from cells or the CLI), broadcasting over
- * ranges. Returns the result table; bad elements are SunpaneError cells. Throws SunpaneError only
- * when the call as a whole is malformed (mismatched range shapes, too many arguments, a bad
- * whole-range argument, a range given to a spilling function).
+ * ranges as Excel's own functions do. Returns the result table; bad elements are SunpaneError
+ * cells, cells without a partner NotAvailable. Throws SunpaneError only when the call as a whole is
+ * malformed (too many arguments, a bad whole-range argument, a range given to a spilling function).
  */
 export function applyFunction(fn: FunctionDescriptor, rawArgs: readonly (RawArg | undefined)[]): OutTable {
   if (rawArgs.length > fn.params.length) {
     throw new SunpaneError('arguments', rawArgs.length, `${fn.name} takes at most ${fn.params.length} arguments`);
   }
   const fixed: Args = {};
+  const broadcast: { param: ParamDescriptor; arg: ReadArg }[] = [];
   let rows = 1;
   let cols = 1;
   let shapeFrom = '';
-  fn.params.forEach((p, k) => {
-    const raw = rawArgs[k];
-    if (!isBroadcast(p)) {
-      fixed[p.name] = readRange(p, raw);
-      return;
+  for (let k = 0; k < fn.params.length; k++) {
+    const p = fn.params[k];
+    if (isWholeRange(p)) {
+      fixed[p.name] = readRange(p, rawArgs[k]);
+      continue;
     }
-    const [r, c] = shapeOf(raw);
-    if (r === 0 || c === 0) throw new SunpaneError(p.name, raw ?? null, 'must not be an empty range');
-    if (r === 1 && c === 1) return;
-    if (rows === 1 && cols === 1) {
-      [rows, cols, shapeFrom] = [r, c, p.name];
-    } else if (r !== rows || c !== cols) {
-      throw new SunpaneError(p.name, `a ${r} × ${c} range`, `must be a single value or a range of the same shape as ${shapeFrom} (${rows} × ${cols})`);
+    const arg = readBroadcast(p, rawArgs[k]);
+    if (arg.rows === 1 && arg.cols === 1) {
+      const v = arg.cells[0];
+      if (v instanceof SunpaneError) {
+        // A single bad value spoils every cell: report it once, as the whole result.
+        if (fn.result.shape === 'spill') return [[v]];
+        broadcast.push({ param: p, arg });
+      } else fixed[p.name] = v;
+      continue;
     }
-  });
-  if (fn.result.shape === 'spill' && (rows > 1 || cols > 1)) {
-    throw new SunpaneError(shapeFrom, `a ${rows} × ${cols} range`, `must be a single value: ${fn.name} spills a table of its own`);
+    broadcast.push({ param: p, arg });
+    if (arg.rows * arg.cols > rows * cols) shapeFrom = p.name;
+    rows = Math.max(rows, arg.rows);
+    cols = Math.max(cols, arg.cols);
   }
-  const out: OutTable = [];
-  for (let i = 0; i < rows; i++) {
-    const line: OutCell[] = [];
-    for (let j = 0; j < cols; j++) {
-      let args: Args;
-      try {
-        args = { ...fixed };
-        for (let k = 0; k < fn.params.length; k++) {
-          const p = fn.params[k];
-          if (isBroadcast(p)) args[p.name] = readScalar(p, elementAt(rawArgs[k], i, j));
-        }
-      } catch (err) {
-        line.push(errorCell(err));
-        continue;
-      }
-      let value: number | NotAvailable | OutTable;
-      try {
-        value = fn.evaluate(args);
-      } catch (err) {
-        line.push(errorCell(err));
-        continue;
-      }
-      if (Array.isArray(value)) return value.map((r) => r.map(checkCell));
-      line.push(checkCell(value));
+  if (fn.result.shape === 'spill' && (rows > 1 || cols > 1)) {
+    const what = fn.params.find((p) => p.name === shapeFrom)?.kind === 'window' ? 'one window' : 'a single value';
+    throw new SunpaneError(shapeFrom, `a ${rows} × ${cols} range`, `must be ${what}: ${fn.name} spills a table of its own`);
+  }
+  if (fn.result.shape === 'spill') {
+    const args = argsAt({ ...fixed }, broadcast, 0, 0);
+    if (!isArgs(args)) return [[args]];
+    let value: number | NotAvailable | OutTable;
+    try {
+      value = fn.evaluate(args);
+    } catch (err) {
+      return [[errorCell(err)]];
     }
-    out.push(line);
+    return Array.isArray(value) ? value.map((r) => r.map(checkCell)) : [[checkCell(value)]];
+  }
+  const out: OutTable = new Array(rows);
+  // One arguments object for every cell, its broadcast entries set cell by cell (descriptors never
+  // keep their arguments): a range of 100,000 cells allocates no object per cell for them.
+  const args: Args = { ...fixed };
+  for (let i = 0; i < rows; i++) {
+    const line: OutCell[] = new Array(cols);
+    for (let j = 0; j < cols; j++) line[j] = cellOf(fn, argsAt(args, broadcast, i, j));
+    out[i] = line;
   }
   return out;
+}
+
+type Broadcast = readonly { param: ParamDescriptor; arg: ReadArg }[];
+
+function isArgs(a: Args | OutCell): a is Args {
+  return typeof a === 'object' && !(a instanceof SunpaneError) && !(a instanceof NotAvailable);
+}
+
+/**
+ * The arguments of result cell (i, j): `args` (the fixed ones) with each broadcast one's partner set
+ * in it, or the cell's error / #N/A.
+ */
+function argsAt(args: Args, broadcast: Broadcast, i: number, j: number): Args | OutCell {
+  for (let b = 0; b < broadcast.length; b++) {
+    const { param, arg } = broadcast[b];
+    const r = arg.rows === 1 ? 0 : i;
+    const c = arg.cols === 1 ? 0 : j;
+    if (r >= arg.rows || c >= arg.cols) return noPartner(param, arg);
+    const v = arg.cells[r * arg.cols + c];
+    if (v instanceof SunpaneError) return v;
+    args[param.name] = v;
+  }
+  return args;
+}
+
+/** One value cell: the function on its arguments (or the cell's error / #N/A as given). */
+function cellOf(fn: FunctionDescriptor, args: Args | OutCell): OutCell {
+  if (!isArgs(args)) return args;
+  let value: number | NotAvailable | OutTable;
+  try {
+    value = fn.evaluate(args);
+  } catch (err) {
+    return errorCell(err);
+  }
+  if (Array.isArray(value)) throw new Error(`${fn.name} is declared to return one value per cell but returned a table`);
+  return checkCell(value);
 }
 
 /** Last guard: a number leaving Sunpane is finite. */

@@ -1,292 +1,35 @@
 /**
- * Worksheet-function descriptors: window gain for one hour, its step-by-step explanation, cooling
- * load by the radiant time series, design-day peaks and one quantity of the annual hourly series.
+ * Worksheet-function descriptors: window gain for one hour, its step-by-step working, design-day
+ * peaks with cooling load, the hourly year, and the cooling load of a 24-hour gain profile.
  *
- * Argument order: the essentials (when, where, which way, how big, which glass, which weather) come
- * first; the rest have defaults, and the shading group at the end defaults to "no device".
+ * Two forms of the window functions:
+ * - the window as ONE range (SOLARGAIN, SOLARGAINSTEPS, SOLARGAINPEAKS, SOLARGAINYEAR): the window
+ *   is a block of glossary fields (src/registry/windowRange.ts), so a formula names the window and
+ *   the hour and nothing else — `=SUNPANE.SOLARGAIN(B2:C20, "2026-07-21 13:00")`;
+ * - the older positional forms (WINDOWGAIN, GAINSTEPS, PEAKGAINS, WINDOWYEAR), whose ids are
+ *   released: saved workbooks call them with 12 to 28 positional arguments, and Excel stores a
+ *   formula by id and position, so their arguments keep their places. Options added since go at
+ *   the end (timeConvention, headers), with defaults that leave every saved result as it was.
+ *   docs/window-fields.md says why the window forms are new functions rather than new signatures.
+ *
+ * Both forms read the window through the same glossary fields, so their messages name the same
+ * things (a positional argument's name is the field's name).
  */
 import { SunpaneError } from '../core/common';
-import { annualSeries, type AnnualSeries, windowGainAt, gainSteps, type Weather, type WindowSpec, DEFAULT_RADIANT_FRACTION, validateWindowSpec } from '../core/gain';
+import { annualSeries, type AnnualSeries, windowGainAt, gainSteps, type Weather, type WindowSpec, type WindowGainHour } from '../core/gain';
 import { designDayPeaks, coolingLoad, requireRadiantTimeFactors } from '../core/load';
-import { hoursInYear, serialToCivil } from '../core/time';
-import type { Shading } from '../core/shading';
-import type { SkyModel } from '../core/sky';
-import { GLOSSARY } from './glossary';
-import { type Args, type FunctionDescriptor, NotAvailable, type OutsideCheck, type OutTable, type ParamDescriptor } from './types';
+import { MASK_DEFAULT_YEAR } from '../core/shading';
+import { evaluationSerial, hoursInYear, requireStamp, serialToCivil, type TimeConvention } from '../core/time';
+import { GLOSSARY, type GlossaryEntry } from './glossary';
+import { type Args, type FunctionDescriptor, NotAvailable, type OutCell, type OutsideCheck, type OutTable, type ParamDescriptor, type WindowFields } from './types';
+import { fieldsOf, skyWithDesignDays, windowSpecFromFields } from './windowRange';
 
 const G = GLOSSARY;
-const P = {
-  year: G.year,
-  width: G.width,
-  height: G.height,
-  shgcNormal: G.shgcNormal,
-  dni: { ...G.dni, optional: true, description: "the hour's direct normal irradiance; blank: clear sky from tauB and tauD" },
-  dhi: { ...G.dhi, optional: true, description: "the hour's diffuse horizontal irradiance; blank: clear sky from tauB and tauD" },
-  tauB: { ...G.tauB, optional: true, description: `${G.tauB.description}; used when dni and dhi are blank` },
-  tauD: { ...G.tauD, optional: true, description: `${G.tauD.description}; used when dni and dhi are blank` },
-  panes: G.panes,
-  frameFraction: G.frameFraction,
-  groundAlbedo: G.groundAlbedo,
-  skyModel: G.skyModel,
-  surfaceTilt: { ...G.surfaceTilt, description: 'window tilt from horizontal: 90 is a vertical window (shading devices need 90)' },
-  interiorAttenuation: G.interiorAttenuation,
-  radiantFraction: { name: 'radiantFraction', kind: 'number', min: 0, max: 1, default: DEFAULT_RADIANT_FRACTION, description: 'share of the gain that is radiant (reaches the air only through the room surfaces)' },
-  overhangProjection: G.overhangProjection,
-  overhangGap: G.overhangGap,
-  overhangExtensionLeft: G.overhangExtensionLeft,
-  overhangExtensionRight: G.overhangExtensionRight,
-  finProjection: { ...G.overhangProjection, name: 'finProjection', description: 'depth of a fin at each side of the window, from head to sill; 0 = no fins' },
-  finGap: G.finGap,
-  revealDepth: G.revealDepth,
-  skyline: G.skyline,
-  quantity: {
-    name: 'quantity',
-    kind: 'choice',
-    choices: ['gain', 'radiant', 'convective', 'beam', 'sky', 'ground', 'skyunshaded', 'groundunshaded', 'dni', 'dhi', 'sunlit', 'skyview', 'groundview', 'horizonshare', 'shgc', 'incidence', 'profile', 'altitude', 'azimuth', 'stamp'],
-    default: 'gain',
-    description:
-      'column of the hourly series: gain, radiant, convective [W]; beam on the window plane, sky and ground reaching the glass, skyunshaded and groundunshaded on the bare window, dni, dhi [W/m²]; sunlit fraction; the window’s skyview and groundview ratios and horizonshare (0…1, the same every hour); shgc; incidence, profile, altitude, azimuth [°]; stamp (end of hour)',
-  },
-  day: { name: 'day', kind: 'number', integer: true, min: 1, max: 28, default: 21, description: 'day of each month for the clear design day' },
-  factors: { name: 'factors', kind: 'numberList', min: 0, max: 1, length: { exact: 24 }, description: 'the 24 radiant time factors r0…r23 of the room (from your handbook or room model), summing to 1' },
-  factorsOptional: { name: 'factors', kind: 'numberList', min: 0, max: 1, length: { exact: 24 }, optional: true, description: 'the 24 radiant time factors r0…r23 of the room, summing to 1; blank: no cooling-load columns' },
-  gains: { name: 'gains', kind: 'numberList', unit: 'W', min: -1e7, max: 1e7, length: { exact: 24 }, description: 'hourly gain of the design day, hour ending 1:00 first' },
-  dniSeries: { ...G.dni, kind: 'numberList', optional: true, gapsAreMissing: true, description: "a year's hourly direct normal irradiance, one value per hour (8760, or 8784 in a leap year); a blank or text cell marks that hour missing (#N/A in the result); blank range: clear sky from tauB and tauD" },
-  dhiSeries: { ...G.dhi, kind: 'numberList', optional: true, gapsAreMissing: true, description: "a year's hourly diffuse horizontal irradiance, one value per hour; a blank or text cell marks that hour missing; blank range: clear sky from tauB and tauD" },
-} satisfies Record<string, ParamDescriptor>;
 
-const SITE_AND_WINDOW: readonly ParamDescriptor[] = [GLOSSARY.latitude, GLOSSARY.longitude, GLOSSARY.utcOffset, GLOSSARY.surfaceAzimuth, P.width, P.height, P.shgcNormal];
-const GLASS_AND_GROUND: readonly ParamDescriptor[] = [P.panes, P.frameFraction, P.groundAlbedo, P.skyModel, P.surfaceTilt, P.interiorAttenuation];
-const SHADING: readonly ParamDescriptor[] = [P.overhangProjection, P.overhangGap, P.overhangExtensionLeft, P.overhangExtensionRight, P.finProjection, P.finGap, P.revealDepth, P.skyline];
+/** Year of design days when the window gives none (the year moves the sun by well under 0.3°). */
+export const DESIGN_DAY_DEFAULT_YEAR = MASK_DEFAULT_YEAR;
 
-const SKY_MODEL: Record<string, SkyModel> = { isotropic: 'isotropic', haydavies: 'hayDavies', perez: 'perez1990' };
-
-/** The shading set the shading arguments describe (devices of zero depth left out). */
-function shadingOf(a: Args): Shading {
-  const s: Shading = {};
-  if ((a.overhangProjection as number) > 0) {
-    s.overhang = { projection: a.overhangProjection as number, gap: a.overhangGap as number, extensionLeft: a.overhangExtensionLeft as number, extensionRight: a.overhangExtensionRight as number };
-  }
-  if ((a.finProjection as number) > 0) {
-    const fin = { projection: a.finProjection as number, gap: a.finGap as number, extensionAbove: 0, extensionBelow: 0 };
-    s.leftFin = fin;
-    s.rightFin = { ...fin };
-  }
-  if ((a.revealDepth as number) > 0) s.revealDepth = a.revealDepth as number;
-  if (a.skyline !== undefined) s.skyline = a.skyline as number[];
-  return s;
-}
-
-/** The window the arguments describe; `year` of the hourly series and its weather. */
-function specOf(a: Args, year: number, weather: Weather): WindowSpec {
-  return {
-    name: 'window',
-    site: { latitude: a.latitude as number, longitude: a.longitude as number, utcOffset: a.utcOffset as number },
-    surfaceAzimuth: a.surfaceAzimuth as number,
-    surfaceTilt: a.surfaceTilt as number,
-    width: a.width as number,
-    height: a.height as number,
-    frameFraction: a.frameFraction as number,
-    glazing: { shgc: a.shgcNormal as number, panes: a.panes as number, interiorAttenuation: a.interiorAttenuation as number, radiantFraction: (a.radiantFraction as number | undefined) ?? DEFAULT_RADIANT_FRACTION },
-    shading: shadingOf(a),
-    groundAlbedo: a.groundAlbedo as number,
-    skyModel: SKY_MODEL[a.skyModel as string],
-    weather,
-    year,
-  };
-}
-
-function clearSkyOf(a: Args): Weather {
-  return { kind: 'ashraeClearSky', tauB: [a.tauB as number], tauD: [a.tauD as number] };
-}
-
-/** Reason the weather arguments do not fit together, or undefined. */
-function weatherProblem(a: Args, dniName = 'dni'): string | undefined {
-  const hasDni = a.dni !== undefined;
-  const hasDhi = a.dhi !== undefined;
-  if (hasDni !== hasDhi) return `${hasDni ? 'dhi' : dniName} is needed too: give both dni and dhi, or neither for clear sky`;
-  if (!hasDni && (a.tauB === undefined || a.tauD === undefined)) return `${a.tauB === undefined ? 'tauB' : 'tauD'} is needed for clear sky when dni and dhi are blank`;
-  return undefined;
-}
-
-function requireWeatherArgs(a: Args): void {
-  const reason = weatherProblem(a);
-  if (reason !== undefined) {
-    const name = reason.split(' ')[0];
-    throw new SunpaneError(name, null, reason.slice(name.length + 1));
-  }
-}
-
-/** The reason a spec built from the arguments is refused, or undefined. */
-function specProblem(build: () => WindowSpec): string | undefined {
-  try {
-    validateWindowSpec(build());
-    return undefined;
-  } catch (err) {
-    if (err instanceof SunpaneError) return err.message;
-    throw err;
-  }
-}
-
-/** The year of a one-hour calculation: the calendar year of its date-time, within what a spec accepts. */
-function yearOf(serial: number): number {
-  return Math.min(9998, Math.max(1901, serialToCivil(serial).year));
-}
-
-/**
- * The window of a one-hour function and the hour's weather. With dni and dhi given, the spec's
- * weather is not used for the hour; it still needs one, so it gets the clear sky of tauB/tauD when
- * given, else a placeholder clear sky that nothing reads.
- */
-function hourSpec(a: Args): { spec: WindowSpec; weatherHour?: { dni: number; dhi: number } } {
-  requireWeatherArgs(a);
-  const measured = a.dni !== undefined;
-  const weather: Weather = a.tauB !== undefined && a.tauD !== undefined ? clearSkyOf(a) : { kind: 'ashraeClearSky', tauB: [G.tauB.max as number], tauD: [G.tauD.max as number] };
-  return { spec: specOf(a, yearOf(a.dateTime as number), weather), weatherHour: measured ? { dni: a.dni as number, dhi: a.dhi as number } : undefined };
-}
-
-/**
- * Runs a core call and renames a refused spec field to the worksheet parameter it came from
- * (`weather.dni` → `dni`, `shading.overhang.extensionLeft` → `overhangExtensionLeft`, ...).
- */
-function asParams<T>(work: () => T): T {
-  try {
-    return work();
-  } catch (err) {
-    if (!(err instanceof SunpaneError)) throw err;
-    const name = paramNameOf(err.argument);
-    if (name === err.argument) throw err;
-    throw new SunpaneError(name, err.value, err.allowed);
-  }
-}
-
-const FIELD_TO_PARAM: Record<string, string> = {
-  'shading.overhang.projection': 'overhangProjection',
-  'shading.overhang.gap': 'overhangGap',
-  'shading.overhang.extensionLeft': 'overhangExtensionLeft',
-  'shading.overhang.extensionRight': 'overhangExtensionRight',
-  'shading.leftFin.projection': 'finProjection',
-  'shading.rightFin.projection': 'finProjection',
-  'shading.leftFin.gap': 'finGap',
-  'shading.rightFin.gap': 'finGap',
-  'shading.revealDepth': 'revealDepth',
-  groundAlbedo: 'groundAlbedo',
-  skyModel: 'skyModel',
-  'glazing.shgc': 'shgcNormal',
-};
-
-function paramNameOf(field: string): string {
-  const base = field.replace(/\[\d+\]$/, '');
-  if (FIELD_TO_PARAM[base]) return FIELD_TO_PARAM[base];
-  const m = /^(?:site|glazing|weather|shading)\.(\w+)$/.exec(base);
-  return m ? m[1] : field;
-}
-
-function hourRefuses(a: Args): string | undefined {
-  return weatherProblem(a) ?? specProblem(() => hourSpec(a).spec);
-}
-
-const HOUR_PARAMS: readonly ParamDescriptor[] = [GLOSSARY.dateTime, ...SITE_AND_WINDOW, P.dni, P.dhi, P.tauB, P.tauD, ...GLASS_AND_GROUND];
-
-/** The one-hour gain equation: hand computations; its inputs are each checked against their own sources. */
-const GAIN_CHECK: OutsideCheck = {
-  source:
-    'The fenestration solar heat gain equation Q = A_glass · IAC · [E_beam · F_sunlit · SHGC(θ) + (E_sky + E_ground) · SHGC_diffuse] (ASHRAE Handbook—Fundamentals (2013) ch. 15 — from memory), worked by hand with the numbers written out, and a bare window facing the sun gaining SHGC × glass area × DNI; the sun, sky, shading and SHGC it uses are checked against their own sources (see SUNALTITUDE, WINDOWIRRADIANCE, SUNLITFRACTION, SHGCANGLE).',
-  tests: ['tests/core/gain/windowGain.test.ts', 'tests/core/gain/gainSteps.test.ts', 'tests/registry/gainFunctions.test.ts'],
-};
-
-const WINDOWGAIN: FunctionDescriptor = {
-  name: 'WINDOWGAIN',
-  summary: 'Solar heat gain through a window in one hour: beam through the sunlit glass plus sky and ground diffuse, × SHGC × glass area.',
-  category: 'Gain and load',
-  params: [...HOUR_PARAMS, ...SHADING],
-  result: { shape: 'value', unit: 'W', min: 0, description: 'window solar gain at the date-time (0 at night)' },
-  evaluate: (a) => {
-    const { spec, weatherHour } = hourSpec(a);
-    return asParams(() => windowGainAt(spec, a.dateTime as number, weatherHour).gain.total);
-  },
-  refuses: hourRefuses,
-  examples: [
-    { args: ['"2026-07-21T12:30"', '40', '-105', '-7', '180', '1.5', '1.2', '0.4', '', '', '0.4', '2.3'], note: 'a south window at noon on a clear July day (ASHRAE clear sky, τb 0.4, τd 2.3)' },
-    { args: ['"2026-07-21T12:30"', '40', '-105', '-7', '180', '1.5', '1.2', '0.4', '850', '120', '', '', '2', '0.15', '0.2', '"perez"', '90', '1', '0.6', '0.1'], note: 'the same window with measured irradiance, a 15 % frame and a 0.6 m overhang 0.1 m above the head' },
-  ],
-  outsideCheck: GAIN_CHECK,
-};
-
-const GAINSTEPS: FunctionDescriptor = {
-  name: 'GAINSTEPS',
-  summary: 'The window gain of one hour worked out step by step (sun, angles, shading, irradiance, SHGC, area, watts), for checking by hand.',
-  category: 'Gain and load',
-  params: [...HOUR_PARAMS, P.radiantFraction, ...SHADING],
-  result: { shape: 'spill', description: 'a heading row, then one row per step: step number, quantity, value, unit, method', columns: ['step', 'quantity', 'value', 'unit', 'method'] },
-  evaluate: (a) => {
-    const { spec, weatherHour } = hourSpec(a);
-    const rows: OutTable = [['step', 'quantity', 'value', 'unit', 'method']];
-    for (const s of asParams(() => gainSteps(spec, a.dateTime as number, weatherHour))) rows.push([s.step, s.quantity, s.value, s.unit, s.method]);
-    return rows;
-  },
-  refuses: hourRefuses,
-  examples: [{ args: ['"2026-07-21T12:30"', '40', '-105', '-7', '180', '1.5', '1.2', '0.4', '', '', '0.4', '2.3'], note: 'every step from sun altitude to watts for a south window at noon in July' }],
-  outsideCheck: { ...GAIN_CHECK, source: `Every step re-derived by hand from the earlier steps: ${GAIN_CHECK.source}` },
-};
-
-const COOLINGLOAD: FunctionDescriptor = {
-  name: 'COOLINGLOAD',
-  summary: 'Hourly cooling load of a 24-hour gain profile by the radiant time series (Spitler, Fisher & Pedersen 1997), with your radiant time factors.',
-  category: 'Gain and load',
-  params: [P.gains, P.factors, P.radiantFraction],
-  result: { shape: 'spill', unit: 'W', description: '24 rows: the cooling load of each hour, hour ending 1:00 first' },
-  evaluate: (a) => Array.from(coolingLoad(a.gains as number[], a.factors as number[], a.radiantFraction as number), (q) => [q]),
-  refuses: (a) => factorsProblem(a.factors as number[] | undefined),
-  examples: [{ args: ['B2:B25', 'C2:C25', '1'], note: 'gains in B2:B25 (hour ending 1:00 to 24:00), the room’s 24 radiant time factors in C2:C25' }],
-  outsideCheck: { source: 'Radiant time series, Spitler, Fisher & Pedersen (1997), ASHRAE Trans. 103(2): a constant gain gives an equal load, a unit impulse gives back the factors, the 24-hour total is kept, factors must sum to 1 — properties of the published method (the factor lists are test inputs; no published factor table is shipped).', tests: ['tests/reference/rts-spitler-1997.test.ts', 'tests/fixtures/formulas.ts'] },
-};
-
-function factorsProblem(factors: number[] | undefined): string | undefined {
-  if (factors === undefined) return undefined;
-  try {
-    requireRadiantTimeFactors(factors);
-    return undefined;
-  } catch (err) {
-    if (err instanceof SunpaneError) return err.message;
-    throw err;
-  }
-}
-
-function peakSpec(a: Args): WindowSpec {
-  return specOf(a, a.year as number, clearSkyOf(a));
-}
-
-const PEAKGAINS: FunctionDescriptor = {
-  name: 'PEAKGAINS',
-  summary: 'For each month, the peak hour and peak window gain on a clear design day (and the peak cooling load when radiant time factors are given).',
-  category: 'Gain and load',
-  params: [
-    P.year,
-    ...SITE_AND_WINDOW,
-    { ...P.tauB, optional: false, description: 'beam pseudo-optical depth of the ASHRAE clear-sky model for the design days' },
-    { ...P.tauD, optional: false, description: 'diffuse pseudo-optical depth of the ASHRAE clear-sky model for the design days' },
-    P.day,
-    P.factorsOptional,
-    ...GLASS_AND_GROUND,
-    P.radiantFraction,
-    ...SHADING,
-  ],
-  result: {
-    shape: 'spill',
-    min: 0,
-    description: '12 rows, January first: month, peak hour (hour ending, 1–24, local standard time), peak gain [W]; with factors also the hour and value [W] of the peak cooling load',
-  },
-  evaluate: (a) => {
-    const months = asParams(() => designDayPeaks(peakSpec(a), { day: a.day as number, factors: a.factors as number[] | undefined }));
-    return months.map((m) => (m.peakLoad !== undefined ? [m.month, m.peakHour, m.peakGain, m.peakLoadHour!, m.peakLoad] : [m.month, m.peakHour, m.peakGain]));
-  },
-  refuses: (a) => factorsProblem(a.factors as number[] | undefined) ?? specProblem(() => peakSpec(a)),
-  examples: [{ args: ['2026', '40', '-105', '-7', '270', '1.5', '1.2', '0.4', '0.4', '2.3'], note: 'a west window: peak hour and watts on the 21st of each month' }],
-  outsideCheck: { source: 'Each month\'s peak is the largest of 24 one-hour gains (checked as for WINDOWGAIN, on the ASHRAE clear-sky model as for CLEARSKYDNI); with factors the cooling load follows Spitler, Fisher & Pedersen (1997) and keeps the day total; west windows peak after solar noon and east windows before (geometry).', tests: ['tests/core/load/designDay.test.ts', 'tests/reference/rts-spitler-1997.test.ts', 'tests/registry/gainFunctions.test.ts'] },
-};
-
-/** Which column of the annual series a `quantity` choice picks. */
+/** Columns of the hourly year, by glossary token, and the series column each reads. */
 const SERIES_COLUMN: Record<string, keyof AnnualSeries> = {
   gain: 'gain',
   radiant: 'radiant',
@@ -294,74 +37,411 @@ const SERIES_COLUMN: Record<string, keyof AnnualSeries> = {
   beam: 'beam',
   sky: 'sky',
   ground: 'ground',
-  skyunshaded: 'skyUnshaded',
-  groundunshaded: 'groundUnshaded',
+  skyUnshaded: 'skyUnshaded',
+  groundUnshaded: 'groundUnshaded',
   dni: 'dni',
   dhi: 'dhi',
-  sunlit: 'sunlitFraction',
+  sunlitFraction: 'sunlitFraction',
   shgc: 'shgc',
   incidence: 'incidence',
-  profile: 'profileAngle',
-  altitude: 'sunAltitude',
-  azimuth: 'sunAzimuth',
+  profileAngle: 'profileAngle',
+  sunAltitude: 'sunAltitude',
+  sunAzimuth: 'sunAzimuth',
   stamp: 'stampSerial',
 };
 /** Columns that depend on the weather (shown as #N/A on a missing hour). */
-const WEATHER_COLUMNS = new Set(['gain', 'radiant', 'convective', 'beam', 'sky', 'ground', 'skyunshaded', 'groundunshaded', 'dni', 'dhi']);
+const WEATHER_COLUMNS = new Set(['gain', 'radiant', 'convective', 'beam', 'sky', 'ground', 'skyUnshaded', 'groundUnshaded', 'dni', 'dhi']);
 /** The window's diffuse-shading ratios, constant over the year (one value repeated on every row). */
 const DIFFUSE_CONSTANTS: Record<string, (s: AnnualSeries) => number> = {
-  skyview: (s) => s.diffuse.skyViewRatio,
-  groundview: (s) => s.diffuse.groundViewRatio,
-  horizonshare: (s) => s.diffuse.horizonShare,
+  skyViewRatio: (s) => s.diffuse.skyViewRatio,
+  groundViewRatio: (s) => s.diffuse.groundViewRatio,
+  horizonShare: (s) => s.diffuse.horizonShare,
 };
 
-function yearSpec(a: Args): WindowSpec {
-  const weather: Weather = a.dni !== undefined && a.dhi !== undefined ? { kind: 'measured', dni: a.dni as number[], dhi: a.dhi as number[] } : clearSkyOf(a);
-  return specOf(a, a.year as number, weather);
+const P = {
+  dni: { ...G.dni, optional: true, description: "the hour's direct normal irradiance; blank: the window's clear sky" },
+  dhi: { ...G.dhi, optional: true, description: "the hour's diffuse horizontal irradiance; blank: the window's clear sky" },
+  tauB: { ...G.tauB, optional: true, description: 'beam pseudo-optical depth τb of the ASHRAE clear-sky model; used when dni and dhi are blank' },
+  tauD: { ...G.tauD, optional: true, description: 'diffuse pseudo-optical depth τd of the ASHRAE clear-sky model; used when dni and dhi are blank' },
+  quantities: {
+    name: 'quantities',
+    kind: 'choiceList',
+    choices: [...Object.keys(SERIES_COLUMN), ...Object.keys(DIFFUSE_CONSTANTS)],
+    choiceAliases: { sunlit: 'sunlitFraction', profile: 'profileAngle', altitude: 'sunAltitude', azimuth: 'sunAzimuth', skyview: 'skyViewRatio', groundview: 'groundViewRatio' },
+    default: 'gain',
+    length: { max: 20 },
+    description:
+      'one or more columns of the hourly year (a range of names gives one column each): gain, radiant, convective [W]; beam on the window plane, sky and ground reaching the glass, skyUnshaded and groundUnshaded on the bare window, dni, dhi [W/m²]; sunlitFraction; skyViewRatio, groundViewRatio, horizonShare (0…1, the same every hour); shgc; incidence, profileAngle, sunAltitude, sunAzimuth [°]; stamp (date-time of the row)',
+  },
+  day: { name: 'day', kind: 'number', integer: true, min: 1, max: 28, default: 21, description: 'day of each month for the clear design day' },
+  factors: { name: 'factors', kind: 'numberList', min: 0, max: 1, length: { exact: 24 }, description: 'the 24 radiant time factors r0…r23 of the room (from your handbook or room model), summing to 1' },
+  factorsOptional: { name: 'factors', kind: 'numberList', min: 0, max: 1, length: { exact: 24 }, optional: true, description: 'the 24 radiant time factors r0…r23 of the room, summing to 1; blank: no cooling-load columns' },
+  gains: { name: 'gains', kind: 'numberList', unit: 'W', min: -1e7, max: 1e7, length: { exact: 24 }, description: 'hourly gain of the design day, hour ending 1:00 first' },
+  dniSeries: {
+    ...G.dni,
+    kind: 'numberList',
+    optional: true,
+    gapsAreMissing: true,
+    description: "a year's hourly direct normal irradiance, one value per hour (8760, or 8784 in a leap year); a blank or text cell marks that hour missing (#N/A in the result); blank range: the window's clear sky",
+  },
+  dhiSeries: {
+    ...G.dhi,
+    kind: 'numberList',
+    optional: true,
+    gapsAreMissing: true,
+    description: "a year's hourly diffuse horizontal irradiance, one value per hour; a blank or text cell marks that hour missing; blank range: the window's clear sky",
+  },
+  stepsHeaders: { ...G.headers, default: true, description: 'TRUE (default): the table starts with the row step, quantity, value, unit, method; FALSE: the steps only' },
+  surfaceTilt: { ...G.surfaceTilt, description: 'window tilt from horizontal: 90 is a vertical window (shading devices need 90)' },
+  instantConvention: { ...G.timeConvention, default: 'instant', description: 'how dateTime is read: "instant" (default, as this form has always done) = the sun at dateTime; "hourEnding" = the hour ending at dateTime, sun at mid-hour, as the hourly year and the pane' },
+  hourEndingConvention: { ...G.timeConvention, description: 'how the hours are read: "hourEnding" (default) = rows stamped at the end of their hour, sun at mid-hour; "instant" = rows at 00:00 … 23:00, sun at the stamp' },
+} satisfies Record<string, ParamDescriptor>;
+
+// ---------------------------------------------------------------------------------------------
+// Reading the window and the hour's weather
+
+/** The window of a positional form: its arguments are glossary fields under the same names. */
+function fieldsOfArgs(a: Args, names: readonly string[]): WindowFields {
+  const entries: { field: GlossaryEntry; written: string; cell: number | string | readonly unknown[] }[] = [];
+  for (const n of names) {
+    const v = a[n];
+    if (v === undefined) continue;
+    entries.push({ field: G[n as keyof typeof G], written: n, cell: v as number | string | readonly number[] });
+  }
+  return fieldsOf(entries);
 }
 
-function yearRefuses(a: Args): string | undefined {
-  const w = weatherProblem(a);
-  if (w !== undefined) return w;
-  if (a.dni !== undefined) {
-    const hours = hoursInYear(a.year as number);
-    for (const name of ['dni', 'dhi']) {
-      const n = (a[name] as number[]).length;
-      if (n !== hours) return `${name} holds ${n} values: ${a.year} needs ${hours}, one per hour`;
-    }
+const SITE_AND_WINDOW = [G.latitude, G.longitude, G.utcOffset, G.surfaceAzimuth, G.width, G.height, G.shgc] as const;
+const GLASS_AND_GROUND = [G.panes, G.frameFraction, G.groundAlbedo, G.skyModel, P.surfaceTilt, G.interiorAttenuation] as const;
+const SHADING = [G.overhangProjection, G.overhangGap, G.overhangExtensionLeft, G.overhangExtensionRight, G.finProjection, G.finGap, G.revealDepth, G.skyline] as const;
+/** The window fields a positional form takes (the rest of its arguments are the hour's or options). */
+const POSITIONAL_FIELDS = [...SITE_AND_WINDOW, ...GLASS_AND_GROUND, ...SHADING, G.tauB, G.tauD, G.radiantFraction, G.timeConvention, G.year].map((p) => p.name);
+
+/** The year a one-hour calculation lies in: that of its evaluation instant, within what a window accepts. */
+function yearOfHour(dateTime: number, convention: TimeConvention): number {
+  return Math.min(9998, Math.max(1901, serialToCivil(evaluationSerial(dateTime, convention)).year));
+}
+
+/** A clear sky that nothing reads: a window whose hour comes with its own DNI and DHI still needs a weather. */
+const UNREAD_SKY: Weather = { kind: 'ashraeClearSky', tauB: [G.tauB.max as number], tauD: [G.tauD.max as number] };
+
+/** The hour's DNI and DHI when given; both or neither. */
+function weatherHourOf(a: Args): { dni: number; dhi: number } | undefined {
+  const hasDni = a.dni !== undefined;
+  const hasDhi = a.dhi !== undefined;
+  if (hasDni !== hasDhi) throw new SunpaneError(hasDni ? 'dhi' : 'dni', null, 'is needed too: give both dni and dhi, or neither for the clear sky');
+  return hasDni ? { dni: a.dni as number, dhi: a.dhi as number } : undefined;
+}
+
+/** Why an hour has no weather: the window has no sky and no DNI/DHI were given. */
+function noSky(where: string): SunpaneError {
+  return new SunpaneError('dni', null, `give the hour's dni and dhi: ${where} has no clear sky of its own (or give it linkeTurbidity, or tauB and tauD, or an example site)`);
+}
+
+/**
+ * The window of a one-hour call, built for the hour's year, and the hour's own weather: checks
+ * everything the arguments say about the window and its sky (what `refuses` reports), nothing of
+ * the hour's physics.
+ */
+function hourWindow(f: WindowFields, a: Args, prefix: string, convention?: TimeConvention): { spec: WindowSpec; weatherHour?: { dni: number; dhi: number } } {
+  const weatherHour = weatherHourOf(a);
+  const conv = convention ?? ((f.values.get('timeConvention') as TimeConvention | undefined) ?? 'hourEnding');
+  const fields: WindowFields = convention ? withField(f, 'timeConvention', convention) : f;
+  const { spec, hasWeather } = windowSpecFromFields(fields, { year: yearOfHour(a.dateTime as number, conv), prefix });
+  if (!hasWeather && weatherHour === undefined) throw noSky(prefix === '' ? 'the window' : 'the window range');
+  requireStamp('dateTime', a.dateTime, conv);
+  return { spec: hasWeather ? spec : { ...spec, weather: skyWithDesignDays(spec.weather, UNREAD_SKY) }, weatherHour };
+}
+
+/** One hour of a window given as fields. */
+function hourOfFields(f: WindowFields, a: Args, prefix: string, convention?: TimeConvention): WindowGainHour {
+  const { spec, weatherHour } = hourWindow(f, a, prefix, convention);
+  return windowGainAt(spec, a.dateTime as number, weatherHour);
+}
+
+function withField(f: WindowFields, name: string, value: string | number): WindowFields {
+  const values = new Map(f.values);
+  values.set(name, value);
+  return { kind: 'window', values, written: f.written };
+}
+
+/** The reason a call is refused, or undefined (for the fuzz tests' `refuses`). */
+function reasonOf(work: () => unknown): string | undefined {
+  try {
+    work();
+    return undefined;
+  } catch (err) {
+    if (err instanceof SunpaneError) return err.message;
+    throw err;
   }
-  return specProblem(() => yearSpec(a));
+}
+
+function stepRows(h: ReturnType<typeof gainSteps>, headers: boolean): OutTable {
+  const rows: OutTable = headers ? [['step', 'quantity', 'value', 'unit', 'method']] : [];
+  for (const s of h) rows.push([s.step, s.quantity, s.value, s.unit, s.method]);
+  return rows;
+}
+
+/** The steps of an hour of a window given as fields (same reading as {@link hourOfFields}). */
+function stepsOfFields(f: WindowFields, a: Args, prefix: string, convention?: TimeConvention) {
+  const { spec, weatherHour } = hourWindow(f, a, prefix, convention);
+  return gainSteps(spec, a.dateTime as number, weatherHour);
+}
+
+// ---------------------------------------------------------------------------------------------
+// Design days and the hourly year
+
+function peakRows(spec: WindowSpec, a: Args, headers: boolean): OutTable {
+  const months = designDayPeaks(spec, { day: a.day as number, factors: a.factors as number[] | undefined });
+  const withLoad = months[0]?.peakLoad !== undefined;
+  const rows: OutTable = headers ? [withLoad ? ['month', 'peakHour', 'peakGain', 'peakLoadHour', 'peakLoad'] : ['month', 'peakHour', 'peakGain']] : [];
+  for (const m of months) rows.push(m.peakLoad !== undefined ? [m.month, m.peakHour, m.peakGain, m.peakLoadHour!, m.peakLoad] : [m.month, m.peakHour, m.peakGain]);
+  return rows;
+}
+
+function factorsProblem(factors: number[] | undefined): string | undefined {
+  if (factors === undefined) return undefined;
+  return reasonOf(() => requireRadiantTimeFactors(factors));
+}
+
+/** The window of a design-day call: its own clear sky is required. */
+function designSpec(f: WindowFields, prefix: string): WindowSpec {
+  const { spec, hasWeather } = windowSpecFromFields(f, { year: DESIGN_DAY_DEFAULT_YEAR, prefix });
+  if (!hasWeather) {
+    throw new SunpaneError(`${prefix}linkeTurbidity`, null, 'a clear sky is needed for design days: give linkeTurbidity (1 or 12 values from 1 to 10), or tauB and tauD, or an example site');
+  }
+  return spec;
+}
+
+/** The window of an hourly-year call, with supplied series in place of its own sky when given. */
+function yearSpec(f: WindowFields, a: Args, prefix: string): WindowSpec {
+  const dni = a.dni as number[] | undefined;
+  const dhi = a.dhi as number[] | undefined;
+  if ((dni === undefined) !== (dhi === undefined)) throw new SunpaneError(dni ? 'dhi' : 'dni', null, 'is needed too: give both hourly series, or neither for the clear sky');
+  const { spec, hasWeather } = windowSpecFromFields(f, { prefix });
+  if (dni && dhi) {
+    const hours = hoursInYear(spec.year);
+    for (const [name, s] of [['dni', dni], ['dhi', dhi]] as const) {
+      if (s.length !== hours) throw new SunpaneError(name, s, `must hold ${hours} values, one per hour of ${spec.year}`);
+    }
+    return { ...spec, weather: { kind: 'measured', dni, dhi } };
+  }
+  if (!hasWeather) throw noSky(prefix === '' ? 'the window' : 'the window range');
+  return spec;
+}
+
+function yearRows(spec: WindowSpec, quantities: readonly string[], headers: boolean): OutTable {
+  const series = annualSeries(spec);
+  const columns = quantities.map((q) => {
+    const constant = DIFFUSE_CONSTANTS[q];
+    return constant !== undefined ? new Float64Array(series.hours).fill(constant(series)) : (series[SERIES_COLUMN[q]] as Float64Array);
+  });
+  const weather = quantities.map((q) => WEATHER_COLUMNS.has(q));
+  const out: OutTable = new Array(series.hours + (headers ? 1 : 0));
+  let r = 0;
+  if (headers) out[r++] = [...quantities];
+  const gap = new NotAvailable('no weather value for this hour');
+  for (let i = 0; i < series.hours; i++) {
+    const missing = series.missing[i] === 1;
+    const line: OutCell[] = new Array(columns.length);
+    for (let k = 0; k < columns.length; k++) line[k] = missing && weather[k] ? gap : columns[k][i];
+    out[r++] = line;
+  }
+  return out;
+}
+
+// ---------------------------------------------------------------------------------------------
+// Outside checks (shown in the function reference)
+
+const GAIN_CHECK: OutsideCheck = {
+  source:
+    'The fenestration solar heat gain equation Q = A_glass · IAC · [E_beam · F_sunlit · SHGC(θ) + (E_sky + E_ground) · SHGC_diffuse] (ASHRAE Handbook—Fundamentals (2013) ch. 15 — from memory), worked by hand with the numbers written out, and a bare window facing the sun gaining SHGC × glass area × DNI; the sun, sky, shading and SHGC it uses are checked against their own sources (see SUNALTITUDE, WINDOWIRRADIANCE, SUNLITFRACTION, SHGCANGLE). At every stamp of the year the value is, exactly, that row of the hourly year and of the pane\'s table.',
+  tests: ['tests/core/gain/windowGain.test.ts', 'tests/core/gain/gainSteps.test.ts', 'tests/core/gain/annual.test.ts', 'tests/registry/gainFunctions.test.ts', 'tests/registry/clock.test.ts', 'tests/fixtures/formulas.ts'],
+};
+const STEPS_CHECK: OutsideCheck = { ...GAIN_CHECK, source: `Every step re-derived by hand from the earlier steps: ${GAIN_CHECK.source}` };
+const RTS_CHECK: OutsideCheck = {
+  source: 'Radiant time series, Spitler, Fisher & Pedersen (1997), ASHRAE Trans. 103(2): a constant gain gives an equal load, a unit impulse gives back the factors, the 24-hour total is kept, factors must sum to 1 — properties of the published method (the factor lists are test inputs; no published factor table is shipped).',
+  tests: ['tests/reference/rts-spitler-1997.test.ts', 'tests/fixtures/formulas.ts'],
+};
+const PEAKS_CHECK: OutsideCheck = {
+  source: "Each month's peak is the largest of 24 one-hour gains (checked as for SOLARGAIN, on the ASHRAE clear-sky model as for CLEARSKYDNI), each exactly the one-hour gain of its stamp; with factors the cooling load follows Spitler, Fisher & Pedersen (1997) and keeps the day total; west windows peak after solar noon and east windows before (geometry).",
+  tests: ['tests/core/load/designDay.test.ts', 'tests/reference/rts-spitler-1997.test.ts', 'tests/registry/gainFunctions.test.ts'],
+};
+const YEAR_CHECK: OutsideCheck = {
+  source: "Every hour held to the checked one-hour functions (see SOLARGAIN) within 1e-12 (relative for irradiances), and the year's sun path held to the direct NREL SPA within 1e-4° (which is checked against the report's worked example, astronomy-engine 2.1.19 and suncalc 2.0.2); rows stamped as the time convention says, 8760 or 8784 of them.",
+  tests: ['tests/core/gain/annual.test.ts', 'tests/core/gain/preparedFast.test.ts', 'tests/core/sun/sunPath.test.ts', 'tests/registry/gainFunctions.test.ts', 'tests/registry/clock.test.ts'],
+};
+
+// ---------------------------------------------------------------------------------------------
+// The window forms
+
+const WINDOW = G.window;
+
+const SOLARGAIN: FunctionDescriptor = {
+  name: 'SOLARGAIN',
+  summary: 'Solar heat gain through a window in one hour, the window given as one range of fields: beam through the sunlit glass plus sky and ground diffuse, × SHGC × glass area.',
+  category: 'Gain and load',
+  params: [WINDOW, G.dateTime, P.dni, P.dhi],
+  result: { shape: 'value', unit: 'W', min: 0, description: "window solar gain in the hour (0 at night); at a row's stamp exactly that row of SOLARGAINYEAR and of the pane's hourly table" },
+  evaluate: (a) => hourOfFields(a.window as WindowFields, a, 'window ').gain.total,
+  refuses: (a) => reasonOf(() => hourWindow(a.window as WindowFields, a, 'window ')),
+  examples: [
+    { args: ['B2:C14', '"2026-07-21 13:00"'], note: 'a window described by the name/value block B2:C14 (latitude, longitude, utcOffset, surfaceAzimuth, width, height, shgc, tauB, tauD …), the hour ending 13:00, sun at 12:30' },
+    { args: ['VSTACK(Windows[#Headers],Windows[@])', 'Hour'], note: 'one row of a window schedule table and its header row, in a column beside the table' },
+  ],
+  outsideCheck: GAIN_CHECK,
+};
+
+const SOLARGAINSTEPS: FunctionDescriptor = {
+  name: 'SOLARGAINSTEPS',
+  summary: 'The solar gain of one hour worked out step by step (the instant used, sun, angles, shading, irradiance, SHGC, area, watts), for checking by hand; the window as one range.',
+  category: 'Gain and load',
+  params: [WINDOW, G.dateTime, P.dni, P.dhi, P.stepsHeaders],
+  result: { shape: 'spill', description: 'a heading row (unless headers is FALSE), then one row per step: step number, quantity, value, unit, method; the first step is the instant the sun was taken at', columns: ['step', 'quantity', 'value', 'unit', 'method'] },
+  evaluate: (a) => stepRows(stepsOfFields(a.window as WindowFields, a, 'window '), a.headers as boolean),
+  refuses: (a) => reasonOf(() => hourWindow(a.window as WindowFields, a, 'window ')),
+  examples: [{ args: ['B2:C14', '"2026-07-21 13:00"'], note: 'every step from the instant (12:30, the middle of the hour ending 13:00) to watts' }],
+  outsideCheck: STEPS_CHECK,
+};
+
+const SOLARGAINPEAKS: FunctionDescriptor = {
+  name: 'SOLARGAINPEAKS',
+  summary: "For each month, the peak hour and peak solar gain of a window on a clear design day, and the peak cooling load when radiant time factors are given; the window as one range (its clear sky, its year or 2026).",
+  category: 'Gain and load',
+  params: [WINDOW, P.factorsOptional, P.day, G.headers],
+  result: {
+    shape: 'spill',
+    min: 0,
+    description: "12 rows, January first: month, peak hour (by the window's time convention: hour ending 1–24, or the instant's hour 0–23), peak gain [W]; with factors also the hour and value [W] of the peak cooling load",
+    columns: ['month', 'peakHour', 'peakGain', 'peakLoadHour', 'peakLoad'],
+  },
+  evaluate: (a) => peakRows(designSpec(a.window as WindowFields, 'window '), a, a.headers as boolean),
+  refuses: (a) => factorsProblem(a.factors as number[] | undefined) ?? reasonOf(() => designSpec(a.window as WindowFields, 'window ')),
+  examples: [{ args: ['B2:C14'], note: 'peak hour and watts on the 21st of each month' }],
+  outsideCheck: PEAKS_CHECK,
+};
+
+const SOLARGAINYEAR: FunctionDescriptor = {
+  name: 'SOLARGAINYEAR',
+  summary: "One or more quantities of a window hour by hour over its year (gain, irradiance on the glass, sunlit fraction, angles...), rows as the window's time convention stamps them; the window as one range.",
+  category: 'Gain and load',
+  params: [WINDOW, P.quantities, { ...P.dniSeries, name: 'dni' }, { ...P.dhiSeries, name: 'dhi' }, G.headers],
+  result: {
+    shape: 'spill',
+    description: "8760 rows (8784 in a leap year), one column per quantity; hour-ending rows (1 January 01:00 first, sun at mid-hour) or, with timeConvention instant, rows at 00:00 … 23:00",
+  },
+  evaluate: (a) => yearRows(yearSpec(a.window as WindowFields, a, 'window '), a.quantities as string[], a.headers as boolean),
+  refuses: (a) => reasonOf(() => yearSpec(a.window as WindowFields, a, 'window ')),
+  examples: [
+    { args: ['B2:C15'], note: 'hourly gain of the window for its year (a year field is needed)' },
+    { args: ['B2:C15', '{"stamp","gain","sunlitFraction"}', 'Weather!D2:D8761', 'Weather!E2:E8761', 'TRUE'], note: 'three columns with a header row, under your hourly direct normal and diffuse horizontal irradiance' },
+    { args: ['B2:C15', '{"sky","skyUnshaded","skyViewRatio"}'], note: 'sky diffuse reaching the glass past the devices, on the bare window, and the ratio between them for an isotropic sky' },
+  ],
+  outsideCheck: YEAR_CHECK,
+};
+
+// ---------------------------------------------------------------------------------------------
+// The positional forms (released ids: arguments keep their places; options added at the end)
+
+const HOUR_PARAMS: readonly ParamDescriptor[] = [G.dateTime, ...SITE_AND_WINDOW, P.dni, P.dhi, P.tauB, P.tauD, ...GLASS_AND_GROUND];
+
+function legacyHour(a: Args): WindowGainHour {
+  return hourOfFields(fieldsOfArgs(a, POSITIONAL_FIELDS), a, '', a.timeConvention as TimeConvention);
+}
+
+function legacyRefuses(a: Args): string | undefined {
+  return reasonOf(() => hourWindow(fieldsOfArgs(a, POSITIONAL_FIELDS), a, '', a.timeConvention as TimeConvention));
+}
+
+const WINDOWGAIN: FunctionDescriptor = {
+  name: 'WINDOWGAIN',
+  summary: 'Solar heat gain through a window in one hour, every field a positional argument (the older form of SOLARGAIN, kept for saved workbooks).',
+  category: 'Gain and load',
+  params: [...HOUR_PARAMS, ...SHADING, P.instantConvention],
+  result: { shape: 'value', unit: 'W', min: 0, description: 'window solar gain at the date-time (0 at night)' },
+  evaluate: (a) => legacyHour(a).gain.total,
+  refuses: legacyRefuses,
+  supersededBy: 'SOLARGAIN',
+  examples: [
+    { args: ['"2026-07-21T12:30"', '40', '-105', '-7', '180', '1.5', '1.2', '0.4', '850', '120'], note: 'a south window at 12:30 on a July day with 850 W/m² direct normal and 120 W/m² diffuse horizontal irradiance' },
+  ],
+  outsideCheck: GAIN_CHECK,
+};
+
+const GAINSTEPS: FunctionDescriptor = {
+  name: 'GAINSTEPS',
+  summary: 'The window gain of one hour worked out step by step, every field a positional argument (the older form of SOLARGAINSTEPS, kept for saved workbooks).',
+  category: 'Gain and load',
+  params: [...HOUR_PARAMS, G.radiantFraction, ...SHADING, P.instantConvention, P.stepsHeaders],
+  result: { shape: 'spill', description: 'a heading row (unless headers is FALSE), then one row per step: step number, quantity, value, unit, method', columns: ['step', 'quantity', 'value', 'unit', 'method'] },
+  evaluate: (a) => stepRows(stepsOfFields(fieldsOfArgs(a, POSITIONAL_FIELDS), a, '', a.timeConvention as TimeConvention), a.headers as boolean),
+  refuses: legacyRefuses,
+  supersededBy: 'SOLARGAINSTEPS',
+  examples: [{ args: ['"2026-07-21T12:30"', '40', '-105', '-7', '180', '1.5', '1.2', '0.4', '850', '120'], note: 'every step from sun altitude to watts for a south window at 12:30 in July, with the hour’s measured irradiance' }],
+  outsideCheck: STEPS_CHECK,
+};
+
+const COOLINGLOAD: FunctionDescriptor = {
+  name: 'COOLINGLOAD',
+  summary: 'Hourly cooling load of a 24-hour gain profile by the radiant time series (Spitler, Fisher & Pedersen 1997), with your radiant time factors.',
+  category: 'Gain and load',
+  params: [P.gains, P.factors, G.radiantFraction],
+  result: { shape: 'spill', unit: 'W', description: '24 rows: the cooling load of each hour, hour ending 1:00 first' },
+  evaluate: (a) => Array.from(coolingLoad(a.gains as number[], a.factors as number[], a.radiantFraction as number), (q) => [q]),
+  refuses: (a) => factorsProblem(a.factors as number[] | undefined),
+  examples: [{ args: ['B2:B25', 'C2:C25', '1'], note: 'gains in B2:B25 (hour ending 1:00 to 24:00), the room’s 24 radiant time factors in C2:C25' }],
+  outsideCheck: RTS_CHECK,
+};
+
+function legacyDesignSpec(a: Args): WindowSpec {
+  return designSpec(fieldsOfArgs(a, POSITIONAL_FIELDS), '');
+}
+
+const PEAKGAINS: FunctionDescriptor = {
+  name: 'PEAKGAINS',
+  summary: 'For each month, the peak hour and peak window gain on a clear design day (and the peak cooling load with radiant time factors), every field a positional argument (the older form of SOLARGAINPEAKS).',
+  category: 'Gain and load',
+  params: [
+    G.year,
+    ...SITE_AND_WINDOW,
+    { ...P.tauB, optional: false, description: 'beam pseudo-optical depth of the ASHRAE clear-sky model for the design days' },
+    { ...P.tauD, optional: false, description: 'diffuse pseudo-optical depth of the ASHRAE clear-sky model for the design days' },
+    P.day,
+    P.factorsOptional,
+    ...GLASS_AND_GROUND,
+    G.radiantFraction,
+    ...SHADING,
+    P.hourEndingConvention,
+    G.headers,
+  ],
+  result: {
+    shape: 'spill',
+    min: 0,
+    description: '12 rows, January first: month, peak hour (hour ending, 1–24, local standard time; with timeConvention instant the hour 0–23), peak gain [W]; with factors also the hour and value [W] of the peak cooling load',
+    columns: ['month', 'peakHour', 'peakGain', 'peakLoadHour', 'peakLoad'],
+  },
+  evaluate: (a) => peakRows(legacyDesignSpec(a), a, a.headers as boolean),
+  refuses: (a) => factorsProblem(a.factors as number[] | undefined) ?? reasonOf(() => legacyDesignSpec(a)),
+  supersededBy: 'SOLARGAINPEAKS',
+  examples: [{ args: ['2026', '40', '-105', '-7', '270', '1.5', '1.2', '0.4', '0.4', '2.3'], note: 'a west window: peak hour and watts on the 21st of each month' }],
+  outsideCheck: PEAKS_CHECK,
+};
+
+function legacyYearSpec(a: Args): WindowSpec {
+  return yearSpec(fieldsOfArgs(a, POSITIONAL_FIELDS), a, '');
 }
 
 const WINDOWYEAR: FunctionDescriptor = {
   name: 'WINDOWYEAR',
-  summary: 'One quantity of a window hour by hour over a year (gain, irradiance on the glass, sunlit fraction, angles...), rows stamped at the end of each hour.',
+  summary: 'One or more quantities of a window hour by hour over a year, every field a positional argument (the older form of SOLARGAINYEAR, kept for saved workbooks).',
   category: 'Gain and load',
-  params: [P.year, ...SITE_AND_WINDOW, P.quantity, P.dniSeries, P.dhiSeries, P.tauB, P.tauD, ...GLASS_AND_GROUND, P.radiantFraction, ...SHADING],
-  result: { shape: 'spill', description: '8760 rows (8784 in a leap year), 1 January 00:00–01:00 first, of the chosen quantity; sun at the middle of each hour' },
-  evaluate: (a) => {
-    requireWeatherArgs(a);
-    const series = asParams(() => annualSeries(yearSpec(a)));
-    const key = a.quantity as string;
-    const out: OutTable = new Array(series.hours);
-    const constant = DIFFUSE_CONSTANTS[key];
-    if (constant !== undefined) {
-      const v = constant(series);
-      for (let i = 0; i < series.hours; i++) out[i] = [v];
-      return out;
-    }
-    const column = series[SERIES_COLUMN[key]] as Float64Array;
-    const weatherDependent = WEATHER_COLUMNS.has(key);
-    for (let i = 0; i < series.hours; i++) out[i] = [weatherDependent && series.missing[i] === 1 ? new NotAvailable('no weather value for this hour') : column[i]];
-    return out;
-  },
-  refuses: yearRefuses,
-  examples: [
-    { args: ['2026', '40', '-105', '-7', '180', '1.5', '1.2', '0.4', '"gain"', '', '', '0.4', '2.3'], note: 'hourly clear-sky gain of a south window for the whole year' },
-    { args: ['2026', '40', '-105', '-7', '180', '1.5', '1.2', '0.4', '"sunlit"', '', '', '0.4', '2.3', '', '', '', '', '', '', '0.8'], note: 'hourly sunlit fraction under a 0.8 m overhang' },
-    { args: ['2026', '40', '-105', '-7', '180', '1.5', '1.2', '0.4', '"sky"', '', '', '0.4', '2.3', '', '', '', '', '', '', '0.8'], note: 'hourly sky diffuse reaching the glass under the same overhang ("skyunshaded" gives the bare window’s, "skyview" the ratio between them for an isotropic sky)' },
-  ],
-  outsideCheck: { source: 'Every hour held to the checked one-hour functions (see WINDOWGAIN) within 1e-12 (relative for irradiances), and the year\'s sun path held to the direct NREL SPA within 1e-4° (which is checked against the report\'s worked example, astronomy-engine 2.1.19 and suncalc 2.0.2); rows stamped at the end of each hour, 8760 or 8784 of them.', tests: ['tests/core/gain/annual.test.ts', 'tests/core/gain/preparedFast.test.ts', 'tests/core/sun/sunPath.test.ts', 'tests/registry/gainFunctions.test.ts'] },
+  params: [G.year, ...SITE_AND_WINDOW, { ...P.quantities, name: 'quantity' }, { ...P.dniSeries, name: 'dni' }, { ...P.dhiSeries, name: 'dhi' }, P.tauB, P.tauD, ...GLASS_AND_GROUND, G.radiantFraction, ...SHADING, P.hourEndingConvention, G.headers],
+  result: { shape: 'spill', description: '8760 rows (8784 in a leap year), 1 January 00:00–01:00 first, one column per quantity; sun at the middle of each hour (with timeConvention instant: rows at 00:00 … 23:00, sun at the stamp)' },
+  evaluate: (a) => yearRows(legacyYearSpec(a), a.quantity as string[], a.headers as boolean),
+  refuses: (a) => reasonOf(() => legacyYearSpec(a)),
+  supersededBy: 'SOLARGAINYEAR',
+  examples: [{ args: ['2026', '40', '-105', '-7', '180', '1.5', '1.2', '0.4', '"gain"', 'Weather!D2:D8761', 'Weather!E2:E8761'], note: 'hourly gain of a south window for the whole year under your hourly weather' }],
+  outsideCheck: YEAR_CHECK,
 };
 
-export const GAIN_FUNCTIONS: readonly FunctionDescriptor[] = [WINDOWGAIN, GAINSTEPS, COOLINGLOAD, PEAKGAINS, WINDOWYEAR];
+export const GAIN_FUNCTIONS: readonly FunctionDescriptor[] = [SOLARGAIN, SOLARGAINSTEPS, SOLARGAINPEAKS, SOLARGAINYEAR, COOLINGLOAD, WINDOWGAIN, GAINSTEPS, PEAKGAINS, WINDOWYEAR];

@@ -3,33 +3,36 @@
  * table), diffuse SHGC and glass area. The core computes (src/core/glazing/shgc.ts).
  */
 import { diffuseShgc, diffuseShgcFromTable, glassArea, shgcAtAngle, shgcFromTable, TABLE_MIN_SPACING } from '../core/glazing';
+import { SunpaneError } from '../core/common';
 import { GLOSSARY } from './glossary';
 import type { Args, FunctionDescriptor, OutsideCheck, ParamDescriptor } from './types';
 
 const incidence: ParamDescriptor = { ...GLOSSARY.incidence, description: 'incidence angle of the sun on the glass (90 or more: sun behind it, SHGC 0)' };
-const { shgcNormal, panes } = GLOSSARY;
-const angles: ParamDescriptor = {
-  name: 'angles',
-  kind: 'numberList',
-  unit: '°',
-  min: 0,
-  max: 90,
-  ascending: true,
-  length: { min: 1, max: 91 },
-  description: 'incidence angles of the table, strictly ascending, at least 0.01° apart',
-};
-const shgcValues: ParamDescriptor = { name: 'shgcValues', kind: 'numberList', min: 0, max: 1, length: { min: 1, max: 91 }, description: 'SHGC at each of the angles, same count' };
+const { shgc, panes } = GLOSSARY;
+const shgcAngles: ParamDescriptor = { ...GLOSSARY.shgcAngles, optional: false, description: 'incidence angles of your SHGC table, strictly ascending, at least 0.01° apart' };
+const shgcValues: ParamDescriptor = { ...GLOSSARY.shgcValues, optional: false, description: 'SHGC at each of the shgcAngles, same count' };
 
 function table(a: Args) {
-  return { angles: a.angles as number[], values: a.shgcValues as number[] };
+  return { angles: a.shgcAngles as number[], values: a.shgcValues as number[] };
 }
 
+/** The table's angles and values as given, checked together: the reason it is refused, or undefined. */
 function tableMismatch(a: Args): string | undefined {
-  const x = a.angles as number[] | undefined;
+  const x = a.shgcAngles as number[] | undefined;
   const y = a.shgcValues as number[] | undefined;
-  if (x && y && x.length !== y.length) return `angles has ${x.length} values but shgcValues has ${y.length}`;
+  if (x && y && x.length !== y.length) return `shgcAngles has ${x.length} values but shgcValues has ${y.length}`;
   const k = x ? x.findIndex((v, i) => i > 0 && v - x[i - 1] < TABLE_MIN_SPACING) : -1;
-  return k > 0 ? `angles ${x![k - 1]} and ${x![k]} are less than ${TABLE_MIN_SPACING}° apart` : undefined;
+  return k > 0 ? `shgcAngles ${x![k - 1]} and ${x![k]} are less than ${TABLE_MIN_SPACING}° apart` : undefined;
+}
+
+/** Checks the table; a refusal names shgcAngles or shgcValues as the signature does. */
+function checkedTable(a: Args) {
+  const reason = tableMismatch(a);
+  if (reason !== undefined) {
+    const name = reason.startsWith('shgcAngles has') ? 'shgcValues' : 'shgcAngles';
+    throw new SunpaneError(name, a[name] as number[], reason.replace(/^shgcAngles /, ''));
+  }
+  return table(a);
 }
 
 /** The diffuse SHGC: the hemispherical average and its quadrature, each against published forms. */
@@ -44,9 +47,9 @@ export const GLAZING_FUNCTIONS: readonly FunctionDescriptor[] = [
     name: 'SHGCANGLE',
     summary: 'SHGC at an incidence angle from the normal-incidence SHGC and pane count (Fresnel reflection and absorption).',
     category: 'Glazing',
-    params: [incidence, shgcNormal, panes],
+    params: [incidence, shgc, panes],
     result: { shape: 'value', min: 0, max: 1, description: 'SHGC at the angle, never above the normal value; 0 from 90° on' },
-    evaluate: (a) => shgcAtAngle(a.shgcNormal as number, a.panes as number, a.incidence as number),
+    evaluate: (a) => shgcAtAngle(a.shgc as number, a.panes as number, a.incidence as number),
     examples: [
       { args: ['60', '0.7', '2'], note: 'double glazing rated 0.70, sun 60° off the normal' },
       { args: ['0', '0.7'], note: 'normal incidence returns the rating itself' },
@@ -57,9 +60,9 @@ export const GLAZING_FUNCTIONS: readonly FunctionDescriptor[] = [
     name: 'SHGCLOOKUP',
     summary: 'SHGC at an incidence angle from your table of SHGC by angle (monotone cubic, tapering to 0 at 90°).',
     category: 'Glazing',
-    params: [incidence, angles, shgcValues],
+    params: [incidence, shgcAngles, shgcValues],
     result: { shape: 'value', min: 0, max: 1, description: 'SHGC at the angle; 0 from 90° on' },
-    evaluate: (a) => shgcFromTable(table(a), a.incidence as number),
+    evaluate: (a) => shgcFromTable(checkedTable(a), a.incidence as number),
     refuses: tableMismatch,
     examples: [{ args: ['55', '{0,40,50,60,70,80}', '{0.7,0.68,0.66,0.6,0.48,0.28}'], note: 'between the 50° and 60° rows of a product table' }],
     outsideCheck: { source: 'Fritsch & Carlson (1980), SIAM J. Numer. Anal. 17(2): the interpolant passes through the RPN 14 data set of the paper and stays monotone (data from memory); the table points themselves come back exactly.', tests: ['tests/reference/fritsch-carlson-1980.test.ts', 'tests/fixtures/formulas.ts'] },
@@ -68,9 +71,9 @@ export const GLAZING_FUNCTIONS: readonly FunctionDescriptor[] = [
     name: 'SHGCDIFFUSE',
     summary: 'Hemispherical (diffuse) SHGC from the normal-incidence SHGC and pane count.',
     category: 'Glazing',
-    params: [shgcNormal, panes],
+    params: [shgc, panes],
     result: { shape: 'value', min: 0, max: 1, description: 'SHGC for isotropic diffuse irradiance, 2∫ SHGC(θ) cos θ sin θ dθ' },
-    evaluate: (a) => diffuseShgc(a.shgcNormal as number, a.panes as number),
+    evaluate: (a) => diffuseShgc(a.shgc as number, a.panes as number),
     examples: [{ args: ['0.7', '2'], note: 'double glazing rated 0.70' }],
     outsideCheck: DIFFUSE_CHECK,
   },
@@ -78,9 +81,9 @@ export const GLAZING_FUNCTIONS: readonly FunctionDescriptor[] = [
     name: 'SHGCDIFFUSELOOKUP',
     summary: 'Hemispherical (diffuse) SHGC from your table of SHGC by angle.',
     category: 'Glazing',
-    params: [angles, shgcValues],
+    params: [shgcAngles, shgcValues],
     result: { shape: 'value', min: 0, max: 1, description: 'SHGC for isotropic diffuse irradiance, integrated over the interpolated table' },
-    evaluate: (a) => diffuseShgcFromTable(table(a)),
+    evaluate: (a) => diffuseShgcFromTable(checkedTable(a)),
     refuses: tableMismatch,
     examples: [{ args: ['{0,40,50,60,70,80}', '{0.7,0.68,0.66,0.6,0.48,0.28}'], note: 'diffuse value of a product table' }],
     outsideCheck: DIFFUSE_CHECK,
@@ -90,9 +93,9 @@ export const GLAZING_FUNCTIONS: readonly FunctionDescriptor[] = [
     summary: 'Glass area of a window from its rough opening and the frame share.',
     category: 'Glazing',
     params: [
-      { name: 'width', kind: 'number', unit: 'm', min: 0, max: 1000, exclusiveMin: true, description: 'rough-opening width' },
-      { name: 'height', kind: 'number', unit: 'm', min: 0, max: 1000, exclusiveMin: true, description: 'rough-opening height' },
-      { name: 'frameFraction', kind: 'number', min: 0, max: 1, exclusiveMax: true, default: 0, description: 'frame share of the rough-opening area' },
+      { ...GLOSSARY.width, max: 1000, description: 'rough-opening width' },
+      { ...GLOSSARY.height, max: 1000, description: 'rough-opening height' },
+      GLOSSARY.frameFraction,
     ],
     result: { shape: 'value', unit: 'm²', min: 0, description: 'width × height × (1 − frame share)' },
     evaluate: (a) => glassArea(a.width as number, a.height as number, a.frameFraction as number),

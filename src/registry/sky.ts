@@ -12,9 +12,7 @@ const E0_MAX = 1415;
 const E0_MIN = 1320;
 
 const { dayOfYear, tauB, tauD, linkeTurbidity, dni, dhi, groundAlbedo, skyModel } = GLOSSARY;
-type ModelChoice = 'perez' | 'haydavies' | 'isotropic';
 const skyViewFactor: ParamDescriptor = { name: 'skyViewFactor', kind: 'number', min: 0, max: 1, default: 1, description: 'share of the sky diffuse the window still sees past a skyline (1 = open)' };
-const MODEL_OF: Record<ModelChoice, SkyModel> = { perez: 'perez1990', haydavies: 'hayDavies', isotropic: 'isotropic' };
 
 const windowParams: readonly ParamDescriptor[] = [
   dni,
@@ -39,7 +37,7 @@ function windowIrradiance(a: Args) {
     surfaceAzimuth: a.surfaceAzimuth as number,
     groundAlbedo: a.groundAlbedo as number,
     dayOfYear: a.dayOfYear as number,
-    skyModel: MODEL_OF[a.skyModel as ModelChoice],
+    skyModel: a.skyModel as SkyModel,
     // The whole sky diffuse (isotropic, circumsolar and horizon parts alike) × skyViewFactor.
     shade: { isotropic: a.skyViewFactor as number, circumsolar: a.skyViewFactor as number, horizon: a.skyViewFactor as number, ground: 1 },
   });

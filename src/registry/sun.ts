@@ -1,17 +1,28 @@
 /**
  * Worksheet-function descriptors: sun position (NREL SPA), sunrise / solar noon / sunset, and the
  * angles between the sun and a surface. Every descriptor reads its arguments and calls the core
- * (src/core/sun/spa.ts, src/core/sun/surfaceAngles.ts); none computes by itself.
+ * (src/core/sun/sunNodes.ts — the SPA with its slow terms kept by day, so that a range of
+ * date-times costs little more than suncalc — and src/core/sun/surfaceAngles.ts); none computes by itself.
  */
-import { MAX_SERIAL_EXCLUSIVE, MIN_SERIAL, serialToUtcMs } from '../core/time';
-import { type SunOptions, type SunPosition, sunEvents, sunPosition, incidenceAngle, profileAngle, wallSolarAzimuth } from '../core/sun';
+import { SunpaneError } from '../core/common';
+import { evaluationSerial, MAX_SERIAL_EXCLUSIVE, MIN_SERIAL, requireStamp, serialToUtcMs, type TimeConvention } from '../core/time';
+import { type SunOptions, type SunPosition, sunEvents, sunPositionFromNodes, incidenceAngle, profileAngle, wallSolarAzimuth } from '../core/sun';
 import { GLOSSARY } from './glossary';
 import { type Args, type FunctionDescriptor, NotAvailable, type OutsideCheck, type ParamDescriptor } from './types';
 
 /** When and where, then the optional atmosphere and ΔT: the shared head of the sun-position functions. */
 const WHEN_WHERE: readonly ParamDescriptor[] = [GLOSSARY.dateTime, GLOSSARY.latitude, GLOSSARY.longitude, GLOSSARY.utcOffset];
 const ATMOSPHERE: readonly ParamDescriptor[] = [GLOSSARY.elevation, GLOSSARY.pressure, GLOSSARY.temperature, GLOSSARY.deltaT];
-const SUN_PARAMS: readonly ParamDescriptor[] = [...WHEN_WHERE, ...ATMOSPHERE];
+/**
+ * The time convention, last (added after release): the sun at the instant typed by default, or at
+ * the middle of the hour ending then, as the window functions and the hourly tables take it.
+ */
+const INSTANT: ParamDescriptor = {
+  ...GLOSSARY.timeConvention,
+  default: 'instant',
+  description: 'how dateTime is read: "instant" (default) = the sun at dateTime; "hourEnding" = the hour ending at dateTime, sun at mid-hour (as the window functions and hourly tables read an hour)',
+};
+const SUN_PARAMS: readonly ParamDescriptor[] = [...WHEN_WHERE, ...ATMOSPHERE, INSTANT];
 /** Rise and set follow the SPA's fixed horizon convention: only ΔT changes them. */
 const EVENT_PARAMS: readonly ParamDescriptor[] = [GLOSSARY.date, GLOSSARY.latitude, GLOSSARY.longitude, GLOSSARY.utcOffset, GLOSSARY.deltaT];
 
@@ -29,19 +40,41 @@ const POSITION_CHECK: OutsideCheck = {
   tests: [...SPA_TESTS, 'tests/reference/astronomy-engine-sun.test.ts', 'tests/reference/suncalc-sun-position.test.ts'],
 };
 
+/** Why a date-time cannot be read by the convention asked for (the hour ending then starts before 1900-03-01), or undefined. */
+function stampProblem(a: Args): string | undefined {
+  try {
+    requireStamp('dateTime', a.dateTime, (a.timeConvention as TimeConvention | undefined) ?? 'instant');
+    return undefined;
+  } catch (err) {
+    if (err instanceof SunpaneError) return err.message;
+    throw err;
+  }
+}
+
+/** The last options made, reused while a range of cells shares them (most ranges vary only the date-time). */
+let lastOptions: SunOptions = {};
+
 function optionsOf(a: Args): SunOptions {
-  return {
+  const o = lastOptions;
+  if (o.elevation === a.elevation && o.pressure === a.pressure && o.temperature === a.temperature && o.deltaT === a.deltaT) return o;
+  lastOptions = {
     elevation: a.elevation as number,
     pressure: a.pressure as number | undefined,
     temperature: a.temperature as number,
     deltaT: a.deltaT as number | undefined,
   };
+  return lastOptions;
 }
 
 function positionOf(a: Args): SunPosition {
-  const utcMs = serialToUtcMs(a.dateTime as number, a.utcOffset as number);
-  return sunPosition(utcMs, a.latitude as number, a.longitude as number, optionsOf(a));
+  const convention = (a.timeConvention as TimeConvention | undefined) ?? 'instant';
+  const stamp = requireStamp('dateTime', a.dateTime, convention);
+  const utcMs = serialToUtcMs(evaluationSerial(stamp, convention), a.utcOffset as number);
+  return sunPositionFromNodes(utcMs, a.latitude as number, a.longitude as number, optionsOf(a), SCRATCH);
 }
+
+/** The position the last cell was given; each evaluate reads one number from it before the next cell. */
+const SCRATCH: SunPosition = { altitude: 0, azimuth: 0, zenith: 0, declination: 0, hourAngle: 0, equationOfTime: 0, rightAscension: 0, altitudeUnrefracted: 0, solarTime: 0, earthSunDistance: 0 };
 
 function eventsOf(a: Args) {
   return sunEvents(a.date as number, a.latitude as number, a.longitude as number, a.utcOffset as number, { deltaT: a.deltaT as number | undefined });
@@ -55,6 +88,7 @@ export const SUN_FUNCTIONS: readonly FunctionDescriptor[] = [
     summary: 'Sun altitude above the horizon seen from the site, with refraction (NREL SPA)',
     category: 'Time and sun',
     params: SUN_PARAMS,
+    refuses: stampProblem,
     result: { shape: 'value', unit: DEGREES, min: -90, max: 90, description: 'topocentric altitude of the sun centre with refraction; negative at night' },
     evaluate: (a) => positionOf(a).altitude,
     examples: [
@@ -68,6 +102,7 @@ export const SUN_FUNCTIONS: readonly FunctionDescriptor[] = [
     summary: 'Sun azimuth clockwise from true north, seen from the site (NREL SPA)',
     category: 'Time and sun',
     params: SUN_PARAMS,
+    refuses: stampProblem,
     result: { shape: 'value', unit: DEGREES, min: 0, max: 360, description: 'topocentric azimuth: N 0, E 90, S 180, W 270' },
     evaluate: (a) => positionOf(a).azimuth,
     examples: [{ args: EXAMPLE_SPA, note: '194.340241: the NREL SPA worked example' }],
@@ -78,6 +113,7 @@ export const SUN_FUNCTIONS: readonly FunctionDescriptor[] = [
     summary: 'Sun zenith angle seen from the site, with refraction (90 minus the altitude)',
     category: 'Time and sun',
     params: SUN_PARAMS,
+    refuses: stampProblem,
     result: { shape: 'value', unit: DEGREES, min: 0, max: 180, description: 'topocentric zenith angle; above 90 at night' },
     evaluate: (a) => positionOf(a).zenith,
     examples: [{ args: EXAMPLE_SPA, note: '50.111622: the NREL SPA worked example' }],
@@ -88,6 +124,7 @@ export const SUN_FUNCTIONS: readonly FunctionDescriptor[] = [
     summary: 'Declination of the sun (geocentric), by the NREL SPA',
     category: 'Time and sun',
     params: SUN_PARAMS,
+    refuses: stampProblem,
     result: { shape: 'value', unit: DEGREES, min: -24.5, max: 24.5, description: 'geocentric declination of the sun, north positive' },
     evaluate: (a) => positionOf(a).declination,
     examples: [{ args: EXAMPLE_SPA, note: '-9.314340: the NREL SPA worked example' }],
@@ -98,6 +135,7 @@ export const SUN_FUNCTIONS: readonly FunctionDescriptor[] = [
     summary: 'Equation of time: apparent minus mean solar time',
     category: 'Time and sun',
     params: SUN_PARAMS,
+    refuses: stampProblem,
     result: { shape: 'value', unit: 'min', min: -20, max: 20, description: 'equation of time in minutes; positive when the sundial is ahead of the clock' },
     evaluate: (a) => positionOf(a).equationOfTime,
     examples: [{ args: EXAMPLE_SPA, note: '14.641511: the NREL SPA worked example' }],
@@ -108,6 +146,7 @@ export const SUN_FUNCTIONS: readonly FunctionDescriptor[] = [
     summary: 'Apparent solar time at the site, in hours (12 at solar noon)',
     category: 'Time and sun',
     params: SUN_PARAMS,
+    refuses: stampProblem,
     result: { shape: 'value', unit: 'h', min: 0, max: 24, description: 'apparent (sundial) time of day in hours, 0 up to 24' },
     evaluate: (a) => positionOf(a).solarTime,
     examples: [{ args: EXAMPLE_SPA, note: 'about 12.74: 12:44 by the sundial at 12:30:30 local standard time' }],
@@ -174,7 +213,8 @@ export const SUN_FUNCTIONS: readonly FunctionDescriptor[] = [
     name: 'INCIDENCEAT',
     summary: 'Incidence angle of the sun on a surface at a date-time and site (NREL SPA)',
     category: 'Surface angles',
-    params: [...WHEN_WHERE, SURFACE_AZIMUTH, SURFACE_TILT, ...ATMOSPHERE],
+    params: [...WHEN_WHERE, SURFACE_AZIMUTH, SURFACE_TILT, ...ATMOSPHERE, INSTANT],
+    refuses: stampProblem,
     result: { shape: 'value', unit: DEGREES, min: 0, max: 180, description: 'incidence angle; above 90 the sun is behind the surface (check the altitude for night)' },
     evaluate: (a) => {
       const s = positionOf(a);

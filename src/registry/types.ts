@@ -31,10 +31,15 @@ export type OutTable = OutCell[][];
  * - `dateTime`: a spreadsheet serial in local standard time, or an ISO 8601 local date-time text.
  * - `choice`: one of `choices` (case-insensitive text), passed on in the spelling of `choices`.
  * - `flag`: TRUE/FALSE (also 1/0).
+ * - `text`: any text (a label, a site id).
  * - `numberList`: the whole range, read row by row into a list of numbers (not broadcast).
+ * - `choiceList`: the whole range, read row by row into a list of `choices` tokens (not broadcast).
  * - `table`: the whole range as given, rows of cells (not broadcast).
+ * - `window`: a window described by glossary field names (src/registry/windowRange.ts): names in
+ *   the first column with values beside them, or a header row over value rows; each value column
+ *   or row is one window, and the windows broadcast like a column or a row of values.
  */
-export type ParamKind = 'number' | 'dateTime' | 'choice' | 'flag' | 'numberList' | 'table';
+export type ParamKind = 'number' | 'dateTime' | 'choice' | 'flag' | 'text' | 'numberList' | 'choiceList' | 'table' | 'window';
 
 export interface ParamDescriptor {
   /** The glossary name, camelCase, e.g. `latitude`. Shown as the parameter name in Excel. */
@@ -49,13 +54,15 @@ export interface ParamDescriptor {
   exclusiveMin?: boolean;
   exclusiveMax?: boolean;
   integer?: boolean;
-  /** Allowed texts for `choice`. */
+  /** Allowed texts for `choice` (tokens; matched ignoring case, spaces and punctuation). */
   choices?: readonly string[];
+  /** Other spellings accepted for a `choice`, each mapped to its token (e.g. `perez` → `perez1990`). */
+  choiceAliases?: Readonly<Record<string, string>>;
   /** Default for a blank or omitted argument. A parameter with a default is optional. */
   default?: number | string | boolean;
   /** Optional without a default value: the function works something out itself (documented in `description`). */
   optional?: boolean;
-  /** For `numberList`: allowed count of numbers. Element bounds use min/max. */
+  /** For `numberList` / `choiceList`: allowed count of entries. Element bounds use min/max. */
   length?: { min?: number; max?: number; exact?: number };
   /** For `numberList`: numbers must be strictly ascending. */
   ascending?: boolean;
@@ -67,7 +74,19 @@ export interface ParamDescriptor {
 }
 
 /** A parameter's value after reading: what `evaluate` receives under the parameter's name. */
-export type ArgValue = number | string | boolean | number[] | Matrix | undefined;
+export type ArgValue = number | string | boolean | number[] | string[] | Matrix | WindowFields | undefined;
+
+/**
+ * A window as read from a range: its fields by glossary name, each already read and checked
+ * against the field's range (text, number, list of numbers), blanks left out.
+ */
+export interface WindowFields {
+  readonly kind: 'window';
+  /** Field values by glossary name. */
+  readonly values: ReadonlyMap<string, string | number | number[]>;
+  /** The names as the user wrote them, by glossary name (for messages). */
+  readonly written: ReadonlyMap<string, string>;
+}
 export type Args = Record<string, ArgValue>;
 
 export interface ResultDescriptor {
@@ -123,4 +142,9 @@ export interface FunctionDescriptor {
   examples?: readonly { args: readonly string[]; note: string }[];
   /** The outside check of this function (for the reference; dropped from the add-in bundle). */
   outsideCheck: OutsideCheck;
+  /**
+   * For an older positional form kept so that saved workbooks keep working (its id is released):
+   * the function that takes the window as one range and should be used instead.
+   */
+  supersededBy?: string;
 }

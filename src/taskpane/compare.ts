@@ -10,6 +10,7 @@ import { SunpaneError } from '../core/common';
 import type { Shading } from '../core/shading';
 import type { WindowSpec } from '../core/gain';
 import { withoutPath } from './messages';
+import { inGlossaryWords } from '../registry/windowRange';
 import { readNumberText } from './spec';
 
 /** Most options compared at once. */
@@ -30,12 +31,12 @@ export interface ShadingOption {
 /** The option boxes, in table order, with our column titles. */
 export const OPTION_FIELDS: readonly { key: keyof ShadingOption; title: string; short: string }[] = [
   { key: 'label', title: 'Option', short: 'Name' },
-  { key: 'overhangDepth', title: 'Overhang depth (m)', short: 'Overhang (m)' },
+  { key: 'overhangDepth', title: 'Overhang projection (m)', short: 'Overhang (m)' },
   { key: 'overhangGap', title: 'Overhang gap (m)', short: 'Gap above (m)' },
-  { key: 'overhangReach', title: 'Overhang reach (m)', short: 'Reach (m)' },
-  { key: 'setBack', title: 'Set-back (m)', short: 'Set-back (m)' },
-  { key: 'leftFinDepth', title: 'Left fin depth (m)', short: 'Left fin (m)' },
-  { key: 'rightFinDepth', title: 'Right fin depth (m)', short: 'Right fin (m)' },
+  { key: 'overhangReach', title: 'Overhang extension (m)', short: 'Extension (m)' },
+  { key: 'setBack', title: 'Reveal depth (m)', short: 'Reveal (m)' },
+  { key: 'leftFinDepth', title: 'Left fin projection (m)', short: 'Left fin (m)' },
+  { key: 'rightFinDepth', title: 'Right fin projection (m)', short: 'Right fin (m)' },
   { key: 'finGap', title: 'Fin gap (m)', short: 'Fin gap (m)' },
 ];
 
@@ -63,15 +64,15 @@ export function optionShading(option: ShadingOption, skyline?: number[]): Shadin
   return s;
 }
 
-/** The column title an option's validation message belongs to. */
+/** The column title an option's validation message belongs to (the message names the glossary field). */
 export function optionColumnFor(argument: string): string | undefined {
-  if (argument.startsWith('shading.overhang.projection')) return 'Overhang depth (m)';
-  if (argument.startsWith('shading.overhang.gap')) return 'Overhang gap (m)';
-  if (argument.startsWith('shading.overhang')) return 'Overhang reach (m)';
-  if (argument.startsWith('shading.leftFin.projection')) return 'Left fin depth (m)';
-  if (argument.startsWith('shading.rightFin.projection')) return 'Right fin depth (m)';
-  if (argument.startsWith('shading.leftFin') || argument.startsWith('shading.rightFin')) return 'Fin gap (m)';
-  if (argument.startsWith('shading.revealDepth')) return 'Set-back (m)';
+  if (argument.startsWith('overhangProjection')) return 'Overhang projection (m)';
+  if (argument.startsWith('overhangGap')) return 'Overhang gap (m)';
+  if (argument.startsWith('overhangExtension')) return 'Overhang extension (m)';
+  if (argument.startsWith('leftFinProjection')) return 'Left fin projection (m)';
+  if (argument.startsWith('rightFinProjection')) return 'Right fin projection (m)';
+  if (/^(left|right)Fin/.test(argument)) return 'Fin gap (m)';
+  if (argument.startsWith('revealDepth')) return 'Reveal depth (m)';
   return undefined;
 }
 
@@ -99,7 +100,8 @@ export function optionSpecs(base: WindowSpec, options: readonly ShadingOption[],
   out.forEach((o, i) => {
     try {
       validate(o.spec);
-    } catch (err) {
+    } catch (caught) {
+      const err = inGlossaryWords(caught);
       if (!(err instanceof SunpaneError) || i === 0) throw err;
       const column = optionColumnFor(err.argument);
       throw new OptionProblem(err, i, o.label, column);

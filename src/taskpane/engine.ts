@@ -7,11 +7,19 @@ import { type AnnualSeries, annualSeries, type AnnualSummary, summarizeAnnual, t
 import { shadingMaskGrid, type Shading } from '../core/shading';
 import { sunPosition, incidenceAngle } from '../core/sun';
 import { civilToSerial, serialToUtcMs } from '../core/time';
+import { inGlossaryWords } from '../registry/windowRange';
 import type { YearFigures } from './yearSheet';
 
-/** Checks a WindowSpec (throws SunpaneError naming the field path). */
+/**
+ * Checks a WindowSpec; a refusal names the field by its glossary name (`latitude`, `shgc`,
+ * `overhangProjection`), as the functions, the window file and the schedule do.
+ */
 export function validateSpec(spec: WindowSpec): void {
-  validateWindowSpec(spec);
+  try {
+    validateWindowSpec(spec);
+  } catch (err) {
+    throw inGlossaryWords(err);
+  }
 }
 
 /** One window's year and its totals. */
@@ -23,7 +31,7 @@ export interface YearResult {
 
 /** Runs the core's annual series and summary for one window. */
 export function runYear(spec: WindowSpec): YearResult {
-  validateWindowSpec(spec);
+  validateSpec(spec);
   const series = annualSeries(spec);
   const summary = summarizeAnnual(series);
   const figures: YearFigures = {

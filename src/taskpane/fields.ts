@@ -1,11 +1,15 @@
 /**
- * The window form: every field the pane shows, with our own labels, the defaults a practitioner
- * expects, and the WindowSpec path its value goes to (so that a core validation message naming
- * `glazing.shgc` lands beside the SHGC box).
+ * The window form: every field the pane shows, the defaults a practitioner expects, and the paths
+ * its value goes to (so that a validation message naming `shgc` or `glazing.shgc` lands beside the
+ * SHGC box). A box that holds a window field has the field's glossary name as its id and the
+ * glossary's label (src/registry/glossary.ts), so the pane speaks the words of the functions, the
+ * window file and the schedule; the pane's own boxes (example place, glass model, weather source,
+ * sheet ranges) keep ids of their own.
  */
 import { EXAMPLE_SITES } from '../demo/sites';
 import { HOUR_STAMPS } from '../io/weather';
 import { HOUR_STAMP_LABELS } from './weather';
+import { GLOSSARY, type GlossaryEntry } from '../registry/glossary';
 
 export type SectionId = 'site' | 'facing' | 'opening' | 'glass' | 'shade' | 'sky' | 'run';
 
@@ -31,10 +35,18 @@ export interface FieldDef {
   hint?: string;
   /** Shown only when this returns true for the current form values. */
   visible?: (v: FormValues) => boolean;
+  /** Ids this box had in earlier versions (a saved form under an old id is read into it). */
+  formerIds?: readonly string[];
 }
 
 /** The form's values as typed: field id → text. */
 export type FormValues = Record<string, string>;
+
+/** A box for a glossary window field: its name as id, its label (unit apart), and its name and paths for messages. */
+function box(g: GlossaryEntry, section: SectionId, initial: string, extra: Partial<FieldDef> = {}): FieldDef {
+  const label = g.label.replace(/\s*\[[^\]]*\]\s*$/, '');
+  return { id: g.name, label, section, kind: 'number', ...(g.unit ? { unit: g.unit } : {}), initial, paths: [g.name, ...(g.window?.paths ?? [])], ...extra };
+}
 
 const physical = (v: FormValues) => v.glassModel !== 'table';
 const table = (v: FormValues) => v.glassModel === 'table';
@@ -52,7 +64,7 @@ export const SECTIONS: readonly { id: SectionId; title: string }[] = [
 ];
 
 export const FIELDS: readonly FieldDef[] = [
-  { id: 'windowName', label: 'Window label', section: 'site', kind: 'text', initial: 'Window A', paths: ['name'] },
+  box(GLOSSARY.name, 'site', 'Window A', { kind: 'text', formerIds: ['windowName'] }),
   {
     id: 'examplePlace',
     label: 'Example place (fills the boxes below)',
@@ -61,17 +73,17 @@ export const FIELDS: readonly FieldDef[] = [
     initial: '',
     options: [{ value: '', label: 'my own coordinates' }, ...EXAMPLE_SITES.map((s) => ({ value: s.id, label: s.label }))],
   },
-  { id: 'latitude', label: 'Latitude', unit: '°', section: 'site', kind: 'number', initial: '52.2', paths: ['site.latitude', 'latitude'], hint: 'north positive' },
-  { id: 'longitude', label: 'Longitude', unit: '°', section: 'site', kind: 'number', initial: '4.9', paths: ['site.longitude', 'longitude'], hint: 'east positive' },
-  { id: 'elevation', label: 'Elevation', unit: 'm', section: 'site', kind: 'number', initial: '0', paths: ['site.elevation', 'elevation'] },
-  { id: 'utcOffset', label: 'Offset from UTC', unit: 'h', section: 'site', kind: 'number', initial: '1', paths: ['site.utcOffset', 'utcOffset'], hint: 'standard time, east positive' },
+  box(GLOSSARY.latitude, 'site', '52.2', { hint: 'north positive' }),
+  box(GLOSSARY.longitude, 'site', '4.9', { hint: 'east positive' }),
+  box(GLOSSARY.elevation, 'site', '0'),
+  box(GLOSSARY.utcOffset, 'site', '1', { hint: 'standard time, east positive' }),
 
-  { id: 'surfaceAzimuth', label: 'Glass faces (bearing)', unit: '°', section: 'facing', kind: 'number', initial: '180', paths: ['surfaceAzimuth'], hint: 'from north: N 0 · E 90 · S 180 · W 270' },
-  { id: 'surfaceTilt', label: 'Tilt from horizontal', unit: '°', section: 'facing', kind: 'number', initial: '90', paths: ['surfaceTilt'], hint: '90 = upright wall; shading devices need 90' },
+  box(GLOSSARY.surfaceAzimuth, 'facing', '180', { hint: 'the way the glass faces, from north: N 0 · E 90 · S 180 · W 270' }),
+  box(GLOSSARY.surfaceTilt, 'facing', '90', { hint: 'from horizontal: 90 = upright wall; shading devices need 90' }),
 
-  { id: 'width', label: 'Width', unit: 'm', section: 'opening', kind: 'number', initial: '1.8', paths: ['width'] },
-  { id: 'height', label: 'Height', unit: 'm', section: 'opening', kind: 'number', initial: '1.5', paths: ['height'] },
-  { id: 'frameFraction', label: 'Frame share of the opening', section: 'opening', kind: 'number', initial: '0.15', paths: ['frameFraction'], hint: '0 to below 1' },
+  box(GLOSSARY.width, 'opening', '1.8'),
+  box(GLOSSARY.height, 'opening', '1.5'),
+  box(GLOSSARY.frameFraction, 'opening', '0.15', { hint: 'share of the opening, 0 to below 1' }),
 
   {
     id: 'glassModel',
@@ -84,34 +96,29 @@ export const FIELDS: readonly FieldDef[] = [
       { value: 'table', label: 'from my angle table on a sheet' },
     ],
   },
-  { id: 'shgc', label: 'SHGC at normal incidence', section: 'glass', kind: 'number', initial: '0.4', paths: ['glazing.shgc'] },
-  { id: 'panes', label: 'Panes', section: 'glass', kind: 'number', initial: '2', paths: ['glazing.panes'], visible: physical },
-  { id: 'angleTableAddress', label: 'Angle table (two columns: angle °, SHGC)', section: 'glass', kind: 'address', initial: '', paths: ['glazing.angleTable'], visible: table, hint: 'e.g. Glass!A2:B10' },
-  { id: 'interiorAttenuation', label: 'Inside blind or curtain factor', section: 'glass', kind: 'number', initial: '1', paths: ['glazing.interiorAttenuation'], hint: '1 = none' },
+  box(GLOSSARY.shgc, 'glass', '0.4', { hint: 'at normal incidence' }),
+  box(GLOSSARY.panes, 'glass', '2', { visible: physical }),
+  { id: 'angleTableAddress', label: 'Angle table (two columns: angle °, SHGC)', section: 'glass', kind: 'address', initial: '', paths: ['shgcAngles', 'shgcValues', 'glazing.angleTable'], visible: table, hint: 'e.g. Glass!A2:B10' },
+  box(GLOSSARY.interiorAttenuation, 'glass', '1', { hint: 'inside blind or curtain; 1 = none' }),
 
-  { id: 'overhangProjection', label: 'Overhang depth', unit: 'm', section: 'shade', kind: 'number', initial: '0', paths: ['shading.overhang.projection'], hint: '0 = no overhang' },
-  { id: 'overhangGap', label: 'Overhang gap above head', unit: 'm', section: 'shade', kind: 'number', initial: '0', paths: ['shading.overhang.gap'] },
-  { id: 'overhangExtensionLeft', label: 'Overhang past left jamb', unit: 'm', section: 'shade', kind: 'number', initial: '0', paths: ['shading.overhang.extensionLeft'], hint: 'left as seen from outside' },
-  { id: 'overhangExtensionRight', label: 'Overhang past right jamb', unit: 'm', section: 'shade', kind: 'number', initial: '0', paths: ['shading.overhang.extensionRight', 'shading.overhang'] },
-  { id: 'leftFinProjection', label: 'Left fin depth', unit: 'm', section: 'shade', kind: 'number', initial: '0', paths: ['shading.leftFin.projection'], hint: '0 = no fin' },
-  { id: 'leftFinGap', label: 'Left fin gap from jamb', unit: 'm', section: 'shade', kind: 'number', initial: '0', paths: ['shading.leftFin.gap'] },
-  { id: 'leftFinAbove', label: 'Left fin rise above head', unit: 'm', section: 'shade', kind: 'number', initial: '0', paths: ['shading.leftFin.extensionAbove'] },
-  { id: 'leftFinBelow', label: 'Left fin drop below sill', unit: 'm', section: 'shade', kind: 'number', initial: '0', paths: ['shading.leftFin.extensionBelow', 'shading.leftFin'] },
-  { id: 'rightFinProjection', label: 'Right fin depth', unit: 'm', section: 'shade', kind: 'number', initial: '0', paths: ['shading.rightFin.projection'], hint: '0 = no fin' },
-  { id: 'rightFinGap', label: 'Right fin gap from jamb', unit: 'm', section: 'shade', kind: 'number', initial: '0', paths: ['shading.rightFin.gap'] },
-  { id: 'rightFinAbove', label: 'Right fin rise above head', unit: 'm', section: 'shade', kind: 'number', initial: '0', paths: ['shading.rightFin.extensionAbove'] },
-  { id: 'rightFinBelow', label: 'Right fin drop below sill', unit: 'm', section: 'shade', kind: 'number', initial: '0', paths: ['shading.rightFin.extensionBelow', 'shading.rightFin'] },
-  { id: 'revealDepth', label: 'Glass set back from face', unit: 'm', section: 'shade', kind: 'number', initial: '0', paths: ['shading.revealDepth'] },
-  { id: 'skylineAddress', label: 'Skyline elevations (optional range)', section: 'shade', kind: 'address', initial: '', paths: ['shading.skyline', 'skyline'], hint: 'angles 0–90° for equal sectors clockwise from north, e.g. Site!B2:B13' },
+  box(GLOSSARY.overhangProjection, 'shade', '0', { hint: 'depth out from the wall; 0 = no overhang' }),
+  box(GLOSSARY.overhangGap, 'shade', '0', { hint: 'underside above the window head' }),
+  box(GLOSSARY.overhangExtensionLeft, 'shade', '0', { hint: 'past the left jamb, seen from outside' }),
+  { ...box(GLOSSARY.overhangExtensionRight, 'shade', '0', { hint: 'past the right jamb' }), paths: ['overhangExtensionRight', 'shading.overhang.extensionRight', 'shading.overhang'] },
+  box(GLOSSARY.leftFinProjection, 'shade', '0', { hint: '0 = no fin' }),
+  box(GLOSSARY.leftFinGap, 'shade', '0', { hint: 'from the left jamb' }),
+  box(GLOSSARY.leftFinExtensionAbove, 'shade', '0', { hint: 'above the head', formerIds: ['leftFinAbove'] }),
+  { ...box(GLOSSARY.leftFinExtensionBelow, 'shade', '0', { hint: 'below the sill', formerIds: ['leftFinBelow'] }), paths: ['leftFinExtensionBelow', 'shading.leftFin.extensionBelow', 'shading.leftFin'] },
+  box(GLOSSARY.rightFinProjection, 'shade', '0', { hint: '0 = no fin' }),
+  box(GLOSSARY.rightFinGap, 'shade', '0', { hint: 'from the right jamb' }),
+  box(GLOSSARY.rightFinExtensionAbove, 'shade', '0', { hint: 'above the head', formerIds: ['rightFinAbove'] }),
+  { ...box(GLOSSARY.rightFinExtensionBelow, 'shade', '0', { hint: 'below the sill', formerIds: ['rightFinBelow'] }), paths: ['rightFinExtensionBelow', 'shading.rightFin.extensionBelow', 'shading.rightFin'] },
+  box(GLOSSARY.revealDepth, 'shade', '0', { hint: 'glass set back from the wall face' }),
+  { id: 'skylineAddress', label: 'Skyline elevations (optional range)', section: 'shade', kind: 'address', initial: '', paths: ['skyline', 'shading.skyline'], hint: 'angles 0–90° for equal sectors clockwise from north, e.g. Site!B2:B13' },
 
-  { id: 'groundAlbedo', label: 'Ground reflectance', section: 'sky', kind: 'number', initial: '0.2', paths: ['groundAlbedo'] },
+  box(GLOSSARY.groundAlbedo, 'sky', '0.2', { hint: 'ground reflectance' }),
   {
-    id: 'skyModel',
-    label: 'Sky diffuse model',
-    section: 'sky',
-    kind: 'select',
-    initial: 'perez1990',
-    paths: ['skyModel'],
+    ...box(GLOSSARY.skyModel, 'sky', 'perez1990', { kind: 'select' }),
     options: [
       { value: 'perez1990', label: 'Perez 1990' },
       { value: 'hayDavies', label: 'Hay–Davies' },
@@ -132,12 +139,12 @@ export const FIELDS: readonly FieldDef[] = [
       { value: 'globalHorizontal', label: 'my hourly global horizontal only' },
     ],
   },
-  { id: 'linkeTurbidity', label: 'Linke turbidity (1 or 12 monthly values)', section: 'sky', kind: 'list', initial: '3', paths: ['weather.linkeTurbidity'], visible: weatherIs('ineichenClearSky') },
-  { id: 'tauB', label: 'Beam optical depth τb (1 or 12 values)', section: 'sky', kind: 'list', initial: '0.4', paths: ['weather.tauB'], visible: weatherIs('ashraeClearSky') },
-  { id: 'tauD', label: 'Diffuse optical depth τd (1 or 12 values)', section: 'sky', kind: 'list', initial: '2.2', paths: ['weather.tauD'], visible: weatherIs('ashraeClearSky') },
-  { id: 'dniAddress', label: 'Direct normal column', section: 'sky', kind: 'address', initial: '', paths: ['weather.dni'], visible: weatherIs('measured'), hint: 'one cell per hour of the year, hour-ending' },
-  { id: 'dhiAddress', label: 'Diffuse horizontal column', section: 'sky', kind: 'address', initial: '', paths: ['weather.dhi'], visible: weatherIs('measured') },
-  { id: 'ghiAddress', label: 'Global horizontal column', section: 'sky', kind: 'address', initial: '', paths: ['weather.ghi'], visible: weatherIs('globalHorizontal'), hint: 'split into beam and diffuse by Erbs et al. (1982)' },
+  box(GLOSSARY.linkeTurbidity, 'sky', '3', { kind: 'list', label: 'Linke turbidity (1 or 12 monthly values)', visible: weatherIs('ineichenClearSky') }),
+  box(GLOSSARY.tauB, 'sky', '0.4', { kind: 'list', label: 'Tau b, beam optical depth (1 or 12 values)', visible: weatherIs('ashraeClearSky') }),
+  box(GLOSSARY.tauD, 'sky', '2.2', { kind: 'list', label: 'Tau d, diffuse optical depth (1 or 12 values)', visible: weatherIs('ashraeClearSky') }),
+  { id: 'dniAddress', label: 'Direct normal column', unit: 'W/m²', section: 'sky', kind: 'address', initial: '', paths: ['dni', 'weather.dni'], visible: weatherIs('measured'), hint: 'one cell per hour of the year; each stamp marks the end of its hour unless said below' },
+  { id: 'dhiAddress', label: 'Diffuse horizontal column', unit: 'W/m²', section: 'sky', kind: 'address', initial: '', paths: ['dhi', 'weather.dhi'], visible: weatherIs('measured') },
+  { id: 'ghiAddress', label: 'Global horizontal column', unit: 'W/m²', section: 'sky', kind: 'address', initial: '', paths: ['ghi', 'weather.ghi'], visible: weatherIs('globalHorizontal'), hint: 'split into beam and diffuse by Erbs et al. (1982)' },
   { id: 'timeAddress', label: 'Time stamps column (optional)', section: 'sky', kind: 'address', initial: '', paths: ['weather.stamps'], visible: hourly, hint: 'date-times; without it the rows are the hours in order from 01:00 on 1 January' },
   { id: 'hourStamp', label: 'Each stamp marks', section: 'sky', kind: 'select', initial: 'end', options: HOUR_STAMPS.map((s) => ({ value: s, label: HOUR_STAMP_LABELS[s] })), visible: hourly },
   {
@@ -168,7 +175,14 @@ export const FIELDS: readonly FieldDef[] = [
   },
   { id: 'maxUnusable', label: 'Unusable hours allowed', unit: '%', section: 'sky', kind: 'number', initial: '1', paths: ['weather.maxUnusable'], visible: hourly, hint: 'more than this share of the year and the weather is refused' },
 
-  { id: 'year', label: 'Year', section: 'run', kind: 'number', initial: String(new Date().getFullYear()), paths: ['year'] },
+  box(GLOSSARY.year, 'run', String(new Date().getFullYear())),
+  {
+    ...box(GLOSSARY.timeConvention, 'run', 'hourEnding', { kind: 'select', hint: 'how each hourly row is stamped: the same choice as the timeConvention field of the functions and the schedule' }),
+    options: [
+      { value: 'hourEnding', label: 'hour ending (sun at mid-hour)' },
+      { value: 'instant', label: 'instant (sun at the stamp)' },
+    ],
+  },
 ];
 
 export const FIELD_BY_ID: ReadonlyMap<string, FieldDef> = new Map(FIELDS.map((f) => [f.id, f]));

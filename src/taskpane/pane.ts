@@ -57,7 +57,7 @@ export function describeSpec(spec: WindowSpec): string[] {
   const off = s.utcOffset >= 0 ? `+${s.utcOffset}` : String(s.utcOffset);
   return [
     `${spec.name}: faces ${spec.surfaceAzimuth}°, tilt ${spec.surfaceTilt}°, opening ${spec.width} × ${spec.height} m, frame share ${spec.frameFraction}, SHGC ${spec.glazing.shgc}${spec.glazing.angleTable ? ' (angle table)' : `, ${spec.glazing.panes} panes`}`,
-    `Latitude ${s.latitude}°, longitude ${s.longitude}°, UTC${off} h, year ${spec.year}; ${weatherText(spec)}; sky model ${spec.skyModel}; ground reflectance ${spec.groundAlbedo}. Rows are hour-ending, local standard time, sun at mid-hour.`,
+    `Latitude ${s.latitude}°, longitude ${s.longitude}°, UTC${off} h, year ${spec.year}; ${weatherText(spec)}; sky model ${spec.skyModel}; ground reflectance ${spec.groundAlbedo}. ${spec.timeConvention === 'instant' ? 'Rows are instants at the top of each hour, local standard time, sun at the stamp (time convention instant).' : 'Rows are hour-ending, local standard time, sun at mid-hour (time convention hourEnding).'}`,
     CAUTION,
   ];
 }
@@ -252,7 +252,7 @@ export function createPane(doc: Document, host: PaneHost): void {
       await breathe();
       const result: YearResult = runYear(ready.spec);
       const plan = await planSheet(`${ready.spec.name} hourly`, await sheetNamesOf(host.run), store, askReplace);
-      const written = await writeYearSheet(host.run, { ...plan, tableBase: `${ready.spec.name} hourly` }, { title: `Sunpane hourly solar gain: ${ready.spec.name}`, lines: describeSpec(ready.spec) }, result.series, result.figures, {
+      const written = await writeYearSheet(host.run, { ...plan, tableBase: `${ready.spec.name} hourly` }, { title: `Sunpane hourly solar gain: ${ready.spec.name}`, lines: describeSpec(ready.spec), timeConvention: ready.spec.timeConvention }, result.series, result.figures, {
         onProgress: (done, total) => setProgress(done, total, `Writing rows: ${done} of ${total}`),
         cancelled: () => cancelRequested,
       });

@@ -39,7 +39,8 @@ export function restoreState(raw: unknown): SavedPane {
   const r = raw as Partial<SavedPane>;
   if (r.form && typeof r.form === 'object') {
     for (const f of FIELDS) {
-      const v = (r.form as Record<string, unknown>)[f.id];
+      const saved = r.form as Record<string, unknown>;
+      const v = [f.id, ...(f.formerIds ?? [])].map((id) => saved[id]).find((x) => typeof x === 'string');
       if (typeof v === 'string') state.form[f.id] = v;
     }
   }

@@ -11,6 +11,8 @@
 import { SunpaneError } from '../core/common';
 import type { WindowSpec } from '../core/gain';
 import { EXAMPLE_SITES } from '../demo/sites';
+import { choiceFor } from '../registry/glossary';
+import { inGlossaryWords, readFieldCell } from '../registry/windowRange';
 import { SCHEDULE_COLUMNS, SITE_KEY, SKYLINE_KEY, type ScheduleColumn, columnForHeader, headerKey, matchHeaders, requiredColumns } from '../schedule/columns';
 import { FIELDS, type FieldDef, type FormValues, applyExampleSite, fieldForArgument } from './fields';
 import { withoutPath } from './messages';
@@ -19,19 +21,35 @@ import { type SheetData, type SpecValidator, buildWindowSpec, readListText } fro
 export { headerKey };
 
 /** Help text listing the headers, for the pane. */
-export const SCHEDULE_HELP = `One row per window. Needed: ${requiredColumns('pane').map((c) => c.header).join(', ')}. Optional (blank takes the form's value): ${SCHEDULE_COLUMNS.filter((c) => !c.requiredBy.includes('pane')).map((c) => c.header).join(', ')}. The same table runs with \`sunpane schedule\`. Case does not matter and the unit in brackets may be left out; the window file's names (surfaceAzimuth, overhangProjection…) are accepted too. Lists (skyline, monthly turbidity) are space-separated.`;
+export const SCHEDULE_HELP = `One row per window. Needed: ${requiredColumns('pane').map((c) => c.header).join(', ')}. Optional (blank takes the form's value): ${SCHEDULE_COLUMNS.filter((c) => !c.requiredBy.includes('pane')).map((c) => c.header).join(', ')}. The same table runs with \`sunpane schedule\`, and a row of it (with its header row) is the window of SOLARGAIN. Case does not matter and the unit in brackets may be left out; the field names (surfaceAzimuth, overhangProjection…) and older names are accepted too. Lists (skyline, monthly turbidity) are space-separated.`;
 
-/** The form box a column path fills (the skyline and the example site are handled apart). */
-function fieldOfPath(path: string): FieldDef {
-  const field = FIELDS.find((f) => f.kind !== 'address' && f.paths?.includes(path));
-  if (!field) throw new Error(`schedule path ${path} has no form box`);
-  return field;
+/** The form box a column path fills, if the form has one (the skyline and the example site are handled apart). */
+function fieldOfPath(path: string): FieldDef | undefined {
+  return FIELDS.find((f) => f.kind !== 'address' && f.paths?.includes(path));
 }
 
-/** Form boxes of every column (a both-sides column fills two). */
+/** Form boxes of every column (a both-sides column fills two); empty for a column the form has no box for. */
 const COLUMN_FIELDS: ReadonlyMap<string, readonly FieldDef[]> = new Map(
-  SCHEDULE_COLUMNS.map((c) => [c.key, c.key === SITE_KEY ? [] : c.key === SKYLINE_KEY ? FIELDS.filter((f) => f.id === 'skylineAddress') : c.paths.map(fieldOfPath)]),
+  SCHEDULE_COLUMNS.map((c) => {
+    if (c.key === SITE_KEY) return [c.key, []];
+    if (c.key === SKYLINE_KEY) return [c.key, FIELDS.filter((f) => f.id === 'skylineAddress')];
+    const boxes = c.paths.map(fieldOfPath);
+    return [c.key, boxes.every((b) => b !== undefined) ? (boxes as FieldDef[]) : []];
+  }),
 );
+
+/** Columns the form has no box for (air pressure and temperature, an SHGC table, the radiant fraction): set on the row's window directly. */
+const BOXLESS = new Set(SCHEDULE_COLUMNS.filter((c) => c.key !== SITE_KEY && c.key !== SKYLINE_KEY && (COLUMN_FIELDS.get(c.key) ?? []).length === 0).map((c) => c.key));
+
+function setPath(obj: Record<string, unknown>, dotted: string, value: unknown): void {
+  const keys = dotted.split('.');
+  let o = obj;
+  for (const k of keys.slice(0, -1)) {
+    if (typeof o[k] !== 'object' || o[k] === null) o[k] = {};
+    o = o[k] as Record<string, unknown>;
+  }
+  o[keys[keys.length - 1]] = value;
+}
 
 /** Weather kind a row switches to when it fills a clear-sky column. */
 const WEATHER_OF_COLUMN: Readonly<Record<string, string>> = { linkeTurbidity: 'ineichenClearSky', tauB: 'ashraeClearSky', tauD: 'ashraeClearSky' };
@@ -101,11 +119,17 @@ export function readSchedule(table: readonly (readonly unknown[])[], form: FormV
 
 type RowOutcome = { spec: WindowSpec } | { label: string; column?: string; where: string; message: string };
 
+function labelOf(line: readonly unknown[], present: readonly { column: ScheduleColumn; index: number }[]): string {
+  const c = present.find((p) => p.column.key === 'name');
+  return c ? cellText(line[c.index]) : '';
+}
+
 /** One row: the form overridden by the row's cells, in the column list's order (both sides before one side). */
 function readRow(line: readonly unknown[], present: readonly { column: ScheduleColumn; index: number; header: string }[], form: FormValues, data: SheetData, validate: SpecValidator): RowOutcome {
   let values: FormValues = { ...form };
   const rowData: SheetData = { ...data };
   const fieldToColumn = new Map<string, string>();
+  const extras: { column: ScheduleColumn; header: string; text: string }[] = [];
   let siteHeader: string | undefined;
   for (const { column, index, header } of present) {
     const text = cellText(line[index]);
@@ -114,33 +138,49 @@ function readRow(line: readonly unknown[], present: readonly { column: ScheduleC
     if (text === '' && !column.requiredBy.includes('pane')) continue;
     if (column.key === SITE_KEY) {
       const site = EXAMPLE_SITES.find((s) => s.id.toLowerCase() === text.toLowerCase());
-      if (!site) return { label: cellText(line[present[0].index]), column: header, where: `column "${header}"`, message: `"${text}" is not an example site (${EXAMPLE_SITES.map((s) => s.id).join(', ')}).` };
+      if (!site) return { label: labelOf(line, present), column: header, where: `column "${header}"`, message: `"${text}" is not an example site (${EXAMPLE_SITES.map((s) => s.id).join(', ')}).` };
       values = applyExampleSite(values, site.id);
       siteHeader = header;
       continue;
     }
     if (siteHeader && column.paths[0].startsWith('site.')) {
-      return { label: cellText(line[present[0].index]), column: header, where: `column "${header}"`, message: `give either an example site (column "${siteHeader}") or its own latitude, longitude, UTC offset and elevation, not both.` };
+      return { label: labelOf(line, present), column: header, where: `column "${header}"`, message: `give either an example site (column "${siteHeader}") or its own latitude, longitude, UTC offset and elevation, not both.` };
     }
     if (column.key === SKYLINE_KEY) {
       rowData.skyline = readListText(text) as number[];
       continue;
     }
-    for (const f of COLUMN_FIELDS.get(column.key) ?? []) values[f.id] = boxText(f, text);
+    if (BOXLESS.has(column.key)) {
+      extras.push({ column, header, text });
+      continue;
+    }
+    const token = column.field.kind === 'choice' ? choiceFor(column.field, text) : undefined;
+    for (const f of COLUMN_FIELDS.get(column.key) ?? []) values[f.id] = token ?? boxText(f, text);
     if (WEATHER_OF_COLUMN[column.key]) values.weatherSource = WEATHER_OF_COLUMN[column.key];
   }
-  const label = (values.windowName ?? '').trim();
-  const labelHeader = fieldToColumn.get('windowName') ?? 'Window';
-  // The label column is required, and first in the list, so present[0] is it.
-  if (cellText(line[present[0].index]) === '') {
+  const label = (values.name ?? '').trim();
+  const labelHeader = fieldToColumn.get('name') ?? 'Name';
+  const labelColumn = present.find((p) => p.column.key === 'name');
+  if (labelColumn === undefined || cellText(line[labelColumn.index]) === '') {
     return { label: '', column: labelHeader, where: `column "${labelHeader}"`, message: 'blank is not allowed: every window needs a label.' };
   }
+  let extra: { column: ScheduleColumn; header: string; text: string } | undefined;
   try {
     const spec = buildWindowSpec(values, rowData);
+    for (const x of extras) {
+      extra = x;
+      const value = readFieldCell(x.column.field, x.text, x.header);
+      for (const p of x.column.paths) setPath(spec as unknown as Record<string, unknown>, p, value);
+    }
+    extra = undefined;
     validate(spec);
     return { spec };
-  } catch (err) {
+  } catch (caught) {
+    const err = inGlossaryWords(caught);
     if (!(err instanceof SunpaneError)) throw err;
+    if (extra) return { label, column: extra.header, where: `column "${extra.header}"`, message: err.message };
+    const boxless = extras.find((x) => err.argument === x.column.key || err.argument.startsWith(`${x.column.key} `) || x.column.paths.some((p) => err.argument === p || err.argument.startsWith(`${p}[`) || err.argument.startsWith(`${p}.`)));
+    if (boxless) return { label, column: boxless.header, where: `column "${boxless.header}"`, message: `${boxless.header} ${err.message.slice(err.argument.length + 1)}` };
     const field = fieldForArgument(err.argument);
     const column = field ? fieldToColumn.get(field.id) : undefined;
     const where = column ? `column "${column}"` : field ? `form box "${field.label}"` : 'form';

@@ -8,6 +8,7 @@ import { SunpaneError } from '../core/common';
 import type { AngleTable } from '../core/glazing';
 import type { Shading } from '../core/shading';
 import type { Weather, WindowSpec } from '../core/gain';
+import { inGlossaryWords } from '../registry/windowRange';
 import { RANGE_ADDRESS_HELP, parseRangeAddress } from './addresses';
 import type { SheetWeather } from './weather';
 import { FIELDS, FIELD_BY_ID, type FieldDef, type FormValues, fieldForArgument } from './fields';
@@ -115,8 +116,8 @@ export function buildWindowSpec(values: FormValues, data: SheetData = {}): Windo
     shading[side === 'left' ? 'leftFin' : 'rightFin'] = {
       projection: num(values, `${side}FinProjection`),
       gap: num(values, `${side}FinGap`),
-      extensionAbove: num(values, `${side}FinAbove`),
-      extensionBelow: num(values, `${side}FinBelow`),
+      extensionAbove: num(values, `${side}FinExtensionAbove`),
+      extensionBelow: num(values, `${side}FinExtensionBelow`),
     };
   }
   if (!isZero(values, 'revealDepth')) shading.revealDepth = num(values, 'revealDepth');
@@ -124,7 +125,7 @@ export function buildWindowSpec(values: FormValues, data: SheetData = {}): Windo
 
   const table = values.glassModel === 'table';
   return {
-    name: (values.windowName ?? '').trim() || 'Window',
+    name: (values.name ?? '').trim() || 'Window',
     site: {
       latitude: num(values, 'latitude'),
       longitude: num(values, 'longitude'),
@@ -147,6 +148,7 @@ export function buildWindowSpec(values: FormValues, data: SheetData = {}): Windo
     skyModel: values.skyModel as WindowSpec['skyModel'],
     weather: weatherOf(values, data),
     year: num(values, 'year'),
+    timeConvention: (values.timeConvention || 'hourEnding') as WindowSpec['timeConvention'],
   };
 }
 
@@ -177,7 +179,8 @@ export function findProblems(values: FormValues, validate: SpecValidator, data?:
       if (!data && (spec.weather.kind === 'measured' || spec.weather.kind === 'globalHorizontal')) spec.weather = STAND_IN_WEATHER;
       validate(spec);
       return problems;
-    } catch (err) {
+    } catch (caught) {
+      const err = inGlossaryWords(caught);
       if (!(err instanceof SunpaneError)) throw err;
       const field = fieldForArgument(err.argument);
       if (!field || problems.byField[field.id] !== undefined) {

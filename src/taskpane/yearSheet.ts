@@ -10,8 +10,9 @@
  * workbook is left as it was before the run (apart from an earlier result sheet the user had
  * already agreed to replace).
  */
+import type { TimeConvention } from '../core/time';
 import { escapeFormulaText } from '../io/textCells';
-import { HOURLY_COLUMNS, type HourlyKey } from '../outputs/hourlyColumns';
+import { HOURLY_COLUMNS, type HourlyKey, hourlyHeadersFor } from '../outputs/hourlyColumns';
 import { type ColumnRef, monthHourMeanFormula, monthlyGainFormula, tableColumnRef, yearFigureFormulas } from '../outputs/hourlyFormulas';
 import { PALETTE, hexColour } from '../outputs/palette';
 import { DEFAULT_BLOCK_ROWS, cellAddress, columnLetters, rangeAddress, roundForSheet, rowBlocks } from './blocks';
@@ -67,6 +68,13 @@ export interface WriteControl {
 export interface YearHeading {
   title: string;
   lines: readonly string[];
+  /** How the rows are stamped (the window's time convention); default hour ending. */
+  timeConvention?: TimeConvention;
+}
+
+/** The hourly table's headers: the first column says how the rows are stamped. */
+export function hourTableHeaders(convention: TimeConvention = 'hourEnding'): string[] {
+  return [...hourlyHeadersFor(convention)];
 }
 
 /** The hourly rows from `start` to `end` (exclusive), rounded for the sheet. */
@@ -111,7 +119,7 @@ export function keyFigureRows(ref: ColumnRef, fig: Pick<YearFigures, 'glassArea'
   const f = yearFigureFormulas(ref);
   return [
     ['Peak gain (W)', `=${f.peakW}`],
-    ['Peak at (hour ending)', `=${f.peakStamp}`],
+    [ref.convention === 'instant' ? 'Peak at (instant)' : 'Peak at (hour ending)', `=${f.peakStamp}`],
     ['Hours with beam on the glass (h)', `=${f.sunlitHours}`],
     ['Mean sunlit fraction, sun on the wall (0-1)', `=${f.meanSunlitFraction}`],
     ['Hours with weather missing (h)', `=${f.missingHours}`],
@@ -121,9 +129,10 @@ export function keyFigureRows(ref: ColumnRef, fig: Pick<YearFigures, 'glassArea'
   ];
 }
 
-/** The month × hour block: header (month, hours ending 1…24) and 12 rows of mean-gain formulas. */
+/** The month × hour block: header (month, hours ending 1…24, or instants 0…23) and 12 rows of mean-gain formulas. */
 export function monthHourFormulas(ref: ColumnRef, year: number): string[][] {
-  const rows: string[][] = [['Month', ...Array.from({ length: 24 }, (_, h) => String(h + 1))]];
+  const first = ref.convention === 'instant' ? 0 : 1;
+  const rows: string[][] = [['Month', ...Array.from({ length: 24 }, (_, h) => String(h + first))]];
   MONTHS.forEach((m, k) => rows.push([m, ...Array.from({ length: 24 }, (_, h) => `=${monthHourMeanFormula(ref, year, k + 1, h + 1)}`)]));
   return rows;
 }
@@ -170,7 +179,7 @@ export async function writeYearSheet(
     head.values = [[escapeFormulaText(heading.title)], ...heading.lines.map((l) => [escapeFormulaText(l)])];
     sheet.getRange(cellAddress(0, 0)).format.font.bold = true;
     const header = sheet.getRange(rangeAddress(TABLE_HEADER_ROW, 0, 1, width));
-    header.values = [HOURLY_COLUMNS.map((c) => c.header)];
+    header.values = [hourTableHeaders(heading.timeConvention)];
     await ctx.sync();
     return uniqueTableName(target.tableBase ?? target.name, await tableNamesIn(ctx));
   });
@@ -209,7 +218,7 @@ export async function writeYearSheet(
     const table = sheet.tables.add(rangeAddress(TABLE_HEADER_ROW, 0, total + 1, width), true);
     table.name = tableName;
     table.style = 'TableStyleLight9';
-    const ref = tableColumnRef(tableName);
+    const ref = tableColumnRef(tableName, heading.timeConvention);
     const year = yearOf(cols);
 
     const keyRow = TABLE_HEADER_ROW + 15;
@@ -237,7 +246,7 @@ export async function writeYearSheet(
     chart.setPosition(cellAddress(chartTop, SUMMARY_COLUMN), cellAddress(chartTop + 15, SUMMARY_COLUMN + 2));
 
     const block = monthHourFormulas(ref, year);
-    sheet.getRange(cellAddress(TABLE_HEADER_ROW - 1, HEAT_COLUMN)).values = [['Mean solar gain (W) by month and hour ending']];
+    sheet.getRange(cellAddress(TABLE_HEADER_ROW - 1, HEAT_COLUMN)).values = [[ref.convention === 'instant' ? 'Mean solar gain (W) by month and hour (instant)' : 'Mean solar gain (W) by month and hour ending']];
     const heatHeader = sheet.getRange(rangeAddress(TABLE_HEADER_ROW, HEAT_COLUMN, 1, 25));
     heatHeader.format.font.bold = true;
     const heat = sheet.getRange(rangeAddress(TABLE_HEADER_ROW, HEAT_COLUMN, block.length, 25));

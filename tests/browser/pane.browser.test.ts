@@ -15,6 +15,7 @@ import * as path from 'node:path';
 import type { Browser, Page } from 'playwright-core';
 import { annualSeries } from '../../src/core/gain/annual';
 import { summarizeAnnual } from '../../src/core/gain/annualSummary';
+import { inGlossaryWords } from '../../src/registry/windowRange';
 import { SunpaneError } from '../../src/core/common/errors';
 import type { WindowSpec } from '../../src/core/gain/window';
 import { validateWindowSpec } from '../../src/core/gain/windowSpec';
@@ -97,7 +98,7 @@ const DEMO: WindowSpec = {
 
 async function enterDemoWindow(page: Page): Promise<void> {
   await page.selectOption('#examplePlace', 'saltReach');
-  await setField(page, 'windowName', 'Demo west');
+  await setField(page, 'name', 'Demo west');
   await setField(page, 'surfaceAzimuth', '250');
   await setField(page, 'width', '2.4');
   await setField(page, 'height', '1.6');
@@ -245,7 +246,7 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     expect(await page.isHidden('#confirm-backdrop')).toBe(true);
 
     // Rename the window so that its proposed sheet is one of ours: the pane asks first.
-    await setField(page, 'windowName', 'Window A B');
+    await setField(page, 'name', 'Window A B');
     await page.click('#run-year');
     await waitForStatus(page, /Wrote "Window A B hourly"/);
     await page.click('#run-year');
@@ -300,7 +301,7 @@ describe('the task pane in Chromium with a fake Excel host', () => {
       h.addUserTable('Windows', 'A12:G14', 'BadList');
     });
     await page.click('#tab-schedule');
-    expect(await page.textContent('#schedule-help')).toContain('Overhang depth');
+    expect(await page.textContent('#schedule-help')).toContain('Overhang projection [m]');
     await page.click('#run-schedule');
     await waitForStatus(page, /Wrote|problem/);
     const rows = await host.read(page, 'Schedule results', 'A5:I8');
@@ -322,6 +323,7 @@ describe('the task pane in Chromium with a fake Excel host', () => {
       skyModel: 'perez1990',
       weather: { kind: 'ineichenClearSky', linkeTurbidity: [3] },
       year: YEAR,
+      timeConvention: 'hourEnding',
     };
     const s = summarizeAnnual(annualSeries(east));
     expect(Math.abs((rows[2][3] as number) - s.annualKWh)).toBeLessThanOrEqual(0.05);
@@ -337,7 +339,7 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     await waitForStatus(page, /problem/);
     const problems = await page.$$eval('#schedule-problems li', (lis) => lis.map((li) => li.textContent));
     expect(problems).toEqual([
-      'Row 1 (Bad A), column "Width": blank is not allowed: must be a number above 0 and up to 1000 m',
+      'Row 1 (Bad A), column "Width": blank is not allowed: must be a number from 0.01 to 100 m',
       'Row 2 (Bad B), column "SHGC": 1.4 is not allowed: must be a number from 0 to 1',
     ]);
     expect(await host.sheetNames(page)).toEqual(sheetsBefore);
@@ -402,7 +404,7 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     const sheets = await host.sheetNames(page);
     await page.click('#run-compare');
     await waitForStatus(page, /option/);
-    expect(await page.textContent('#options-msg')).toBe('Option 2 "Deep overhang", Overhang depth (m): -1 is not allowed: must be a number from 0 to 1000 m');
+    expect(await page.textContent('#options-msg')).toBe('Option 2 "Deep overhang", Overhang projection (m): -1 is not allowed: must be a number from 0 to 100 m');
     expect(await host.sheetNames(page)).toEqual(sheets);
     await page.close();
   });
@@ -418,7 +420,9 @@ describe('the task pane in Chromium with a fake Excel host', () => {
       try {
         validateWindowSpec(spec);
       } catch (err) {
-        if (err instanceof SunpaneError) return err.message;
+        // the pane names the field by its glossary name, as the functions do
+        const named = inGlossaryWords(err);
+        if (named instanceof SunpaneError) return named.message;
       }
       throw new Error('expected the core to refuse');
     };

@@ -129,11 +129,12 @@ describe('sunpane table', () => {
   });
 
   it.each([
-    [{ glazing: { panes: 2 } }, /^sunpane: glazing\.shgc = blank is not allowed: is required/],
-    [{ width: -1 }, /^sunpane: width = -1 is not allowed: must be a number above 0/],
-    [{ shading: { overhang: { projecton: 0.5 } } }, /^sunpane: shading\.overhang\.projecton = 0\.5 is not allowed: is not a field/],
-    [{ site: { latitude: 95, longitude: 0, utcOffset: 0 } }, /^sunpane: site\.latitude = 95 is not allowed: must be a number from -90 to 90/],
-    [{ weather: undefined }, /has no "weather"/],
+    [{ shgc: undefined }, /^sunpane: shgc = blank is not allowed: is required: must be a number from 0 to 1/],
+    [{ width: -1 }, /^sunpane: width = -1 is not allowed: must be a number from 0\.01 to 100 m/],
+    [{ overhangProjecton: 0.5 }, /^sunpane: overhangProjecton = 0\.5 is not allowed: no window field has this name \(did you mean overhangProjection\?\)/],
+    [{ shading: { overhang: { projecton: 0.5 } } }, /^sunpane: shading\.overhang\.projecton = 0\.5 is not allowed: is not a field of shading\.overhang/],
+    [{ latitude: 95 }, /^sunpane: latitude = 95 is not allowed: must be a number from -90 to 90/],
+    [{ linkeTurbidity: undefined }, /has no clear sky of its own/],
   ])('refuses a bad window file with exit code 1 naming the field (%#)', async (change, message) => {
     const dir = tempDir();
     const json = { ...JSON.parse(fs.readFileSync(WINDOW, 'utf8')), ...change };
@@ -226,7 +227,7 @@ describe('sunpane schedule', () => {
     const input = writeTemp(dir, 'windows.csv', text);
     const r = await run('schedule', '--in', input, '--out', path.join(dir, 'out.csv'));
     expect(r.code).toBe(1);
-    expect(r.err).toBe(`sunpane: ${input} line 4 ("East meeting room"), column "Width [m]": is blank but required`);
+    expect(r.err).toBe(`sunpane: ${input} line 4 ("East meeting room"), column "Width [m]" = blank is not allowed: is required: must be a number from 0.01 to 100 m`);
     expect(fs.readdirSync(dir)).toEqual(['windows.csv']);
   });
 
@@ -235,9 +236,9 @@ describe('sunpane schedule', () => {
     const base = fs.readFileSync(SCHEDULE, 'utf8');
     const r1 = await run('schedule', '--in', writeTemp(dir, 'a.csv', base.replace(',0.5,2,,,,0.15', ',1.5,2,,,,0.15')), '--out', path.join(dir, 'o.csv'));
     expect(r1.code).toBe(1);
-    expect(r1.err).toMatch(/a\.csv line 6 \("North studio"\), column "SHGC": glazing\.shgc = 1\.5 is not allowed: must be a number from 0 to 1$/);
+    expect(r1.err).toMatch(/a\.csv line 6 \("North studio"\), column "SHGC" = 1\.5 is not allowed: must be a number from 0 to 1$/);
     const r2 = await run('schedule', '--in', writeTemp(dir, 'b.csv', base.replace('South office,brackwater,2026,180,3.0', 'South office,brackwater,2026,south,3.0')), '--out', path.join(dir, 'o.csv'));
-    expect(r2.err).toMatch(/b\.csv line 3, column "Faces \[°\]": "south" is not a number$/);
+    expect(r2.err).toMatch(/b\.csv line 3 \("South office"\), column "Surface azimuth \[°\]" = "south" is not allowed: must be a number from 0 to 360 °$/);
     const r3 = await run('schedule', '--in', writeTemp(dir, 'c.csv', base.replace('Panes,', 'Pains,')), '--out', path.join(dir, 'o.csv'));
     expect(r3.err).toMatch(/c\.csv line 2: unknown column "Pains"/);
   });
@@ -278,6 +279,6 @@ describe('help by name', () => {
     const input = writeTemp(dir, 'w.csv', 'name,year,surfaceAzimuth,width,height,shgc,linkeTurbidity\nLone,2026,180,1,1,0.4,3\n');
     const r = await run('schedule', '--in', input, '--out', path.join(dir, 'o.csv'));
     expect(r.code).toBe(1);
-    expect(r.err).toBe(`sunpane: ${input} line 2 ("Lone"): no site: fill the column Site (an example site id) or Latitude, Longitude and UTC offset`);
+    expect(r.err).toBe(`sunpane: ${input} line 2 ("Lone"), column "Latitude [°]" = blank is not allowed: is required: must be a number from -90 to 90 ° (or give an example site)`);
   });
 });

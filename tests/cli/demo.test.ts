@@ -58,8 +58,10 @@ function rangeValues(ref: string, here: ExcelJS.Worksheet): number[] {
   return out;
 }
 
-/** Works a native formula out again from its cells: SUM(range), MAX(range) or 1-A/B. */
+/** Works a native formula out again from its cells: SUM(range), MAX(range), 1-A/B or A-1/48. */
 function evaluateNative(formula: string, here: ExcelJS.Worksheet): number {
+  const mid = /^([A-Z]+\d+)-1\/48$/.exec(formula);
+  if (mid) return numberOf(here.getCell(mid[1]).value) - 1 / 48;
   const fn = /^(SUM|MAX)\((.+)\)$/.exec(formula);
   if (fn) {
     const xs = rangeValues(fn[2], here);
@@ -201,9 +203,9 @@ describe('sunpane demo', () => {
     expect(count).toBeGreaterThan(40);
   });
 
-  it('names every input cell of the formula sheet after the parameter it feeds, and the formulas use the names', () => {
+  it('names every value cell of the formula sheet’s window block after its field, and the single-value formulas use the names', () => {
     const ws = wb.getWorksheet('Formulas')!;
-    const names = ['dateTime', 'latitude', 'longitude', 'utcOffset', 'surfaceAzimuth', 'width', 'height', 'shgc', 'tauB', 'tauD'];
+    const names = ['latitude', 'longitude', 'utcOffset', 'surfaceAzimuth', 'width', 'height', 'shgc', 'tauB', 'tauD'];
     for (const name of names) {
       const ranges = wb.definedNames.getRanges(name).ranges;
       expect({ name, ranges: ranges.length }).toEqual({ name, ranges: 1 });
@@ -211,13 +213,62 @@ describe('sunpane demo', () => {
       // The named cell holds a value and its row is labelled.
       expect(ws.getCell(cellOf(name)).value).not.toBeNull();
     }
-    const gain = (ws.getColumn(3).values as ExcelJS.CellValue[]).find((v) => typeof v === 'object' && v !== null && 'formula' in v && (v.formula ?? '').includes('WINDOWGAIN')) as ExcelJS.CellFormulaValue;
-    expect(gain.formula).toMatch(/^_xldudf_SUNPANE_WINDOWGAIN\(dateTime,latitude,longitude,utcOffset,surfaceAzimuth,width,height,shgc,/);
+    const incidence = (ws.getColumn(3).values as ExcelJS.CellValue[]).find((v) => typeof v === 'object' && v !== null && 'formula' in v && (v.formula ?? '').includes('INCIDENCEAT')) as ExcelJS.CellFormulaValue;
+    expect(incidence.formula).toMatch(/^_xldudf_SUNPANE_INCIDENCEAT\(\$B\$\d+,latitude,longitude,utcOffset,surfaceAzimuth\)$/);
   });
 
-  it('caches every SUNPANE formula as the registered function gives for the cells it refers to', () => {
+  /** A cell as a function argument: numbers (dates as serials), texts as written, blanks as null. */
+  function argCell(ws: ExcelJS.Worksheet, ref: string): number | string | null {
+    const v = ws.getCell(ref).value;
+    if (v === null || v === undefined || v === '') return null;
+    if (typeof v === 'string') return v;
+    return numberOf(v);
+  }
+
+  /** A range reference (`$A$9:$B$24`) as rows of argument cells. */
+  function argRange(ws: ExcelJS.Worksheet, ref: string): (number | string | null)[][] {
+    const [a, b] = ref.replace(/\$/g, '').split(':');
+    const from = ws.getCell(a);
+    const to = ws.getCell(b);
+    const rows: (number | string | null)[][] = [];
+    for (let r = Number(from.row); r <= Number(to.row); r++) {
+      const line: (number | string | null)[] = [];
+      for (let c = Number(from.col); c <= Number(to.col); c++) line.push(argCell(ws, ws.getCell(r, c).address));
+      rows.push(line);
+    }
+    return rows;
+  }
+
+  /** One argument of a SUNPANE formula: blank, a cell, a range, or VSTACK of ranges. */
+  function argOf(ws: ExcelJS.Worksheet, text: string): unknown {
+    if (text === '') return null;
+    const stack = /^_xlfn\.VSTACK\((.+)\)$/.exec(text);
+    if (stack) return stack[1].split(',').flatMap((r) => argRange(ws, r));
+    return text.includes(':') ? argRange(ws, text) : argCell(ws, cellOf(text));
+  }
+
+  /** Splits an argument list at top-level commas. */
+  function splitArgs(list: string): string[] {
+    const out: string[] = [];
+    let depth = 0;
+    let cur = '';
+    for (const ch of list) {
+      if (ch === ',' && depth === 0) {
+        out.push(cur);
+        cur = '';
+        continue;
+      }
+      if (ch === '(') depth++;
+      if (ch === ')') depth--;
+      cur += ch;
+    }
+    out.push(cur);
+    return out;
+  }
+
+  it.each(['Formulas', 'Schedule'])('caches every SUNPANE formula of the %s sheet as the registered function gives for the cells it refers to', (sheet) => {
     const registeredNames = new Set(functionsMetadata(FUNCTIONS).functions.map((f) => f.name));
-    const ws = wb.getWorksheet('Formulas')!;
+    const ws = wb.getWorksheet(sheet)!;
     let count = 0;
     ws.eachRow((row) =>
       row.eachCell((cell) => {
@@ -225,20 +276,35 @@ describe('sunpane demo', () => {
         if (!v || typeof v !== 'object' || !('formula' in v)) return;
         // Stored as Excel saves an add-in's custom function (docs/platform.md); never as plain SUNPANE.NAME text.
         expect(v.formula).not.toMatch(/SUNPANE\./);
+        if (!v.formula.startsWith('_xldudf_SUNPANE_')) return; // a native formula (checked above)
         const m = /^_xldudf_SUNPANE_([A-Z]+)\((.*)\)$/.exec(v.formula)!;
         expect(m).not.toBeNull();
         // The stored name is the one the add-in's functions.json registers (namespace SUNPANE + name).
         expect(registeredNames.has(m[1])).toBe(true);
         const fn = findFunction(m[1]);
         expect(fn).toBeDefined();
-        const args = m[2].split(',').map((ref) => (ref === '' ? null : numberOf(ws.getCell(cellOf(ref)).value)));
-        const table = applyFunction(fn!, args);
+        const table = applyFunction(fn!, splitArgs(m[2]).map((t) => argOf(ws, t)) as never[]);
         expect(typeof table[0][0]).toBe('number');
         // 1e-8: a cached time of day comes back through a millisecond Date (1 ms ≈ 1.2e-8 day).
         expect(Math.abs(numberOf(v.result as ExcelJS.CellValue) - (table[0][0] as number))).toBeLessThanOrEqual(1e-8);
         count++;
       }),
     );
-    expect(count).toBeGreaterThanOrEqual(6);
+    expect(count).toBeGreaterThanOrEqual(sheet === 'Schedule' ? 10 : 6);
+  });
+
+  it('gives every schedule row one short gain formula pointing at its own row and the header row', () => {
+    const ws = wb.getWorksheet('Schedule')!;
+    const formulas: { row: number; text: string }[] = [];
+    ws.eachRow((row) => row.eachCell((cell) => {
+      const v = cell.value as ExcelJS.CellFormulaValue;
+      if (v && typeof v === 'object' && 'formula' in v && v.formula.startsWith('_xldudf_SUNPANE_')) formulas.push({ row: Number(cell.row), text: v.formula });
+    }));
+    expect(formulas).toHaveLength(10);
+    for (const { row, text } of formulas) {
+      // as typed in Excel: =SUNPANE.SOLARGAIN(VSTACK($A$7:$R$7,$A8:$R8),$E$5) — the header row 7, the design hour in E5
+      expect(text).toMatch(new RegExp(`^_xldudf_SUNPANE_SOLARGAIN\\(_xlfn\\.VSTACK\\(\\$A\\$7:\\$[A-Z]+\\$7,\\$A${row}:\\$[A-Z]+${row}\\),\\$E\\$5\\)$`));
+      expect(text.replace('_xldudf_SUNPANE_', 'SUNPANE.').replace('_xlfn.', '').length).toBeLessThan(55);
+    }
   });
 });

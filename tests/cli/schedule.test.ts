@@ -16,20 +16,22 @@ describe('sunpane schedule reads the shared columns', () => {
   });
 
   test('every unknown header is named, and a column named twice is refused', () => {
-    expect(() => scheduleFromCsv('Window,Facing,Wide\nA,1,2\n', 'w.csv')).toThrow('w.csv line 1: unknown columns "Facing", "Wide" (see `sunpane schedule --help` for the columns)');
+    expect(() => scheduleFromCsv('Window,Bearing,Wide\nA,1,2\n', 'w.csv')).toThrow('w.csv line 1: unknown columns "Bearing", "Wide" (see `sunpane schedule --help` for the columns)');
     expect(() => scheduleFromCsv('name,Faces,surfaceAzimuth\nA,1,2\n', 'w.csv')).toThrow('w.csv line 1: columns "Faces" and "surfaceAzimuth" are the same column; keep one');
-    expect(() => scheduleFromCsv('Faces\n1\n', 'w.csv')).toThrow('w.csv line 1: the header row has no "Window" column');
+    expect(() => scheduleFromCsv('Faces\n1\n', 'w.csv')).toThrow('w.csv line 1: the header row has no "Name" column');
   });
 
   test('a fin gap applies to the fins that have a depth; with no fin at all it asks for the fin depth', () => {
     const [one] = specs(`${HEAD},Right fin depth,Fin gap\nA,2026,180,1,1,0.4,50,5,1,3,0.3,0.1\n`);
     expect(one.shading).toEqual({ rightFin: { projection: 0.3, gap: 0.1, extensionAbove: 0, extensionBelow: 0 } });
-    expect(() => specs(`${HEAD},Fin depth,Fin gap\nA,2026,180,1,1,0.4,50,5,1,3,,0.1\n`)).toThrow('w.csv line 2 ("A"), column "Fin depth": is blank but required');
-    expect(() => specs(`${HEAD},Fin gap\nA,2026,180,1,1,0.4,50,5,1,3,0.1\n`)).toThrow('w.csv line 2 ("A"), column "Fin depth [m]": is required but the schedule has no such column');
+    expect(() => specs(`${HEAD},Fin depth,Fin gap\nA,2026,180,1,1,0.4,50,5,1,3,,0.1\n`)).toThrow('w.csv line 2 ("A"), column "Fin depth" = blank is not allowed: needed because column "Fin gap" is given for the fins (0 for no fins)');
+    expect(() => specs(`${HEAD},Fin gap\nA,2026,180,1,1,0.4,50,5,1,3,0.1\n`)).toThrow('w.csv line 2 ("A"), column "Fin projection [m]" = blank is not allowed: needed because column "Fin gap" is given for the fins (0 for no fins)');
   });
 
   test('a site beside its own coordinates is refused; a bad list entry names the column', () => {
-    expect(() => specs('Window,Year,Faces,Width,Height,SHGC,Site,Latitude\nA,2026,180,1,1,0.4,brackwater,40\n')).toThrow('w.csv line 2 ("A"): give either an example site (column "Site") or its own latitude, longitude, UTC offset and elevation, not both');
-    expect(() => specs(`${HEAD},Skyline\nA,2026,180,1,1,0.4,50,5,1,3,0 x 5\n`)).toThrow('w.csv line 2, column "Skyline": "x" is not a number');
+    expect(() => specs('Window,Year,Faces,Width,Height,SHGC,Site,Latitude\nA,2026,180,1,1,0.4,brackwater,40\n')).toThrow(
+      'w.csv line 2 ("A"), column "Latitude" = 40 is not allowed: cannot be given with column "Site": give either an example site or your own latitude, longitude, UTC offset and elevation',
+    );
+    expect(() => specs(`${HEAD},Skyline\nA,2026,180,1,1,0.4,50,5,1,3,0 x 5\n`)).toThrow('w.csv line 2 ("A"), column "Skyline" (value 2) = "x" is not allowed: must be a number from 0 to 90 °');
   });
 });

@@ -74,37 +74,76 @@ describe('window JSON', () => {
 
   it.each([
     [{ ...MINIMAL, name: undefined }, 'name'],
-    [{ ...MINIMAL, site: { latitude: 52, longitude: 4.9 } }, 'site.utcOffset'],
+    [{ ...MINIMAL, site: { latitude: 52, longitude: 4.9 } }, 'utcOffset'],
     [{ ...MINIMAL, site: 'atlantis' }, 'site'],
-    [{ ...MINIMAL, width: '1.2' }, 'width'],
-    [{ ...MINIMAL, glazing: {} }, 'glazing.shgc'],
-    [{ ...MINIMAL, glazing: undefined }, 'glazing'],
+    [{ ...MINIMAL, width: 'wide' }, 'width'],
+    [{ ...MINIMAL, glazing: {} }, 'shgc'],
+    [{ ...MINIMAL, glazing: undefined }, 'shgc'],
+    [{ ...MINIMAL, glazing: 0.4 }, 'glazing'],
     [{ ...MINIMAL, shading: { overhang: { gap: 0.2 } } }, 'shading.overhang.projection'],
     [{ ...MINIMAL, shading: { overhang: { projection: 0.5, projecton: 1 } } }, 'shading.overhang.projecton'],
-    [{ ...MINIMAL, shading: { skyline: [10, 'x'] } }, 'shading.skyline[1]'],
+    [{ ...MINIMAL, shading: { skyline: [10, 'x'] } }, 'shading.skyline (value 2)'],
     [{ ...MINIMAL, weather: { kind: 'measured' } }, 'weather.kind'],
-    [{ ...MINIMAL, weather: { kind: 'ashraeClearSky', tauB: 0.3 } }, 'weather.tauD'],
+    [{ ...MINIMAL, weather: { kind: 'ashraeClearSky', tauB: 0.3 } }, 'tauD'],
     [{ ...MINIMAL, skyModel: 'fancy' }, 'skyModel'],
     [{ ...MINIMAL, year: 2026.5 }, 'year'],
     [{ ...MINIMAL, colour: 'blue' }, 'colour'],
-  ])('refuses a missing, mistyped or unknown field naming its path (%#: %s)', (json, field) => {
+    [{ ...MINIMAL, overhangGap: 0.2 }, 'overhangProjection'],
+    [{ ...MINIMAL, shgc: 0.4 }, 'shgc'],
+  ])('refuses a missing, mistyped or unknown field naming it as written, or by its glossary name when missing (%#: %s)', (json, field) => {
     expect(refusal(json).argument).toBe(field);
   });
 
   it('reads diffuseShading: view factors by default, "beamOnly" for the earlier treatment, anything else refused', () => {
-    expect(windowFromJson(MINIMAL).spec.diffuseShading).toBeUndefined();
+    expect(windowFromJson(MINIMAL).spec.diffuseShading ?? 'viewFactors').toBe('viewFactors');
     expect(windowFromJson({ ...MINIMAL, diffuseShading: 'beamonly' }).spec.diffuseShading).toBe('beamOnly');
-    expect(windowFromJson({ ...MINIMAL, diffuseShading: 'viewFactors' }).spec.diffuseShading).toBeUndefined();
+    expect(windowFromJson({ ...MINIMAL, diffuseShading: 'viewFactors' }).spec.diffuseShading ?? 'viewFactors').toBe('viewFactors');
     expect(refusal({ ...MINIMAL, diffuseShading: 'none' }).argument).toBe('diffuseShading');
+  });
+
+  it('reads the flat form with the glossary names, the same window as the nested form', () => {
+    const flat = windowFromJson({
+      name: 'Test window',
+      year: 2026,
+      latitude: 52.2,
+      longitude: 4.9,
+      utcOffset: 1,
+      surfaceAzimuth: 180,
+      width: 1.2,
+      height: 1.5,
+      shgc: 0.4,
+      linkeTurbidity: 3,
+      overhangProjection: 0.6,
+      overhangExtension: 0.2,
+      finProjection: 0.3,
+      rightFinGap: 0.1,
+      skyline: '0 10 20 5',
+      skyModel: 'Hay-Davies',
+      timeConvention: 'instant',
+    });
+    const nested = windowFromJson({
+      ...MINIMAL,
+      shading: { overhang: { projection: 0.6, extensionLeft: 0.2, extensionRight: 0.2 }, leftFin: { projection: 0.3 }, rightFin: { projection: 0.3, gap: 0.1 }, skyline: [0, 10, 20, 5] },
+      skyModel: 'hayDavies',
+      timeConvention: 'instant',
+    });
+    expect(flat).toEqual(nested);
+    expect(flat.spec.skyModel).toBe('hayDavies');
+    expect(flat.spec.shading.rightFin).toEqual({ projection: 0.3, gap: 0.1, extensionAbove: 0, extensionBelow: 0 });
+  });
+
+  it('suggests the nearest field name for a misspelt key', () => {
+    expect(refusal({ ...MINIMAL, overhangProjecton: 0.5 }).message).toMatch(/^overhangProjecton = 0\.5 is not allowed: no window field has this name \(did you mean overhangProjection\?\)/);
   });
 
   it('ignores note fields starting with an underscore or named comment', () => {
     expect(() => windowFromJson({ ...MINIMAL, _note: 'x', comment: 'y' })).not.toThrow();
   });
 
-  it('leaves range checks to the core validator, which names the same paths', () => {
-    const { spec } = windowFromJson({ ...MINIMAL, glazing: { shgc: 1.4 } });
-    expect(() => validateWindowSpec(spec)).toThrow(expect.objectContaining({ argument: 'glazing.shgc' }));
+  it('checks each field against the glossary range, naming it as written', () => {
+    expect(refusal({ ...MINIMAL, glazing: { shgc: 1.4 } }).message).toBe('glazing.shgc = 1.4 is not allowed: must be a number from 0 to 1');
+    expect(refusal({ ...MINIMAL, width: 1e-200 }).message).toBe('width = 1e-200 is not allowed: must be a number from 0.01 to 100 m');
+    expect(() => validateWindowSpec(windowFromJson(MINIMAL).spec)).not.toThrow();
   });
 
   it('names the file and the parser position when the file is not JSON', () => {
@@ -120,6 +159,6 @@ describe('window JSON', () => {
     const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'sunpane-json-'));
     const file = path.join(dir, 'w.json');
     fs.writeFileSync(file, JSON.stringify({ ...MINIMAL, height: undefined }));
-    expect(() => readWindowFile(file)).toThrow(/^height = blank is not allowed: is required: must be a number in m \(in .*w\.json\)$/);
+    expect(() => readWindowFile(file)).toThrow(/^height = blank is not allowed: is required: must be a number from 0\.01 to 100 m \(in .*w\.json\)$/);
   });
 });

@@ -114,9 +114,18 @@ describe('broadcasting through the registry helper', () => {
     expect(ratio([[6], [6]], [[3], [null]])).toEqual([[2], [3]]);
   });
 
-  test('ranges of different shapes are refused as a whole with #VALUE! naming the argument', () => {
-    const out = callHandler(ratio, [[1], [2], [3]], [[1], [2]]);
-    expectError(out, ERROR_CODE.invalidValue, 'b = "a 2 × 1 range" is not allowed: must be a single value or a range of the same shape as a (3 × 1)');
+  test('ranges of different sizes spill to the larger, with #N/A where a range has no partner, as built-ins do', () => {
+    const out = callHandler(ratio, [[1], [2], [3]], [[1], [2]]) as unknown[][];
+    expect(out).toHaveLength(3);
+    expect(typeof out[0][0]).toBe('number');
+    expect(typeof out[1][0]).toBe('number');
+    expectError(out[2][0], ERROR_CODE.notAvailable, 'b has no value here: it is a 2 × 1 range');
+  });
+
+  test('a column against a row spills a 2-D table', () => {
+    const out = callHandler(ratio, [[1], [2], [3]], [[1, 2]]) as unknown[][];
+    expect(out).toHaveLength(3);
+    for (const row of out) expect(row).toHaveLength(2);
   });
 
   test('a range given to a spilling function is refused as a whole with #VALUE!', () => {
@@ -182,8 +191,8 @@ describe('errors become cells Excel can show', () => {
   });
 
   test('a SunpaneError is never thrown raw out of a handler', () => {
-    expect(() => ratio([[1], [2]], [[1, 2]])).toThrow(StubError);
-    expect(() => ratio([[1], [2]], [[1, 2]])).not.toThrow(SunpaneError);
+    expect(() => stairs([[1], [2]])).toThrow(StubError);
+    expect(() => stairs([[1], [2]])).not.toThrow(SunpaneError);
   });
 });
 

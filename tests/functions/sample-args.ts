@@ -37,6 +37,24 @@ export function sampleValue(p: ParamDescriptor, t = 0.5): FormulaArg {
     }
     case 'flag':
       return t < 0.5;
+    case 'text':
+      return `text ${t}`;
+    case 'window':
+      // A window as a block of fields beside their values: enough for every window function.
+      return [
+        ['latitude', 40],
+        ['longitude', -105],
+        ['utcOffset', -7],
+        ['surfaceAzimuth', Math.round(90 + t * 180)],
+        ['width', 1.5],
+        ['height', 1.2],
+        ['shgc', 0.4],
+        ['tauB', 0.4],
+        ['tauD', 2.3],
+        ['year', 2024],
+      ];
+    case 'choiceList':
+      return [[(p.choices ?? [])[0]]];
     case 'numberList': {
       const n = p.length?.exact ?? p.length?.min ?? 3;
       const [lo, hi] = bounds(p);
@@ -96,7 +114,8 @@ export function transpose(m: readonly Cell[][]): Cell[][] {
 
 /** Index of the first broadcast parameter that has a value in `args` (for the range call). */
 export function firstBroadcastIndex(fn: FunctionDescriptor, args: readonly FormulaArg[]): number {
-  return fn.params.findIndex((p, k) => p.kind !== 'numberList' && p.kind !== 'table' && args[k] !== null && args[k] !== undefined);
+  // A window's range is its fields, not a range of values (several windows are checked in tests/fixtures/formulas.ts).
+  return fn.params.findIndex((p, k) => p.kind !== 'numberList' && p.kind !== 'choiceList' && p.kind !== 'table' && p.kind !== 'window' && args[k] !== null && args[k] !== undefined);
 }
 
 /** A second valid value for a broadcast parameter, different from `v` where the range allows. */
@@ -132,6 +151,12 @@ export function badArgs(fn: FunctionDescriptor, valid: readonly FormulaArg[]): {
     list[0][0] = p.max !== undefined ? p.max + Math.max(1, Math.abs(p.max)) : (p.min as number) - Math.max(1, Math.abs(p.min as number));
     args[k] = list;
     return { args, param: p.name };
+  }
+  k = fn.params.findIndex((p, i) => p.kind === 'window' && Array.isArray(args[i]));
+  if (k >= 0) {
+    // A window field out of its range: only that window's result is an error.
+    args[k] = (args[k] as Cell[][]).map((r) => (r[0] === 'shgc' ? ['shgc', 1.5] : r.slice()));
+    return { args, param: fn.params[k].name };
   }
   throw new Error(`sample-args: ${fn.name} has no parameter to make invalid generically`);
 }

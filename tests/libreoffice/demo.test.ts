@@ -40,6 +40,9 @@ function locate(ref: string): { sheet: string; row: number; col: number } {
 /** A number as LibreOffice's CSV shows it (percent-formatted cells carry a % sign). */
 function csvNumber(text: string): number {
   const t = text.trim();
+  // A cell formatted as a date and time comes out as text (2026-06-21 14:30:00): its serial.
+  const dt = /^(\d{4})-(\d{2})-(\d{2}) (\d{2}):(\d{2})(?::(\d{2}))?$/.exec(t);
+  if (dt) return Date.UTC(+dt[1], +dt[2] - 1, +dt[3], +dt[4], +dt[5], +(dt[6] ?? 0)) / 86_400_000 + 25_569;
   if (t.endsWith('%')) return Number(t.slice(0, -1)) / 100;
   return t === '' ? NaN : Number(t);
 }
@@ -52,14 +55,14 @@ function valueAt(sheets: Map<string, string>, ref: string): string {
 }
 
 function allChecks(): { cell: string; expected: number }[] {
-  return [checks.summary.annualKWh, checks.summary.peakW, checks.summary.glassArea, ...checks.monthly, ...checks.options, ...checks.overview, ...checks.hourly];
+  return [checks.summary.annualKWh, checks.summary.peakW, checks.summary.glassArea, ...checks.monthly, ...checks.options, ...checks.overview, ...checks.hourly, ...checks.formulas];
 }
 
 function expectSameNumbers(sheets: Map<string, string>): void {
   for (const { cell, expected } of allChecks()) {
     const got = csvNumber(valueAt(sheets, cell));
     const tolerance = 1e-9 * Math.max(1, Math.abs(expected));
-    if (!(Math.abs(got - expected) <= tolerance)) throw new Error(`${cell}: LibreOffice shows ${got}, our core ${expected}`);
+    if (!(Math.abs(got - expected) <= tolerance)) throw new Error(`${cell}: LibreOffice shows ${got} ("${valueAt(sheets, cell)}"), our core ${expected}`);
   }
 }
 

@@ -45,8 +45,44 @@ describe('broadcasting over ranges', () => {
     expect(applyFunction(ADD, [[[1], [2], [3]], 1])).toEqual([[2], [3], [4]]);
   });
 
-  test('mismatched shapes are refused naming the argument and both shapes', () => {
-    expect(() => applyFunction(ADD, [[[1, 2]], [[1], [2]]])).toThrow(/b = "a 2 × 1 range" is not allowed: must be a single value or a range of the same shape as a \(1 × 2\)/);
+  test('a column against a row gives a 2-D table, as =A1:A3+B1:C1 does in Excel', () => {
+    // a down the rows, b across the columns: cell (i, j) = a_i + b_j
+    expect(applyFunction(ADD, [[[1], [2], [3]], [[0.5, -1]]])).toEqual([
+      [1.5, 0],
+      [2.5, 1],
+      [3.5, 2],
+    ]);
+  });
+
+  test('cells where a range has no partner are #N/A, naming the short range, and the rest compute', () => {
+    // Excel: ={1;2;3}+{10;20} gives {11;22;#N/A}; a 2 × 2 against a 3 × 1 fills column 2 of row 3 with #N/A
+    const out = applyFunction(ADD, [[[1], [2], [3]], [[1], [2]]]);
+    expect(out[0][0]).toBe(2);
+    expect(out[1][0]).toBe(4);
+    expect(out[2][0]).toBeInstanceOf(NotAvailable);
+    expect((out[2][0] as NotAvailable).message).toBe('b has no value here: it is a 2 × 1 range and the other ranges are larger');
+    const wide = applyFunction(ADD, [[[1, 2], [3, 4]], [[1], [1], [1]]]);
+    expect(wide.map((r) => r.map((c) => (c instanceof NotAvailable ? 'N/A' : c)))).toEqual([
+      [2, 3],
+      [4, 5],
+      ['N/A', 'N/A'],
+    ]);
+  });
+
+  test('each cell of a range is read once, however often the broadcast uses it', () => {
+    let reads = 0;
+    const row = (v: number) =>
+      new Proxy([v], {
+        get(target, key, receiver) {
+          if (typeof key === 'string' && /^\d+$/.test(key)) reads++;
+          return Reflect.get(target, key, receiver);
+        },
+      });
+    const out = applyFunction(ADD, [[row(1), row(2), row(3)], [[1, 2, 3, 4]]]);
+    expect(out).toHaveLength(3);
+    expect(out[0]).toHaveLength(4);
+    expect(out[2][3]).toBe(7);
+    expect(reads).toBe(3); // each cell of a once, not once per result cell (12)
   });
 
   test('a bad element makes only its own cell an error, naming argument, value and range', () => {

@@ -8,8 +8,56 @@ import fc from 'fast-check';
 import { SunpaneError } from '../../src/core/common/errors';
 import { MAX_SERIAL_EXCLUSIVE, MIN_SERIAL } from '../../src/core/time/calendar';
 import { applyFunction, readRange, readScalar } from '../../src/registry/evaluate';
+import { readWindowRange } from '../../src/registry/windowRange';
 import { FUNCTIONS, isOptional } from '../../src/registry';
+import { GLOSSARY, type GlossaryEntry, WINDOW_FIELDS } from '../../src/registry/glossary';
 import { type Args, type FunctionDescriptor, NotAvailable, type OutTable, type ParamDescriptor, type RawArg } from '../../src/registry/types';
+
+/** Every message a call gave (errors and #N/A reasons), read at the end for wording no user should see. */
+const MESSAGES: string[] = [];
+
+/** A window's fields as name → value cells (only valid values; combinations may still be refused). */
+function windowArb(): fc.Arbitrary<RawArg> {
+  const G = GLOSSARY;
+  const value = (f: GlossaryEntry): fc.Arbitrary<number | string> => {
+    const cell = f.window!.cell;
+    if (cell === 'choice') return fc.constantFrom(...(f.choices ?? []), ...Object.keys(f.choiceAliases ?? {}));
+    if (cell === 'monthly') return fc.oneof(numberArb({ ...f, kind: 'number' }), fc.array(numberArb({ ...f, kind: 'number' }), { minLength: 12, maxLength: 12 }).map((xs) => xs.join(' ')));
+    if (cell === 'list') return fc.array(numberArb({ ...f, kind: 'number', min: f.min, max: f.max }), { minLength: 1, maxLength: 12 }).map((xs) => xs.join(' '));
+    return numberArb(f);
+  };
+  const required = [G.latitude, G.longitude, G.utcOffset, G.surfaceAzimuth, G.width, G.height, G.shgc];
+  const optional = WINDOW_FIELDS.filter((f) => !required.includes(f) && !['name', 'site', 'shgcAngles', 'shgcValues', 'linkeTurbidity', 'tauB', 'tauD', 'year'].includes(f.name));
+  const sky = fc.oneof(
+    fc.tuple(value(G.linkeTurbidity)).map(([l]) => [['linkeTurbidity', l]] as [string, number | string][]),
+    fc.tuple(numberArb(G.tauB), numberArb(G.tauD)).map(([b, d]) => [['tauB', b], ['tauD', d]] as [string, number | string][]),
+    fc.constant([] as [string, number | string][]),
+  );
+  return fc
+    .tuple(
+      fc.tuple(...required.map(value)),
+      fc.subarray(optional, { maxLength: 8 }).chain((fields) => fc.tuple(...fields.map((f) => value(f).map((v) => [f.name, v] as [string, number | string])))),
+      sky,
+      fc.option(fc.integer({ min: 1990, max: 2040 }), { nil: undefined }),
+      fc.boolean(),
+    )
+    .map(([req, opt, skyPairs, year, down]) => {
+      const pairs: [string, number | string][] = [...required.map((f, k) => [f.name, req[k]] as [string, number | string]), ...opt, ...skyPairs, ...(year !== undefined ? [['year', year] as [string, number]] : [])];
+      // a name column beside a value column, or a header row over a value row
+      return down ? pairs.map(([n, v]) => [n, v]) : [pairs.map(([n]) => n), pairs.map(([, v]) => v)];
+    });
+}
+
+/** A window with one field out of its range, or a name that is no field. */
+function invalidWindowArb(): fc.Arbitrary<RawArg> {
+  const numeric = WINDOW_FIELDS.filter((f) => f.window!.cell === 'number' && (f.min !== undefined || f.max !== undefined));
+  return fc.tuple(fc.constantFrom(...numeric), fc.boolean(), fc.constantFrom('widht', 'overhang', 'colour')).map(([f, badValue, name]) => {
+    const base: [string, unknown][] = [['latitude', 40], ['longitude', -105], ['utcOffset', -7], ['surfaceAzimuth', 180], ['width', 1.5], ['height', 1.2], ['shgc', 0.4], ['tauB', 0.4], ['tauD', 2.3]];
+    const bad = f.max !== undefined ? f.max + 1 + Math.abs(f.max) : (f.min as number) - 1 - Math.abs(f.min as number);
+    const rows = badValue ? [...base.filter(([n]) => n !== f.name), [f.name, bad]] : [...base, [name, 1]];
+    return rows as RawArg;
+  });
+}
 
 const RUNS = Number(process.env.SUNPANE_FUZZ_RUNS ?? 40);
 
@@ -40,6 +88,15 @@ function validArb(p: ParamDescriptor): fc.Arbitrary<RawArg> {
       break;
     case 'flag':
       arb = fc.boolean();
+      break;
+    case 'text':
+      arb = fc.string({ minLength: 1, maxLength: 12 });
+      break;
+    case 'window':
+      arb = windowArb();
+      break;
+    case 'choiceList':
+      arb = fc.subarray([...(p.choices ?? [])], { minLength: 1, maxLength: 4 }).map((xs) => [xs]);
       break;
     case 'numberList': {
       const minLen = p.length?.exact ?? p.length?.min ?? 1;
@@ -75,6 +132,11 @@ function invalidArb(p: ParamDescriptor): fc.Arbitrary<RawArg> {
     case 'flag':
       bad.push('maybe', 2);
       break;
+    case 'choiceList':
+      bad.push([['no-such-choice']], [[3]]);
+      break;
+    case 'window':
+      return invalidWindowArb();
     case 'numberList':
       // In a series with gaps, text and blanks are missing values, not errors.
       if (!p.gapsAreMissing) bad.push([['text']], [[Number.NaN]]);
@@ -91,7 +153,11 @@ function invalidArb(p: ParamDescriptor): fc.Arbitrary<RawArg> {
 function readArgs(fn: FunctionDescriptor, raw: RawArg[]): Args {
   const args: Args = {};
   fn.params.forEach((p, k) => {
-    args[p.name] = p.kind === 'numberList' || p.kind === 'table' ? readRange(p, raw[k]) : readScalar(p, raw[k] as never);
+    if (p.kind === 'window') {
+      const w = readWindowRange(raw[k], p.name).windows[0];
+      if (w instanceof SunpaneError) throw w;
+      args[p.name] = w;
+    } else args[p.name] = p.kind === 'numberList' || p.kind === 'choiceList' || p.kind === 'table' ? readRange(p, raw[k]) : readScalar(p, raw[k] as never);
   });
   return args;
 }
@@ -100,6 +166,7 @@ function checkValid(fn: FunctionDescriptor, out: OutTable): void {
   for (const row of out) {
     for (const cell of row) {
       if (cell instanceof SunpaneError) throw new Error(`${fn.name}: valid arguments gave an error: ${cell.message}`);
+      if (cell instanceof NotAvailable) MESSAGES.push(cell.message);
       if (cell instanceof NotAvailable || typeof cell === 'string') continue;
       expect(Number.isFinite(cell)).toBe(true);
       if (fn.result.shape === 'value') {
@@ -114,9 +181,13 @@ function errorOf(fn: FunctionDescriptor, raw: RawArg[]): SunpaneError | undefine
   try {
     const out = applyFunction(fn, raw);
     const cell = out.flat().find((c) => c instanceof SunpaneError);
+    if (cell) MESSAGES.push((cell as SunpaneError).message);
     return cell as SunpaneError | undefined;
   } catch (err) {
-    if (err instanceof SunpaneError) return err;
+    if (err instanceof SunpaneError) {
+      MESSAGES.push(err.message);
+      return err;
+    }
     throw err;
   }
 }
@@ -255,4 +326,16 @@ describe('diffuse shading at the edges', () => {
       { numRuns: Math.max(40, RUNS), seed: 20261213 },
     );
   });
+});
+
+/**
+ * Every message the runs above provoked, in the user's words: no path inside the program
+ * (`site.latitude`, `glazing.angleTable.values`, `shading.overhang.projection`, `weather.tauB`) and
+ * never "internal error". Runs after the property tests (jest runs a file's tests in order).
+ */
+test('every message the fuzzing provoked names arguments as the signatures do, with no internal path', () => {
+  expect(MESSAGES.length).toBeGreaterThan(FUNCTIONS.length);
+  const internal = /\b(site|glazing|shading|weather|angleTable|overhang|leftFin|rightFin)\.[a-zA-Z]|internal error|undefined|\[object /;
+  const bad = [...new Set(MESSAGES)].filter((m) => internal.test(m));
+  expect(bad).toEqual([]);
 });

@@ -25,14 +25,14 @@ const GLASS = [2, 0.1, 0.2, 'perez', 90, 1];
 const STEPS = 29;
 
 describe('gain worksheet functions', () => {
-  test('WINDOWGAIN equals the core gain of the same window', () => {
-    const spec = baseSpec({ site: { latitude: 40, longitude: -105, utcOffset: -7 } });
+  test('WINDOWGAIN equals the core gain of the same window, the sun at the instant typed (as released)', () => {
+    const spec = baseSpec({ site: { latitude: 40, longitude: -105, utcOffset: -7 }, timeConvention: 'instant' });
     const expected = windowGainAt(spec, civilToSerial(2026, 7, 21, 12, 30)).gain.total;
     expect(call('WINDOWGAIN', [...HOUR, ...GLASS])[0][0]).toBeCloseTo(expected, 9);
   });
 
   test('WINDOWGAIN with measured dni and dhi and an overhang', () => {
-    const spec = baseSpec({ site: { latitude: 40, longitude: -105, utcOffset: -7 }, shading: { overhang: { projection: 0.6, gap: 0.1, extensionLeft: 0, extensionRight: 0 } } });
+    const spec = baseSpec({ site: { latitude: 40, longitude: -105, utcOffset: -7 }, shading: { overhang: { projection: 0.6, gap: 0.1, extensionLeft: 0, extensionRight: 0 } }, timeConvention: 'instant' });
     const expected = windowGainAt(spec, civilToSerial(2026, 7, 21, 12, 30), { dni: 850, dhi: 120 }).gain.total;
     const args = [NOON, 40, -105, -7, 180, 2, 1.5, 0.6, 850, 120, null, null, ...GLASS, 0.6, 0.1];
     expect(call('WINDOWGAIN', args)[0][0]).toBeCloseTo(expected, 9);
@@ -43,7 +43,8 @@ describe('gain worksheet functions', () => {
     expect(half).toBeInstanceOf(SunpaneError);
     expect(half.argument).toBe('dhi');
     const noSky = call('WINDOWGAIN', [NOON, 40, -105, -7, 180, 2, 1.5, 0.6])[0][0] as SunpaneError;
-    expect(noSky.argument).toBe('tauB');
+    expect(noSky.argument).toBe('dni');
+    expect(noSky.message).toMatch(/give the hour's dni and dhi: the window has no clear sky of its own \(or give it linkeTurbidity, or tauB and tauD/);
     const narrow = call('WINDOWGAIN', [...HOUR, ...GLASS, 0.5, 0, -1.5, -1])[0][0] as SunpaneError;
     expect(narrow).toBeInstanceOf(SunpaneError);
     expect(narrow.argument).toBe('overhangExtensionLeft'); // -1.5 cuts more than -1
@@ -51,13 +52,19 @@ describe('gain worksheet functions', () => {
     expect(tilted.argument).toBe('surfaceTilt');
   });
 
-  test('GAINSTEPS spills a heading and its steps, whose window-solar-gain line is WINDOWGAIN', () => {
+  test('GAINSTEPS spills a heading and its steps, the first the instant used, whose window-solar-gain line is WINDOWGAIN', () => {
     const table = call('GAINSTEPS', [...HOUR, ...GLASS]);
     expect(table[0]).toEqual(['step', 'quantity', 'value', 'unit', 'method']);
     expect(table).toHaveLength(STEPS + 1);
+    expect(table[1].slice(0, 2)).toEqual([1, 'sun evaluated at']);
+    expect(table[1][2]).toBeCloseTo(civilToSerial(2026, 7, 21, 12, 30), 9);
+    expect(table[1][4]).toMatch(/the date-time itself \(time convention instant\)/);
     const line = table.find((r) => r[1] === 'window solar gain')!;
-    expect(line[2]).toBeCloseTo(call('WINDOWGAIN', [...HOUR, ...GLASS])[0][0] as number, 9);
+    expect(line[2]).toBe(call('WINDOWGAIN', [...HOUR, ...GLASS])[0][0]);
     expect(table.slice(1).map((r) => r[0])).toEqual(Array.from({ length: STEPS }, (_, i) => i + 1));
+    const bare = call('GAINSTEPS', [...HOUR, ...GLASS, null, null, null, null, null, null, null, null, null, null, false]);
+    expect(bare).toHaveLength(STEPS);
+    expect(bare[0][1]).toBe('sun evaluated at');
   });
 
   test('GAINSTEPS shows each diffuse ratio and where it came from; the shaded sky is the bare sky cut by them', () => {

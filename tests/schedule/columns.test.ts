@@ -1,4 +1,5 @@
-/** The shared window-schedule columns: one header each, the two older header styles as aliases, matching by key. */
+/** The shared window-schedule columns: the glossary's window fields, one header each, older header styles as aliases, matching by key. */
+import { WINDOW_FIELDS } from '../../src/registry/glossary';
 import { SCHEDULE_COLUMNS, columnForHeader, columnsForPath, headerKey, matchHeaders, requiredColumns, splitListCell } from '../../src/schedule/columns';
 
 /** The pane's headers before the formats were merged (src/taskpane/schedule.ts at 872dc24). */
@@ -12,6 +13,11 @@ describe('schedule columns', () => {
     expect(headerKey(' FACES [°] ')).toBe('faces');
     expect(headerKey('Set-back')).toBe('setback');
     expect(headerKey(undefined)).toBe('');
+  });
+
+  test('the columns are the glossary window fields: key = field name, header = label', () => {
+    expect(SCHEDULE_COLUMNS.map((c) => c.key)).toEqual(WINDOW_FIELDS.map((f) => f.name));
+    for (const c of SCHEDULE_COLUMNS) expect(headerKey(c.header)).toBe(headerKey(c.key));
   });
 
   test('every column has a unique key and its own header, and every header or alias finds its column', () => {
@@ -34,16 +40,16 @@ describe('schedule columns', () => {
   test('both-sides columns fill both paths and come before the one-side columns they share a path with', () => {
     const reach = columnForHeader('Overhang reach')!;
     expect(reach.paths).toEqual(['shading.overhang.extensionLeft', 'shading.overhang.extensionRight']);
-    expect(columnsForPath('shading.overhang.extensionLeft').map((c) => c.key)).toEqual(['overhangReach', 'overhangPastLeft']);
-    expect(columnsForPath('shading.rightFin.projection').map((c) => c.key)).toEqual(['finDepth', 'rightFinDepth']);
+    expect(columnsForPath('shading.overhang.extensionLeft').map((c) => c.key)).toEqual(['overhangExtension', 'overhangExtensionLeft']);
+    expect(columnsForPath('shading.rightFin.projection').map((c) => c.key)).toEqual(['finProjection', 'rightFinProjection']);
   });
 
   test('matching a header row gives the column at each position and names unknown and repeated headers', () => {
-    const m = matchHeaders(['Window', '', 'Facing', 'Set-back (m)', 'revealDepth', 'surfaceAzimuth']);
-    expect(m.columns.map((c) => c?.key)).toEqual(['name', undefined, undefined, 'setBack', undefined, 'surfaceAzimuth']);
-    expect(m.unknown).toEqual([{ index: 2, header: 'Facing' }]);
+    const m = matchHeaders(['Window', '', 'Bearing', 'Set-back (m)', 'revealDepth', 'surfaceAzimuth']);
+    expect(m.columns.map((c) => c?.key)).toEqual(['name', undefined, undefined, 'revealDepth', undefined, 'surfaceAzimuth']);
+    expect(m.unknown).toEqual([{ index: 2, header: 'Bearing' }]);
     expect(m.repeated).toEqual([{ index: 4, header: 'revealDepth' }]);
-    expect(m.written.get('setBack')).toBe('Set-back (m)');
+    expect(m.written.get('revealDepth')).toBe('Set-back (m)');
   });
 
   test('the pane needs the label, bearing and size; the command line also the year and SHGC', () => {

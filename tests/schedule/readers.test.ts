@@ -46,6 +46,7 @@ describe('the pane and the command line read one schedule format', () => {
       skyModel: 'hayDavies',
       weather: { kind: 'ineichenClearSky', linkeTurbidity: [3.1] },
       year: 2026,
+      timeConvention: 'hourEnding',
     });
   });
 

@@ -24,11 +24,11 @@ describe('shading options', () => {
     expect(specs[0].spec.shading).toEqual({});
     const bad = [...starterOptions()];
     bad[1] = { ...bad[1], overhangGap: 'high' };
-    expect(() => optionSpecs(base, bad, validate)).toThrow('shading.overhang.gap = "high" is not allowed: must be a number from 0 to 1000 m (option 2 "Deep overhang", column "Overhang gap (m)")');
+    expect(() => optionSpecs(base, bad, validate)).toThrow('overhangGap = "high" is not allowed: must be a number from 0 to 100 m (option 2 "Deep overhang", column "Overhang gap (m)")');
     try {
       optionSpecs(base, bad, validate);
     } catch (err) {
-      expect((err as OptionProblem).inUserWords).toBe('Option 2 "Deep overhang", Overhang gap (m): "high" is not allowed: must be a number from 0 to 1000 m');
+      expect((err as OptionProblem).inUserWords).toBe('Option 2 "Deep overhang", Overhang gap (m): "high" is not allowed: must be a number from 0 to 100 m');
     }
     expect.assertions(5);
     expect(() => optionSpecs(base, new Array(7).fill(starterOptions()[0]), validate)).toThrow(/at most 6/);

@@ -34,10 +34,10 @@ describe('the window schedule', () => {
   });
 
   test('unknown headers and missing required columns are reported before any row', () => {
-    const { problems } = readSchedule([['Window', 'Facing', 'Width']], form, validate);
+    const { problems } = readSchedule([['Window', 'Bearing', 'Width']], form, validate);
     expect(problems.map((p) => p.message)).toEqual([
-      'Header "Facing" is not a schedule column (see the list of headers).',
-      'The table has no "Faces [°]" column, which every schedule needs.',
+      'Header "Bearing" is not a schedule column (see the list of headers).',
+      'The table has no "Surface azimuth [°]" column, which every schedule needs.',
       'The table has no "Height [m]" column, which every schedule needs.',
     ]);
   });
@@ -100,8 +100,8 @@ describe('the window schedule', () => {
     expect(problems.map((p) => p.message)).toEqual([
       'Row 1 (A), column "Faces": 400 is not allowed: must be a number from 0 to 360 °',
       'Row 2, column "Window": blank is not allowed: every window needs a label.',
-      'Row 3 (C), column "Fin gap": -0.2 is not allowed: must be a number from 0 to 1000 m',
-      'Row 5 (E), column "Width": blank is not allowed: must be a number above 0 and up to 1000 m',
+      'Row 3 (C), column "Fin gap": -0.2 is not allowed: must be a number from 0 to 100 m',
+      'Row 5 (E), column "Width": blank is not allowed: must be a number from 0.01 to 100 m',
     ]);
   });
 

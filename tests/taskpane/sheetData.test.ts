@@ -48,8 +48,8 @@ describe('sheet data for the form', () => {
   test('a range on a sheet that does not exist is reported naming the field', async () => {
     const { run, host } = setup();
     host.addUserSheet('Active', [[1], [2], [3]]);
-    await expect(readSheetData(run, { ...initialValues(), skylineAddress: 'Nowhere!A1:A4' })).rejects.toThrow(/^shading\.skyline = "Nowhere!A1:A4" is not allowed: must point at cells that exist/);
-    await expect(readSheetData(run, { ...initialValues(), weatherSource: 'measured', dniAddress: 'A1:A3', dhiAddress: 'Gone!B1:B3' })).rejects.toThrow(/^weather\.dhi = "Gone!B1:B3" is not allowed/);
+    await expect(readSheetData(run, { ...initialValues(), skylineAddress: 'Nowhere!A1:A4' })).rejects.toThrow(/^skyline = "Nowhere!A1:A4" is not allowed: must point at cells that exist/);
+    await expect(readSheetData(run, { ...initialValues(), weatherSource: 'measured', dniAddress: 'A1:A3', dhiAddress: 'Gone!B1:B3' })).rejects.toThrow(/^dhi = "Gone!B1:B3" is not allowed/);
   });
 
   test('a schedule table is read by name, header first; an unknown name says what to do', async () => {

@@ -4,6 +4,7 @@
  * written out here, so the test checks that the pane passes values through unchanged and puts each
  * message beside the right box.
  */
+import { inGlossaryWords } from '../../src/registry/windowRange';
 import { SunpaneError } from '../../src/core/common/errors';
 import type { WindowSpec } from '../../src/core/gain/window';
 import { validateWindowSpec } from '../../src/core/gain/windowSpec';
@@ -12,11 +13,13 @@ import { buildWindowSpec, findProblems, isClean, readListText, readNumberText } 
 
 const validate = (s: WindowSpec) => void validateWindowSpec(s);
 
+/** The core's refusal in the glossary's words (the field's name, not its path inside the description). */
 function coreMessage(spec: WindowSpec): string {
   try {
     validateWindowSpec(spec);
   } catch (err) {
-    if (err instanceof SunpaneError) return err.message;
+    const named = inGlossaryWords(err);
+    if (named instanceof SunpaneError) return named.message;
   }
   throw new Error('expected a refusal');
 }
@@ -68,13 +71,13 @@ describe('the window form', () => {
     const base = buildWindowSpec({ ...initialValues(), year: '2025' });
     const monthly = [3, 3, 3, 3, 3, 30, 3, 3, 3, 3, 3, 3];
     expect(problems.byField.linkeTurbidity).toBe(coreMessage({ ...base, weather: { kind: 'ineichenClearSky', linkeTurbidity: monthly } }));
-    expect(problems.byField.linkeTurbidity).toMatch(/^weather\.linkeTurbidity\[5\] = 30 is not allowed/);
+    expect(problems.byField.linkeTurbidity).toMatch(/^linkeTurbidity \(value 6\) = 30 is not allowed/);
     expect(isClean(findProblems({ ...initialValues(), year: '2025', linkeTurbidity: '3,3,3,3,3,3,3,3,3,3,3,3' }, validate))).toBe(true);
   });
 
   test('hourly weather needs two range addresses, checked before anything is read', () => {
     const problems = findProblems({ ...initialValues(), year: '2025', weatherSource: 'measured', dniAddress: 'Weather!B2:B8761', dhiAddress: 'nowhere' }, validate);
-    expect(problems.byField).toEqual({ dhiAddress: expect.stringMatching(/^weather\.dhi = "nowhere" is not allowed: must be a range address/) });
+    expect(problems.byField).toEqual({ dhiAddress: expect.stringMatching(/^dhi = "nowhere" is not allowed: must be a range address/) });
   });
 
   test('messages find their box by the longest matching path', () => {

@@ -13,4 +13,4 @@ export { type DiffuseShading, type Weather, type WindowSpec } from './window';
 export { type DesignTemperatures } from './window';
 export { DAILY_RANGE_FRACTIONS, DAILY_RANGE_MAX, designDayDryBulb, DRY_BULB_MAX, DRY_BULB_MIN } from './outdoorTemperature';
 export { type WindowGainHour, windowGainAt } from './windowGain';
-export { DEFAULT_CONDUCTION_RADIANT_FRACTION, DEFAULT_RADIANT_FRACTION, INDOOR_TEMPERATURE_MAX, INDOOR_TEMPERATURE_MIN, MAX_IRRADIANCE, skyModelOf, U_VALUE_MAX, validateWindowSpec } from './windowSpec';
+export { DEFAULT_CONDUCTION_RADIANT_FRACTION, DEFAULT_RADIANT_FRACTION, INDOOR_TEMPERATURE_MAX, INDOOR_TEMPERATURE_MIN, MAX_IRRADIANCE, MAX_LENGTH, MIN_WINDOW_SIZE, skyModelOf, U_VALUE_MAX, validateWindowSpec } from './windowSpec';

@@ -31,7 +31,12 @@ export const U_VALUE_MAX = 10;
 export const INDOOR_TEMPERATURE_MIN = -20;
 export const INDOOR_TEMPERATURE_MAX = 50;
 /** Largest window dimension and shading length accepted [m]. */
-export const MAX_LENGTH = 1000;
+export const MAX_LENGTH = 100;
+/**
+ * Smallest window width or height accepted [m]: 1 cm. Smaller sizes have no physical meaning for a
+ * window and make the shadow arithmetic underflow (a 1e-200 m window), so they are refused by name.
+ */
+export const MIN_WINDOW_SIZE = 0.01;
 /** Largest irradiance value accepted in a weather series [W/m²] (above any solar constant estimate). */
 export const MAX_IRRADIANCE = 2000;
 
@@ -170,8 +175,8 @@ export function validateWindowSpec(spec: WindowSpec): WindowSpec {
   validateSite(spec.site);
   requireRange('surfaceAzimuth', spec.surfaceAzimuth, 0, 360, '°');
   requireRange('surfaceTilt', spec.surfaceTilt, 0, 180, '°');
-  requireRange('width', spec.width, 0, MAX_LENGTH, 'm', { exclusiveMin: true });
-  requireRange('height', spec.height, 0, MAX_LENGTH, 'm', { exclusiveMin: true });
+  requireRange('width', spec.width, MIN_WINDOW_SIZE, MAX_LENGTH, 'm');
+  requireRange('height', spec.height, MIN_WINDOW_SIZE, MAX_LENGTH, 'm');
   requireRange('frameFraction', spec.frameFraction, 0, 1, undefined, { exclusiveMax: true });
   validateGlazing(spec.glazing);
   validateShading(spec.shading, spec.width, spec.height, spec.surfaceTilt);

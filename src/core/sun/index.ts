@@ -9,5 +9,6 @@
 export { sunEvents } from './events';
 export { type Site } from './site';
 export { standardPressure, type SunOptions, type SunPosition, sunPosition } from './spa';
+export { clearSunNodes, sunPositionFromNodes } from './sunNodes';
 export { annualSunPath, type SunPathYear } from './sunPath';
 export { incidenceAngle, profileAngle, wallSolarAzimuth } from './surfaceAngles';

@@ -484,7 +484,7 @@ function hourlyAzimuthsWithTrig(hours: number, azimuth: Float64Array, south: Flo
  * @param e0 - the altitude without refraction [°], atan2(up, horizontal), at least −0.83337°
  * @returns the refraction Δe [°]
  */
-function refractionFromComponents(scale: number, up: number, horizontal: number, e0: number): number {
+export function refractionFromComponents(scale: number, up: number, horizontal: number, e0: number): number {
   const d = (10.3 / (e0 + 5.11)) * RAD;
   const d2 = d * d;
   const tanD = d * (1 + d2 * (1 / 3 + d2 * (2 / 15 + d2 * (17 / 315 + d2 * (62 / 2835 + d2 * (1382 / 155_925))))));

@@ -63,7 +63,7 @@ describe('sky and glazing worksheet functions', () => {
 
   test('tables of unequal length are refused', () => {
     const fn = byName('SHGCDIFFUSELOOKUP');
-    expect(fn.refuses?.({ angles: [0, 40], shgcValues: [0.7] })).toMatch(/angles has 2/);
+    expect(fn.refuses?.({ shgcAngles: [0, 40], shgcValues: [0.7] })).toMatch(/shgcAngles has 2/);
     expect(() => applyFunction(fn, [[[0, 40]], [[0.7]]])).not.toThrow();
     expect(applyFunction(fn, [[[0, 40]], [[0.7]]])[0][0]).toBeInstanceOf(SunpaneError);
   });

@@ -1,0 +1,237 @@
+/**
+ * The sun at any instant by the NREL SPA, for many instants at once (a worksheet range of
+ * date-times): the Earth's slow part of the algorithm — heliocentric position, nutation,
+ * aberration, apparent right ascension and declination, Earth–sun distance, equation of time
+ * (Reda & Andreas 2008, Eq. 4–30 and A1–A4) — is worked out once per day at 0 h UT and kept, and
+ * taken at the instant by six-point (quintic) Lagrange interpolation over the days around it; the
+ * observer's part — sidereal time (Eq. 27, exact for the instant), hour angle, parallax, refraction,
+ * altitude and azimuth (Eq. 31–46) — is worked out for the instant in the vector form the annual
+ * path uses (src/core/sun/sunPath.ts; algebraically the SPA's Eq. 36–41), with the observer's
+ * constants kept while the site stays the same.
+ *
+ * With daily nodes the interpolation error is far below the SPA's own uncertainty (±0.0003°): the
+ * slow terms' fastest parts (lunar terms of 9–30 days, ≤ 0.002°) are carried to ~1e-9°, and
+ * tests/core/sun/sunNodes.test.ts holds altitude, azimuth, declination and equation of time to the
+ * direct {@link sunPosition} over random instants and sites (measured worst 2e-8° in altitude). A
+ * column of 100,000 hourly date-times needs some 4,200 daily nodes: the bench line
+ * `range_100k_vs_suncalc` measures the whole worksheet path against suncalc (docs/fast-paths.md).
+ *
+ * Nodes are kept per ΔT choice (the default polynomial, or a given value) and dropped all at once
+ * when more than {@link MAX_NODES} are held.
+ */
+import { DEG, RAD, wrap180, wrap360 } from '../common';
+import { deltaTAt, julianDay } from '../time';
+import { EARTH_RADIUS_M, POLAR_RATIO, RISE_SET_ALTITUDE, type SunOptions, type SunPosition, emptySteps, requireInstant, requireSite, resolveSunOptions, type ResolvedSunOptions, spaGeocentric } from './spa';
+import { refractionFromComponents } from './sunPath';
+
+/** Most nodes kept before the store is emptied (each is five numbers). */
+export const MAX_NODES = 60_000;
+const MS_PER_DAY = 86_400_000;
+/** Julian day of 1970-01-01 00:00 UT. */
+const JD_UNIX = 2_440_587.5;
+
+/**
+ * Node values: α − Δψ cos ε (for the hour angle), α [°], δ [°], R [AU], E [min], and the sun's
+ * geocentric direction scaled by its distance in Earth radii, a = cos δ / sin ξ and b = sin δ / sin ξ
+ * (ξ the equatorial horizontal parallax, Eq. 32), for the vector form of Eq. 36–41.
+ */
+type Node = Float64Array;
+
+/** Nodes by day (days since 1970-01-01, 0 h UT), one store per ΔT choice (NaN = the default polynomial). */
+const stores = new Map<number, Map<number, Node>>();
+let held = 0;
+
+/** Drops every kept node (the bench starts each round cold with it). */
+export function clearSunNodes(): void {
+  stores.clear();
+  held = 0;
+  lastDay = Number.NaN;
+}
+
+const geoScratch = emptySteps();
+
+function nodeOf(day: number, deltaT: number | undefined): Node {
+  const key = deltaT === undefined ? Number.NaN : deltaT;
+  let store = stores.get(key);
+  if (store === undefined) {
+    store = new Map();
+    stores.set(key, store);
+  }
+  let node = store.get(day);
+  if (node === undefined) {
+    if (held >= MAX_NODES) {
+      clearSunNodes();
+      return nodeOf(day, deltaT);
+    }
+    const ms = day * MS_PER_DAY;
+    const s = spaGeocentric(julianDay(ms), deltaT ?? deltaTAt(ms), geoScratch);
+    node = new Float64Array(VALUES);
+    node[0] = wrap360(s.alpha - (s.nu - s.nu0)); // α − Δψ cos ε (Eq. 28: ν − ν0 = Δψ cos ε)
+    node[1] = s.alpha;
+    node[2] = s.delta;
+    node[3] = s.R;
+    node[4] = s.E;
+    const inverseSinXi = 1 / Math.sin(((8.794 / 3600) * RAD) / s.R); // Eq. 32: distance in Earth radii
+    node[5] = Math.cos(s.delta * RAD) * inverseSinXi;
+    node[6] = Math.sin(s.delta * RAD) * inverseSinXi;
+    store.set(day, node);
+    held++;
+  }
+  return node;
+}
+
+/** Lagrange weights of the nodes at −2 … 3 for a position f in [0, 1). */
+const W = new Float64Array(6);
+/** Denominators Π_{j≠i} (x_i − x_j) for x = −2 … 3. */
+const DENOM = [-120, 24, -12, 12, -24, 120];
+
+function weights(f: number): Float64Array {
+  const p0 = f + 2;
+  const p1 = f + 1;
+  const p2 = f;
+  const p3 = f - 1;
+  const p4 = f - 2;
+  const p5 = f - 3;
+  W[0] = (p1 * p2 * p3 * p4 * p5) / DENOM[0];
+  W[1] = (p0 * p2 * p3 * p4 * p5) / DENOM[1];
+  W[2] = (p0 * p1 * p3 * p4 * p5) / DENOM[2];
+  W[3] = (p0 * p1 * p2 * p4 * p5) / DENOM[3];
+  W[4] = (p0 * p1 * p2 * p3 * p5) / DENOM[4];
+  W[5] = (p0 * p1 * p2 * p3 * p4) / DENOM[5];
+  return W;
+}
+
+/**
+ * The six nodes around the last day asked for, value by value (5 × 6, angles unwrapped from node to
+ * node: they never move 180° in a day); consecutive instants of one day reuse them.
+ */
+const VALUES = 7;
+const AROUND = new Float64Array(6 * VALUES);
+let lastDay = Number.NaN;
+let lastDeltaT: number | undefined;
+
+function gather(day: number, deltaT: number | undefined): void {
+  if (day === lastDay && deltaT === lastDeltaT) return;
+  for (let i = 0; i < 6; i++) {
+    const node = nodeOf(day - 2 + i, deltaT);
+    for (let k = 0; k < VALUES; k++) {
+      let v = node[k];
+      if (i > 0 && k < 2) {
+        const prev = AROUND[k * 6 + i - 1];
+        while (v - prev > 180) v -= 360;
+        while (v - prev < -180) v += 360;
+      }
+      AROUND[k * 6 + i] = v;
+    }
+  }
+  lastDay = day;
+  lastDeltaT = deltaT;
+}
+
+/** The weighted sum of node value k over the six gathered nodes. */
+function interpolate(k: number, w: Float64Array): number {
+  const o = k * 6;
+  return w[0] * AROUND[o] + w[1] * AROUND[o + 1] + w[2] * AROUND[o + 2] + w[3] * AROUND[o + 3] + w[4] * AROUND[o + 4] + w[5] * AROUND[o + 5];
+}
+
+/** Observer constants of the last site (Eq. 33–35 and the refraction's constant part). */
+let obsLatitude = Number.NaN;
+let obsElevation = Number.NaN;
+let obsPressure = Number.NaN;
+let obsTemperature = Number.NaN;
+let sinLat = 0;
+let cosLat = 1;
+let obsX = 1;
+let obsY = 0;
+let refractionScale = 0;
+
+function observer(latitude: number, o: ResolvedSunOptions): void {
+  if (latitude === obsLatitude && o.elevation === obsElevation && o.pressure === obsPressure && o.temperature === obsTemperature) return;
+  const latRad = latitude * RAD;
+  sinLat = Math.sin(latRad);
+  cosLat = Math.cos(latRad);
+  const uRad = Math.atan(POLAR_RATIO * Math.tan(latRad)); // Eq. 33
+  obsX = Math.cos(uRad) + (o.elevation / EARTH_RADIUS_M) * cosLat; // Eq. 34
+  obsY = POLAR_RATIO * Math.sin(uRad) + (o.elevation / EARTH_RADIUS_M) * sinLat; // Eq. 35
+  refractionScale = ((o.pressure / 1010) * (283 / (273 + o.temperature)) * 1.02) / 60; // Eq. 42, constant part
+  obsLatitude = latitude;
+  obsElevation = o.elevation;
+  obsPressure = o.pressure;
+  obsTemperature = o.temperature;
+}
+const resolved: ResolvedSunOptions = { elevation: 0, pressure: 0, temperature: 0, deltaT: undefined };
+/** The options of the last call, so that a range of instants at one site resolves them once. */
+let lastOptions: SunOptions | undefined;
+let lastElevation: number | undefined;
+let lastPressure: number | undefined;
+let lastTemperature: number | undefined;
+let lastGivenDeltaT: number | undefined;
+
+function resolveOnce(options: SunOptions | undefined): ResolvedSunOptions {
+  const o = options ?? {};
+  if (lastOptions !== undefined && o.elevation === lastElevation && o.pressure === lastPressure && o.temperature === lastTemperature && o.deltaT === lastGivenDeltaT) return resolved;
+  resolveSunOptions(options, '', resolved);
+  lastOptions = o;
+  lastElevation = o.elevation;
+  lastPressure = o.pressure;
+  lastTemperature = o.temperature;
+  lastGivenDeltaT = o.deltaT;
+  return resolved;
+}
+
+/**
+ * Topocentric sun position at an instant by the NREL SPA with the slow terms interpolated between
+ * daily nodes (see the module comment); same arguments, checks and results as {@link sunPosition}.
+ * @param utcMs - UTC instant [ms since 1970-01-01], years −2000…9999 (before 1860 give `deltaT`)
+ * @param latitude - site latitude [°] −90…90, north positive
+ * @param longitude - site longitude [°] −180…180, east positive
+ * @param options - elevation [m], pressure [hPa], temperature [°C], ΔT [s], as for {@link sunPosition}
+ * @param out - an object to fill and return instead of a new one (a caller working through many
+ *   instants reads one field of each and allocates nothing)
+ * @returns the position; within ~1e-8° of {@link sunPosition} (tested within 1e-6°)
+ * @remarks Reda & Andreas (2008), NREL/TP-560-34302: Eq. 4–30, A1–A4 at the nodes; Eq. 27, 31–46 at the instant.
+ */
+export function sunPositionFromNodes(utcMs: number, latitude: number, longitude: number, options?: SunOptions, out?: SunPosition): SunPosition {
+  const o = resolveOnce(options);
+  requireSite(latitude, longitude);
+  requireInstant(utcMs, o.deltaT !== undefined);
+  const daysSinceUnix = utcMs / MS_PER_DAY;
+  const day = Math.floor(daysSinceUnix);
+  const f = daysSinceUnix - day;
+  gather(day, o.deltaT);
+  const w = weights(f);
+  const g = interpolate(0, w);
+  const a = interpolate(5, w);
+  const b = interpolate(6, w);
+  observer(latitude, o);
+  // Eq. 27 (exact for the instant) and Eq. 28, 31: H = ν0 + Δψ cos ε + λ − α.
+  const jd = utcMs / MS_PER_DAY + JD_UNIX;
+  const jc = (jd - 2_451_545) / 36_525;
+  const nu0 = 280.46061837 + 360.98564736629 * (jd - 2_451_545) + jc * jc * (0.000387933 - jc / 38_710_000);
+  const H = wrap360(nu0 + longitude - g);
+  const HRad = H * RAD;
+  // Eq. 36–41 in vector form (as src/core/sun/sunPath.ts): the topocentric vector in Earth radii,
+  // X toward the meridian, Y westward, Z toward the pole, turned to up / horizontal / west / south.
+  const vx = a * Math.cos(HRad) - obsX;
+  const vy = a * Math.sin(HRad);
+  const vz = b - obsY;
+  const south = vx * sinLat - vz * cosLat;
+  const up = sinLat * vz + cosLat * vx;
+  const horizontal = Math.sqrt(vy * vy + south * south);
+  const e0 = Math.atan2(up, horizontal) * DEG; // Eq. 41
+  const e = e0 < RISE_SET_ALTITUDE ? e0 : e0 + refractionFromComponents(refractionScale, up, horizontal, e0); // Eq. 42, 43
+  const az = Math.atan2(vy, south) * DEG + 180; // Eq. 45, 46
+  const hourAngle = wrap180(H);
+  const p = out ?? ({} as SunPosition);
+  p.altitude = e;
+  p.azimuth = az >= 360 ? az - 360 : az;
+  p.zenith = 90 - e; // Eq. 44
+  p.declination = interpolate(2, w);
+  p.hourAngle = hourAngle;
+  p.equationOfTime = interpolate(4, w);
+  p.rightAscension = wrap360(interpolate(1, w));
+  p.altitudeUnrefracted = e0;
+  p.solarTime = wrap360(180 + hourAngle) / 15;
+  p.earthSunDistance = interpolate(3, w);
+  return p;
+}
