@@ -273,8 +273,15 @@ export function scheduleHour(): number {
   return civilToSerial(DEMO_YEAR, 7, 21, 16, 0, 0);
 }
 
-/** Column of the schedule's design-hour cell (E, wide enough for a date-time beside the label). */
+/** Column of the schedule's design-hour cell (E; made wide enough for a date-time). */
 const HOUR_COLUMN = 5;
+
+/** Width of a window-field column of the schedule: its header and its longest cell fit, 9 to 26 characters; the design hour's column fits a date-time. */
+function fieldWidth(k: number, header: string, rows: readonly TableCell[][]): number {
+  const longest = Math.max(header.length, ...rows.map((r) => String(r[k] ?? '').length));
+  const width = Math.max(9, Math.min(26, longest + 2));
+  return k + 1 === HOUR_COLUMN ? Math.max(width, 17) : width;
+}
 
 /**
  * The window schedule: an Excel table whose first columns are window fields (headers = glossary
@@ -301,7 +308,7 @@ function addSchedule(wb: ExcelJS.Workbook, results: DemoResults): { cell: string
     'Schedule',
     { row: top + 2, column: 1 },
     [
-      ...header.map((h, k) => ({ header: h, width: k === 0 ? 18 : k === fieldCount - 1 ? 26 : Math.max(9, Math.min(14, h.length + 1)) })),
+      ...header.map((h, k) => ({ header: h, width: fieldWidth(k, h, rows) })),
       { header: 'Room', width: 14 },
       { header: 'Glass area (m²)', numFmt: NUMBER_FORMATS.area, width: 15 },
       { header: gainHeader, numFmt: NUMBER_FORMATS.watts, width: 18 },

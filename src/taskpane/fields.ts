@@ -96,7 +96,7 @@ export const FIELDS: readonly FieldDef[] = [
       { value: 'table', label: 'from my angle table on a sheet' },
     ],
   },
-  box(GLOSSARY.shgc, 'glass', '0.4', { hint: 'at normal incidence' }),
+  box(GLOSSARY.shgc, 'glass', '0.4', { label: 'SHGC at normal incidence' }),
   box(GLOSSARY.panes, 'glass', '2', { visible: physical }),
   { id: 'angleTableAddress', label: 'Angle table (two columns: angle °, SHGC)', section: 'glass', kind: 'address', initial: '', paths: ['shgcAngles', 'shgcValues', 'glazing.angleTable'], visible: table, hint: 'e.g. Glass!A2:B10' },
   box(GLOSSARY.interiorAttenuation, 'glass', '1', { hint: 'inside blind or curtain; 1 = none' }),

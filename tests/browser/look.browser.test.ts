@@ -148,7 +148,7 @@ describe('the pane by keyboard alone', () => {
       await page.keyboard.press('Tab');
       seen.push((await page.evaluate(() => document.activeElement?.id)) ?? '');
     }
-    expect(seen).toContain('windowName');
+    expect(seen).toContain('name');
     expect(seen).toContain('overhangProjection');
     expect(seen.at(-1)).toBe('run-year');
     // The focused box is drawn with a visible focus ring.
