@@ -23,6 +23,7 @@ function windowArb(): fc.Arbitrary<RawArg> {
     const cell = f.window!.cell;
     if (cell === 'choice') return fc.constantFrom(...(f.choices ?? []), ...Object.keys(f.choiceAliases ?? {}));
     if (cell === 'monthly') return fc.oneof(numberArb({ ...f, kind: 'number' }), fc.array(numberArb({ ...f, kind: 'number' }), { minLength: 12, maxLength: 12 }).map((xs) => xs.join(' ')));
+    if (cell === 'dateTime') return fc.double({ min: 61, max: 2958465, noNaN: true });
     if (cell === 'list') return fc.array(numberArb({ ...f, kind: 'number', min: f.min, max: f.max }), { minLength: 1, maxLength: 12 }).map((xs) => xs.join(' '));
     return numberArb(f);
   };
