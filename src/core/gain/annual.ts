@@ -27,11 +27,12 @@ import { SunpaneError, DEG, RAD, acosClamped, requireRange, wrap180 } from '../c
 import { type PreparedWindow, monthlyValue, prepareWindow } from './prepared';
 import { MAX_IRRADIANCE, outdoorTemperatureSource } from './windowSpec';
 import { DAILY_RANGE_FRACTIONS } from './outdoorTemperature';
-import { ashraeClearSky, decomposeErbs, extraterrestrialSpencer, ineichenPerezClearSky, type PlaneParts, type PreparedPlane, preparePlane } from '../sky';
+import { type PerezBrightnessColumns, type PlaneParts, type PreparedPlane, preparePlane } from '../sky';
 import type { ShgcCurve } from '../glazing';
 import { type PreparedShading, prepareShading } from '../shading';
 import { annualSunPath, type SunPathYear } from '../sun';
-import { daysInMonth, describeDaylightSaving, standardToClock, type TimeConvention } from '../time';
+import { describeDaylightSaving, standardToClock, type TimeConvention } from '../time';
+import { type SharedYear, dniExtraByDay, fillWeather, monthOfDay, perezBrightnessOf, sharedYearKey, sharedYearOf, sunPathAt } from './sharedYear';
 import type { DiffuseShading, WindowSpec } from './window';
 
 /**
@@ -107,17 +108,7 @@ export interface AnnualSeries {
   missing: Uint8Array;
 }
 
-/** Month (1…12) of each day of the year, index 0 = 1 January. */
-export function monthOfDay(year: number): Uint8Array {
-  const out = new Uint8Array(366);
-  let d = 0;
-  for (let m = 1; m <= 12; m++) {
-    const n = daysInMonth(year, m);
-    out.fill(m, d, d + n);
-    d += n;
-  }
-  return out;
-}
+export { monthOfDay };
 
 /**
  * The hourly series of one window over `spec.year`.
@@ -134,77 +125,114 @@ export function annualSeries(spec: WindowSpec): AnnualSeries {
   return annualOfPrepared(w);
 }
 
-/** {@link annualSeries} for a window already prepared. */
-export function annualOfPrepared(w: PreparedWindow): AnnualSeries {
+/** Sines and cosines of the sun for a one-off year: scratch columns of this module (one call runs at a time). */
+const ONE_OFF_TRIG = { sinAltitude: new Float64Array(8784), cosAltitude: new Float64Array(8784), sinAzimuth: new Float64Array(8784), cosAzimuth: new Float64Array(8784) };
+
+/**
+ * {@link annualSeries} for a window already prepared.
+ * @param w - the prepared window
+ * @param shared - the sun's path and the weather of the window's site and year (./sharedYear.ts),
+ *   when many windows share them; default: worked out for this window alone
+ * @param reuse - write into this module's scratch series instead of fresh columns, for a summary of
+ *   many windows (`summarizeWindowYear`): the result is valid only until the next call, and only in
+ *   the columns a summary reads (gain, beam, sky, ground and their unshaded columns, sunlit
+ *   fraction, SHGC, missing; incidence with the sun up, 180° with it behind the plane — night rows
+ *   of the angles, the profile angle and the parts of the gain are skipped)
+ */
+export function annualOfPrepared(w: PreparedWindow, shared?: SharedYear, reuse = false): AnnualSeries {
   const { spec } = w;
   const n = w.hours;
-  const col = () => new Float64Array(n);
-  // The sun path writes the sines and cosines of the sun's altitude and azimuth into scratch
-  // columns of this module (no allocation for them; one call runs at a time).
-  const trig = { sinAltitude: SIN_ALT_SCRATCH, cosAltitude: COS_ALT_SCRATCH, sinAzimuth: SIN_GAMMA_SCRATCH, cosAzimuth: COS_GAMMA_SCRATCH };
-  const path = annualSunPath(spec.year, spec.site, { at: sunPathAt(w.convention), trig, slowColumns: false });
-  if (path.hours !== n) throw new SunpaneError('year', spec.year, `sun path has ${path.hours} hours, expected ${n}`);
-  // The sun path's columns are fresh arrays of this call: the series takes them over without copying.
+  const sy = shared ?? sharedYearOf(w, ONE_OFF_TRIG);
+  if (sy.hours !== n || (shared !== undefined && shared.key !== sharedYearKey(w))) throw new SunpaneError('year', spec.year, `the shared sun and weather are not those of this window's site, year and weather (${sy.key})`);
+  const scratch = reuse ? yearScratch(n) : undefined;
+  // With `reuse` the passes write every hour they consider (zeros included), so the rows none of
+  // them considers (night, no light) need clearing only when the scratch last served another year.
+  const col = scratch ? (c: Float64Array) => c : () => new Float64Array(n);
+  if (scratch && scratchOwner.get(n) !== sy) {
+    for (const c of [scratch.gain, scratch.beam, scratch.sky, scratch.ground, scratch.skyUnshaded, scratch.groundUnshaded, scratch.sunlitFraction, scratch.shgc]) c.fill(0);
+    scratchOwner.set(n, sy);
+  }
   const rule = spec.site.daylightSaving;
-  let clockStamp = path.stampSerial;
+  let clockStamp = sy.stampSerial;
   if (rule !== undefined) {
     clockStamp = new Float64Array(n);
     // An hour-ending row moves with its hour's middle; an instant row with itself.
     const half = w.convention === 'hourEnding' ? 1 / 48 : 0;
-    for (let i = 0; i < n; i++) clockStamp[i] = standardToClock(path.stampSerial[i] - half, rule) + half;
+    for (let i = 0; i < n; i++) clockStamp[i] = standardToClock(sy.stampSerial[i] - half, rule) + half;
   }
+  const c = scratch ?? ({} as Partial<AnnualSeries>);
+  // A shared year's columns are read-only to a window: its own copy of the missing hours (conduction
+  // may add some) and, for a full series, of the weather; a one-off year's fresh columns are taken over.
+  const own = shared === undefined;
   const out: AnnualSeries = {
     name: spec.name,
     year: spec.year,
     timeConvention: w.convention,
     hours: n,
     glassArea: w.glassArea,
-    stampSerial: path.stampSerial,
+    stampSerial: sy.stampSerial,
     clockStamp,
     clockRule: describeDaylightSaving(rule),
     yearFit: w.yearFit?.text,
-    sunAltitude: path.altitude,
-    sunAzimuth: path.azimuth,
-    incidence: col(),
-    profileAngle: col(),
-    sunlitFraction: col(),
-    dni: col(),
-    dhi: col(),
-    beam: col(),
-    sky: col(),
-    ground: col(),
-    skyUnshaded: col(),
-    groundUnshaded: col(),
+    sunAltitude: sy.altitude,
+    sunAzimuth: sy.azimuth,
+    incidence: col(c.incidence as Float64Array),
+    profileAngle: col(c.profileAngle as Float64Array),
+    sunlitFraction: col(c.sunlitFraction as Float64Array),
+    dni: own || reuse ? sy.dni : sy.dni.slice(),
+    dhi: own || reuse ? sy.dhi : sy.dhi.slice(),
+    beam: col(c.beam as Float64Array),
+    sky: col(c.sky as Float64Array),
+    ground: col(c.ground as Float64Array),
+    skyUnshaded: col(c.skyUnshaded as Float64Array),
+    groundUnshaded: col(c.groundUnshaded as Float64Array),
     diffuse: { skyViewRatio: w.shade.isotropic, groundViewRatio: w.shade.ground, horizonShare: w.shade.horizon, diffuseShading: w.beamOnly ? 'beamOnly' : 'viewFactors' },
-    shgc: col(),
-    gain: col(),
-    radiant: col(),
-    convective: col(),
-    gainBeam: col(),
-    gainDiffuse: col(),
-    dryBulb: col().fill(Number.NaN),
-    conduction: col(),
+    shgc: col(c.shgc as Float64Array),
+    gain: col(c.gain as Float64Array),
+    radiant: col(c.radiant as Float64Array),
+    convective: col(c.convective as Float64Array),
+    gainBeam: col(c.gainBeam as Float64Array),
+    gainDiffuse: col(c.gainDiffuse as Float64Array),
+    dryBulb: scratch && spec.glazing.uValue === undefined ? scratch.dryBulb : col(c.dryBulb as Float64Array).fill(Number.NaN), // (a summary reads no dry-bulb)
+    conduction: col(c.conduction as Float64Array),
     hasConduction: spec.glazing.uValue !== undefined,
     interiorShade: w.interiorShade,
     radiantFractions: { beam: w.radiantFraction, diffuse: w.radiantFractionDiffuse, conduction: w.radiantFractionConduction },
-    missing: new Uint8Array(n),
+    missing: own ? sy.missing : copyInto(c.missing, sy.missing),
   };
-  fillWeather(w, path.altitude, path.zenith, out, 0, n);
-  runPasses(w, path.altitude, path.azimuth, out, 0, n);
+  // Windows sharing a year share its sky's Perez brightness coefficients too (the same numbers).
+  runPasses(w, sy, out, 0, n, { daylight: sy.daylight, lit: sy.lit, summaryOnly: reuse, shared: shared !== undefined });
   return out;
 }
 
-/** Where the sun path evaluates each hour for a time convention. */
-function sunPathAt(convention: TimeConvention): 'middle' | 'start' {
-  return convention === 'instant' ? 'start' : 'middle';
+/** The sun of each hour as the passes read it: altitude and azimuth [°], their sines and cosines. */
+export interface SunColumns {
+  altitude: Float64Array;
+  azimuth: Float64Array;
+  sinAltitude: Float64Array;
+  cosAltitude: Float64Array;
+  sinAzimuth: Float64Array;
+  cosAzimuth: Float64Array;
+}
+
+/** Which hours the passes consider over a whole year, and what they need not write. */
+interface PassHours {
+  /** The hours with the sun up, in order (shading and SHGC; with `summaryOnly`, the angles too). */
+  daylight: Int32Array;
+  /** The hours with weather and light, in order (irradiance and gain). */
+  lit: Int32Array;
+  /** For a summary: skip what it does not read. */
+  summaryOnly: boolean;
+  /** The year is shared: take its sky's Perez brightness coefficients from it. */
+  shared: boolean;
 }
 
 /**
- * The hourly passes over rows `from` … `to` − 1 (the whole year, or one row): angles, then shading
- * and SHGC, then conduction (with a U-value), then irradiance and gain. The sun's sines and cosines
- * must be in the scratch columns at those rows, and the weather columns of `out` filled.
+ * The hourly passes over rows `from` … `to` − 1 (the whole year, with `hours` saying which hours
+ * each pass needs; or one row): angles, then shading and SHGC, then conduction (with a U-value),
+ * then irradiance and gain. The weather columns of `out` must be filled.
  */
-function runPasses(w: PreparedWindow, altitude: Float64Array, azimuth: Float64Array, out: AnnualSeries, from: number, to: number): void {
+function runPasses(w: PreparedWindow, sun: SharedYear | SunColumns, out: AnnualSeries, from: number, to: number, hours?: PassHours): void {
   const { spec } = w;
   const tilt = spec.surfaceTilt;
   const surfAz = spec.surfaceAzimuth;
@@ -213,15 +241,17 @@ function runPasses(w: PreparedWindow, altitude: Float64Array, azimuth: Float64Ar
   // The window's diffuse shading (view factors, worked out once in prepareWindow) goes in as constants.
   const plane = preparePlane({ surfaceTilt: tilt, surfaceAzimuth: surfAz, groundAlbedo: spec.groundAlbedo, skyModel: w.skyModel, shade: w.shade });
   const dniExtra = plane.needsDniExtra ? dniExtraByDay() : NO_DNI_EXTRA;
+  const brightness = hours?.shared && plane.perez ? perezBrightnessOf(sun as SharedYear) : undefined;
+  const summaryOnly = hours?.summaryOnly === true;
 
   // Short passes over the year, each a function of its own (as in src/core/sun/sunPath.ts: short
   // loops with few live values run much faster than one long loop body, and a function of its own
   // keeps its type feedback): angles for every hour; shading and SHGC for the hours with the sun in
   // front of the window; irradiance and gain for the hours with light.
-  hourlyAngles(from, to, Math.cos(tilt * RAD), Math.sin(tilt * RAD), Math.cos(surfAz * RAD), Math.sin(surfAz * RAD), out.incidence, out.profileAngle);
-  hourlyShading(from, to, shade, w.curve, surfAz, altitude, azimuth, out.incidence, out.sunlitFraction, out.shgc);
+  hourlyAngles(from, to, summaryOnly ? hours?.daylight : undefined, sun, Math.cos(tilt * RAD), Math.sin(tilt * RAD), Math.cos(surfAz * RAD), Math.sin(surfAz * RAD), out.incidence, out.profileAngle, summaryOnly);
+  hourlyShading(from, to, hours?.daylight, shade, w.curve, surfAz, sun, out.incidence, out.sunlitFraction, out.shgc);
   if (out.hasConduction) hourlyConduction(w, out, from, to); // before the gain: a missing dry-bulb marks its hour missing
-  hourlyGain(from, to, plane, dniExtra, w.solarArea * w.interiorAttenuation, w.solarArea * w.interiorAttenuationDiffuse, w.radiantFraction, w.radiantFractionDiffuse, w.curve.diffuse, w.beamOnly ? w.skylineSky : -1, altitude, out);
+  hourlyGain(from, to, hours?.lit, plane, brightness, dniExtra, w.solarArea * w.interiorAttenuation, w.solarArea * w.interiorAttenuationDiffuse, w.radiantFraction, w.radiantFractionDiffuse, w.curve.diffuse, w.beamOnly ? w.skylineSky : -1, sun, out, summaryOnly);
 }
 
 /** One row of a window's year, worked out alone: the row's values of the columns of {@link AnnualSeries}. */
@@ -269,49 +299,71 @@ function cachedSunPath(w: PreparedWindow): SunPathYear {
   return path;
 }
 
+/** The scratch series of {@link annualOfPrepared} with `reuse` (one per year length), and the shared year each last served. */
+const YEAR_SCRATCH = new Map<number, AnnualSeries>();
+const scratchOwner = new Map<number, SharedYear>();
+
+function yearScratch(n: number): AnnualSeries {
+  let s = YEAR_SCRATCH.get(n);
+  if (s === undefined) {
+    s = emptySeries(n);
+    YEAR_SCRATCH.set(n, s);
+  }
+  return s;
+}
+
+/** A series of fresh zero columns `n` long (scratch). */
+function emptySeries(n: number): AnnualSeries {
+  const col = () => new Float64Array(n);
+  return {
+    name: '',
+    year: 0,
+    timeConvention: 'hourEnding',
+    hours: 0,
+    glassArea: 0,
+    stampSerial: col(),
+    clockStamp: col(),
+    clockRule: '',
+    sunAltitude: col(),
+    sunAzimuth: col(),
+    incidence: col(),
+    profileAngle: col(),
+    sunlitFraction: col(),
+    dni: col(),
+    dhi: col(),
+    beam: col(),
+    sky: col(),
+    ground: col(),
+    skyUnshaded: col(),
+    groundUnshaded: col(),
+    diffuse: { skyViewRatio: 1, groundViewRatio: 1, horizonShare: 1, diffuseShading: 'viewFactors' },
+    shgc: col(),
+    gain: col(),
+    radiant: col(),
+    convective: col(),
+    gainBeam: col(),
+    gainDiffuse: col(),
+    dryBulb: col(),
+    conduction: col(),
+    hasConduction: false,
+    interiorShade: false,
+    radiantFractions: { beam: 0, diffuse: 0, conduction: 0 },
+    missing: new Uint8Array(n),
+  };
+}
+
+/** Copies `from` into `into` when given (a scratch column), else into a fresh copy. */
+function copyInto<T extends Float64Array | Uint8Array>(into: T | undefined, from: T): T {
+  if (into === undefined) return from.slice() as T;
+  into.set(from);
+  return into;
+}
+
 /** Scratch series for one-row calls: full-length columns, only the computed row is meaningful. */
 let rowScratch: AnnualSeries | undefined;
 
 function scratchSeries(w: PreparedWindow, path: SunPathYear): AnnualSeries {
-  const n = 8784;
-  if (rowScratch === undefined) {
-    const col = () => new Float64Array(n);
-    rowScratch = {
-      name: '',
-      year: 0,
-      timeConvention: 'hourEnding',
-      hours: 0,
-      glassArea: 0,
-      stampSerial: col(),
-      clockStamp: col(),
-      clockRule: '',
-      sunAltitude: col(),
-      sunAzimuth: col(),
-      incidence: col(),
-      profileAngle: col(),
-      sunlitFraction: col(),
-      dni: col(),
-      dhi: col(),
-      beam: col(),
-      sky: col(),
-      ground: col(),
-      skyUnshaded: col(),
-      groundUnshaded: col(),
-      diffuse: { skyViewRatio: 1, groundViewRatio: 1, horizonShare: 1, diffuseShading: 'viewFactors' },
-      shgc: col(),
-      gain: col(),
-      radiant: col(),
-      convective: col(),
-      gainBeam: col(),
-      gainDiffuse: col(),
-      dryBulb: col(),
-      conduction: col(),
-      hasConduction: false,
-      interiorShade: false,
-      radiantFractions: { beam: 0, diffuse: 0, conduction: 0 },
-      missing: new Uint8Array(n),
-    };
-  }
+  if (rowScratch === undefined) rowScratch = emptySeries(8784);
   rowScratch.name = w.spec.name;
   rowScratch.year = w.spec.year;
   rowScratch.timeConvention = w.convention;
@@ -335,10 +387,6 @@ export function annualRowOfPrepared(w: PreparedWindow, row: number, weatherHour?
   const path = cachedSunPath(w);
   if (!(row >= 0 && row < path.hours)) throw new SunpaneError('row', row, `must be a row of ${w.spec.year}: 0 to ${path.hours - 1}`);
   const out = scratchSeries(w, path);
-  SIN_ALT_SCRATCH[row] = path.sinAltitude![row];
-  COS_ALT_SCRATCH[row] = path.cosAltitude![row];
-  SIN_GAMMA_SCRATCH[row] = path.sinAzimuth![row];
-  COS_GAMMA_SCRATCH[row] = path.cosAzimuth![row];
   for (const c of [out.incidence, out.profileAngle, out.sunlitFraction, out.dni, out.dhi, out.beam, out.sky, out.ground, out.skyUnshaded, out.groundUnshaded, out.shgc, out.gain, out.radiant, out.convective, out.gainBeam, out.gainDiffuse, out.conduction]) c[row] = 0;
   out.dryBulb[row] = Number.NaN;
   out.missing[row] = 0;
@@ -346,7 +394,7 @@ export function annualRowOfPrepared(w: PreparedWindow, row: number, weatherHour?
     out.dni[row] = requireRange('dni', weatherHour.dni, 0, MAX_IRRADIANCE, 'W/m²');
     out.dhi[row] = requireRange('dhi', weatherHour.dhi, 0, MAX_IRRADIANCE, 'W/m²');
   } else fillWeather(w, path.altitude, path.zenith, out, row, row + 1);
-  runPasses(w, path.altitude, path.azimuth, out, row, row + 1);
+  runPasses(w, { altitude: path.altitude, azimuth: path.azimuth, sinAltitude: path.sinAltitude!, cosAltitude: path.cosAltitude!, sinAzimuth: path.sinAzimuth!, cosAzimuth: path.cosAzimuth! }, out, row, row + 1);
   return {
     row,
     stampSerial: path.stampSerial[row],
@@ -417,68 +465,73 @@ function hourlyConduction(w: PreparedWindow, out: AnnualSeries, from: number, to
 
 /** Zeros by day of the year, for sky models that need no extraterrestrial irradiance. */
 const NO_DNI_EXTRA = new Float64Array(367);
-let dniExtraTable: Float64Array | undefined;
-
-/**
- * Extraterrestrial normal irradiance by day of the year [W/m²], index 1…366 (Spencer 1971, as
- * src/core/sky/planeIrradiance.ts uses), worked out on first use and kept: it depends on the day only.
- */
-function dniExtraByDay(): Float64Array {
-  if (dniExtraTable === undefined) {
-    const table = new Float64Array(367);
-    for (let d = 1; d <= 366; d++) table[d] = extraterrestrialSpencer(d);
-    dniExtraTable = table;
-  }
-  return dniExtraTable;
-}
 
 /**
  * Per-hour scratch columns (a year has at most 8784 hours), reused since one call runs at a time:
- * the sun's sin β and cos β (from the sun path), sin γ and cos γ (the sun path's sines and cosines
- * of the azimuth, turned into those of γ in place), and cos θ.
+ * sin γ and cos γ of the horizontal shadow angle, and cos θ, left by pass 1 for the later passes.
  */
-const SIN_ALT_SCRATCH = new Float64Array(8784);
-const COS_ALT_SCRATCH = new Float64Array(8784);
 const SIN_GAMMA_SCRATCH = new Float64Array(8784);
 const COS_GAMMA_SCRATCH = new Float64Array(8784);
 const COS_THETA_SCRATCH = new Float64Array(8784);
 
 /**
- * Pass 1 of {@link annualOfPrepared}: incidence and profile angle of every hour, day and night.
+ * Pass 1 of {@link annualOfPrepared}: incidence and profile angle of every hour, day and night (for
+ * a summary: the incidence of the hours with the sun up).
  * Same formulas as src/core/sun/surfaceAngles.ts incidenceAngle / profileAngle (D&B Eq. 1.6.3, 1.9.1a) with
  * the surface's trig worked out once and without the per-call argument checks; the sun's sines and
  * cosines come with the sun path (within a few ulps of Math.sin / Math.cos of its columns), those of
  * γ = surface azimuth − sun azimuth by the difference formulas. Leaves sin γ, cos γ and cos θ in the
  * scratch columns for the later passes.
- * @param from - first row
- * @param n - row after the last
+ * @param from - first row (when no list)
+ * @param n - row after the last (when no list)
+ * @param list - the hours to consider, in order, instead of the range (the daylight hours of a summary)
+ * @param sun - the sun's sines and cosines by hour
  * @param cosTilt - cos Σ
  * @param sinTilt - sin Σ
  * @param cosSurf - cos of the surface azimuth
  * @param sinSurf - sin of the surface azimuth
  * @param incidence - filled with θ [°], 0…180
  * @param profileAngle - filled with Ω [°] (180, not −180, for the sun straight behind)
+ * @param summaryOnly - for a summary: the incidence only (180° behind the plane), no profile angle
  */
-function hourlyAngles(from: number, n: number, cosTilt: number, sinTilt: number, cosSurf: number, sinSurf: number, incidence: Float64Array, profileAngle: Float64Array): void {
-  const sinAlt = SIN_ALT_SCRATCH;
-  const cosAlt = COS_ALT_SCRATCH;
-  const sinG = SIN_GAMMA_SCRATCH; // in: sin of the sun azimuth; out: sin γ
-  const cosG = COS_GAMMA_SCRATCH; // in: cos of the sun azimuth; out: cos γ
+function hourlyAngles(
+  from: number,
+  n: number,
+  list: Int32Array | undefined,
+  sun: SunColumns,
+  cosTilt: number,
+  sinTilt: number,
+  cosSurf: number,
+  sinSurf: number,
+  incidence: Float64Array,
+  profileAngle: Float64Array,
+  summaryOnly: boolean,
+): void {
+  const { sinAltitude: sinAlt, cosAltitude: cosAlt, sinAzimuth: sinAz, cosAzimuth: cosAz } = sun;
+  const sinG = SIN_GAMMA_SCRATCH;
+  const cosG = COS_GAMMA_SCRATCH;
   const cosT = COS_THETA_SCRATCH;
   const deg = DEG;
-  for (let i = from; i < n; i++) {
+  const count = list ? list.length : n;
+  for (let k = list ? 0 : from; k < count; k++) {
+    const i = list ? list[k] : k;
     const sinBeta = sinAlt[i];
     const cosBeta = cosAlt[i];
-    const sinA = sinG[i];
-    const cosA = cosG[i];
+    const sinA = sinAz[i];
+    const cosA = cosAz[i];
     const sinGamma = sinSurf * cosA - cosSurf * sinA;
     const cosGamma = cosSurf * cosA + sinSurf * sinA;
     const cosTheta = sinBeta * cosTilt + cosBeta * sinTilt * cosGamma; // D&B Eq. 1.6.3
-    const omega = Math.atan2(sinBeta, cosBeta * cosGamma) * deg; // D&B Eq. 1.9.1a
     sinG[i] = sinGamma;
     cosG[i] = cosGamma;
     cosT[i] = cosTheta;
+    if (summaryOnly) {
+      // A summary reads no profile angle, and the incidence only as "in front of the plane or not".
+      incidence[i] = cosTheta < 0 ? 180 : acosClamped(cosTheta) * deg;
+      continue;
+    }
     incidence[i] = acosClamped(cosTheta) * deg;
+    const omega = Math.atan2(sinBeta, cosBeta * cosGamma) * deg; // D&B Eq. 1.9.1a
     profileAngle[i] = omega === -180 ? 180 : omega;
   }
 }
@@ -487,13 +540,13 @@ function hourlyAngles(from: number, n: number, cosTilt: number, sinTilt: number,
  * Pass 2 of {@link annualOfPrepared}: sunlit fraction and beam SHGC for the hours with the sun up and
  * in front of the window (θ < 90°); other rows stay 0 (no shadow work with the sun down or behind
  * the wall). Geometry for every such row, missing weather or not.
- * @param from - first row
- * @param n - row after the last
+ * @param from - first row (when no list)
+ * @param n - row after the last (when no list)
+ * @param list - the hours to consider, in order, instead of the range (the daylight hours of a year)
  * @param shade - the prepared shading of a vertical window, or undefined (sunlit fraction 1)
  * @param curve - the glazing's SHGC curve
  * @param surfAz - surface azimuth [°]
- * @param alt - sun altitude [°]
- * @param az - sun azimuth [°]
+ * @param sun - the sun's altitude and azimuth [°] and their sines and cosines by hour
  * @param incidence - θ [°] from pass 1
  * @param sunlitFraction - filled with the sunlit fraction, 0…1
  * @param shgc - filled with SHGC(θ)
@@ -501,23 +554,28 @@ function hourlyAngles(from: number, n: number, cosTilt: number, sinTilt: number,
 function hourlyShading(
   from: number,
   n: number,
+  list: Int32Array | undefined,
   shade: PreparedShading | undefined,
   curve: ShgcCurve,
   surfAz: number,
-  alt: Float64Array,
-  az: Float64Array,
+  sun: SunColumns,
   incidence: Float64Array,
   sunlitFraction: Float64Array,
   shgc: Float64Array,
 ): void {
-  const sinAlt = SIN_ALT_SCRATCH;
-  const cosAlt = COS_ALT_SCRATCH;
+  const { altitude: alt, azimuth: az, sinAltitude: sinAlt, cosAltitude: cosAlt } = sun;
   const sinG = SIN_GAMMA_SCRATCH;
   const cosG = COS_GAMMA_SCRATCH;
-  for (let i = from; i < n; i++) {
+  const count = list ? list.length : n;
+  for (let k = list ? 0 : from; k < count; k++) {
+    const i = list ? list[k] : k;
     const a = alt[i];
     const theta = incidence[i];
-    if (!(a > 0 && theta < 90)) continue;
+    if (!(a > 0 && theta < 90)) {
+      sunlitFraction[i] = 0; // (so the columns start; written for the scratch series of a summary)
+      shgc[i] = 0;
+      continue;
+    }
     const s = az[i];
     const gamma = wrap180(surfAz - s); // horizontal shadow angle (src/core/shading/sunlit.ts convention)
     sunlitFraction[i] = shade !== undefined ? shade.sunlitInWallFrame(a, s, gamma, sinAlt[i], cosAlt[i], sinG[i], cosG[i]) : 1;
@@ -528,9 +586,11 @@ function hourlyShading(
 /**
  * Pass 3 of {@link annualOfPrepared}: irradiance on the plane and gain for the hours with weather
  * and light; missing and dark rows stay 0.
- * @param from - first row
- * @param n - row after the last
+ * @param from - first row (when no list)
+ * @param n - row after the last (when no list)
+ * @param list - the hours to consider, in order, instead of the range (the lit hours of a year)
  * @param plane - the prepared plane
+ * @param brightness - a shared year's Perez brightness coefficients by hour, when the plane may use them
  * @param dniExtra - extraterrestrial normal irradiance by day of the year [W/m²] (index 1…366)
  * @param kb - area × beam interior attenuation [m²]
  * @param kd - area × diffuse interior attenuation [m²]
@@ -539,15 +599,34 @@ function hourlyShading(
  * @param shgcDiffuse - diffuse SHGC [-]
  * @param circumsolarFixed - the multiplier on the circumsolar part in the beam-only treatment, or −1:
  *   the hour's sunlit fraction ({@link circumsolarShade})
- * @param alt - sun altitude [°]
+ * @param sun - the sun's altitude [°] and its sine by hour
  * @param out - the series: reads dni, dhi, missing, sunlitFraction, shgc; fills beam, sky, ground, their unshaded columns, gain (and its beam and diffuse parts), radiant, convective
+ * @param summaryOnly - leave out the gain's radiant/convective and beam/diffuse columns (a summary reads none of them)
  */
-function hourlyGain(from: number, n: number, plane: PreparedPlane, dniExtra: Float64Array, kb: number, kd: number, frb: number, frd: number, shgcDiffuse: number, circumsolarFixed: number, alt: Float64Array, out: AnnualSeries): void {
+function hourlyGain(
+  from: number,
+  n: number,
+  list: Int32Array | undefined,
+  plane: PreparedPlane,
+  brightness: PerezBrightnessColumns | undefined,
+  dniExtra: Float64Array,
+  kb: number,
+  kd: number,
+  frb: number,
+  frd: number,
+  shgcDiffuse: number,
+  circumsolarFixed: number,
+  sun: SunColumns,
+  out: AnnualSeries,
+  summaryOnly: boolean,
+): void {
   const { dni: dniColumn, dhi: dhiColumn, missing, sunlitFraction, shgc, beam, sky, ground, skyUnshaded, groundUnshaded, gain, radiant, convective, gainBeam, gainDiffuse } = out;
-  const sinAlt = SIN_ALT_SCRATCH;
+  const { altitude: alt, sinAltitude: sinAlt } = sun;
   const cosT = COS_THETA_SCRATCH;
   const parts: PlaneParts = { beam: 0, sky: 0, ground: 0, total: 0, skyUnshaded: 0, groundUnshaded: 0 };
-  for (let i = from; i < n; i++) {
+  const count = list ? list.length : n;
+  for (let k = list ? 0 : from; k < count; k++) {
+    const i = list ? list[k] : k;
     if (missing[i] === 1) continue;
     const dni = dniColumn[i];
     const dhi = dhiColumn[i];
@@ -555,88 +634,24 @@ function hourlyGain(from: number, n: number, plane: PreparedPlane, dniExtra: Flo
     const sunUp = a > 0;
     if (dhi === 0 && (dni === 0 || !sunUp)) continue; // dark hour: irradiance and gain stay 0
     const lit = sunlitFraction[i];
-    plane.irradiance(parts, sunUp ? dni : 0, dhi, a, sinAlt[i], cosT[i], dniExtra[((i / 24) | 0) + 1], circumsolarFixed < 0 ? lit : circumsolarFixed);
+    const circumsolar = circumsolarFixed < 0 ? lit : circumsolarFixed;
+    if (brightness === undefined) plane.irradiance(parts, sunUp ? dni : 0, dhi, a, sinAlt[i], cosT[i], dniExtra[((i / 24) | 0) + 1], circumsolar);
+    else plane.irradianceShared(parts, sunUp ? dni : 0, dhi, a, sinAlt[i], cosT[i], dniExtra[((i / 24) | 0) + 1], circumsolar, brightness, i);
     // Gain equation of src/core/gain/windowGain.ts windowGainParts, inlined for the hourly path.
     const qb = kb * parts.beam * lit * shgc[i];
     const qd = kd * (parts.sky + parts.ground) * shgcDiffuse;
     const q = qb + qd;
-    const r = frb * qb + frd * qd;
     beam[i] = parts.beam;
     sky[i] = parts.sky;
     ground[i] = parts.ground;
     skyUnshaded[i] = parts.skyUnshaded;
     groundUnshaded[i] = parts.groundUnshaded;
     gain[i] = q;
+    if (summaryOnly) continue; // a summary reads none of the parts below
+    const r = frb * qb + frd * qd;
     gainBeam[i] = qb;
     gainDiffuse[i] = qd;
     radiant[i] = r;
     convective[i] = q - r;
-  }
-}
-
-/**
- * Fills the dni, dhi and missing columns of rows `from` … `to` − 1 from the window's weather, one loop per kind (no switch
- * per hour): clear-sky models at each hour's sun (0 with the sun down), a supplied series as given
- * (a non-finite value marks the row missing), or a supplied GHI series split by Erbs et al.
- */
-function fillWeather(w: PreparedWindow, alt: Float64Array, zen: Float64Array, out: AnnualSeries, from: number, to: number): void {
-  const weather = w.spec.weather;
-  const { dni, dhi, missing } = out;
-  const months = monthOfDay(w.spec.year);
-  switch (weather.kind) {
-    case 'ashraeClearSky':
-      for (let day = (from / 24) | 0; day * 24 < to; day++) {
-        const month = months[day];
-        const tauB = monthlyValue(weather.tauB, month);
-        const tauD = monthlyValue(weather.tauD, month);
-        for (let i = Math.max(from, day * 24); i < Math.min(to, day * 24 + 24); i++) {
-          if (!(alt[i] > 0)) continue; // sun down: no irradiance (the columns start at 0)
-          const c = ashraeClearSky(alt[i], day + 1, tauB, tauD);
-          dni[i] = c.dni;
-          dhi[i] = c.dhi;
-        }
-      }
-      return;
-    case 'ineichenClearSky': {
-      const elevation = w.spec.site.elevation ?? 0;
-      for (let day = (from / 24) | 0; day * 24 < to; day++) {
-        const linke = monthlyValue(weather.linkeTurbidity, months[day]);
-        for (let i = Math.max(from, day * 24); i < Math.min(to, day * 24 + 24); i++) {
-          if (!(alt[i] > 0)) continue;
-          const c = ineichenPerezClearSky(alt[i], day + 1, linke, elevation);
-          dni[i] = c.dni;
-          dhi[i] = c.dhi;
-        }
-      }
-      return;
-    }
-    case 'measured': {
-      const dniIn = weather.dni;
-      const dhiIn = weather.dhi;
-      const rowOf = w.yearFit!.rowOf;
-      for (let i = from; i < to; i++) {
-        const b = dniIn[rowOf[i]];
-        const d = dhiIn[rowOf[i]];
-        if (Number.isFinite(b) && Number.isFinite(d)) {
-          dni[i] = b;
-          dhi[i] = d;
-        } else missing[i] = 1;
-      }
-      return;
-    }
-    case 'globalHorizontal': {
-      const ghiIn = weather.ghi;
-      const rowOf = w.yearFit!.rowOf;
-      for (let i = from; i < to; i++) {
-        const ghi = ghiIn[rowOf[i]];
-        if (!Number.isFinite(ghi)) {
-          missing[i] = 1;
-          continue;
-        }
-        const d = decomposeErbs(ghi, zen[i], ((i / 24) | 0) + 1);
-        dni[i] = d.dni;
-        dhi[i] = d.dhi;
-      }
-    }
   }
 }

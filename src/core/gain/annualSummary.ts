@@ -3,7 +3,10 @@
  * hours, mean sunlit fraction while the sun is on the wall, how much of the beam and of the diffuse
  * light the window's shading takes away over the year, and the count of missing hours.
  */
-import { type AnnualSeries, monthOfDay } from './annual';
+import { type AnnualSeries, annualOfPrepared, monthOfDay } from './annual';
+import type { SharedYears } from './sharedYear';
+import type { WindowSpec } from './window';
+import { prepareWindow } from './prepared';
 
 /** What one year of a window adds up to. */
 export interface AnnualSummary {
@@ -64,29 +67,37 @@ export function summarizeAnnual(series: AnnualSeries): AnnualSummary {
   let diffuseKept = 0;
   let diffuseAll = 0;
   const months = monthOfDay(series.year);
-  for (let i = 0; i < series.hours; i++) {
-    const month = months[(i / 24) | 0];
-    if (series.missing[i] === 1) {
-      missingHours++;
-      monthlyMissingHours[month - 1]++;
-    } else {
-      const q = series.gain[i];
-      monthlyWh[month - 1] += q;
-      if (q > peakW) {
-        peakW = q;
-        peakIndex = i;
+  const { hours, missing, gain, beam, shgc, sky, ground, skyUnshaded, groundUnshaded, sunlitFraction, sunAltitude, incidence } = series;
+  // Day by day (a day lies in one month), each month's energy added up hour by hour in order.
+  for (let day = 0, i = 0; i < hours; day++) {
+    const m = months[day] - 1;
+    let wh = monthlyWh[m];
+    for (const end = i + 24; i < end; i++) {
+      const fraction = sunlitFraction[i];
+      if (missing[i] === 1) {
+        missingHours++;
+        monthlyMissingHours[m]++;
+      } else {
+        const q = gain[i];
+        wh += q;
+        if (q > peakW) {
+          peakW = q;
+          peakIndex = i;
+        }
+        const bm = beam[i];
+        if (bm > 0 && fraction > 0) sunlitHours++;
+        const b = bm * shgc[i];
+        beamAll += b;
+        beamKept += b * fraction;
+        diffuseKept += sky[i] + ground[i];
+        diffuseAll += skyUnshaded[i] + groundUnshaded[i];
       }
-      if (series.beam[i] > 0 && series.sunlitFraction[i] > 0) sunlitHours++;
-      const b = series.beam[i] * series.shgc[i];
-      beamAll += b;
-      beamKept += b * series.sunlitFraction[i];
-      diffuseKept += series.sky[i] + series.ground[i];
-      diffuseAll += series.skyUnshaded[i] + series.groundUnshaded[i];
+      if (sunAltitude[i] > 0 && incidence[i] < 90) {
+        sunOnWallHours++;
+        sunlitSum += fraction;
+      }
     }
-    if (series.sunAltitude[i] > 0 && series.incidence[i] < 90) {
-      sunOnWallHours++;
-      sunlitSum += series.sunlitFraction[i];
-    }
+    monthlyWh[m] = wh;
   }
   const monthlyKWh = monthlyWh.map((wh) => wh / 1000);
   return {
@@ -109,4 +120,24 @@ function cutOf(kept: number, all: number): number {
   if (!(all > 0)) return 0;
   const cut = 1 - kept / all;
   return cut < 0 ? 0 : cut > 1 ? 1 : cut;
+}
+
+/** A window's year in figures, with its glass area. */
+export interface WindowYearFigures {
+  glassArea: number;
+  summary: AnnualSummary;
+}
+
+/**
+ * The summary of one window's year when many windows share their sites' sun and weather (a
+ * schedule): the same numbers as `summarizeAnnual(annualSeries(spec))`, with the sun's path and the
+ * weather taken from `years` (worked out once per site, year and weather) and no hourly columns
+ * kept (the series is written into scratch columns; what a summary does not read is skipped).
+ * @param spec - the window (validated; errors name the field by its path)
+ * @param years - the shared years of the run
+ */
+export function summarizeWindowYear(spec: WindowSpec, years: SharedYears): WindowYearFigures {
+  const w = prepareWindow(spec);
+  const series = annualOfPrepared(w, years.of(w), true);
+  return { glassArea: series.glassArea, summary: summarizeAnnual(series) };
 }

@@ -6,7 +6,8 @@
  * This index is the folder's only public door: code outside the folder imports from here.
  */
 export { type AnnualSeries, annualSeries } from './annual';
-export { type AnnualSummary, summarizeAnnual } from './annualSummary';
+export { type AnnualSummary, summarizeAnnual, summarizeWindowYear, type WindowYearFigures } from './annualSummary';
+export { type SharedYear, SharedYears, sharedYearKey } from './sharedYear';
 export { type DesignDayGainMonth, type DesignDayGainOptions, designDayGains, peakOfDay } from './designDay';
 export { gainSteps } from './gainSteps';
 export { type DiffuseShading, type Weather, type WindowSpec } from './window';

@@ -121,6 +121,21 @@ export function perezPartsKernel(
   coefficients: readonly PerezCoefficientRow[],
 ): PerezParts {
   if (dhi <= 0 || sunZenith >= 90) return perezIsotropicOnly(out, isotropicView, dhi);
+  perezBrightnessKernel(out, dhi, dni, dniExtra, sunZenith, airMass, coefficients);
+  return perezCombineKernel(out, isotropicView, sinTilt, dhi, cosZenith, cosIncidence);
+}
+
+/** The brightness part of {@link PerezParts}: what the sky is, whatever the plane. */
+export type PerezBrightness = Pick<PerezParts, 'epsilon' | 'delta' | 'bin' | 'f1' | 'f2'>;
+
+/**
+ * First half of {@link perezPartsKernel}: the sky's clearness ε, brightness Δ, bin and brightness
+ * coefficients F1 and F2 (Perez et al. 1990, Eq. 1, 2, 9), which depend on the hour's sky and sun
+ * only, not on the plane — so that windows of one site can share them hour by hour. Arguments
+ * already checked; the sun up (zenith < 90°) and some diffuse (> 0).
+ * @returns `out`, with epsilon, delta, bin, f1 and f2 written
+ */
+export function perezBrightnessKernel<T extends PerezBrightness>(out: T, dhi: number, dni: number, dniExtra: number, sunZenith: number, airMass: number, coefficients: readonly PerezCoefficientRow[]): T {
   const zRad = sunZenith * RAD;
   const kz3 = PEREZ_KAPPA * zRad * zRad * zRad;
   const epsilon = ((dhi + dni) / dhi + kz3) / (1 + kz3); // Eq. 1
@@ -128,19 +143,28 @@ export function perezPartsKernel(
   const bin = perezBin(epsilon);
   const row = coefficients[bin - 1];
   const f1Raw = row[0] + row[1] * delta + row[2] * zRad; // Eq. 9
-  const f1 = f1Raw > 0 ? f1Raw : 0;
-  const f2 = row[3] + row[4] * delta + row[5] * zRad; // Eq. 9
+  out.epsilon = epsilon;
+  out.delta = delta;
+  out.bin = bin;
+  out.f1 = f1Raw > 0 ? f1Raw : 0;
+  out.f2 = row[3] + row[4] * delta + row[5] * zRad; // Eq. 9
+  return out;
+}
+
+/**
+ * Second half of {@link perezPartsKernel}: the sky diffuse on a plane from the hour's brightness
+ * coefficients `out.f1` and `out.f2` (isotropic, circumsolar and horizon-band parts, Duffie &
+ * Beckman Eq. 2.16.14). Arguments as {@link perezPartsKernel}; the sun up and some diffuse.
+ * @returns `out`, with isotropic, circumsolar, horizon and total written
+ */
+export function perezCombineKernel(out: PerezParts, isotropicView: number, sinTilt: number, dhi: number, cosZenith: number, cosIncidence: number): PerezParts {
+  const f1 = out.f1;
   const a = cosIncidence > 0 ? cosIncidence : 0;
   const b = cosZenith > COS_85 ? cosZenith : COS_85;
   const isotropic = dhi * (1 - f1) * isotropicView;
   const circumsolar = (dhi * f1 * a) / b;
-  const horizon = dhi * f2 * sinTilt;
+  const horizon = dhi * out.f2 * sinTilt;
   const sum = isotropic + circumsolar + horizon; // Duffie & Beckman Eq. 2.16.14 (sky terms)
-  out.epsilon = epsilon;
-  out.delta = delta;
-  out.bin = bin;
-  out.f1 = f1;
-  out.f2 = f2;
   out.isotropic = isotropic;
   out.circumsolar = circumsolar;
   out.horizon = horizon;

@@ -13,7 +13,7 @@
 import { airMassKastenYoungFromSine } from './airMass';
 import { RAD, SunpaneError, requireRange } from '../common';
 import { extraterrestrialSpencer, requireDayOfYear } from './extraterrestrial';
-import { PEREZ_1990_COMPOSITE, type PerezParts, perezPartsKernel } from './perez1990';
+import { PEREZ_1990_COMPOSITE, type PerezBrightness, type PerezParts, perezBrightnessKernel, perezCombineKernel, perezPartsKernel } from './perez1990';
 import { incidenceAngle } from '../sun';
 import { COS_85, requireIrradiance, verticalDiffuseRatioFromCosine } from './transposition';
 
@@ -203,7 +203,7 @@ export interface PlaneParts {
  * altitude and the cosine of the incidence angle, `circumsolar` the hour's multiplier on the
  * circumsolar part (the sunlit fraction); writes `out`.
  */
-function planeKernel(out: PlaneParts, p: PlaneConstants, dni: number, dhi: number, altitude: number, sinAltitude: number, cosIncidence: number, dniExtra: number, circumsolar: number): void {
+function planeKernel(out: PlaneParts, p: PlaneConstants, dni: number, dhi: number, altitude: number, sinAltitude: number, cosIncidence: number, dniExtra: number, circumsolar: number, shared?: PerezBrightnessColumns, hour = 0): void {
   const sunUp = altitude > 0;
   const beam = sunUp && cosIncidence > 0 ? dni * cosIncidence : 0;
   const ghi = (sunUp ? dni * sinAltitude : 0) + dhi;
@@ -223,7 +223,13 @@ function planeKernel(out: PlaneParts, p: PlaneConstants, dni: number, dhi: numbe
     skyUnshaded = isotropic + disc; // D&B Eq. 2.16.4
     sky = isotropic * p.isotropicShade + disc * circumsolar;
   } else {
-    const parts = perezPartsKernel(p.perez, p.isotropicView, p.sinTilt, dhi, dni, dniExtra, 90 - altitude, sinAltitude, airMassKastenYoungFromSine(altitude, sinAltitude), cosIncidence, PEREZ_1990_COMPOSITE);
+    let parts: PerezParts;
+    if (shared !== undefined && dhi > 0) {
+      // The hour's brightness coefficients, worked out once for every plane under this sky (perezBrightnessColumns).
+      p.perez.f1 = shared.f1[hour];
+      p.perez.f2 = shared.f2[hour];
+      parts = perezCombineKernel(p.perez, p.isotropicView, p.sinTilt, dhi, sinAltitude, cosIncidence);
+    } else parts = perezPartsKernel(p.perez, p.isotropicView, p.sinTilt, dhi, dni, dniExtra, 90 - altitude, sinAltitude, airMassKastenYoungFromSine(altitude, sinAltitude), cosIncidence, PEREZ_1990_COMPOSITE);
     skyUnshaded = parts.total;
     const shaded = parts.isotropic * p.isotropicShade + parts.circumsolar * circumsolar + parts.horizon * p.horizonShade;
     sky = shaded > 0 ? shaded : 0; // floored at 0 as the Perez total is
@@ -262,6 +268,47 @@ export interface PreparedPlane {
    * @param circumsolar - the hour's multiplier on the circumsolar part, 0…1 (the sunlit fraction; 1 unshaded)
    */
   irradiance(out: PlaneParts, dni: number, dhi: number, sunAltitude: number, sinAltitude: number, cosIncidence: number, dniExtra: number, circumsolar: number): void;
+  /** Whether the sky model is Perez 1990 (whose brightness coefficients planes may share hour by hour). */
+  readonly perez: boolean;
+  /**
+   * {@link irradiance} with the Perez brightness coefficients of the hour taken from `shared` (row
+   * `hour`) instead of worked out again: the same numbers, for many planes under one sky. Other sky
+   * models ignore `shared`.
+   */
+  irradianceShared(out: PlaneParts, dni: number, dhi: number, sunAltitude: number, sinAltitude: number, cosIncidence: number, dniExtra: number, circumsolar: number, shared: PerezBrightnessColumns, hour: number): void;
+}
+
+/** Perez brightness coefficients F1 and F2 of every hour of a sky (0 where there is no sun or no diffuse). */
+export interface PerezBrightnessColumns {
+  f1: Float64Array;
+  f2: Float64Array;
+}
+
+/**
+ * The Perez (1990) brightness coefficients of every hour under one sky, for planes that share it
+ * ({@link PreparedPlane.irradianceShared}): the same first half of the model that
+ * {@link planeIrradiance} works out per plane (perezBrightnessKernel), at the same sun.
+ * @param dni - direct normal irradiance by hour [W/m²] (not checked)
+ * @param dhi - diffuse horizontal irradiance by hour [W/m²] (not checked)
+ * @param altitude - sun altitude by hour [°]
+ * @param sinAltitude - its sine
+ * @param dniExtraOfHour - extraterrestrial normal irradiance of the hour's day [W/m²]
+ * @param hours - the hours to fill (others stay 0)
+ */
+export function perezBrightnessColumns(dni: ArrayLike<number>, dhi: ArrayLike<number>, altitude: ArrayLike<number>, sinAltitude: ArrayLike<number>, dniExtraOfHour: (hour: number) => number, hours: ArrayLike<number>): PerezBrightnessColumns {
+  const n = altitude.length;
+  const f1 = new Float64Array(n);
+  const f2 = new Float64Array(n);
+  const b: PerezBrightness = { epsilon: 1, delta: 0, bin: 1, f1: 0, f2: 0 };
+  for (let k = 0; k < hours.length; k++) {
+    const i = hours[k];
+    const a = altitude[i];
+    if (!(a > 0) || !(dhi[i] > 0)) continue;
+    perezBrightnessKernel(b, dhi[i], dni[i], dniExtraOfHour(i), 90 - a, airMassKastenYoungFromSine(a, sinAltitude[i]), PEREZ_1990_COMPOSITE);
+    f1[i] = b.f1;
+    f2[i] = b.f2;
+  }
+  return { f1, f2 };
 }
 
 /**
@@ -282,5 +329,7 @@ export function preparePlane(input: PlaneSurfaceInput): PreparedPlane {
   return {
     needsDniExtra: model !== 'isotropic' && model !== 'ashraeClearDay',
     irradiance: (out, dni, dhi, sunAltitude, sinAltitude, cosIncidence, dniExtra, circumsolar) => planeKernel(out, plane, dni, dhi, sunAltitude, sinAltitude, cosIncidence, dniExtra, circumsolar),
+    perez: model === 'perez1990',
+    irradianceShared: (out, dni, dhi, sunAltitude, sinAltitude, cosIncidence, dniExtra, circumsolar, shared, hour) => planeKernel(out, plane, dni, dhi, sunAltitude, sinAltitude, cosIncidence, dniExtra, circumsolar, shared, hour),
   };
 }

@@ -10,5 +10,5 @@ export { sunEvents } from './events';
 export { type Site } from './site';
 export { standardPressure, type SunOptions, type SunPosition, sunPosition } from './spa';
 export { clearSunNodes, sunPositionFromNodes } from './sunNodes';
-export { annualSunPath, type SunPathYear } from './sunPath';
+export { annualSunPath, type SunPathYear, type SunTrigColumns } from './sunPath';
 export { incidenceAngle, profileAngle, wallSolarAzimuth } from './surfaceAngles';

@@ -1,0 +1,106 @@
+/**
+ * Windows sharing their site's sun and weather (src/core/gain/sharedYear.ts): a window's year and
+ * summary from a shared year are the same numbers, to the last bit, as from its own year
+ * (annualSeries, which the annual tests hold to the one-hour path); shared years are kept once per
+ * site, year and weather, and a shared year of another site is refused. The windows are invented
+ * test inputs (tests/core/gain/gainFixtures.ts).
+ */
+import { SunpaneError } from '../../../src/core/common/errors';
+import { annualOfPrepared, annualSeries } from '../../../src/core/gain/annual';
+import { summarizeAnnual, summarizeWindowYear } from '../../../src/core/gain/annualSummary';
+import { SharedYears, sharedYearOf } from '../../../src/core/gain/sharedYear';
+import type { WindowSpec } from '../../../src/core/gain/window';
+import { prepareWindow } from '../../../src/core/gain/prepared';
+import { ashraeClearSky } from '../../../src/core/sky/clearSky';
+import { annualSunPath } from '../../../src/core/sun/sunPath';
+import { civilToSerial } from '../../../src/core/time/calendar';
+import { baseSpec, shadedSpec } from './gainFixtures';
+
+const SITE = baseSpec().site;
+
+function measured(year = 2026): { dni: Float64Array; dhi: Float64Array } {
+  const path = annualSunPath(year, SITE);
+  const dni = new Float64Array(path.hours);
+  const dhi = new Float64Array(path.hours);
+  for (let i = 0; i < path.hours; i++) {
+    const c = ashraeClearSky(path.altitude[i], Math.floor(i / 24) + 1, 0.4, 2.3);
+    // Some hours missing, some dark by day (a reading of zero): the hours a window's passes skip.
+    const dark = i % 211 === 0;
+    dni[i] = i % 97 === 0 ? NaN : dark ? 0 : c.dni * (i % 5 === 0 ? 0.4 : 1);
+    dhi[i] = dark ? 0 : c.dhi;
+  }
+  return { dni, dhi };
+}
+
+const WEATHER = measured();
+/** Outdoor dry-bulb [°C] for the window with a U-value: a daily swing, one hour missing. */
+const DRY_BULB = Float64Array.from({ length: 8760 }, (_, i) => (i === 4000 ? NaN : 12 + 8 * Math.sin((i / 24) * 2 * Math.PI)));
+
+/** Windows of one site in several shapes: facings, tilt, shading, sky models, weathers, a U-value, daylight saving. */
+function windows(): WindowSpec[] {
+  return [
+    baseSpec(),
+    shadedSpec({ surfaceAzimuth: 90 }),
+    shadedSpec({ surfaceAzimuth: 250, skyModel: 'hayDavies' }),
+    baseSpec({ surfaceTilt: 30, surfaceAzimuth: 200, skyModel: 'isotropic' }),
+    shadedSpec({ weather: { kind: 'measured', ...WEATHER } }),
+    baseSpec({ surfaceAzimuth: 0, weather: { kind: 'measured', ...WEATHER, dryBulb: DRY_BULB }, glazing: { shgc: 0.5, panes: 3, uValue: 1.4 }, indoorTemperature: 24 }),
+    baseSpec({ weather: { kind: 'ineichenClearSky', linkeTurbidity: [3.1] }, site: { ...SITE, daylightSaving: { start: civilToSerial(2026, 3, 29, 2), end: civilToSerial(2026, 10, 25, 3), shift: 1 } } }),
+    shadedSpec({ weather: { kind: 'globalHorizontal', ghi: WEATHER.dhi.map((d, i) => d + (Number.isNaN(WEATHER.dni[i]) ? 0 : WEATHER.dni[i] * 0.5)) } }),
+  ];
+}
+
+describe('windows sharing their site year', () => {
+  test('each window\'s summary from shared years is exactly its summary from its own year', () => {
+    const years = new SharedYears();
+    for (const spec of windows()) {
+      const own = annualSeries(spec);
+      const shared = summarizeWindowYear(spec, years);
+      expect(shared.summary).toEqual(summarizeAnnual(own));
+      expect(shared.glassArea).toBe(own.glassArea);
+    }
+  });
+
+  test('a window\'s hourly columns from a shared year are exactly those from its own year', () => {
+    const years = new SharedYears();
+    for (const spec of windows().slice(1, 6)) {
+      const own = annualSeries(spec);
+      const w = prepareWindow(spec);
+      const fromShared = annualOfPrepared(w, years.of(w));
+      for (const k of ['incidence', 'profileAngle', 'sunlitFraction', 'dni', 'dhi', 'beam', 'sky', 'ground', 'shgc', 'gain', 'radiant', 'convective', 'conduction', 'missing', 'sunAltitude', 'stampSerial', 'clockStamp'] as const) {
+        expect(Array.from(fromShared[k])).toEqual(Array.from(own[k]));
+      }
+    }
+  });
+
+  test('the shared year is worked out once per site, year and weather, and is never changed by a window', () => {
+    const years = new SharedYears();
+    const specs = windows();
+    for (const spec of specs) summarizeWindowYear(spec, years);
+    // ASHRAE clear sky (four windows, two sky models and a tilt), the measured series (two), the
+    // turbidity clear sky (one; daylight saving moves only the clock), the global series (one).
+    expect(years.size).toBe(4);
+    const w = prepareWindow(specs[4]);
+    const before = Array.from(years.of(w).dni);
+    summarizeWindowYear(specs[5], years); // conduction adds missing hours to its own copy only
+    expect(Array.from(years.of(w).dni)).toEqual(before);
+    expect(Array.from(years.of(w).missing)).toEqual(Array.from(sharedYearOf(w).missing));
+    const copy = { kind: 'measured' as const, dni: WEATHER.dni.slice(), dhi: WEATHER.dhi.slice() };
+    summarizeWindowYear(baseSpec({ weather: copy }), years);
+    expect(years.size).toBe(5); // another series object is another weather, whatever its values
+  });
+
+  test('a shared year of another site or year is refused', () => {
+    const years = new SharedYears();
+    const here = prepareWindow(baseSpec());
+    const elsewhere = prepareWindow(baseSpec({ site: { ...SITE, latitude: 41 } }));
+    expect(() => annualOfPrepared(elsewhere, years.of(here))).toThrow(SunpaneError);
+    expect(() => annualOfPrepared(prepareWindow(baseSpec({ year: 2027 })), years.of(here))).toThrow(/not those of this window's site, year and weather/);
+  });
+
+  test('the number of years kept is bounded (oldest dropped first)', () => {
+    const years = new SharedYears(2);
+    for (const latitude of [10, 20, 30]) years.of(prepareWindow(baseSpec({ site: { ...SITE, latitude } })));
+    expect(years.size).toBe(2);
+  });
+});
