@@ -10,6 +10,7 @@ const SECTIONS: { file: string; exportName: string }[] = [
   { file: './annual', exportName: 'annualBench' },
   { file: './viewFactors', exportName: 'viewFactorsBench' },
   { file: './ranges', exportName: 'rangesBench' },
+  { file: './schedule', exportName: 'scheduleBench' },
 ];
 
 function main(): void {

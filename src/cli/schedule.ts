@@ -6,24 +6,31 @@
 import * as fs from 'node:fs';
 import * as path from 'node:path';
 import ExcelJS from 'exceljs';
-import { annualSeries, type AnnualSummary, summarizeAnnual, type Weather, type WindowSpec, validateWindowSpec } from '../core/gain';
+import { annualSeries, SharedYears, summarizeAnnual, summarizeWindowYear, type Weather, type WindowSpec, validateWindowSpec } from '../core/gain';
 import { SunpaneError } from '../core/common';
-import { formatSerialIso } from '../core/time';
 import { CAUTION } from '../outputs/caution';
 import type { Output } from './call';
 import { MONTHS } from './annualSheets';
-import { checkOutput, describeFsError, writeFileAtomic } from './atomicWrite';
+import { checkOutput, describeFsError } from './atomicWrite';
 import { escapeFormulaText } from '../io/textCells';
 import { CliInputError } from './cliError';
-import { csvLine, formatFixed, parseCsv } from './csv';
+import { parseCsv } from './csv';
 import { outputKind, parseFlags, requireFlag } from './flags';
 import { ProgressBar } from './progress';
+import { SUMMARY_HEADERS, type WindowResult, csvSummaryWriter, xlsxSummaryWriter } from './scheduleOutput';
 import { WEATHER_FLAGS, checkWeatherTable, readWeatherTable, weatherRequest } from './weatherCsv';
 import { PALETTE } from '../outputs/palette';
 import { type SheetChart, cellRef, columnRef } from './xlsxCharts';
 import { fieldsOf, windowSpecFromFields } from '../registry/windowRange';
 import { NUMBER_FORMATS, type TableCell, addDataTable, addSheetHeading, address, columnLetter, fillContentsSheet, freezeAt, newWorkbook, saveWorkbook, serialToCellDate, setFormula, setLabel } from './workbook';
 import { type MatchedHeaders, type ScheduleColumn, SCHEDULE_COLUMNS, columnForHeader, matchHeaders, requiredColumns } from '../schedule/columns';
+
+/**
+ * Largest schedule written as a whole workbook (an Excel table and a chart of annual gain by
+ * window); above it the workbook is streamed row by row (a filtered range, no chart — a chart of
+ * thousands of bars says nothing), so that a schedule of any length needs the memory of one window.
+ */
+export const STREAM_WORKBOOK_ABOVE = 1000;
 
 const SCHEDULE_FLAGS = { in: true, ...WEATHER_FLAGS, out: true, force: false, help: false } as const;
 
@@ -156,51 +163,7 @@ export async function scheduleFromXlsx(file: string): Promise<ScheduleRow[]> {
   return rows;
 }
 
-/** One window's results for the summary table. */
-export interface WindowResult {
-  spec: WindowSpec;
-  glassArea: number;
-  summary: AnnualSummary;
-}
-
-/** The summary columns (headers of our own), shared by CSV, workbook and demo. */
-export const SUMMARY_HEADERS = [
-  'Window',
-  'Latitude (°)',
-  'Faces (°)',
-  'Glass area (m²)',
-  'Annual gain (kWh)',
-  'Peak gain (W)',
-  'Peak hour ending',
-  'Hours with beam on the glass (h)',
-  'Mean sunlit fraction (0-1)',
-  'Weather missing (h)',
-  ...MONTHS.map((m) => `${m} (kWh)`),
-] as const;
-
-/** The summary as CSV text. */
-export function summaryCsv(results: readonly WindowResult[]): string {
-  const lines = [csvLine([...SUMMARY_HEADERS])];
-  for (const r of results) {
-    const s = r.summary;
-    lines.push(
-      csvLine([
-        escapeFormulaText(r.spec.name),
-        formatFixed(r.spec.site.latitude, 4),
-        formatFixed(r.spec.surfaceAzimuth, 2),
-        formatFixed(r.glassArea, 4),
-        formatFixed(s.annualKWh, 3),
-        formatFixed(s.peakW, 2),
-        formatSerialIso(s.peakStamp),
-        s.sunlitHours,
-        formatFixed(s.meanSunlitFraction, 4),
-        s.missingHours,
-        ...s.monthlyKWh.map((k) => formatFixed(k, 3)),
-      ]),
-    );
-  }
-  return `${lines.join('\n')}\n`;
-}
+export { SUMMARY_HEADERS, type WindowResult, summaryCsv } from './scheduleOutput';
 
 /** Formula cells below a summary table and the values they must show. */
 export interface SummaryTotals {
@@ -349,15 +312,34 @@ export async function scheduleCommand(argv: readonly string[], io: Output): Prom
     }
     validateWindowSpec(s.spec);
   }
+  // Each window worked out with its site's sun and weather shared (src/core/gain/sharedYear.ts).
+  // CSV, and a workbook of more than STREAM_WORKBOOK_ABOVE windows, are written row by row as the
+  // windows are done (./scheduleOutput.ts: memory stays that of one window); a smaller workbook is
+  // built whole, with its table object and its chart.
+  const years = new SharedYears();
   const bar = new ProgressBar('windows', specs.length);
-  const results = specs.map((s) => {
-    const r = windowResult(s.spec);
-    bar.tick();
-    return r;
-  });
-  bar.finish();
-  if (kind === 'csv') await writeFileAtomic(out, summaryCsv(results), force);
-  else {
+  const stream = kind === 'csv' || specs.length > STREAM_WORKBOOK_ABOVE;
+  const writer = !stream ? undefined : kind === 'csv' ? csvSummaryWriter(out, force) : xlsxSummaryWriter(out, force, `Window schedule: each window's year (${path.basename(input)})`, path.basename(input));
+  const kept: WindowResult[] = [];
+  let total = 0;
+  try {
+    for (const s of specs) {
+      const figures = summarizeWindowYear(s.spec, years);
+      total += figures.summary.annualKWh;
+      const r = { spec: s.spec, ...figures };
+      if (writer) await writer.add(r);
+      else kept.push(r);
+      bar.tick();
+    }
+    bar.finish();
+    if (writer) await writer.finish();
+  } catch (err) {
+    bar.finish();
+    await writer?.abort();
+    throw err;
+  }
+  if (!writer) {
+    const results = kept;
     const wb = newWorkbook('Sunpane window schedule');
     const charts: SheetChart[] = [];
     const contents = wb.addWorksheet('Contents');
@@ -372,8 +354,7 @@ export async function scheduleCommand(argv: readonly string[], io: Output): Prom
     ]);
     await saveWorkbook(wb, out, force, charts);
   }
-  const total = results.reduce((a, r) => a + r.summary.annualKWh, 0);
-  io.out(`${results.length} window${results.length === 1 ? '' : 's'}: ${total.toFixed(1)} kWh of solar gain a year in all`);
+  io.out(`${specs.length} window${specs.length === 1 ? '' : 's'}: ${total.toFixed(1)} kWh of solar gain a year in all`);
   io.out(`wrote ${path.normalize(out)}`);
   io.out(CAUTION);
   return 0;
