@@ -30,9 +30,11 @@ const OFFICE_JS = 'https://appsforoffice.microsoft.com/lib/1/hosted/office.js';
  * the Office look (Fluent token values for the light and dark themes, the footer layout, keyboard
  * and dialog focus handling, the sun-path key, messages in the user's words: 188.4 -> 194.2 KB); 198 KB until the window range: its reader and
  * messages, the glossary's labels and older names and seven window functions beside the released
- * positional ones, and the sun-position fast path for ranges (194.2 -> 223.6 KB).
+ * positional ones, and the sun-position fast path for ranges (194.2 -> 223.6 KB); 225 KB until
+ * windows could share their site's sun and weather (src/core/gain/sharedYear.ts, the summary-only
+ * year, the Perez kernel in two halves: 223.6 -> 226.7 KB).
  */
-const BUDGET_BYTES = 225 * 1024;
+const BUDGET_BYTES = 229 * 1024;
 const DEV_PORT = 3000;
 
 /**
