@@ -5,7 +5,10 @@
  *                  development builds (a production build ships none)
  *   taskpane.html  from src/taskpane/pane.html, loading office.js from Microsoft's CDN first
  *   taskpane.css   src/taskpane/pane.css (the page's Content-Security-Policy allows no inline style)
- *   functions.json generated from the registry (src/functions/metadata.ts)
+ *   functions.json generated from the registry (src/functions/metadata.ts), each function's helpUrl
+ *                  on the same host as the manifest (SUNPANE_HOST)
+ *   help/          the function help: one page per function, an index and a stylesheet, generated
+ *                  from the registry (scripts/helpPages.ts); HTML and CSS only, no JavaScript
  *   manifest.xml   production: the production Id and display name, host replaced by SUNPANE_HOST
  *                  (default https://localhost:3000); development: manifest.xml's own identity
  *   assets/        icons
@@ -62,16 +65,21 @@ function dropRegistryExamples(context) {
   };
 }
 
-/** Loads the TypeScript registry in this Node process (fresh on every compilation, for watch mode). */
-function loadFunctionsMetadata() {
+/**
+ * Loads the TypeScript registry in this Node process (fresh on every compilation, for watch mode)
+ * and makes functions.json (each function's helpUrl on `host`) and the help pages from it.
+ */
+function loadRegistryFiles(host) {
   require('ts-node').register({ transpileOnly: true, compilerOptions: { module: 'commonjs' } });
-  for (const id of Object.keys(require.cache)) if (id.startsWith(SRC + path.sep)) delete require.cache[id];
+  const scripts = path.join(ROOT, 'scripts') + path.sep;
+  for (const id of Object.keys(require.cache)) if (id.startsWith(SRC + path.sep) || id.startsWith(scripts)) delete require.cache[id];
   const { FUNCTIONS } = require('./src/registry/index.ts');
   const { functionsMetadata } = require('./src/functions/metadata.ts');
-  return functionsMetadata(FUNCTIONS);
+  const { helpFiles } = require('./scripts/helpPages.ts');
+  return { metadata: functionsMetadata(FUNCTIONS, host), help: helpFiles(FUNCTIONS) };
 }
 
-/** Emits functions.json and manifest.xml, and checks the bundle size. */
+/** Emits functions.json, the help pages and manifest.xml, and checks the bundle size. */
 class SunpaneAddinPlugin {
   constructor(options) {
     this.options = options;
@@ -82,10 +90,11 @@ class SunpaneAddinPlugin {
     compiler.hooks.thisCompilation.tap('SunpaneAddinPlugin', (compilation) => {
       compilation.hooks.processAssets.tap({ name: 'SunpaneAddinPlugin', stage: Compilation.PROCESS_ASSETS_STAGE_ADDITIONAL }, () => {
         try {
-          const metadata = loadFunctionsMetadata();
+          const { metadata, help } = loadRegistryFiles(resolveHost(process.env.SUNPANE_HOST));
           compilation.emitAsset('functions.json', new sources.RawSource(`${JSON.stringify(metadata, null, 2)}\n`));
+          for (const [name, content] of help) compilation.emitAsset(name, new sources.RawSource(content), { minimized: true });
         } catch (err) {
-          compilation.errors.push(new compiler.webpack.WebpackError(`functions.json: ${err && err.stack ? err.stack : err}`));
+          compilation.errors.push(new compiler.webpack.WebpackError(`functions.json and help pages: ${err && err.stack ? err.stack : err}`));
         }
         try {
           const manifestPath = path.join(ROOT, 'manifest.xml');

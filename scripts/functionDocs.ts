@@ -12,7 +12,7 @@
  *    add-in's help pages) takes the same {@link FunctionPage}.
  */
 import { GLOSSARY } from '../src/registry/glossary';
-import { FUNCTIONS, NAMESPACE, isOptional, signature } from '../src/registry';
+import { DATE_TIME_FORMAT, FUNCTIONS, NAMESPACE, isOptional, signature, unitWords } from '../src/registry';
 import { allowedText } from '../src/registry/evaluate';
 import type { FunctionDescriptor, ParamDescriptor } from '../src/registry/types';
 
@@ -22,7 +22,7 @@ export interface ArgumentDoc {
   name: string;
   /** What it is. */
   meaning: string;
-  /** Unit as printed (`°`, `W/m²`); empty for pure numbers and texts. */
+  /** Unit as printed (`°`, `W/m²`); `no unit` for a pure number; for other kinds what the value is (`date-time`, `text`, …). */
   unit: string;
   /** The values it accepts, in words (e.g. `a number from -90 to 90 °`). */
   allowed: string;
@@ -94,16 +94,17 @@ export function allowedWords(p: ParamDescriptor): string {
 export function argumentDoc(p: ParamDescriptor): ArgumentDoc {
   const optional = isOptional(p);
   const ifBlank = p.default !== undefined ? defaultText(p.default) : optional ? 'optional (see meaning)' : 'required';
-  return { name: p.name, meaning: noEndStop(p.description), unit: p.unit ?? '', allowed: allowedWords(p), ifBlank, optional };
+  return { name: p.name, meaning: noEndStop(p.description), unit: unitWords(p), allowed: allowedWords(p), ifBlank, optional };
 }
 
 function resultText(fn: FunctionDescriptor): string {
   const r = fn.result;
   const unit = r.unit ? ` [${r.unit}]` : '';
-  const kind = r.kind === 'dateTime' ? ' (a local standard date-time serial: format the cell as a date and time)' : '';
+  // A date-time's bounds are those of the spreadsheet calendar: what helps is the number format.
+  if (r.kind === 'dateTime') return `${noEndStop(r.description)}${unit}; the number is ${DATE_TIME_FORMAT}`;
   const bounds =
     r.min !== undefined && r.max !== undefined ? `; always from ${r.min} to ${r.max}` : r.min !== undefined ? `; never below ${r.min}` : r.max !== undefined ? `; never above ${r.max}` : '';
-  return `${noEndStop(r.description)}${unit}${kind}${bounds}`;
+  return `${noEndStop(r.description)}${unit}${bounds}`;
 }
 
 /** The reference's content for one function. */

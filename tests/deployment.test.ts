@@ -76,6 +76,24 @@ describe('the production build', () => {
     expect(html).not.toMatch(/<style|\sstyle="|\son[a-z]+="/i);
   });
 
+  test('the function help pages (dist/help/) allow nothing but their stylesheet from our origin, and run no script', () => {
+    const pages = fs.readdirSync(path.join(DIST, 'help')).filter((n) => n.endsWith('.html'));
+    expect(pages.length).toBeGreaterThan(10);
+    expect(pages).toContain('index.html');
+    for (const name of pages) {
+      const html = distFile(`help/${name}`);
+      const policy = policyOf(html);
+      expect(policy.get('default-src')).toEqual(["'none'"]);
+      expect(policy.has('script-src')).toBe(false);
+      expect(policy.get('style-src')).toEqual(["'self'"]);
+      expect(policy.get('base-uri')).toEqual(["'none'"]);
+      expect(html).not.toMatch(/<script|<style|\sstyle=|\son[a-z]+=|<iframe|<object|<embed/i);
+      const sheets = [...html.matchAll(/<link\b[^>]*rel="?stylesheet"?[^>]*href="?([^"\s>]+)"?/g)].map((m) => m[1]);
+      expect(sheets).toEqual(['help.css']);
+    }
+    expect(fs.existsSync(path.join(DIST, 'help', 'help.css'))).toBe(true);
+  });
+
   test('the help page allows nothing but its own inline style, by hash', () => {
     const html = distFile('assets/support.html');
     const policy = policyOf(html);

@@ -7,7 +7,7 @@
  * result may spill. Units and ranges go into the descriptions, because formula autocomplete shows
  * nothing else (docs/platform.md#custom-function-metadata).
  */
-import { isOptional, paramHelp } from '../registry';
+import { DATE_TIME_FORMAT, isOptional, paramHelp } from '../registry';
 import type { FunctionDescriptor } from '../registry/types';
 
 /** One parameter entry of functions.json. */
@@ -24,6 +24,8 @@ export interface FunctionMetadata {
   id: string;
   name: string;
   description: string;
+  /** The function's page in the help deployed with the add-in (docs/platform.md#custom-function-metadata). */
+  helpUrl: string;
   parameters: ParameterMetadata[];
   result: { type: 'any'; dimensionality: 'matrix' };
 }
@@ -43,8 +45,17 @@ export const MAX_DESCRIPTION = 512;
  */
 const ID_PATTERN = /^[A-Z]+$/;
 
+/** Folder of the help pages in the deployed add-in (dist/help/), one page per function. */
+export const HELP_DIR = 'help';
+
+/** Path of a function's help page, relative to the add-in's host: `help/SUNRISE.html`. */
+export function helpPagePath(name: string): string {
+  return `${HELP_DIR}/${name}.html`;
+}
+
 /**
- * The description Excel shows for a function: its summary, then what the result is and its unit.
+ * The description Excel shows for a function: its summary, then what the result is and its unit;
+ * for a date-time result, the number format to give the cell.
  *
  * @param fn - a registered function
  * @returns at most {@link MAX_DESCRIPTION} characters
@@ -53,20 +64,27 @@ export function functionDescription(fn: FunctionDescriptor): string {
   const unit = fn.result.unit ? ` [${fn.result.unit}]` : '';
   const spill = fn.result.shape === 'spill' ? ' Spills a table.' : '';
   const summary = fn.summary.trim().replace(/\.$/, '');
-  return `${summary}${unit}.${spill}`.slice(0, MAX_DESCRIPTION);
+  const format = fn.result.kind === 'dateTime' ? ` Returns ${DATE_TIME_FORMAT}.` : '';
+  return `${summary}${unit}.${spill}${format}`.slice(0, MAX_DESCRIPTION);
 }
 
 /**
  * Builds functions.json from registered descriptors.
  *
  * @param functions - the registry (src/registry/index.ts FUNCTIONS)
+ * @param host - where the add-in is served from: an https origin, optionally with a path, without a
+ *   trailing slash (scripts/manifest-host.js `resolveHost`, the same host the manifest names); each
+ *   function's `helpUrl` is its page under it, `<host>/help/<NAME>.html`
  * @returns the metadata document; a parameter is marked optional only when it and every later
  *   parameter are optional (Excel lists optional arguments last; a blank argument in the middle is
  *   still read as its default by the adapter)
  * @throws Error naming the function when an id is not uppercase letters, is repeated, or a
  *   parameter name is too long — the build fails rather than ship metadata Excel refuses
  */
-export function functionsMetadata(functions: readonly FunctionDescriptor[]): FunctionsMetadata {
+export function functionsMetadata(functions: readonly FunctionDescriptor[], host: string): FunctionsMetadata {
+  if (!/^https:\/\/[^/?#\s]+(\/[^?#\s]*)?$/.test(host) || host.endsWith('/')) {
+    throw new Error(`functions.json: the add-in host ${JSON.stringify(host)} must be an https URL without a trailing slash, query or fragment`);
+  }
   const seen = new Set<string>();
   const out: FunctionMetadata[] = [];
   for (const fn of functions) {
@@ -91,6 +109,7 @@ export function functionsMetadata(functions: readonly FunctionDescriptor[]): Fun
       id: fn.name,
       name: fn.name,
       description: functionDescription(fn),
+      helpUrl: `${host}/${helpPagePath(fn.name)}`,
       parameters,
       result: { type: 'any', dimensionality: 'matrix' },
     });

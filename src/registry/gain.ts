@@ -71,7 +71,7 @@ const P = {
     default: 'gain',
     length: { max: 20 },
     description:
-      'one or more columns of the hourly year (a range of names gives one column each): gain, radiant, convective [W]; beam on the window plane, sky and ground reaching the glass, skyUnshaded and groundUnshaded on the bare window, dni, dhi [W/m²]; sunlitFraction; skyViewRatio, groundViewRatio, horizonShare (0…1, the same every hour); shgc; incidence, profileAngle, sunAltitude, sunAzimuth [°]; stamp (date-time of the row)',
+      "columns of the hourly year, one per name (a range of names gives several): gain, radiant, convective in W; beam (on the window plane), sky, ground (reaching the glass), skyUnshaded, groundUnshaded (bare window), dni, dhi in W/m²; sunlitFraction, skyViewRatio, groundViewRatio, horizonShare, shgc from 0 to 1; incidence, profileAngle, sunAltitude, sunAzimuth in °; stamp: the row's date-time (format the column yyyy-mm-dd hh:mm)",
   },
   day: { name: 'day', kind: 'number', integer: true, min: 1, max: 28, default: 21, description: 'day of each month for the clear design day' },
   factors: { name: 'factors', kind: 'numberList', min: 0, max: 1, length: { exact: 24 }, description: 'the 24 radiant time factors r0…r23 of the room (from your handbook or room model), summing to 1' },

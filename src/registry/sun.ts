@@ -30,7 +30,7 @@ const EVENT_PARAMS: readonly ParamDescriptor[] = [GLOSSARY.date, GLOSSARY.latitu
 const SURFACE_AZIMUTH: ParamDescriptor = { ...GLOSSARY.surfaceAzimuth };
 const SURFACE_TILT: ParamDescriptor = { ...GLOSSARY.surfaceTilt };
 
-const EXAMPLE_SPA = ['2003-10-17T12:30:30', '39.742476', '-105.1786', '-7', '1830.14', '820', '11', '67'];
+const EXAMPLE_SPA = ['"2003-10-17T12:30:30"', '39.742476', '-105.1786', '-7', '1830.14', '820', '11', '67'];
 
 const SPA_REPORT = 'NREL SPA worked example (Reda & Andreas, NREL/TP-560-34302, rev. 2008, Table A5.1)';
 const SPA_TESTS = ['tests/reference/spa-worked-example.test.ts', 'tests/fixtures/formulas.ts'] as const;
@@ -93,7 +93,7 @@ export const SUN_FUNCTIONS: readonly FunctionDescriptor[] = [
     evaluate: (a) => positionOf(a).altitude,
     examples: [
       { args: EXAMPLE_SPA, note: '39.888378: the NREL SPA worked example' },
-      { args: ['2026-06-21T12:00', '51.5', '0', '0'], note: 'about 62: midsummer noon at 51.5° N, 0° E (an example location)' },
+      { args: ['"2026-06-21T12:00"', '51.5', '0', '0'], note: 'about 62: midsummer noon at 51.5° N, 0° E (an example location)' },
     ],
     outsideCheck: POSITION_CHECK,
   },
@@ -164,8 +164,8 @@ export const SUN_FUNCTIONS: readonly FunctionDescriptor[] = [
       return new NotAvailable(noEventMessage('rise', e.condition));
     },
     examples: [
-      { args: ['2003-10-17', '39.742476', '-105.1786', '-7', '67'], note: '06:12:43 local: the NREL SPA worked example' },
-      { args: ['2026-06-21', '78', '15', '1'], note: '#N/A: midnight sun at 78° N' },
+      { args: ['"2003-10-17"', '39.742476', '-105.1786', '-7', '67'], note: '06:12:43 local: the NREL SPA worked example' },
+      { args: ['"2026-06-21"', '78', '15', '1'], note: '#N/A: midnight sun at 78° N' },
     ],
     outsideCheck: { source: `${SPA_REPORT}: sunrise 06:12:43 local (±1 s) — stated in the publication; and astronomy-engine 2.1.19 rise times on 300 random local days within ±65° latitude, and no sunrise in polar night — produced by a named npm library.`, tests: [...SPA_TESTS, 'tests/reference/astronomy-engine-sun.test.ts'] },
   },
@@ -176,7 +176,7 @@ export const SUN_FUNCTIONS: readonly FunctionDescriptor[] = [
     params: EVENT_PARAMS,
     result: { shape: 'value', kind: 'dateTime', min: MIN_SERIAL - 1, max: MAX_SERIAL_EXCLUSIVE, description: 'local standard date-time of the upper transit (also during polar day and night)' },
     evaluate: (a) => eventsOf(a).solarNoon,
-    examples: [{ args: ['2003-10-17', '39.742476', '-105.1786', '-7', '67'], note: '11:46:05 local: the NREL SPA worked example' }],
+    examples: [{ args: ['"2003-10-17"', '39.742476', '-105.1786', '-7', '67'], note: '11:46:05 local: the NREL SPA worked example' }],
     outsideCheck: { source: `${SPA_REPORT}: sun transit 11:46:05 local (±1 s) — stated in the publication.`, tests: [...SPA_TESTS] },
   },
   {
@@ -191,8 +191,8 @@ export const SUN_FUNCTIONS: readonly FunctionDescriptor[] = [
       return new NotAvailable(noEventMessage('set', e.condition));
     },
     examples: [
-      { args: ['2003-10-17', '39.742476', '-105.1786', '-7', '67'], note: 'about 17:18:52 local on 17 October' },
-      { args: ['2026-12-21', '78', '15', '1'], note: '#N/A: polar night at 78° N' },
+      { args: ['"2003-10-17"', '39.742476', '-105.1786', '-7', '67'], note: 'about 17:18:52 local on 17 October' },
+      { args: ['"2026-12-21"', '78', '15', '1'], note: '#N/A: polar night at 78° N' },
     ],
     outsideCheck: { source: 'astronomy-engine 2.1.19: sunset of the report\'s example site on the local 17 October at 17:18:51 (±30 s; the report\'s own 17:20:19 belongs to the previous local day), set times on 300 random local days within ±65° latitude, and no sunset in polar day — produced by a named npm library.', tests: ['tests/reference/astronomy-engine-sun.test.ts', 'tests/fixtures/formulas.ts'] },
   },
@@ -220,7 +220,7 @@ export const SUN_FUNCTIONS: readonly FunctionDescriptor[] = [
       const s = positionOf(a);
       return incidenceAngle(s.altitude, s.azimuth, a.surfaceTilt as number, a.surfaceAzimuth as number);
     },
-    examples: [{ args: ['2003-10-17T12:30:30', '39.742476', '-105.1786', '-7', '170', '30', '1830.14', '820', '11', '67'], note: '25.187: the NREL SPA worked example' }],
+    examples: [{ args: ['"2003-10-17T12:30:30"', '39.742476', '-105.1786', '-7', '170', '30', '1830.14', '820', '11', '67'], note: '25.187: the NREL SPA worked example' }],
     outsideCheck: { source: `${SPA_REPORT}: incidence 25.187000° on the 30° slope facing 170° at the example instant — stated in the publication.`, tests: [...SPA_TESTS] },
   },
   {

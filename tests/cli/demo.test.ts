@@ -267,7 +267,7 @@ describe('sunpane demo', () => {
   }
 
   it.each(['Formulas', 'Schedule'])('caches every SUNPANE formula of the %s sheet as the registered function gives for the cells it refers to', (sheet) => {
-    const registeredNames = new Set(functionsMetadata(FUNCTIONS).functions.map((f) => f.name));
+    const registeredNames = new Set(functionsMetadata(FUNCTIONS, 'https://localhost:3000').functions.map((f) => f.name));
     const ws = wb.getWorksheet(sheet)!;
     let count = 0;
     ws.eachRow((row) =>
