@@ -265,6 +265,11 @@ export function applyFunction(fn: FunctionDescriptor, rawArgs: readonly (RawArg 
   // One arguments object for every cell, its broadcast entries set cell by cell (descriptors never
   // keep their arguments): a range of 100,000 cells allocates no object per cell for them.
   const args: Args = { ...fixed };
+  if (cols === 1) {
+    // A column: each row is one cell, made as a literal (one allocation, no change of element kind).
+    for (let i = 0; i < rows; i++) out[i] = [cellOf(fn, argsAt(args, broadcast, i, 0))];
+    return out;
+  }
   for (let i = 0; i < rows; i++) {
     const line: OutCell[] = new Array(cols);
     for (let j = 0; j < cols; j++) line[j] = cellOf(fn, argsAt(args, broadcast, i, j));

@@ -51,15 +51,18 @@ export function requireFinite(argument: string, value: unknown, unit?: string): 
  * Returns `value` if it is a finite number within [min, max] (bounds optional and inclusive unless
  * `exclusiveMin` / `exclusiveMax`), else throws a {@link SunpaneError} stating the allowed range.
  */
+/** The default options of {@link requireRange}, shared (no object per call). */
+const NO_OPTIONS: { exclusiveMin?: boolean; exclusiveMax?: boolean; integer?: boolean } = Object.freeze({});
+
 export function requireRange(
   argument: string,
   value: unknown,
   min: number | undefined,
   max: number | undefined,
   unit?: string,
-  options: { exclusiveMin?: boolean; exclusiveMax?: boolean; integer?: boolean } = {},
+  options: { exclusiveMin?: boolean; exclusiveMax?: boolean; integer?: boolean } = NO_OPTIONS,
 ): number {
-  // The message is built only on failure: this check sits on hot paths.
+  // The message is built only on failure, and no options object is made per call: this check sits on hot paths.
   const ok =
     typeof value === 'number' &&
     Number.isFinite(value) &&

@@ -2,24 +2,27 @@
  * The sun at any instant by the NREL SPA, for many instants at once (a worksheet range of
  * date-times): the Earth's slow part of the algorithm — heliocentric position, nutation,
  * aberration, apparent right ascension and declination, Earth–sun distance, equation of time
- * (Reda & Andreas 2008, Eq. 4–30 and A1–A4) — is worked out once per day at 0 h UT and kept, and
- * taken at the instant by six-point (quintic) Lagrange interpolation over the days around it; the
+ * (Reda & Andreas 2008, Eq. 4–30 and A1–A4) — is worked out at 0 h UT every second day and kept,
+ * and taken at the instant by six-point (quintic) Lagrange interpolation over the nodes around it; the
  * observer's part — sidereal time (Eq. 27, exact for the instant), hour angle, parallax, refraction,
  * altitude and azimuth (Eq. 31–46) — is worked out for the instant in the vector form the annual
  * path uses (src/core/sun/sunPath.ts; algebraically the SPA's Eq. 36–41), with the observer's
  * constants kept while the site stays the same.
  *
- * With daily nodes the interpolation error is far below the SPA's own uncertainty (±0.0003°): the
- * slow terms' fastest parts (lunar terms of 9–30 days, ≤ 0.002°) are carried to ~1e-9°, and
- * tests/core/sun/sunNodes.test.ts holds altitude, azimuth, declination and equation of time to the
- * direct {@link sunPosition} over random instants and sites (measured worst 2e-8° in altitude). A
- * column of 100,000 hourly date-times needs some 4,200 daily nodes: the bench line
- * `range_100k_vs_suncalc` measures the whole worksheet path against suncalc (docs/fast-paths.md).
+ * With nodes two days apart the interpolation error is far below the SPA's own uncertainty
+ * (±0.0003°): tests/core/sun/sunNodes.test.ts holds altitude, azimuth, declination and equation of
+ * time to the direct {@link sunPosition} within 1e-6° (1e-5 min) over random instants and sites
+ * (measured over 20,000 instants 1900–2100: altitude 3e-7°, declination 3e-7°, equation of time
+ * 9e-7 min, distance 3e-9 AU; with daily nodes 3e-7°, 6e-8°, 1e-7 min, 4e-11 AU — the altitude's
+ * share is the sidereal time's rounding, not the interpolation). A column of 100,000 hourly
+ * date-times needs some 2,100 nodes, half of what daily nodes take, and they are most of the cost
+ * of a cold range: the bench line `range_100k_vs_suncalc` measures the whole worksheet path against
+ * suncalc (docs/fast-paths.md).
  *
  * Nodes are kept per ΔT choice (the default polynomial, or a given value) and dropped all at once
  * when more than {@link MAX_NODES} are held.
  */
-import { DEG, RAD, wrap180, wrap360 } from '../common';
+import { DEG, RAD, wrap360 } from '../common';
 import { deltaTAt, julianDay } from '../time';
 import { EARTH_RADIUS_M, POLAR_RATIO, RISE_SET_ALTITUDE, type SunOptions, type SunPosition, emptySteps, requireInstant, requireSite, resolveSunOptions, type ResolvedSunOptions, spaGeocentric } from './spa';
 import { refractionFromComponents } from './sunPath';
@@ -27,6 +30,9 @@ import { refractionFromComponents } from './sunPath';
 /** Most nodes kept before the store is emptied (each is five numbers). */
 export const MAX_NODES = 60_000;
 const MS_PER_DAY = 86_400_000;
+/** Days between nodes. */
+const NODE_DAYS = 2;
+const MS_PER_NODE = NODE_DAYS * MS_PER_DAY;
 /** Julian day of 1970-01-01 00:00 UT. */
 const JD_UNIX = 2_440_587.5;
 
@@ -37,7 +43,7 @@ const JD_UNIX = 2_440_587.5;
  */
 type Node = Float64Array;
 
-/** Nodes by day (days since 1970-01-01, 0 h UT), one store per ΔT choice (NaN = the default polynomial). */
+/** Nodes by number (node k at 0 h UT of day 2k since 1970-01-01), one store per ΔT choice (NaN = the default polynomial). */
 const stores = new Map<number, Map<number, Node>>();
 let held = 0;
 
@@ -63,7 +69,7 @@ function nodeOf(day: number, deltaT: number | undefined): Node {
       clearSunNodes();
       return nodeOf(day, deltaT);
     }
-    const ms = day * MS_PER_DAY;
+    const ms = day * MS_PER_NODE;
     const s = spaGeocentric(julianDay(ms), deltaT ?? deltaTAt(ms), geoScratch);
     node = new Float64Array(VALUES);
     node[0] = wrap360(s.alpha - (s.nu - s.nu0)); // α − Δψ cos ε (Eq. 28: ν − ν0 = Δψ cos ε)
@@ -78,6 +84,12 @@ function nodeOf(day: number, deltaT: number | undefined): Node {
     held++;
   }
   return node;
+}
+
+/** An angle to 0…360 by floor (cheaper than the remainder `%` on a hot path; equal to an ulp). */
+function floorWrap360(x: number): number {
+  const r = x - 360 * Math.floor(x / 360);
+  return r >= 360 ? 0 : r;
 }
 
 /** Lagrange weights of the nodes at −2 … 3 for a position f in [0, 1). */
@@ -181,7 +193,7 @@ function resolveOnce(options: SunOptions | undefined): ResolvedSunOptions {
 
 /**
  * Topocentric sun position at an instant by the NREL SPA with the slow terms interpolated between
- * daily nodes (see the module comment); same arguments, checks and results as {@link sunPosition}.
+ * nodes two days apart (see the module comment); same arguments, checks and results as {@link sunPosition}.
  * @param utcMs - UTC instant [ms since 1970-01-01], years −2000…9999 (before 1860 give `deltaT`)
  * @param latitude - site latitude [°] −90…90, north positive
  * @param longitude - site longitude [°] −180…180, east positive
@@ -195,9 +207,9 @@ export function sunPositionFromNodes(utcMs: number, latitude: number, longitude:
   const o = resolveOnce(options);
   requireSite(latitude, longitude);
   requireInstant(utcMs, o.deltaT !== undefined);
-  const daysSinceUnix = utcMs / MS_PER_DAY;
-  const day = Math.floor(daysSinceUnix);
-  const f = daysSinceUnix - day;
+  const nodesSinceUnix = utcMs / MS_PER_NODE;
+  const day = Math.floor(nodesSinceUnix);
+  const f = nodesSinceUnix - day;
   gather(day, o.deltaT);
   const w = weights(f);
   const g = interpolate(0, w);
@@ -208,7 +220,9 @@ export function sunPositionFromNodes(utcMs: number, latitude: number, longitude:
   const jd = utcMs / MS_PER_DAY + JD_UNIX;
   const jc = (jd - 2_451_545) / 36_525;
   const nu0 = 280.46061837 + 360.98564736629 * (jd - 2_451_545) + jc * jc * (0.000387933 - jc / 38_710_000);
-  const H = wrap360(nu0 + longitude - g);
+  // Reduced to 0…360 by floor rather than %: ν0 is some 10⁷ degrees, and floor is the cheaper way
+  // (the result differs from an exact remainder by an ulp of ν0, ~2e-9°).
+  const H = floorWrap360(nu0 + longitude - g);
   const HRad = H * RAD;
   // Eq. 36–41 in vector form (as src/core/sun/sunPath.ts): the topocentric vector in Earth radii,
   // X toward the meridian, Y westward, Z toward the pole, turned to up / horizontal / west / south.
@@ -221,7 +235,7 @@ export function sunPositionFromNodes(utcMs: number, latitude: number, longitude:
   const e0 = Math.atan2(up, horizontal) * DEG; // Eq. 41
   const e = e0 < RISE_SET_ALTITUDE ? e0 : e0 + refractionFromComponents(refractionScale, up, horizontal, e0); // Eq. 42, 43
   const az = Math.atan2(vy, south) * DEG + 180; // Eq. 45, 46
-  const hourAngle = wrap180(H);
+  const hourAngle = H > 180 ? H - 360 : H; // H is in 0…360: (−180, 180]
   const p = out ?? ({} as SunPosition);
   p.altitude = e;
   p.azimuth = az >= 360 ? az - 360 : az;
@@ -229,9 +243,9 @@ export function sunPositionFromNodes(utcMs: number, latitude: number, longitude:
   p.declination = interpolate(2, w);
   p.hourAngle = hourAngle;
   p.equationOfTime = interpolate(4, w);
-  p.rightAscension = wrap360(interpolate(1, w));
+  p.rightAscension = floorWrap360(interpolate(1, w));
   p.altitudeUnrefracted = e0;
-  p.solarTime = wrap360(180 + hourAngle) / 15;
+  p.solarTime = floorWrap360(180 + hourAngle) / 15;
   p.earthSunDistance = interpolate(3, w);
   return p;
 }
