@@ -108,11 +108,32 @@ function periodsAround(rule: DaylightSavingRule, year: number): [number, number]
  * @param rule - a checked rule
  */
 export function inDaylightSaving(standardSerial: number, rule: DaylightSavingRule): boolean {
-  const year = serialToCivil(standardSerial).year;
-  for (let y = year; y <= year + 1; y++) {
-    for (const [from, to] of periodsAround(rule, y)) if (standardSerial >= from && standardSerial < to) return true;
-  }
+  const periods = periodsNear(rule, serialToCivil(standardSerial).year);
+  for (let k = 0; k < periods.length; k += 2) if (standardSerial >= periods[k] && standardSerial < periods[k + 1]) return true;
   return false;
+}
+
+/**
+ * The periods of {@link periodsAround} for a year and the next, flattened [from, to, from, to, …],
+ * kept by rule and year: the rule's dates are worked out once per year, not once per hour (a year
+ * of hours under a rule asks 8,760 times).
+ */
+const PERIODS = new Map<string, Map<number, Float64Array>>();
+
+function periodsNear(rule: DaylightSavingRule, year: number): Float64Array {
+  const key = `${rule.start}|${rule.end}|${rule.shift}`;
+  let byYear = PERIODS.get(key);
+  if (byYear === undefined) {
+    if (PERIODS.size >= 16) PERIODS.delete(PERIODS.keys().next().value as string);
+    byYear = new Map();
+    PERIODS.set(key, byYear);
+  }
+  let periods = byYear.get(year);
+  if (periods === undefined) {
+    periods = Float64Array.from([...periodsAround(rule, year), ...periodsAround(rule, year + 1)].flat());
+    byYear.set(year, periods);
+  }
+  return periods;
 }
 
 /**
