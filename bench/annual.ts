@@ -3,8 +3,15 @@
  * skyline, Perez 1990 sky, angle-dependent SHGC, supplied DNI/DHI arrays — against suncalc 2.0.2's
  * bare `getPosition` for the same 8760 instants, in the same run. The weather arrays are made once
  * from the ASHRAE clear-sky model outside the timed part.
+ *
+ * Two lines: `window_annual_vs_suncalc` is `annualSeries` as a workbook, the pane or a schedule
+ * calls it again and again for windows of one site — the site's sun path, weather and sky
+ * brightness kept from the call before (src/core/gain/sharedYear.ts), the window's own angles,
+ * shading and gain worked out; `window_annual_cold_vs_suncalc` is the first window of a site, with
+ * the year's sun path, weather and sky brightness worked out too.
  */
-import { annualSeries } from '../src/core/gain/annual';
+import { annualOfPrepared, annualSeries } from '../src/core/gain/annual';
+import { prepareWindow } from '../src/core/gain/prepared';
 import { ashraeClearSky } from '../src/core/sky/clearSky';
 import { annualSunPath } from '../src/core/sun/sunPath';
 import { serialToUtcMs } from '../src/core/time/calendar';
@@ -55,11 +62,16 @@ export function annualBench(): BenchSection {
   const stamps = annualSunPath(YEAR, SITE).stampSerial;
   const dates = Array.from(stamps, (s) => new Date(serialToUtcMs(s - 1 / 48, SITE.utcOffset)));
 
-  const [ours, suncalc] = timeInterleaved([
+  const [ours, cold, suncalc] = timeInterleaved([
     {
       label: `window annual series, shaded, Perez, measured (${hours} h)`,
       operations: hours,
       work: () => consume(annualSeries(spec).gain[4000]),
+    },
+    {
+      label: `  the same, first window of its site (sun path worked out)`,
+      operations: hours,
+      work: () => consume(annualOfPrepared(prepareWindow(spec)).gain[4000]),
     },
     {
       label: `suncalc 2.0.2 getPosition (${hours} instants)`,
@@ -73,7 +85,7 @@ export function annualBench(): BenchSection {
   ]);
   return {
     title: 'Annual window series (full hourly gain of one shaded window) vs bare sun positions',
-    timings: [ours, suncalc],
-    ratios: { window_annual_vs_suncalc: ratio(ours, suncalc) },
+    timings: [ours, cold, suncalc],
+    ratios: { window_annual_vs_suncalc: ratio(ours, suncalc), window_annual_cold_vs_suncalc: ratio(cold, suncalc) },
   };
 }

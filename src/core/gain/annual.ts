@@ -32,7 +32,7 @@ import type { ShgcCurve } from '../glazing';
 import { type PreparedShading, prepareShading } from '../shading';
 import { annualSunPath, type SunPathYear } from '../sun';
 import { describeDaylightSaving, standardToClock, type TimeConvention } from '../time';
-import { type SharedYear, dniExtraByDay, fillWeather, monthOfDay, perezBrightnessOf, sharedYearKey, sharedYearOf, sunPathAt } from './sharedYear';
+import { type SharedYear, SharedYears, dniExtraByDay, fillWeather, monthOfDay, perezBrightnessOf, sharedYearKey, sharedYearOf, sunPathAt } from './sharedYear';
 import type { DiffuseShading, WindowSpec } from './window';
 
 /**
@@ -122,8 +122,15 @@ export { monthOfDay };
  */
 export function annualSeries(spec: WindowSpec): AnnualSeries {
   const w = prepareWindow(spec);
-  return annualOfPrepared(w);
+  return annualOfPrepared(w, RECENT_YEARS.of(w));
 }
+
+/**
+ * The sun and weather of the last few sites asked for: a workbook's windows, the pane's shading
+ * options and a table of several windows come back to the same site, year and weather, and the
+ * year's sun path, weather and sky brightness are the same numbers for all of them.
+ */
+const RECENT_YEARS = new SharedYears(4);
 
 /** Sines and cosines of the sun for a one-off year: scratch columns of this module (one call runs at a time). */
 const ONE_OFF_TRIG = { sinAltitude: new Float64Array(8784), cosAltitude: new Float64Array(8784), sinAzimuth: new Float64Array(8784), cosAzimuth: new Float64Array(8784) };
@@ -152,8 +159,11 @@ export function annualOfPrepared(w: PreparedWindow, shared?: SharedYear, reuse =
     for (const c of [scratch.gain, scratch.beam, scratch.sky, scratch.ground, scratch.skyUnshaded, scratch.groundUnshaded, scratch.sunlitFraction, scratch.shgc]) c.fill(0);
     scratchOwner.set(n, sy);
   }
+  // A full series from a shared year gets its own copies of the shared columns it hands out.
+  const handOut = (c: Float64Array) => (shared !== undefined && !reuse ? c.slice() : c);
+  const stampSerial = handOut(sy.stampSerial);
   const rule = spec.site.daylightSaving;
-  let clockStamp = sy.stampSerial;
+  let clockStamp = stampSerial;
   if (rule !== undefined) {
     clockStamp = new Float64Array(n);
     // An hour-ending row moves with its hour's middle; an instant row with itself.
@@ -170,12 +180,12 @@ export function annualOfPrepared(w: PreparedWindow, shared?: SharedYear, reuse =
     timeConvention: w.convention,
     hours: n,
     glassArea: w.glassArea,
-    stampSerial: sy.stampSerial,
+    stampSerial,
     clockStamp,
     clockRule: describeDaylightSaving(rule),
     yearFit: w.yearFit?.text,
-    sunAltitude: sy.altitude,
-    sunAzimuth: sy.azimuth,
+    sunAltitude: handOut(sy.altitude),
+    sunAzimuth: handOut(sy.azimuth),
     incidence: col(c.incidence as Float64Array),
     profileAngle: col(c.profileAngle as Float64Array),
     sunlitFraction: col(c.sunlitFraction as Float64Array),

@@ -171,24 +171,58 @@ export function sharedYearOf(w: PreparedWindow, trig?: SunTrigColumns): SharedYe
   };
 }
 
+/** The supplied series a weather's irradiance is read from (none for a clear sky). */
+function suppliedSeries(weather: Weather): ArrayLike<number>[] {
+  switch (weather.kind) {
+    case 'measured':
+      return [weather.dni, weather.dhi];
+    case 'globalHorizontal':
+      return [weather.ghi];
+    default:
+      return [];
+  }
+}
+
+/** Whether a series still holds the values of its snapshot (NaN equal to NaN: a missing hour stays missing). */
+function sameValues(series: ArrayLike<number>, snapshot: Float64Array): boolean {
+  if (series.length !== snapshot.length) return false;
+  for (let i = 0; i < snapshot.length; i++) {
+    const a = series[i];
+    const b = snapshot[i];
+    if (a !== b && !(a !== a && b !== b)) return false;
+  }
+  return true;
+}
+
 /**
- * Shared years kept by key, for a run over many windows (a schedule): each site, year and weather is
- * worked out once. Holds at most `limit` years (about 0.7 MB each), dropping the oldest first.
+ * Shared years kept by key, for a run over many windows (a schedule) or for calls that come back to
+ * the same site (a workbook's windows, the pane's options): each site, year and weather is worked
+ * out once. Holds at most `limit` years (about 0.7 MB each), dropping the oldest first.
+ *
+ * A supplied series is known by its identity, and its values are checked on every use against a
+ * copy taken when the year was worked out (a few microseconds against a millisecond of work), so
+ * a series changed in place is never read from a stale year.
  */
 export class SharedYears {
-  private readonly years = new Map<string, SharedYear>();
+  private readonly years = new Map<string, { year: SharedYear; snapshots: Float64Array[] }>();
   constructor(private readonly limit = 64) {}
 
-  /** The shared year of a prepared window, worked out on first use. */
+  /** The shared year of a prepared window, worked out on first use (or again when its series changed). */
   of(w: PreparedWindow): SharedYear {
     const key = sharedYearKey(w);
-    let y = this.years.get(key);
-    if (y === undefined) {
-      y = sharedYearOf(w);
-      if (this.years.size >= this.limit) this.years.delete(this.years.keys().next().value as string);
-      this.years.set(key, y);
+    const series = suppliedSeries(w.spec.weather);
+    const kept = this.years.get(key);
+    if (kept !== undefined && series.every((s, k) => sameValues(s, kept.snapshots[k]))) {
+      // Most recently used last: the oldest is dropped first.
+      this.years.delete(key);
+      this.years.set(key, kept);
+      return kept.year;
     }
-    return y;
+    const year = sharedYearOf(w);
+    this.years.delete(key);
+    if (this.years.size >= this.limit) this.years.delete(this.years.keys().next().value as string);
+    this.years.set(key, { year, snapshots: series.map((s) => Float64Array.from(s)) });
+    return year;
   }
 
   /** Number of years kept. */

@@ -33,6 +33,11 @@ function measured(year = 2026): { dni: Float64Array; dhi: Float64Array } {
 }
 
 const WEATHER = measured();
+
+/** A window's year worked out alone: its own sun path and weather, no shared or kept year. */
+function ownYear(spec: WindowSpec) {
+  return annualOfPrepared(prepareWindow(spec));
+}
 /** Outdoor dry-bulb [°C] for the window with a U-value: a daily swing, one hour missing. */
 const DRY_BULB = Float64Array.from({ length: 8760 }, (_, i) => (i === 4000 ? NaN : 12 + 8 * Math.sin((i / 24) * 2 * Math.PI)));
 
@@ -54,7 +59,7 @@ describe('windows sharing their site year', () => {
   test('each window\'s summary from shared years is exactly its summary from its own year', () => {
     const years = new SharedYears();
     for (const spec of windows()) {
-      const own = annualSeries(spec);
+      const own = ownYear(spec);
       const shared = summarizeWindowYear(spec, years);
       expect(shared.summary).toEqual(summarizeAnnual(own));
       expect(shared.glassArea).toBe(own.glassArea);
@@ -64,7 +69,7 @@ describe('windows sharing their site year', () => {
   test('a window\'s hourly columns from a shared year are exactly those from its own year', () => {
     const years = new SharedYears();
     for (const spec of windows().slice(1, 6)) {
-      const own = annualSeries(spec);
+      const own = ownYear(spec);
       const w = prepareWindow(spec);
       const fromShared = annualOfPrepared(w, years.of(w));
       for (const k of ['incidence', 'profileAngle', 'sunlitFraction', 'dni', 'dhi', 'beam', 'sky', 'ground', 'shgc', 'gain', 'radiant', 'convective', 'conduction', 'missing', 'sunAltitude', 'stampSerial', 'clockStamp'] as const) {
@@ -96,6 +101,40 @@ describe('windows sharing their site year', () => {
     const elsewhere = prepareWindow(baseSpec({ site: { ...SITE, latitude: 41 } }));
     expect(() => annualOfPrepared(elsewhere, years.of(here))).toThrow(SunpaneError);
     expect(() => annualOfPrepared(prepareWindow(baseSpec({ year: 2027 })), years.of(here))).toThrow(/not those of this window's site, year and weather/);
+  });
+
+  test('a supplied series changed in place is read again, never from the year kept for its old values', () => {
+    const years = new SharedYears();
+    const weather = { kind: 'measured' as const, dni: WEATHER.dni.slice(), dhi: WEATHER.dhi.slice() };
+    const spec = shadedSpec({ weather });
+    const before = summarizeWindowYear(spec, years).summary;
+    weather.dni.fill(0); // an overcast year: only diffuse light
+    const after = summarizeWindowYear(spec, years).summary;
+    expect(after).toEqual(summarizeAnnual(ownYear(spec)));
+    expect(after).not.toEqual(before);
+    weather.dhi[5000] = NaN; // one hour missing now
+    expect(summarizeWindowYear(spec, years).summary).toEqual(summarizeAnnual(ownYear(spec)));
+    expect(years.size).toBe(1);
+  });
+
+  test('annualSeries keeps the last sites\' years: the same numbers as the window\'s own year, columns of its own', () => {
+    for (const spec of windows()) {
+      const first = annualSeries(spec);
+      const again = annualSeries(spec);
+      const own = ownYear(spec);
+      for (const k of ['sunAltitude', 'sunAzimuth', 'stampSerial', 'clockStamp', 'dni', 'dhi', 'sunlitFraction', 'sky', 'gain', 'conduction', 'missing'] as const) {
+        expect(Array.from(again[k])).toEqual(Array.from(own[k]));
+      }
+      // What one caller does to its series never reaches the next caller.
+      first.sunAltitude.fill(-1);
+      first.stampSerial.fill(0);
+      first.dni.fill(0);
+      first.missing.fill(1);
+      const third = annualSeries(spec);
+      expect(Array.from(third.sunAltitude)).toEqual(Array.from(own.sunAltitude));
+      expect(Array.from(third.stampSerial)).toEqual(Array.from(own.stampSerial));
+      expect(Array.from(third.gain)).toEqual(Array.from(own.gain));
+    }
   });
 
   test('the number of years kept is bounded (oldest dropped first)', () => {
