@@ -598,8 +598,8 @@ function setPlainFields(spec: WindowSpec, f: WindowFields): void {
   }
 }
 
-/** Sets a dotted path in an object, making the objects on the way. */
-function setPath(obj: Record<string, unknown>, dotted: string, value: unknown): void {
+/** Sets a dotted path of a window (`shading.overhang.projection`) in an object, making the objects on the way. */
+export function setPath(obj: Record<string, unknown>, dotted: string, value: unknown): void {
   const keys = dotted.split('.');
   let o = obj;
   for (const k of keys.slice(0, -1)) {

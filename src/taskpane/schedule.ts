@@ -12,7 +12,7 @@ import { SunpaneError } from '../core/common';
 import type { WindowSpec } from '../core/gain';
 import { EXAMPLE_SITES } from '../demo/sites';
 import { choiceFor } from '../registry/glossary';
-import { inGlossaryWords, readFieldCell } from '../registry/windowRange';
+import { inGlossaryWords, readFieldCell, setPath } from '../registry/windowRange';
 import { SCHEDULE_COLUMNS, SITE_KEY, SKYLINE_KEY, type ScheduleColumn, columnForHeader, headerKey, matchHeaders, requiredColumns } from '../schedule/columns';
 import { FIELDS, type FieldDef, type FormValues, applyExampleSite, fieldForArgument } from './fields';
 import { withoutPath } from './messages';
@@ -40,16 +40,6 @@ const COLUMN_FIELDS: ReadonlyMap<string, readonly FieldDef[]> = new Map(
 
 /** Columns the form has no box for (air pressure and temperature, an SHGC table, the radiant fraction): set on the row's window directly. */
 const BOXLESS = new Set(SCHEDULE_COLUMNS.filter((c) => c.key !== SITE_KEY && c.key !== SKYLINE_KEY && (COLUMN_FIELDS.get(c.key) ?? []).length === 0).map((c) => c.key));
-
-function setPath(obj: Record<string, unknown>, dotted: string, value: unknown): void {
-  const keys = dotted.split('.');
-  let o = obj;
-  for (const k of keys.slice(0, -1)) {
-    if (typeof o[k] !== 'object' || o[k] === null) o[k] = {};
-    o = o[k] as Record<string, unknown>;
-  }
-  o[keys[keys.length - 1]] = value;
-}
 
 /** Weather kind a row switches to when it fills a clear-sky column. */
 const WEATHER_OF_COLUMN: Readonly<Record<string, string>> = { linkeTurbidity: 'ineichenClearSky', tauB: 'ashraeClearSky', tauD: 'ashraeClearSky' };
