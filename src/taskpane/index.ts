@@ -6,7 +6,7 @@
 import { type PaneHost, createPane } from './pane';
 import type { SettingsStore } from './persist';
 import type { RunBatch } from './resultSheets';
-import { applyTheme } from './theme';
+import { followTheme } from './theme';
 
 export { createPane } from './pane';
 
@@ -23,9 +23,9 @@ function documentSettings(): SettingsStore | undefined {
   return Office.context?.document?.settings as unknown as SettingsStore | undefined;
 }
 
-/** Builds the pane into the page's #sunpane-root, in the Office theme's colours. */
+/** Builds the pane into the page's #sunpane-root, in the Office theme's colours (followed while the pane is open). */
 export function startPane(doc: Document): void {
-  applyTheme(doc);
+  followTheme(doc);
   const host: PaneHost = { run: excelRun, settings: documentSettings() };
   createPane(doc, host);
 }

@@ -63,3 +63,21 @@ export function applyTheme(doc: Document, theme: OfficeThemeColours | undefined 
   root.style.colorScheme = dark ? 'dark' : 'light';
   return dark ? 'dark' : 'light';
 }
+
+/**
+ * Applies the theme now and again whenever it may have changed while the pane is open. Excel gives a
+ * task pane no event when the user switches the Office theme (the documented theme-changed event
+ * belongs to other hosts), so the pane reads the theme again when it becomes visible (the user
+ * comes back to it after changing the theme) and when the system's light or dark scheme changes.
+ * @param doc - the pane's document
+ * @param read - where the theme comes from (default: the Office theme)
+ * @returns the scheme chosen now
+ */
+export function followTheme(doc: Document, read: () => OfficeThemeColours | undefined = officeTheme): 'light' | 'dark' {
+  const again = () => {
+    if (doc.visibilityState !== 'hidden') applyTheme(doc, read());
+  };
+  doc.addEventListener?.('visibilitychange', again);
+  doc.defaultView?.matchMedia?.('(prefers-color-scheme: dark)').addEventListener?.('change', again);
+  return applyTheme(doc, read());
+}

@@ -7,7 +7,7 @@ import * as fs from 'node:fs';
 import * as path from 'node:path';
 import { webDarkTheme, webLightTheme } from '@fluentui/tokens';
 import { FLUENT_DARK, FLUENT_LIGHT } from '../../src/taskpane/fluentTokens';
-import { applyTheme, isDarkOfficeTheme, luminance } from '../../src/taskpane/theme';
+import { applyTheme, followTheme, isDarkOfficeTheme, luminance } from '../../src/taskpane/theme';
 import { USED_TOKENS } from '../../src/taskpane/tokenNames';
 
 /** A stand-in of the little of a document that applyTheme touches. */
@@ -60,5 +60,22 @@ describe('the pane follows the Office theme with Fluent design tokens', () => {
     expect(weak.props.get('--paneForeground')).toBe(FLUENT_LIGHT.colorNeutralForeground1);
     // Outside Office, without a window, the light theme.
     expect(applyTheme(fakeDocument().doc, undefined)).toBe('light');
+  });
+
+  test('a theme switched while the pane is open is followed when the pane is shown again', () => {
+    const { doc, root } = fakeDocument();
+    const handlers = new Map<string, () => void>();
+    const d = doc as unknown as { addEventListener: (t: string, h: () => void) => void; visibilityState: string };
+    d.addEventListener = (t, h) => handlers.set(t, h);
+    d.visibilityState = 'visible';
+    let theme = { bodyBackgroundColor: '#FFFFFF', bodyForegroundColor: '#000000' };
+    expect(followTheme(doc, () => theme)).toBe('light');
+    theme = { bodyBackgroundColor: '#1F1F1F', bodyForegroundColor: '#FFFFFF' };
+    d.visibilityState = 'hidden';
+    handlers.get('visibilitychange')!();
+    expect(root.dataset.theme).toBe('light'); // hidden: nothing to repaint yet
+    d.visibilityState = 'visible';
+    handlers.get('visibilitychange')!();
+    expect(root.dataset.theme).toBe('dark');
   });
 });
