@@ -129,7 +129,7 @@ describe('sunpane table', () => {
   });
 
   it.each([
-    [{ shgc: undefined }, /^sunpane: shgc = blank is not allowed: is required: must be a number from 0 to 1/],
+    [{ shgc: undefined }, /^sunpane: shgc = blank is not allowed: it is required and must be a number from 0 to 1/],
     [{ width: -1 }, /^sunpane: width = -1 is not allowed: must be a number from 0\.01 to 100 m/],
     [{ overhangProjecton: 0.5 }, /^sunpane: overhangProjecton = 0\.5 is not allowed: no window field has this name \(did you mean overhangProjection\?\)/],
     [{ shading: { overhang: { projecton: 0.5 } } }, /^sunpane: shading\.overhang\.projecton = 0\.5 is not allowed: is not a field of shading\.overhang/],
@@ -227,7 +227,7 @@ describe('sunpane schedule', () => {
     const input = writeTemp(dir, 'windows.csv', text);
     const r = await run('schedule', '--in', input, '--out', path.join(dir, 'out.csv'));
     expect(r.code).toBe(1);
-    expect(r.err).toBe(`sunpane: ${input} line 4 ("East meeting room"), column "Width [m]" = blank is not allowed: is required: must be a number from 0.01 to 100 m`);
+    expect(r.err).toBe(`sunpane: ${input} line 4 ("East meeting room"), column "Width [m]" = blank is not allowed: it is required and must be a number from 0.01 to 100 m`);
     expect(fs.readdirSync(dir)).toEqual(['windows.csv']);
   });
 
@@ -279,6 +279,6 @@ describe('help by name', () => {
     const input = writeTemp(dir, 'w.csv', 'name,year,surfaceAzimuth,width,height,shgc,linkeTurbidity\nLone,2026,180,1,1,0.4,3\n');
     const r = await run('schedule', '--in', input, '--out', path.join(dir, 'o.csv'));
     expect(r.code).toBe(1);
-    expect(r.err).toBe(`sunpane: ${input} line 2 ("Lone"), column "Latitude [°]" = blank is not allowed: is required: must be a number from -90 to 90 ° (or give an example site)`);
+    expect(r.err).toBe(`sunpane: ${input} line 2 ("Lone"), column "Latitude [°]" = blank is not allowed: it is required and must be a number from -90 to 90 ° (or give an example site)`);
   });
 });

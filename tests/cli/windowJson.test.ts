@@ -159,6 +159,6 @@ describe('window JSON', () => {
     const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'sunpane-json-'));
     const file = path.join(dir, 'w.json');
     fs.writeFileSync(file, JSON.stringify({ ...MINIMAL, height: undefined }));
-    expect(() => readWindowFile(file)).toThrow(/^height = blank is not allowed: is required: must be a number from 0\.01 to 100 m \(in .*w\.json\)$/);
+    expect(() => readWindowFile(file)).toThrow(/^height = blank is not allowed: it is required and must be a number from 0\.01 to 100 m \(in .*w\.json\)$/);
   });
 });

@@ -161,8 +161,8 @@ describe('errors become cells Excel can show', () => {
   });
 
   test('a required argument left blank is #VALUE! naming it', () => {
-    expectError(ratio(null)[0][0], ERROR_CODE.invalidValue, 'a = blank is not allowed: is required');
-    expectError(ratio([['']], [[3]])[0][0], ERROR_CODE.invalidValue, 'a = blank is not allowed: is required');
+    expectError(ratio(null)[0][0], ERROR_CODE.invalidValue, 'a = blank is not allowed: it is required');
+    expectError(ratio([['']], [[3]])[0][0], ERROR_CODE.invalidValue, 'a = blank is not allowed: it is required');
   });
 
   test('a documented "no value" is #N/A with its message', () => {

@@ -91,7 +91,7 @@ describe('broadcasting over ranges', () => {
     expect(out[1][0]).toBeInstanceOf(SunpaneError);
     expect((out[1][0] as SunpaneError).message).toBe('a = 11 is not allowed: must be a number from 0 to 10');
     expect((out[2][0] as SunpaneError).message).toBe('a = "x" is not allowed: must be a number from 0 to 10');
-    expect((out[3][0] as SunpaneError).message).toMatch(/^a = blank is not allowed: is required/);
+    expect((out[3][0] as SunpaneError).message).toMatch(/^a = blank is not allowed: it is required/);
   });
 
   test('a documented no-value result passes through as NotAvailable', () => {

@@ -13,8 +13,8 @@ import { FUNCTIONS, isOptional } from '../../src/registry';
 import { GLOSSARY, type GlossaryEntry, WINDOW_FIELDS } from '../../src/registry/glossary';
 import { type Args, type FunctionDescriptor, NotAvailable, type OutTable, type ParamDescriptor, type RawArg } from '../../src/registry/types';
 
-/** Every message a call gave (errors and #N/A reasons), read at the end for wording no user should see. */
-const MESSAGES: string[] = [];
+/** Every message a call gave (errors and #N/A reasons) and the function that gave it, read at the end for wording no user should see. */
+const MESSAGES: { fn: string; message: string }[] = [];
 
 /** A window's fields as name → value cells (only valid values; combinations may still be refused). */
 function windowArb(): fc.Arbitrary<RawArg> {
@@ -167,7 +167,7 @@ function checkValid(fn: FunctionDescriptor, out: OutTable): void {
   for (const row of out) {
     for (const cell of row) {
       if (cell instanceof SunpaneError) throw new Error(`${fn.name}: valid arguments gave an error: ${cell.message}`);
-      if (cell instanceof NotAvailable) MESSAGES.push(cell.message);
+      if (cell instanceof NotAvailable) MESSAGES.push({ fn: fn.name, message: cell.message });
       if (cell instanceof NotAvailable || typeof cell === 'string') continue;
       expect(Number.isFinite(cell)).toBe(true);
       if (fn.result.shape === 'value') {
@@ -182,11 +182,11 @@ function errorOf(fn: FunctionDescriptor, raw: RawArg[]): SunpaneError | undefine
   try {
     const out = applyFunction(fn, raw);
     const cell = out.flat().find((c) => c instanceof SunpaneError);
-    if (cell) MESSAGES.push((cell as SunpaneError).message);
+    if (cell) MESSAGES.push({ fn: fn.name, message: (cell as SunpaneError).message });
     return cell as SunpaneError | undefined;
   } catch (err) {
     if (err instanceof SunpaneError) {
-      MESSAGES.push(err.message);
+      MESSAGES.push({ fn: fn.name, message: err.message });
       return err;
     }
     throw err;
@@ -330,13 +330,93 @@ describe('diffuse shading at the edges', () => {
 });
 
 /**
+ * Physically meaningless sizes: 1e-200 m in every length argument of every function, and in every
+ * length field of a window range, gives either a finite result inside the declared bounds or a
+ * message naming that argument, the value and the allowed range — never "internal error", NaN or a
+ * thrown exception. The other arguments are valid random draws (fixed seed).
+ */
+describe('a size of 1e-200 m', () => {
+  const TINY = 1e-200;
+  const BASE_WINDOW: [string, number][] = [['latitude', 40], ['longitude', -105], ['utcOffset', -7], ['surfaceAzimuth', 180], ['width', 1.5], ['height', 1.2], ['shgc', 0.4], ['tauB', 0.4], ['tauD', 2.3], ['year', 2026]];
+  const LENGTH_FIELDS = WINDOW_FIELDS.filter((f) => f.unit === 'm' && f.window!.cell === 'number');
+  type Case = [string, string, FunctionDescriptor, number, GlossaryEntry | ParamDescriptor, RawArg];
+  const cases: Case[] = FUNCTIONS.flatMap((fn) =>
+    fn.params.flatMap((p, k): Case[] => {
+      if (p.kind === 'number' && p.unit === 'm') return [[fn.name, p.name, fn, k, p, TINY]];
+      if (p.kind !== 'window') return [];
+      return LENGTH_FIELDS.map((f): Case => {
+        // A gap or extension needs its device: give it one 0.5 m deep.
+        const device = /^(overhang|leftFin|rightFin|fin)(?!Projection$)/.exec(f.name)?.[1];
+        const rows: [string, number][] = [...BASE_WINDOW.filter(([n]) => n !== f.name), ...(device ? [[`${device}Projection`, 0.5] as [string, number]] : []), [f.name, TINY]];
+        return [fn.name, `${p.name} ${f.name}`, fn, k, f, rows as RawArg];
+      });
+    }),
+  );
+
+  test('covers the length arguments and window fields', () => {
+    expect(LENGTH_FIELDS.map((f) => f.name)).toEqual(expect.arrayContaining(['width', 'height', 'overhangProjection', 'finProjection', 'revealDepth']));
+    expect(new Set(cases.map(([name]) => name)).size).toBeGreaterThan(10);
+  });
+
+  test.each(cases)('%s %s', (_name, _label, fn, k, size, tinyArg) => {
+    const belowRange = size.min !== undefined && (TINY < size.min || (TINY === size.min && size.exclusiveMin === true));
+    const draws = fc.sample(fc.tuple(...fn.params.map(validArb)), { numRuns: 100, seed: 20261203 }).map((raw) => {
+      const args = [...raw];
+      args[k] = tinyArg;
+      return args;
+    });
+    const usable = belowRange
+      ? draws.slice(0, 2)
+      : draws
+          .filter((raw) => {
+            try {
+              return fn.refuses?.(readArgs(fn, raw)) === undefined;
+            } catch {
+              return false;
+            }
+          })
+          .slice(0, fn.result.shape === 'spill' ? 1 : 5);
+    expect(usable.length).toBeGreaterThan(0);
+    for (const raw of usable) {
+      let out: OutTable;
+      try {
+        out = applyFunction(fn, raw);
+      } catch (err) {
+        if (!(err instanceof SunpaneError)) throw err;
+        out = [[err]];
+      }
+      for (const cell of out.flat()) {
+        if (cell instanceof SunpaneError || cell instanceof NotAvailable) MESSAGES.push({ fn: fn.name, message: cell.message });
+        if (belowRange) {
+          expect(cell).toBeInstanceOf(SunpaneError);
+          const err = cell as SunpaneError;
+          expect(err.argument.startsWith(fn.params[k].name)).toBe(true);
+          expect(err.message).toContain(size.name);
+          expect(err.message).toMatch(/= 1e-200 is not allowed: must be a number (from|above) [\d.]+ (and up )?to [\d.]+ m/);
+        } else if (cell instanceof SunpaneError) {
+          throw new Error(`${fn.name}: ${size.name} = 1e-200 m (inside its range) gave an error: ${cell.message}`);
+        } else if (typeof cell === 'number') {
+          expect(Number.isFinite(cell)).toBe(true);
+          if (fn.result.shape === 'value' && fn.result.min !== undefined) expect(cell).toBeGreaterThanOrEqual(fn.result.min - 1e-9);
+          if (fn.result.shape === 'value' && fn.result.max !== undefined) expect(cell).toBeLessThanOrEqual(fn.result.max + 1e-9);
+        }
+      }
+    }
+  });
+});
+
+/**
  * Every message the runs above provoked, in the user's words: no path inside the program
  * (`site.latitude`, `glazing.angleTable.values`, `shading.overhang.projection`, `weather.tauB`) and
- * never "internal error". Runs after the property tests (jest runs a file's tests in order).
+ * never "internal error". Every registered function must have given some (its invalid-argument runs
+ * alone give one per run), so no function's messages go unread. Runs after the tests above (jest
+ * runs a file's tests in order).
  */
 test('every message the fuzzing provoked names arguments as the signatures do, with no internal path', () => {
-  expect(MESSAGES.length).toBeGreaterThan(FUNCTIONS.length);
-  const internal = /\b(site|glazing|shading|weather|angleTable|overhang|leftFin|rightFin)\.[a-zA-Z]|internal error|undefined|\[object /;
-  const bad = [...new Set(MESSAGES)].filter((m) => internal.test(m));
+  const silent = FUNCTIONS.map((f) => f.name).filter((name) => !MESSAGES.some((m) => m.fn === name));
+  expect(silent).toEqual([]);
+  expect(new Set(MESSAGES.map((m) => m.fn)).size).toBe(FUNCTIONS.length);
+  const internal = /\b(site|glazing|shading|weather|angleTable|overhang|leftFin|rightFin)\.[a-zA-Z]|internal error|undefined|\[object |is not allowed: is /;
+  const bad = [...new Set(MESSAGES.map((m) => `${m.fn}: ${m.message}`))].filter((m) => internal.test(m));
   expect(bad).toEqual([]);
 });

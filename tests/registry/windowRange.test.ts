@@ -171,7 +171,7 @@ describe('building the window from its fields', () => {
   });
 
   test.each([
-    [[...PAIRS.slice(1)], 'window latitude = blank is not allowed: is required: must be a number from -90 to 90 ° (or give an example site)'],
+    [[...PAIRS.slice(1)], 'window latitude = blank is not allowed: it is required and must be a number from -90 to 90 ° (or give an example site)'],
     [[...PAIRS, ['overhangGap', 0.2]], 'window overhangProjection = blank is not allowed: needed because window overhangGap is given for an overhang (0 for no overhang)'],
     [[...PAIRS, ['leftFinGap', 0.2]], 'window leftFinProjection = blank is not allowed: needed because window leftFinGap is given for the left fin (or give finProjection for both fins; 0 for no fin)'],
     [[...PAIRS, ['overhangProjection', 0.5], ['overhangExtensionLeft', -1.5], ['overhangExtensionRight', -1]], /^window overhangExtensionLeft = -1\.5 is not allowed: must be at least -0\.5/],

@@ -14,12 +14,20 @@ export class SunpaneError extends Error {
   readonly allowed: string;
 
   constructor(argument: string, value: unknown, allowed: string, detail?: string) {
-    super(`${argument} = ${describeValue(value)} is not allowed: ${allowed}${detail ? ` (${detail})` : ''}`);
+    super(`${argument} = ${describeValue(value)} is not allowed: ${requiredWords(allowed)}${detail ? ` (${detail})` : ''}`);
     this.name = 'SunpaneError';
     this.argument = argument;
     this.value = value;
     this.allowed = allowed;
   }
+}
+
+/**
+ * `is required: must be …` as it reads after "is not allowed:" — `it is required and must be …` (not
+ * the doubled "is not allowed: is required: must be"); likewise `is needed too` → `it is needed too`.
+ */
+function requiredWords(allowed: string): string {
+  return allowed.replace(/^is required: must be /, 'it is required and must be ').replace(/^is (required|needed)\b/, 'it is $1');
 }
 
 /** A short, readable rendering of a refused value for messages. */
