@@ -73,9 +73,23 @@ describe('the help pages in dist/', () => {
     }
   });
 
+  test('every page whose result holds date-time serials says which number format to apply', () => {
+    // Declared date-time results; the step tables (their first rows are date-times in the value
+    // column); the hourly year with its "stamp" column.
+    const holding = FUNCTIONS.filter((f) => f.result.kind === 'dateTime' || (f.result.columns?.includes('method') && f.result.columns.includes('unit')) || f.params.some((p) => p.choices?.includes('stamp')));
+    expect(holding.map((f) => f.name)).toEqual(expect.arrayContaining(['SUNRISE', 'SOLARNOON', 'SUNSET', 'SOLARGAINSTEPS', 'GAINSTEPS', 'SOLARGAINYEAR', 'WINDOWYEAR']));
+    for (const fn of holding) expect({ fn: fn.name, says: distText(helpPagePath(fn.name)).includes('yyyy-mm-dd hh:mm') }).toEqual({ fn: fn.name, says: true });
+  });
+
   test('an example date is typed as a quoted text, as a cell needs it (2003-10-17 bare would be a subtraction)', () => {
     const bare = FUNCTIONS.flatMap((fn) => (fn.examples ?? []).flatMap((ex) => ex.args.filter((a) => /^\d{4}-\d\d-\d\d/.test(a.trim())).map((a) => `${fn.name}: ${a}`)));
     expect(bare).toEqual([]);
+  });
+
+  test("the add-in's support page (the manifest's help address) leads to the function help", () => {
+    const hrefs = [...distText('assets/support.html').matchAll(/\bhref="([^"]+)"/g)].map((m) => path.join(DIST, 'assets', m[1]));
+    expect(hrefs).toContain(path.join(DIST, 'help', 'index.html'));
+    for (const file of hrefs) expect(fs.existsSync(file)).toBe(true);
   });
 
   test('no help text enters the add-in bundle', () => {
