@@ -12,7 +12,12 @@ import { shadedSpec } from './gainFixtures';
 describe('gain explanation', () => {
   const spec = shadedSpec({ glazing: { shgc: 0.6, panes: 2, interiorAttenuation: 0.8, radiantFraction: 0.7 } });
   const t = civilToSerial(2026, 9, 21, 15, 30);
-  const steps = gainSteps(spec, t);
+  // Worked out before each test, not while the tests are collected, so that mutation testing can
+  // tell which tests run which code (work done at collection time counts for no test).
+  let steps: ReturnType<typeof gainSteps>;
+  beforeEach(() => {
+    steps = gainSteps(spec, t);
+  });
   const v = (q: string) => {
     const s = steps.find((x) => x.quantity === q);
     if (!s) throw new Error(`no step ${q}`);

@@ -25,7 +25,12 @@ const SHADING: Shading = {
 };
 
 describe('shadingMaskGrid', () => {
-  const grid = shadingMaskGrid(WINDOW, SHADING, 160, { azimuthStep: 15, altitudeStep: 10 });
+  // Worked out before each test, not while the tests are collected, so that mutation testing can
+  // tell which tests run which code (work done at collection time counts for no test).
+  let grid: ReturnType<typeof shadingMaskGrid>;
+  beforeEach(() => {
+    grid = shadingMaskGrid(WINDOW, SHADING, 160, { azimuthStep: 15, altitudeStep: 10 });
+  });
 
   test('covers azimuths 0…345 and altitudes 0…90 in the given steps', () => {
     expect(grid.azimuths).toHaveLength(24);
