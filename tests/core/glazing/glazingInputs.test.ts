@@ -1,0 +1,201 @@
+/**
+ * The glazing module's choices and refusals: which model a glazing gets, the area its SHGC applies to,
+ * interior attenuation, the solver for a pane's absorption, and the words of every refusal.
+ *
+ * Sources named beside each check:
+ * - the error convention of docs/architecture.md ("Errors"): a refusal names the argument as the user
+ *   sees it, the value, and the allowed range in words;
+ * - the documented contracts in src/core/glazing (types, defaults, the table rules);
+ * - the definition of a whole-window SHGC, rated over the whole rough opening, frame included, against a
+ *   centre-of-glass SHGC over the glass alone (NFRC 200 / ISO 15099 usage, from memory);
+ * - the interior attenuation coefficient as a multiplier on the bare glazing's gain, beam and diffuse
+ *   each with their own (ASHRAE Handbook—Fundamentals (2013) ch. 15, from memory);
+ * - Fresnel optics without absorption, (1 − r)/(1 + (2N − 1) r) per polarisation for N panes
+ *   (Duffie & Beckman, Solar Engineering of Thermal Processes, 4th ed., Eq. 5.1.8, from memory).
+ */
+import {
+  diffuseShgcOfType,
+  glazingTypeOf,
+  interiorAttenuationOf,
+  interiorAttenuationsOf,
+  requireAngleTable,
+  shgcAtAngle,
+  shgcAtAngleOfType,
+  shgcBasisOf,
+  shgcCurve,
+  shgcFromTable,
+  solarArea,
+} from '../../../src/core/glazing/shgc';
+import { GLASS_REFRACTIVE_INDEX, interfaceReflectance, KL_MAX, paneExtinctionFor, paneStackTransmittance } from '../../../src/core/glazing/fresnel';
+import { karlssonRoosFactor } from '../../../src/core/glazing/karlssonRoos';
+import { diffuseShgc } from '../../../src/core/glazing/shgc';
+import { SunpaneError } from '../../../src/core/common/errors';
+import { expectArgumentError } from '../../support/expectError';
+
+/** The refusal thrown by fn (docs/architecture.md, "Errors": argument, value, allowed range in words). */
+function refusal(fn: () => unknown): SunpaneError {
+  try {
+    fn();
+  } catch (err) {
+    if (err instanceof SunpaneError) return err;
+    throw err;
+  }
+  throw new Error('not refused');
+}
+
+describe('which model a glazing gets (the documented defaults)', () => {
+  test('no type: a table when an angle table is given, else clear panes; a given type is kept', () => {
+    expect(glazingTypeOf({ shgc: 0.5, panes: 2 })).toBe('clear');
+    expect(glazingTypeOf({ shgc: 0.5, panes: 2, angleTable: { angles: [0], values: [0.5] } })).toBe('table');
+    expect(glazingTypeOf({ shgc: 0.5, panes: 2, type: 'tinted' })).toBe('tinted');
+    expect(glazingTypeOf({ shgc: 0.5, panes: 2, type: 'coated', angleTable: { angles: [0], values: [0.5] } })).toBe('coated');
+    const e = refusal(() => glazingTypeOf({ shgc: 0.5, panes: 2, type: 'frosted' as never }));
+    expect(e.argument).toBe('glazing.type');
+    expect(e.message).toBe('glazing.type = "frosted" is not allowed: must be one of "clear", "tinted", "coated", "table"');
+  });
+
+  test('the SHGC basis is centre of glass unless whole window is given; others are refused listing both', () => {
+    expect(shgcBasisOf({ shgc: 0.5, panes: 2 })).toBe('centreOfGlass');
+    expect(shgcBasisOf({ shgc: 0.5, panes: 2, shgcBasis: 'wholeWindow' })).toBe('wholeWindow');
+    expect(shgcBasisOf({ shgc: 0.5, panes: 2, shgcBasis: 'centreOfGlass' })).toBe('centreOfGlass');
+    const e = refusal(() => shgcBasisOf({ shgc: 0.5, panes: 2, shgcBasis: 'frame' as never }));
+    expect(e.message).toBe('glazing.shgcBasis = "frame" is not allowed: must be one of "centreOfGlass", "wholeWindow"');
+  });
+
+  test('a clear or tinted glazing by name is the Fresnel model, a coated one Karlsson & Roos scaled by its SHGC', () => {
+    for (const theta of [0, 35, 60, 80]) {
+      expect(shgcAtAngleOfType(0.55, 2, theta, 'clear')).toBe(shgcAtAngle(0.55, 2, theta));
+      expect(shgcAtAngleOfType(0.55, 2, theta, 'tinted')).toBe(shgcAtAngle(0.55, 2, theta));
+      expect(shgcAtAngleOfType(0.55, 2, theta, 'coated', 3)).toBeCloseTo(0.55 * karlssonRoosFactor(theta, 2, 3), 14);
+    }
+    expect(diffuseShgcOfType(0.55, 2, 'clear')).toBe(diffuseShgc(0.55, 2));
+    expect(diffuseShgcOfType(0.55, 2, 'coated', 3)).not.toBeCloseTo(diffuseShgc(0.55, 2), 3);
+    const curve = shgcCurve({ shgc: 0.55, panes: 2, type: 'coated', typeParameter: 3 });
+    expect(diffuseShgcOfType(0.55, 2, 'coated', 3)).toBeCloseTo(curve.diffuse, 12);
+  });
+
+  test('by name, a table is sent to the lookup functions, and each argument is checked with its range', () => {
+    for (const call of [() => shgcAtAngleOfType(0.5, 2, 30, 'table'), () => diffuseShgcOfType(0.5, 2, 'table')]) {
+      const e = refusal(call);
+      expect(e.argument).toBe('glazingType');
+      expect(e.message).toBe('glazingType = "table" is not allowed: must be "clear", "tinted" or "coated" here (a table goes to the lookup functions)');
+    }
+    expectArgumentError(() => diffuseShgcOfType(0.5, 2, 'lowe'), 'glazingType');
+    expectArgumentError(() => shgcAtAngleOfType(1.5, 2, 30, 'clear'), 'shgcNormal');
+    expectArgumentError(() => diffuseShgcOfType(1.5, 2, 'clear'), 'shgcNormal');
+    expectArgumentError(() => shgcAtAngleOfType(0.5, 0, 30, 'clear'), 'panes');
+    expectArgumentError(() => diffuseShgcOfType(0.5, 5, 'coated', 3), 'panes');
+    expectArgumentError(() => shgcAtAngleOfType(0.5, 2, 181, 'clear'), 'incidence');
+    expectArgumentError(() => diffuseShgcOfType(0.5, 2, 'coated'), 'glazingTypeParameter');
+    const q = refusal(() => shgcAtAngleOfType(0.5, 2, 30, 'coated'));
+    expect(q.message).toContain('from 1 to 10');
+  });
+
+  test('a table glazing needs its table, named glazing.angleTable; its curve takes the table, not glazing.shgc', () => {
+    const e = refusal(() => shgcCurve({ shgc: 0.5, panes: 2, type: 'table' }));
+    expect(e.argument).toBe('glazing.angleTable');
+    expect(e.message).toContain('must be given for glazing type "table"');
+    const table = { angles: [0, 60], values: [0.42, 0.3] };
+    const curve = shgcCurve({ shgc: 0.9, panes: 2, angleTable: table });
+    expect(curve.normal).toBe(0.42);
+    expect(curve.atAngle(60)).toBeCloseTo(0.3, 12);
+    expect(curve.atAngle(30)).toBeCloseTo(shgcFromTable(table, 30), 5);
+    expectArgumentError(() => shgcCurve({ shgc: 0.5, panes: 2, angleTable: { angles: [0, 100], values: [0.5, 0.2] } }), 'glazing.angleTable.angles');
+    expectArgumentError(() => shgcCurve({ shgc: 1.5, panes: 2 }), 'glazing.shgc');
+    expectArgumentError(() => shgcCurve({ shgc: 0.5, panes: 7 }), 'glazing.panes');
+  });
+});
+
+describe('angle tables (the documented table rules)', () => {
+  test('angles from 0 to 90 °, at least one; as many values as angles; the messages say so', () => {
+    expect(refusal(() => requireAngleTable({ angles: [], values: [] })).message).toBe(
+      'angleTable.angles = a list of 0 is not allowed: must be a list of at least one angle from 0 to 90 °',
+    );
+    expect(refusal(() => requireAngleTable({ angles: [0, 30, 60], values: [0.5, 0.4] })).message).toBe(
+      'angleTable.values = a list of 2 is not allowed: must be a list of 3 SHGC values, one per angle',
+    );
+    expectArgumentError(() => requireAngleTable({ angles: [0, 30], values: undefined as never }), 'angleTable.values');
+    expectArgumentError(() => requireAngleTable(undefined as never), 'angleTable.angles');
+    expectArgumentError(() => requireAngleTable({ angles: [-1, 30], values: [0.5, 0.4] }), 'angleTable.angles');
+    expectArgumentError(() => requireAngleTable({ angles: [0, 30], values: [0.5, 1.01] }), 'angleTable.values');
+    expectArgumentError(() => requireAngleTable({ angles: [0], values: [2] }, 'glazing.angleTable'), 'glazing.angleTable.values');
+  });
+
+  test('angles strictly ascending, and at least 0.01° apart: the message names the rows', () => {
+    expect(refusal(() => requireAngleTable({ angles: [0, 40, 40], values: [0.5, 0.4, 0.3] })).message).toBe(
+      'angleTable.angles = a list of 3 is not allowed: must be strictly ascending (angle 3, 40, is not above 40)',
+    );
+    expect(refusal(() => requireAngleTable({ angles: [0, 50, 40], values: [0.5, 0.4, 0.3] })).message).toContain('(angle 3, 40, is not above 50)');
+    expect(refusal(() => requireAngleTable({ angles: [0, 40, 40.005], values: [0.5, 0.4, 0.3] })).message).toBe(
+      'angleTable.angles = a list of 3 is not allowed: must be at least 0.01° apart (angles 2 and 3 are 40 and 40.005)',
+    );
+    // Exactly 0.01° apart is allowed (the rule is "at least"); the table comes back as given.
+    const table = { angles: [0, 0.01], values: [0.5, 0.4] };
+    expect(requireAngleTable(table)).toBe(table);
+  });
+});
+
+describe('the area the SHGC applies to (whole window against centre of glass)', () => {
+  test('a whole-window SHGC applies to the rough opening, a centre-of-glass one to the glass only', () => {
+    expect(solarArea(2, 1.5, 0.2, 'wholeWindow')).toBe(3);
+    expect(solarArea(2, 1.5, 0.2, 'centreOfGlass')).toBeCloseTo(2.4, 14);
+    // The opening is still checked for a whole-window SHGC.
+    expectArgumentError(() => solarArea(0, 1.5, 0.2, 'wholeWindow'), 'width');
+    expectArgumentError(() => solarArea(2, 1.5, 1, 'wholeWindow'), 'frameFraction');
+  });
+});
+
+describe('interior attenuation (a multiplier on the bare glazing, beam and diffuse apart)', () => {
+  test('none given: no shade; one for both; beam and diffuse given apart override it', () => {
+    expect(interiorAttenuationsOf({ shgc: 0.5, panes: 2 })).toEqual({ beam: 1, diffuse: 1, shaded: false });
+    expect(interiorAttenuationsOf({ shgc: 0.5, panes: 2, interiorAttenuation: 1 })).toEqual({ beam: 1, diffuse: 1, shaded: false });
+    expect(interiorAttenuationsOf({ shgc: 0.5, panes: 2, interiorAttenuation: 0.8 })).toEqual({ beam: 0.8, diffuse: 0.8, shaded: true });
+    expect(interiorAttenuationsOf({ shgc: 0.5, panes: 2, interiorAttenuationBeam: 0.6 })).toEqual({ beam: 0.6, diffuse: 1, shaded: true });
+    expect(interiorAttenuationsOf({ shgc: 0.5, panes: 2, interiorAttenuationDiffuse: 0.7 })).toEqual({ beam: 1, diffuse: 0.7, shaded: true });
+    expect(interiorAttenuationsOf({ shgc: 0.5, panes: 2, interiorAttenuation: 0.8, interiorAttenuationBeam: 0.5, interiorAttenuationDiffuse: 0.9 })).toEqual({
+      beam: 0.5,
+      diffuse: 0.9,
+      shaded: true,
+    });
+    expect(interiorAttenuationOf({ shgc: 0.5, panes: 2, interiorAttenuation: 0.8, interiorAttenuationBeam: 0.5 })).toBe(0.5);
+  });
+
+  test('each coefficient is checked within 0…1 under its own name', () => {
+    expectArgumentError(() => interiorAttenuationsOf({ shgc: 0.5, panes: 2, interiorAttenuation: 1.2 }), 'glazing.interiorAttenuation');
+    expectArgumentError(() => interiorAttenuationsOf({ shgc: 0.5, panes: 2, interiorAttenuationBeam: -0.1 }), 'glazing.interiorAttenuationBeam');
+    expectArgumentError(() => interiorAttenuationsOf({ shgc: 0.5, panes: 2, interiorAttenuationDiffuse: 1.1 }), 'glazing.interiorAttenuationDiffuse');
+  });
+});
+
+describe("a pane's absorption fitted to a normal transmittance (Fresnel optics)", () => {
+  test('the fitted K·L gives the target back at normal incidence, for 1…4 panes', () => {
+    for (const panes of [1, 2, 3, 4]) {
+      for (const target of [0.7, 0.45, 0.2, 0.02]) {
+        const kl = paneExtinctionFor(target, panes);
+        expect(kl).toBeGreaterThan(0);
+        expect(kl).toBeLessThanOrEqual(KL_MAX);
+        expect(paneStackTransmittance(0, panes, kl)).toBeCloseTo(target, 10);
+      }
+    }
+  });
+
+  test('at or above the clear stack (1 − r)/(1 + (2N − 1) r) no absorption is needed (K·L = 0)', () => {
+    const { perpendicular: r } = interfaceReflectance(0);
+    expect(r).toBeCloseTo(((GLASS_REFRACTIVE_INDEX - 1) / (GLASS_REFRACTIVE_INDEX + 1)) ** 2, 14);
+    for (const panes of [1, 2, 3, 4]) {
+      const clear = (1 - r) / (1 + (2 * panes - 1) * r);
+      expect(paneExtinctionFor(clear, panes)).toBe(0);
+      expect(paneExtinctionFor(0.99, panes)).toBe(0);
+      expect(paneExtinctionFor(clear - 1e-6, panes)).toBeGreaterThan(0);
+    }
+  });
+
+  test('more absorption transmits less at every angle (Bouguer), and a thicker stack less than a thinner one', () => {
+    for (const theta of [0, 30, 60, 85]) {
+      expect(paneStackTransmittance(theta, 2, 0.2)).toBeLessThan(paneStackTransmittance(theta, 2, 0.05));
+      expect(paneStackTransmittance(theta, 3, 0.05)).toBeLessThan(paneStackTransmittance(theta, 2, 0.05));
+    }
+    expect(paneStackTransmittance(89.9, 1, 0)).toBeGreaterThan(0);
+    expect(paneStackTransmittance(90, 1, 0)).toBe(0);
+  });
+});
