@@ -45,13 +45,14 @@ export function monotoneCubic(xs: readonly number[], ys: readonly number[]): Mon
         m[k + 1] = 0;
         continue;
       }
-      const alpha = m[k] / d[k];
-      const beta = m[k + 1] / d[k];
-      const s = alpha * alpha + beta * beta;
-      if (s > 9) {
-        const tau = 3 / Math.sqrt(s);
-        m[k] = tau * alpha * d[k];
-        m[k + 1] = tau * beta * d[k];
+      // α = m[k]/Δk and β = m[k+1]/Δk, kept as products: α² + β² > 9 ⇔ |(m[k], m[k+1])| > 3|Δk|, and
+      // the scaled tangents τα·Δk = 3|Δk|·m/|(m[k], m[k+1])| (the same numbers, without the ratios,
+      // which overflow to Infinity when a secant of 1e-320 sits beside one of 0.3 and then give NaN).
+      const r = Math.hypot(m[k], m[k + 1]);
+      const limit = 3 * Math.abs(d[k]);
+      if (r > limit) {
+        m[k] = (limit * m[k]) / r;
+        m[k + 1] = (limit * m[k + 1]) / r;
       }
     }
   }
