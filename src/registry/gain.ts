@@ -220,6 +220,10 @@ function yearSpec(f: WindowFields, a: Args, prefix: string): WindowSpec {
   if ((dni === undefined) !== (dhi === undefined)) throw new SunpaneError(dni ? 'dhi' : 'dni', null, 'is needed too: give both hourly series, or neither for the clear sky');
   const { spec, hasWeather } = windowSpecFromFields(f, { prefix });
   if (dni && dhi) {
+    if (spec.glazing.uValue !== undefined) {
+      // the series bring no outdoor dry-bulb, and these functions take none: say so by the window's own field
+      throw new SunpaneError(f.written.get('uValue') ?? `${prefix}uValue`, spec.glazing.uValue, 'cannot be used with hourly dni and dhi series here: the conduction gain needs the hourly outdoor dry-bulb, which this function does not take; leave uValue out for the solar gain (the command line and the pane read dry-bulb from a weather file)');
+    }
     const hours = hoursInYear(spec.year);
     for (const [name, s] of [['dni', dni], ['dhi', dhi]] as const) {
       if (s.length !== hours) throw new SunpaneError(name, s, `must hold ${hours} values, one per hour of ${spec.year}`);
@@ -311,8 +315,7 @@ const SOLARGAINPEAKS: FunctionDescriptor = {
   params: [WINDOW, P.factorsOptional, P.day, G.headers],
   result: {
     shape: 'spill',
-    min: 0,
-    description: "12 rows, January first: month, peak hour (by the window's time convention: hour ending 1–24, or the instant's hour 0–23), peak gain [W]; with factors also the hour and value [W] of the peak cooling load",
+    description: "12 rows, January first: month, peak hour (by the window's time convention: hour ending 1–24, or the instant's hour 0–23), peak gain [W]; with factors also the hour and value [W] of the peak cooling load (below 0 when conduction on a design day colder than the room outweighs the sun)",
     columns: ['month', 'peakHour', 'peakGain', 'peakLoadHour', 'peakLoad'],
   },
   evaluate: (a) => peakRows(designSpec(a.window as WindowFields, 'window '), a, a.headers as boolean),
@@ -416,8 +419,7 @@ const PEAKGAINS: FunctionDescriptor = {
   ],
   result: {
     shape: 'spill',
-    min: 0,
-    description: '12 rows, January first: month, peak hour (hour ending, 1–24, local standard time; with timeConvention instant the hour 0–23), peak gain [W]; with factors also the hour and value [W] of the peak cooling load',
+    description: '12 rows, January first: month, peak hour (hour ending, 1–24, local standard time; with timeConvention instant the hour 0–23), peak gain [W]; with factors also the hour and value [W] of the peak cooling load (below 0 when conduction on a design day colder than the room outweighs the sun)',
     columns: ['month', 'peakHour', 'peakGain', 'peakLoadHour', 'peakLoad'],
   },
   evaluate: (a) => peakRows(legacyDesignSpec(a), a, a.headers as boolean),

@@ -353,7 +353,7 @@ export function inFieldWords(err: unknown, fields: WindowFields, prefix: Namer =
   const index = /\[(\d+)\]$/.exec(err.argument);
   const name = shown(field, fields, prefix) + (index ? ` (value ${Number(index[1]) + 1})` : '');
   const value = fields.values.get(field.name) ?? err.value;
-  return new SunpaneError(name, index ? err.value : value, err.allowed.replace(/weather\.|glazing\.angleTable\.|shading\.|site\./g, ''));
+  return new SunpaneError(name, index ? err.value : value, err.allowed.replace(/weather\.|glazing\.angleTable\.|glazing\.|shading\.|site\./g, ''));
 }
 
 const NO_FIELDS: WindowFields = { kind: 'window', values: new Map(), written: new Map() };

@@ -149,3 +149,40 @@ describe('gain worksheet functions', () => {
     expect(typeof call('WINDOWYEAR', [2026, 40, -105, -7, 180, 2, 1.5, 0.6, 'altitude', dni, dhi, null, null, ...GLASS])[4000][0]).toBe('number');
   });
 });
+
+describe('conduction fields, as the registry fuzz found them', () => {
+  const site: [string, number | string][] = [['latitude', 40], ['longitude', -105], ['utcOffset', -7], ['surfaceAzimuth', 180], ['width', 1.5], ['height', 1.2], ['shgc', 0.4], ['tauB', 0.4], ['tauD', 2.3], ['year', 2026]];
+  const messageOf = (name: string, args: RawArg[]) => {
+    const cell = applyFunction(findFunction(name)!, args).flat()[0];
+    expect(cell).toBeInstanceOf(SunpaneError);
+    return cell as SunpaneError;
+  };
+
+  test('a U-value without the indoor temperature is refused in the window\'s words (no glazing.uValue)', () => {
+    const err = messageOf('SOLARGAIN', [[...site, ['uValue', 3], ['dryBulbMax', 30], ['dailyRange', 10]], '2026-07-21T13:00']);
+    expect(err.argument).toBe('window indoorTemperature');
+    expect(err.message).toContain('must be given with uValue');
+    expect(err.message).not.toMatch(/glazing\.|weather\./);
+  });
+
+  test('the hourly year under supplied series refuses a U-value by name (it takes no dry-bulb), and refuses says so first', () => {
+    const fn = findFunction('SOLARGAINYEAR')!;
+    const dni = Array.from({ length: 8760 }, () => [100]);
+    const dhi = Array.from({ length: 8760 }, () => [50]);
+    const args: RawArg[] = [[...site, ['uValue', 3], ['indoorTemperature', 24], ['dryBulbMax', 30], ['dailyRange', 10]], 'gain', dni, dhi];
+    const err = messageOf('SOLARGAINYEAR', args);
+    expect(err.argument).toBe('window uValue');
+    expect(err.message).toContain('dry-bulb');
+    expect(err.message).not.toMatch(/glazing\.|weather\./);
+    expect(fn.refuses).toBeDefined();
+  });
+
+  test('a design day colder than the room gives a peak cooling load below 0 (conduction), and the result range says so', () => {
+    const factors = Array.from({ length: 24 }, () => [1 / 24]);
+    const out = applyFunction(findFunction('SOLARGAINPEAKS')!, [[...site.map(([n, v]) => [n, n === 'shgc' ? 0.05 : v]), ['uValue', 6], ['indoorTemperature', 24], ['dryBulbMax', -30], ['dailyRange', 5]], factors]);
+    const loads = out.map((r) => r[4] as number);
+    expect(Math.max(...loads)).toBeLessThan(0);
+    expect(findFunction('SOLARGAINPEAKS')!.result.min).toBeUndefined();
+    expect(findFunction('PEAKGAINS')!.result.min).toBeUndefined();
+  });
+});
