@@ -1,5 +1,5 @@
 /**
- * Shading options compared: the form's window with up to six sets of outside shading, each run for
+ * Shading options compared: the form's window with up to ten sets of outside shading, each run for
  * the year, against the same window with no overhang, fins or set-back (the skyline, being the
  * surroundings, stays). Figures per option: annual gain, peak gain, the cut in annual gain against
  * the unshaded window, and the mean shaded share of the glass over the hours the sun is in front
@@ -13,8 +13,8 @@ import { withoutPath } from './messages';
 import { inGlossaryWords } from '../registry/windowRange';
 import { readNumberText } from './spec';
 
-/** Most options compared at once. */
-export const MAX_OPTIONS = 6;
+/** Most options compared at once (ten shading schemes and the unshaded window: eleven years worked out). */
+export const MAX_OPTIONS = 10;
 
 /** One shading option as edited in the pane (texts as typed; blank = 0). */
 export interface ShadingOption {

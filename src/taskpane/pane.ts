@@ -14,7 +14,7 @@ import { FIELD_BY_ID, type FormValues, applyExampleSite, fieldForArgument } from
 import { inUserWords } from './messages';
 import { applyVisibility, fillForm, readForm, renderForm, showProblems } from './formView';
 import { PaneStore, type SettingsStore } from './persist';
-import { type AskReplace, type RunBatch, RunCancelled, planSheet, sheetNamesOf } from './resultSheets';
+import { type AskReplace, type RunBatch, RunCancelled, WriteFailed, planSheet, sheetNamesOf, stillOurs } from './resultSheets';
 import { SCHEDULE_HELP, SUMMARY_FORMATS, SUMMARY_HEADER, readSchedule, summaryRow } from './schedule';
 import { readNamedTable, readSheetData, withCheckedWeather } from './sheetData';
 import { type SheetData, buildWindowSpec, findProblems, isClean } from './spec';
@@ -161,6 +161,7 @@ export function createPane(doc: Document, host: PaneHost): void {
   const actionButtons = () => Array.from(root.querySelectorAll<HTMLButtonElement>('button.primary[data-action], #run-year, #run-schedule, #run-compare'));
   function setBusy(busy: boolean, text = 'Working…'): void {
     cancelRequested = false;
+    (byId(doc, 'cancel') as HTMLButtonElement).disabled = false;
     progress.hidden = !busy;
     if (busy) progress.scrollIntoView?.({ block: 'nearest' });
     byId(doc, 'progress-text').textContent = text;
@@ -170,6 +171,22 @@ export function createPane(doc: Document, host: PaneHost): void {
   function setProgress(done: number, total: number, text: string): void {
     (byId(doc, 'progress-bar') as HTMLProgressElement).value = total > 0 ? done / total : 0;
     if (!cancelRequested) byId(doc, 'progress-text').textContent = text;
+  }
+  /**
+   * The last step writes a small sheet in a few requests that are not stopped half-way: Cancel is
+   * switched off and the progress line says so (a stop asked for before this point wrote nothing).
+   */
+  function writingNow(what: string): void {
+    if (cancelRequested) throw new RunCancelled();
+    (byId(doc, 'cancel') as HTMLButtonElement).disabled = true;
+    byId(doc, 'progress-text').textContent = `Writing ${what}…`;
+  }
+  /** Where a result goes: a free name, or (asked) one of our earlier result sheets that still carries our title. */
+  async function planFor(base: string) {
+    const plan = await planSheet(base, await sheetNamesOf(host.run), store, askReplace, (n) => stillOurs(host.run, n));
+    store.saveSoon();
+    if (cancelRequested) throw new RunCancelled();
+    return plan;
   }
   function say(text: string, kind: 'ok' | 'error' | 'info' = 'info'): void {
     status.textContent = text;
@@ -238,6 +255,7 @@ export function createPane(doc: Document, host: PaneHost): void {
   }
   function reportFailure(err: unknown): void {
     if (err instanceof RunCancelled) say(err.message, 'info');
+    else if (err instanceof WriteFailed) say(err.message, 'error');
     else if (err instanceof SunpaneError) say(userWords(err), 'error');
     else say(`Excel refused the request: ${(err as Error)?.message ?? String(err)}`, 'error');
   }
@@ -251,7 +269,7 @@ export function createPane(doc: Document, host: PaneHost): void {
     try {
       await breathe();
       const result: YearResult = runYear(ready.spec);
-      const plan = await planSheet(`${ready.spec.name} hourly`, await sheetNamesOf(host.run), store, askReplace);
+      const plan = await planFor(`${ready.spec.name} hourly`);
       const written = await writeYearSheet(host.run, { ...plan, tableBase: `${ready.spec.name} hourly` }, { title: `Sunpane hourly solar gain: ${ready.spec.name}`, lines: describeSpec(ready.spec), timeConvention: ready.spec.timeConvention }, result.series, result.figures, {
         onProgress: (done, total) => setProgress(done, total, `Writing rows: ${done} of ${total}`),
         cancelled: () => cancelRequested,
@@ -312,7 +330,8 @@ export function createPane(doc: Document, host: PaneHost): void {
         await breathe();
         out.push(summaryRow(r.spec, runYear(r.spec).figures));
       }
-      const plan = await planSheet('Schedule results', await sheetNamesOf(host.run), store, askReplace);
+      const plan = await planFor('Schedule results');
+      writingNow('the schedule results');
       const name = await writeSmallTableSheet(host.run, plan, {
         title: `Sunpane window schedule: ${rows.length} windows, year ${rows[0].spec.year}`,
         lines: [`From table "${tableInput.value.trim()}"; ${weatherText(rows[0].spec)}.`, CAUTION],
@@ -403,7 +422,9 @@ export function createPane(doc: Document, host: PaneHost): void {
         await breathe();
         results.push({ label: o.label, figures: runYear(o.spec).figures });
       }
-      const plan = await planSheet(`${ready.spec.name} options`, await sheetNamesOf(host.run), store, askReplace);
+      if (cancelRequested) throw new RunCancelled();
+      const plan = await planFor(`${ready.spec.name} options`);
+      writingNow('the comparison');
       const name = await writeSmallTableSheet(host.run, plan, {
         title: `Sunpane shading options: ${ready.spec.name}`,
         lines: [

@@ -3,7 +3,7 @@
  * that reopening the workbook restores the form, the shading options, the schedule table name and
  * the list of sheets the pane wrote.
  */
-import { type ShadingOption, starterOptions } from './compare';
+import { MAX_OPTIONS, type ShadingOption, starterOptions } from './compare';
 import { FIELDS, type FormValues, initialValues } from './fields';
 import type { ResultSheetBook } from './resultSheets';
 
@@ -45,7 +45,7 @@ export function restoreState(raw: unknown): SavedPane {
     }
   }
   if (Array.isArray(r.options)) {
-    state.options = r.options.slice(0, 6).map((o) => ({ ...starterOptions()[0], ...Object.fromEntries(Object.entries(o ?? {}).filter(([, v]) => typeof v === 'string')) }) as ShadingOption);
+    state.options = r.options.slice(0, MAX_OPTIONS).map((o) => ({ ...starterOptions()[0], ...Object.fromEntries(Object.entries(o ?? {}).filter(([, v]) => typeof v === 'string')) }) as ShadingOption);
   }
   if (typeof r.scheduleTable === 'string') state.scheduleTable = r.scheduleTable;
   if (Array.isArray(r.resultSheets)) state.resultSheets = r.resultSheets.filter((s): s is string => typeof s === 'string');

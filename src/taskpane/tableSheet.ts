@@ -6,7 +6,7 @@
 import { escapeFormulaText } from '../io/textCells';
 import { cellAddress, rangeAddress } from './blocks';
 import { PALETTE, hexColour } from '../outputs/palette';
-import type { RunBatch } from './resultSheets';
+import { type RunBatch, writingSheet } from './resultSheets';
 import { tableNamesIn, uniqueTableName } from './tableNames';
 import { HEAD_FILL } from './yearSheet';
 
@@ -31,45 +31,85 @@ export function tableHeaderRow(t: SmallTable): number {
   return t.lines.length + 2;
 }
 
-/** Writes `t` to a new sheet `target.name` (deleting `target.replaces` first); returns the name. */
-export async function writeSmallTableSheet(run: RunBatch, target: { name: string; replaces?: string }, t: SmallTable): Promise<string> {
-  await run(async (ctx) => {
-    if (target.replaces) ctx.workbook.worksheets.getItem(target.replaces).delete();
-    const sheet = ctx.workbook.worksheets.add(target.name);
-    const head = sheet.getRange(rangeAddress(0, 0, 1 + t.lines.length, 1));
-    head.values = [[escapeFormulaText(t.title)], ...t.lines.map((l) => [escapeFormulaText(l)])];
-    sheet.getRange(cellAddress(0, 0)).format.font.bold = true;
-    const top = tableHeaderRow(t);
-    const width = t.header.length;
-    const all = sheet.getRange(rangeAddress(top, 0, t.rows.length + 1, width));
-    all.values = [t.header.slice(), ...t.rows.map(textSafeRow)];
-    all.numberFormat = [t.header.map(() => '@'), ...t.rows.map(() => t.formats.slice())];
-    const tableName = uniqueTableName(target.name, await tableNamesIn(ctx));
-    const table = sheet.tables.add(rangeAddress(top, 0, t.rows.length + 1, width), true);
-    table.name = tableName;
-    table.style = 'TableStyleMedium16';
-    const header = sheet.getRange(rangeAddress(top, 0, 1, width));
-    header.format.fill.color = HEAD_FILL;
-    header.format.font.color = '#FFFFFF';
-    header.format.autofitColumns();
-    if (t.chartColumn !== undefined && t.rows.length > 0) {
-      const labels = sheet.getRange(rangeAddress(top, 0, t.rows.length + 1, 1));
-      void labels;
-      // A bar chart over the label column and the chosen column: written as a two-column block
-      // beside the table so the chart has one contiguous source range.
-      const chartCol = width + 1;
-      const src = sheet.getRange(rangeAddress(top, chartCol, t.rows.length + 1, 2));
-      src.values = [[t.header[0], t.header[t.chartColumn]], ...t.rows.map((r) => textSafeRow([r[0], r[t.chartColumn as number]]))];
-      const chart = sheet.charts.add('BarClustered', src, 'Columns');
-      chart.title.text = t.chartTitle ?? t.header[t.chartColumn];
-      chart.legend.position = 'Bottom';
-      // Bars in our palette's first series colour, as in the command line's workbooks.
-      chart.series.getItemAt(0).format.fill.setSolidColor(hexColour(PALETTE.series[0]));
-      chart.setPosition(cellAddress(top + t.rows.length + 3, 0), cellAddress(top + t.rows.length + 20, 4));
+/**
+ * The bytes one request of rows may take: a fifth of Excel on the web's 5 MB request limit
+ * (docs/platform.md), leaving room for the request's own overhead.
+ */
+export const BLOCK_BYTES = 1_000_000;
+
+/** Rows per request so that a block of the widest rows (values and number formats) stays under `budget` bytes. */
+export function rowsPerBlock(rows: readonly (readonly (number | string)[])[], formats: readonly string[], extra: number, budget = BLOCK_BYTES): number {
+  let widest = 0;
+  for (const r of rows) widest = Math.max(widest, JSON.stringify(textSafeRow(r)).length);
+  const perRow = widest + JSON.stringify(formats).length + extra + 8;
+  return Math.max(1, Math.floor(budget / perRow));
+}
+
+/**
+ * Writes `t` to a new sheet `target.name` (deleting `target.replaces` first); returns the name. The
+ * rows go in blocks of at most {@link BLOCK_BYTES} per request, a sync each; the table, its style,
+ * the chart and the frozen header come last. When Excel refuses any request the half-written sheet
+ * is removed ({@link writingSheet}).
+ */
+export async function writeSmallTableSheet(run: RunBatch, target: { name: string; replaces?: string }, t: SmallTable, budget = BLOCK_BYTES): Promise<string> {
+  const top = tableHeaderRow(t);
+  const width = t.header.length;
+  const chartCol = width + 1;
+  const chartColumn = t.chartColumn !== undefined && t.rows.length > 0 ? t.chartColumn : undefined;
+  await writingSheet(run, target.name, async () => {
+    // 1. The sheet, its heading and the table's header row (and the chart source's).
+    await run(async (ctx) => {
+      if (target.replaces) ctx.workbook.worksheets.getItem(target.replaces).delete();
+      const sheet = ctx.workbook.worksheets.add(target.name);
+      const head = sheet.getRange(rangeAddress(0, 0, 1 + t.lines.length, 1));
+      head.values = [[escapeFormulaText(t.title)], ...t.lines.map((l) => [escapeFormulaText(l)])];
+      sheet.getRange(cellAddress(0, 0)).format.font.bold = true;
+      const header = sheet.getRange(rangeAddress(top, 0, 1, width));
+      header.values = [t.header.slice()];
+      header.numberFormat = [t.header.map(() => '@')];
+      if (chartColumn !== undefined) sheet.getRange(rangeAddress(top, chartCol, 1, 2)).values = [[t.header[0], t.header[chartColumn]]];
+      await ctx.sync();
+    });
+    // 2. The rows in blocks under the budget (a bar chart's two source columns beside them).
+    const per = rowsPerBlock(t.rows, t.formats, chartColumn !== undefined ? 64 : 0, budget);
+    for (let start = 0; start < t.rows.length; start += per) {
+      const end = Math.min(t.rows.length, start + per);
+      await run(async (ctx) => {
+        const sheet = ctx.workbook.worksheets.getItem(target.name);
+        const rows = t.rows.slice(start, end);
+        const range = sheet.getRange(rangeAddress(top + 1 + start, 0, rows.length, width));
+        range.values = rows.map(textSafeRow);
+        range.numberFormat = rows.map(() => t.formats.slice());
+        if (chartColumn !== undefined) sheet.getRange(rangeAddress(top + 1 + start, chartCol, rows.length, 2)).values = rows.map((r) => textSafeRow([r[0], r[chartColumn]]));
+        await ctx.sync();
+      });
     }
-    sheet.freezePanes.freezeRows(top + 1);
-    sheet.activate();
-    await ctx.sync();
+    // 3. The table over it all, its style, the chart and the frozen header.
+    await run(async (ctx) => {
+      const sheet = ctx.workbook.worksheets.getItem(target.name);
+      const tableName = uniqueTableName(target.name, await tableNamesIn(ctx));
+      const table = sheet.tables.add(rangeAddress(top, 0, t.rows.length + 1, width), true);
+      table.name = tableName;
+      table.style = 'TableStyleMedium16';
+      const header = sheet.getRange(rangeAddress(top, 0, 1, width));
+      header.format.fill.color = HEAD_FILL;
+      header.format.font.color = '#FFFFFF';
+      header.format.autofitColumns();
+      if (chartColumn !== undefined) {
+        // A bar chart over the label column and the chosen column, from the two-column block beside
+        // the table, so that the chart has one contiguous source range.
+        const src = sheet.getRange(rangeAddress(top, chartCol, t.rows.length + 1, 2));
+        const chart = sheet.charts.add('BarClustered', src, 'Columns');
+        chart.title.text = t.chartTitle ?? t.header[chartColumn];
+        chart.legend.position = 'Bottom';
+        // Bars in our palette's first series colour, as in the command line's workbooks.
+        chart.series.getItemAt(0).format.fill.setSolidColor(hexColour(PALETTE.series[0]));
+        chart.setPosition(cellAddress(top + t.rows.length + 3, 0), cellAddress(top + t.rows.length + 20, 4));
+      }
+      sheet.freezePanes.freezeRows(top + 1);
+      sheet.activate();
+      await ctx.sync();
+    });
   });
   return target.name;
 }

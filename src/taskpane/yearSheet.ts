@@ -8,7 +8,7 @@
  *
  * Cancel: the run stops after the block being written and deletes the half-written sheet, so the
  * workbook is left as it was before the run (apart from an earlier result sheet the user had
- * already agreed to replace).
+ * already agreed to replace). A request Excel refuses part-way does the same (WriteFailed).
  */
 import type { TimeConvention } from '../core/time';
 import { escapeFormulaText } from '../io/textCells';
@@ -16,7 +16,7 @@ import { HOURLY_COLUMNS, type HourlyKey, hourlyHeadersFor } from '../outputs/hou
 import { type ColumnRef, monthHourMeanFormula, monthlyGainFormula, tableColumnRef, yearFigureFormulas } from '../outputs/hourlyFormulas';
 import { PALETTE, hexColour } from '../outputs/palette';
 import { DEFAULT_BLOCK_ROWS, cellAddress, columnLetters, rangeAddress, roundForSheet, rowBlocks } from './blocks';
-import { type RunBatch, RunCancelled } from './resultSheets';
+import { type RunBatch, RunCancelled, writingSheet } from './resultSheets';
 import { tableNamesIn, uniqueTableName } from './tableNames';
 
 /** The hourly columns the sheet shows (one value per hour of the year). */
@@ -165,106 +165,108 @@ export async function writeYearSheet(
   fig: YearFigures,
   control: WriteControl = {},
 ): Promise<WrittenYear> {
-  const total = cols.gain.length;
-  const width = HOURLY_COLUMNS.length;
-  const firstDataRow = TABLE_HEADER_ROW + 1;
-  const blocks = rowBlocks(total, control.blockRows ?? DEFAULT_BLOCK_ROWS);
+  return writingSheet(run, target.name, async () => {
+    const total = cols.gain.length;
+    const width = HOURLY_COLUMNS.length;
+    const firstDataRow = TABLE_HEADER_ROW + 1;
+    const blocks = rowBlocks(total, control.blockRows ?? DEFAULT_BLOCK_ROWS);
 
-  // 1. The sheet, its heading and the table header; the table's name, free in the workbook.
-  const tableName = await run(async (ctx) => {
-    if (target.replaces) ctx.workbook.worksheets.getItem(target.replaces).delete();
-    const sheet = ctx.workbook.worksheets.add(target.name);
-    const head = sheet.getRange(rangeAddress(0, 0, 1 + heading.lines.length, 1));
-    // The heading names the window: the user's text, never read as a formula.
-    head.values = [[escapeFormulaText(heading.title)], ...heading.lines.map((l) => [escapeFormulaText(l)])];
-    sheet.getRange(cellAddress(0, 0)).format.font.bold = true;
-    const header = sheet.getRange(rangeAddress(TABLE_HEADER_ROW, 0, 1, width));
-    header.values = [hourTableHeaders(heading.timeConvention)];
-    await ctx.sync();
-    return uniqueTableName(target.tableBase ?? target.name, await tableNamesIn(ctx));
-  });
-
-  const removePartial = async (): Promise<never> => {
-    await run(async (ctx) => {
-      ctx.workbook.worksheets.getItem(target.name).delete();
+    // 1. The sheet, its heading and the table header; the table's name, free in the workbook.
+    const tableName = await run(async (ctx) => {
+      if (target.replaces) ctx.workbook.worksheets.getItem(target.replaces).delete();
+      const sheet = ctx.workbook.worksheets.add(target.name);
+      const head = sheet.getRange(rangeAddress(0, 0, 1 + heading.lines.length, 1));
+      // The heading names the window: the user's text, never read as a formula.
+      head.values = [[escapeFormulaText(heading.title)], ...heading.lines.map((l) => [escapeFormulaText(l)])];
+      sheet.getRange(cellAddress(0, 0)).format.font.bold = true;
+      const header = sheet.getRange(rangeAddress(TABLE_HEADER_ROW, 0, 1, width));
+      header.values = [hourTableHeaders(heading.timeConvention)];
       await ctx.sync();
+      return uniqueTableName(target.tableBase ?? target.name, await tableNamesIn(ctx));
     });
-    throw new RunCancelled('Stopped: the half-written sheet was removed.');
-  };
 
-  // 2. The hourly rows, block by block: values first, then their number formats, one sync each.
-  let suspended = false;
-  for (const block of blocks) {
-    if (checkCancel(control)) return removePartial();
-    await run(async (ctx) => {
-      if (!suspended) {
-        ctx.application.suspendApiCalculationUntilNextSync?.();
-        if (excelApiSupports('1.9')) ctx.application.suspendScreenUpdatingUntilNextSync();
-        suspended = true;
-      }
-      const rows = block.end - block.start;
-      const range = ctx.workbook.worksheets.getItem(target.name).getRange(rangeAddress(firstDataRow + block.start, 0, rows, width));
-      range.values = hourRows(cols, block.start, block.end);
-      range.numberFormat = Array.from({ length: rows }, () => HOURLY_COLUMNS.map((c) => c.numFmt));
-      await ctx.sync();
-    });
-    control.onProgress?.(block.end, total);
-  }
-  if (checkCancel(control)) return removePartial();
-
-  // 3. Table, then the formulas over it: monthly summary and chart, key figures, month × hour block.
-  await run(async (ctx) => {
-    const sheet = ctx.workbook.worksheets.getItem(target.name);
-    const table = sheet.tables.add(rangeAddress(TABLE_HEADER_ROW, 0, total + 1, width), true);
-    table.name = tableName;
-    table.style = 'TableStyleLight9';
-    const ref = tableColumnRef(tableName, heading.timeConvention);
-    const year = yearOf(cols);
-
-    const keyRow = TABLE_HEADER_ROW + 15;
-    const areaCell = `$${columnLetters(SUMMARY_COLUMN + 1)}$${keyRow + 5 + 1}`;
-    const monthly = monthlyFormulas(ref, year, TABLE_HEADER_ROW, SUMMARY_COLUMN, areaCell);
-    const monthRange = sheet.getRange(rangeAddress(TABLE_HEADER_ROW, SUMMARY_COLUMN, monthly.length, 3));
-    monthRange.formulas = monthly;
-    monthRange.numberFormat = monthly.map((_, i) => (i === 0 ? ['@', '@', '@'] : ['@', '#,##0.0', '0.00']));
-    const monthHead = sheet.getRange(rangeAddress(TABLE_HEADER_ROW, SUMMARY_COLUMN, 1, 3));
-    monthHead.format.font.bold = true;
-    monthHead.format.fill.color = HEAD_FILL;
-    monthHead.format.font.color = hexColour(PALETTE.headerText);
-    const keys = keyFigureRows(ref, fig);
-    const keyRange = sheet.getRange(rangeAddress(keyRow, SUMMARY_COLUMN, keys.length, 2));
-    keyRange.formulas = keys;
-    keyRange.numberFormat = keys.map((_, i) => ['@', i === 1 ? 'yyyy-mm-dd hh:mm' : i === 3 ? '0.000' : i === 5 ? '0.00' : i >= 6 ? '0.0' : '#,##0']);
-
-    const chartData = sheet.getRange(rangeAddress(TABLE_HEADER_ROW, SUMMARY_COLUMN, 13, 2));
-    const chart = sheet.charts.add('ColumnClustered', chartData, 'Columns');
-    chart.title.text = 'Annual profile: solar gain by month (kWh)';
-    chart.legend.position = 'Bottom';
-    // Bars in our palette's first series colour, as in the command line's workbooks.
-    chart.series.getItemAt(0).format.fill.setSolidColor(hexColour(PALETTE.series[0]));
-    const chartTop = keyRow + keys.length + 1;
-    chart.setPosition(cellAddress(chartTop, SUMMARY_COLUMN), cellAddress(chartTop + 15, SUMMARY_COLUMN + 2));
-
-    const block = monthHourFormulas(ref, year);
-    sheet.getRange(cellAddress(TABLE_HEADER_ROW - 1, HEAT_COLUMN)).values = [[ref.convention === 'instant' ? 'Mean solar gain (W) by month and hour (instant)' : 'Mean solar gain (W) by month and hour ending']];
-    const heatHeader = sheet.getRange(rangeAddress(TABLE_HEADER_ROW, HEAT_COLUMN, 1, 25));
-    heatHeader.format.font.bold = true;
-    const heat = sheet.getRange(rangeAddress(TABLE_HEADER_ROW, HEAT_COLUMN, block.length, 25));
-    heat.formulas = block;
-    heat.numberFormat = block.map((_, i) => ['@', ...new Array<string>(24).fill(i === 0 ? '@' : '#,##0')]);
-    const cells = sheet.getRange(rangeAddress(TABLE_HEADER_ROW + 1, HEAT_COLUMN + 1, 12, 24));
-    const scale = cells.conditionalFormats.add('ColorScale');
-    scale.colorScale.criteria = {
-      minimum: { formula: null as unknown as string, type: 'LowestValue', color: HEAT_COLOURS.low },
-      midpoint: { formula: '50', type: 'Percentile', color: HEAT_COLOURS.middle },
-      maximum: { formula: null as unknown as string, type: 'HighestValue', color: HEAT_COLOURS.high },
+    const removePartial = async (): Promise<never> => {
+      await run(async (ctx) => {
+        ctx.workbook.worksheets.getItem(target.name).delete();
+        await ctx.sync();
+      });
+      throw new RunCancelled('Stopped: the half-written sheet was removed.');
     };
 
-    sheet.freezePanes.freezeRows(TABLE_HEADER_ROW + 1);
-    sheet.getRange(rangeAddress(TABLE_HEADER_ROW, 0, 1, width)).format.autofitColumns();
-    sheet.activate();
-    await ctx.sync();
+    // 2. The hourly rows, block by block: values first, then their number formats, one sync each.
+    let suspended = false;
+    for (const block of blocks) {
+      if (checkCancel(control)) return removePartial();
+      await run(async (ctx) => {
+        if (!suspended) {
+          ctx.application.suspendApiCalculationUntilNextSync?.();
+          if (excelApiSupports('1.9')) ctx.application.suspendScreenUpdatingUntilNextSync();
+          suspended = true;
+        }
+        const rows = block.end - block.start;
+        const range = ctx.workbook.worksheets.getItem(target.name).getRange(rangeAddress(firstDataRow + block.start, 0, rows, width));
+        range.values = hourRows(cols, block.start, block.end);
+        range.numberFormat = Array.from({ length: rows }, () => HOURLY_COLUMNS.map((c) => c.numFmt));
+        await ctx.sync();
+      });
+      control.onProgress?.(block.end, total);
+    }
+    if (checkCancel(control)) return removePartial();
+
+    // 3. Table, then the formulas over it: monthly summary and chart, key figures, month × hour block.
+    await run(async (ctx) => {
+      const sheet = ctx.workbook.worksheets.getItem(target.name);
+      const table = sheet.tables.add(rangeAddress(TABLE_HEADER_ROW, 0, total + 1, width), true);
+      table.name = tableName;
+      table.style = 'TableStyleLight9';
+      const ref = tableColumnRef(tableName, heading.timeConvention);
+      const year = yearOf(cols);
+
+      const keyRow = TABLE_HEADER_ROW + 15;
+      const areaCell = `$${columnLetters(SUMMARY_COLUMN + 1)}$${keyRow + 5 + 1}`;
+      const monthly = monthlyFormulas(ref, year, TABLE_HEADER_ROW, SUMMARY_COLUMN, areaCell);
+      const monthRange = sheet.getRange(rangeAddress(TABLE_HEADER_ROW, SUMMARY_COLUMN, monthly.length, 3));
+      monthRange.formulas = monthly;
+      monthRange.numberFormat = monthly.map((_, i) => (i === 0 ? ['@', '@', '@'] : ['@', '#,##0.0', '0.00']));
+      const monthHead = sheet.getRange(rangeAddress(TABLE_HEADER_ROW, SUMMARY_COLUMN, 1, 3));
+      monthHead.format.font.bold = true;
+      monthHead.format.fill.color = HEAD_FILL;
+      monthHead.format.font.color = hexColour(PALETTE.headerText);
+      const keys = keyFigureRows(ref, fig);
+      const keyRange = sheet.getRange(rangeAddress(keyRow, SUMMARY_COLUMN, keys.length, 2));
+      keyRange.formulas = keys;
+      keyRange.numberFormat = keys.map((_, i) => ['@', i === 1 ? 'yyyy-mm-dd hh:mm' : i === 3 ? '0.000' : i === 5 ? '0.00' : i >= 6 ? '0.0' : '#,##0']);
+
+      const chartData = sheet.getRange(rangeAddress(TABLE_HEADER_ROW, SUMMARY_COLUMN, 13, 2));
+      const chart = sheet.charts.add('ColumnClustered', chartData, 'Columns');
+      chart.title.text = 'Annual profile: solar gain by month (kWh)';
+      chart.legend.position = 'Bottom';
+      // Bars in our palette's first series colour, as in the command line's workbooks.
+      chart.series.getItemAt(0).format.fill.setSolidColor(hexColour(PALETTE.series[0]));
+      const chartTop = keyRow + keys.length + 1;
+      chart.setPosition(cellAddress(chartTop, SUMMARY_COLUMN), cellAddress(chartTop + 15, SUMMARY_COLUMN + 2));
+
+      const block = monthHourFormulas(ref, year);
+      sheet.getRange(cellAddress(TABLE_HEADER_ROW - 1, HEAT_COLUMN)).values = [[ref.convention === 'instant' ? 'Mean solar gain (W) by month and hour (instant)' : 'Mean solar gain (W) by month and hour ending']];
+      const heatHeader = sheet.getRange(rangeAddress(TABLE_HEADER_ROW, HEAT_COLUMN, 1, 25));
+      heatHeader.format.font.bold = true;
+      const heat = sheet.getRange(rangeAddress(TABLE_HEADER_ROW, HEAT_COLUMN, block.length, 25));
+      heat.formulas = block;
+      heat.numberFormat = block.map((_, i) => ['@', ...new Array<string>(24).fill(i === 0 ? '@' : '#,##0')]);
+      const cells = sheet.getRange(rangeAddress(TABLE_HEADER_ROW + 1, HEAT_COLUMN + 1, 12, 24));
+      const scale = cells.conditionalFormats.add('ColorScale');
+      scale.colorScale.criteria = {
+        minimum: { formula: null as unknown as string, type: 'LowestValue', color: HEAT_COLOURS.low },
+        midpoint: { formula: '50', type: 'Percentile', color: HEAT_COLOURS.middle },
+        maximum: { formula: null as unknown as string, type: 'HighestValue', color: HEAT_COLOURS.high },
+      };
+
+      sheet.freezePanes.freezeRows(TABLE_HEADER_ROW + 1);
+      sheet.getRange(rangeAddress(TABLE_HEADER_ROW, 0, 1, width)).format.autofitColumns();
+      sheet.activate();
+      await ctx.sync();
+    });
+    control.onProgress?.(total, total);
+    return { sheet: target.name, table: tableName };
   });
-  control.onProgress?.(total, total);
-  return { sheet: target.name, table: tableName };
 }

@@ -10,6 +10,9 @@
  *     end, unique regardless of case);
  *   - value arrays of exactly the range's shape, with no NaN or Infinity;
  *   - table names unique, no blanks, and tables that do not overlap.
+ * A test may set state.failOp = { op: 'tables.add', after: 0, code } to make the request holding the
+ * (after + 1)-th such operation fail there, with the operations before it applied (as Excel does).
+ * state.requestLimitBytes may be lowered to try a writer's blocks against a smaller limit.
  *
  * Use in the browser: serve this file as office.js; it defines window.Office, window.Excel and
  * window.__excelHost (state and helpers for the test). Use in node: require it and call
@@ -181,7 +184,17 @@
             return;
           }
           try {
-            for (var i = 0; i < queue.length; i++) queue[i].apply();
+            for (var i = 0; i < queue.length; i++) {
+              // A fault set by a test: the request stops at the chosen operation, as Excel stops a
+              // batch at a failing command (those before it stay applied).
+              var f = state.failOp;
+              if (f && queue[i].op === f.op && (f.seen = (f.seen || 0) + 1) > (f.after || 0)) {
+                state.failOp = undefined;
+                syncRecord.failed = f.op;
+                throw HostError(f.code || 'GeneralException', 'The request failed at ' + f.op + ' (a fault set by the test)');
+              }
+              queue[i].apply();
+            }
             resolve();
           } catch (e) {
             reject(e);

@@ -472,6 +472,96 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     await page.close();
   });
 
+  test('a ten-option comparison stopped while it works writes nothing; run to the end, its eleven rows go in requests under the limit, with Cancel off during the write that cannot stop half-way', async () => {
+    const options = Array.from({ length: 10 }, (_, i) => ({ label: `Scheme ${i + 1}`, overhangDepth: String(0.1 * (i + 1)), overhangGap: '0.2', overhangReach: '0.3', leftFinDepth: '0', rightFinDepth: '0', finGap: '0', setBack: '0' }));
+    const page = await openPane({ 'sunpane.pane': { version: 1, options } });
+    await setField(page, 'year', String(YEAR));
+    await page.click('#tab-options');
+    expect(await page.$$eval('#options-list fieldset.option', (r) => r.length)).toBe(10);
+    expect(await page.isDisabled('#add-option')).toBe(true);
+    // Cancel is pressed the moment the fourth option is being worked out.
+    await page.evaluate(() => {
+      const text = document.getElementById('progress-text')!;
+      const watch = new MutationObserver(() => {
+        if (/^Option 4 of 10/.test(text.textContent ?? '')) {
+          watch.disconnect();
+          (document.getElementById('cancel') as HTMLButtonElement).click();
+        }
+      });
+      watch.observe(text, { childList: true, characterData: true, subtree: true });
+    });
+    const callsBefore = await host.eval<number>(page, 'host.state.calls.length');
+    await page.click('#run-compare');
+    expect(await waitForStatus(page, /Stopped/)).toBe('Stopped: nothing was written.');
+    expect(await host.sheetNames(page)).toEqual([]);
+    const ops = await host.eval<string[]>(page, `host.state.calls.slice(${callsBefore}).map(function (c) { return c.op; })`);
+    expect(ops.filter((op) => /worksheets\.add|range\.values|tables\.add|charts\.add|worksheet\.delete/.test(op))).toEqual([]);
+    expect(await page.isHidden('#progress')).toBe(true);
+
+    // To the end: Cancel is switched off while the sheet is written, and the whole table arrives.
+    await host.eval(page, '(host.state.syncDelayMs = 150)');
+    await page.click('#run-compare');
+    await page.waitForFunction(() => /^Writing the comparison/.test(document.getElementById('progress-text')?.textContent ?? ''), undefined, { timeout: 90_000 });
+    expect(await page.isDisabled('#cancel')).toBe(true);
+    expect(await waitForStatus(page, /^Wrote/)).toBe('Wrote "Window A options" comparing 10 options.');
+    expect((await host.read(page, 'Window A options', 'A8:A18')).map((r) => r[0])).toEqual(['No outside shading', ...options.map((o) => o.label)]);
+    const syncs = await host.eval<{ bytes: number; refused?: boolean }[]>(page, 'host.state.syncs');
+    expect(syncs.some((x) => x.refused)).toBe(false);
+    expect(Math.max(...syncs.map((x) => x.bytes))).toBeLessThan(5 * 1024 * 1024);
+    expect(await page.isDisabled('#cancel')).toBe(false);
+    await page.close();
+  });
+
+  test('Excel refusing a request part-way leaves no half-written sheet and the user is told: the year, then the comparison', async () => {
+    const page = await openPane();
+    await setField(page, 'year', String(YEAR));
+    await page.evaluate(() => (window as never as { __excelHost: { addUserSheet(n: string, v: unknown[][]): void } }).__excelHost.addUserSheet('Notes', [['mine', 1]]));
+    const notes = await host.eval<string>(page, 'host.snapshot("Notes")');
+    // the fourth block of hourly rows is refused
+    await host.eval(page, "(host.state.failOp = { op: 'range.values', after: 5 })");
+    await page.click('#run-year');
+    expect(await waitForStatus(page, /refused/)).toMatch(/^Excel refused a request while writing "Window A hourly", so the half-written sheet was removed and nothing else changed\. Excel said: GeneralException: /);
+    expect(await host.sheetNames(page)).toEqual(['Notes']);
+    // the comparison's table cannot be made
+    await host.eval(page, "(host.state.failOp = { op: 'tables.add' })");
+    await page.click('#tab-options');
+    await page.click('#run-compare');
+    expect(await waitForStatus(page, /writing "Window A options"/)).toMatch(/^Excel refused a request while writing "Window A options", so the half-written sheet was removed/);
+    expect(await host.sheetNames(page)).toEqual(['Notes']);
+    expect(await host.eval<string>(page, 'host.snapshot("Notes")')).toBe(notes);
+    expect(await host.eval<unknown[]>(page, 'host.tables()')).toEqual([]);
+    // once Excel takes the requests again, the same run writes as usual
+    await page.click('#run-compare');
+    expect(await waitForStatus(page, /^Wrote/)).toBe('Wrote "Window A options" comparing 3 options.');
+    await page.close();
+  });
+
+  test('the largest table, a leap year of 8784 hourly rows, goes in requests under the 5 MB the stand-in enforces', async () => {
+    const page = await openPane();
+    await setField(page, 'year', '2024');
+    await page.click('#run-year');
+    await waitForStatus(page, /^Wrote/);
+    const syncs = await host.eval<{ bytes: number; refused?: boolean; valueRows: number[] }[]>(page, 'host.state.syncs');
+    expect(syncs.some((x) => x.refused)).toBe(false);
+    expect(Math.max(...syncs.map((x) => x.bytes))).toBeLessThan(5 * 1024 * 1024);
+    expect(syncs.filter((x) => x.valueRows.some((n) => n >= 1000)).length).toBeGreaterThan(1);
+    expect(syncs.flatMap((x) => x.valueRows).filter((n) => n >= 1000).reduce((a, b) => a + b, 0)).toBe(8784);
+    expect(await host.eval<{ address: string }[]>(page, 'host.tables()')).toEqual([expect.objectContaining({ address: 'A5:N8789' })]);
+    await page.close();
+  });
+
+  test('a sheet the settings remember as ours that the user has since made their own is left alone, with no question', async () => {
+    const page = await openPane({ 'sunpane.pane': { version: 1, resultSheets: ['Window A hourly'] } });
+    await setField(page, 'year', String(YEAR));
+    await page.evaluate(() => (window as never as { __excelHost: { addUserSheet(n: string, v: unknown[][]): void } }).__excelHost.addUserSheet('Window A hourly', [['my own workings', 7]]));
+    const before = await host.eval<string>(page, 'host.snapshot("Window A hourly")');
+    await page.click('#run-year');
+    expect(await waitForStatus(page, /^Wrote/)).toMatch(/^Wrote "Window A hourly \(2\)"/);
+    expect(await page.isHidden('#confirm-backdrop')).toBe(true);
+    expect(await host.eval<string>(page, 'host.snapshot("Window A hourly")')).toBe(before);
+    await page.close();
+  });
+
   test('the form and the options are saved with the workbook and restored when it is opened again', async () => {
     const page = await openPane();
     await setField(page, 'latitude', '-33.9');

@@ -30,8 +30,9 @@ describe('shading options', () => {
     } catch (err) {
       expect((err as OptionProblem).inUserWords).toBe('Option 2 "Deep overhang", Overhang gap (m): "high" is not allowed: must be a number from 0 to 100 m');
     }
-    expect.assertions(5);
-    expect(() => optionSpecs(base, new Array(7).fill(starterOptions()[0]), validate)).toThrow(/at most 6/);
+    expect.assertions(6);
+    expect(() => optionSpecs(base, new Array(11).fill(starterOptions()[0]), validate)).toThrow(/at most 10/);
+    expect(optionSpecs(base, new Array(10).fill(starterOptions()[0]), validate)).toHaveLength(11);
   });
 
   test('the cut is 1 − annual ÷ unshaded annual in %, beam and diffuse cuts side by side in %, and the shaded share is 1 − mean sunlit share', () => {

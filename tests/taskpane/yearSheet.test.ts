@@ -4,7 +4,7 @@
  * not physics.
  */
 import { rowBlocks } from '../../src/taskpane/blocks';
-import { RunCancelled, type RunBatch } from '../../src/taskpane/resultSheets';
+import { RunCancelled, type RunBatch, WriteFailed } from '../../src/taskpane/resultSheets';
 import { HEAT_COLUMN, type HourColumns, SUMMARY_COLUMN, type YearFigures, hourRows, writeYearSheet } from '../../src/taskpane/yearSheet';
 import { columnLetters } from '../../src/taskpane/blocks';
 import { HOURLY_HEADERS } from '../../src/outputs/hourlyColumns';
@@ -110,6 +110,20 @@ describe('the hourly year sheet', () => {
     await expect(write).rejects.toThrow(RunCancelled);
     await expect(write).rejects.toThrow('Stopped: the half-written sheet was removed.');
     expect(host.sheetNames()).toEqual([]);
+  });
+
+  test('Excel refusing a request part-way (the third block, then the table) removes the half-written sheet and says why', async () => {
+    for (const fault of [{ op: 'range.values', after: 4 }, { op: 'tables.add' }]) {
+      const { run, host } = setup();
+      host.addUserSheet('Notes', [['mine']]);
+      host.state.failOp = fault;
+      const write = writeYearSheet(run, { name: 'W hourly' }, { title: 'T', lines: [] }, columns(), FIGURES);
+      await expect(write).rejects.toThrow(WriteFailed);
+      await expect(write).rejects.toThrow(/^Excel refused a request while writing "W hourly", so the half-written sheet was removed and nothing else changed\. Excel said: GeneralException: The request failed at /);
+      expect(host.sheetNames()).toEqual(['Notes']);
+      expect(host.tables()).toEqual([]);
+      expect(host.state.syncs.some((x: { failed?: string }) => x.failed === fault.op)).toBe(true);
+    }
   });
 
   test('an earlier result sheet the user agreed to replace is deleted and written anew under its name', async () => {
