@@ -35,9 +35,11 @@ const OFFICE_JS = 'https://appsforoffice.microsoft.com/lib/1/hosted/office.js';
  * messages, the glossary's labels and older names and seven window functions beside the released
  * positional ones, and the sun-position fast path for ranges (194.2 -> 223.6 KB); 225 KB until
  * windows could share their site's sun and weather (src/core/gain/sharedYear.ts, the summary-only
- * year, the Perez kernel in two halves: 223.6 -> 226.7 KB).
+ * year, the Perez kernel in two halves: 223.6 -> 226.7 KB); 229 KB until the pane under faults (a
+ * half-written sheet removed when Excel refuses a request, small tables in blocks, the title check of
+ * a remembered sheet: 228.1 -> 230.0 KB).
  */
-const BUDGET_BYTES = 229 * 1024;
+const BUDGET_BYTES = 231 * 1024;
 const DEV_PORT = 3000;
 
 /**
