@@ -199,3 +199,63 @@ describe("a pane's absorption fitted to a normal transmittance (Fresnel optics)"
     expect(paneStackTransmittance(90, 1, 0)).toBe(0);
   });
 });
+
+describe('refusals state the unit and the range (docs/architecture.md, "Errors")', () => {
+  test('angles in degrees from 0 to 180, panes a whole number from 1 to 4, lengths above 0 m, q from 1 to 10', () => {
+    expect(refusal(() => shgcAtAngle(0.5, 2, -1)).message).toBe('incidence = -1 is not allowed: must be a number from 0 to 180 °');
+    expect(refusal(() => karlssonRoosFactor(200, 2, 4)).message).toBe('incidence = 200 is not allowed: must be a number from 0 to 180 °');
+    expect(refusal(() => karlssonRoosFactor(30, 1.5, 4)).message).toBe('panes = 1.5 is not allowed: must be a whole number from 1 to 4');
+    expect(refusal(() => karlssonRoosFactor(30, 2, 11)).message).toBe('glazingTypeParameter = 11 is not allowed: must be a number from 1 to 10');
+    expect(refusal(() => requireAngleTable({ angles: [0, 95], values: [0.5, 0.4] })).message).toBe('angleTable.angles = 95 is not allowed: must be a number from 0 to 90 °');
+    expect(refusal(() => solarArea(1, 0, 0.1, 'centreOfGlass')).message).toBe('height = 0 is not allowed: must be a number above 0 m');
+    expect(refusal(() => solarArea(0, 1, 0.1, 'centreOfGlass')).message).toBe('width = 0 is not allowed: must be a number above 0 m');
+    expect(refusal(() => diffuseShgc(2, 2)).message).toBe('shgcNormal = 2 is not allowed: must be a number from 0 to 1');
+    expect(refusal(() => diffuseShgcOfType(0.5, 2.5, 'clear')).message).toBe('panes = 2.5 is not allowed: must be a whole number from 1 to 4');
+    expect(refusal(() => shgcAtAngleOfType(0.5, 2.5, 30, 'clear')).message).toBe('panes = 2.5 is not allowed: must be a whole number from 1 to 4');
+  });
+
+  test('a coated unit without q (blank or null) is told what q is and its range', () => {
+    for (const q of [undefined, null]) {
+      expect(refusal(() => shgcAtAngleOfType(0.5, 2, 30, 'coated', q as never)).message).toBe(
+        'glazingTypeParameter = blank is not allowed: must be given for a coated unit: the glazing-type parameter q of Karlsson & Roos (2000), from 1 to 10 (larger keeps the SHGC up to higher angles)',
+      );
+    }
+  });
+});
+
+describe('sun behind the glass, and curves kept apart', () => {
+  test('Karlsson & Roos: 0 from 90° to 180° for every p and q (the sun behind the glass), not the polynomial', () => {
+    for (const p of [1, 2, 3, 4]) {
+      for (const q of [1, 4, 10]) {
+        for (const theta of [90, 120, 150, 180]) expect(karlssonRoosFactor(theta, p, q)).toBe(0);
+      }
+    }
+  });
+
+  test('a clear and a coated glazing of the same SHGC and panes keep their own curves, in either order', () => {
+    const clear = shgcCurve({ shgc: 0.47, panes: 2 });
+    const coated = shgcCurve({ shgc: 0.47, panes: 2, type: 'coated', typeParameter: 5 });
+    expect(clear.atAngle(65)).toBeCloseTo(shgcAtAngle(0.47, 2, 65), 4);
+    expect(coated.atAngle(65)).toBeCloseTo(0.47 * karlssonRoosFactor(65, 2, 5), 4);
+    expect(Math.abs(clear.atAngle(65) - coated.atAngle(65))).toBeGreaterThan(0.01);
+    const coated2 = shgcCurve({ shgc: 0.33, panes: 3, type: 'coated', typeParameter: 2 });
+    const clear2 = shgcCurve({ shgc: 0.33, panes: 3 });
+    expect(coated2.diffuse).toBeCloseTo(diffuseShgcOfType(0.33, 3, 'coated', 2), 12);
+    expect(clear2.diffuse).toBeCloseTo(diffuseShgc(0.33, 3), 12);
+  });
+});
+
+describe('two absorbing panes written out (Duffie & Beckman Eqs. 5.3.1–5.3.2 and the two-cover rule, from memory)', () => {
+  test('at normal incidence: τ = τa(1 − r)²/(1 − (rτa)²), ρ = r + r(1 − r)²τa²/(1 − (rτa)²), T₂ = τ²/(1 − ρ²) (1e-12)', () => {
+    const n = GLASS_REFRACTIVE_INDEX;
+    const r = ((n - 1) / (n + 1)) ** 2; // both polarisations at normal incidence
+    for (const kl of [0.05, 0.3, 1]) {
+      const tauA = Math.exp(-kl);
+      const d = 1 - (r * tauA) ** 2;
+      const tau = (tauA * (1 - r) ** 2) / d;
+      const rho = r + (r * (1 - r) ** 2 * tauA ** 2) / d;
+      expect(paneStackTransmittance(0, 1, kl)).toBeCloseTo(tau, 12);
+      expect(paneStackTransmittance(0, 2, kl)).toBeCloseTo((tau * tau) / (1 - rho * rho), 12);
+    }
+  });
+});
