@@ -37,9 +37,12 @@ const OFFICE_JS = 'https://appsforoffice.microsoft.com/lib/1/hosted/office.js';
  * windows could share their site's sun and weather (src/core/gain/sharedYear.ts, the summary-only
  * year, the Perez kernel in two halves: 223.6 -> 226.7 KB); 229 KB until the pane under faults (a
  * half-written sheet removed when Excel refuses a request, small tables in blocks, the title check of
- * a remembered sheet: 228.1 -> 230.0 KB).
+ * a remembered sheet: 228.1 -> 230.0 KB); 231 KB until the room behind a window (its checks, the
+ * illustrative series reached from the window reader), the cooling load and conduction by part in
+ * the year and peak functions, the table's and schedule's load columns and the pane's room box and
+ * load column (230.0 -> 237.0 KB).
  */
-const BUDGET_BYTES = 231 * 1024;
+const BUDGET_BYTES = 238 * 1024;
 const DEV_PORT = 3000;
 
 /**

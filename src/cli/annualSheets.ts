@@ -7,7 +7,7 @@
  */
 import type { AnnualSeries, AnnualSummary } from '../core/gain';
 import { formatSerialIso } from '../core/time';
-import { HOURLY_COLUMNS, type HourlyKey, hourlyColumn, hourlyColumnsFor, hourlyHeadersFor } from '../outputs/hourlyColumns';
+import { type HourlyData, type HourlyKey, extrasOf, hourlyColumn, hourlyColumnsFor, hourlyData } from '../outputs/hourlyColumns';
 import { monthHourMeanFormula, monthlyGainFormula, monthlySumFormula, tableColumnRef } from '../outputs/hourlyFormulas';
 import { PALETTE } from '../outputs/palette';
 import { csvLine, formatFixed } from './csv';
@@ -37,14 +37,19 @@ export const GAIN_HEADER = hourlyColumn('gain').header;
 /** Month names for summaries. */
 export const MONTHS = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'] as const;
 
-const valueOf = (s: AnnualSeries, key: HourlyKey, i: number): number => (s[key] as ArrayLike<number>)[i];
+const valueOf = (d: HourlyData, key: HourlyKey, i: number): number => (d[key] as ArrayLike<number>)[i];
 
-/** The hourly year as CSV text: the header line and one line per hour (stamp as ISO 8601 local). */
-export function hourlyCsv(series: AnnualSeries, onRow?: () => void): string {
-  const lines = [csvLine([...hourlyHeadersFor(series.timeConvention)])];
-  const rest = HOURLY_COLUMNS.slice(1);
+/**
+ * The hourly year as CSV text: the header line and one line per hour (stamp as ISO 8601 local);
+ * the conduction gain with a U-value, the cooling load when given.
+ */
+export function hourlyCsv(series: AnnualSeries, onRow?: () => void, load?: ArrayLike<number>): string {
+  const data = hourlyData(series, load);
+  const columns = hourlyColumnsFor(series.timeConvention, extrasOf(data));
+  const lines = [csvLine(columns.map((c) => c.header))];
+  const rest = columns.slice(1);
   for (let i = 0; i < series.hours; i++) {
-    lines.push(csvLine([formatSerialIso(series.stampSerial[i]), ...rest.map((c) => formatFixed(valueOf(series, c.key, i), c.csvDecimals))]));
+    lines.push(csvLine([formatSerialIso(series.stampSerial[i]), ...rest.map((c) => formatFixed(valueOf(data, c.key, i), c.csvDecimals))]));
     onRow?.();
   }
   return `${lines.join('\n')}\n`;
@@ -55,16 +60,26 @@ export function hourlyCsv(series: AnnualSeries, onRow?: () => void): string {
  * row and stamp column frozen.
  * @returns the table's placement (for formulas on other sheets)
  */
-export function addHourlySheet(wb: ExcelJS.Workbook, sheet: string, tableName: string, series: AnnualSeries, onRow?: () => void, title = `${series.name}: hourly solar gain, ${series.year}`): TablePlacement {
+export function addHourlySheet(
+  wb: ExcelJS.Workbook,
+  sheet: string,
+  tableName: string,
+  series: AnnualSeries,
+  onRow?: () => void,
+  title = `${series.name}: hourly solar gain, ${series.year}`,
+  load?: ArrayLike<number>,
+): TablePlacement {
   const ws = wb.addWorksheet(sheet);
   const top = addSheetHeading(ws, title, [rowsNote(series)]);
+  const data = hourlyData(series, load);
+  const columns = hourlyColumnsFor(series.timeConvention, extrasOf(data));
   const rows: TableCell[][] = new Array(series.hours);
-  const rest = HOURLY_COLUMNS.slice(1);
+  const rest = columns.slice(1);
   for (let i = 0; i < series.hours; i++) {
-    rows[i] = [serialToCellDate(series.stampSerial[i]), ...rest.map((c) => valueOf(series, c.key, i))];
+    rows[i] = [serialToCellDate(series.stampSerial[i]), ...rest.map((c) => valueOf(data, c.key, i))];
     onRow?.();
   }
-  const placement = addDataTable(ws, tableName, { row: top, column: 1 }, hourlyColumnsFor(series.timeConvention).map((c, k) => ({ header: c.header, numFmt: c.numFmt, width: k === 0 ? 18 : 13 })), rows);
+  const placement = addDataTable(ws, tableName, { row: top, column: 1 }, columns.map((c, k) => ({ header: c.header, numFmt: c.numFmt, width: k === 0 ? 18 : 13 })), rows);
   ws.getRow(top).height = 45;
   freezeAt(ws, top + 1, 2);
   return placement;

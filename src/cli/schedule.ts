@@ -8,6 +8,7 @@ import * as path from 'node:path';
 import ExcelJS from 'exceljs';
 import { annualSeries, SharedYears, summarizeAnnual, summarizeWindowYear, type Weather, type WindowSpec, validateWindowSpec } from '../core/gain';
 import { SunpaneError } from '../core/common';
+import { annualLoadParts, loadPeak, windowRoomSeries } from '../core/load';
 import { CAUTION } from '../outputs/caution';
 import type { Output } from './call';
 import { MONTHS } from './annualSheets';
@@ -17,7 +18,7 @@ import { CliInputError } from './cliError';
 import { parseCsv } from './csv';
 import { outputKind, parseFlags, requireFlag } from './flags';
 import { ProgressBar } from './progress';
-import { SUMMARY_HEADERS, type WindowResult, csvSummaryWriter, xlsxSummaryWriter } from './scheduleOutput';
+import { LOAD_HEADERS, SUMMARY_HEADERS, type WindowResult, csvSummaryWriter, extraCells, summaryExtrasOf, summaryFormats, summaryHeaders, xlsxSummaryWriter } from './scheduleOutput';
 import { WEATHER_FLAGS, checkWeatherTable, readWeatherTable, weatherRequest } from './weatherCsv';
 import { PALETTE } from '../outputs/palette';
 import { type SheetChart, cellRef, columnRef } from './xlsxCharts';
@@ -163,7 +164,7 @@ export async function scheduleFromXlsx(file: string): Promise<ScheduleRow[]> {
   return rows;
 }
 
-export { SUMMARY_HEADERS, type WindowResult, summaryCsv } from './scheduleOutput';
+export { SUMMARY_HEADERS, type WindowResult, summaryCsv, summaryHeaders } from './scheduleOutput';
 
 /** Formula cells below a summary table and the values they must show. */
 export interface SummaryTotals {
@@ -177,8 +178,8 @@ export interface SummaryTotals {
  * of glass area and annual gain, MAX of peaks) carrying their cached results.
  */
 export function addSummaryTable(ws: ExcelJS.Worksheet, tableName: string, topRow: number, results: readonly WindowResult[]): SummaryTotals {
-  const numFmts = [undefined, NUMBER_FORMATS.angle, NUMBER_FORMATS.angle, NUMBER_FORMATS.area, NUMBER_FORMATS.kwh, NUMBER_FORMATS.watts, NUMBER_FORMATS.dateTime, NUMBER_FORMATS.integer, NUMBER_FORMATS.fraction, NUMBER_FORMATS.integer, ...MONTHS.map(() => NUMBER_FORMATS.kwh)];
-  const widths = [22, 12, 11, 15, 18, 14, 18, 13, 20, 14, ...MONTHS.map(() => 11)];
+  const x = summaryExtrasOf(results.map((r) => r.spec));
+  const { numFmts, widths } = summaryFormats(x);
   const rows: TableCell[][] = results.map((r) => [
     escapeFormulaText(r.spec.name),
     r.spec.site.latitude,
@@ -190,9 +191,10 @@ export function addSummaryTable(ws: ExcelJS.Worksheet, tableName: string, topRow
     r.summary.sunlitHours,
     r.summary.meanSunlitFraction,
     r.summary.missingHours,
+    ...extraCells<TableCell>(r, x, (v) => v, (v) => v, serialToCellDate, null),
     ...r.summary.monthlyKWh,
   ]);
-  const t = addDataTable(ws, tableName, { row: topRow, column: 1 }, SUMMARY_HEADERS.map((header, k) => ({ header, numFmt: numFmts[k], width: widths[k] })), rows);
+  const t = addDataTable(ws, tableName, { row: topRow, column: 1 }, summaryHeaders(x).map((header, k) => ({ header, numFmt: numFmts[k], width: widths[k] })), rows);
   const totalRow = t.lastRow + 1;
   const sum = (xs: number[]) => xs.reduce((a, b) => a + b, 0);
   setLabel(ws, address(totalRow, 1), 'All windows');
@@ -203,6 +205,11 @@ export function addSummaryTable(ws: ExcelJS.Worksheet, tableName: string, topRow
   setFormula(ws, cell('Glass area (m²)'), `SUM(${t.bodyRange('Glass area (m²)')})`, area, NUMBER_FORMATS.area);
   setFormula(ws, cell('Annual gain (kWh)'), `SUM(${t.bodyRange('Annual gain (kWh)')})`, annual, NUMBER_FORMATS.kwh);
   setFormula(ws, cell('Peak gain (W)'), `MAX(${t.bodyRange('Peak gain (W)')})`, peak, NUMBER_FORMATS.watts);
+  if (x.load) {
+    // The largest of the windows' own peaks (they need not fall in the same hour).
+    const h = LOAD_HEADERS[0];
+    setFormula(ws, cell(h), `MAX(${t.bodyRange(h)})`, Math.max(0, ...results.map((r) => r.load?.peakLoadW ?? 0)), NUMBER_FORMATS.watts);
+  }
   for (const m of MONTHS) {
     const h = `${m} (kWh)`;
     setFormula(ws, cell(h), `SUM(${t.bodyRange(h)})`, sum(results.map((r) => r.summary.monthlyKWh[MONTHS.indexOf(m)])), NUMBER_FORMATS.kwh);
@@ -255,10 +262,31 @@ export function summaryChart(sheet: string, topRow: number, results: readonly Wi
   };
 }
 
-/** Computes one window's year and summary. */
+/**
+ * Computes one window's year and summary, with its conduction (a U-value: the year's net kWh and
+ * the largest hour) and its peak cooling load (a room) when it has them.
+ */
 export function windowResult(spec: WindowSpec): WindowResult {
   const series = annualSeries(spec);
-  return { spec, glassArea: series.glassArea, summary: summarizeAnnual(series) };
+  const out: WindowResult = { spec, glassArea: series.glassArea, summary: summarizeAnnual(series) };
+  if (series.hasConduction) {
+    let wh = 0;
+    let peakW = 0;
+    for (let i = 0; i < series.hours; i++) {
+      if (series.missing[i] === 1) continue;
+      wh += series.conduction[i];
+      if (series.conduction[i] > peakW) peakW = series.conduction[i];
+    }
+    out.conduction = { annualKWh: wh / 1000, peakW };
+  }
+  const room = windowRoomSeries(spec);
+  if (room) out.load = loadPeak(series, annualLoadParts(series, room).total);
+  return out;
+}
+
+/** True when a window's summary needs its whole hourly year (conduction or load), not the summary-only year. */
+function needsWholeYear(spec: WindowSpec): boolean {
+  return spec.glazing.uValue !== undefined || spec.room !== undefined;
 }
 
 /** Runs `sunpane schedule`. */
@@ -319,14 +347,15 @@ export async function scheduleCommand(argv: readonly string[], io: Output): Prom
   const years = new SharedYears();
   const bar = new ProgressBar('windows', specs.length);
   const stream = kind === 'csv' || specs.length > STREAM_WORKBOOK_ABOVE;
-  const writer = !stream ? undefined : kind === 'csv' ? csvSummaryWriter(out, force) : xlsxSummaryWriter(out, force, `Window schedule: each window's year (${path.basename(input)})`, path.basename(input));
+  const extras = summaryExtrasOf(specs.map((s) => s.spec));
+  const writer = !stream ? undefined : kind === 'csv' ? csvSummaryWriter(out, force, extras) : xlsxSummaryWriter(out, force, `Window schedule: each window's year (${path.basename(input)})`, path.basename(input), extras);
   const kept: WindowResult[] = [];
   let total = 0;
   try {
     for (const s of specs) {
-      const figures = summarizeWindowYear(s.spec, years);
-      total += figures.summary.annualKWh;
-      const r = { spec: s.spec, ...figures };
+      // A window with a U-value or a room needs its whole hourly year; the others the shared summary-only one.
+      const r: WindowResult = needsWholeYear(s.spec) ? windowResult(s.spec) : { spec: s.spec, ...summarizeWindowYear(s.spec, years) };
+      total += r.summary.annualKWh;
       if (writer) await writer.add(r);
       else kept.push(r);
       bar.tick();

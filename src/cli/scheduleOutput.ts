@@ -18,6 +18,7 @@ import { MONTHS } from './annualSheets';
 import { type OutputOptions, openAtomicOutput } from './atomicWrite';
 import { csvLine, formatFixed } from './csv';
 import type { AnnualSummary, WindowSpec } from '../core/gain';
+import type { LoadPeak } from '../core/load';
 import { COLOURS, NUMBER_FORMATS, address, serialToCellDate } from './workbook';
 
 /** One window's results for the summary table. */
@@ -25,6 +26,48 @@ export interface WindowResult {
   spec: WindowSpec;
   glassArea: number;
   summary: AnnualSummary;
+  /** The year's conduction gain [kWh, net: negative when the window loses more than it gains] and its largest hour [W], with a U-value. */
+  conduction?: { annualKWh: number; peakW: number };
+  /** The year's peak cooling load, with a room. */
+  load?: LoadPeak;
+}
+
+/** Which extra columns a summary has: some window has a U-value (conduction), some a room (load). */
+export interface SummaryExtras {
+  conduction: boolean;
+  load: boolean;
+}
+const NO_EXTRAS: SummaryExtras = { conduction: false, load: false };
+
+/** Columns of the summary that come only when some window has a U-value, or a room. */
+export const CONDUCTION_HEADERS = ['Conduction, year (kWh)', 'Peak conduction (W)'] as const;
+export const LOAD_HEADERS = ['Peak cooling load (W)', 'Peak load hour ending'] as const;
+
+/** The extra columns a schedule's windows call for (known from the windows before any is worked out). */
+export function summaryExtrasOf(specs: readonly WindowSpec[]): SummaryExtras {
+  return { conduction: specs.some((s) => s.glazing.uValue !== undefined), load: specs.some((s) => s.room !== undefined) };
+}
+
+/** The summary's headers: SUMMARY_HEADERS with the extra columns before the months. */
+export function summaryHeaders(extras: SummaryExtras = NO_EXTRAS): string[] {
+  const at = SUMMARY_HEADERS.indexOf('Weather missing (h)') + 1;
+  return [...SUMMARY_HEADERS.slice(0, at), ...(extras.conduction ? CONDUCTION_HEADERS : []), ...(extras.load ? LOAD_HEADERS : []), ...SUMMARY_HEADERS.slice(at)];
+}
+
+/**
+ * The extra cells of one window, each through its formatter (kWh, W, a stamp), blank where the
+ * window lacks what the column needs.
+ */
+export function extraCells<T>(r: WindowResult, x: SummaryExtras, kwh: (v: number) => T, watts: (v: number) => T, stamp: (v: number) => T, blank: T): T[] {
+  const out: T[] = [];
+  if (x.conduction) out.push(...(r.conduction ? [kwh(r.conduction.annualKWh), watts(r.conduction.peakW)] : [blank, blank]));
+  if (x.load) out.push(...(r.load ? [watts(r.load.peakLoadW), stamp(r.load.peakLoadStamp)] : [blank, blank]));
+  return out;
+}
+
+/** Number formats of the extra columns. */
+function extraFormats(x: SummaryExtras): (string | undefined)[] {
+  return [...(x.conduction ? [NUMBER_FORMATS.kwh, NUMBER_FORMATS.watts] : []), ...(x.load ? [NUMBER_FORMATS.watts, NUMBER_FORMATS.dateTime] : [])];
 }
 
 /** The summary columns (headers of our own), shared by CSV, workbook and demo. */
@@ -44,7 +87,8 @@ export const SUMMARY_HEADERS = [
 
 /** The summary as CSV text (all windows at once; the command streams it line by line instead). */
 export function summaryCsv(results: readonly WindowResult[]): string {
-  return `${[csvLine([...SUMMARY_HEADERS]), ...results.map(summaryCsvLine)].join('\n')}\n`;
+  const x = summaryExtrasOf(results.map((r) => r.spec));
+  return `${[csvLine(summaryHeaders(x)), ...results.map((r) => summaryCsvLine(r, x))].join('\n')}\n`;
 }
 
 /** Where the schedule's rows go, one window at a time. */
@@ -63,7 +107,7 @@ function write(stream: NodeJS.WritableStream, text: string): Promise<void> {
 }
 
 /** One window's CSV line (numbers as the CSV output prints them; the label escaped). */
-export function summaryCsvLine(r: WindowResult): string {
+export function summaryCsvLine(r: WindowResult, extras: SummaryExtras = NO_EXTRAS): string {
   const s = r.summary;
   return csvLine([
     escapeFormulaText(r.spec.name),
@@ -76,35 +120,42 @@ export function summaryCsvLine(r: WindowResult): string {
     s.sunlitHours,
     formatFixed(s.meanSunlitFraction, 4),
     s.missingHours,
+    ...extraCells<string | number>(r, extras, (v) => formatFixed(v, 3), (v) => formatFixed(v, 2), formatSerialIso, ''),
     ...s.monthlyKWh.map((k) => formatFixed(k, 3)),
   ]);
 }
 
 /** A CSV summary streamed to `target`: the header line first, then a line per window. */
-export function csvSummaryWriter(target: string, options: OutputOptions): SummaryWriter {
+export function csvSummaryWriter(target: string, options: OutputOptions, extras: SummaryExtras = NO_EXTRAS): SummaryWriter {
   const out = openAtomicOutput(target, options);
   let started = false;
   return {
     async add(r) {
       if (!started) {
         started = true;
-        await write(out.stream, `${csvLine([...SUMMARY_HEADERS])}\n`);
+        await write(out.stream, `${csvLine(summaryHeaders(extras))}\n`);
       }
-      await write(out.stream, `${summaryCsvLine(r)}\n`);
+      await write(out.stream, `${summaryCsvLine(r, extras)}\n`);
     },
     async finish() {
-      if (!started) await write(out.stream, `${csvLine([...SUMMARY_HEADERS])}\n`);
+      if (!started) await write(out.stream, `${csvLine(summaryHeaders(extras))}\n`);
       await out.commit();
     },
     abort: () => out.abort(),
   };
 }
 
-const NUM_FMTS = [undefined, NUMBER_FORMATS.angle, NUMBER_FORMATS.angle, NUMBER_FORMATS.area, NUMBER_FORMATS.kwh, NUMBER_FORMATS.watts, NUMBER_FORMATS.dateTime, NUMBER_FORMATS.integer, NUMBER_FORMATS.fraction, NUMBER_FORMATS.integer, ...MONTHS.map(() => NUMBER_FORMATS.kwh)];
-const WIDTHS = [22, 12, 11, 15, 18, 14, 18, 13, 20, 14, ...MONTHS.map(() => 11)];
-/** Columns summed (SUM) and the one maximised (MAX) in the totals row, by header. */
+/** Number formats and widths of the summary's columns (with the extra ones asked for). */
+export function summaryFormats(x: SummaryExtras = NO_EXTRAS): { numFmts: (string | undefined)[]; widths: number[] } {
+  const extra = extraFormats(x);
+  return {
+    numFmts: [undefined, NUMBER_FORMATS.angle, NUMBER_FORMATS.angle, NUMBER_FORMATS.area, NUMBER_FORMATS.kwh, NUMBER_FORMATS.watts, NUMBER_FORMATS.dateTime, NUMBER_FORMATS.integer, NUMBER_FORMATS.fraction, NUMBER_FORMATS.integer, ...extra, ...MONTHS.map(() => NUMBER_FORMATS.kwh)],
+    widths: [22, 12, 11, 15, 18, 14, 18, 13, 20, 14, ...extra.map(() => 18), ...MONTHS.map(() => 11)],
+  };
+}
+/** Columns summed (SUM) and those maximised (MAX) in the totals row, by header. */
 const SUMMED = new Set(['Glass area (m²)', 'Annual gain (kWh)', ...MONTHS.map((m) => `${m} (kWh)`)]);
-const MAXED = 'Peak gain (W)';
+const MAXED = new Set<string>(['Peak gain (W)', LOAD_HEADERS[0]]);
 
 /**
  * A workbook summary streamed to `target`: a Contents sheet, then the Summary sheet (title and
@@ -112,7 +163,9 @@ const MAXED = 'Peak gain (W)';
  * @param title - the Summary sheet's title (users' words: escaped)
  * @param source - what the schedule came from, for the Contents sheet
  */
-export function xlsxSummaryWriter(target: string, options: OutputOptions, title: string, source: string): SummaryWriter {
+export function xlsxSummaryWriter(target: string, options: OutputOptions, title: string, source: string, extras: SummaryExtras = NO_EXTRAS): SummaryWriter {
+  const HEADERS = summaryHeaders(extras);
+  const { numFmts: NUM_FMTS, widths: WIDTHS } = summaryFormats(extras);
   const out = openAtomicOutput(target, options);
   const wb = new ExcelJS.stream.xlsx.WorkbookWriter({ stream: out.stream, useStyles: true, useSharedStrings: true });
   wb.creator = 'Sunpane';
@@ -142,11 +195,11 @@ export function xlsxSummaryWriter(target: string, options: OutputOptions, title:
   const summary = wb.addWorksheet('Summary', { views: [{ state: 'frozen', xSplit: 1, ySplit: top, topLeftCell: address(top + 1, 2), activeCell: address(top + 1, 2) }] });
   summary.columns = WIDTHS.map((width) => ({ width }));
   heading(summary, title, []);
-  headerRow(summary.getRow(top), [...SUMMARY_HEADERS]);
+  headerRow(summary.getRow(top), HEADERS);
   summary.getRow(top).commit();
   let next = top + 1;
   const sums = new Map<string, number>([...SUMMED].map((h) => [h, 0]));
-  let peak = 0;
+  const peaks = new Map<string, number>([...MAXED].map((h) => [h, 0]));
 
   return {
     async add(r) {
@@ -162,6 +215,7 @@ export function xlsxSummaryWriter(target: string, options: OutputOptions, title:
         s.sunlitHours,
         s.meanSunlitFraction,
         s.missingHours,
+        ...extraCells<ExcelJS.CellValue>(r, extras, (v) => v, (v) => v, serialToCellDate, null),
         ...s.monthlyKWh,
       ];
       const row = summary.getRow(next++);
@@ -171,10 +225,10 @@ export function xlsxSummaryWriter(target: string, options: OutputOptions, title:
         if (NUM_FMTS[k]) cell.numFmt = NUM_FMTS[k]!;
       });
       row.commit();
-      SUMMARY_HEADERS.forEach((h, k) => {
+      HEADERS.forEach((h, k) => {
         if (SUMMED.has(h)) sums.set(h, sums.get(h)! + (values[k] as number));
+        if (MAXED.has(h) && typeof values[k] === 'number') peaks.set(h, Math.max(peaks.get(h)!, values[k] as number));
       });
-      peak = Math.max(peak, s.peakW);
       // Let the zip stream drain: the rows must not pile up in memory.
       if (out.stream.writableNeedDrain) await new Promise<void>((resolve) => out.stream.once('drain', () => resolve()));
     },
@@ -184,17 +238,17 @@ export function xlsxSummaryWriter(target: string, options: OutputOptions, title:
       const totals = summary.getRow(next);
       totals.getCell(1).value = 'All windows';
       totals.getCell(1).font = { bold: true };
-      SUMMARY_HEADERS.forEach((h, k) => {
+      HEADERS.forEach((h, k) => {
         const column = k + 1;
         const range = `${address(first, column)}:${address(last, column)}`;
-        if (SUMMED.has(h) || h === MAXED) {
+        if (SUMMED.has(h) || MAXED.has(h)) {
           const cell = totals.getCell(column);
-          cell.value = { formula: `${h === MAXED ? 'MAX' : 'SUM'}(${range})`, result: h === MAXED ? peak : sums.get(h)! } as ExcelJS.CellFormulaValue;
+          cell.value = { formula: `${MAXED.has(h) ? 'MAX' : 'SUM'}(${range})`, result: MAXED.has(h) ? peaks.get(h)! : sums.get(h)! } as ExcelJS.CellFormulaValue;
           cell.numFmt = NUM_FMTS[k]!;
         }
       });
       totals.commit();
-      summary.autoFilter = `${address(top, 1)}:${address(last, SUMMARY_HEADERS.length)}`;
+      summary.autoFilter = `${address(top, 1)}:${address(last, HEADERS.length)}`;
       summary.commit();
       await wb.commit();
       await out.commit();

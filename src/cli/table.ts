@@ -4,6 +4,7 @@
  */
 import * as path from 'node:path';
 import { type AnnualSeries, annualSeries, type AnnualSummary, summarizeAnnual, type WindowSpec, validateWindowSpec } from '../core/gain';
+import { annualLoadParts, type LoadPeak, loadPeak, windowRoomSeries } from '../core/load';
 import { formatSerialIso } from '../core/time';
 import { CAUTION } from '../outputs/caution';
 import type { Output } from './call';
@@ -26,6 +27,8 @@ the default; "instant" stamps rows 00:00 … 23:00 and takes the sun at the stam
   --window FILE.json   the window (see "window file" below)
 ${WEATHER_HELP}
   --out FILE           .csv: the hourly columns; .xlsx: hourly table, monthly summary, heat map
+                       (a window with uValue adds the conduction gain; one with roomConstruction, or
+                       solarRadiantTimeSeries and nonSolarRadiantTimeSeries, the cooling load)
   --force              replace FILE if it exists (a read-only file is never replaced)
   --help               this text
 
@@ -49,7 +52,7 @@ export const TABLE_CONTENTS = [
   { sheet: 'Contents', holds: 'This list.' },
   { sheet: 'Monthly', holds: 'Solar gain and missing weather hours by month, as formulas over the Hourly table; the year, the largest month and the peak hour; mean gain by month and hour ending (colour scale); a chart of the annual profile.' },
   { sheet: 'Heat map', holds: 'Solar gain (W) of every hour of the year, one row per day, coloured from least to most.' },
-  { sheet: 'Hourly', holds: 'The hourly year as a table: sun position, incidence and profile angles, sunlit fraction, irradiance, SHGC at incidence and solar gain, hour-ending in local standard time.' },
+  { sheet: 'Hourly', holds: 'The hourly year as a table: sun position, incidence and profile angles, sunlit fraction, irradiance, SHGC at incidence and solar gain (with a U-value the conduction gain, with a room the cooling load), hour-ending in local standard time.' },
 ] as const;
 
 const TABLE_FLAGS = { window: true, ...WEATHER_FLAGS, out: true, force: false, help: false } as const;
@@ -82,11 +85,15 @@ export function resolveWindow(windowFile: string, weather: WeatherRequest | unde
   return { spec, weatherReport };
 }
 
-/** The text `table` prints when done: the window's year in one line, and where it went. */
-export function tableSummaryLine(series: AnnualSeries, summary: AnnualSummary): string {
+/**
+ * The text `table` prints when done: the window's year in one line (with the peak cooling load
+ * when the window has a room), and where it went.
+ */
+export function tableSummaryLine(series: AnnualSeries, summary: AnnualSummary, load?: LoadPeak): string {
   const missing = summary.missingHours > 0 ? `; ${summary.missingHours} hours missing (not in the total)` : '';
   const when = series.timeConvention === 'instant' ? 'at' : 'in the hour ending';
-  return `${series.name}: ${summary.annualKWh.toFixed(1)} kWh in ${series.year}, peak ${Math.round(summary.peakW)} W ${when} ${formatSerialIso(summary.peakStamp)}, ${summary.sunlitHours} sunlit hours${missing}`;
+  const peakLoad = load ? `, peak cooling load ${Math.round(load.peakLoadW)} W ${when} ${formatSerialIso(load.peakLoadStamp)}` : '';
+  return `${series.name}: ${summary.annualKWh.toFixed(1)} kWh in ${series.year}, peak ${Math.round(summary.peakW)} W ${when} ${formatSerialIso(summary.peakStamp)}${peakLoad}, ${summary.sunlitHours} sunlit hours${missing}`;
 }
 
 /** Runs `sunpane table`. */
@@ -105,9 +112,11 @@ export async function tableCommand(argv: readonly string[], io: Output): Promise
   for (const line of weatherReport) io.err(line);
   const series = annualSeries(spec);
   const summary = summarizeAnnual(series);
+  const room = windowRoomSeries(spec);
+  const load = room ? annualLoadParts(series, room).total : undefined;
   const bar = new ProgressBar('writing hours', series.hours);
   if (kind === 'csv') {
-    const text = hourlyCsv(series, () => bar.tick());
+    const text = hourlyCsv(series, () => bar.tick(), load);
     bar.finish();
     await writeFileAtomic(out, text, force);
   } else {
@@ -116,13 +125,13 @@ export async function tableCommand(argv: readonly string[], io: Output): Promise
     const hourlySheet = 'Hourly';
     const monthlySheet = wb.addWorksheet('Monthly');
     addHeatMapSheet(wb, 'Heat map', series, `${spec.name}: solar gain (W) by day and ${series.timeConvention === 'instant' ? 'hour (instant)' : 'hour ending'}, ${series.year}`);
-    const placement = addHourlySheet(wb, hourlySheet, 'Hourly', series, () => bar.tick());
+    const placement = addHourlySheet(wb, hourlySheet, 'Hourly', series, () => bar.tick(), undefined, load);
     bar.finish();
     const monthly = addMonthlySheet(monthlySheet, 'Monthly', summary, { sheet: hourlySheet, placement, series }, `${spec.name}: solar gain by month, ${series.year}`);
     fillContentsSheet(contents, `Sunpane: ${spec.name}, ${series.year}`, [`From ${path.basename(windowFile)}${flags.has('weather') ? ` and ${path.basename(flags.get('weather') ?? '')}` : ' (clear sky)'}.`], TABLE_CONTENTS);
     await saveWorkbook(wb, out, force, [monthly.chart]);
   }
-  io.out(tableSummaryLine(series, summary));
+  io.out(tableSummaryLine(series, summary, load ? loadPeak(series, load) : undefined));
   io.out(`wrote ${path.normalize(out)}`);
   io.out(CAUTION);
   return 0;

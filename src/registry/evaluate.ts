@@ -100,9 +100,18 @@ export function readRange(param: ParamDescriptor, raw: RawArg | undefined): ArgV
     if (param.optional || param.default !== undefined) return undefined;
     throw new SunpaneError(param.name, raw ?? null, `is required: must be a range of numbers ${allowedText(param)}`);
   }
-  const { exact, min, max } = param.length ?? {};
-  if ((exact !== undefined && values.length !== exact) || (min !== undefined && values.length < min) || (max !== undefined && values.length > max)) {
-    const want = exact !== undefined ? `exactly ${exact}` : min !== undefined && max !== undefined ? `${min} to ${max}` : min !== undefined ? `at least ${min}` : `at most ${max}`;
+  const { exact, min, max, oneOf } = param.length ?? {};
+  if ((exact !== undefined && values.length !== exact) || (min !== undefined && values.length < min) || (max !== undefined && values.length > max) || (oneOf !== undefined && !oneOf.includes(values.length))) {
+    const want =
+      oneOf !== undefined
+        ? oneOf.join(' or ')
+        : exact !== undefined
+          ? `exactly ${exact}`
+          : min !== undefined && max !== undefined
+            ? `${min} to ${max}`
+            : min !== undefined
+              ? `at least ${min}`
+              : `at most ${max}`;
     throw new SunpaneError(param.name, values, `must hold ${want} numbers`);
   }
   if (param.ascending) {

@@ -17,7 +17,7 @@
  */
 import { SunpaneError } from '../core/common';
 import { annualSeries, type AnnualSeries, windowGainAt, gainSteps, type Weather, type WindowSpec, type WindowGainHour } from '../core/gain';
-import { designDayPeaks, coolingLoad, requireRadiantTimeFactors } from '../core/load';
+import { annualLoadParts, designDayPeaks, coolingLoad, requireRadiantTimeFactors, type RoomSeries, type WindowLoad, windowRoomSeries } from '../core/load';
 import { MASK_DEFAULT_YEAR } from '../core/shading';
 import { evaluationSerial, hoursInYear, requireStamp, serialToCivil, type TimeConvention } from '../core/time';
 import { GLOSSARY, type GlossaryEntry } from './glossary';
@@ -32,6 +32,9 @@ export const DESIGN_DAY_DEFAULT_YEAR = MASK_DEFAULT_YEAR;
 /** Columns of the hourly year, by glossary token, and the series column each reads. */
 const SERIES_COLUMN: Record<string, keyof AnnualSeries> = {
   gain: 'gain',
+  gainBeam: 'gainBeam',
+  gainDiffuse: 'gainDiffuse',
+  conduction: 'conduction',
   radiant: 'radiant',
   convective: 'convective',
   beam: 'beam',
@@ -49,8 +52,10 @@ const SERIES_COLUMN: Record<string, keyof AnnualSeries> = {
   sunAzimuth: 'sunAzimuth',
   stamp: 'stampSerial',
 };
+/** Columns of the cooling load by the radiant time series, and the part of the load each reads. */
+const LOAD_COLUMN: Record<string, keyof WindowLoad> = { load: 'total', loadBeam: 'beam', loadDiffuse: 'diffuse', loadConduction: 'conduction' };
 /** Columns that depend on the weather (shown as #N/A on a missing hour). */
-const WEATHER_COLUMNS = new Set(['gain', 'radiant', 'convective', 'beam', 'sky', 'ground', 'skyUnshaded', 'groundUnshaded', 'dni', 'dhi']);
+const WEATHER_COLUMNS = new Set(['gain', 'gainBeam', 'gainDiffuse', 'conduction', 'radiant', 'convective', 'beam', 'sky', 'ground', 'skyUnshaded', 'groundUnshaded', 'dni', 'dhi', ...Object.keys(LOAD_COLUMN)]);
 /** The window's diffuse-shading ratios, constant over the year (one value repeated on every row). */
 const DIFFUSE_CONSTANTS: Record<string, (s: AnnualSeries) => number> = {
   skyViewRatio: (s) => s.diffuse.skyViewRatio,
@@ -66,16 +71,24 @@ const P = {
   quantities: {
     name: 'quantities',
     kind: 'choiceList',
-    choices: [...Object.keys(SERIES_COLUMN), ...Object.keys(DIFFUSE_CONSTANTS)],
+    choices: [...Object.keys(SERIES_COLUMN), ...Object.keys(DIFFUSE_CONSTANTS), ...Object.keys(LOAD_COLUMN)],
     choiceAliases: { sunlit: 'sunlitFraction', profile: 'profileAngle', altitude: 'sunAltitude', azimuth: 'sunAzimuth', skyview: 'skyViewRatio', groundview: 'groundViewRatio' },
     default: 'gain',
     length: { max: 20 },
     description:
-      "columns of the hourly year, one per name (a range of names gives several): gain, radiant, convective in W; beam (on the window plane), sky, ground (reaching the glass), skyUnshaded, groundUnshaded (bare window), dni, dhi in W/m²; sunlitFraction, skyViewRatio, groundViewRatio, horizonShare, shgc from 0 to 1; incidence, profileAngle, sunAltitude, sunAzimuth in °; stamp: the row's date-time (format the column yyyy-mm-dd hh:mm)",
+      "columns of the hourly year, one per name: gain, gainBeam, gainDiffuse, conduction, radiant, convective, load, loadBeam, loadDiffuse, loadConduction in W (a load needs factors or the window's room); beam, sky, ground, skyUnshaded, groundUnshaded, dni, dhi in W/m²; sunlitFraction, skyViewRatio, groundViewRatio, horizonShare, shgc from 0 to 1; incidence, profileAngle, sunAltitude, sunAzimuth in °; stamp: the row's date-time (format the column yyyy-mm-dd hh:mm)",
   },
   day: { name: 'day', kind: 'number', integer: true, min: 1, max: 28, default: 21, description: 'day of each month for the clear design day' },
-  factors: { name: 'factors', kind: 'numberList', min: 0, max: 1, length: { exact: 24 }, description: 'the 24 radiant time factors r0…r23 of the room (from your handbook or room model), summing to 1' },
-  factorsOptional: { name: 'factors', kind: 'numberList', min: 0, max: 1, length: { exact: 24 }, optional: true, description: 'the 24 radiant time factors r0…r23 of the room, summing to 1; blank: no cooling-load columns' },
+  factors: { name: 'factors', kind: 'numberList', min: 0, max: 1, length: { exact: 24 }, sumsToOne: true, description: 'the 24 radiant time factors r0…r23 of the room (from your handbook or room model), summing to 1' },
+  factorsOptional: { name: 'factors', kind: 'numberList', min: 0, max: 1, length: { exact: 24 }, sumsToOne: true, optional: true, description: "the 24 radiant time factors r0…r23 of the room, summing to 1, used as both its solar and non-solar series; blank: the window's own room (roomConstruction, or its two series), else no cooling-load columns" },
+  yearFactors: { name: 'factors', kind: 'numberList', min: 0, max: 1, length: { exact: 24 }, sumsToOne: true, optional: true, description: "the 24 radiant time factors r0…r23 of the room, summing to 1, used as both its solar and non-solar series for the load quantities; blank: the window's own room" },
+  positionalYearFactors: { name: 'factors', kind: 'numberList', min: 0, max: 1, length: { exact: 24 }, sumsToOne: true, optional: true, description: 'the 24 radiant time factors r0…r23 of the room, summing to 1, used as both its solar and non-solar series, for the load quantities' },
+  parts: { name: 'parts', kind: 'flag', default: false, description: "TRUE: also the peak hour's gain by part (beam, diffuse, conduction) and, with a room, the peak load's parts; FALSE (default): the columns as before" },
+  showGain: { name: 'showGain', kind: 'flag', default: false, description: 'TRUE: two columns, the gain as given and its cooling load; FALSE (default): the load alone' },
+  monthlyTauB: { ...G.tauB, kind: 'numberList', length: { oneOf: [1, 12] }, optional: false, description: 'beam pseudo-optical depth τb of the ASHRAE clear-sky model for the design days: one value, or 12 by month (January first)' },
+  monthlyTauD: { ...G.tauD, kind: 'numberList', length: { oneOf: [1, 12] }, optional: false, description: 'diffuse pseudo-optical depth τd for the design days: one value, or 12 by month (as many as tauB)' },
+  yearTauB: { ...G.tauB, kind: 'numberList', length: { oneOf: [1, 12] }, optional: true, description: 'beam pseudo-optical depth τb of the ASHRAE clear-sky model: one value, or 12 by month; used when dni and dhi are blank' },
+  yearTauD: { ...G.tauD, kind: 'numberList', length: { oneOf: [1, 12] }, optional: true, description: 'diffuse pseudo-optical depth τd: one value, or 12 by month (as many as tauB); used when dni and dhi are blank' },
   gains: { name: 'gains', kind: 'numberList', unit: 'W', min: -1e7, max: 1e7, length: { exact: 24 }, description: 'hourly gain of the design day, hour ending 1:00 first' },
   dniSeries: {
     ...G.dni,
@@ -191,11 +204,35 @@ function stepsOfFields(f: WindowFields, a: Args, prefix: string, convention?: Ti
 // ---------------------------------------------------------------------------------------------
 // Design days and the hourly year
 
+/** Columns of the design-day peaks: always, with a room, and the parts added by `parts`. */
+const PEAK_COLUMNS = ['month', 'peakHour', 'peakGain'] as const;
+const PEAK_LOAD_COLUMNS = ['peakLoadHour', 'peakLoad'] as const;
+const PEAK_GAIN_PARTS = ['peakGainBeam', 'peakGainDiffuse', 'peakGainConduction'] as const;
+const PEAK_LOAD_PARTS = ['peakLoadBeam', 'peakLoadDiffuse', 'peakLoadConduction'] as const;
+
+/**
+ * The design-day peaks as rows: month, peak hour, peak solar gain; with `parts` the peak hour's
+ * solar gain by part and its conduction gain beside it; with a room (factors, or the window's own)
+ * the peak load's hour and value, and with `parts` the load's parts at that hour.
+ */
 function peakRows(spec: WindowSpec, a: Args, headers: boolean): OutTable {
   const months = designDayPeaks(spec, { day: a.day as number, factors: a.factors as number[] | undefined });
   const withLoad = months[0]?.peakLoad !== undefined;
-  const rows: OutTable = headers ? [withLoad ? ['month', 'peakHour', 'peakGain', 'peakLoadHour', 'peakLoad'] : ['month', 'peakHour', 'peakGain']] : [];
-  for (const m of months) rows.push(m.peakLoad !== undefined ? [m.month, m.peakHour, m.peakGain, m.peakLoadHour!, m.peakLoad] : [m.month, m.peakHour, m.peakGain]);
+  const parts = a.parts === true;
+  const header: string[] = [...PEAK_COLUMNS, ...(parts ? PEAK_GAIN_PARTS : []), ...(withLoad ? PEAK_LOAD_COLUMNS : []), ...(withLoad && parts ? PEAK_LOAD_PARTS : [])];
+  const rows: OutTable = headers ? [header] : [];
+  for (const m of months) {
+    const row: OutCell[] = [m.month, m.peakHour, m.peakGain];
+    const first = spec.timeConvention === 'instant' ? 0 : 1; // peak hours are 1…24 hour ending, 0…23 instants
+    const g = m.peakHour - first;
+    if (parts) row.push(m.hourlyBeam[g], m.hourlyDiffuse[g], m.hourlyConduction[g]);
+    if (withLoad) row.push(m.peakLoadHour!, m.peakLoad!);
+    if (withLoad && parts) {
+      const l = m.peakLoadHour! - first;
+      row.push(m.coolingLoadBeam![l], m.coolingLoadDiffuse![l], m.coolingLoadConduction![l]);
+    }
+    rows.push(row);
+  }
   return rows;
 }
 
@@ -234,11 +271,38 @@ function yearSpec(f: WindowFields, a: Args, prefix: string): WindowSpec {
   return spec;
 }
 
-function yearRows(spec: WindowSpec, quantities: readonly string[], headers: boolean): OutTable {
+/** The room of an hourly-year call: the factors given (both series), else the window's own. */
+function roomOf(spec: WindowSpec, factors: number[] | undefined): RoomSeries | undefined {
+  if (factors !== undefined) {
+    const r = requireRadiantTimeFactors(factors);
+    return { solar: r, nonSolar: r };
+  }
+  return windowRoomSeries(spec);
+}
+
+/**
+ * The room the load quantities asked for need, or undefined when none is asked for.
+ * @throws SunpaneError naming the quantities argument when a load is asked for without a room
+ */
+function yearRoom(spec: WindowSpec, quantities: readonly string[], factors: number[] | undefined, quantitiesName: string): RoomSeries | undefined {
+  const load = quantities.find((q) => LOAD_COLUMN[q] !== undefined);
+  if (load === undefined) return undefined;
+  const room = roomOf(spec, factors);
+  if (room === undefined) {
+    throw new SunpaneError(quantitiesName, load, "needs the room's radiant time series: give factors, or the window's roomConstruction (light, medium, heavy) or its solarRadiantTimeSeries and nonSolarRadiantTimeSeries");
+  }
+  return room;
+}
+
+function yearRows(spec: WindowSpec, quantities: readonly string[], headers: boolean, factors?: number[], quantitiesName = 'quantities'): OutTable {
+  const room = yearRoom(spec, quantities, factors, quantitiesName);
   const series = annualSeries(spec);
+  const load = room ? annualLoadParts(series, room) : undefined;
   const columns = quantities.map((q) => {
     const constant = DIFFUSE_CONSTANTS[q];
-    return constant !== undefined ? new Float64Array(series.hours).fill(constant(series)) : (series[SERIES_COLUMN[q]] as Float64Array);
+    if (constant !== undefined) return new Float64Array(series.hours).fill(constant(series));
+    if (LOAD_COLUMN[q] !== undefined) return load![LOAD_COLUMN[q]];
+    return series[SERIES_COLUMN[q]] as Float64Array;
   });
   const weather = quantities.map((q) => WEATHER_COLUMNS.has(q));
   const out: OutTable = new Array(series.hours + (headers ? 1 : 0));
@@ -312,15 +376,19 @@ const SOLARGAINPEAKS: FunctionDescriptor = {
   name: 'SOLARGAINPEAKS',
   summary: "For each month, the peak hour and peak solar gain of a window on a clear design day, and the peak cooling load when radiant time factors are given; the window as one range (its clear sky, its year or 2026).",
   category: 'Gain and load',
-  params: [WINDOW, P.factorsOptional, P.day, G.headers],
+  params: [WINDOW, P.factorsOptional, P.day, G.headers, P.parts],
   result: {
     shape: 'spill',
-    description: "12 rows, January first: month, peak hour (by the window's time convention: hour ending 1–24, or the instant's hour 0–23), peak gain [W]; with factors also the hour and value [W] of the peak cooling load (below 0 when conduction on a design day colder than the room outweighs the sun)",
-    columns: ['month', 'peakHour', 'peakGain', 'peakLoadHour', 'peakLoad'],
+    description:
+      "12 rows, January first: month, peak hour (by the window's time convention: hour ending 1–24, or the instant's hour 0–23), peak solar gain [W]; with parts TRUE the peak hour's solar gain by part and its conduction gain [W]; with factors (or the window's own room) the hour and value [W] of the peak cooling load (below 0 when conduction on a design day colder than the room outweighs the sun), and with parts its beam, diffuse and conduction shares [W]",
+    columns: ['month', 'peakHour', 'peakGain', 'peakGainBeam', 'peakGainDiffuse', 'peakGainConduction', 'peakLoadHour', 'peakLoad', 'peakLoadBeam', 'peakLoadDiffuse', 'peakLoadConduction'],
   },
   evaluate: (a) => peakRows(designSpec(a.window as WindowFields, 'window '), a, a.headers as boolean),
   refuses: (a) => factorsProblem(a.factors as number[] | undefined) ?? reasonOf(() => designSpec(a.window as WindowFields, 'window ')),
-  examples: [{ args: ['B2:C14'], note: 'peak hour and watts on the 21st of each month' }],
+  examples: [
+    { args: ['B2:C14'], note: 'peak hour and watts on the 21st of each month' },
+    { args: ['B2:C19', '', '21', 'TRUE', 'TRUE'], note: 'with the window\'s roomConstruction, uValue, indoorTemperature, dryBulbMax and dailyRange: gain and cooling load by part at their peaks' },
+  ],
   outsideCheck: PEAKS_CHECK,
 };
 
@@ -328,17 +396,18 @@ const SOLARGAINYEAR: FunctionDescriptor = {
   name: 'SOLARGAINYEAR',
   summary: "One or more quantities of a window hour by hour over its year (gain, irradiance on the glass, sunlit fraction, angles...), rows as the window's time convention stamps them; the window as one range.",
   category: 'Gain and load',
-  params: [WINDOW, P.quantities, { ...P.dniSeries, name: 'dni' }, { ...P.dhiSeries, name: 'dhi' }, G.headers],
+  params: [WINDOW, P.quantities, { ...P.dniSeries, name: 'dni' }, { ...P.dhiSeries, name: 'dhi' }, G.headers, P.yearFactors],
   result: {
     shape: 'spill',
     description: "8760 rows (8784 in a leap year), one column per quantity; hour-ending rows (1 January 01:00 first, sun at mid-hour) or, with timeConvention instant, rows at 00:00 … 23:00",
   },
-  evaluate: (a) => yearRows(yearSpec(a.window as WindowFields, a, 'window '), a.quantities as string[], a.headers as boolean),
-  refuses: (a) => reasonOf(() => yearSpec(a.window as WindowFields, a, 'window ')),
+  evaluate: (a) => yearRows(yearSpec(a.window as WindowFields, a, 'window '), a.quantities as string[], a.headers as boolean, a.factors as number[] | undefined),
+  refuses: (a) => factorsProblem(a.factors as number[] | undefined) ?? reasonOf(() => yearRoom(yearSpec(a.window as WindowFields, a, 'window '), a.quantities as string[], a.factors as number[] | undefined, 'quantities')),
   examples: [
     { args: ['B2:C15'], note: 'hourly gain of the window for its year (a year field is needed)' },
     { args: ['B2:C15', '{"stamp","gain","sunlitFraction"}', 'Weather!D2:D8761', 'Weather!E2:E8761', 'TRUE'], note: 'three columns with a header row, under your hourly direct normal and diffuse horizontal irradiance' },
     { args: ['B2:C15', '{"sky","skyUnshaded","skyViewRatio"}'], note: 'sky diffuse reaching the glass past the devices, on the bare window, and the ratio between them for an isotropic sky' },
+    { args: ['B2:C18', '{"gain","conduction","load"}'], note: 'solar gain, conduction gain and cooling load of each hour, for a window whose range gives uValue, indoorTemperature, dryBulbMax, dailyRange and roomConstruction' },
   ],
   outsideCheck: YEAR_CHECK,
 };
@@ -388,9 +457,13 @@ const COOLINGLOAD: FunctionDescriptor = {
   name: 'COOLINGLOAD',
   summary: 'Hourly cooling load of a 24-hour gain profile by the radiant time series (Spitler, Fisher & Pedersen 1997), with your radiant time factors.',
   category: 'Gain and load',
-  params: [P.gains, P.factors, G.radiantFraction],
-  result: { shape: 'spill', unit: 'W', description: '24 rows: the cooling load of each hour, hour ending 1:00 first' },
-  evaluate: (a) => Array.from(coolingLoad(a.gains as number[], a.factors as number[], a.radiantFraction as number), (q) => [q]),
+  params: [P.gains, P.factors, G.radiantFraction, P.showGain],
+  result: { shape: 'spill', unit: 'W', description: '24 rows: the cooling load of each hour, hour ending 1:00 first; with showGain TRUE two columns, the gain beside its load' },
+  evaluate: (a) => {
+    const gains = a.gains as number[];
+    const load = coolingLoad(gains, a.factors as number[], a.radiantFraction as number);
+    return Array.from(load, (q, i) => (a.showGain === true ? [gains[i], q] : [q]));
+  },
   refuses: (a) => factorsProblem(a.factors as number[] | undefined),
   examples: [{ args: ['B2:B25', 'C2:C25', '1'], note: 'gains in B2:B25 (hour ending 1:00 to 24:00), the room’s 24 radiant time factors in C2:C25' }],
   outsideCheck: RTS_CHECK,
@@ -407,8 +480,8 @@ const PEAKGAINS: FunctionDescriptor = {
   params: [
     G.year,
     ...SITE_AND_WINDOW,
-    { ...P.tauB, optional: false, description: 'beam pseudo-optical depth of the ASHRAE clear-sky model for the design days' },
-    { ...P.tauD, optional: false, description: 'diffuse pseudo-optical depth of the ASHRAE clear-sky model for the design days' },
+    P.monthlyTauB,
+    P.monthlyTauD,
     P.day,
     P.factorsOptional,
     ...GLASS_AND_GROUND,
@@ -416,16 +489,21 @@ const PEAKGAINS: FunctionDescriptor = {
     ...SHADING,
     P.hourEndingConvention,
     G.headers,
+    P.parts,
   ],
   result: {
     shape: 'spill',
-    description: '12 rows, January first: month, peak hour (hour ending, 1–24, local standard time; with timeConvention instant the hour 0–23), peak gain [W]; with factors also the hour and value [W] of the peak cooling load (below 0 when conduction on a design day colder than the room outweighs the sun)',
-    columns: ['month', 'peakHour', 'peakGain', 'peakLoadHour', 'peakLoad'],
+    description:
+      '12 rows, January first: month, peak hour (hour ending, 1–24, local standard time; with timeConvention instant the hour 0–23), peak solar gain [W]; with parts TRUE the peak hour\'s gain by part (beam, diffuse; conduction is 0 in this form); with factors also the hour and value [W] of the peak cooling load (below 0 when conduction on a design day colder than the room outweighs the sun), and with parts its beam, diffuse and conduction shares',
+    columns: ['month', 'peakHour', 'peakGain', 'peakGainBeam', 'peakGainDiffuse', 'peakGainConduction', 'peakLoadHour', 'peakLoad', 'peakLoadBeam', 'peakLoadDiffuse', 'peakLoadConduction'],
   },
   evaluate: (a) => peakRows(legacyDesignSpec(a), a, a.headers as boolean),
   refuses: (a) => factorsProblem(a.factors as number[] | undefined) ?? reasonOf(() => legacyDesignSpec(a)),
   supersededBy: 'SOLARGAINPEAKS',
-  examples: [{ args: ['2026', '40', '-105', '-7', '270', '1.5', '1.2', '0.4', '0.4', '2.3'], note: 'a west window: peak hour and watts on the 21st of each month' }],
+  examples: [
+    { args: ['2026', '40', '-105', '-7', '270', '1.5', '1.2', '0.4', '0.4', '2.3'], note: 'a west window: peak hour and watts on the 21st of each month' },
+    { args: ['2026', '40', '-105', '-7', '270', '1.5', '1.2', '0.4', 'Sky!B2:B13', 'Sky!C2:C13'], note: 'the same window under twelve monthly τb and τd values from a climate table (January first)' },
+  ],
   outsideCheck: PEAKS_CHECK,
 };
 
@@ -437,10 +515,10 @@ const WINDOWYEAR: FunctionDescriptor = {
   name: 'WINDOWYEAR',
   summary: 'One or more quantities of a window hour by hour over a year, every field a positional argument (the older form of SOLARGAINYEAR, kept for saved workbooks).',
   category: 'Gain and load',
-  params: [G.year, ...SITE_AND_WINDOW, { ...P.quantities, name: 'quantity' }, { ...P.dniSeries, name: 'dni' }, { ...P.dhiSeries, name: 'dhi' }, P.tauB, P.tauD, ...GLASS_AND_GROUND, G.radiantFraction, ...SHADING, P.hourEndingConvention, G.headers],
+  params: [G.year, ...SITE_AND_WINDOW, { ...P.quantities, name: 'quantity' }, { ...P.dniSeries, name: 'dni' }, { ...P.dhiSeries, name: 'dhi' }, P.yearTauB, P.yearTauD, ...GLASS_AND_GROUND, G.radiantFraction, ...SHADING, P.hourEndingConvention, G.headers, P.positionalYearFactors],
   result: { shape: 'spill', description: '8760 rows (8784 in a leap year), 1 January 00:00–01:00 first, one column per quantity; sun at the middle of each hour (with timeConvention instant: rows at 00:00 … 23:00, sun at the stamp)' },
-  evaluate: (a) => yearRows(legacyYearSpec(a), a.quantity as string[], a.headers as boolean),
-  refuses: (a) => reasonOf(() => legacyYearSpec(a)),
+  evaluate: (a) => yearRows(legacyYearSpec(a), a.quantity as string[], a.headers as boolean, a.factors as number[] | undefined, 'quantity'),
+  refuses: (a) => factorsProblem(a.factors as number[] | undefined) ?? reasonOf(() => yearRoom(legacyYearSpec(a), a.quantity as string[], a.factors as number[] | undefined, 'quantity')),
   supersededBy: 'SOLARGAINYEAR',
   examples: [{ args: ['2026', '40', '-105', '-7', '180', '1.5', '1.2', '0.4', '"gain"', 'Weather!D2:D8761', 'Weather!E2:E8761'], note: 'hourly gain of a south window for the whole year under your hourly weather' }],
   outsideCheck: YEAR_CHECK,

@@ -39,7 +39,7 @@ export interface GlossaryEntry extends ParamDescriptor {
 }
 
 /** Groups of window fields, in the order help lists them. */
-export type WindowFieldGroup = 'window' | 'place' | 'size' | 'glass' | 'shading' | 'sky';
+export type WindowFieldGroup = 'window' | 'place' | 'size' | 'glass' | 'room' | 'shading' | 'sky';
 
 /** Longest window or shading dimension accepted [m] (the core's: one bound everywhere). */
 export const LENGTH_MAX = MAX_LENGTH;
@@ -304,6 +304,42 @@ export const GLOSSARY = {
     optional: true,
     description: 'indoor air temperature for the conduction gain (with uValue)',
     window: windowField('indoorTemperature', 'number', 'glass'),
+  }),
+  // The room behind the window (cooling load by the radiant time series)
+  roomConstruction: e({
+    name: 'roomConstruction',
+    label: 'Room construction',
+    aliases: ['construction'],
+    kind: 'choice',
+    choices: ['light', 'medium', 'heavy'],
+    optional: true,
+    description:
+      'the room\'s construction, for the cooling load with the illustrative radiant time series Sunpane computes from a stated room model (not a published table): "light", "medium" or "heavy"; or give solarRadiantTimeSeries and nonSolarRadiantTimeSeries instead; blank: gains only',
+    window: windowField('room.construction', 'choice', 'room'),
+  }),
+  solarRadiantTimeSeries: e({
+    name: 'solarRadiantTimeSeries',
+    label: 'Solar radiant time series',
+    aliases: ['solarRts', 'solarSeries'],
+    kind: 'numberList',
+    min: 0,
+    max: 1,
+    length: { exact: 24 },
+    optional: true,
+    description: "the room's solar radiant time series r0…r23 (24 factors summing to 1, for the transmitted beam), from your handbook or room model; with nonSolarRadiantTimeSeries",
+    window: windowField('room.solar', 'list', 'room'),
+  }),
+  nonSolarRadiantTimeSeries: e({
+    name: 'nonSolarRadiantTimeSeries',
+    label: 'Non-solar radiant time series',
+    aliases: ['nonSolarRts', 'nonSolarSeries'],
+    kind: 'numberList',
+    min: 0,
+    max: 1,
+    length: { exact: 24 },
+    optional: true,
+    description: "the room's non-solar radiant time series r0…r23 (24 factors summing to 1, for diffuse and conduction gains, and the beam behind an interior shade); with solarRadiantTimeSeries",
+    window: windowField('room.nonSolar', 'list', 'room'),
   }),
   // Outside shading: the overhang
   overhangProjection: length('overhangProjection', 'Overhang projection [m]', `${OVERHANG}.projection`, { description: 'depth of an overhang out from the wall; 0 = no overhang', aliases: ['overhangDepth'] }),

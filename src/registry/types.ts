@@ -62,8 +62,13 @@ export interface ParamDescriptor {
   default?: number | string | boolean;
   /** Optional without a default value: the function works something out itself (documented in `description`). */
   optional?: boolean;
-  /** For `numberList` / `choiceList`: allowed count of entries. Element bounds use min/max. */
-  length?: { min?: number; max?: number; exact?: number };
+  /**
+   * For `numberList` / `choiceList`: allowed count of entries (`oneOf`: only these counts, e.g. one
+   * value for the year or twelve by month). Element bounds use min/max.
+   */
+  length?: { min?: number; max?: number; exact?: number; oneOf?: readonly number[] };
+  /** For `numberList`: the entries must sum to 1 (radiant time factors; the core checks the tolerance). */
+  sumsToOne?: boolean;
   /** For `numberList`: numbers must be strictly ascending. */
   ascending?: boolean;
   /**

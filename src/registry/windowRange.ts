@@ -17,9 +17,10 @@
 import { SunpaneError, describeValue, rangeText } from '../core/common';
 import type { Weather, WindowSpec } from '../core/gain';
 import { validateWindowSpec } from '../core/gain';
+import { windowRoomSeries } from '../core/load';
 import { PATH_SHADING_NAMES, requireShading, requireVerticalForShading, type Shading } from '../core/shading';
 import type { SkyModel } from '../core/sky';
-import { parseIsoLocal, requireSerial, type TimeConvention } from '../core/time';
+import { formatSerialIso, parseIsoLocal, requireSerial, type TimeConvention } from '../core/time';
 import { EXAMPLE_SITES, findExampleSite } from '../demo/sites';
 import { GLOSSARY, type GlossaryEntry, LENGTH_MAX, WINDOW_FIELDS, choiceFor, nameKey, windowFieldFor } from './glossary';
 import type { Matrix, RawArg, Scalar, WindowFields } from './types';
@@ -180,7 +181,8 @@ export function readFieldCell(field: GlossaryEntry, cell: Scalar | number | read
       if (cellKind === 'monthly' && count !== 1 && count !== 12) {
         throw new SunpaneError(name, cell, 'must hold one value for the whole year or 12 monthly values (January first), separated by spaces, commas or semicolons');
       }
-      const { min, max } = field.length ?? {};
+      const { min, max, exact } = field.length ?? {};
+      if (exact !== undefined && count !== exact) throw new SunpaneError(name, cell, `must hold exactly ${exact} values, separated by spaces, commas or semicolons (it holds ${count})`);
       if ((min !== undefined && count < min) || (max !== undefined && count > max)) {
         throw new SunpaneError(name, cell, `must hold ${min ?? 1} to ${max} values, separated by spaces, commas or semicolons`);
       }
@@ -352,8 +354,10 @@ export function inFieldWords(err: unknown, fields: WindowFields, prefix: Namer =
   }
   const index = /\[(\d+)\]$/.exec(err.argument);
   const name = shown(field, fields, prefix) + (index ? ` (value ${Number(index[1]) + 1})` : '');
-  const value = fields.values.get(field.name) ?? err.value;
-  return new SunpaneError(name, index ? err.value : value, err.allowed.replace(/weather\.|glazing\.angleTable\.|glazing\.|shading\.|site\./g, ''));
+  const given = fields.values.get(field.name) ?? err.value;
+  // A date-time field is shown as the date-time it is, not as its serial.
+  const value = field.window!.cell === 'dateTime' && typeof given === 'number' && Number.isFinite(given) ? formatSerialIso(given) : given;
+  return new SunpaneError(name, index ? err.value : value, err.allowed.replace(/weather\.|glazing\.angleTable\.|glazing\.|shading\.|site\.|room\./g, ''), err.detail);
 }
 
 const NO_FIELDS: WindowFields = { kind: 'window', values: new Map(), written: new Map() };
@@ -437,7 +441,10 @@ function weatherOf(f: WindowFields, prefix: Namer, siteSky: Weather | undefined)
   if (tauB && !tauD) throw missing(f, prefix, 'tauD', `needed with ${shown(GLOSSARY.tauB, f, prefix)}: the ASHRAE clear sky takes both (${rangeOf(GLOSSARY.tauD).replace(/^must be /, '')})`);
   if (tauD && !tauB) throw missing(f, prefix, 'tauB', `needed with ${shown(GLOSSARY.tauD, f, prefix)}: the ASHRAE clear sky takes both (${rangeOf(GLOSSARY.tauB).replace(/^must be /, '')})`);
   if (tauB && tauD) {
-    if (tauB.length !== tauD.length) throw new SunpaneError(shown(GLOSSARY.tauD, f, prefix), tauD, `must hold as many values as ${shown(GLOSSARY.tauB, f, prefix)} (${tauB.length})`);
+    // One value stands for every month, so one τ beside twelve of the other is read month by month.
+    if (tauB.length !== tauD.length && tauB.length !== 1 && tauD.length !== 1) {
+      throw new SunpaneError(shown(GLOSSARY.tauD, f, prefix), tauD, `must hold as many values as ${shown(GLOSSARY.tauB, f, prefix)} (${tauB.length}), or one for every month`);
+    }
     return { kind: 'ashraeClearSky', tauB, tauD };
   }
   return siteSky;
@@ -571,6 +578,7 @@ export function windowSpecFromFields(f: WindowFields, options: WindowSpecOptions
     const rule = spec.site.daylightSaving as Partial<NonNullable<WindowSpec['site']['daylightSaving']>> | undefined;
     if (rule !== undefined && rule.shift === undefined) rule.shift = GLOSSARY.daylightSavingShift.default as number;
     validateWindowSpec(weather ? spec : { ...spec, weather: skyWithDesignDays(spec.weather, STAND_IN_SKY) });
+    windowRoomSeries(spec); // the room's series checked with the window (construction, counts, sums)
     return { spec, hasWeather: weather !== undefined, fields: f };
   } catch (err) {
     throw inFieldWords(err, f, prefix);

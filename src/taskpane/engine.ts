@@ -7,6 +7,8 @@ import { type AnnualSeries, annualSeries, type AnnualSummary, summarizeAnnual, t
 import { shadingMaskGrid, type Shading } from '../core/shading';
 import { sunPosition, incidenceAngle } from '../core/sun';
 import { civilToSerial, serialToUtcMs } from '../core/time';
+import { annualLoadParts, loadPeak, windowRoomSeries } from '../core/load';
+import { type HourlyData, hourlyData } from '../outputs/hourlyColumns';
 import { inGlossaryWords } from '../registry/windowRange';
 import type { YearFigures } from './yearSheet';
 
@@ -17,6 +19,7 @@ import type { YearFigures } from './yearSheet';
 export function validateSpec(spec: WindowSpec): void {
   try {
     validateWindowSpec(spec);
+    windowRoomSeries(spec);
   } catch (err) {
     throw inGlossaryWords(err);
   }
@@ -27,6 +30,8 @@ export interface YearResult {
   series: AnnualSeries;
   summary: AnnualSummary;
   figures: YearFigures;
+  /** The hourly table's columns: the series', with the conduction gain (a U-value) and the cooling load (a room). */
+  hourly: HourlyData;
 }
 
 /** Runs the core's annual series and summary for one window. */
@@ -34,6 +39,9 @@ export function runYear(spec: WindowSpec): YearResult {
   validateSpec(spec);
   const series = annualSeries(spec);
   const summary = summarizeAnnual(series);
+  const room = windowRoomSeries(spec);
+  const load = room ? annualLoadParts(series, room).total : undefined;
+  const peak = load ? loadPeak(series, load) : undefined;
   const figures: YearFigures = {
     monthlyKWh: summary.monthlyKWh,
     annualKWh: summary.annualKWh,
@@ -45,8 +53,9 @@ export function runYear(spec: WindowSpec): YearResult {
     diffuseCut: summary.diffuseCut,
     missingHours: summary.missingHours,
     glassArea: series.glassArea,
+    ...(peak ? { peakLoadW: peak.peakLoadW, peakLoadStamp: peak.peakLoadStamp } : {}),
   };
-  return { series, summary, figures };
+  return { series, summary, figures, hourly: hourlyData(series, load) };
 }
 
 /** One point of a sun track. */

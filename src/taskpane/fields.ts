@@ -100,6 +100,15 @@ export const FIELDS: readonly FieldDef[] = [
   box(GLOSSARY.panes, 'glass', '2', { visible: physical }),
   { id: 'angleTableAddress', label: 'Angle table (two columns: angle °, SHGC)', section: 'glass', kind: 'address', initial: '', paths: ['shgcAngles', 'shgcValues', 'glazing.angleTable'], visible: table, hint: 'e.g. Glass!A2:B10' },
   box(GLOSSARY.interiorAttenuation, 'glass', '1', { hint: 'inside blind or curtain; 1 = none' }),
+  {
+    ...box(GLOSSARY.roomConstruction, 'glass', '', { kind: 'select', hint: 'for the cooling load: illustrative radiant time series from our own room model, not a published table' }),
+    options: [
+      { value: '', label: 'none (gains only)' },
+      { value: 'light', label: 'light' },
+      { value: 'medium', label: 'medium' },
+      { value: 'heavy', label: 'heavy' },
+    ],
+  },
 
   box(GLOSSARY.overhangProjection, 'shade', '0', { hint: 'depth out from the wall; 0 = no overhang' }),
   box(GLOSSARY.overhangGap, 'shade', '0', { hint: 'underside above the window head' }),

@@ -270,13 +270,14 @@ export function createPane(doc: Document, host: PaneHost): void {
       await breathe();
       const result: YearResult = runYear(ready.spec);
       const plan = await planFor(`${ready.spec.name} hourly`);
-      const written = await writeYearSheet(host.run, { ...plan, tableBase: `${ready.spec.name} hourly` }, { title: `Sunpane hourly solar gain: ${ready.spec.name}`, lines: describeSpec(ready.spec), timeConvention: ready.spec.timeConvention }, result.series, result.figures, {
+      const written = await writeYearSheet(host.run, { ...plan, tableBase: `${ready.spec.name} hourly` }, { title: `Sunpane hourly solar gain: ${ready.spec.name}`, lines: describeSpec(ready.spec), timeConvention: ready.spec.timeConvention }, result.hourly, result.figures, {
         onProgress: (done, total) => setProgress(done, total, `Writing rows: ${done} of ${total}`),
         cancelled: () => cancelRequested,
       });
       store.remember(written.sheet);
       const cuts = `shading takes ${(result.figures.beamCut * 100).toFixed(0)} % of the beam and ${(result.figures.diffuseCut * 100).toFixed(0)} % of the diffuse light`;
-      say(`Wrote "${written.sheet}" (table ${written.table}): ${result.figures.annualKWh.toFixed(0)} kWh in the year, peak ${result.figures.peakW.toFixed(0)} W; ${cuts}.`, 'ok');
+      const load = result.figures.peakLoadW !== undefined ? `, peak cooling load ${result.figures.peakLoadW.toFixed(0)} W` : '';
+      say(`Wrote "${written.sheet}" (table ${written.table}): ${result.figures.annualKWh.toFixed(0)} kWh in the year, peak ${result.figures.peakW.toFixed(0)} W${load}; ${cuts}.`, 'ok');
     } catch (err) {
       reportFailure(err);
     } finally {

@@ -149,6 +149,7 @@ export function buildWindowSpec(values: FormValues, data: SheetData = {}): Windo
     weather: weatherOf(values, data),
     year: num(values, 'year'),
     timeConvention: (values.timeConvention || 'hourEnding') as WindowSpec['timeConvention'],
+    ...(values.roomConstruction ? { room: { construction: values.roomConstruction } } : {}),
   };
 }
 

@@ -12,15 +12,18 @@
  */
 import type { TimeConvention } from '../core/time';
 import { escapeFormulaText } from '../io/textCells';
-import { HOURLY_COLUMNS, type HourlyKey, hourlyHeadersFor } from '../outputs/hourlyColumns';
+import { HOURLY_COLUMNS, type HourlyData, type HourlyExtras, type HourlyKey, extrasOf, hourlyColumnsFor } from '../outputs/hourlyColumns';
 import { type ColumnRef, monthHourMeanFormula, monthlyGainFormula, tableColumnRef, yearFigureFormulas } from '../outputs/hourlyFormulas';
 import { PALETTE, hexColour } from '../outputs/palette';
 import { DEFAULT_BLOCK_ROWS, cellAddress, columnLetters, rangeAddress, roundForSheet, rowBlocks } from './blocks';
 import { type RunBatch, RunCancelled, writingSheet } from './resultSheets';
 import { tableNamesIn, uniqueTableName } from './tableNames';
 
-/** The hourly columns the sheet shows (one value per hour of the year). */
-export type HourColumns = Record<HourlyKey, ArrayLike<number>>;
+/**
+ * The hourly columns the sheet shows (one value per hour of the year): the base columns, and the
+ * conduction gain and cooling load when the window has them (src/outputs/hourlyColumns.ts hourlyData).
+ */
+export type HourColumns = HourlyData;
 
 /** The yearly figures the pane reports when done (the sheet itself holds formulas). */
 export interface YearFigures {
@@ -36,14 +39,25 @@ export interface YearFigures {
   diffuseCut: number;
   missingHours: number;
   glassArea: number;
+  /** The year's largest cooling load [W] and its stamp, when the window has a room. */
+  peakLoadW?: number;
+  peakLoadStamp?: number;
 }
 
 /** Row (0-based) of the hourly table's header. */
 export const TABLE_HEADER_ROW = 4;
 /** First column (0-based) of the monthly summary. */
-export const SUMMARY_COLUMN = HOURLY_COLUMNS.length + 1;
+export const SUMMARY_COLUMN = summaryColumnFor(HOURLY_COLUMNS.length);
+/** First column (0-based) of the monthly summary beside a table of `width` columns. */
+export function summaryColumnFor(width: number): number {
+  return width + 1;
+}
+/** First column (0-based) of the month × hour block beside a table of `width` columns. */
+export function heatColumnFor(width: number): number {
+  return summaryColumnFor(width) + 4;
+}
 /** First column (0-based) of the month × hour block. */
-export const HEAT_COLUMN = SUMMARY_COLUMN + 4;
+export const HEAT_COLUMN = heatColumnFor(HOURLY_COLUMNS.length);
 
 const MONTHS = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
 
@@ -73,15 +87,16 @@ export interface YearHeading {
 }
 
 /** The hourly table's headers: the first column says how the rows are stamped. */
-export function hourTableHeaders(convention: TimeConvention = 'hourEnding'): string[] {
-  return [...hourlyHeadersFor(convention)];
+export function hourTableHeaders(convention: TimeConvention = 'hourEnding', extras: HourlyExtras = {}): string[] {
+  return hourlyColumnsFor(convention, extras).map((c) => c.header);
 }
 
-/** The hourly rows from `start` to `end` (exclusive), rounded for the sheet. */
+/** The hourly rows from `start` to `end` (exclusive), rounded for the sheet (the columns `cols` has). */
 export function hourRows(cols: HourColumns, start: number, end: number): (number | string)[][] {
+  const columns = hourlyColumnsFor('hourEnding', extrasOf(cols));
   const rows: (number | string)[][] = [];
   for (let i = start; i < end; i++) {
-    rows.push(HOURLY_COLUMNS.map((c) => roundForSheet(cols[c.key][i], c.sheetDecimals)));
+    rows.push(columns.map((c) => roundForSheet((cols[c.key as HourlyKey] as ArrayLike<number>)[i], c.sheetDecimals)));
   }
   return rows;
 }
@@ -115,8 +130,14 @@ export function monthlyFormulas(ref: ColumnRef, year: number, monthRow0: number,
  * input; the beam and diffuse cuts of the shading are the core's values (the table holds what
  * reaches the glass, not what a bare window would get).
  */
-export function keyFigureRows(ref: ColumnRef, fig: Pick<YearFigures, 'glassArea' | 'beamCut' | 'diffuseCut'>): (number | string)[][] {
+export function keyFigureRows(ref: ColumnRef, fig: Pick<YearFigures, 'glassArea' | 'beamCut' | 'diffuseCut'>, withLoad = false): (number | string)[][] {
   const f = yearFigureFormulas(ref);
+  const load = withLoad
+    ? [
+        ['Peak cooling load (W)', `=MAX(${ref('load')})`],
+        [ref.convention === 'instant' ? 'Peak load at (instant)' : 'Peak load at (hour ending)', `=INDEX(${ref('stampSerial')},MATCH(MAX(${ref('load')}),${ref('load')},0))`],
+      ]
+    : [];
   return [
     ['Peak gain (W)', `=${f.peakW}`],
     [ref.convention === 'instant' ? 'Peak at (instant)' : 'Peak at (hour ending)', `=${f.peakStamp}`],
@@ -126,6 +147,7 @@ export function keyFigureRows(ref: ColumnRef, fig: Pick<YearFigures, 'glassArea'
     ['Glass area (m²)', roundForSheet(fig.glassArea, 3)],
     ['Beam cut by shading (%)', roundForSheet(fig.beamCut * 100, 1)],
     ['Diffuse cut by shading (%)', roundForSheet(fig.diffuseCut * 100, 1)],
+    ...load,
   ];
 }
 
@@ -167,7 +189,11 @@ export async function writeYearSheet(
 ): Promise<WrittenYear> {
   return writingSheet(run, target.name, async () => {
     const total = cols.gain.length;
-    const width = HOURLY_COLUMNS.length;
+    const extras = extrasOf(cols);
+    const columns = hourlyColumnsFor(heading.timeConvention, extras);
+    const width = columns.length;
+    const SUMMARY_COLUMN = summaryColumnFor(width);
+    const HEAT_COLUMN = heatColumnFor(width);
     const firstDataRow = TABLE_HEADER_ROW + 1;
     const blocks = rowBlocks(total, control.blockRows ?? DEFAULT_BLOCK_ROWS);
 
@@ -180,7 +206,7 @@ export async function writeYearSheet(
       head.values = [[escapeFormulaText(heading.title)], ...heading.lines.map((l) => [escapeFormulaText(l)])];
       sheet.getRange(cellAddress(0, 0)).format.font.bold = true;
       const header = sheet.getRange(rangeAddress(TABLE_HEADER_ROW, 0, 1, width));
-      header.values = [hourTableHeaders(heading.timeConvention)];
+      header.values = [hourTableHeaders(heading.timeConvention, extras)];
       await ctx.sync();
       return uniqueTableName(target.tableBase ?? target.name, await tableNamesIn(ctx));
     });
@@ -206,7 +232,7 @@ export async function writeYearSheet(
         const rows = block.end - block.start;
         const range = ctx.workbook.worksheets.getItem(target.name).getRange(rangeAddress(firstDataRow + block.start, 0, rows, width));
         range.values = hourRows(cols, block.start, block.end);
-        range.numberFormat = Array.from({ length: rows }, () => HOURLY_COLUMNS.map((c) => c.numFmt));
+        range.numberFormat = Array.from({ length: rows }, () => columns.map((c) => c.numFmt));
         await ctx.sync();
       });
       control.onProgress?.(block.end, total);
@@ -232,10 +258,10 @@ export async function writeYearSheet(
       monthHead.format.font.bold = true;
       monthHead.format.fill.color = HEAD_FILL;
       monthHead.format.font.color = hexColour(PALETTE.headerText);
-      const keys = keyFigureRows(ref, fig);
+      const keys = keyFigureRows(ref, fig, extras.load);
       const keyRange = sheet.getRange(rangeAddress(keyRow, SUMMARY_COLUMN, keys.length, 2));
       keyRange.formulas = keys;
-      keyRange.numberFormat = keys.map((_, i) => ['@', i === 1 ? 'yyyy-mm-dd hh:mm' : i === 3 ? '0.000' : i === 5 ? '0.00' : i >= 6 ? '0.0' : '#,##0']);
+      keyRange.numberFormat = keys.map((_, i) => ['@', i === 1 || i === 9 ? 'yyyy-mm-dd hh:mm' : i === 3 ? '0.000' : i === 5 ? '0.00' : i === 6 || i === 7 ? '0.0' : '#,##0']);
 
       const chartData = sheet.getRange(rangeAddress(TABLE_HEADER_ROW, SUMMARY_COLUMN, 13, 2));
       const chart = sheet.charts.add('ColumnClustered', chartData, 'Columns');

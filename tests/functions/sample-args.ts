@@ -56,7 +56,7 @@ export function sampleValue(p: ParamDescriptor, t = 0.5): FormulaArg {
     case 'choiceList':
       return [[(p.choices ?? [])[0]]];
     case 'numberList': {
-      const n = p.length?.exact ?? p.length?.min ?? 3;
+      const n = p.length?.exact ?? p.length?.oneOf?.[0] ?? p.length?.min ?? 3;
       const [lo, hi] = bounds(p);
       if (p.ascending) return [Array.from({ length: n }, (_, i) => roundFor(p, lo + ((i + 1) / (n + 1)) * (hi - lo)))];
       // Equal shares: valid for lists that must sum to 1 (radiant time factors) and for plain lists.

@@ -1,7 +1,7 @@
-/** Shared assertion: `fn` throws the one typed error, naming `argument` first in its message. */
+/** Shared assertion: `fn` throws the one typed error, naming `argument` first in its message (and matching `message` when given). */
 import { SunpaneError } from '../../src/core/common/errors';
 
-export function expectArgumentError(fn: () => unknown, argument: string): void {
+export function expectArgumentError(fn: () => unknown, argument: string, message?: RegExp): void {
   let caught: unknown;
   try {
     fn();
@@ -11,4 +11,5 @@ export function expectArgumentError(fn: () => unknown, argument: string): void {
   expect(caught).toBeInstanceOf(SunpaneError);
   expect((caught as SunpaneError).argument).toBe(argument);
   expect((caught as SunpaneError).message.startsWith(argument)).toBe(true);
+  if (message) expect((caught as SunpaneError).message).toMatch(message);
 }

@@ -82,6 +82,18 @@ export const MIN_VALID_SHARE = 0.4;
 
 export type FuzzPart = 'sun' | 'shading' | 'skyGlazing' | 'gainHour' | 'gainDays';
 
+/** Columns of the design-day peaks: 3, the gain's parts with `parts`, the load with a room, its parts with both. */
+function peakColumns(a: Args, room: boolean): number {
+  const load = a.factors !== undefined || room;
+  return 3 + (a.parts === true ? 3 : 0) + (load ? 2 : 0) + (load && a.parts === true ? 3 : 0);
+}
+
+/** Whether a window range names a room (its construction or its own series). */
+function windowHasRoom(w: unknown): boolean {
+  const values = (w as { values?: ReadonlyMap<string, unknown> } | undefined)?.values;
+  return values !== undefined && (values.has('roomConstruction') || values.has('solarRadiantTimeSeries') || values.has('nonSolarRadiantTimeSeries'));
+}
+
 /** The part of the fuzz a function belongs to; every registered function is in exactly one. */
 export function partOf(fn: FunctionDescriptor): FuzzPart {
   switch (fn.category) {
@@ -133,6 +145,8 @@ function fieldValue(f: GlossaryEntry): fc.Arbitrary<number | string> {
   if (cell === 'choice') return fc.constantFrom(...(f.choices ?? []), ...Object.keys(f.choiceAliases ?? {}));
   if (cell === 'monthly') return fc.oneof(numberArb({ ...f, kind: 'number' }), fc.array(numberArb({ ...f, kind: 'number' }), { minLength: 12, maxLength: 12 }).map((xs) => xs.join(' ')));
   if (cell === 'dateTime') return fc.double({ min: MIN_SERIAL, max: MAX_SERIAL_EXCLUSIVE - 1, noNaN: true });
+  // a room's radiant time series: its exact count, 24 factors summing to 1
+  if (cell === 'list' && f.length?.exact === 24) return factorsArb().map((xs) => xs.join(' '));
   if (cell === 'list') return fc.array(numberArb({ ...f, kind: 'number' }), { minLength: 1, maxLength: 12 }).map((xs) => xs.join(' '));
   return numberArb(f);
 }
@@ -345,6 +359,11 @@ function paramArb(fn: FunctionDescriptor, p: ParamDescriptor): fc.Arbitrary<RawA
         arb = factorsArb().map((xs) => xs.map((x) => [x]));
         break;
       }
+      if (p.length?.oneOf !== undefined) {
+        // only these counts (one value for the year, or twelve by month)
+        arb = fc.constantFrom(...p.length.oneOf).chain((n) => fc.array(numberArb({ ...p, kind: 'number' }), { minLength: n, maxLength: n })).map((xs) => [xs]);
+        break;
+      }
       const minLen = p.length?.exact ?? p.length?.min ?? 1;
       const maxLen = p.length?.exact ?? Math.min(p.length?.max ?? 48, 48);
       arb = fc
@@ -370,7 +389,7 @@ export function validCaseArb(fn: FunctionDescriptor): fc.Arbitrary<ValidCase> {
   const place = pooled && windowK < 0 ? fc.constantFrom(...SITE_POOL) : fc.constant(undefined);
   const table = names.includes('shgcAngles') && names.includes('shgcValues') ? fc.option(shgcTableArb(), { nil: undefined, freq: 12 }) : fc.constant(undefined);
   // positional arguments that go together: both of a pair or neither; devices need a vertical window
-  const pairs = [['dni', 'dhi'], ['tauB', 'tauD']].filter(([x, y]) => names.includes(x) && names.includes(y) && isOptional(fn.params[names.indexOf(x)]) && fn.params[names.indexOf(x)].kind === 'number');
+  const pairs = [['dni', 'dhi'], ['tauB', 'tauD']].filter(([x, y]) => names.includes(x) && names.includes(y) && isOptional(fn.params[names.indexOf(x)]) && (fn.params[names.indexOf(x)].kind === 'number' || fn.params[names.indexOf(x)].length?.oneOf !== undefined));
   const together = fc.tuple(...pairs.map(() => fc.oneof({ weight: 6, arbitrary: fc.constant(true) }, { weight: 1, arbitrary: fc.constant(false) })));
   const tilt = windowK < 0 && names.includes('surfaceTilt') && names.includes('overhangProjection') ? fc.oneof({ weight: 9, arbitrary: fc.constant(90) }, { weight: 1, arbitrary: numberArb(GLOSSARY.surfaceTilt) }) : fc.constant(undefined);
   const yearSeries = names.includes('dni') && fn.params[names.indexOf('dni')].kind === 'numberList' ? fc.constantFrom<'clear' | 'series' | 'short'>('clear', 'clear', 'clear', 'clear', 'clear', 'clear', 'series', 'series', 'series', 'short') : fc.constant(undefined);
@@ -554,9 +573,9 @@ const SPILL_SHAPE: Record<string, (a: Args, raw: readonly RawArg[]) => [rows: nu
   SUNLITMASK: (a) => [a.headers ? 13 : 12, a.headers ? 25 : 24],
   SOLARGAINSTEPS: () => ['steps', 5],
   GAINSTEPS: () => ['steps', 5],
-  SOLARGAINPEAKS: (a) => [a.headers ? 13 : 12, a.factors ? 5 : 3],
-  PEAKGAINS: (a) => [a.headers ? 13 : 12, a.factors ? 5 : 3],
-  COOLINGLOAD: () => [24, 1],
+  SOLARGAINPEAKS: (a) => [a.headers ? 13 : 12, peakColumns(a, windowHasRoom(a.window))],
+  PEAKGAINS: (a) => [a.headers ? 13 : 12, peakColumns(a, false)],
+  COOLINGLOAD: (a) => [24, a.showGain === true ? 2 : 1],
   SOLARGAINYEAR: (a) => [hoursInYear(Number((a.window as { values: ReadonlyMap<string, unknown> }).values.get('year'))) + (a.headers ? 1 : 0), (a.quantities as string[]).length],
   WINDOWYEAR: (a) => [hoursInYear(a.year as number) + (a.headers ? 1 : 0), (a.quantity as string[]).length],
 };
@@ -745,7 +764,9 @@ const PHYSICS: Record<string, Physics> = {
     // the radiant time series keeps the day's total
     const gains = a.gains as number[];
     const sumG = gains.reduce((s, x) => s + x, 0);
-    const sumQ = out.reduce((s, r) => s + (r[0] as number), 0);
+    const load = a.showGain === true ? 1 : 0; // with showGain the gain comes first, as given
+    if (load === 1) must(out.every((r, i) => r[0] === gains[i]), 'COOLINGLOAD: the gain column is not the gains given');
+    const sumQ = out.reduce((s, r) => s + (r[load] as number), 0);
     must(Math.abs(sumG - sumQ) <= 1e-6 * Math.max(1, ...gains.map(Math.abs)) * 24, `cooling load total ${sumQ} ≠ gain total ${sumG}`);
   },
   WINDOWGAIN: (fn, a, raw, out, c) => oneHourGain(fn, a, raw, out, c, false),
@@ -863,6 +884,15 @@ function hasConduction(a: Args): boolean {
 
 const YEAR_BOUNDS: Record<string, [number, number]> = {
   gain: [0, Infinity],
+  gainBeam: [0, Infinity],
+  gainDiffuse: [0, Infinity],
+  // conduction and the loads it enters go below 0 when it is colder outside than in
+  conduction: [-Infinity, Infinity],
+  load: [-Infinity, Infinity],
+  loadBeam: [0, Infinity],
+  loadDiffuse: [0, Infinity],
+  loadConduction: [-Infinity, Infinity],
+  clockStamp: [MIN_SERIAL, MAX_SERIAL_EXCLUSIVE],
   radiant: [0, Infinity],
   convective: [0, Infinity],
   beam: [0, Infinity],

@@ -12,6 +12,8 @@ export class SunpaneError extends Error {
   readonly value: unknown;
   /** The allowed values in words, e.g. `from -90 to 90 °`. */
   readonly allowed: string;
+  /** What was found, in words (e.g. `they sum to 1.1`), when the message gives it. */
+  readonly detail?: string;
 
   constructor(argument: string, value: unknown, allowed: string, detail?: string) {
     super(`${argument} = ${describeValue(value)} is not allowed: ${requiredWords(allowed)}${detail ? ` (${detail})` : ''}`);
@@ -19,6 +21,7 @@ export class SunpaneError extends Error {
     this.argument = argument;
     this.value = value;
     this.allowed = allowed;
+    if (detail !== undefined) this.detail = detail;
   }
 }
 

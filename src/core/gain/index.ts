@@ -10,7 +10,7 @@ export { type AnnualSummary, summarizeAnnual, summarizeWindowYear, type WindowYe
 export { type SharedYear, SharedYears, sharedYearKey } from './sharedYear';
 export { type DesignDayGainMonth, type DesignDayGainOptions, designDayGains, peakOfDay } from './designDay';
 export { gainSteps } from './gainSteps';
-export { type DiffuseShading, type Weather, type WindowSpec } from './window';
+export { type DiffuseShading, type Weather, type WindowRoom, type WindowSpec } from './window';
 export { type DesignTemperatures } from './window';
 export { DAILY_RANGE_FRACTIONS, DAILY_RANGE_MAX, designDayDryBulb, DRY_BULB_MAX, DRY_BULB_MIN } from './outdoorTemperature';
 export { type WindowGainHour, windowGainAt } from './windowGain';

@@ -82,6 +82,20 @@ export interface WindowSpec {
    * their hour, sun at mid-hour) or `instant` (rows stamped at the top of the hour, sun at the stamp).
    */
   timeConvention?: TimeConvention;
+  /**
+   * The room behind the window, for the cooling load by the radiant time series: a construction
+   * whose illustrative series Sunpane ships (`light`, `medium`, `heavy`), or the room's own solar
+   * and non-solar series (24 factors each, summing to 1). Checked and resolved by the load folder
+   * (src/core/load/room.ts); absent: gains only.
+   */
+  room?: WindowRoom;
+}
+
+/** The room of a window ({@link WindowSpec.room}): a construction, or both series. */
+export interface WindowRoom {
+  construction?: string;
+  solar?: number[];
+  nonSolar?: number[];
 }
 
 /** The two treatments of diffuse light behind shading devices ({@link WindowSpec.diffuseShading}). */

@@ -5,6 +5,7 @@
  */
 import { type DesignDayGainMonth, type DesignDayGainOptions, designDayGains, peakOfDay, type WindowSpec } from '../gain';
 import { requireRadiantTimeFactors } from './rts';
+import { windowRoomSeries } from './room';
 import { type RoomSeries, windowCoolingLoad } from './windowLoad';
 
 /** Options of {@link designDayPeaks}. */
@@ -14,7 +15,7 @@ export interface DesignDayOptions extends DesignDayGainOptions {
    * the cooling load is worked out too.
    */
   factors?: ArrayLike<number>;
-  /** The room's solar and non-solar series (instead of `factors`). */
+  /** The room's solar and non-solar series (instead of `factors`); neither given: the window's own `room`, if any. */
   room?: RoomSeries;
 }
 
@@ -22,6 +23,10 @@ export interface DesignDayOptions extends DesignDayGainOptions {
 export interface DesignDayMonth extends DesignDayGainMonth {
   /** Cooling load of each hour by the radiant time series [W], when factors were given. */
   coolingLoad?: number[];
+  /** The cooling load of each hour by part [W] (transmitted beam, diffuse, conduction), when factors were given. */
+  coolingLoadBeam?: number[];
+  coolingLoadDiffuse?: number[];
+  coolingLoadConduction?: number[];
   /** Hour of the largest cooling load, when factors were given: hour ending 1…24, or 0…23 for the time convention `instant` (as `peakHour`). */
   peakLoadHour?: number;
   /** The largest cooling load [W], when factors were given. */
@@ -43,14 +48,15 @@ export interface DesignDayMonth extends DesignDayGainMonth {
  */
 export function designDayPeaks(spec: WindowSpec, options: DesignDayOptions = {}): DesignDayMonth[] {
   const factors = options.factors !== undefined ? requireRadiantTimeFactors(options.factors) : undefined;
-  const room: RoomSeries | undefined = options.room ?? (factors ? { solar: factors, nonSolar: factors } : undefined);
+  const room: RoomSeries | undefined = options.room ?? (factors ? { solar: factors, nonSolar: factors } : windowRoomSeries(spec));
   const { months, window } = designDayGains(spec, options);
   if (!room) return months;
   const first = window.convention === 'hourEnding' ? 1 : 0;
   const fractions = { beam: window.radiantFraction, diffuse: window.radiantFractionDiffuse, conduction: window.radiantFractionConduction };
   return months.map((m): DesignDayMonth => {
-    const load = Array.from(windowCoolingLoad({ beam: m.hourlyBeam, diffuse: m.hourlyDiffuse, conduction: m.hourlyConduction }, room, fractions, window.interiorShade).total);
+    const parts = windowCoolingLoad({ beam: m.hourlyBeam, diffuse: m.hourlyDiffuse, conduction: m.hourlyConduction }, room, fractions, window.interiorShade);
+    const load = Array.from(parts.total);
     const lp = peakOfDay(load);
-    return { ...m, coolingLoad: load, peakLoadHour: lp.index + first, peakLoad: lp.value };
+    return { ...m, coolingLoad: load, coolingLoadBeam: Array.from(parts.beam), coolingLoadDiffuse: Array.from(parts.diffuse), coolingLoadConduction: Array.from(parts.conduction), peakLoadHour: lp.index + first, peakLoad: lp.value };
   });
 }

@@ -8,5 +8,6 @@
  */
 export { designDayPeaks, type DesignDayMonth, type DesignDayOptions } from './designDay';
 export { coolingLoad, requireRadiantTimeFactors } from './rts';
+export { annualLoadParts, type LoadPeak, loadPeak, windowRoomSeries } from './room';
 export { type Construction, CONSTRUCTIONS, firstOrderRadiantTimeSeries, ILLUSTRATIVE_ROOM_MODEL, ILLUSTRATIVE_SOURCE, illustrativeRadiantTimeSeries } from './rtsSeries';
 export { annualCoolingLoad, type GainByPart, type RadiantFractions, requireRoomSeries, type RoomSeries, windowCoolingLoad, type WindowLoad } from './windowLoad';
