@@ -20,4 +20,6 @@ module.exports = {
   testEnvironment: path.join(__dirname, 'tests/mutation/bail-environment.js'),
   testSequencer: path.join(__dirname, 'tests/mutation/fast-first-sequencer.js'),
   reporters: ['default'],
+  // One process per mutant run, as before the normal configuration took both cores.
+  maxWorkers: 1,
 };
