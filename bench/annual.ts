@@ -16,10 +16,7 @@ import { ashraeClearSky } from '../src/core/sky/clearSky';
 import { annualSunPath } from '../src/core/sun/sunPath';
 import { serialToUtcMs } from '../src/core/time/calendar';
 import type { WindowSpec } from '../src/core/gain/window';
-import { type BenchSection, consume, ratio, timeInterleaved } from './harness';
-
-// eslint-disable-next-line @typescript-eslint/no-require-imports
-const SunCalc = require('suncalc') as { getPosition(date: Date, lat: number, lng: number): { altitude: number; azimuth: number } };
+import { type BenchSection, consume, ratio, timeInterleaved, suncalcJob } from './harness';
 
 const YEAR = 2026;
 const SITE = { latitude: 40, longitude: -105, utcOffset: -7, elevation: 1600 };
@@ -73,15 +70,7 @@ export function annualBench(): BenchSection {
       operations: hours,
       work: () => consume(annualOfPrepared(prepareWindow(spec)).gain[4000]),
     },
-    {
-      label: `suncalc 2.0.2 getPosition (${hours} instants)`,
-      operations: hours,
-      work: () => {
-        let acc = 0;
-        for (const d of dates) acc += SunCalc.getPosition(d, SITE.latitude, SITE.longitude).altitude;
-        consume(acc);
-      },
-    },
+    suncalcJob(dates, SITE),
   ]);
   return {
     title: 'Annual window series (full hourly gain of one shaded window) vs bare sun positions',

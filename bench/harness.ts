@@ -76,3 +76,22 @@ export function timeInterleaved(jobs: readonly Job[], repeats = 101, warmup = 11
 export function ratio(ours: Timing, theirs: Timing): number {
   return Number((ours.medianMs / theirs.medianMs).toPrecision(3));
 }
+
+// eslint-disable-next-line @typescript-eslint/no-require-imports
+const SunCalc = require('suncalc') as { getPosition(date: Date, lat: number, lng: number): { altitude: number } };
+
+/**
+ * The peer job most ratios divide by: suncalc 2.0.2's bare `getPosition` at each of `dates` for a
+ * site, the altitudes summed so that none of the work can be left out.
+ */
+export function suncalcJob(dates: readonly Date[], site: { latitude: number; longitude: number }): Job {
+  return {
+    label: `suncalc 2.0.2 getPosition (${dates.length} instants)`,
+    operations: dates.length,
+    work: () => {
+      let acc = 0;
+      for (const d of dates) acc += SunCalc.getPosition(d, site.latitude, site.longitude).altitude;
+      consume(acc);
+    },
+  };
+}

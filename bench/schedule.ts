@@ -9,10 +9,7 @@
  */
 import { type SharedYears as SharedYearsType, type WindowSpec, SharedYears, summarizeWindowYear } from '../src/core/gain';
 import type { Shading } from '../src/core/shading';
-import { type BenchSection, consume, timeInterleaved } from './harness';
-
-// eslint-disable-next-line @typescript-eslint/no-require-imports
-const SunCalc = require('suncalc') as { getPosition(date: Date, lat: number, lng: number): { altitude: number } };
+import { type BenchSection, consume, timeInterleaved, suncalcJob } from './harness';
 
 const YEAR = 2026;
 /** An example location (the demo's temperate northern site), standard time UTC+1. */
@@ -95,15 +92,7 @@ export function scheduleBench(): BenchSection {
       operations: hours,
       work: () => consume(runBenchSchedule(windows.slice(0, 1))),
     },
-    {
-      label: `suncalc 2.0.2 getPosition (${hours} instants)`,
-      operations: hours,
-      work: () => {
-        let acc = 0;
-        for (const d of dates) acc += SunCalc.getPosition(d, SITE.latitude, SITE.longitude).altitude;
-        consume(acc);
-      },
-    },
+    suncalcJob(dates, SITE),
   ]);
   // One window-hour of the 48-window schedule: its own work, plus its share of the site's year.
   const perHour = perWindow.medianMs / perWindow.operations + Math.max(0, shared.medianMs - perWindow.medianMs / WINDOWS_PER_ROUND) / (windows.length * hours);

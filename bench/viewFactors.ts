@@ -8,10 +8,7 @@
  */
 import { viewFactorsUnchecked } from '../src/core/shading/viewFactors';
 import type { Shading } from '../src/core/shading/types';
-import { type BenchSection, consume, ratio, timeInterleaved } from './harness';
-
-// eslint-disable-next-line @typescript-eslint/no-require-imports
-const SunCalc = require('suncalc') as { getPosition(date: Date, lat: number, lng: number): { altitude: number } };
+import { type BenchSection, consume, ratio, timeInterleaved, suncalcJob } from './harness';
 
 const SITE = { latitude: 40, longitude: -105 };
 const WINDOW = { width: 2, height: 1.5 };
@@ -33,15 +30,7 @@ export function viewFactorsBench(): BenchSection {
       operations: 1,
       work: () => consume(viewFactorsUnchecked(WINDOW, SHADING, SURFACE_AZIMUTH).sky),
     },
-    {
-      label: 'suncalc 2.0.2 getPosition (8760 instants)',
-      operations: 8760,
-      work: () => {
-        let acc = 0;
-        for (const d of dates) acc += SunCalc.getPosition(d, SITE.latitude, SITE.longitude).altitude;
-        consume(acc);
-      },
-    },
+    suncalcJob(dates, SITE),
   ]);
   return {
     title: "View factors of one shaded window (once per window) vs a year's bare sun positions",
