@@ -20,6 +20,7 @@ import { csvLine, formatFixed } from './csv';
 import type { AnnualSummary, WindowSpec } from '../core/gain';
 import type { LoadPeak } from '../core/load';
 import { COLOURS, NUMBER_FORMATS, address, serialToCellDate } from './workbook';
+import { LOAD_WORDS } from '../registry/glossary';
 
 /** One window's results for the summary table. */
 export interface WindowResult {
@@ -41,7 +42,7 @@ const NO_EXTRAS: SummaryExtras = { conduction: false, load: false };
 
 /** Columns of the summary that come only when some window has a U-value, or a room. */
 export const CONDUCTION_HEADERS = ['Conduction, year (kWh)', 'Peak conduction (W)'] as const;
-export const LOAD_HEADERS = ['Peak cooling load (W)', 'Peak load hour ending'] as const;
+export const LOAD_HEADERS = [LOAD_WORDS.peakLoad, LOAD_WORDS.peakLoadHourEnding] as const;
 
 /** The extra columns a schedule's windows call for (known from the windows before any is worked out). */
 export function summaryExtrasOf(specs: readonly WindowSpec[]): SummaryExtras {

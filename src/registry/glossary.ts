@@ -486,6 +486,26 @@ export const GLOSSARY = {
   }),
 } as const satisfies Record<string, GlossaryEntry>;
 
+/**
+ * The words tables show for the cooling-load figures worked out from a window's hourly year (the
+ * pane's year, schedule and options sheets, the command line's workbooks and CSV): one place for
+ * each, so that a figure has one name everywhere. Units in parentheses, as in the hourly columns.
+ */
+export const LOAD_WORDS = {
+  /** The largest hourly cooling load of the year (or of a month) [W]. */
+  peakLoad: 'Peak cooling load (W)',
+  /** When that load falls, for rows stamped at the hour's end. */
+  peakLoadAtHourEnding: 'Peak load at (hour ending)',
+  /** When that load falls, for rows stamped at an instant. */
+  peakLoadAtInstant: 'Peak load at (instant)',
+  /** The command line schedule's words for the hour ending of the peak load (beside its "Peak hour ending"). */
+  peakLoadHourEnding: 'Peak load hour ending',
+  /** How much an option lowers the peak cooling load against the window with no outside shading [%]. */
+  peakLoadCut: 'Peak load cut vs no shading (%)',
+  /** Said where a cooling-load figure would stand for a window that names no room. */
+  noRoom: 'no room given — gains only',
+} as const;
+
 /** The glossary's window fields, in glossary order. */
 export const WINDOW_FIELDS: readonly GlossaryEntry[] = Object.values(GLOSSARY).filter((g: GlossaryEntry) => g.window !== undefined);
 

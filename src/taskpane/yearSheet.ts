@@ -15,6 +15,7 @@ import { escapeFormulaText } from '../io/textCells';
 import { HOURLY_COLUMNS, type HourlyData, type HourlyExtras, type HourlyKey, extrasOf, hourlyColumnsFor } from '../outputs/hourlyColumns';
 import { type ColumnRef, monthHourMeanFormula, monthlyGainFormula, tableColumnRef, yearFigureFormulas } from '../outputs/hourlyFormulas';
 import { PALETTE, hexColour } from '../outputs/palette';
+import { LOAD_WORDS } from '../registry/glossary';
 import { DEFAULT_BLOCK_ROWS, cellAddress, columnLetters, rangeAddress, roundForSheet, rowBlocks } from './blocks';
 import { type RunBatch, RunCancelled, writingSheet } from './resultSheets';
 import { tableNamesIn, uniqueTableName } from './tableNames';
@@ -134,8 +135,8 @@ export function keyFigureRows(ref: ColumnRef, fig: Pick<YearFigures, 'glassArea'
   const f = yearFigureFormulas(ref);
   const load = withLoad
     ? [
-        ['Peak cooling load (W)', `=MAX(${ref('load')})`],
-        [ref.convention === 'instant' ? 'Peak load at (instant)' : 'Peak load at (hour ending)', `=INDEX(${ref('stampSerial')},MATCH(MAX(${ref('load')}),${ref('load')},0))`],
+        [LOAD_WORDS.peakLoad, `=MAX(${ref('load')})`],
+        [ref.convention === 'instant' ? LOAD_WORDS.peakLoadAtInstant : LOAD_WORDS.peakLoadAtHourEnding, `=INDEX(${ref('stampSerial')},MATCH(MAX(${ref('load')}),${ref('load')},0))`],
       ]
     : [];
   return [
