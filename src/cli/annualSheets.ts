@@ -8,7 +8,8 @@
 import type { AnnualSeries, AnnualSummary } from '../core/gain';
 import { formatSerialIso } from '../core/time';
 import { type HourlyData, type HourlyKey, extrasOf, hourlyColumn, hourlyColumnsFor, hourlyData } from '../outputs/hourlyColumns';
-import { monthHourMeanFormula, monthlyGainFormula, monthlySumFormula, tableColumnRef } from '../outputs/hourlyFormulas';
+import { monthHourMeanFormula, monthlyGainFormula, monthlyPeakFormula, monthlyPeakStampFormula, monthlySumFormula, tableColumnRef } from '../outputs/hourlyFormulas';
+import { LOAD_WORDS } from '../registry/glossary';
 import { PALETTE } from '../outputs/palette';
 import { csvLine, formatFixed } from './csv';
 import { type SheetChart, cellRef, columnRef } from './xlsxCharts';
@@ -97,6 +98,11 @@ export interface MonthlyCells {
   months: { cell: string; expected: number }[];
   /** The month × hour block of mean gain [W], each a SUMPRODUCT over the hourly table. */
   monthHour: { cell: string; expected: number }[];
+  /**
+   * With a room: each month's peak cooling load [W] and its stamp (formulas over the hourly table),
+   * and the year's (MAX of the months, and the stamp of that month's peak).
+   */
+  load?: { months: { cell: string; expected: number; stampCell: string; expectedStamp: number | undefined }[]; year: { cell: string; expected: number; stampCell: string } };
   /** The annual profile: a column chart of the months' gain, under the summary. */
   chart: SheetChart;
 }
@@ -121,25 +127,62 @@ export function monthHourMeans(series: AnnualSeries): number[][] {
 }
 
 /**
+ * Each month's largest hourly cooling load [W] and the stamp of its first hour, over the hours with
+ * weather, months as the monthly formulas count them; 0 and no stamp for a month without load above 0.
+ */
+export function monthlyLoadPeaks(series: AnnualSeries, load: ArrayLike<number>): { peakW: number; stamp: number | undefined }[] {
+  const out = Array.from({ length: 12 }, () => ({ peakW: 0, stamp: undefined as number | undefined }));
+  const inside = series.timeConvention === 'instant' ? 1 / 48 : -1 / 48; // a point inside the row's hour
+  for (let i = 0; i < series.hours; i++) {
+    if (series.missing[i] === 1) continue;
+    const m = new Date(Math.round((series.stampSerial[i] + inside - 25_569) * 86_400_000)).getUTCMonth();
+    if (load[i] > out[m].peakW) out[m] = { peakW: load[i], stamp: series.stampSerial[i] };
+  }
+  return out;
+}
+
+/**
  * Fills a sheet with the monthly summary of one window: under the title and the caution, a table
  * of month, gain and missing hours — with the hourly sheet given, each a SUMIFS formula over the
  * hourly table (the pane's formulas, src/outputs/hourlyFormulas.ts) — then the annual total (SUM),
  * the largest month (MAX), the peak hour (MAX over the hourly gain column) and, beside them, the
- * month × hour block of mean gain with our colour scale. Every formula carries its cached result.
+ * month × hour block of mean gain with our colour scale. With the hourly cooling load (a window
+ * with a room), the table also has each month's peak cooling load and its hour, and the year row
+ * the year's. Every formula carries its cached result.
+ *
+ * Why the peak and not the month's load energy: by the radiant time series the load of a repeating
+ * year sums to its gain (every series sums to 1), so a month's load energy differs from its gain only
+ * by the few hours of radiant tail carried across the month's ends; the peak is the figure that
+ * sizes plant, and it differs from the peak gain in size and hour.
  */
 export function addMonthlySheet(
   ws: ExcelJS.Worksheet,
   tableName: string,
   summary: AnnualSummary,
-  hourly?: { sheet: string; placement: TablePlacement; series: AnnualSeries },
+  hourly?: { sheet: string; placement: TablePlacement; series: AnnualSeries; load?: ArrayLike<number> },
   title = 'Solar gain by month',
 ): MonthlyCells {
   const sheet = ws.name;
   const top = addSheetHeading(ws, title);
-  const rows = MONTHS.map((m, k) => [m, summary.monthlyKWh[k], summary.monthlyMissingHours[k]]);
+  const loadPeaks = hourly?.load ? monthlyLoadPeaks(hourly.series, hourly.load) : undefined;
+  const instant = hourly?.series.timeConvention === 'instant';
+  const loadHeader = LOAD_WORDS.peakLoad;
+  const loadAtHeader = instant ? LOAD_WORDS.peakLoadAtInstant : LOAD_WORDS.peakLoadAtHourEnding;
+  const rows = MONTHS.map((m, k) => [m, summary.monthlyKWh[k], summary.monthlyMissingHours[k], ...(loadPeaks ? [loadPeaks[k].peakW, loadPeaks[k].stamp === undefined ? null : serialToCellDate(loadPeaks[k].stamp!)] : [])]);
   const gainHeader = 'Solar gain (kWh)';
   const missingHeader = 'Weather missing (h)';
-  const t = addDataTable(ws, tableName, { row: top, column: 1 }, [{ header: 'Month', width: 14 }, { header: gainHeader, numFmt: NUMBER_FORMATS.kwh, width: 16 }, { header: missingHeader, numFmt: NUMBER_FORMATS.integer, width: 16 }], rows);
+  const t = addDataTable(
+    ws,
+    tableName,
+    { row: top, column: 1 },
+    [
+      { header: 'Month', width: 14 },
+      { header: gainHeader, numFmt: NUMBER_FORMATS.kwh, width: 16 },
+      { header: missingHeader, numFmt: NUMBER_FORMATS.integer, width: 16 },
+      ...(loadPeaks ? [{ header: loadHeader, numFmt: NUMBER_FORMATS.watts, width: 16 }, { header: loadAtHeader, numFmt: NUMBER_FORMATS.dateTime, width: 18 }] : []),
+    ],
+    rows,
+  );
   const chartTop = t.lastRow + 6;
   const chart: SheetChart = {
     sheet,
@@ -164,12 +207,20 @@ export function addMonthlySheet(
   const cells: MonthlyCells = { annualKWh: { cell: '', expected: 0 }, maxMonthKWh: { cell: '', expected: 0 }, months: [], monthHour: [], chart };
   const ref = hourly ? tableColumnRef(hourly.placement.name, hourly.series.timeConvention) : undefined;
   if (hourly && ref) {
+    const load: NonNullable<MonthlyCells['load']>['months'] = [];
     MONTHS.forEach((_, k) => {
       const row = top + 1 + k;
       setFormula(ws, address(row, 2), monthlyGainFormula(ref, hourly.series.year, k + 1), summary.monthlyKWh[k], NUMBER_FORMATS.kwh);
       setFormula(ws, address(row, 3), monthlySumFormula(ref, 'missing', hourly.series.year, k + 1), summary.monthlyMissingHours[k], NUMBER_FORMATS.integer);
       cells.months.push({ cell: `${sheet}!${address(row, 2)}`, expected: summary.monthlyKWh[k] });
+      if (loadPeaks) {
+        const p = loadPeaks[k];
+        setFormula(ws, address(row, 4), monthlyPeakFormula(ref, 'load', hourly.series.year, k + 1), p.peakW, NUMBER_FORMATS.watts);
+        setFormula(ws, address(row, 5), monthlyPeakStampFormula(ref, 'load', hourly.series.year, k + 1, address(row, 4)), p.stamp === undefined ? '' : p.stamp, NUMBER_FORMATS.dateTime);
+        load.push({ cell: `${sheet}!${address(row, 4)}`, expected: p.peakW, stampCell: `${sheet}!${address(row, 5)}`, expectedStamp: p.stamp });
+      }
     });
+    if (loadPeaks) cells.load = { months: load, year: { cell: '', expected: 0, stampCell: '' } };
   }
   freezeAt(ws, top + 1);
   const labelRow = t.lastRow + 2;
@@ -178,6 +229,14 @@ export function addMonthlySheet(
   setLabel(ws, address(labelRow, 1), 'Year');
   setFormula(ws, address(labelRow, 2), `SUM(${gainRange})`, summary.annualKWh, NUMBER_FORMATS.kwh);
   setFormula(ws, address(labelRow, 3), `SUM(${t.bodyRange(missingHeader)})`, summary.missingHours, NUMBER_FORMATS.integer);
+  if (loadPeaks && cells.load) {
+    // The year's peak: the largest month's (the first such month on ties, as the core's year peak).
+    const top1 = loadPeaks.reduce((best, p, k) => (p.peakW > loadPeaks[best].peakW ? k : best), 0);
+    const peaks = t.bodyRange(loadHeader);
+    setFormula(ws, address(labelRow, 4), `MAX(${peaks})`, loadPeaks[top1].peakW, NUMBER_FORMATS.watts);
+    setFormula(ws, address(labelRow, 5), `INDEX(${t.bodyRange(loadAtHeader)},MATCH(${address(labelRow, 4)},${peaks},0))`, loadPeaks[top1].stamp ?? '', NUMBER_FORMATS.dateTime);
+    cells.load.year = { cell: `${sheet}!${address(labelRow, 4)}`, expected: loadPeaks[top1].peakW, stampCell: `${sheet}!${address(labelRow, 5)}` };
+  }
   setLabel(ws, address(labelRow + 1, 1), 'Largest month');
   setFormula(ws, address(labelRow + 1, 2), `MAX(${gainRange})`, maxMonth, NUMBER_FORMATS.kwh);
   cells.annualKWh = { cell: `${sheet}!${address(labelRow, 2)}`, expected: summary.annualKWh };
@@ -187,9 +246,8 @@ export function addMonthlySheet(
     setFormula(ws, address(labelRow + 2, 2), `MAX(${sheetRef(hourly.sheet)}!${hourly.placement.bodyRange(GAIN_HEADER)})`, summary.peakW, NUMBER_FORMATS.watts);
     cells.peakW = { cell: `${sheet}!${address(labelRow + 2, 2)}`, expected: summary.peakW };
 
-    // The month × hour block, as in the pane.
-    const left = 5;
-    const instant = hourly.series.timeConvention === 'instant';
+    // The month × hour block, as in the pane (right of the table, past the load columns when there are any).
+    const left = loadPeaks ? 7 : 5;
     ws.getCell(top - 1, left).value = instant ? 'Mean solar gain (W) by month and hour (instant)' : 'Mean solar gain (W) by month and hour ending';
     ws.getCell(top - 1, left).font = { bold: true };
     ws.getCell(top, left).value = 'Month';

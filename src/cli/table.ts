@@ -50,7 +50,7 @@ used), 2 wrong usage.`;
 /** What each sheet of the `table` workbook holds. */
 export const TABLE_CONTENTS = [
   { sheet: 'Contents', holds: 'This list.' },
-  { sheet: 'Monthly', holds: 'Solar gain and missing weather hours by month, as formulas over the Hourly table; the year, the largest month and the peak hour; mean gain by month and hour ending (colour scale); a chart of the annual profile.' },
+  { sheet: 'Monthly', holds: 'Solar gain and missing weather hours by month, as formulas over the Hourly table; with a room, the peak cooling load of each month and its hour (formulas over the Hourly load column); the year, the largest month and the peak hour; mean gain by month and hour ending (colour scale); a chart of the annual profile.' },
   { sheet: 'Heat map', holds: 'Solar gain (W) of every hour of the year, one row per day, coloured from least to most.' },
   { sheet: 'Hourly', holds: 'The hourly year as a table: sun position, incidence and profile angles, sunlit fraction, irradiance, SHGC at incidence and solar gain (with a U-value the conduction gain, with a room the cooling load), hour-ending in local standard time.' },
 ] as const;
@@ -127,7 +127,7 @@ export async function tableCommand(argv: readonly string[], io: Output): Promise
     addHeatMapSheet(wb, 'Heat map', series, `${spec.name}: solar gain (W) by day and ${series.timeConvention === 'instant' ? 'hour (instant)' : 'hour ending'}, ${series.year}`);
     const placement = addHourlySheet(wb, hourlySheet, 'Hourly', series, () => bar.tick(), undefined, load);
     bar.finish();
-    const monthly = addMonthlySheet(monthlySheet, 'Monthly', summary, { sheet: hourlySheet, placement, series }, `${spec.name}: solar gain by month, ${series.year}`);
+    const monthly = addMonthlySheet(monthlySheet, 'Monthly', summary, { sheet: hourlySheet, placement, series, load }, `${spec.name}: solar gain by month, ${series.year}`);
     fillContentsSheet(contents, `Sunpane: ${spec.name}, ${series.year}`, [`From ${path.basename(windowFile)}${flags.has('weather') ? ` and ${path.basename(flags.get('weather') ?? '')}` : ' (clear sky)'}.`], TABLE_CONTENTS);
     await saveWorkbook(wb, out, force, [monthly.chart]);
   }

@@ -36,6 +36,34 @@ export function monthlySumFormula(ref: ColumnRef, key: HourlyKey, year: number, 
   return `SUMIFS(${ref(key)},${t},">"&DATE(${year},${month},1),${t},"<="&DATE(${year},${month + 1},1))`;
 }
 
+/** 1 for a row of month `month` (1…12) of `year`, 0 otherwise, as an array term (the months as {@link monthlySumFormula} counts them). */
+function monthMask(ref: ColumnRef, year: number, month: number): string {
+  const t = ref('stampSerial');
+  if (ref.convention === 'instant') return `(${t}>=DATE(${year},${month},1))*(${t}<DATE(${year},${month + 1},1))`;
+  return `(${t}>DATE(${year},${month},1))*(${t}<=DATE(${year},${month + 1},1))`;
+}
+
+/**
+ * The largest value of column `key` over the rows of month `month` (1…12) of `year` that have
+ * weather, and 0 when none is above 0 — as the core's year peak of the cooling load counts (hours
+ * without weather skipped, 0 for a year without load). SUMPRODUCT makes Excel and LibreOffice read
+ * the product as an array without an array formula (MAXIFS would need Excel 2019).
+ */
+export function monthlyPeakFormula(ref: ColumnRef, key: HourlyKey, year: number, month: number): string {
+  return `SUMPRODUCT(MAX(${monthMask(ref, year, month)}*(${ref('missing')}=0)*${ref(key)}))`;
+}
+
+/**
+ * The stamp of the first row of month `month` whose column `key` equals the month's peak in
+ * `peakCell` (the row the core's peak names on ties), blank when the peak is 0. The earliest stamp
+ * is found as a MAX of (a date after the year − stamp), so that the rows outside the month, at 0,
+ * never win.
+ */
+export function monthlyPeakStampFormula(ref: ColumnRef, key: HourlyKey, year: number, month: number, peakCell: string): string {
+  const after = `DATE(${year + 1},1,2)`;
+  return `IF(${peakCell}>0,${after}-SUMPRODUCT(MAX(${monthMask(ref, year, month)}*(${ref('missing')}=0)*(${ref(key)}=${peakCell})*(${after}-${ref('stampSerial')}))),"")`;
+}
+
 /** Solar gain of month `month` (1…12) of `year` [kWh]. */
 export function monthlyGainFormula(ref: ColumnRef, year: number, month: number): string {
   return `${monthlySumFormula(ref, 'gain', year, month)}/1000`;
