@@ -40,9 +40,11 @@ const OFFICE_JS = 'https://appsforoffice.microsoft.com/lib/1/hosted/office.js';
  * a remembered sheet: 228.1 -> 230.0 KB); 231 KB until the room behind a window (its checks, the
  * illustrative series reached from the window reader), the cooling load and conduction by part in
  * the year and peak functions, the table's and schedule's load columns and the pane's room box and
- * load column (230.0 -> 237.0 KB).
+ * load column (230.0 -> 237.0 KB); 238 KB until the pane's schedule and options comparison showed
+ * the cooling load (their load columns, the second bar chart, the sheet lines and on-screen words
+ * about the peak load or its absence: 237.0 -> 240.3 KB).
  */
-const BUDGET_BYTES = 238 * 1024;
+const BUDGET_BYTES = 241 * 1024;
 const DEV_PORT = 3000;
 
 /**
