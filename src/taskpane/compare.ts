@@ -11,6 +11,7 @@ import type { Shading } from '../core/shading';
 import type { WindowSpec } from '../core/gain';
 import { withoutPath } from './messages';
 import { inGlossaryWords } from '../registry/windowRange';
+import { LOAD_WORDS } from '../registry/glossary';
 import { readNumberText } from './spec';
 
 /** Most options compared at once (ten shading schemes and the unshaded window: eleven years worked out). */
@@ -119,28 +120,59 @@ export interface OptionFigures {
   beamCut: number;
   /** Share of the year's sky-diffuse and ground-reflected light it takes away, 0…1. */
   diffuseCut: number;
+  /** The year's largest cooling load [W] and its stamp, when the window has a room. */
+  peakLoadW?: number;
+  peakLoadStamp?: number;
 }
 
 /** Header of the comparison table (our own wording): the diffuse cut stands beside the beam cut. */
 export const COMPARE_HEADER = ['Shading option', 'Solar gain (kWh/yr)', 'Peak gain (W)', 'Cut vs no shading (%)', 'Beam cut by shading (%)', 'Diffuse cut by shading (%)', 'Shaded share, sun on the wall (0-1)'] as const;
 
+/** The cooling-load columns that follow when the window has a room (the glossary's words). */
+export const COMPARE_LOAD_HEADER = [LOAD_WORDS.peakLoad, LOAD_WORDS.peakLoadAtHourEnding, LOAD_WORDS.peakLoadCut] as const;
+
+/** The comparison's header: the cooling-load columns at the end when the window has a room. */
+export function compareHeader(withLoad = false): string[] {
+  return [...COMPARE_HEADER, ...(withLoad ? COMPARE_LOAD_HEADER : [])];
+}
+
+/** Index of the peak cooling load column in a comparison row with the load columns (for its chart). */
+export const PEAK_LOAD_COLUMN = COMPARE_HEADER.length;
+
 /**
  * The comparison rows: reference first. Cut = 1 − annual / annual of the unshaded window; beam and
  * diffuse cuts = the share of the year's beam and of its sky and ground light that the option's
- * shading (devices and skyline) takes away from the glass.
+ * shading (devices and skyline) takes away from the glass. With `withLoad` (the window has a room,
+ * so every option has one), the year's peak cooling load, its hour and the peak load cut
+ * = 1 − peak load / peak load of the unshaded window, in %.
  */
-export function comparisonRows(results: readonly { label: string; figures: OptionFigures }[]): (number | string)[][] {
+export function comparisonRows(results: readonly { label: string; figures: OptionFigures }[], withLoad = false): (number | string)[][] {
   const ref = results[0]?.figures.annualKWh ?? 0;
+  const refLoad = results[0]?.figures.peakLoadW ?? 0;
   const round = (x: number, d: number) => Math.round(x * 10 ** d) / 10 ** d;
-  return results.map((r) => [
-    r.label,
-    round(r.figures.annualKWh, 1),
-    round(r.figures.peakW, 1),
-    round(ref > 0 ? (1 - r.figures.annualKWh / ref) * 100 : 0, 1),
-    round(r.figures.beamCut * 100, 1),
-    round(r.figures.diffuseCut * 100, 1),
-    round(1 - r.figures.meanSunlitFraction, 3),
-  ]);
+  return results.map((r) => {
+    const f = r.figures;
+    const load = !withLoad
+      ? []
+      : f.peakLoadW === undefined
+        ? [LOAD_WORDS.noRoom, '', '']
+        : [round(f.peakLoadW, 1), f.peakLoadStamp === undefined ? '' : round(f.peakLoadStamp, 6), round(refLoad > 0 ? (1 - f.peakLoadW / refLoad) * 100 : 0, 1)];
+    return [
+      r.label,
+      round(f.annualKWh, 1),
+      round(f.peakW, 1),
+      round(ref > 0 ? (1 - f.annualKWh / ref) * 100 : 0, 1),
+      round(f.beamCut * 100, 1),
+      round(f.diffuseCut * 100, 1),
+      round(1 - f.meanSunlitFraction, 3),
+      ...load,
+    ];
+  });
 }
 
 export const COMPARE_FORMATS = ['@', '0.0', '0.0', '0.0', '0.0', '0.0', '0.000'];
+
+/** Number formats of a comparison row with or without the cooling-load columns. */
+export function compareFormats(withLoad = false): string[] {
+  return [...COMPARE_FORMATS, ...(withLoad ? ['0.0', 'yyyy-mm-dd hh:mm', '0.0'] : [])];
+}

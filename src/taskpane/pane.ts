@@ -6,7 +6,7 @@
 import { SunpaneError } from '../core/common';
 import { CAUTION } from '../outputs/caution';
 import type { WindowSpec } from '../core/gain';
-import { COMPARE_FORMATS, COMPARE_HEADER, MAX_OPTIONS, OPTION_FIELDS, OptionProblem, type ShadingOption, comparisonRows, optionSpecs } from './compare';
+import { MAX_OPTIONS, OPTION_FIELDS, OptionProblem, PEAK_LOAD_COLUMN, type ShadingOption, compareFormats, compareHeader, comparisonRows, optionSpecs } from './compare';
 import { makeReplaceDialog } from './dialog';
 import { byId, h } from './dom';
 import { type YearResult, runYear, validateSpec } from './engine';
@@ -15,7 +15,9 @@ import { inUserWords } from './messages';
 import { applyVisibility, fillForm, readForm, renderForm, showProblems } from './formView';
 import { PaneStore, type SettingsStore } from './persist';
 import { type AskReplace, type RunBatch, RunCancelled, WriteFailed, planSheet, sheetNamesOf, stillOurs } from './resultSheets';
-import { SCHEDULE_HELP, SUMMARY_FORMATS, SUMMARY_HEADER, readSchedule, summaryRow } from './schedule';
+import { SCHEDULE_HELP, readSchedule, summaryFormats, summaryHeader, summaryRow } from './schedule';
+import { LOAD_WORDS } from '../registry/glossary';
+import { compareSummaryText, roomText, scheduleLoadLine, scheduleSummaryText } from './loadText';
 import { readNamedTable, readSheetData, withCheckedWeather } from './sheetData';
 import { type SheetData, buildWindowSpec, findProblems, isClean } from './spec';
 import { drawSunPath } from './sunPathView';
@@ -297,7 +299,7 @@ export function createPane(doc: Document, host: PaneHost): void {
   const schedProblems = h(doc, 'ul', { id: 'schedule-problems', className: 'problems', role: 'alert' });
   sched.append(
     h(doc, 'p', { className: 'help', id: 'schedule-help' }, SCHEDULE_HELP),
-    h(doc, 'p', { className: 'help' }, 'Place, glass model, sky, weather and year come from the Window tab unless the row gives them.'),
+    h(doc, 'p', { className: 'help' }, 'Place, glass model, sky, weather, year and room come from the Window tab unless the row gives them. A window with a room gets its peak cooling load beside its gains.'),
     h(doc, 'div', { className: 'field' }, h(doc, 'label', { for: 'schedule-table' }, 'Excel table name'), tableInput),
     schedProblems,
   );
@@ -324,26 +326,28 @@ export function createPane(doc: Document, host: PaneHost): void {
     }
     setBusy(true, 'Working out the windows…');
     try {
-      const out: (number | string)[][] = [];
+      const figures: YearResult['figures'][] = [];
       for (const [i, r] of rows.entries()) {
         if (cancelRequested) throw new RunCancelled();
         setProgress(i, rows.length, `Window ${i + 1} of ${rows.length}: ${r.spec.name}`);
         await breathe();
-        out.push(summaryRow(r.spec, runYear(r.spec).figures));
+        figures.push(runYear(r.spec).figures);
       }
+      const withLoad = figures.some((f) => f.peakLoadW !== undefined);
+      const out = rows.map((r, i) => summaryRow(r.spec, figures[i], withLoad));
       const plan = await planFor('Schedule results');
       writingNow('the schedule results');
       const name = await writeSmallTableSheet(host.run, plan, {
         title: `Sunpane window schedule: ${rows.length} windows, year ${rows[0].spec.year}`,
-        lines: [`From table "${tableInput.value.trim()}"; ${weatherText(rows[0].spec)}.`, CAUTION],
-        header: SUMMARY_HEADER,
+        lines: [`From table "${tableInput.value.trim()}"; ${weatherText(rows[0].spec)}.`, scheduleLoadLine(figures), CAUTION],
+        header: summaryHeader(withLoad),
         rows: out,
-        formats: SUMMARY_FORMATS,
+        formats: summaryFormats(withLoad),
         chartColumn: 3,
         chartTitle: 'Solar gain by window (kWh/yr)',
       });
       store.remember(name);
-      say(`Wrote "${name}" with ${rows.length} windows.`, 'ok');
+      say(`Wrote "${name}" with ${rows.length} windows: ${scheduleSummaryText(rows.map((r) => r.spec.name), figures)}`, 'ok');
     } catch (err) {
       reportFailure(err);
     } finally {
@@ -358,7 +362,7 @@ export function createPane(doc: Document, host: PaneHost): void {
   const compareButton = h(doc, 'button', { type: 'button', id: 'run-compare', className: 'primary' }, 'Compare on a new sheet');
   const optMsg = h(doc, 'div', { id: 'options-msg', className: 'msg general', role: 'alert' });
   opts.append(
-    h(doc, 'p', { className: 'help' }, `The window on the Window tab with up to ${MAX_OPTIONS} sets of outside shading, each against the same window with none (a skyline stays: it is the surroundings). Depths in m; 0 or blank = no such device; the reach is past each jamb.`),
+    h(doc, 'p', { className: 'help' }, `The window on the Window tab with up to ${MAX_OPTIONS} sets of outside shading, each against the same window with none (a skyline stays: it is the surroundings). Depths in m; 0 or blank = no such device; the reach is past each jamb. With a room construction on the Window tab, each option gets its peak cooling load too.`),
     optTable,
     optMsg,
     h(doc, 'div', { className: 'actions' }, addOption),
@@ -424,6 +428,8 @@ export function createPane(doc: Document, host: PaneHost): void {
         results.push({ label: o.label, figures: runYear(o.spec).figures });
       }
       if (cancelRequested) throw new RunCancelled();
+      // Every option has the form's room, so the load columns come for all or none.
+      const withLoad = results[0].figures.peakLoadW !== undefined;
       const plan = await planFor(`${ready.spec.name} options`);
       writingNow('the comparison');
       const name = await writeSmallTableSheet(host.run, plan, {
@@ -431,16 +437,20 @@ export function createPane(doc: Document, host: PaneHost): void {
         lines: [
           ...describeSpec(ready.spec).slice(0, 2),
           'Cut = 1 − annual gain ÷ annual gain with no outside shading. Beam and diffuse cuts: the share of the year’s beam, and of its sky and ground light, that the shading (devices and skyline) keeps off the glass. Shaded share = 1 − mean sunlit fraction over the hours the sun is in front of the wall.',
+          withLoad
+            ? `${LOAD_WORDS.peakLoad}: the year’s largest hourly cooling load of the window by the radiant time series (${roomText(ready.spec)}), the sizing figure; ${LOAD_WORDS.peakLoadCut} = 1 − peak load ÷ peak load with no outside shading.`
+            : `Cooling load: ${LOAD_WORDS.noRoom} (choose a room construction on the Window tab for the peak cooling load of each option).`,
           CAUTION,
         ],
-        header: COMPARE_HEADER,
-        rows: comparisonRows(results),
-        formats: COMPARE_FORMATS,
+        header: compareHeader(withLoad),
+        rows: comparisonRows(results, withLoad),
+        formats: compareFormats(withLoad),
         chartColumn: 1,
         chartTitle: 'Solar gain by shading option (kWh/yr)',
+        ...(withLoad ? { moreCharts: [{ column: PEAK_LOAD_COLUMN, title: 'Peak cooling load by shading option (W)' }] } : {}),
       });
       store.remember(name);
-      say(`Wrote "${name}" comparing ${specs.length - 1} options.`, 'ok');
+      say(`Wrote "${name}" comparing ${specs.length - 1} options: ${compareSummaryText(results)}`, 'ok');
     } catch (err) {
       reportFailure(err);
     } finally {

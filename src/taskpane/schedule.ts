@@ -11,7 +11,7 @@
 import { SunpaneError } from '../core/common';
 import type { WindowSpec } from '../core/gain';
 import { EXAMPLE_SITES } from '../demo/sites';
-import { choiceFor } from '../registry/glossary';
+import { LOAD_WORDS, choiceFor } from '../registry/glossary';
 import { inGlossaryWords, readFieldCell, setPath } from '../registry/windowRange';
 import { SCHEDULE_COLUMNS, SITE_KEY, SKYLINE_KEY, type ScheduleColumn, columnForHeader, headerKey, matchHeaders, requiredColumns } from '../schedule/columns';
 import { FIELDS, type FieldDef, type FormValues, applyExampleSite, fieldForArgument } from './fields';
@@ -181,9 +181,35 @@ function readRow(line: readonly unknown[], present: readonly { column: ScheduleC
 /** Header of the summary sheet's table (our own wording). */
 export const SUMMARY_HEADER = ['Window', 'Faces (°)', 'Glass area (m²)', 'Solar gain (kWh/yr)', 'Per glass area (kWh/m²·yr)', 'Peak gain (W)', 'Peak at (hour ending)', 'Mean sunlit fraction, sun on the wall (0-1)', 'Weather missing (h)'] as const;
 
-/** One summary row from a window's yearly figures. */
-export function summaryRow(spec: WindowSpec, fig: { annualKWh: number; peakW: number; peakStamp?: number; meanSunlitFraction: number; missingHours: number; glassArea: number }): (number | string)[] {
+/** The cooling-load columns that follow when some window of the schedule has a room (the glossary's words). */
+export const SUMMARY_LOAD_HEADER = [LOAD_WORDS.peakLoad, LOAD_WORDS.peakLoadAtHourEnding] as const;
+
+/** The summary's header: the cooling-load columns at the end when some window has a room. */
+export function summaryHeader(withLoad = false): string[] {
+  return [...SUMMARY_HEADER, ...(withLoad ? SUMMARY_LOAD_HEADER : [])];
+}
+
+/** A window's yearly figures as the summary needs them (the pane's YearFigures). */
+export interface SummaryFigures {
+  annualKWh: number;
+  peakW: number;
+  peakStamp?: number;
+  meanSunlitFraction: number;
+  missingHours: number;
+  glassArea: number;
+  /** The year's largest cooling load [W] and its stamp, when the window has a room. */
+  peakLoadW?: number;
+  peakLoadStamp?: number;
+}
+
+/**
+ * One summary row from a window's yearly figures; with `withLoad`, the peak cooling load and its
+ * hour at the end — for a window without a room, the words "no room given — gains only" in place of
+ * the load and a blank hour.
+ */
+export function summaryRow(spec: WindowSpec, fig: SummaryFigures, withLoad = false): (number | string)[] {
   const round = (x: number, d: number) => Math.round(x * 10 ** d) / 10 ** d;
+  const load = !withLoad ? [] : fig.peakLoadW === undefined ? [LOAD_WORDS.noRoom, ''] : [round(fig.peakLoadW, 1), fig.peakLoadStamp === undefined ? '' : round(fig.peakLoadStamp, 6)];
   return [
     spec.name,
     spec.surfaceAzimuth,
@@ -194,8 +220,14 @@ export function summaryRow(spec: WindowSpec, fig: { annualKWh: number; peakW: nu
     fig.peakStamp === undefined ? '' : round(fig.peakStamp, 6),
     round(fig.meanSunlitFraction, 3),
     fig.missingHours,
+    ...load,
   ];
 }
 
 /** Number formats of a summary row. */
 export const SUMMARY_FORMATS = ['@', '0', '0.00', '0.0', '0.0', '0.0', 'yyyy-mm-dd hh:mm', '0.000', '0'];
+
+/** Number formats of a summary row with or without the cooling-load columns. */
+export function summaryFormats(withLoad = false): string[] {
+  return [...SUMMARY_FORMATS, ...(withLoad ? ['0.0', 'yyyy-mm-dd hh:mm'] : [])];
+}

@@ -19,6 +19,18 @@ export interface SmallTable {
   /** A bar chart of the first column (labels) against this column index. */
   chartColumn?: number;
   chartTitle?: string;
+  /** Further bar charts of the labels against other columns (e.g. the peak cooling load), each under the one before. */
+  moreCharts?: readonly { column: number; title: string }[];
+}
+
+/** Rows (0-based, on the sheet) a chart of the table takes: 18 rows each, under the table. */
+const CHART_ROWS = 18;
+
+/** The table's bar charts, in order: the main one, then the further ones. */
+function chartsOf(t: SmallTable): { column: number; title: string }[] {
+  if (t.rows.length === 0) return [];
+  const main = t.chartColumn !== undefined ? [{ column: t.chartColumn, title: t.chartTitle ?? t.header[t.chartColumn] }] : [];
+  return [...main, ...(t.moreCharts ?? [])];
 }
 
 /** A row's text cells as Excel should keep them: never read as a formula (labels come from the user). */
@@ -54,8 +66,8 @@ export function rowsPerBlock(rows: readonly (readonly (number | string)[])[], fo
 export async function writeSmallTableSheet(run: RunBatch, target: { name: string; replaces?: string }, t: SmallTable, budget = BLOCK_BYTES): Promise<string> {
   const top = tableHeaderRow(t);
   const width = t.header.length;
-  const chartCol = width + 1;
-  const chartColumn = t.chartColumn !== undefined && t.rows.length > 0 ? t.chartColumn : undefined;
+  // Each chart's source: the label column and the charted column, side by side right of the table.
+  const charts = chartsOf(t).map((c, k) => ({ ...c, sourceCol: width + 1 + 2 * k }));
   await writingSheet(run, target.name, async () => {
     // 1. The sheet, its heading and the table's header row (and the chart source's).
     await run(async (ctx) => {
@@ -67,11 +79,11 @@ export async function writeSmallTableSheet(run: RunBatch, target: { name: string
       const header = sheet.getRange(rangeAddress(top, 0, 1, width));
       header.values = [t.header.slice()];
       header.numberFormat = [t.header.map(() => '@')];
-      if (chartColumn !== undefined) sheet.getRange(rangeAddress(top, chartCol, 1, 2)).values = [[t.header[0], t.header[chartColumn]]];
+      for (const c of charts) sheet.getRange(rangeAddress(top, c.sourceCol, 1, 2)).values = [[t.header[0], t.header[c.column]]];
       await ctx.sync();
     });
     // 2. The rows in blocks under the budget (a bar chart's two source columns beside them).
-    const per = rowsPerBlock(t.rows, t.formats, chartColumn !== undefined ? 64 : 0, budget);
+    const per = rowsPerBlock(t.rows, t.formats, 64 * charts.length, budget);
     for (let start = 0; start < t.rows.length; start += per) {
       const end = Math.min(t.rows.length, start + per);
       await run(async (ctx) => {
@@ -80,7 +92,7 @@ export async function writeSmallTableSheet(run: RunBatch, target: { name: string
         const range = sheet.getRange(rangeAddress(top + 1 + start, 0, rows.length, width));
         range.values = rows.map(textSafeRow);
         range.numberFormat = rows.map(() => t.formats.slice());
-        if (chartColumn !== undefined) sheet.getRange(rangeAddress(top + 1 + start, chartCol, rows.length, 2)).values = rows.map((r) => textSafeRow([r[0], r[chartColumn]]));
+        for (const c of charts) sheet.getRange(rangeAddress(top + 1 + start, c.sourceCol, rows.length, 2)).values = rows.map((r) => textSafeRow([r[0], r[c.column]]));
         await ctx.sync();
       });
     }
@@ -95,17 +107,18 @@ export async function writeSmallTableSheet(run: RunBatch, target: { name: string
       header.format.fill.color = HEAD_FILL;
       header.format.font.color = '#FFFFFF';
       header.format.autofitColumns();
-      if (chartColumn !== undefined) {
+      charts.forEach((c, k) => {
         // A bar chart over the label column and the chosen column, from the two-column block beside
         // the table, so that the chart has one contiguous source range.
-        const src = sheet.getRange(rangeAddress(top, chartCol, t.rows.length + 1, 2));
+        const src = sheet.getRange(rangeAddress(top, c.sourceCol, t.rows.length + 1, 2));
         const chart = sheet.charts.add('BarClustered', src, 'Columns');
-        chart.title.text = t.chartTitle ?? t.header[chartColumn];
+        chart.title.text = c.title;
         chart.legend.position = 'Bottom';
-        // Bars in our palette's first series colour, as in the command line's workbooks.
-        chart.series.getItemAt(0).format.fill.setSolidColor(hexColour(PALETTE.series[0]));
-        chart.setPosition(cellAddress(top + t.rows.length + 3, 0), cellAddress(top + t.rows.length + 20, 4));
-      }
+        // Bars in our palette's series colours, in order, as in the command line's workbooks.
+        chart.series.getItemAt(0).format.fill.setSolidColor(hexColour(PALETTE.series[k % PALETTE.series.length]));
+        const first = top + t.rows.length + 3 + k * (CHART_ROWS + 2);
+        chart.setPosition(cellAddress(first, 0), cellAddress(first + CHART_ROWS - 1, 4));
+      });
       sheet.freezePanes.freezeRows(top + 1);
       sheet.activate();
       await ctx.sync();

@@ -24,6 +24,10 @@ import { CAUTION } from '../../src/outputs/caution';
 import { HOURLY_HEADERS } from '../../src/outputs/hourlyColumns';
 import { monthHourMeanFormula, monthlyGainFormula, tableColumnRef, yearFigureFormulas } from '../../src/outputs/hourlyFormulas';
 import { inUserWords } from '../../src/taskpane/messages';
+import { applyFunction } from '../../src/registry/evaluate';
+import { findFunction } from '../../src/registry';
+import { LOAD_WORDS } from '../../src/registry/glossary';
+import type { RawArg } from '../../src/registry/types';
 import { launchBrowser, openAddinPage } from './chromium';
 
 const HOST_JS = fs.readFileSync(path.join(__dirname, 'excel-host.js'), 'utf8');
@@ -73,6 +77,24 @@ const host = {
   read: (page: Page, sheet: string, address: string) =>
     page.evaluate(([s, a]) => (window as never as { __excelHost: { read(s: string, a: string): Cell[][] } }).__excelHost.read(s, a), [sheet, address] as const),
   eval: <T>(page: Page, fn: string) => page.evaluate(`(function (host) { return ${fn}; })(window.__excelHost)`) as Promise<T>,
+};
+
+/**
+ * The reference for the pane's load figures: the year's largest hourly cooling load and its stamp
+ * from the worksheet function SOLARGAINYEAR (quantities stamp and load), evaluated through the
+ * registry as a cell would, over the hours with weather (#N/A elsewhere), the first hour on ties.
+ */
+function registryYearPeakLoad(fields: Record<string, number | string>): { peakW: number; stamp: number } {
+  const out = applyFunction(findFunction('SOLARGAINYEAR')!, [Object.entries(fields) as RawArg, [['stamp', 'load']]]) as [number, unknown][];
+  let best = { peakW: 0, stamp: out[0][0] };
+  for (const [stamp, load] of out) if (typeof load === 'number' && load > best.peakW) best = { peakW: load, stamp };
+  return best;
+}
+
+/** The pane's default window (the form as it opens), as a window range's fields, with the year of these tests. */
+const FORM_WINDOW: Record<string, number | string> = {
+  name: 'Window A', year: YEAR, latitude: 52.2, longitude: 4.9, utcOffset: 1, elevation: 0, surfaceAzimuth: 180, surfaceTilt: 90, width: 1.8, height: 1.5,
+  frameFraction: 0.15, shgc: 0.4, panes: 2, interiorAttenuation: 1, groundAlbedo: 0.2, skyModel: 'perez1990', linkeTurbidity: 3,
 };
 
 /** The demo window: an invented west-facing window at the "Salt Reach (example)" site with an overhang and a right fin. */
@@ -304,7 +326,7 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     expect(await page.textContent('#schedule-help')).toContain('Overhang projection [m]');
     await page.click('#run-schedule');
     await waitForStatus(page, /Wrote|problem/);
-    const rows = await host.read(page, 'Schedule results', 'A5:I8');
+    const rows = await host.read(page, 'Schedule results', 'A6:I9');
     expect(rows[0]).toEqual(['Window', 'Faces (°)', 'Glass area (m²)', 'Solar gain (kWh/yr)', 'Per glass area (kWh/m²·yr)', 'Peak gain (W)', 'Peak at (hour ending)', 'Mean sunlit fraction, sun on the wall (0-1)', 'Weather missing (h)']);
     expect(await cautionRows(page, 'Schedule results')).toBe(true);
     expect(await host.eval<{ name: string }[]>(page, 'host.tables()')).toContainEqual(expect.objectContaining({ name: 'Schedule_results', sheet: 'Schedule results' }));
@@ -361,12 +383,12 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     await page.screenshot({ path: path.join(ARTIFACTS, 'pane-options.png'), fullPage: true });
     await page.click('#run-compare');
     await waitForStatus(page, /Wrote|refused|Fix|option/);
-    const rows = await host.read(page, 'Window A options', 'A7:G11');
+    const rows = await host.read(page, 'Window A options', 'A8:G12');
     expect(rows[0]).toEqual(['Shading option', 'Solar gain (kWh/yr)', 'Peak gain (W)', 'Cut vs no shading (%)', 'Beam cut by shading (%)', 'Diffuse cut by shading (%)', 'Shaded share, sun on the wall (0-1)']);
     expect(await cautionRows(page, 'Window A options')).toBe(true);
     expect(await host.eval<{ name: string }[]>(page, 'host.tables()')).toContainEqual(expect.objectContaining({ name: 'Window_A_options', sheet: 'Window A options' }));
     expect(rows.slice(1).map((r) => r[0])).toEqual(['No outside shading', 'Short overhang', 'Deep overhang', 'Overhang and fins']);
-    const all = await host.read(page, 'Window A options', 'A8:G12');
+    const all = await host.read(page, 'Window A options', 'A9:G13');
     expect(all[4][0]).toBe('Deep set-back');
     const bare: WindowSpec = {
       name: 'Window A',
@@ -406,6 +428,80 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     await waitForStatus(page, /option/);
     expect(await page.textContent('#options-msg')).toBe('Option 2 "Deep overhang", Overhang projection (m): -1 is not allowed: must be a number from 0 to 100 m');
     expect(await host.sheetNames(page)).toEqual(sheets);
+    await page.close();
+  });
+
+  test("with a room, a schedule's windows get the peak cooling load and its hour of SOLARGAINYEAR; a window without one says so", async () => {
+    const page = await openPane();
+    await setField(page, 'year', String(YEAR));
+    await page.evaluate(() => {
+      const h = (window as never as { __excelHost: { addUserSheet(n: string, v: unknown[][]): void; addUserTable(s: string, a: string, n: string): void } }).__excelHost;
+      h.addUserSheet('Rooms', [
+        ['Window', 'Faces (°)', 'Width [m]', 'Height [m]', 'Overhang projection', 'Overhang gap', 'Room construction'],
+        ['E1', 90, 1.8, 1.5, 0.6, 0.2, 'medium'],
+        ['N1', 0, 1.2, 1.5, 0, 0, ''],
+      ]);
+      h.addUserTable('Rooms', 'A1:G3', 'RoomList');
+    });
+    await page.click('#tab-schedule');
+    await page.fill('#schedule-table', 'RoomList');
+    await page.click('#run-schedule');
+    const status = await waitForStatus(page, /Wrote|problem|refused/);
+    const rows = await host.read(page, 'Schedule results', 'A6:K8');
+    expect(rows[0].slice(9)).toEqual([LOAD_WORDS.peakLoad, LOAD_WORDS.peakLoadAtHourEnding]);
+    const east = registryYearPeakLoad({ ...FORM_WINDOW, name: 'E1', surfaceAzimuth: 90, width: 1.8, height: 1.5, overhangProjection: 0.6, overhangGap: 0.2, roomConstruction: 'medium' });
+    expect(Math.abs((rows[1][9] as number) - east.peakW)).toBeLessThanOrEqual(0.05);
+    expect(rows[1][10] as number).toBeCloseTo(east.stamp, 6);
+    expect(rows[2].slice(9)).toEqual([LOAD_WORDS.noRoom, '']);
+    expect(await cautionRows(page, 'Schedule results')).toBe(true);
+    const lines = await host.read(page, 'Schedule results', 'A1:A4');
+    expect(lines[2][0]).toContain('1 of 2 windows have a room');
+    expect(status).toContain(`largest peak cooling load ${Math.round(east.peakW).toLocaleString('en-GB')} W (E1, `);
+    await page.close();
+  });
+
+  test('with a room, the comparison gives each option its peak cooling load, hour and cut against no shading, as SOLARGAINYEAR does, with a second bar chart; without one it says so', async () => {
+    const page = await openPane();
+    await setField(page, 'year', String(YEAR));
+    await page.selectOption('#roomConstruction', 'medium');
+    await page.setViewportSize({ width: 350, height: 900 });
+    await page.click('#tab-options');
+    await page.click('#run-compare');
+    const status = await waitForStatus(page, /Wrote|refused|Fix|option/);
+    await page.screenshot({ path: path.join(ARTIFACTS, 'pane-options-load-350.png'), fullPage: true });
+    const rows = await host.read(page, 'Window A options', 'A8:J12');
+    expect(rows[0]).toEqual(['Shading option', 'Solar gain (kWh/yr)', 'Peak gain (W)', 'Cut vs no shading (%)', 'Beam cut by shading (%)', 'Diffuse cut by shading (%)', 'Shaded share, sun on the wall (0-1)', LOAD_WORDS.peakLoad, LOAD_WORDS.peakLoadAtHourEnding, LOAD_WORDS.peakLoadCut]);
+    const room = { ...FORM_WINDOW, roomConstruction: 'medium' };
+    const none = registryYearPeakLoad(room);
+    const deep = registryYearPeakLoad({ ...room, overhangProjection: 1.0, overhangGap: 0.2, overhangExtension: 0.5 });
+    expect(rows[1][0]).toBe('No outside shading');
+    expect(Math.abs((rows[1][7] as number) - none.peakW)).toBeLessThanOrEqual(0.05);
+    expect(rows[1][8] as number).toBeCloseTo(none.stamp, 6);
+    expect(rows[1][9]).toBe(0);
+    expect(rows[3][0]).toBe('Deep overhang');
+    expect(Math.abs((rows[3][7] as number) - deep.peakW)).toBeLessThanOrEqual(0.05);
+    expect(rows[3][8] as number).toBeCloseTo(deep.stamp, 6);
+    expect(rows[3][9] as number).toBeCloseTo((1 - deep.peakW / none.peakW) * 100, 1);
+    expect(rows[3][9] as number).toBeGreaterThan(0); // an overhang on a south wall lowers the peak load
+    const charts = await host.eval<{ type: string; title: string }[]>(page, 'host.charts("Window A options")');
+    expect(charts).toEqual([
+      expect.objectContaining({ type: 'BarClustered', title: 'Solar gain by shading option (kWh/yr)', seriesColours: ['#2E6DA4'] }),
+      expect.objectContaining({ type: 'BarClustered', title: 'Peak cooling load by shading option (W)', seriesColours: ['#D9822B'] }),
+    ]);
+    expect(await cautionRows(page, 'Window A options')).toBe(true);
+    expect(status).toContain(`against ${Math.round(none.peakW).toLocaleString('en-GB')} W with no shading`);
+
+    // The same without a room: no load columns, and the sheet and the status say why.
+    await page.click('#tab-window');
+    await page.selectOption('#roomConstruction', '');
+    await page.click('#tab-options');
+    await page.click('#run-compare');
+    // The earlier comparison is the pane's own: it asks, and keeping both writes "Window A options (2)".
+    await page.click('#confirm-keep');
+    const plain = await waitForStatus(page, /Wrote "Window A options \(2\)"|refused|Fix/);
+    expect(plain).toContain(`cooling load: ${LOAD_WORDS.noRoom}`);
+    expect((await host.read(page, 'Window A options (2)', 'A8:H8'))[0]).toEqual(['Shading option', 'Solar gain (kWh/yr)', 'Peak gain (W)', 'Cut vs no shading (%)', 'Beam cut by shading (%)', 'Diffuse cut by shading (%)', 'Shaded share, sun on the wall (0-1)', '']);
+    expect((await host.read(page, 'Window A options (2)', 'A5:A5'))[0][0]).toContain(`Cooling load: ${LOAD_WORDS.noRoom}`);
     await page.close();
   });
 
@@ -503,8 +599,8 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     await page.click('#run-compare');
     await page.waitForFunction(() => /^Writing the comparison/.test(document.getElementById('progress-text')?.textContent ?? ''), undefined, { timeout: 90_000 });
     expect(await page.isDisabled('#cancel')).toBe(true);
-    expect(await waitForStatus(page, /^Wrote/)).toBe('Wrote "Window A options" comparing 10 options.');
-    expect((await host.read(page, 'Window A options', 'A8:A18')).map((r) => r[0])).toEqual(['No outside shading', ...options.map((o) => o.label)]);
+    expect(await waitForStatus(page, /^Wrote/)).toMatch(/^Wrote "Window A options" comparing 10 options: least solar gain with "[^"]+", [\d,]+ kWh\/yr \(\d+ % below no shading\); cooling load: no room given — gains only\.$/);
+    expect((await host.read(page, 'Window A options', 'A9:A19')).map((r) => r[0])).toEqual(['No outside shading', ...options.map((o) => o.label)]);
     const syncs = await host.eval<{ bytes: number; refused?: boolean }[]>(page, 'host.state.syncs');
     expect(syncs.some((x) => x.refused)).toBe(false);
     expect(Math.max(...syncs.map((x) => x.bytes))).toBeLessThan(5 * 1024 * 1024);
@@ -532,7 +628,7 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     expect(await host.eval<unknown[]>(page, 'host.tables()')).toEqual([]);
     // once Excel takes the requests again, the same run writes as usual
     await page.click('#run-compare');
-    expect(await waitForStatus(page, /^Wrote/)).toBe('Wrote "Window A options" comparing 3 options.');
+    expect(await waitForStatus(page, /^Wrote/)).toMatch(/^Wrote "Window A options" comparing 3 options: /);
     await page.close();
   });
 

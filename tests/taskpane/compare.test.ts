@@ -1,7 +1,7 @@
 /** Shading options compared against the unshaded window. */
 import type { WindowSpec } from '../../src/core/gain/window';
 import { validateWindowSpec } from '../../src/core/gain/windowSpec';
-import { OptionProblem, comparisonRows, optionShading, optionSpecs, starterOptions } from '../../src/taskpane/compare';
+import { OptionProblem, PEAK_LOAD_COLUMN, compareFormats, compareHeader, comparisonRows, optionShading, optionSpecs, starterOptions } from '../../src/taskpane/compare';
 import { initialValues } from '../../src/taskpane/fields';
 import { buildWindowSpec } from '../../src/taskpane/spec';
 
@@ -44,5 +44,25 @@ describe('shading options', () => {
       ['none', 400, 900, 0, 0, 0, 0],
       ['deep', 300, 600, 25, 41.2, 20.5, 0.38],
     ]);
+  });
+
+  test('with a room, each option gets its peak cooling load, its hour and the peak load cut = 1 − peak ÷ unshaded peak in %', () => {
+    const rows = comparisonRows(
+      [
+        { label: 'none', figures: { annualKWh: 400, peakW: 900, meanSunlitFraction: 1, beamCut: 0, diffuseCut: 0, peakLoadW: 640, peakLoadStamp: 45900.625 } },
+        { label: 'deep', figures: { annualKWh: 300, peakW: 600, meanSunlitFraction: 0.62, beamCut: 0.4123, diffuseCut: 0.2049, peakLoadW: 480.04, peakLoadStamp: 45901.666667 } },
+      ],
+      true,
+    );
+    expect(rows.map((r) => r.slice(7))).toEqual([
+      [640, 45900.625, 0],
+      [480, 45901.666667, 25],
+    ]);
+    expect(compareHeader(true).slice(7)).toEqual(['Peak cooling load (W)', 'Peak load at (hour ending)', 'Peak load cut vs no shading (%)']);
+    expect(compareHeader(true)[PEAK_LOAD_COLUMN]).toBe('Peak cooling load (W)');
+    expect(compareFormats(true)).toHaveLength(compareHeader(true).length);
+    // Figures without a room under load columns say so rather than 0.
+    const bare = comparisonRows([{ label: 'none', figures: { annualKWh: 400, peakW: 900, meanSunlitFraction: 1, beamCut: 0, diffuseCut: 0 } }], true);
+    expect(bare[0].slice(7)).toEqual(['no room given — gains only', '', '']);
   });
 });

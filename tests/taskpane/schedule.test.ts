@@ -2,7 +2,7 @@
 import type { WindowSpec } from '../../src/core/gain/window';
 import { validateWindowSpec } from '../../src/core/gain/windowSpec';
 import { initialValues } from '../../src/taskpane/fields';
-import { headerKey, readSchedule, summaryRow } from '../../src/taskpane/schedule';
+import { headerKey, readSchedule, summaryFormats, summaryHeader, summaryRow } from '../../src/taskpane/schedule';
 
 const validate = (s: WindowSpec) => void validateWindowSpec(s);
 const form = { ...initialValues(), year: '2025' };
@@ -109,5 +109,17 @@ describe('the window schedule', () => {
     const spec = { name: 'X', surfaceAzimuth: 90 } as WindowSpec;
     const row = summaryRow(spec, { annualKWh: 300, peakW: 512.345, peakStamp: 45800.5, meanSunlitFraction: 0.81234, missingHours: 2, glassArea: 2.5 });
     expect(row).toEqual(['X', 90, 2.5, 300, 120, 512.3, 45800.5, 0.812, 2]);
+  });
+
+  test('with a room in the schedule, the peak cooling load and its hour end the row; a window without one says so instead of a blank or zero', () => {
+    const spec = { name: 'X', surfaceAzimuth: 90 } as WindowSpec;
+    const fig = { annualKWh: 300, peakW: 512.345, peakStamp: 45800.5, meanSunlitFraction: 0.81234, missingHours: 2, glassArea: 2.5 };
+    expect(summaryHeader(true).slice(-2)).toEqual(['Peak cooling load (W)', 'Peak load at (hour ending)']);
+    expect(summaryHeader(false)).toHaveLength(9);
+    expect(summaryFormats(true)).toHaveLength(summaryHeader(true).length);
+    expect(summaryRow(spec, { ...fig, peakLoadW: 401.26, peakLoadStamp: 45800.625 }, true).slice(-2)).toEqual([401.3, 45800.625]);
+    expect(summaryRow(spec, fig, true).slice(-2)).toEqual(['no room given — gains only', '']);
+    // Without the load columns the row is as before, whatever the figures hold.
+    expect(summaryRow(spec, { ...fig, peakLoadW: 401.26, peakLoadStamp: 45800.625 })).toHaveLength(9);
   });
 });
