@@ -10,7 +10,7 @@
  * device", and options added since at the end. Every name is a glossary name, so one name means one
  * thing in every function, the window range, the schedule and the pane.
  */
-import { SunpaneError } from '../core/common';
+import { describeValue, SunpaneError } from '../core/common';
 import { shadowDepth, shadowWidth, sunlitFraction, type WindowOpening, MASK_DEFAULT_YEAR, monthHourMask, type Shading, windowViewFactors } from '../core/shading';
 import type { TimeConvention } from '../core/time';
 import { GLOSSARY } from './glossary';
@@ -80,7 +80,7 @@ function requireFinHeight(a: Args): void {
   const above = num(a, 'finExtensionAbove') <= num(a, 'finExtensionBelow');
   const name = above ? 'finExtensionAbove' : 'finExtensionBelow';
   const other = num(a, above ? 'finExtensionBelow' : 'finExtensionAbove');
-  throw new SunpaneError(name, a[name], `must be at least ${-(num(a, 'height') + other)}`, 'the fin height, window height + extension above + extension below, must not be negative');
+  throw new SunpaneError(name, a[name], `must be at least ${describeValue(-(num(a, 'height') + other))}`, 'the fin height, window height + extension above + extension below, must not be negative');
 }
 
 function overhangOf(a: Args): Shading['overhang'] {

@@ -51,7 +51,7 @@
  * Vertical walls only: the functions take no tilt. Callers with a tilted window and shading devices
  * use {@link requireVerticalForShading} to refuse it.
  */
-import { RAD, wrap180, SunpaneError, requireFinite, requireRange } from '../common';
+import { RAD, wrap180, SunpaneError, describeValue, requireFinite, requireRange } from '../common';
 import { writeQuadHalfPlanes } from './polygon';
 import { shadowPlanOf, sunlitFromPlan } from './shadowPlan';
 import { requireSkyline, skylineElevationUnchecked } from './skyline';
@@ -136,7 +136,7 @@ export function requireOverhang(overhang: Overhang, width: number, names: Shadin
     const left = overhang.extensionLeft <= overhang.extensionRight;
     const name = left ? names.extensionLeft : names.extensionRight;
     const other = left ? overhang.extensionRight : overhang.extensionLeft;
-    throw new SunpaneError(name, left ? overhang.extensionLeft : overhang.extensionRight, `must be at least ${-(width + other)}`, 'the overhang width, window width + left + right extension, must not be negative');
+    throw new SunpaneError(name, left ? overhang.extensionLeft : overhang.extensionRight, `must be at least ${describeValue(-(width + other))}`, 'the overhang width, window width + left + right extension, must not be negative');
   }
   return overhang;
 }
@@ -152,7 +152,7 @@ function requireFin(fin: Fin, height: number, names: ShadingNames['leftFin'], li
     const above = fin.extensionAbove <= fin.extensionBelow;
     const name = above ? names.extensionAbove : names.extensionBelow;
     const other = above ? fin.extensionBelow : fin.extensionAbove;
-    throw new SunpaneError(name, above ? fin.extensionAbove : fin.extensionBelow, `must be at least ${-(height + other)}`, 'the fin height, window height + extension above + extension below, must not be negative');
+    throw new SunpaneError(name, above ? fin.extensionAbove : fin.extensionBelow, `must be at least ${describeValue(-(height + other))}`, 'the fin height, window height + extension above + extension below, must not be negative');
   }
   return fin;
 }
