@@ -443,10 +443,12 @@ describe('the task pane in Chromium with a fake Excel host', () => {
       ]);
       h.addUserTable('Rooms', 'A1:G3', 'RoomList');
     });
+    await page.setViewportSize({ width: 350, height: 900 });
     await page.click('#tab-schedule');
     await page.fill('#schedule-table', 'RoomList');
     await page.click('#run-schedule');
     const status = await waitForStatus(page, /Wrote|problem|refused/);
+    await page.screenshot({ path: path.join(ARTIFACTS, 'pane-schedule-load-350.png') });
     const rows = await host.read(page, 'Schedule results', 'A6:K8');
     expect(rows[0].slice(9)).toEqual([LOAD_WORDS.peakLoad, LOAD_WORDS.peakLoadAtHourEnding]);
     const east = registryYearPeakLoad({ ...FORM_WINDOW, name: 'E1', surfaceAzimuth: 90, width: 1.8, height: 1.5, overhangProjection: 0.6, overhangGap: 0.2, roomConstruction: 'medium' });
