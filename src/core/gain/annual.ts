@@ -215,6 +215,125 @@ export function annualOfPrepared(w: PreparedWindow, shared?: SharedYear, reuse =
   return out;
 }
 
+/**
+ * The running totals of a summary of one window's year (src/core/gain/annualSummary.ts turns them
+ * into an {@link AnnualSummary}): each sum is added up hour by hour in the order of the hours, so
+ * that totals gathered from the year's columns and totals gathered while the hours are worked out
+ * are the same numbers.
+ */
+export interface YearTotals {
+  /** Solar gain per month [Wh], January first. */
+  monthlyWh: number[];
+  /** Missing hours per month, January first. */
+  monthlyMissingHours: number[];
+  missingHours: number;
+  /** Largest hourly gain [W] and its row (0 and row 0 for a year without gain). */
+  peakW: number;
+  peakIndex: number;
+  /** Hours with beam on the glass (beam on the plane > 0 and sunlit fraction > 0). */
+  sunlitHours: number;
+  /** Hours with the sun above the horizon and in front of the plane, and their sum of sunlit fractions. */
+  sunOnWallHours: number;
+  sunlitSum: number;
+  /** Σ beam · SHGC(θ) · sunlit fraction and Σ beam · SHGC(θ) [Wh/m²]. */
+  beamKept: number;
+  beamAll: number;
+  /** Σ (sky + ground) on the glass and on the bare window [Wh/m²]. */
+  diffuseKept: number;
+  diffuseAll: number;
+}
+
+/** Totals of nothing yet. */
+export function emptyYearTotals(): YearTotals {
+  return {
+    monthlyWh: new Array<number>(12).fill(0),
+    monthlyMissingHours: new Array<number>(12).fill(0),
+    missingHours: 0,
+    peakW: 0,
+    peakIndex: 0,
+    sunlitHours: 0,
+    sunOnWallHours: 0,
+    sunlitSum: 0,
+    beamKept: 0,
+    beamAll: 0,
+    diffuseKept: 0,
+    diffuseAll: 0,
+  };
+}
+
+/** Missing hours of a shared year, overall and by month, counted once per year (a window without conduction adds none). */
+const MISSING_OF_YEAR = new WeakMap<SharedYear, { total: number; monthly: number[] }>();
+
+function missingOfYear(sy: SharedYear): { total: number; monthly: number[] } {
+  let m = MISSING_OF_YEAR.get(sy);
+  if (m === undefined) {
+    const monthly = new Array<number>(12).fill(0);
+    let total = 0;
+    const months = monthsOfYear(sy.year);
+    for (let i = 0; i < sy.hours; i++) {
+      if (sy.missing[i] === 1) {
+        total++;
+        monthly[months[(i / 24) | 0] - 1]++;
+      }
+    }
+    m = { total, monthly };
+    MISSING_OF_YEAR.set(sy, m);
+  }
+  return m;
+}
+
+/** Month (1…12) of each day of a year, kept by year (read-only). */
+const MONTHS_OF_YEAR = new Map<number, Uint8Array>();
+
+function monthsOfYear(year: number): Uint8Array {
+  let m = MONTHS_OF_YEAR.get(year);
+  if (m === undefined) {
+    m = monthOfDay(year);
+    if (MONTHS_OF_YEAR.size >= 8) MONTHS_OF_YEAR.clear();
+    MONTHS_OF_YEAR.set(year, m);
+  }
+  return m;
+}
+
+/**
+ * The summary totals of a window's year from its site's shared year, added up while the hours are
+ * worked out: no hourly column of gain or irradiance is written and the year is not read again
+ * afterwards. The same passes and the same arithmetic as {@link annualOfPrepared} with `reuse`
+ * followed by adding up its columns (src/core/gain/annualSummary.ts), so the same numbers to the
+ * last bit (tests/core/gain/sharedYear.test.ts): the rows this skips (night, no light) add 0 there.
+ * For a window without a U-value (conduction can mark further hours missing: such a window goes
+ * through the whole summary-only year instead).
+ * @param w - the prepared window (no `glazing.uValue`)
+ * @param sy - the shared year of its site, year and weather
+ */
+export function yearTotalsOfShared(w: PreparedWindow, sy: SharedYear): YearTotals {
+  const { spec } = w;
+  const n = w.hours;
+  if (sy.hours !== n || sy.key !== sharedYearKey(w)) throw new SunpaneError('year', spec.year, `the shared sun and weather are not those of this window's site, year and weather (${sy.key})`);
+  if (spec.glazing.uValue !== undefined) throw new SunpaneError('glazing.uValue', spec.glazing.uValue, 'is not read by the summary totals: a window with conduction is summed up from its summary-only year');
+  const scratch = yearScratch(n);
+  if (scratchOwner.get(n) !== sy) {
+    for (const c of [scratch.gain, scratch.beam, scratch.sky, scratch.ground, scratch.skyUnshaded, scratch.groundUnshaded, scratch.sunlitFraction, scratch.shgc]) c.fill(0);
+    scratchOwner.set(n, sy);
+  }
+  const totals = emptyYearTotals();
+  const missing = missingOfYear(sy);
+  totals.missingHours = missing.total;
+  for (let m = 0; m < 12; m++) totals.monthlyMissingHours[m] = missing.monthly[m];
+  const tilt = spec.surfaceTilt;
+  const surfAz = spec.surfaceAzimuth;
+  const shade = w.vertical ? prepareShading({ width: spec.width, height: spec.height }, spec.shading, surfAz) : undefined;
+  const plane = preparePlane({ surfaceTilt: tilt, surfaceAzimuth: surfAz, groundAlbedo: spec.groundAlbedo, skyModel: w.skyModel, shade: w.shade });
+  const dniExtra = plane.needsDniExtra ? dniExtraByDay() : NO_DNI_EXTRA;
+  const brightness = plane.perez ? perezBrightnessOf(sy) : undefined;
+  hourlyAngles(0, n, sy.daylight, sy, Math.cos(tilt * RAD), Math.sin(tilt * RAD), Math.cos(surfAz * RAD), Math.sin(surfAz * RAD), scratch.incidence, scratch.profileAngle, true);
+  hourlyShading(0, n, sy.daylight, shade, w.curve, surfAz, sy, scratch.incidence, scratch.sunlitFraction, scratch.shgc);
+  totals.sunOnWallHours = SHADING_TOTALS.hours;
+  totals.sunlitSum = SHADING_TOTALS.sunlitSum;
+  hourlyGainTotals(sy.lit, plane, brightness, dniExtra, w.solarArea * w.interiorAttenuation, w.solarArea * w.interiorAttenuationDiffuse, w.curve.diffuse, w.beamOnly ? w.skylineSky : -1, sy, scratch.sunlitFraction, scratch.shgc, monthsOfYear(spec.year), totals);
+  return totals;
+}
+
 /** The sun of each hour as the passes read it: altitude and azimuth [°], their sines and cosines. */
 export interface SunColumns {
   altitude: Float64Array;
@@ -483,6 +602,9 @@ const NO_DNI_EXTRA = new Float64Array(367);
 const SIN_GAMMA_SCRATCH = new Float64Array(8784);
 const COS_GAMMA_SCRATCH = new Float64Array(8784);
 const COS_THETA_SCRATCH = new Float64Array(8784);
+/** γ of the hours with the sun in front of the plane, and those hours in order (pass 2). */
+const GAMMA_SCRATCH = new Float64Array(8784);
+const FRONT_SCRATCH = new Int32Array(8784);
 
 /**
  * Pass 1 of {@link annualOfPrepared}: incidence and profile angle of every hour, day and night (for
@@ -549,7 +671,10 @@ function hourlyAngles(
 /**
  * Pass 2 of {@link annualOfPrepared}: sunlit fraction and beam SHGC for the hours with the sun up and
  * in front of the window (θ < 90°); other rows stay 0 (no shadow work with the sun down or behind
- * the wall). Geometry for every such row, missing weather or not.
+ * the wall). Geometry for every such row, missing weather or not: the hours are gathered first and
+ * their sunlit fractions worked out in one call ({@link PreparedShading.sunlitOfRows}), so that no
+ * number goes through a call per hour. Leaves the count of those hours and the sum of their sunlit
+ * fractions (in the order of the hours) in {@link SHADING_TOTALS}.
  * @param from - first row (when no list)
  * @param n - row after the last (when no list)
  * @param list - the hours to consider, in order, instead of the range (the daylight hours of a year)
@@ -573,10 +698,13 @@ function hourlyShading(
   sunlitFraction: Float64Array,
   shgc: Float64Array,
 ): void {
-  const { altitude: alt, azimuth: az, sinAltitude: sinAlt, cosAltitude: cosAlt } = sun;
-  const sinG = SIN_GAMMA_SCRATCH;
-  const cosG = COS_GAMMA_SCRATCH;
+  const { altitude: alt, azimuth: az } = sun;
+  const gammaColumn = GAMMA_SCRATCH;
+  const front = FRONT_SCRATCH;
   const count = list ? list.length : n;
+  // The hours with the sun up and in front of the plane: their γ and SHGC here, their sunlit
+  // fractions all at once below (no call per hour).
+  let m = 0;
   for (let k = list ? 0 : from; k < count; k++) {
     const i = list ? list[k] : k;
     const a = alt[i];
@@ -586,12 +714,26 @@ function hourlyShading(
       shgc[i] = 0;
       continue;
     }
-    const s = az[i];
-    const gamma = wrap180(surfAz - s); // horizontal shadow angle (src/core/shading/sunlit.ts convention)
-    sunlitFraction[i] = shade !== undefined ? shade.sunlitInWallFrame(a, s, gamma, sinAlt[i], cosAlt[i], sinG[i], cosG[i]) : 1;
+    gammaColumn[i] = wrap180(surfAz - az[i]); // horizontal shadow angle (src/core/shading/sunlit.ts convention)
     shgc[i] = curve.atAngle(theta);
+    front[m++] = i;
   }
+  if (shade !== undefined) {
+    const wallFrame = { altitude: alt, azimuth: az, sinAltitude: sun.sinAltitude, cosAltitude: sun.cosAltitude, gamma: gammaColumn, sinGamma: SIN_GAMMA_SCRATCH, cosGamma: COS_GAMMA_SCRATCH };
+    shade.sunlitOfRows(front, m, wallFrame, sunlitFraction);
+  } else for (let k = 0; k < m; k++) sunlitFraction[front[k]] = 1;
+  let sunlitSum = 0;
+  for (let k = 0; k < m; k++) sunlitSum += sunlitFraction[front[k]];
+  SHADING_TOTALS.hours = m;
+  SHADING_TOTALS.sunlitSum = sunlitSum;
 }
+
+/**
+ * What the last {@link hourlyShading} added up over the hours it considered with the sun up and in
+ * front of the plane: their number and their sunlit fractions, in the order of the hours (a
+ * summary's sun-on-wall hours and mean sunlit fraction).
+ */
+const SHADING_TOTALS = { hours: 0, sunlitSum: 0 };
 
 /**
  * Pass 3 of {@link annualOfPrepared}: irradiance on the plane and gain for the hours with weather
@@ -664,4 +806,82 @@ function hourlyGain(
     radiant[i] = r;
     convective[i] = q - r;
   }
+}
+
+/**
+ * Pass 3 of {@link yearTotalsOfShared}: irradiance on the plane and gain for the lit hours of a
+ * shared year (weather and light, none missing), added into the summary totals as they are worked
+ * out instead of written to columns. The same arithmetic as {@link hourlyGain} and the same sums,
+ * in the same order, as src/core/gain/annualSummary.ts adds up from the columns.
+ * @param list - the lit hours of the shared year, in order
+ * @param plane - the prepared plane
+ * @param brightness - the shared year's Perez brightness coefficients, when the plane uses them
+ * @param dniExtra - extraterrestrial normal irradiance by day of the year [W/m²] (index 1…366)
+ * @param kb - area × beam interior attenuation [m²]
+ * @param kd - area × diffuse interior attenuation [m²]
+ * @param shgcDiffuse - diffuse SHGC [-]
+ * @param circumsolarFixed - as {@link hourlyGain}
+ * @param sy - the shared year (sun and weather)
+ * @param sunlitFraction - sunlit fraction by hour (pass 2; 0 with the sun down)
+ * @param shgc - SHGC(θ) by hour (pass 2; 0 with the sun down)
+ * @param months - month (1…12) of each day of the year
+ * @param totals - the totals to add into
+ */
+function hourlyGainTotals(
+  list: Int32Array,
+  plane: PreparedPlane,
+  brightness: PerezBrightnessColumns | undefined,
+  dniExtra: Float64Array,
+  kb: number,
+  kd: number,
+  shgcDiffuse: number,
+  circumsolarFixed: number,
+  sy: SharedYear,
+  sunlitFraction: Float64Array,
+  shgc: Float64Array,
+  months: Uint8Array,
+  totals: YearTotals,
+): void {
+  const { dni: dniColumn, dhi: dhiColumn, altitude: alt, sinAltitude: sinAlt } = sy;
+  const cosT = COS_THETA_SCRATCH;
+  const monthlyWh = totals.monthlyWh;
+  const parts: PlaneParts = { beam: 0, sky: 0, ground: 0, total: 0, skyUnshaded: 0, groundUnshaded: 0 };
+  let peakW = totals.peakW;
+  let peakIndex = totals.peakIndex;
+  let sunlitHours = totals.sunlitHours;
+  let beamKept = totals.beamKept;
+  let beamAll = totals.beamAll;
+  let diffuseKept = totals.diffuseKept;
+  let diffuseAll = totals.diffuseAll;
+  for (let k = 0; k < list.length; k++) {
+    const i = list[k];
+    const a = alt[i];
+    const day = (i / 24) | 0;
+    const lit = sunlitFraction[i];
+    const circumsolar = circumsolarFixed < 0 ? lit : circumsolarFixed;
+    if (brightness === undefined) plane.irradiance(parts, a > 0 ? dniColumn[i] : 0, dhiColumn[i], a, sinAlt[i], cosT[i], dniExtra[day + 1], circumsolar);
+    else plane.irradianceShared(parts, a > 0 ? dniColumn[i] : 0, dhiColumn[i], a, sinAlt[i], cosT[i], dniExtra[day + 1], circumsolar, brightness, i);
+    // Gain equation of src/core/gain/windowGain.ts windowGainParts, as in hourlyGain.
+    const bm = parts.beam;
+    const s = shgc[i];
+    const q = kb * bm * lit * s + kd * (parts.sky + parts.ground) * shgcDiffuse;
+    monthlyWh[months[day] - 1] += q;
+    if (q > peakW) {
+      peakW = q;
+      peakIndex = i;
+    }
+    if (bm > 0 && lit > 0) sunlitHours++;
+    const b = bm * s;
+    beamAll += b;
+    beamKept += b * lit;
+    diffuseKept += parts.sky + parts.ground;
+    diffuseAll += parts.skyUnshaded + parts.groundUnshaded;
+  }
+  totals.peakW = peakW;
+  totals.peakIndex = peakIndex;
+  totals.sunlitHours = sunlitHours;
+  totals.beamKept = beamKept;
+  totals.beamAll = beamAll;
+  totals.diffuseKept = diffuseKept;
+  totals.diffuseAll = diffuseAll;
 }

@@ -3,7 +3,7 @@
  * hours, mean sunlit fraction while the sun is on the wall, how much of the beam and of the diffuse
  * light the window's shading takes away over the year, and the count of missing hours.
  */
-import { type AnnualSeries, annualOfPrepared, monthOfDay } from './annual';
+import { type AnnualSeries, annualOfPrepared, emptyYearTotals, monthOfDay, type YearTotals, yearTotalsOfShared } from './annual';
 import type { SharedYears } from './sharedYear';
 import type { WindowSpec } from './window';
 import { prepareWindow } from './prepared';
@@ -54,18 +54,8 @@ export interface AnnualSummary {
  *   at midnight on the 31st belongs to that 31st).
  */
 export function summarizeAnnual(series: AnnualSeries): AnnualSummary {
-  const monthlyWh = new Array<number>(12).fill(0);
-  const monthlyMissingHours = new Array<number>(12).fill(0);
-  let peakW = 0;
-  let peakIndex = 0;
-  let sunlitHours = 0;
-  let sunOnWallHours = 0;
-  let sunlitSum = 0;
-  let missingHours = 0;
-  let beamKept = 0;
-  let beamAll = 0;
-  let diffuseKept = 0;
-  let diffuseAll = 0;
+  const t = emptyYearTotals();
+  const { monthlyWh, monthlyMissingHours } = t;
   const months = monthOfDay(series.year);
   const { hours, missing, gain, beam, shgc, sky, ground, skyUnshaded, groundUnshaded, sunlitFraction, sunAltitude, incidence } = series;
   // Day by day (a day lies in one month), each month's energy added up hour by hour in order.
@@ -75,43 +65,48 @@ export function summarizeAnnual(series: AnnualSeries): AnnualSummary {
     for (const end = i + 24; i < end; i++) {
       const fraction = sunlitFraction[i];
       if (missing[i] === 1) {
-        missingHours++;
+        t.missingHours++;
         monthlyMissingHours[m]++;
       } else {
         const q = gain[i];
         wh += q;
-        if (q > peakW) {
-          peakW = q;
-          peakIndex = i;
+        if (q > t.peakW) {
+          t.peakW = q;
+          t.peakIndex = i;
         }
         const bm = beam[i];
-        if (bm > 0 && fraction > 0) sunlitHours++;
+        if (bm > 0 && fraction > 0) t.sunlitHours++;
         const b = bm * shgc[i];
-        beamAll += b;
-        beamKept += b * fraction;
-        diffuseKept += sky[i] + ground[i];
-        diffuseAll += skyUnshaded[i] + groundUnshaded[i];
+        t.beamAll += b;
+        t.beamKept += b * fraction;
+        t.diffuseKept += sky[i] + ground[i];
+        t.diffuseAll += skyUnshaded[i] + groundUnshaded[i];
       }
       if (sunAltitude[i] > 0 && incidence[i] < 90) {
-        sunOnWallHours++;
-        sunlitSum += fraction;
+        t.sunOnWallHours++;
+        t.sunlitSum += fraction;
       }
     }
     monthlyWh[m] = wh;
   }
-  const monthlyKWh = monthlyWh.map((wh) => wh / 1000);
+  return summaryOfTotals(t, series.stampSerial);
+}
+
+/** The summary of a year's totals; `stampSerial` the year's row stamps (for the peak's). */
+function summaryOfTotals(t: YearTotals, stampSerial: Float64Array): AnnualSummary {
+  const monthlyKWh = t.monthlyWh.map((wh) => wh / 1000);
   return {
     monthlyKWh,
     annualKWh: monthlyKWh.reduce((a, b) => a + b, 0),
-    peakW,
-    peakStamp: series.stampSerial[peakIndex],
-    sunlitHours,
-    meanSunlitFraction: sunOnWallHours > 0 ? sunlitSum / sunOnWallHours : 0,
-    sunOnWallHours,
-    beamCut: cutOf(beamKept, beamAll),
-    diffuseCut: cutOf(diffuseKept, diffuseAll),
-    missingHours,
-    monthlyMissingHours,
+    peakW: t.peakW,
+    peakStamp: stampSerial[t.peakIndex],
+    sunlitHours: t.sunlitHours,
+    meanSunlitFraction: t.sunOnWallHours > 0 ? t.sunlitSum / t.sunOnWallHours : 0,
+    sunOnWallHours: t.sunOnWallHours,
+    beamCut: cutOf(t.beamKept, t.beamAll),
+    diffuseCut: cutOf(t.diffuseKept, t.diffuseAll),
+    missingHours: t.missingHours,
+    monthlyMissingHours: t.monthlyMissingHours,
   };
 }
 
@@ -132,12 +127,17 @@ export interface WindowYearFigures {
  * The summary of one window's year when many windows share their sites' sun and weather (a
  * schedule): the same numbers as `summarizeAnnual(annualSeries(spec))`, with the sun's path and the
  * weather taken from `years` (worked out once per site, year and weather) and no hourly columns
- * kept (the series is written into scratch columns; what a summary does not read is skipped).
+ * kept: a window without a U-value has its totals added up while its hours are worked out
+ * (`yearTotalsOfShared`, ./annual.ts), one with a U-value goes through the summary-only year
+ * (scratch columns; what a summary does not read is skipped) and {@link summarizeAnnual}.
  * @param spec - the window (validated; errors name the field by its path)
  * @param years - the shared years of the run
  */
 export function summarizeWindowYear(spec: WindowSpec, years: SharedYears): WindowYearFigures {
   const w = prepareWindow(spec);
-  const series = annualOfPrepared(w, years.of(w), true);
+  const sy = years.of(w);
+  if (spec.glazing.uValue === undefined) return { glassArea: w.glassArea, summary: summaryOfTotals(yearTotalsOfShared(w, sy), sy.stampSerial) };
+  // Conduction may mark further hours missing (a dry-bulb series with gaps): the summary-only year.
+  const series = annualOfPrepared(w, sy, true);
   return { glassArea: series.glassArea, summary: summarizeAnnual(series) };
 }

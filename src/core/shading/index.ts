@@ -8,6 +8,6 @@
  */
 export { MASK_DEFAULT_YEAR, monthHourMask, shadingMaskGrid } from './shadingMask';
 export { skylineSkyViewFactor } from './skyline';
-export { hasShading, PATH_SHADING_NAMES, type PreparedShading, prepareShading, requireShading, requireVerticalForShading, shadowDepth, shadowWidth, sunlitFraction, type WindowOpening } from './sunlit';
+export { hasShading, PATH_SHADING_NAMES, type PreparedShading, prepareShading, requireShading, requireVerticalForShading, shadowDepth, shadowWidth, sunlitFraction, type WallFrameColumns, type WindowOpening } from './sunlit';
 export { type Fin, type Overhang, type Shading } from './types';
 export { BARE_VIEW_FACTORS, HORIZON_BAND_DEG, pointViewFactors, VIEW_FACTOR_ERROR, type WindowViewFactors, windowViewFactors } from './viewFactors';

@@ -95,98 +95,143 @@ export function shadowPlanOf(width: number, height: number, shading: Shading): S
  * @param q - −cos β sin γ
  * @returns sunlit area / glass area, 0…1
  * @remarks Lit rectangle (glass + (aR, bR)) ∩ opening; shaded area by inclusion–exclusion of the
- * shadow boxes (module comment), each term exact by {@link rectangleStripArea}.
+ * shadow boxes (module comment), each term exact by {@link rectangleStripArea}. One sun through
+ * {@link sunlitFromPlanRows}, the one implementation.
  */
 export function sunlitFromPlan(g: ShadowPlan, a: number, b: number, p: number, q: number): number {
-  const { width, height } = g;
-  const ar = a * g.reveal;
-  const br = b * g.reveal;
-  const lx0 = ar > 0 ? ar : 0;
-  const lx1 = ar < 0 ? width + ar : width;
-  const ly0 = br > 0 ? br : 0;
-  const ly1 = br < 0 ? height + br : height;
-  if (!(lx1 > lx0 && ly1 > ly0)) return 0;
-  const litArea = (lx1 - lx0) * (ly1 - ly0);
+  ONE_A[0] = a;
+  ONE_B[0] = b;
+  ONE_P[0] = p;
+  ONE_Q[0] = q;
+  sunlitFromPlanRows(g, ONE_ROW, 1, ONE_A, ONE_B, ONE_P, ONE_Q, ONE_RESULT);
+  return ONE_RESULT[0];
+}
 
-  // Overhang: y and w bounded (w order kept: p > 0 and xl ≤ xr).
-  let oh = false;
-  let oy0 = 0;
-  let ow0 = 0;
-  let ow1 = 0;
-  const oy1 = g.ohY;
-  if (g.overhang) {
-    const dx = -a * g.ohP;
-    oy0 = oy1 - b * g.ohP;
-    const xl = g.ohXl;
-    const xr = g.ohXr;
-    const bx0 = dx < 0 ? xl + dx : xl;
-    const bx1 = dx > 0 ? xr + dx : xr;
-    if (bx1 > lx0 && bx0 < lx1 && oy1 > ly0 && oy0 < ly1) {
-      oh = true;
-      ow0 = p * xl + q * oy1;
-      ow1 = p * xr + q * oy1;
-    }
-  }
-  // Fins: x and w bounded.
-  let lf = false;
-  let lx0f = 0;
-  let lx1f = 0;
-  let lw0 = 0;
-  let lw1 = 0;
-  if (g.leftFin) {
-    const x = g.lfX;
-    const xs = x - a * g.lfP;
-    lx0f = xs < x ? xs : x;
-    lx1f = xs < x ? x : xs;
-    if (lx1f > lx0 && lx0f < lx1 && g.lfYt > ly0 && g.lfYb - b * g.lfP < ly1) {
-      lf = true;
-      const wb = p * x + q * g.lfYb;
-      const wt = p * x + q * g.lfYt;
-      lw0 = wb < wt ? wb : wt;
-      lw1 = wb < wt ? wt : wb;
-    }
-  }
-  let rf = false;
-  let rx0f = 0;
-  let rx1f = 0;
-  let rw0 = 0;
-  let rw1 = 0;
-  if (g.rightFin) {
-    const x = g.rfX;
-    const xs = x - a * g.rfP;
-    rx0f = xs < x ? xs : x;
-    rx1f = xs < x ? x : xs;
-    if (rx1f > lx0 && rx0f < lx1 && g.rfYt > ly0 && g.rfYb - b * g.rfP < ly1) {
-      rf = true;
-      const wb = p * x + q * g.rfYb;
-      const wt = p * x + q * g.rfYt;
-      rw0 = wb < wt ? wb : wt;
-      rw1 = wb < wt ? wt : wb;
-    }
-  }
-  if (!oh && !lf && !rf) return litArea / g.area;
+/** Scratch of {@link sunlitFromPlan}: row 0, its a, b, p, q and its result. */
+const ONE_ROW = new Int32Array(1);
+const ONE_A = new Float64Array(1);
+const ONE_B = new Float64Array(1);
+const ONE_P = new Float64Array(1);
+const ONE_Q = new Float64Array(1);
+const ONE_RESULT = new Float64Array(1);
 
-  // Inclusion–exclusion; each group's box is the intersection of its members' intervals with the lit rectangle.
-  const oY0 = oy0 > ly0 ? oy0 : ly0;
-  const oY1 = oy1 < ly1 ? oy1 : ly1;
-  const lX0 = lx0f > lx0 ? lx0f : lx0;
-  const lX1 = lx1f < lx1 ? lx1f : lx1;
-  const rX0 = rx0f > lx0 ? rx0f : lx0;
-  const rX1 = rx1f < lx1 ? rx1f : lx1;
-  let covered = 0;
-  if (oh) covered += rectangleStripArea(lx0, oY0, lx1, oY1, p, q, ow0, ow1);
-  if (lf) {
-    covered += rectangleStripArea(lX0, ly0, lX1, ly1, p, q, lw0, lw1);
-    if (oh) covered -= rectangleStripArea(lX0, oY0, lX1, oY1, p, q, ow0 > lw0 ? ow0 : lw0, ow1 < lw1 ? ow1 : lw1);
+/**
+ * {@link sunlitFromPlan} for many suns (e.g. the hours of a year): for each row i = rows[k],
+ * k < count, the sun's a, b, p and q are read from aCol[i], bCol[i], pCol[i], qCol[i] and the sunlit
+ * fraction written to out[i]. A loop rather than a call per sun: the hourly path passes no number
+ * through a call (which the engine would box), with the same arithmetic sun by sun.
+ * @param g - the window's {@link ShadowPlan}
+ * @param rows - the rows to work out
+ * @param count - how many of `rows`
+ * @param aCol - tan γ by row
+ * @param bCol - tan Ω by row (> 0)
+ * @param pCol - sin β by row (> 0)
+ * @param qCol - −cos β sin γ by row
+ * @param out - filled with the sunlit fraction, 0…1, at each row
+ */
+export function sunlitFromPlanRows(g: ShadowPlan, rows: Int32Array, count: number, aCol: Float64Array, bCol: Float64Array, pCol: Float64Array, qCol: Float64Array, out: Float64Array): void {
+  const { width, height, area } = g;
+  for (let k = 0; k < count; k++) {
+    const i = rows[k];
+    const a = aCol[i];
+    const b = bCol[i];
+    const p = pCol[i];
+    const q = qCol[i];
+    const ar = a * g.reveal;
+    const br = b * g.reveal;
+    const lx0 = ar > 0 ? ar : 0;
+    const lx1 = ar < 0 ? width + ar : width;
+    const ly0 = br > 0 ? br : 0;
+    const ly1 = br < 0 ? height + br : height;
+    if (!(lx1 > lx0 && ly1 > ly0)) {
+      out[i] = 0;
+      continue;
+    }
+    const litArea = (lx1 - lx0) * (ly1 - ly0);
+
+    // Overhang: y and w bounded (w order kept: p > 0 and xl ≤ xr).
+    let oh = false;
+    let oy0 = 0;
+    let ow0 = 0;
+    let ow1 = 0;
+    const oy1 = g.ohY;
+    if (g.overhang) {
+      const dx = -a * g.ohP;
+      oy0 = oy1 - b * g.ohP;
+      const xl = g.ohXl;
+      const xr = g.ohXr;
+      const bx0 = dx < 0 ? xl + dx : xl;
+      const bx1 = dx > 0 ? xr + dx : xr;
+      if (bx1 > lx0 && bx0 < lx1 && oy1 > ly0 && oy0 < ly1) {
+        oh = true;
+        ow0 = p * xl + q * oy1;
+        ow1 = p * xr + q * oy1;
+      }
+    }
+    // Fins: x and w bounded.
+    let lf = false;
+    let lx0f = 0;
+    let lx1f = 0;
+    let lw0 = 0;
+    let lw1 = 0;
+    if (g.leftFin) {
+      const x = g.lfX;
+      const xs = x - a * g.lfP;
+      lx0f = xs < x ? xs : x;
+      lx1f = xs < x ? x : xs;
+      if (lx1f > lx0 && lx0f < lx1 && g.lfYt > ly0 && g.lfYb - b * g.lfP < ly1) {
+        lf = true;
+        const wb = p * x + q * g.lfYb;
+        const wt = p * x + q * g.lfYt;
+        lw0 = wb < wt ? wb : wt;
+        lw1 = wb < wt ? wt : wb;
+      }
+    }
+    let rf = false;
+    let rx0f = 0;
+    let rx1f = 0;
+    let rw0 = 0;
+    let rw1 = 0;
+    if (g.rightFin) {
+      const x = g.rfX;
+      const xs = x - a * g.rfP;
+      rx0f = xs < x ? xs : x;
+      rx1f = xs < x ? x : xs;
+      if (rx1f > lx0 && rx0f < lx1 && g.rfYt > ly0 && g.rfYb - b * g.rfP < ly1) {
+        rf = true;
+        const wb = p * x + q * g.rfYb;
+        const wt = p * x + q * g.rfYt;
+        rw0 = wb < wt ? wb : wt;
+        rw1 = wb < wt ? wt : wb;
+      }
+    }
+    if (!oh && !lf && !rf) {
+      out[i] = litArea / area;
+      continue;
+    }
+
+    // Inclusion–exclusion; each group's box is the intersection of its members' intervals with the lit rectangle.
+    const oY0 = oy0 > ly0 ? oy0 : ly0;
+    const oY1 = oy1 < ly1 ? oy1 : ly1;
+    const lX0 = lx0f > lx0 ? lx0f : lx0;
+    const lX1 = lx1f < lx1 ? lx1f : lx1;
+    const rX0 = rx0f > lx0 ? rx0f : lx0;
+    const rX1 = rx1f < lx1 ? rx1f : lx1;
+    let covered = 0;
+    if (oh) covered += rectangleStripArea(lx0, oY0, lx1, oY1, p, q, ow0, ow1);
+    if (lf) {
+      covered += rectangleStripArea(lX0, ly0, lX1, ly1, p, q, lw0, lw1);
+      if (oh) covered -= rectangleStripArea(lX0, oY0, lX1, oY1, p, q, ow0 > lw0 ? ow0 : lw0, ow1 < lw1 ? ow1 : lw1);
+    }
+    // No left-and-right terms: both fin shadows are shifted by −a per unit depth, so the one on the
+    // side the shift points away from the opening lies wholly outside it (x ≤ −g ≤ 0 for the left fin
+    // when a ≥ 0, x ≥ W + g ≥ W for the right fin when a ≤ 0) and was left out above.
+    if (rf) {
+      covered += rectangleStripArea(rX0, ly0, rX1, ly1, p, q, rw0, rw1);
+      if (oh) covered -= rectangleStripArea(rX0, oY0, rX1, oY1, p, q, ow0 > rw0 ? ow0 : rw0, ow1 < rw1 ? ow1 : rw1);
+    }
+    const shaded = covered < 0 ? 0 : covered > litArea ? litArea : covered;
+    const f = (litArea - shaded) / area;
+    out[i] = f < 0 ? 0 : f > 1 ? 1 : f;
   }
-  // No left-and-right terms: both fin shadows are shifted by −a per unit depth, so the one on the
-  // side the shift points away from the opening lies wholly outside it (x ≤ −g ≤ 0 for the left fin
-  // when a ≥ 0, x ≥ W + g ≥ W for the right fin when a ≤ 0) and was left out above.
-  if (rf) {
-    covered += rectangleStripArea(rX0, ly0, rX1, ly1, p, q, rw0, rw1);
-    if (oh) covered -= rectangleStripArea(rX0, oY0, rX1, oY1, p, q, ow0 > rw0 ? ow0 : rw0, ow1 < rw1 ? ow1 : rw1);
-  }
-  const shaded = covered < 0 ? 0 : covered > litArea ? litArea : covered;
-  const f = (litArea - shaded) / g.area;
-  return f < 0 ? 0 : f > 1 ? 1 : f;
 }

@@ -53,7 +53,7 @@
  */
 import { RAD, wrap180, SunpaneError, describeValue, requireFinite, requireRange } from '../common';
 import { writeQuadHalfPlanes } from './polygon';
-import { shadowPlanOf, sunlitFromPlan } from './shadowPlan';
+import { shadowPlanOf, sunlitFromPlan, sunlitFromPlanRows } from './shadowPlan';
 import { requireSkyline, skylineElevationUnchecked } from './skyline';
 import type { Fin, Overhang, Shading } from './types';
 
@@ -368,6 +368,17 @@ export interface PreparedShading {
    * @returns as {@link sunlit}
    */
   sunlitInWallFrame(sunAltitude: number, sunAzimuth: number, gamma: number, sinBeta: number, cosBeta: number, sinGamma: number, cosGamma: number): number;
+  /**
+   * {@link sunlitInWallFrame} for many rows (e.g. the hours of a year): for each row i = rows[k],
+   * k < count, the sun is read from the columns of `sun` at i and the sunlit fraction written to
+   * out[i] — the same numbers, without a call per row (the hourly path passes no number through a
+   * call, which the engine would box). Rows not listed are left as they are.
+   * @param rows - the rows to work out (each below the columns' and `out`'s length)
+   * @param count - how many of `rows`
+   * @param sun - the sun by row in the wall frame
+   * @param out - filled with the sunlit fraction, 0…1, at each listed row
+   */
+  sunlitOfRows(rows: Int32Array, count: number, sun: WallFrameColumns, out: Float64Array): void;
 }
 
 /**
@@ -398,22 +409,106 @@ export function prepareShading(window: WindowOpening, shading: Shading, surfaceA
     shades,
     sunlit: (sunAltitude, sunAzimuth) => sunlitKernel(width, height, copy, shades, sunAltitude, sunAzimuth, surfaceAzimuth),
     sunlitInWallFrame: (sunAltitude, sunAzimuth, gamma, sinBeta, cosBeta, sinGamma, cosGamma) => {
+      const one = ONE_SUN;
+      one.altitude[0] = sunAltitude;
+      one.azimuth[0] = sunAzimuth;
+      one.sinAltitude[0] = sinBeta;
+      one.cosAltitude[0] = cosBeta;
+      one.gamma[0] = gamma;
+      one.sinGamma[0] = sinGamma;
+      one.cosGamma[0] = cosGamma;
+      sunlitOfRows(ONE_ROW, 1, one, one.out);
+      return one.out[0];
+    },
+    sunlitOfRows,
+  };
+
+  /** The one implementation of {@link PreparedShading.sunlitOfRows} and (one row) sunlitInWallFrame. */
+  function sunlitOfRows(rows: Int32Array, count: number, sun: WallFrameColumns, out: Float64Array): void {
+    const { altitude, azimuth, sinAltitude, cosAltitude, gamma, sinGamma, cosGamma } = sun;
+    const s = planScratch(out.length);
+    let m = 0;
+    for (let k = 0; k < count; k++) {
+      const i = rows[k];
+      const sunAltitude = altitude[i];
+      const g = gamma[i];
       // The tests of sunSlopes and slopesFrom, in the same order, on the caller's values.
-      if (!(sunAltitude > 0) || gamma <= -90 || gamma >= 90) return 0;
-      const sz = cosBeta * cosGamma;
-      if (!(sz > 0)) return 0;
-      if (!shades) return 1;
+      if (!(sunAltitude > 0) || g <= -90 || g >= 90) {
+        out[i] = 0;
+        continue;
+      }
+      const cosBeta = cosAltitude[i];
+      const sz = cosBeta * cosGamma[i];
+      if (!(sz > 0)) {
+        out[i] = 0;
+        continue;
+      }
+      if (!shades) {
+        out[i] = 1;
+        continue;
+      }
       if (skyline !== undefined) {
+        const sunAzimuth = azimuth[i];
         // skylineElevationUnchecked (src/core/shading/skyline.ts) without its wrap for an azimuth already in 0…360.
         if (sunAzimuth >= 0 && sunAzimuth < 360) {
-          const k = Math.floor((sunAzimuth * sectors) / 360);
-          if (sunAltitude < skyline[k >= sectors ? sectors - 1 : k]) return 0;
-        } else if (sunAltitude < skylineElevationUnchecked(skyline, sunAzimuth)) return 0;
+          const j = Math.floor((sunAzimuth * sectors) / 360);
+          if (sunAltitude < skyline[j >= sectors ? sectors - 1 : j]) {
+            out[i] = 0;
+            continue;
+          }
+        } else if (sunAltitude < skylineElevationUnchecked(skyline, sunAzimuth)) {
+          out[i] = 0;
+          continue;
+        }
       }
-      const q = -cosBeta * sinGamma;
-      return sunlitFromPlan(plan, -q / sz, sinBeta / sz, sinBeta, q); // a = sx / sz, b = sy / sz (as slopesFrom)
-    },
-  };
+      const sinBeta = sinAltitude[i];
+      const q = -cosBeta * sinGamma[i];
+      s.a[i] = -q / sz; // a = sx / sz, b = sy / sz (as slopesFrom)
+      s.b[i] = sinBeta / sz;
+      s.p[i] = sinBeta;
+      s.q[i] = q;
+      s.rows[m++] = i;
+    }
+    if (m > 0) sunlitFromPlanRows(plan, s.rows, m, s.a, s.b, s.p, s.q, out);
+  }
+}
+
+/** The sun by row in the wall frame, as {@link PreparedShading.sunlitOfRows} reads it. */
+export interface WallFrameColumns {
+  /** β [°] and the sun's azimuth [°] (finite, not checked). */
+  altitude: Float64Array;
+  azimuth: Float64Array;
+  /** sin β and cos β. */
+  sinAltitude: Float64Array;
+  cosAltitude: Float64Array;
+  /** γ = `wrap180(surfaceAzimuth − sunAzimuth)` [°], and its sine and cosine (γ in radians as `gamma * RAD`). */
+  gamma: Float64Array;
+  sinGamma: Float64Array;
+  cosGamma: Float64Array;
+}
+
+/** One row of wall-frame sun and its result, for sunlitInWallFrame. */
+const ONE_ROW = new Int32Array(1);
+const ONE_SUN = {
+  altitude: new Float64Array(1),
+  azimuth: new Float64Array(1),
+  sinAltitude: new Float64Array(1),
+  cosAltitude: new Float64Array(1),
+  gamma: new Float64Array(1),
+  sinGamma: new Float64Array(1),
+  cosGamma: new Float64Array(1),
+  out: new Float64Array(1),
+};
+
+/** Scratch of sunlitOfRows: the rows that reach the shadow plan and their a, b, p, q (one call runs at a time). */
+let PLAN_SCRATCH = { rows: new Int32Array(0), a: new Float64Array(0), b: new Float64Array(0), p: new Float64Array(0), q: new Float64Array(0) };
+
+function planScratch(n: number): typeof PLAN_SCRATCH {
+  if (PLAN_SCRATCH.rows.length < n) {
+    const size = Math.max(n, 8784);
+    PLAN_SCRATCH = { rows: new Int32Array(size), a: new Float64Array(size), b: new Float64Array(size), p: new Float64Array(size), q: new Float64Array(size) };
+  }
+  return PLAN_SCRATCH;
 }
 
 /**

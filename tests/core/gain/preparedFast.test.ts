@@ -1,6 +1,7 @@
 /**
  * The prepared (validate-once) fast paths of the annual series held to their checked twins:
- * - `prepareShading(...).sunlit` / `.sunlitInWallFrame` against `sunlitFraction`,
+ * - `prepareShading(...).sunlit` / `.sunlitInWallFrame` / `.sunlitOfRows` against `sunlitFraction`
+ *   (and many suns at once against one at a time, exactly),
  * - `preparePlane(...).irradiance` against `planeIrradiance`,
  * - `perezPartsKernel` against `perezParts`,
  * - `unionAreaInRectangle` with bounding boxes against the same union without them,
@@ -9,7 +10,7 @@
  * requirement is equality: 1e-12, relative to the size of the value where it is an irradiance.
  */
 import fc from 'fast-check';
-import { RAD, wrap180 } from '../../../src/core/common/angles';
+import { RAD, wrap180, wrap360 } from '../../../src/core/common/angles';
 import { annualSeries } from '../../../src/core/gain/annual';
 import { SunpaneError } from '../../../src/core/common/errors';
 import { circumsolarShade, prepareWindow } from '../../../src/core/gain/prepared';
@@ -87,6 +88,51 @@ describe('prepared shading equals sunlitFraction', () => {
         },
       ),
       { numRuns: 3000, seed: 8 },
+    );
+  });
+
+  test('many suns at once (sunlitOfRows, the hourly path) give each sun\'s own sunlitInWallFrame exactly, and sunlitFraction within 1e-12; rows not listed are left alone', () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0.2, max: 3, noNaN: true }),
+        fc.double({ min: 0.2, max: 3, noNaN: true }),
+        shadingArb,
+        fc.double({ min: 0, max: 360, noNaN: true }),
+        fc.array(fc.tuple(altitudeArb, relativeAzimuthArb), { minLength: 1, maxLength: 40 }),
+        (width, height, shading, surfaceAzimuth, suns) => {
+          if (shading.overhang && width + shading.overhang.extensionLeft + shading.overhang.extensionRight < 0) return;
+          for (const fin of [shading.leftFin, shading.rightFin]) if (fin && height + fin.extensionAbove + fin.extensionBelow < 0) return;
+          const window = { width, height };
+          const prepared = prepareShading(window, shading, surfaceAzimuth);
+          // Row 2k holds sun k; the odd rows are not listed and must keep their marker.
+          const n = 2 * suns.length;
+          const cols = { altitude: new Float64Array(n), azimuth: new Float64Array(n), sinAltitude: new Float64Array(n), cosAltitude: new Float64Array(n), gamma: new Float64Array(n), sinGamma: new Float64Array(n), cosGamma: new Float64Array(n) };
+          const rows = new Int32Array(suns.length);
+          suns.forEach(([altitude, relative], k) => {
+            const i = 2 * k;
+            const sunAzimuth = wrap360(surfaceAzimuth + relative);
+            const gamma = wrap180(surfaceAzimuth - sunAzimuth);
+            cols.altitude[i] = altitude;
+            cols.azimuth[i] = sunAzimuth;
+            cols.sinAltitude[i] = Math.sin(altitude * RAD);
+            cols.cosAltitude[i] = Math.cos(altitude * RAD);
+            cols.gamma[i] = gamma;
+            cols.sinGamma[i] = Math.sin(gamma * RAD);
+            cols.cosGamma[i] = Math.cos(gamma * RAD);
+            rows[k] = i;
+          });
+          const out = new Float64Array(n).fill(-7);
+          prepared.sunlitOfRows(rows, rows.length, cols, out);
+          suns.forEach(([altitude], k) => {
+            const i = 2 * k;
+            const one = prepared.sunlitInWallFrame(altitude, cols.azimuth[i], cols.gamma[i], cols.sinAltitude[i], cols.cosAltitude[i], cols.sinGamma[i], cols.cosGamma[i]);
+            expect(Object.is(out[i], one)).toBe(true);
+            expect(Math.abs(out[i] - sunlitFraction(window, shading, altitude, cols.azimuth[i], surfaceAzimuth))).toBeLessThanOrEqual(EQUAL);
+            expect(out[i + 1]).toBe(-7);
+          });
+        },
+      ),
+      { numRuns: 400, seed: 9 },
     );
   });
 

@@ -66,6 +66,45 @@ describe('windows sharing their site year', () => {
     }
   });
 
+  test('summaries added up while the hours are worked out (windows without a U-value) are bit for bit those of the window\'s own year, field by field', () => {
+    // Every shading kind, facings round the compass (360 too), sky models, the beam-only treatment,
+    // an interior shade, a leap year, the instant convention and each weather kind (the measured
+    // series has missing and dark hours).
+    const shadings: WindowSpec['shading'][] = [
+      {},
+      { overhang: { projection: 0.6, gap: 0.2, extensionLeft: 0.3, extensionRight: 0.3 } },
+      { leftFin: { projection: 0.4, gap: 0, extensionAbove: 0.2, extensionBelow: 0 } },
+      { revealDepth: 0.15 },
+      shadedSpec().shading,
+    ];
+    const specs: WindowSpec[] = [];
+    shadings.forEach((shading, v) => {
+      for (const surfaceAzimuth of [0, 90, 200, 315, 360]) specs.push(baseSpec({ shading, surfaceAzimuth, width: 1.2 + 0.1 * v, weather: { kind: 'ineichenClearSky', linkeTurbidity: [2.8, 3.0, 3.2, 3.4, 3.6, 3.7, 3.8, 3.7, 3.4, 3.2, 3.0, 2.8] } }));
+    });
+    specs.push(
+      shadedSpec({ skyModel: 'hayDavies', diffuseShading: 'beamOnly' }),
+      shadedSpec({ skyModel: 'isotropic', glazing: { shgc: 0.6, panes: 2, interiorAttenuation: 0.7 } }),
+      shadedSpec({ skyModel: 'ashraeClearDay', surfaceAzimuth: 135 }),
+      shadedSpec({ year: 2028 }),
+      shadedSpec({ timeConvention: 'instant', surfaceAzimuth: 250 }),
+      baseSpec({ surfaceTilt: 30, surfaceAzimuth: 200 }),
+      ...windows().filter((w) => w.glazing.uValue === undefined),
+    );
+    const years = new SharedYears();
+    for (const spec of specs) {
+      const shared = summarizeWindowYear(spec, years).summary;
+      const own = summarizeAnnual(ownYear(spec)) as unknown as Record<string, number | number[]>;
+      for (const [k, v] of Object.entries(shared)) {
+        const o = own[k];
+        if (Array.isArray(v)) v.forEach((x, m) => expect([k, m, Object.is(x, (o as number[])[m])]).toEqual([k, m, true]));
+        else expect([k, Object.is(v, o)]).toEqual([k, true]);
+      }
+      expect(Object.keys(shared).sort()).toEqual(Object.keys(own).sort());
+    }
+    // The measured series' missing hours are counted month by month.
+    expect(summarizeWindowYear(windows()[4], years).summary.missingHours).toBeGreaterThan(0);
+  });
+
   test('a window\'s hourly columns from a shared year are exactly those from its own year', () => {
     const years = new SharedYears();
     for (const spec of windows().slice(1, 6)) {
