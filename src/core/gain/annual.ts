@@ -27,7 +27,7 @@ import { SunpaneError, DEG, RAD, acosClamped, requireRange, wrap180 } from '../c
 import { type PreparedWindow, monthlyValue, prepareWindow } from './prepared';
 import { MAX_IRRADIANCE, outdoorTemperatureSource } from './windowSpec';
 import { DAILY_RANGE_FRACTIONS } from './outdoorTemperature';
-import { type PerezBrightnessColumns, type PlaneParts, type PreparedPlane, preparePlane } from '../sky';
+import { type PerezBrightnessColumns, type PlaneRows, type PreparedPlane, preparePlane } from '../sky';
 import type { ShgcCurve } from '../glazing';
 import { type PreparedShading, prepareShading } from '../shading';
 import { annualSunPath, type SunPathYear } from '../sun';
@@ -324,13 +324,12 @@ export function yearTotalsOfShared(w: PreparedWindow, sy: SharedYear): YearTotal
   const surfAz = spec.surfaceAzimuth;
   const shade = w.vertical ? prepareShading({ width: spec.width, height: spec.height }, spec.shading, surfAz) : undefined;
   const plane = preparePlane({ surfaceTilt: tilt, surfaceAzimuth: surfAz, groundAlbedo: spec.groundAlbedo, skyModel: w.skyModel, shade: w.shade });
-  const dniExtra = plane.needsDniExtra ? dniExtraByDay() : NO_DNI_EXTRA;
   const brightness = plane.perez ? perezBrightnessOf(sy) : undefined;
   hourlyAngles(0, n, sy.daylight, sy, Math.cos(tilt * RAD), Math.sin(tilt * RAD), Math.cos(surfAz * RAD), Math.sin(surfAz * RAD), scratch.incidence, scratch.profileAngle, true);
   hourlyShading(0, n, sy.daylight, shade, w.curve, surfAz, sy, scratch.incidence, scratch.sunlitFraction, scratch.shgc);
   totals.sunOnWallHours = SHADING_TOTALS.hours;
   totals.sunlitSum = SHADING_TOTALS.sunlitSum;
-  hourlyGainTotals(sy.lit, plane, brightness, dniExtra, w.solarArea * w.interiorAttenuation, w.solarArea * w.interiorAttenuationDiffuse, w.curve.diffuse, w.beamOnly ? w.skylineSky : -1, sy, scratch.sunlitFraction, scratch.shgc, monthsOfYear(spec.year), totals);
+  hourlyGainTotals(sy.lit, plane, brightness, w.solarArea * w.interiorAttenuation, w.solarArea * w.interiorAttenuationDiffuse, w.curve.diffuse, w.beamOnly ? w.skylineSky : -1, sy, scratch.sunlitFraction, scratch.shgc, monthsOfYear(spec.year), totals);
   return totals;
 }
 
@@ -369,7 +368,6 @@ function runPasses(w: PreparedWindow, sun: SharedYear | SunColumns, out: AnnualS
   const shade = w.vertical ? prepareShading({ width: spec.width, height: spec.height }, spec.shading, surfAz) : undefined;
   // The window's diffuse shading (view factors, worked out once in prepareWindow) goes in as constants.
   const plane = preparePlane({ surfaceTilt: tilt, surfaceAzimuth: surfAz, groundAlbedo: spec.groundAlbedo, skyModel: w.skyModel, shade: w.shade });
-  const dniExtra = plane.needsDniExtra ? dniExtraByDay() : NO_DNI_EXTRA;
   const brightness = hours?.shared && plane.perez ? perezBrightnessOf(sun as SharedYear) : undefined;
   const summaryOnly = hours?.summaryOnly === true;
 
@@ -380,7 +378,7 @@ function runPasses(w: PreparedWindow, sun: SharedYear | SunColumns, out: AnnualS
   hourlyAngles(from, to, summaryOnly ? hours?.daylight : undefined, sun, Math.cos(tilt * RAD), Math.sin(tilt * RAD), Math.cos(surfAz * RAD), Math.sin(surfAz * RAD), out.incidence, out.profileAngle, summaryOnly);
   hourlyShading(from, to, hours?.daylight, shade, w.curve, surfAz, sun, out.incidence, out.sunlitFraction, out.shgc);
   if (out.hasConduction) hourlyConduction(w, out, from, to); // before the gain: a missing dry-bulb marks its hour missing
-  hourlyGain(from, to, hours?.lit, plane, brightness, dniExtra, w.solarArea * w.interiorAttenuation, w.solarArea * w.interiorAttenuationDiffuse, w.radiantFraction, w.radiantFractionDiffuse, w.curve.diffuse, w.beamOnly ? w.skylineSky : -1, sun, out, summaryOnly);
+  hourlyGain(from, to, hours?.lit, plane, brightness, w.solarArea * w.interiorAttenuation, w.solarArea * w.interiorAttenuationDiffuse, w.radiantFraction, w.radiantFractionDiffuse, w.curve.diffuse, w.beamOnly ? w.skylineSky : -1, sun, out, summaryOnly);
 }
 
 /** One row of a window's year, worked out alone: the row's values of the columns of {@link AnnualSeries}. */
@@ -592,9 +590,6 @@ function hourlyConduction(w: PreparedWindow, out: AnnualSeries, from: number, to
   }
 }
 
-/** Zeros by day of the year, for sky models that need no extraterrestrial irradiance. */
-const NO_DNI_EXTRA = new Float64Array(367);
-
 /**
  * Per-hour scratch columns (a year has at most 8784 hours), reused since one call runs at a time:
  * sin γ and cos γ of the horizontal shadow angle, and cos θ, left by pass 1 for the later passes.
@@ -602,6 +597,47 @@ const NO_DNI_EXTRA = new Float64Array(367);
 const SIN_GAMMA_SCRATCH = new Float64Array(8784);
 const COS_GAMMA_SCRATCH = new Float64Array(8784);
 const COS_THETA_SCRATCH = new Float64Array(8784);
+/** The hours with light gathered by pass 3, in order. */
+const LIT_SCRATCH = new Int32Array(8784);
+/** A fixed multiplier on the circumsolar part, by row (the beam-only treatment). */
+const CIRCUMSOLAR_SCRATCH = new Float64Array(8784);
+
+let dniExtraRows: Float64Array | undefined;
+
+/** Extraterrestrial normal irradiance by row of an hourly year [W/m²]: that of the row's day (Spencer 1971, {@link dniExtraByDay}). */
+function dniExtraByRow(): Float64Array {
+  if (dniExtraRows === undefined) {
+    const byDay = dniExtraByDay();
+    const rows = new Float64Array(8784);
+    for (let i = 0; i < rows.length; i++) rows[i] = byDay[((i / 24) | 0) + 1];
+    dniExtraRows = rows;
+  }
+  return dniExtraRows;
+}
+
+/**
+ * The columns pass 3 hands to {@link PreparedPlane.irradianceRows}: the sun, the weather, the cosine
+ * of the incidence (pass 1), the extraterrestrial irradiance of each row's day, the multiplier on
+ * the circumsolar part (the hour's sunlit fraction, or the fixed one of the beam-only treatment),
+ * and the columns of `into` to fill.
+ */
+function planeRowsOf(sun: SunColumns, dni: Float64Array, dhi: Float64Array, sunlitFraction: Float64Array, circumsolarFixed: number, into: Pick<AnnualSeries, 'beam' | 'sky' | 'ground' | 'skyUnshaded' | 'groundUnshaded'>): PlaneRows {
+  return {
+    dni,
+    dhi,
+    altitude: sun.altitude,
+    sinAltitude: sun.sinAltitude,
+    cosIncidence: COS_THETA_SCRATCH,
+    dniExtra: dniExtraByRow(),
+    circumsolar: circumsolarFixed < 0 ? sunlitFraction : CIRCUMSOLAR_SCRATCH.fill(circumsolarFixed),
+    beam: into.beam,
+    sky: into.sky,
+    ground: into.ground,
+    skyUnshaded: into.skyUnshaded,
+    groundUnshaded: into.groundUnshaded,
+  };
+}
+
 /** γ of the hours with the sun in front of the plane, and those hours in order (pass 2). */
 const GAMMA_SCRATCH = new Float64Array(8784);
 const FRONT_SCRATCH = new Int32Array(8784);
@@ -737,13 +773,14 @@ const SHADING_TOTALS = { hours: 0, sunlitSum: 0 };
 
 /**
  * Pass 3 of {@link annualOfPrepared}: irradiance on the plane and gain for the hours with weather
- * and light; missing and dark rows stay 0.
+ * and light; missing and dark rows stay 0. The hours are gathered first and their irradiance worked
+ * out in one call ({@link PreparedPlane.irradianceRows}, straight into the series' columns), so that
+ * no number goes through a call per hour.
  * @param from - first row (when no list)
  * @param n - row after the last (when no list)
  * @param list - the hours to consider, in order, instead of the range (the lit hours of a year)
  * @param plane - the prepared plane
  * @param brightness - a shared year's Perez brightness coefficients by hour, when the plane may use them
- * @param dniExtra - extraterrestrial normal irradiance by day of the year [W/m²] (index 1…366)
  * @param kb - area × beam interior attenuation [m²]
  * @param kd - area × diffuse interior attenuation [m²]
  * @param frb - radiant fraction of the beam gain [-]
@@ -761,7 +798,6 @@ function hourlyGain(
   list: Int32Array | undefined,
   plane: PreparedPlane,
   brightness: PerezBrightnessColumns | undefined,
-  dniExtra: Float64Array,
   kb: number,
   kd: number,
   frb: number,
@@ -772,32 +808,26 @@ function hourlyGain(
   out: AnnualSeries,
   summaryOnly: boolean,
 ): void {
-  const { dni: dniColumn, dhi: dhiColumn, missing, sunlitFraction, shgc, beam, sky, ground, skyUnshaded, groundUnshaded, gain, radiant, convective, gainBeam, gainDiffuse } = out;
-  const { altitude: alt, sinAltitude: sinAlt } = sun;
-  const cosT = COS_THETA_SCRATCH;
-  const parts: PlaneParts = { beam: 0, sky: 0, ground: 0, total: 0, skyUnshaded: 0, groundUnshaded: 0 };
+  const { dni: dniColumn, dhi: dhiColumn, missing, sunlitFraction, shgc, beam, sky, ground, gain, radiant, convective, gainBeam, gainDiffuse } = out;
+  const alt = sun.altitude;
+  // The hours with weather and light, gathered; their irradiance worked out in one call (no number
+  // through a call per hour), then their gain.
+  const rows = LIT_SCRATCH;
+  let m = 0;
   const count = list ? list.length : n;
   for (let k = list ? 0 : from; k < count; k++) {
     const i = list ? list[k] : k;
     if (missing[i] === 1) continue;
-    const dni = dniColumn[i];
-    const dhi = dhiColumn[i];
-    const a = alt[i];
-    const sunUp = a > 0;
-    if (dhi === 0 && (dni === 0 || !sunUp)) continue; // dark hour: irradiance and gain stay 0
-    const lit = sunlitFraction[i];
-    const circumsolar = circumsolarFixed < 0 ? lit : circumsolarFixed;
-    if (brightness === undefined) plane.irradiance(parts, sunUp ? dni : 0, dhi, a, sinAlt[i], cosT[i], dniExtra[((i / 24) | 0) + 1], circumsolar);
-    else plane.irradianceShared(parts, sunUp ? dni : 0, dhi, a, sinAlt[i], cosT[i], dniExtra[((i / 24) | 0) + 1], circumsolar, brightness, i);
+    if (dhiColumn[i] === 0 && (dniColumn[i] === 0 || !(alt[i] > 0))) continue; // dark hour: irradiance and gain stay 0
+    rows[m++] = i;
+  }
+  plane.irradianceRows(rows, m, planeRowsOf(sun, dniColumn, dhiColumn, sunlitFraction, circumsolarFixed, out), brightness);
+  for (let k = 0; k < m; k++) {
+    const i = rows[k];
     // Gain equation of src/core/gain/windowGain.ts windowGainParts, inlined for the hourly path.
-    const qb = kb * parts.beam * lit * shgc[i];
-    const qd = kd * (parts.sky + parts.ground) * shgcDiffuse;
+    const qb = kb * beam[i] * sunlitFraction[i] * shgc[i];
+    const qd = kd * (sky[i] + ground[i]) * shgcDiffuse;
     const q = qb + qd;
-    beam[i] = parts.beam;
-    sky[i] = parts.sky;
-    ground[i] = parts.ground;
-    skyUnshaded[i] = parts.skyUnshaded;
-    groundUnshaded[i] = parts.groundUnshaded;
     gain[i] = q;
     if (summaryOnly) continue; // a summary reads none of the parts below
     const r = frb * qb + frd * qd;
@@ -816,7 +846,6 @@ function hourlyGain(
  * @param list - the lit hours of the shared year, in order
  * @param plane - the prepared plane
  * @param brightness - the shared year's Perez brightness coefficients, when the plane uses them
- * @param dniExtra - extraterrestrial normal irradiance by day of the year [W/m²] (index 1…366)
  * @param kb - area × beam interior attenuation [m²]
  * @param kd - area × diffuse interior attenuation [m²]
  * @param shgcDiffuse - diffuse SHGC [-]
@@ -831,7 +860,6 @@ function hourlyGainTotals(
   list: Int32Array,
   plane: PreparedPlane,
   brightness: PerezBrightnessColumns | undefined,
-  dniExtra: Float64Array,
   kb: number,
   kd: number,
   shgcDiffuse: number,
@@ -842,10 +870,10 @@ function hourlyGainTotals(
   months: Uint8Array,
   totals: YearTotals,
 ): void {
-  const { dni: dniColumn, dhi: dhiColumn, altitude: alt, sinAltitude: sinAlt } = sy;
-  const cosT = COS_THETA_SCRATCH;
+  const scratch = yearScratch(sy.hours);
+  plane.irradianceRows(list, list.length, planeRowsOf(sy, sy.dni, sy.dhi, sunlitFraction, circumsolarFixed, scratch), brightness);
+  const { beam, sky, ground, skyUnshaded, groundUnshaded } = scratch;
   const monthlyWh = totals.monthlyWh;
-  const parts: PlaneParts = { beam: 0, sky: 0, ground: 0, total: 0, skyUnshaded: 0, groundUnshaded: 0 };
   let peakW = totals.peakW;
   let peakIndex = totals.peakIndex;
   let sunlitHours = totals.sunlitHours;
@@ -855,17 +883,13 @@ function hourlyGainTotals(
   let diffuseAll = totals.diffuseAll;
   for (let k = 0; k < list.length; k++) {
     const i = list[k];
-    const a = alt[i];
-    const day = (i / 24) | 0;
     const lit = sunlitFraction[i];
-    const circumsolar = circumsolarFixed < 0 ? lit : circumsolarFixed;
-    if (brightness === undefined) plane.irradiance(parts, a > 0 ? dniColumn[i] : 0, dhiColumn[i], a, sinAlt[i], cosT[i], dniExtra[day + 1], circumsolar);
-    else plane.irradianceShared(parts, a > 0 ? dniColumn[i] : 0, dhiColumn[i], a, sinAlt[i], cosT[i], dniExtra[day + 1], circumsolar, brightness, i);
     // Gain equation of src/core/gain/windowGain.ts windowGainParts, as in hourlyGain.
-    const bm = parts.beam;
+    const bm = beam[i];
     const s = shgc[i];
-    const q = kb * bm * lit * s + kd * (parts.sky + parts.ground) * shgcDiffuse;
-    monthlyWh[months[day] - 1] += q;
+    const d = sky[i] + ground[i];
+    const q = kb * bm * lit * s + kd * d * shgcDiffuse;
+    monthlyWh[months[(i / 24) | 0] - 1] += q;
     if (q > peakW) {
       peakW = q;
       peakIndex = i;
@@ -874,8 +898,8 @@ function hourlyGainTotals(
     const b = bm * s;
     beamAll += b;
     beamKept += b * lit;
-    diffuseKept += parts.sky + parts.ground;
-    diffuseAll += parts.skyUnshaded + parts.groundUnshaded;
+    diffuseKept += d;
+    diffuseAll += skyUnshaded[i] + groundUnshaded[i];
   }
   totals.peakW = peakW;
   totals.peakIndex = peakIndex;

@@ -198,50 +198,135 @@ export interface PlaneParts {
 }
 
 /**
- * The one implementation of the plane irradiance, behind {@link planeIrradiance} and
+ * The plane irradiance of one hour, behind {@link planeIrradiance} and the one-hour calls of
  * {@link preparePlane}: inputs already checked, the sun given by its altitude, the sine of the
  * altitude and the cosine of the incidence angle, `circumsolar` the hour's multiplier on the
- * circumsolar part (the sunlit fraction); writes `out`.
+ * circumsolar part (the sunlit fraction); writes `out`. It runs {@link planeKernelRows} (the one
+ * implementation) for one row; with `shared`, the brightness coefficients of row `hour`.
  */
 function planeKernel(out: PlaneParts, p: PlaneConstants, dni: number, dhi: number, altitude: number, sinAltitude: number, cosIncidence: number, dniExtra: number, circumsolar: number, shared?: PerezBrightnessColumns, hour = 0): void {
-  const sunUp = altitude > 0;
-  const beam = sunUp && cosIncidence > 0 ? dni * cosIncidence : 0;
-  const ghi = (sunUp ? dni * sinAltitude : 0) + dhi;
-  let sky: number;
-  let skyUnshaded: number;
-  if (!sunUp || p.model === 'isotropic') {
-    skyUnshaded = dhi * p.isotropicView; // D&B Eq. 2.15.1
-    sky = skyUnshaded * p.isotropicShade;
-  } else if (p.model === 'ashraeClearDay') {
-    skyUnshaded = dhi * (verticalDiffuseRatioFromCosine(cosIncidence) * p.sinTilt + p.cosTiltUp); // ASHRAE ch. 14 clear-day tilted form
-    sky = skyUnshaded * p.isotropicShade; // no separate circumsolar part: all of it × the sky view ratio
-  } else if (p.model === 'hayDavies') {
-    const ai = dni / dniExtra < 1 ? dni / dniExtra : 1;
-    const rb = (cosIncidence > 0 ? cosIncidence : 0) / (sinAltitude > COS_85 ? sinAltitude : COS_85);
-    const isotropic = dhi * (1 - ai) * p.isotropicView;
-    const disc = dhi * ai * rb;
-    skyUnshaded = isotropic + disc; // D&B Eq. 2.16.4
-    sky = isotropic * p.isotropicShade + disc * circumsolar;
-  } else {
-    let parts: PerezParts;
-    if (shared !== undefined && dhi > 0) {
-      // The hour's brightness coefficients, worked out once for every plane under this sky (perezBrightnessColumns).
-      p.perez.f1 = shared.f1[hour];
-      p.perez.f2 = shared.f2[hour];
-      parts = perezCombineKernel(p.perez, p.isotropicView, p.sinTilt, dhi, sinAltitude, cosIncidence);
-    } else parts = perezPartsKernel(p.perez, p.isotropicView, p.sinTilt, dhi, dni, dniExtra, 90 - altitude, sinAltitude, airMassKastenYoungFromSine(altitude, sinAltitude), cosIncidence, PEREZ_1990_COMPOSITE);
-    skyUnshaded = parts.total;
-    const shaded = parts.isotropic * p.isotropicShade + parts.circumsolar * circumsolar + parts.horizon * p.horizonShade;
-    sky = shaded > 0 ? shaded : 0; // floored at 0 as the Perez total is
+  const one = ONE_HOUR;
+  one.dni[0] = dni;
+  one.dhi[0] = dhi;
+  one.altitude[0] = altitude;
+  one.sinAltitude[0] = sinAltitude;
+  one.cosIncidence[0] = cosIncidence;
+  one.dniExtra[0] = dniExtra;
+  one.circumsolar[0] = circumsolar;
+  let brightness: PerezBrightnessColumns | undefined;
+  if (shared !== undefined) {
+    ONE_BRIGHTNESS.f1[0] = shared.f1[hour];
+    ONE_BRIGHTNESS.f2[0] = shared.f2[hour];
+    brightness = ONE_BRIGHTNESS;
   }
-  const groundUnshaded = (ghi * p.albedo * p.oneMinusCosTilt) / 2; // D&B Eq. 2.15.1
-  const ground = groundUnshaded * p.groundShade;
+  planeKernelRows(p, ONE_ROW, 1, one, brightness);
+  const beam = one.beam[0];
+  const sky = one.sky[0];
+  const ground = one.ground[0];
   out.beam = beam;
   out.sky = sky;
   out.ground = ground;
   out.total = beam + sky + ground;
-  out.skyUnshaded = skyUnshaded;
-  out.groundUnshaded = groundUnshaded;
+  out.skyUnshaded = one.skyUnshaded[0];
+  out.groundUnshaded = one.groundUnshaded[0];
+}
+
+/** One row of inputs and results for {@link planeKernel}. */
+const ONE_ROW = new Int32Array(1);
+const ONE_HOUR: PlaneRows = {
+  dni: new Float64Array(1),
+  dhi: new Float64Array(1),
+  altitude: new Float64Array(1),
+  sinAltitude: new Float64Array(1),
+  cosIncidence: new Float64Array(1),
+  dniExtra: new Float64Array(1),
+  circumsolar: new Float64Array(1),
+  beam: new Float64Array(1),
+  sky: new Float64Array(1),
+  ground: new Float64Array(1),
+  skyUnshaded: new Float64Array(1),
+  groundUnshaded: new Float64Array(1),
+};
+const ONE_BRIGHTNESS: PerezBrightnessColumns = { f1: new Float64Array(1), f2: new Float64Array(1) };
+
+/**
+ * The hourly inputs and results of {@link PreparedPlane.irradianceRows}: one column per quantity,
+ * row i of each the same hour.
+ */
+export interface PlaneRows {
+  /** Direct normal and diffuse horizontal irradiance [W/m²], 0…2000 (not checked). */
+  dni: Float64Array;
+  dhi: Float64Array;
+  /** Sun altitude [°] and its sine. */
+  altitude: Float64Array;
+  sinAltitude: Float64Array;
+  /** Cosine of the incidence angle on the plane, −1…1. */
+  cosIncidence: Float64Array;
+  /** Extraterrestrial normal irradiance of the hour's day [W/m²] (not read when {@link PreparedPlane.needsDniExtra} is false). */
+  dniExtra: Float64Array;
+  /** The hour's multiplier on the circumsolar part, 0…1 (the sunlit fraction; 1 unshaded). */
+  circumsolar: Float64Array;
+  /** Filled: beam (unshaded), sky and ground reaching the glass, sky and ground on the bare plane [W/m²]. */
+  beam: Float64Array;
+  sky: Float64Array;
+  ground: Float64Array;
+  skyUnshaded: Float64Array;
+  groundUnshaded: Float64Array;
+}
+
+/**
+ * The one implementation of the plane irradiance: for each row i = rows[k], k < count, the hour's
+ * inputs read from `c` at i, its parts written to `c` at i (with `shared`, the Perez brightness
+ * coefficients of row i taken from it). A loop over rows rather than a call per hour, so that the
+ * hourly path passes no number through a call (the engine would box each one).
+ */
+function planeKernelRows(p: PlaneConstants, rows: Int32Array, count: number, c: PlaneRows, shared: PerezBrightnessColumns | undefined): void {
+  const { dni: dniIn, dhi: dhiIn, altitude: altitudeIn, sinAltitude: sinAltitudeIn, cosIncidence: cosIncidenceIn, dniExtra: dniExtraIn, circumsolar: circumsolarIn } = c;
+  for (let k = 0; k < count; k++) {
+    const i = rows[k];
+    const dni = dniIn[i];
+    const dhi = dhiIn[i];
+    const altitude = altitudeIn[i];
+    const sinAltitude = sinAltitudeIn[i];
+    const cosIncidence = cosIncidenceIn[i];
+    const sunUp = altitude > 0;
+    const beam = sunUp && cosIncidence > 0 ? dni * cosIncidence : 0;
+    const ghi = (sunUp ? dni * sinAltitude : 0) + dhi;
+    let sky: number;
+    let skyUnshaded: number;
+    if (!sunUp || p.model === 'isotropic') {
+      skyUnshaded = dhi * p.isotropicView; // D&B Eq. 2.15.1
+      sky = skyUnshaded * p.isotropicShade;
+    } else if (p.model === 'ashraeClearDay') {
+      skyUnshaded = dhi * (verticalDiffuseRatioFromCosine(cosIncidence) * p.sinTilt + p.cosTiltUp); // ASHRAE ch. 14 clear-day tilted form
+      sky = skyUnshaded * p.isotropicShade; // no separate circumsolar part: all of it × the sky view ratio
+    } else if (p.model === 'hayDavies') {
+      const dniExtra = dniExtraIn[i];
+      const ai = dni / dniExtra < 1 ? dni / dniExtra : 1;
+      const rb = (cosIncidence > 0 ? cosIncidence : 0) / (sinAltitude > COS_85 ? sinAltitude : COS_85);
+      const isotropic = dhi * (1 - ai) * p.isotropicView;
+      const disc = dhi * ai * rb;
+      skyUnshaded = isotropic + disc; // D&B Eq. 2.16.4
+      sky = isotropic * p.isotropicShade + disc * circumsolarIn[i];
+    } else {
+      let parts: PerezParts;
+      if (shared !== undefined && dhi > 0) {
+        // The hour's brightness coefficients, worked out once for every plane under this sky (perezBrightnessColumns).
+        p.perez.f1 = shared.f1[i];
+        p.perez.f2 = shared.f2[i];
+        parts = perezCombineKernel(p.perez, p.isotropicView, p.sinTilt, dhi, sinAltitude, cosIncidence);
+      } else parts = perezPartsKernel(p.perez, p.isotropicView, p.sinTilt, dhi, dni, dniExtraIn[i], 90 - altitude, sinAltitude, airMassKastenYoungFromSine(altitude, sinAltitude), cosIncidence, PEREZ_1990_COMPOSITE);
+      skyUnshaded = parts.total;
+      const shaded = parts.isotropic * p.isotropicShade + parts.circumsolar * circumsolarIn[i] + parts.horizon * p.horizonShade;
+      sky = shaded > 0 ? shaded : 0; // floored at 0 as the Perez total is
+    }
+    const groundUnshaded = (ghi * p.albedo * p.oneMinusCosTilt) / 2; // D&B Eq. 2.15.1
+    c.beam[i] = beam;
+    c.sky[i] = sky;
+    c.ground[i] = groundUnshaded * p.groundShade;
+    c.skyUnshaded[i] = skyUnshaded;
+    c.groundUnshaded[i] = groundUnshaded;
+  }
 }
 
 /** The plane fields of {@link PlaneIrradianceInput}: everything that does not change by the hour. */
@@ -276,6 +361,18 @@ export interface PreparedPlane {
    * models ignore `shared`.
    */
   irradianceShared(out: PlaneParts, dni: number, dhi: number, sunAltitude: number, sinAltitude: number, cosIncidence: number, dniExtra: number, circumsolar: number, shared: PerezBrightnessColumns, hour: number): void;
+  /**
+   * {@link irradiance} for many hours at once (e.g. the lit hours of a year): for each row
+   * i = rows[k], k < count, the hour's inputs are read from the columns of `c` at i and its beam,
+   * sky, ground, sky and ground on the bare plane written to them at i — the same numbers as a
+   * call per hour, without passing numbers through a call per hour. With `shared` (Perez), the
+   * brightness coefficients of row i are taken from it as {@link irradianceShared} does.
+   * @param rows - the rows to work out (each below every column's length)
+   * @param count - how many of `rows`
+   * @param c - the hourly inputs and results
+   * @param shared - the Perez brightness coefficients by row, for planes under one sky (other models ignore it)
+   */
+  irradianceRows(rows: Int32Array, count: number, c: PlaneRows, shared?: PerezBrightnessColumns): void;
 }
 
 /** Perez brightness coefficients F1 and F2 of every hour of a sky (0 where there is no sun or no diffuse). */
@@ -331,5 +428,6 @@ export function preparePlane(input: PlaneSurfaceInput): PreparedPlane {
     irradiance: (out, dni, dhi, sunAltitude, sinAltitude, cosIncidence, dniExtra, circumsolar) => planeKernel(out, plane, dni, dhi, sunAltitude, sinAltitude, cosIncidence, dniExtra, circumsolar),
     perez: model === 'perez1990',
     irradianceShared: (out, dni, dhi, sunAltitude, sinAltitude, cosIncidence, dniExtra, circumsolar, shared, hour) => planeKernel(out, plane, dni, dhi, sunAltitude, sinAltitude, cosIncidence, dniExtra, circumsolar, shared, hour),
+    irradianceRows: (rows, count, c, shared) => planeKernelRows(plane, rows, count, c, shared),
   };
 }

@@ -2,7 +2,8 @@
  * The prepared (validate-once) fast paths of the annual series held to their checked twins:
  * - `prepareShading(...).sunlit` / `.sunlitInWallFrame` / `.sunlitOfRows` against `sunlitFraction`
  *   (and many suns at once against one at a time, exactly),
- * - `preparePlane(...).irradiance` against `planeIrradiance`,
+ * - `preparePlane(...).irradiance` against `planeIrradiance` (and `.irradianceRows`, many hours at
+ *   once, against one hour at a time, exactly),
  * - `perezPartsKernel` against `perezParts`,
  * - `unionAreaInRectangle` with bounding boxes against the same union without them,
  * - every hour of `annualSeries` against the checked functions applied to that hour's own sun.
@@ -204,6 +205,60 @@ describe('prepared plane equals planeIrradiance', () => {
         expect(plane.needsDniExtra).toBe(input.skyModel !== 'isotropic');
       }),
       { numRuns: 3000, seed: 9 },
+    );
+  });
+
+  test('many hours at once (irradianceRows, the hourly path) give each hour\'s own one-hour call exactly, with and without shared Perez brightness; rows not listed are left alone', () => {
+    const hourArb = fc.record({
+      dni: fc.oneof(fc.constant(0), fc.double({ min: 0, max: 2000, noNaN: true })),
+      dhi: fc.oneof(fc.constant(0), fc.double({ min: 0, max: 2000, noNaN: true })),
+      sunAltitude: altitudeArb,
+      cosIncidence: fc.oneof(fc.constantFrom(-1, 0, 1), fc.double({ min: -1, max: 1, noNaN: true })),
+      dniExtra: fc.double({ min: 1300, max: 1420, noNaN: true }),
+      circumsolar: fc.double({ min: 0, max: 1, noNaN: true }),
+      f1: fc.double({ min: 0, max: 1.5, noNaN: true }),
+      f2: fc.double({ min: -0.5, max: 0.5, noNaN: true }),
+    });
+    const one: PlaneParts = { beam: 0, sky: 0, ground: 0, total: 0, skyUnshaded: 0, groundUnshaded: 0 };
+    fc.assert(
+      fc.property(
+        planeArb,
+        fc.constantFrom<SkyModel>('isotropic', 'hayDavies', 'perez1990', 'ashraeClearDay'),
+        fc.array(hourArb, { minLength: 1, maxLength: 30 }),
+        fc.boolean(),
+        (input, skyModel, hours, withShared) => {
+          const plane = preparePlane({ ...input, skyModel });
+          // Row 2k holds hour k; the odd rows are not listed and must keep their marker.
+          const n = 2 * hours.length;
+          const col = () => new Float64Array(n);
+          const c = { dni: col(), dhi: col(), altitude: col(), sinAltitude: col(), cosIncidence: col(), dniExtra: col(), circumsolar: col(), beam: col().fill(-7), sky: col().fill(-7), ground: col().fill(-7), skyUnshaded: col().fill(-7), groundUnshaded: col().fill(-7) };
+          const shared = { f1: col(), f2: col() };
+          const rows = Int32Array.from(hours, (_, k) => 2 * k);
+          hours.forEach((h, k) => {
+            const i = 2 * k;
+            c.dni[i] = h.dni;
+            c.dhi[i] = h.dhi;
+            c.altitude[i] = h.sunAltitude;
+            c.sinAltitude[i] = Math.sin(h.sunAltitude * RAD);
+            c.cosIncidence[i] = h.cosIncidence;
+            c.dniExtra[i] = h.dniExtra;
+            c.circumsolar[i] = h.circumsolar;
+            shared.f1[i] = h.f1;
+            shared.f2[i] = h.f2;
+          });
+          plane.irradianceRows(rows, rows.length, c, withShared ? shared : undefined);
+          hours.forEach((h, k) => {
+            const i = 2 * k;
+            if (withShared) plane.irradianceShared(one, h.dni, h.dhi, h.sunAltitude, c.sinAltitude[i], h.cosIncidence, h.dniExtra, h.circumsolar, shared, i);
+            else plane.irradiance(one, h.dni, h.dhi, h.sunAltitude, c.sinAltitude[i], h.cosIncidence, h.dniExtra, h.circumsolar);
+            for (const key of ['beam', 'sky', 'ground', 'skyUnshaded', 'groundUnshaded'] as const) {
+              expect([key, Object.is(c[key][i], one[key])]).toEqual([key, true]);
+              expect(c[key][i + 1]).toBe(-7);
+            }
+          });
+        },
+      ),
+      { numRuns: 600, seed: 10 },
     );
   });
 
