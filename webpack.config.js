@@ -42,9 +42,12 @@ const OFFICE_JS = 'https://appsforoffice.microsoft.com/lib/1/hosted/office.js';
  * the year and peak functions, the table's and schedule's load columns and the pane's room box and
  * load column (230.0 -> 237.0 KB); 238 KB until the pane's schedule and options comparison showed
  * the cooling load (their load columns, the second bar chart, the sheet lines and on-screen words
- * about the peak load or its absence: 237.0 -> 240.3 KB).
+ * about the peak load or its absence: 237.0 -> 240.3 KB); 241 KB until the hourly passes handed
+ * their hours to the shading and the plane irradiance in one call each (row-wise kernels, the
+ * one-hour calls as one-row runs of them) and schedule summaries were added up in the gain pass:
+ * 240.3 -> 243.4 KB.
  */
-const BUDGET_BYTES = 241 * 1024;
+const BUDGET_BYTES = 244 * 1024;
 const DEV_PORT = 3000;
 
 /**
