@@ -146,6 +146,9 @@ describe('shading masks', () => {
     expect(refusal(() => shadingMaskGrid(W, {}, 180, { azimuthStep: 90, altitudeStep: 45, point: { x: 0.5, y: 1.5 } }))).toBe(
       'y = 1.5 is not allowed: must be a number from 0 to 1',
     );
+    expect(refusal(() => shadingMaskGrid(W, {}, 180, { azimuthStep: 90, altitudeStep: 45, point: { x: 1.5, y: 0.5 } }))).toBe(
+      'x = 1.5 is not allowed: must be a number from 0 to 1',
+    );
   });
 
   test('the day of each month is a whole number 1…28', () => {
