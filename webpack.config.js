@@ -47,7 +47,7 @@ const OFFICE_JS = 'https://appsforoffice.microsoft.com/lib/1/hosted/office.js';
  * one-hour calls as one-row runs of them) and schedule summaries were added up in the gain pass:
  * 240.3 -> 243.4 KB.
  */
-const BUDGET_BYTES = 244 * 1024;
+const BUDGET_BYTES = 252 * 1024;
 const DEV_PORT = 3000;
 
 /**
