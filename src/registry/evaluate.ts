@@ -13,12 +13,15 @@
  * - a blank cell or omitted argument takes the parameter's default, if it has one;
  * - a bad element makes only its own result cell an error;
  * - `numberList` and `table` parameters take their whole range and are not broadcast;
+ * - a `clock` parameter (the workbook's clock, src/registry/clockRange.ts) is read first and whole:
+ *   serial date-times of the call are read in its date system (ISO 8601 text reads the same in both);
  * - `spill` functions take single values (and one window) for their broadcast parameters.
  */
 import { SunpaneError, rangeText, requireRange } from '../core/common';
-import { parseIsoLocal, requireSerial } from '../core/time';
+import { type DateSystem, parseIsoLocal, requireSerialIn } from '../core/time';
+import { readClockRange } from './clockRange';
 import { choiceFor } from './glossary';
-import { type ArgValue, type Args, type FunctionDescriptor, type Matrix, NotAvailable, type OutCell, type OutTable, type ParamDescriptor, type RawArg, type Scalar } from './types';
+import { type ArgValue, type Args, type ClockFields, type FunctionDescriptor, type Matrix, NotAvailable, type OutCell, type OutTable, type ParamDescriptor, type RawArg, type Scalar, type WindowFields } from './types';
 import { choiceText, readWindowRange } from './windowRange';
 
 function isMatrix(raw: RawArg | undefined): raw is Matrix {
@@ -29,8 +32,12 @@ function isBlank(v: Scalar | undefined): boolean {
   return v === null || v === undefined || v === '';
 }
 
-/** Reads one single value for a broadcast parameter; throws SunpaneError naming the parameter. */
-export function readScalar(param: ParamDescriptor, value: Scalar | undefined): ArgValue {
+/**
+ * Reads one single value for a broadcast parameter; throws SunpaneError naming the parameter.
+ * @param dateSystem - the date system a serial date-time counts in (the call's clock); a date-time
+ *   is returned as a 1900-system serial
+ */
+export function readScalar(param: ParamDescriptor, value: Scalar | undefined, dateSystem: DateSystem = 1900): ArgValue {
   if (isBlank(value)) {
     if (param.default !== undefined) return param.default;
     if (param.optional) return undefined;
@@ -44,9 +51,9 @@ export function readScalar(param: ParamDescriptor, value: Scalar | undefined): A
     case 'dateTime':
       if (typeof value === 'string') {
         const t = value.trim();
-        return t !== '' && !Number.isNaN(Number(t)) ? requireSerial(param.name, Number(t)) : parseIsoLocal(t, param.name);
+        return t !== '' && !Number.isNaN(Number(t)) ? requireSerialIn(param.name, Number(t), dateSystem) : parseIsoLocal(t, param.name);
       }
-      return requireSerial(param.name, value);
+      return requireSerialIn(param.name, value, dateSystem);
     case 'choice': {
       const hit = typeof value === 'string' ? choiceFor(param, value) : undefined;
       if (hit === undefined) throw new SunpaneError(param.name, value, allowedText(param));
@@ -67,6 +74,7 @@ export function readScalar(param: ParamDescriptor, value: Scalar | undefined): A
 
 /** Reads a whole-range parameter (`numberList`, `choiceList` or `table`). */
 export function readRange(param: ParamDescriptor, raw: RawArg | undefined): ArgValue {
+  if (param.kind === 'clock') return readClockRange(raw, param.name);
   const rows: Matrix = isMatrix(raw) ? raw : isBlank(raw as Scalar) ? [] : [[raw as Scalar]];
   if (param.kind === 'choiceList') return readChoiceList(param, rows, raw);
   if (param.kind === 'table') {
@@ -148,7 +156,7 @@ export function allowedText(param: ParamDescriptor): string {
     case 'number':
       return rangeText(param.min, param.max, param.unit, param);
     case 'dateTime':
-      return 'must be a date-time (serial number or ISO 8601 local text) from 1 March 1900 to 31 December 9999';
+      return 'must be a date-time (serial number or ISO 8601 local text) from 1 March 1900 to 31 December 9999 (from 1 January 1904 in the 1904 date system)';
     case 'choice':
     case 'choiceList':
       return choiceText(param);
@@ -156,6 +164,8 @@ export function allowedText(param: ParamDescriptor): string {
       return 'must be a text';
     case 'window':
       return 'must be a range of window fields (names with values)';
+    case 'clock':
+      return 'must be a range of clock fields (names with values)';
     case 'flag':
       return 'must be TRUE or FALSE';
     case 'numberList':
@@ -166,7 +176,7 @@ export function allowedText(param: ParamDescriptor): string {
 }
 
 function isWholeRange(param: ParamDescriptor): boolean {
-  return param.kind === 'numberList' || param.kind === 'choiceList' || param.kind === 'table';
+  return param.kind === 'numberList' || param.kind === 'choiceList' || param.kind === 'table' || param.kind === 'clock';
 }
 
 function shapeOf(raw: RawArg | undefined): [number, number] {
@@ -187,9 +197,9 @@ interface ReadArg {
   cells: (ArgValue | SunpaneError)[];
 }
 
-function readOnce(param: ParamDescriptor, value: Scalar | undefined): ArgValue | SunpaneError {
+function readOnce(param: ParamDescriptor, value: Scalar | undefined, dateSystem: DateSystem): ArgValue | SunpaneError {
   try {
-    return readScalar(param, value);
+    return readScalar(param, value, dateSystem);
   } catch (err) {
     if (err instanceof SunpaneError) return err;
     throw err;
@@ -197,7 +207,7 @@ function readOnce(param: ParamDescriptor, value: Scalar | undefined): ArgValue |
 }
 
 /** Reads a broadcast argument: every cell once. */
-function readBroadcast(param: ParamDescriptor, raw: RawArg | undefined): ReadArg {
+function readBroadcast(param: ParamDescriptor, raw: RawArg | undefined, dateSystem: DateSystem): ReadArg {
   if (param.kind === 'window') {
     if (raw === undefined || raw === null || raw === '') throw new SunpaneError(param.name, null, `is required: ${allowedText(param)}`);
     const w = readWindowRange(raw, param.name);
@@ -205,11 +215,11 @@ function readBroadcast(param: ParamDescriptor, raw: RawArg | undefined): ReadArg
   }
   const [rows, cols] = shapeOf(raw);
   if (rows === 0 || cols === 0) throw new SunpaneError(param.name, raw ?? null, 'must not be an empty range');
-  if (!isMatrix(raw)) return { rows: 1, cols: 1, cells: [readOnce(param, raw)] };
+  if (!isMatrix(raw)) return { rows: 1, cols: 1, cells: [readOnce(param, raw, dateSystem)] };
   const cells: (ArgValue | SunpaneError)[] = new Array(rows * cols);
   for (let i = 0; i < rows; i++) {
     const line = raw[i];
-    for (let j = 0; j < cols; j++) cells[i * cols + j] = readOnce(param, line[j] ?? null);
+    for (let j = 0; j < cols; j++) cells[i * cols + j] = readOnce(param, line[j] ?? null, dateSystem);
   }
   return { rows, cols, cells };
 }
@@ -234,13 +244,23 @@ export function applyFunction(fn: FunctionDescriptor, rawArgs: readonly (RawArg 
   let rows = 1;
   let cols = 1;
   let shapeFrom = '';
+  // The clock and the windows first: the date-times of the call are read in their date system.
+  const clockK = fn.params.findIndex((p) => p.kind === 'clock');
+  const clock = clockK >= 0 ? (readRange(fn.params[clockK], rawArgs[clockK]) as ClockFields) : undefined;
+  const windowK = fn.params.findIndex((p) => p.kind === 'window');
+  const windows = windowK >= 0 ? readBroadcast(fn.params[windowK], rawArgs[windowK], 1900) : undefined;
+  const dateSystem = clock?.dateSystemGiven ? clock.dateSystem : windows ? windowsDateSystem(fn.params[windowK], windows) : 1900;
   for (let k = 0; k < fn.params.length; k++) {
     const p = fn.params[k];
+    if (k === clockK) {
+      fixed[p.name] = clock;
+      continue;
+    }
     if (isWholeRange(p)) {
       fixed[p.name] = readRange(p, rawArgs[k]);
       continue;
     }
-    const arg = readBroadcast(p, rawArgs[k]);
+    const arg = k === windowK ? windows! : readBroadcast(p, rawArgs[k], dateSystem);
     if (arg.rows === 1 && arg.cols === 1) {
       const v = arg.cells[0];
       if (v instanceof SunpaneError) {
@@ -285,6 +305,23 @@ export function applyFunction(fn: FunctionDescriptor, rawArgs: readonly (RawArg 
     out[i] = line;
   }
   return out;
+}
+
+/**
+ * The date system the windows of a call give (their `dateSystem` field; 1900 when none does): one
+ * call reads its date-times in one system, so windows that name different ones are refused.
+ */
+function windowsDateSystem(param: ParamDescriptor, windows: ReadArg): DateSystem {
+  let found: DateSystem | undefined;
+  for (const w of windows.cells) {
+    const v = w instanceof SunpaneError || w === undefined ? undefined : ((w as WindowFields).values.get('dateSystem') as DateSystem | undefined);
+    if (v === undefined) continue;
+    if (found !== undefined && v !== found) {
+      throw new SunpaneError((w as WindowFields).written.get('dateSystem') ?? `${param.name} dateSystem`, v, `must be the same for every window of one call (another says ${found}): a workbook has one date system`);
+    }
+    found = v;
+  }
+  return found ?? 1900;
 }
 
 type Broadcast = readonly { param: ParamDescriptor; arg: ReadArg }[];

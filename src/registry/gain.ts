@@ -19,9 +19,10 @@ import { SunpaneError } from '../core/common';
 import { annualSeries, type AnnualSeries, windowGainAt, gainSteps, type Weather, type WindowSpec, type WindowGainHour } from '../core/gain';
 import { annualLoadParts, designDayPeaks, coolingLoad, requireRadiantTimeFactors, type RoomSeries, type WindowLoad, windowRoomSeries } from '../core/load';
 import { MASK_DEFAULT_YEAR } from '../core/shading';
-import { evaluationSerial, hoursInYear, requireStamp, serialToCivil, type TimeConvention } from '../core/time';
+import { type DateSystem, evaluationSerial, fromSerial1900, hoursInYear, requireStamp, serialToCivil, type TimeConvention } from '../core/time';
+import { windowOnClock } from './clockRange';
 import { GLOSSARY, type GlossaryEntry } from './glossary';
-import { type Args, type FunctionDescriptor, NotAvailable, type OutCell, type OutsideCheck, type OutTable, type ParamDescriptor, type WindowFields } from './types';
+import { type Args, type ClockFields, type FunctionDescriptor, NotAvailable, type OutCell, type OutsideCheck, type OutTable, type ParamDescriptor, type WindowFields } from './types';
 import { fieldsOf, skyWithDesignDays, windowSpecFromFields } from './windowRange';
 
 const G = GLOSSARY;
@@ -50,7 +51,7 @@ const SERIES_COLUMN: Record<string, keyof AnnualSeries> = {
   profileAngle: 'profileAngle',
   sunAltitude: 'sunAltitude',
   sunAzimuth: 'sunAzimuth',
-  stamp: 'stampSerial',
+  stamp: 'clockStamp', // the row's date-time as the window reads date-times: on its clock
 };
 /** Columns of the cooling load by the radiant time series, and the part of the load each reads. */
 const LOAD_COLUMN: Record<string, keyof WindowLoad> = { load: 'total', loadBeam: 'beam', loadDiffuse: 'diffuse', loadConduction: 'conduction' };
@@ -76,7 +77,7 @@ const P = {
     default: 'gain',
     length: { max: 20 },
     description:
-      "columns of the hourly year, one per name: gain, gainBeam, gainDiffuse, conduction, radiant, convective, load, loadBeam, loadDiffuse, loadConduction in W (a load needs factors or the window's room); beam, sky, ground, skyUnshaded, groundUnshaded, dni, dhi in W/m²; sunlitFraction, skyViewRatio, groundViewRatio, horizonShare, shgc from 0 to 1; incidence, profileAngle, sunAltitude, sunAzimuth in °; stamp: the row's date-time (format the column yyyy-mm-dd hh:mm)",
+      "columns of the hourly year, one per name: gain, gainBeam, gainDiffuse, conduction, radiant, convective, load, loadBeam, loadDiffuse, loadConduction in W (a load needs factors or the window's room); beam, sky, ground, skyUnshaded, groundUnshaded, dni, dhi in W/m²; sunlitFraction, skyViewRatio, groundViewRatio, horizonShare, shgc from 0 to 1; incidence, profileAngle, sunAltitude, sunAzimuth in °; stamp: the row's date-time, on the window's clock and in its date system (format the column yyyy-mm-dd hh:mm)",
   },
   day: { name: 'day', kind: 'number', integer: true, min: 1, max: 28, default: 21, description: 'day of each month for the clear design day' },
   factors: { name: 'factors', kind: 'numberList', min: 0, max: 1, length: { exact: 24 }, sumsToOne: true, description: 'the 24 radiant time factors r0…r23 of the room (from your handbook or room model), summing to 1' },
@@ -122,6 +123,21 @@ function fieldsOfArgs(a: Args, names: readonly string[]): WindowFields {
     entries.push({ field: G[n as keyof typeof G], written: n, cell: v as number | string | readonly number[] });
   }
   return fieldsOf(entries);
+}
+
+/** The window of a window form, on the call's clock (the clock fills the window's clock fields). */
+function winOf(a: Args): WindowFields {
+  return windowOnClock(a.window as WindowFields, a.clock as ClockFields | undefined);
+}
+
+/** The window of a positional form, on the call's clock. */
+function posOf(a: Args): WindowFields {
+  return windowOnClock(fieldsOfArgs(a, POSITIONAL_FIELDS), a.clock as ClockFields | undefined);
+}
+
+/** The date system the window's date-times are given in (its own field, or the clock's put in). */
+function systemOf(f: WindowFields): DateSystem {
+  return (f.values.get('dateSystem') as DateSystem | undefined) ?? 1900;
 }
 
 const SITE_AND_WINDOW = [G.latitude, G.longitude, G.utcOffset, G.surfaceAzimuth, G.width, G.height, G.shgc] as const;
@@ -189,9 +205,10 @@ function reasonOf(work: () => unknown): string | undefined {
   }
 }
 
-function stepRows(h: ReturnType<typeof gainSteps>, headers: boolean): OutTable {
+/** The step table; date-time steps in the window's date system (their text in `method` reads the same in both). */
+function stepRows(h: ReturnType<typeof gainSteps>, headers: boolean, system: DateSystem = 1900): OutTable {
   const rows: OutTable = headers ? [['step', 'quantity', 'value', 'unit', 'method']] : [];
-  for (const s of h) rows.push([s.step, s.quantity, s.value, s.unit, s.method]);
+  for (const s of h) rows.push([s.step, s.quantity, s.unit === 'date-time' ? fromSerial1900(s.value, system) : s.value, s.unit, s.method]);
   return rows;
 }
 
@@ -294,7 +311,7 @@ function yearRoom(spec: WindowSpec, quantities: readonly string[], factors: numb
   return room;
 }
 
-function yearRows(spec: WindowSpec, quantities: readonly string[], headers: boolean, factors?: number[], quantitiesName = 'quantities'): OutTable {
+function yearRows(spec: WindowSpec, quantities: readonly string[], headers: boolean, factors?: number[], quantitiesName = 'quantities', system: DateSystem = 1900): OutTable {
   const room = yearRoom(spec, quantities, factors, quantitiesName);
   const series = annualSeries(spec);
   const load = room ? annualLoadParts(series, room) : undefined;
@@ -302,6 +319,7 @@ function yearRows(spec: WindowSpec, quantities: readonly string[], headers: bool
     const constant = DIFFUSE_CONSTANTS[q];
     if (constant !== undefined) return new Float64Array(series.hours).fill(constant(series));
     if (LOAD_COLUMN[q] !== undefined) return load![LOAD_COLUMN[q]];
+    if (q === 'stamp' && system === 1904) return (series.clockStamp as Float64Array).map((v) => fromSerial1900(v, system));
     return series[SERIES_COLUMN[q]] as Float64Array;
   });
   const weather = quantities.map((q) => WEATHER_COLUMNS.has(q));
@@ -349,10 +367,10 @@ const SOLARGAIN: FunctionDescriptor = {
   name: 'SOLARGAIN',
   summary: 'Solar heat gain through a window in one hour, the window given as one range of fields: beam through the sunlit glass plus sky and ground diffuse, × SHGC × glass area.',
   category: 'Gain and load',
-  params: [WINDOW, G.dateTime, P.dni, P.dhi],
+  params: [WINDOW, G.dateTime, P.dni, P.dhi, G.clock],
   result: { shape: 'value', unit: 'W', min: 0, description: "window solar gain in the hour (0 at night); at a row's stamp exactly that row of SOLARGAINYEAR and of the pane's hourly table" },
-  evaluate: (a) => hourOfFields(a.window as WindowFields, a, 'window ').gain.total,
-  refuses: (a) => reasonOf(() => hourWindow(a.window as WindowFields, a, 'window ')),
+  evaluate: (a) => hourOfFields(winOf(a), a, 'window ').gain.total,
+  refuses: (a) => reasonOf(() => hourWindow(winOf(a), a, 'window ')),
   examples: [
     { args: ['B2:C14', '"2026-07-21 13:00"'], note: 'a window described by the name/value block B2:C14 (latitude, longitude, utcOffset, surfaceAzimuth, width, height, shgc, tauB, tauD …), the hour ending 13:00, sun at 12:30' },
     { args: ['VSTACK(Windows[#Headers],Windows[@])', 'Hour'], note: 'one row of a window schedule table and its header row, in a column beside the table' },
@@ -364,10 +382,13 @@ const SOLARGAINSTEPS: FunctionDescriptor = {
   name: 'SOLARGAINSTEPS',
   summary: 'The solar gain of one hour worked out step by step (the instant used, sun, angles, shading, irradiance, SHGC, area, watts), for checking by hand; the window as one range.',
   category: 'Gain and load',
-  params: [WINDOW, G.dateTime, P.dni, P.dhi, P.stepsHeaders],
+  params: [WINDOW, G.dateTime, P.dni, P.dhi, P.stepsHeaders, G.clock],
   result: { shape: 'spill', description: "a heading row (unless headers is FALSE), then one row per step: step number, quantity, value, unit, method; the first step is the instant the sun was taken at. The rows whose unit is date-time hold a date-time serial in value (format those cells yyyy-mm-dd hh:mm) and the same date-time as text in method", columns: ['step', 'quantity', 'value', 'unit', 'method'] },
-  evaluate: (a) => stepRows(stepsOfFields(a.window as WindowFields, a, 'window '), a.headers as boolean),
-  refuses: (a) => reasonOf(() => hourWindow(a.window as WindowFields, a, 'window ')),
+  evaluate: (a) => {
+    const f = winOf(a);
+    return stepRows(stepsOfFields(f, a, 'window '), a.headers as boolean, systemOf(f));
+  },
+  refuses: (a) => reasonOf(() => hourWindow(winOf(a), a, 'window ')),
   examples: [{ args: ['B2:C14', '"2026-07-21 13:00"'], note: 'every step from the instant (12:30, the middle of the hour ending 13:00) to watts' }],
   outsideCheck: STEPS_CHECK,
 };
@@ -380,11 +401,11 @@ const SOLARGAINPEAKS: FunctionDescriptor = {
   result: {
     shape: 'spill',
     description:
-      "12 rows, January first: month, peak hour (by the window's time convention: hour ending 1–24, or the instant's hour 0–23), peak solar gain [W]; with parts TRUE the peak hour's solar gain by part and its conduction gain [W]; with factors (or the window's own room) the hour and value [W] of the peak cooling load (below 0 when conduction on a design day colder than the room outweighs the sun), and with parts its beam, diffuse and conduction shares [W]",
+      "12 rows, January first: month, peak hour (by the window's time convention: hour ending 1–24, or the instant's hour 0–23; local standard time, also under a daylight-saving rule), peak solar gain [W]; with parts TRUE the peak hour's solar gain by part and its conduction gain [W]; with factors (or the window's own room) the hour and value [W] of the peak cooling load (below 0 when conduction on a design day colder than the room outweighs the sun), and with parts its beam, diffuse and conduction shares [W]",
     columns: ['month', 'peakHour', 'peakGain', 'peakGainBeam', 'peakGainDiffuse', 'peakGainConduction', 'peakLoadHour', 'peakLoad', 'peakLoadBeam', 'peakLoadDiffuse', 'peakLoadConduction'],
   },
-  evaluate: (a) => peakRows(designSpec(a.window as WindowFields, 'window '), a, a.headers as boolean),
-  refuses: (a) => factorsProblem(a.factors as number[] | undefined) ?? reasonOf(() => designSpec(a.window as WindowFields, 'window ')),
+  evaluate: (a) => peakRows(designSpec(winOf(a), 'window '), a, a.headers as boolean),
+  refuses: (a) => factorsProblem(a.factors as number[] | undefined) ?? reasonOf(() => designSpec(winOf(a), 'window ')),
   examples: [
     { args: ['B2:C14'], note: 'peak hour and watts on the 21st of each month' },
     { args: ['B2:C19', '', '21', 'TRUE', 'TRUE'], note: 'with the window\'s roomConstruction, uValue, indoorTemperature, dryBulbMax and dailyRange: gain and cooling load by part at their peaks' },
@@ -396,13 +417,16 @@ const SOLARGAINYEAR: FunctionDescriptor = {
   name: 'SOLARGAINYEAR',
   summary: "One or more quantities of a window hour by hour over its year (gain, irradiance on the glass, sunlit fraction, angles...), rows as the window's time convention stamps them; the window as one range.",
   category: 'Gain and load',
-  params: [WINDOW, P.quantities, { ...P.dniSeries, name: 'dni' }, { ...P.dhiSeries, name: 'dhi' }, G.headers, P.yearFactors],
+  params: [WINDOW, P.quantities, { ...P.dniSeries, name: 'dni' }, { ...P.dhiSeries, name: 'dhi' }, G.headers, P.yearFactors, G.clock],
   result: {
     shape: 'spill',
     description: "8760 rows (8784 in a leap year), one column per quantity; hour-ending rows (1 January 01:00 first, sun at mid-hour) or, with timeConvention instant, rows at 00:00 … 23:00",
   },
-  evaluate: (a) => yearRows(yearSpec(a.window as WindowFields, a, 'window '), a.quantities as string[], a.headers as boolean, a.factors as number[] | undefined),
-  refuses: (a) => factorsProblem(a.factors as number[] | undefined) ?? reasonOf(() => yearRoom(yearSpec(a.window as WindowFields, a, 'window '), a.quantities as string[], a.factors as number[] | undefined, 'quantities')),
+  evaluate: (a) => {
+    const f = winOf(a);
+    return yearRows(yearSpec(f, a, 'window '), a.quantities as string[], a.headers as boolean, a.factors as number[] | undefined, 'quantities', systemOf(f));
+  },
+  refuses: (a) => factorsProblem(a.factors as number[] | undefined) ?? reasonOf(() => yearRoom(yearSpec(winOf(a), a, 'window '), a.quantities as string[], a.factors as number[] | undefined, 'quantities')),
   examples: [
     { args: ['B2:C15'], note: 'hourly gain of the window for its year (a year field is needed)' },
     { args: ['B2:C15', '{"stamp","gain","sunlitFraction"}', 'Weather!D2:D8761', 'Weather!E2:E8761', 'TRUE'], note: 'three columns with a header row, under your hourly direct normal and diffuse horizontal irradiance' },
@@ -418,18 +442,18 @@ const SOLARGAINYEAR: FunctionDescriptor = {
 const HOUR_PARAMS: readonly ParamDescriptor[] = [G.dateTime, ...SITE_AND_WINDOW, P.dni, P.dhi, P.tauB, P.tauD, ...GLASS_AND_GROUND];
 
 function legacyHour(a: Args): WindowGainHour {
-  return hourOfFields(fieldsOfArgs(a, POSITIONAL_FIELDS), a, '', a.timeConvention as TimeConvention);
+  return hourOfFields(posOf(a), a, '', a.timeConvention as TimeConvention);
 }
 
 function legacyRefuses(a: Args): string | undefined {
-  return reasonOf(() => hourWindow(fieldsOfArgs(a, POSITIONAL_FIELDS), a, '', a.timeConvention as TimeConvention));
+  return reasonOf(() => hourWindow(posOf(a), a, '', a.timeConvention as TimeConvention));
 }
 
 const WINDOWGAIN: FunctionDescriptor = {
   name: 'WINDOWGAIN',
   summary: 'Solar heat gain through a window in one hour, every field a positional argument (the older form of SOLARGAIN, kept for saved workbooks).',
   category: 'Gain and load',
-  params: [...HOUR_PARAMS, ...SHADING, P.instantConvention],
+  params: [...HOUR_PARAMS, ...SHADING, P.instantConvention, G.clock],
   result: { shape: 'value', unit: 'W', min: 0, description: 'window solar gain at the date-time (0 at night)' },
   evaluate: (a) => legacyHour(a).gain.total,
   refuses: legacyRefuses,
@@ -444,9 +468,12 @@ const GAINSTEPS: FunctionDescriptor = {
   name: 'GAINSTEPS',
   summary: 'The window gain of one hour worked out step by step, every field a positional argument (the older form of SOLARGAINSTEPS, kept for saved workbooks).',
   category: 'Gain and load',
-  params: [...HOUR_PARAMS, G.radiantFraction, ...SHADING, P.instantConvention, P.stepsHeaders],
+  params: [...HOUR_PARAMS, G.radiantFraction, ...SHADING, P.instantConvention, P.stepsHeaders, G.clock],
   result: { shape: 'spill', description: "a heading row (unless headers is FALSE), then one row per step: step number, quantity, value, unit, method. The rows whose unit is date-time hold a date-time serial in value (format those cells yyyy-mm-dd hh:mm) and the same date-time as text in method", columns: ['step', 'quantity', 'value', 'unit', 'method'] },
-  evaluate: (a) => stepRows(stepsOfFields(fieldsOfArgs(a, POSITIONAL_FIELDS), a, '', a.timeConvention as TimeConvention), a.headers as boolean),
+  evaluate: (a) => {
+    const f = posOf(a);
+    return stepRows(stepsOfFields(f, a, '', a.timeConvention as TimeConvention), a.headers as boolean, systemOf(f));
+  },
   refuses: legacyRefuses,
   supersededBy: 'SOLARGAINSTEPS',
   examples: [{ args: ['"2026-07-21T12:30"', '40', '-105', '-7', '180', '1.5', '1.2', '0.4', '850', '120'], note: 'every step from sun altitude to watts for a south window at 12:30 in July, with the hour’s measured irradiance' }],
@@ -470,7 +497,7 @@ const COOLINGLOAD: FunctionDescriptor = {
 };
 
 function legacyDesignSpec(a: Args): WindowSpec {
-  return designSpec(fieldsOfArgs(a, POSITIONAL_FIELDS), '');
+  return designSpec(posOf(a), '');
 }
 
 const PEAKGAINS: FunctionDescriptor = {
@@ -508,16 +535,16 @@ const PEAKGAINS: FunctionDescriptor = {
 };
 
 function legacyYearSpec(a: Args): WindowSpec {
-  return yearSpec(fieldsOfArgs(a, POSITIONAL_FIELDS), a, '');
+  return yearSpec(posOf(a), a, '');
 }
 
 const WINDOWYEAR: FunctionDescriptor = {
   name: 'WINDOWYEAR',
   summary: 'One or more quantities of a window hour by hour over a year, every field a positional argument (the older form of SOLARGAINYEAR, kept for saved workbooks).',
   category: 'Gain and load',
-  params: [G.year, ...SITE_AND_WINDOW, { ...P.quantities, name: 'quantity' }, { ...P.dniSeries, name: 'dni' }, { ...P.dhiSeries, name: 'dhi' }, P.yearTauB, P.yearTauD, ...GLASS_AND_GROUND, G.radiantFraction, ...SHADING, P.hourEndingConvention, G.headers, P.positionalYearFactors],
+  params: [G.year, ...SITE_AND_WINDOW, { ...P.quantities, name: 'quantity' }, { ...P.dniSeries, name: 'dni' }, { ...P.dhiSeries, name: 'dhi' }, P.yearTauB, P.yearTauD, ...GLASS_AND_GROUND, G.radiantFraction, ...SHADING, P.hourEndingConvention, G.headers, P.positionalYearFactors, G.clock],
   result: { shape: 'spill', description: '8760 rows (8784 in a leap year), 1 January 00:00–01:00 first, one column per quantity; sun at the middle of each hour (with timeConvention instant: rows at 00:00 … 23:00, sun at the stamp)' },
-  evaluate: (a) => yearRows(legacyYearSpec(a), a.quantity as string[], a.headers as boolean, a.factors as number[] | undefined, 'quantity'),
+  evaluate: (a) => yearRows(legacyYearSpec(a), a.quantity as string[], a.headers as boolean, a.factors as number[] | undefined, 'quantity', (a.clock as ClockFields | undefined)?.dateSystem ?? 1900),
   refuses: (a) => factorsProblem(a.factors as number[] | undefined) ?? reasonOf(() => yearRoom(legacyYearSpec(a), a.quantity as string[], a.factors as number[] | undefined, 'quantity')),
   supersededBy: 'SOLARGAINYEAR',
   examples: [{ args: ['2026', '40', '-105', '-7', '180', '1.5', '1.2', '0.4', '"gain"', 'Weather!D2:D8761', 'Weather!E2:E8761'], note: 'hourly gain of a south window for the whole year under your hourly weather' }],

@@ -23,7 +23,7 @@ import { DST_SHIFT_MAX, UTC_OFFSET_MAX, UTC_OFFSET_MIN } from '../core/time';
 import type { ParamDescriptor } from './types';
 
 /** How one cell of a window range is read. */
-export type WindowCellKind = 'number' | 'text' | 'choice' | 'list' | 'monthly' | 'dateTime';
+export type WindowCellKind = 'number' | 'text' | 'choice' | 'list' | 'monthly' | 'dateTime' | 'dateSystem';
 
 /** One glossary entry: a parameter descriptor with the words and spellings tables use. */
 export interface GlossaryEntry extends ParamDescriptor {
@@ -71,8 +71,8 @@ export const GLOSSARY = {
   // The window's label
   name: e({ name: 'name', label: 'Name', aliases: ['window', 'label', 'windowLabel'], kind: 'text', description: 'label of the window in tables and sheets', window: windowField('name', 'text', 'window') }),
   // When
-  dateTime: e({ name: 'dateTime', label: 'Date-time', kind: 'dateTime', description: 'local standard date-time (no daylight saving), as a spreadsheet serial or ISO 8601 text' }),
-  date: e({ name: 'date', label: 'Date', kind: 'dateTime', description: 'local date (any time of day on it; the local calendar day is used)' }),
+  dateTime: e({ name: 'dateTime', label: 'Date-time', kind: 'dateTime', description: "local date-time: standard time, or clock time when the clock (or the window) gives a daylight-saving rule; a spreadsheet serial in the workbook's date system, or ISO 8601 text" }),
+  date: e({ name: 'date', label: 'Date', kind: 'dateTime', description: "local date (any time of day on it; the local calendar day is used, on the clock when the clock gives a daylight-saving rule); a serial in the workbook's date system, or ISO 8601 text" }),
   timeConvention: e({
     name: 'timeConvention',
     label: 'Time convention',
@@ -122,6 +122,17 @@ export const GLOSSARY = {
     default: 1,
     description: 'how far the clocks go forward',
     window: windowField('site.daylightSaving.shift', 'number', 'place'),
+  }),
+  dateSystem: e({
+    name: 'dateSystem',
+    label: 'Date system',
+    aliases: ['workbookDateSystem', 'date1904'],
+    kind: 'choice',
+    choices: ['1900', '1904'],
+    default: '1900',
+    description:
+      "the workbook's date system, as Excel names it: 1900 (the default) or 1904 (Excel's \"Use 1904 date system\" option: serial 0 is 1 January 1904, 1462 days after the 1900 system's count); serial date-times given are read in it and date-times returned are given in it (ISO 8601 text reads the same in both)",
+    window: windowField([], 'dateSystem', 'place'),
   }),
   deltaT: e({ name: 'deltaT', label: 'Delta T [s]', kind: 'number', unit: 's', min: -100, max: 10000, optional: true, description: 'TT − UT; blank: Espenak & Meeus (2006) polynomial' }),
   // Which way, how big
@@ -477,6 +488,14 @@ export const GLOSSARY = {
   dni: e({ name: 'dni', label: 'DNI (direct normal irradiance) [W/m²]', kind: 'number', unit: 'W/m²', min: 0, max: IRRADIANCE_MAX, description: 'direct normal irradiance' }),
   dhi: e({ name: 'dhi', label: 'DHI (diffuse horizontal irradiance) [W/m²]', kind: 'number', unit: 'W/m²', min: 0, max: IRRADIANCE_MAX, description: 'diffuse horizontal irradiance' }),
   headers: e({ name: 'headers', label: 'Headers', kind: 'flag', default: false, description: 'TRUE: the spilled table starts with a row of column names (the glossary tokens)' }),
+  clock: e({
+    name: 'clock',
+    label: 'Clock',
+    kind: 'clock',
+    optional: true,
+    description:
+      "the workbook's clock: names with values beside them — daylightSavingStart and daylightSavingEnd (clock readings when the clocks go forward and back, in any one year; the rule repeats yearly), daylightSavingShift [h] (above 0 up to 2; blank 1), dateSystem (1900 or 1904); date-times are then read and given on that clock, in that date system; blank: standard time, 1900",
+  }),
   window: e({
     name: 'window',
     label: 'Window',

@@ -43,7 +43,7 @@ export function signature(fn: FunctionDescriptor): string {
  * How a date-time result is to be shown: the one wording used by functions.json, the function
  * reference and the help pages (a serial number reads as 46193.27 until the cell is formatted).
  */
-export const DATE_TIME_FORMAT = 'a date-time serial in local standard time: format the cell as a date and time (custom number format yyyy-mm-dd hh:mm), or as hh:mm for the time of day alone';
+export const DATE_TIME_FORMAT = "a date-time serial in local standard time, or on the clock when a daylight-saving rule is given, in the workbook's date system (1900 unless the clock says 1904): format the cell as a date and time (custom number format yyyy-mm-dd hh:mm), or as hh:mm for the time of day alone";
 
 /** The unit words of a parameter: its unit, `no unit` for a pure number, or what kind of value it takes. */
 export function unitWords(p: ParamDescriptor): string {
@@ -58,6 +58,8 @@ export function unitWords(p: ParamDescriptor): string {
       return 'TRUE or FALSE';
     case 'window':
       return 'window fields, each in its own unit';
+    case 'clock':
+      return 'clock fields: date-times, h, 1900 or 1904';
     default:
       return 'text';
   }

@@ -5,10 +5,10 @@
  * date-times costs little more than suncalc — and src/core/sun/surfaceAngles.ts); none computes by itself.
  */
 import { SunpaneError } from '../core/common';
-import { evaluationSerial, MAX_SERIAL_EXCLUSIVE, MIN_SERIAL, requireStamp, serialToUtcMs, type TimeConvention } from '../core/time';
-import { type SunOptions, type SunPosition, sunEvents, sunPositionFromNodes, incidenceAngle, profileAngle, wallSolarAzimuth } from '../core/sun';
+import { clockStampToStandard, evaluationSerial, fromSerial1900, MAX_SERIAL_EXCLUSIVE, requireStamp, serialToUtcMs, type TimeConvention } from '../core/time';
+import { type SunOptions, type SunPosition, sunEventsOnClock, sunPositionFromNodes, incidenceAngle, profileAngle, wallSolarAzimuth } from '../core/sun';
 import { GLOSSARY } from './glossary';
-import { type Args, type FunctionDescriptor, NotAvailable, type OutsideCheck, type ParamDescriptor } from './types';
+import { type Args, type ClockFields, type FunctionDescriptor, NotAvailable, type OutsideCheck, type ParamDescriptor } from './types';
 
 /** When and where, then the optional atmosphere and ΔT: the shared head of the sun-position functions. */
 const WHEN_WHERE: readonly ParamDescriptor[] = [GLOSSARY.dateTime, GLOSSARY.latitude, GLOSSARY.longitude, GLOSSARY.utcOffset];
@@ -22,9 +22,17 @@ const INSTANT: ParamDescriptor = {
   default: 'instant',
   description: 'how dateTime is read: "instant" (default) = the sun at dateTime; "hourEnding" = the hour ending at dateTime, sun at mid-hour (as the window functions and hourly tables read an hour)',
 };
-const SUN_PARAMS: readonly ParamDescriptor[] = [...WHEN_WHERE, ...ATMOSPHERE, INSTANT];
+/**
+ * The workbook's clock, last of all (added after release): a daylight-saving rule, so that
+ * date-times are read on the clock, and the date system of serial date-times.
+ */
+const CLOCK: ParamDescriptor = GLOSSARY.clock;
+const SUN_PARAMS: readonly ParamDescriptor[] = [...WHEN_WHERE, ...ATMOSPHERE, INSTANT, CLOCK];
 /** Rise and set follow the SPA's fixed horizon convention: only ΔT changes them. */
-const EVENT_PARAMS: readonly ParamDescriptor[] = [GLOSSARY.date, GLOSSARY.latitude, GLOSSARY.longitude, GLOSSARY.utcOffset, GLOSSARY.deltaT];
+const EVENT_PARAMS: readonly ParamDescriptor[] = [GLOSSARY.date, GLOSSARY.latitude, GLOSSARY.longitude, GLOSSARY.utcOffset, GLOSSARY.deltaT, CLOCK];
+
+/** The lowest date-time a result can be: a minute before 1 January 1904, serial 0 of the 1904 date system. */
+const EARLIEST_RESULT = -1 / 1440;
 
 /** surfaceAzimuth comes before the optional tilt so that required arguments come first. */
 const SURFACE_AZIMUTH: ParamDescriptor = { ...GLOSSARY.surfaceAzimuth };
@@ -69,15 +77,24 @@ function optionsOf(a: Args): SunOptions {
 function positionOf(a: Args): SunPosition {
   const convention = (a.timeConvention as TimeConvention | undefined) ?? 'instant';
   const stamp = requireStamp('dateTime', a.dateTime, convention);
-  const utcMs = serialToUtcMs(evaluationSerial(stamp, convention), a.utcOffset as number);
+  const rule = (a.clock as ClockFields | undefined)?.rule;
+  const standard = rule === undefined ? stamp : clockStampToStandard(stamp, convention, rule);
+  const utcMs = serialToUtcMs(evaluationSerial(standard, convention), a.utcOffset as number);
   return sunPositionFromNodes(utcMs, a.latitude as number, a.longitude as number, optionsOf(a), SCRATCH);
 }
 
 /** The position the last cell was given; each evaluate reads one number from it before the next cell. */
 const SCRATCH: SunPosition = { altitude: 0, azimuth: 0, zenith: 0, declination: 0, hourAngle: 0, equationOfTime: 0, rightAscension: 0, altitudeUnrefracted: 0, solarTime: 0, earthSunDistance: 0 };
 
+/** The day's events on the call's clock (clock-time serials, 1900 system). */
 function eventsOf(a: Args) {
-  return sunEvents(a.date as number, a.latitude as number, a.longitude as number, a.utcOffset as number, { deltaT: a.deltaT as number | undefined });
+  const clock = a.clock as ClockFields | undefined;
+  return sunEventsOnClock(a.date as number, a.latitude as number, a.longitude as number, a.utcOffset as number, clock?.rule, { deltaT: a.deltaT as number | undefined });
+}
+
+/** A date-time result in the call's date system. */
+function inDateSystem(a: Args, serial: number): number {
+  return fromSerial1900(serial, (a.clock as ClockFields | undefined)?.dateSystem ?? 1900);
 }
 
 const DEGREES = '°';
@@ -157,10 +174,10 @@ export const SUN_FUNCTIONS: readonly FunctionDescriptor[] = [
     summary: 'Sunrise on a local day (upper limb on the horizon with standard refraction)',
     category: 'Time and sun',
     params: EVENT_PARAMS,
-    result: { shape: 'value', kind: 'dateTime', min: MIN_SERIAL - 1, max: MAX_SERIAL_EXCLUSIVE, description: 'local standard date-time of sunrise; #N/A when the sun does not rise that day' },
+    result: { shape: 'value', kind: 'dateTime', min: EARLIEST_RESULT, max: MAX_SERIAL_EXCLUSIVE, description: 'local date-time of sunrise: standard time, or clock time under the clock\'s daylight-saving rule, in the clock\'s date system; #N/A when the sun does not rise that day' },
     evaluate: (a) => {
       const e = eventsOf(a);
-      if (e.sunrise !== null) return e.sunrise;
+      if (e.sunrise !== null) return inDateSystem(a, e.sunrise);
       return new NotAvailable(noEventMessage('rise', e.condition));
     },
     examples: [
@@ -174,8 +191,8 @@ export const SUN_FUNCTIONS: readonly FunctionDescriptor[] = [
     summary: 'Solar noon on a local day: when the sun crosses the meridian',
     category: 'Time and sun',
     params: EVENT_PARAMS,
-    result: { shape: 'value', kind: 'dateTime', min: MIN_SERIAL - 1, max: MAX_SERIAL_EXCLUSIVE, description: 'local standard date-time of the upper transit (also during polar day and night)' },
-    evaluate: (a) => eventsOf(a).solarNoon,
+    result: { shape: 'value', kind: 'dateTime', min: EARLIEST_RESULT, max: MAX_SERIAL_EXCLUSIVE, description: 'local date-time of the upper transit (also during polar day and night): standard time, or clock time under the clock\'s daylight-saving rule, in the clock\'s date system' },
+    evaluate: (a) => inDateSystem(a, eventsOf(a).solarNoon),
     examples: [{ args: ['"2003-10-17"', '39.742476', '-105.1786', '-7', '67'], note: '11:46:05 local: the NREL SPA worked example' }],
     outsideCheck: { source: `${SPA_REPORT}: sun transit 11:46:05 local (±1 s) — stated in the publication.`, tests: [...SPA_TESTS] },
   },
@@ -184,10 +201,10 @@ export const SUN_FUNCTIONS: readonly FunctionDescriptor[] = [
     summary: 'Sunset on a local day (upper limb on the horizon with standard refraction)',
     category: 'Time and sun',
     params: EVENT_PARAMS,
-    result: { shape: 'value', kind: 'dateTime', min: MIN_SERIAL - 1, max: MAX_SERIAL_EXCLUSIVE, description: 'local standard date-time of sunset; #N/A when the sun does not set that day' },
+    result: { shape: 'value', kind: 'dateTime', min: EARLIEST_RESULT, max: MAX_SERIAL_EXCLUSIVE, description: 'local date-time of sunset: standard time, or clock time under the clock\'s daylight-saving rule, in the clock\'s date system; #N/A when the sun does not set that day' },
     evaluate: (a) => {
       const e = eventsOf(a);
-      if (e.sunset !== null) return e.sunset;
+      if (e.sunset !== null) return inDateSystem(a, e.sunset);
       return new NotAvailable(noEventMessage('set', e.condition));
     },
     examples: [
@@ -213,7 +230,7 @@ export const SUN_FUNCTIONS: readonly FunctionDescriptor[] = [
     name: 'INCIDENCEAT',
     summary: 'Incidence angle of the sun on a surface at a date-time and site (NREL SPA)',
     category: 'Surface angles',
-    params: [...WHEN_WHERE, SURFACE_AZIMUTH, SURFACE_TILT, ...ATMOSPHERE, INSTANT],
+    params: [...WHEN_WHERE, SURFACE_AZIMUTH, SURFACE_TILT, ...ATMOSPHERE, INSTANT, CLOCK],
     refuses: stampProblem,
     result: { shape: 'value', unit: DEGREES, min: 0, max: 180, description: 'incidence angle; above 90 the sun is behind the surface (check the altitude for night)' },
     evaluate: (a) => {

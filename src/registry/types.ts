@@ -4,6 +4,7 @@
  * tests are all derived.
  */
 import type { SunpaneError } from '../core/common';
+import type { DateSystem, DaylightSavingRule } from '../core/time';
 
 /** One value as it comes from a cell or a CLI argument. `null` is a blank cell. */
 export type Scalar = number | string | boolean | null;
@@ -38,8 +39,11 @@ export type OutTable = OutCell[][];
  * - `window`: a window described by glossary field names (src/registry/windowRange.ts): names in
  *   the first column with values beside them, or a header row over value rows; each value column
  *   or row is one window, and the windows broadcast like a column or a row of values.
+ * - `clock`: the workbook's clock as one small range of glossary fields (a daylight-saving rule and
+ *   the date system; src/registry/clockRange.ts), read whole (not broadcast). The date-time
+ *   arguments of the call are read in its date system and on its clock.
  */
-export type ParamKind = 'number' | 'dateTime' | 'choice' | 'flag' | 'text' | 'numberList' | 'choiceList' | 'table' | 'window';
+export type ParamKind = 'number' | 'dateTime' | 'choice' | 'flag' | 'text' | 'numberList' | 'choiceList' | 'table' | 'window' | 'clock';
 
 export interface ParamDescriptor {
   /** The glossary name, camelCase, e.g. `latitude`. Shown as the parameter name in Excel. */
@@ -79,7 +83,21 @@ export interface ParamDescriptor {
 }
 
 /** A parameter's value after reading: what `evaluate` receives under the parameter's name. */
-export type ArgValue = number | string | boolean | number[] | string[] | Matrix | WindowFields | undefined;
+export type ArgValue = number | string | boolean | number[] | string[] | Matrix | WindowFields | ClockFields | undefined;
+
+/**
+ * A clock as read from a clock range: the daylight-saving rule (serials in the 1900 date system,
+ * whatever system the range was written in) and the workbook's date system.
+ */
+export interface ClockFields {
+  readonly kind: 'clock';
+  /** The rule, checked; undefined: local standard time all year. */
+  readonly rule?: DaylightSavingRule;
+  /** The date system serial date-times of the call are read and given in. */
+  readonly dateSystem: DateSystem;
+  /** Whether the range gave the date system (else 1900 by default, and a window's own may say otherwise). */
+  readonly dateSystemGiven?: boolean;
+}
 
 /**
  * A window as read from a range: its fields by glossary name, each already read and checked

@@ -20,7 +20,7 @@ import { validateWindowSpec } from '../core/gain';
 import { windowRoomSeries } from '../core/load';
 import { PATH_SHADING_NAMES, requireShading, requireVerticalForShading, type Shading } from '../core/shading';
 import type { SkyModel } from '../core/sky';
-import { formatSerialIso, parseIsoLocal, requireSerial, type TimeConvention } from '../core/time';
+import { type DateSystem, DATE_SYSTEM_WORDS, formatSerialIso, parseIsoLocal, requireDateSystem, requireSerialIn, type TimeConvention } from '../core/time';
 import { EXAMPLE_SITES, findExampleSite } from '../demo/sites';
 import { GLOSSARY, type GlossaryEntry, LENGTH_MAX, WINDOW_FIELDS, choiceFor, nameKey, windowFieldFor } from './glossary';
 import type { Matrix, RawArg, Scalar, WindowFields } from './types';
@@ -72,7 +72,7 @@ export function matchFieldNames(names: readonly unknown[]): MatchedNames {
 }
 
 /** Edit distance of two keys (for "did you mean"). */
-function distance(a: string, b: string): number {
+export function editDistance(a: string, b: string): number {
   const row = Array.from({ length: b.length + 1 }, (_, j) => j);
   for (let i = 1; i <= a.length; i++) {
     let prev = row[0];
@@ -93,7 +93,7 @@ export function nearestFieldName(text: string): string | undefined {
   let bestD = Math.max(2, Math.floor(k.length / 4)) + 1;
   for (const f of WINDOW_FIELDS) {
     for (const w of [f.name, f.label, ...(f.aliases ?? [])]) {
-      const d = distance(k, nameKey(w));
+      const d = editDistance(k, nameKey(w));
       if (d < bestD) {
         bestD = d;
         best = f.name;
@@ -147,12 +147,18 @@ export function splitList(value: Scalar | number | readonly unknown[]): unknown[
  * @param field - the glossary entry
  * @param cell - the value as written: a number, a text, or (from JSON) a list of numbers
  * @param name - the field's name as the user wrote it (for messages)
- * @returns the value: text for text fields, a token for choices, a number, or a list of numbers
+ * @param dateSystem - the date system a serial date-time cell counts in (1900 unless the fields
+ *   say otherwise); a date-time is returned as a 1900-system serial
+ * @returns the value: text for text fields, a token for choices, a number (a date system as 1900 or
+ *   1904), or a list of numbers
  * @throws SunpaneError naming `name` with the value and the allowed range
  */
-export function readFieldCell(field: GlossaryEntry, cell: Scalar | number | readonly unknown[], name: string = field.name): string | number | number[] {
+export function readFieldCell(field: GlossaryEntry, cell: Scalar | number | readonly unknown[], name: string = field.name, dateSystem: DateSystem = 1900): string | number | number[] {
   const cellKind = field.window?.cell ?? 'number';
   switch (cellKind) {
+    case 'dateSystem':
+      if (Array.isArray(cell)) throw new SunpaneError(name, cell, DATE_SYSTEM_WORDS);
+      return requireDateSystem(typeof cell === 'string' ? cell.trim() : cell, name);
     case 'text':
       if (typeof cell === 'boolean' || Array.isArray(cell)) throw new SunpaneError(name, cell, 'must be a text');
       return String(cell).trim();
@@ -170,9 +176,9 @@ export function readFieldCell(field: GlossaryEntry, cell: Scalar | number | read
       // A date-time cell: a serial (the workbook's date-time) or ISO 8601 local text (a file).
       if (typeof cell === 'string') {
         const t = cell.trim();
-        return t !== '' && !Number.isNaN(Number(t)) ? requireSerial(name, Number(t)) : parseIsoLocal(t, name);
+        return t !== '' && !Number.isNaN(Number(t)) ? requireSerialIn(name, Number(t), dateSystem) : parseIsoLocal(t, name);
       }
-      return requireSerial(name, cell);
+      return requireSerialIn(name, cell, dateSystem);
     }
     case 'list':
     case 'monthly': {
@@ -205,10 +211,14 @@ export function choiceText(field: { choices?: readonly string[]; choiceAliases?:
 export function fieldsOf(entries: readonly { field: GlossaryEntry; written: string; cell: Scalar | number | readonly unknown[] }[]): WindowFields {
   const values = new Map<string, string | number | number[]>();
   const written = new Map<string, string>();
+  const empty = (cell: Scalar | number | readonly unknown[]) => isBlank(cell) || (Array.isArray(cell) && cell.length === 0);
+  // The date system first: the serial date-times of the same fields count days in it.
+  const system = entries.find((x) => x.field.name === 'dateSystem' && !empty(x.cell));
+  const dateSystem = system ? (readFieldCell(system.field, system.cell, system.written) as DateSystem) : 1900;
   for (const { field, written: w, cell } of entries) {
     written.set(field.name, w);
-    if (isBlank(cell) || (Array.isArray(cell) && cell.length === 0)) continue;
-    values.set(field.name, readFieldCell(field, cell, w));
+    if (empty(cell)) continue;
+    values.set(field.name, readFieldCell(field, cell, w, dateSystem));
   }
   return { kind: 'window', values, written };
 }
@@ -587,7 +597,7 @@ export function windowSpecFromFields(f: WindowFields, options: WindowSpecOptions
 
 /** Fields the builder above reads itself (they combine into devices, a sky, a place or a table). */
 const BUILT: ReadonlySet<string> = new Set([
-  'name', 'site', 'latitude', 'longitude', 'utcOffset', 'elevation', 'pressure', 'temperature', 'year', 'timeConvention',
+  'name', 'site', 'latitude', 'longitude', 'utcOffset', 'elevation', 'pressure', 'temperature', 'year', 'timeConvention', 'dateSystem',
   'surfaceAzimuth', 'surfaceTilt', 'width', 'height', 'frameFraction', 'shgc', 'panes', 'interiorAttenuation', 'radiantFraction',
   'shgcAngles', 'shgcValues', 'groundAlbedo', 'skyModel', 'linkeTurbidity', 'tauB', 'tauD',
   ...WINDOW_FIELDS.filter((g) => g.window!.group === 'shading').map((g) => g.name),
@@ -635,7 +645,7 @@ const STAND_IN_SKY: Weather = { kind: 'ineichenClearSky', linkeTurbidity: [3] };
 /** Every window field with its words, for help texts: `name (label) — meaning; range; blank means`. */
 export function windowFieldLines(): string[] {
   return WINDOW_FIELDS.map((f) => {
-    const range = f.window!.cell === 'number' ? `; ${rangeOf(f).replace(/^must be /, '')}` : f.window!.cell === 'choice' ? `; ${choiceText(f).replace(/^must be /, '')}` : '';
+    const range = f.window!.cell === 'number' ? `; ${rangeOf(f).replace(/^must be /, '')}` : f.window!.cell === 'choice' ? `; ${choiceText(f).replace(/^must be /, '')}` : f.window!.cell === 'dateSystem' ? `; ${DATE_SYSTEM_WORDS.replace(/^must be /, '')}` : '';
     const blank = f.default !== undefined ? `; blank: ${f.default}` : '';
     return `${f.name} — ${f.description}${range}${blank}`;
   });

@@ -162,3 +162,22 @@ describe('window JSON', () => {
     expect(() => readWindowFile(file)).toThrow(/^height = blank is not allowed: it is required and must be a number from 0\.01 to 100 m \(in .*w\.json\)$/);
   });
 });
+
+describe('window JSON: the clock fields', () => {
+  const rule = { start: 46110 + 2 / 24, end: 46320 + 3 / 24, shift: 1 }; // 2026-03-29 02:00, 2026-10-25 03:00
+  it('reads a daylight-saving rule given as serials of the 1904 date system, as ISO text, or as 1900 serials, the same', () => {
+    const iso = windowFromJson({ ...MINIMAL, daylightSavingStart: '2026-03-29T02:00', daylightSavingEnd: '2026-10-25T03:00' }).spec.site.daylightSaving;
+    const s1900 = windowFromJson({ ...MINIMAL, daylightSavingStart: rule.start, daylightSavingEnd: rule.end }).spec.site.daylightSaving;
+    const s1904 = windowFromJson({ ...MINIMAL, dateSystem: 1904, daylightSavingStart: rule.start - 1462, daylightSavingEnd: rule.end - 1462 }).spec.site.daylightSaving;
+    expect(iso).toEqual(rule);
+    expect(s1900).toEqual(rule);
+    expect(s1904!.start).toBeCloseTo(rule.start, 9);
+    expect(s1904!.end).toBeCloseTo(rule.end, 9);
+  });
+
+  it('refuses a date system other than 1900 or 1904 by its key, with the value and the choices', () => {
+    const err = refusal({ ...MINIMAL, 'Date system': 1903 });
+    expect(err.argument).toBe('Date system');
+    expect(err.message).toMatch(/^Date system = 1903 is not allowed: must be 1900 .* or 1904 /);
+  });
+});

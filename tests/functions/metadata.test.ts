@@ -170,6 +170,11 @@ describe('argument help in functions.json: unit and allowed range', () => {
       case 'window':
         if (!text.includes('window fields')) out.push('does not say it takes window fields');
         break;
+      case 'clock':
+        for (const f of ['daylightSavingStart', 'daylightSavingEnd', 'daylightSavingShift', 'dateSystem']) if (!text.includes(f)) out.push(`the clock field ${f} is not named`);
+        if (!/daylightSavingShift \[h\] \(above 0 up to 2/.test(text)) out.push("the shift's unit and range are not stated");
+        if (!text.includes('1900 or 1904')) out.push('the date systems are not stated');
+        break;
       default:
         out.push(`no rule for a ${p.kind} parameter: add one to this test`);
     }

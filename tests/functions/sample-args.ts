@@ -115,7 +115,7 @@ export function transpose(m: readonly Cell[][]): Cell[][] {
 /** Index of the first broadcast parameter that has a value in `args` (for the range call). */
 export function firstBroadcastIndex(fn: FunctionDescriptor, args: readonly FormulaArg[]): number {
   // A window's range is its fields, not a range of values (several windows are checked in tests/fixtures/formulas.ts).
-  return fn.params.findIndex((p, k) => p.kind !== 'numberList' && p.kind !== 'choiceList' && p.kind !== 'table' && p.kind !== 'window' && args[k] !== null && args[k] !== undefined);
+  return fn.params.findIndex((p, k) => p.kind !== 'numberList' && p.kind !== 'choiceList' && p.kind !== 'table' && p.kind !== 'window' && p.kind !== 'clock' && args[k] !== null && args[k] !== undefined);
 }
 
 /** A second valid value for a broadcast parameter, different from `v` where the range allows. */

@@ -99,7 +99,19 @@ describe('the glossary', () => {
         expect(FUNCTIONS.some((f) => f.name === fn.supersededBy)).toBe(true);
         continue;
       }
-      expect(`${fn.name} ${fn.params.length}`).toBe(`${fn.name} ${Math.min(fn.params.length, 11)}`);
+      // The workbook's clock is one range at the end, shared by every function that reads a date-time: not counted.
+      const own = fn.params.filter((p, k) => !(p.kind === 'clock' && k === fn.params.length - 1)).length;
+      expect(`${fn.name} ${own}`).toBe(`${fn.name} ${Math.min(own, 11)}`);
+    }
+  });
+
+  test('the clock is one argument, the last, of every function that reads a date-time or gives one', () => {
+    for (const fn of FUNCTIONS) {
+      const clocks = fn.params.flatMap((p, k) => (p.kind === 'clock' ? [k] : []));
+      expect(`${fn.name} ${clocks.length <= 1 && clocks.every((k) => k === fn.params.length - 1)}`).toBe(`${fn.name} true`);
+      // a date-time read, a date-time result, or a column of date-times (the hourly year's stamp)
+      const dated = fn.params.some((p) => p.kind === 'dateTime' || (p.kind === 'choiceList' && (p.choices ?? []).includes('stamp'))) || fn.result.kind === 'dateTime';
+      expect(`${fn.name} ${clocks.length}`).toBe(`${fn.name} ${dated ? 1 : 0}`);
     }
   });
 });

@@ -24,7 +24,8 @@
 import { readFileSync } from 'node:fs';
 import fc from 'fast-check';
 import { SunpaneError } from '../../src/core/common/errors';
-import { civilToSerial, hoursInYear, MAX_SERIAL_EXCLUSIVE, MIN_SERIAL } from '../../src/core/time';
+import { civilToSerial, type DateSystem, formatSerialIso, hoursInYear, MAX_SERIAL_EXCLUSIVE, MIN_SERIAL } from '../../src/core/time';
+import type { ClockFields } from '../../src/registry/types';
 import { applyFunction, readRange, readScalar } from '../../src/registry/evaluate';
 import { readWindowRange } from '../../src/registry/windowRange';
 import { FUNCTIONS, findFunction, isOptional } from '../../src/registry';
@@ -194,7 +195,7 @@ function seriesOf(hours: number): [number[], number[]] {
 }
 
 /** Fields no generated window sets at random: its place, the sky and the glass type with its table (each drawn as one). */
-const SET_APART = ['name', 'site', 'shgcAngles', 'shgcValues', 'linkeTurbidity', 'tauB', 'tauD', 'year', 'surfaceTilt', 'glazingType', 'glazingTypeParameter'];
+const SET_APART = ['name', 'site', 'shgcAngles', 'shgcValues', 'linkeTurbidity', 'tauB', 'tauD', 'year', 'surfaceTilt', 'glazingType', 'glazingTypeParameter', 'dateSystem'];
 /** Fields that only mean something together (drawn as a group). */
 const GROUPS: readonly (readonly string[])[] = [
   ['daylightSavingStart', 'daylightSavingEnd', 'daylightSavingShift'],
@@ -212,6 +213,41 @@ function projectionFor(name: string): string | undefined {
 const DST_ARB: fc.Arbitrary<Pair[]> = fc
   .tuple(fc.integer({ min: 1950, max: 2100 }), fc.integer({ min: 3, max: 4 }), fc.integer({ min: 1, max: 28 }), fc.integer({ min: 9, max: 11 }), fc.integer({ min: 1, max: 28 }), fc.option(numberArb(GLOSSARY.daylightSavingShift), { nil: undefined }))
   .map(([y, m1, d1, m2, d2, shift]) => [['daylightSavingStart', civilToSerial(y, m1, d1, 2)], ['daylightSavingEnd', civilToSerial(y, m2, d2, 3)], ...(shift !== undefined ? [['daylightSavingShift', shift] as Pair] : [])]);
+
+/**
+ * A valid clock range (the trailing `clock` argument): a daylight-saving rule drawn whole (start and
+ * end together, the end after the start; the shift sometimes blank), a date system, or both, in
+ * either layout, under the names, labels or aliases of the glossary. In the 1904 date system the
+ * rule's serials count from 1 January 1904, or are ISO text (the same in both systems).
+ */
+export const CLOCK_ARB: fc.Arbitrary<{ raw: RawArg; dateSystem: 1900 | 1904 }> = fc
+  .tuple(fc.option(DST_ARB, { nil: undefined }), fc.constantFrom<(1900 | 1904 | undefined)>(undefined, 1900, 1904, 1904), fc.boolean(), fc.boolean(), fc.boolean())
+  .filter(([rule, system]) => rule !== undefined || system !== undefined)
+  .map(([rule, system, down, iso, label]) => {
+    const names: Record<string, string> = label
+      ? { daylightSavingStart: 'Daylight saving start', daylightSavingEnd: 'dstEnd', daylightSavingShift: 'Daylight saving shift [h]', dateSystem: 'Date system' }
+      : { daylightSavingStart: 'daylightSavingStart', daylightSavingEnd: 'daylightSavingEnd', daylightSavingShift: 'daylightSavingShift', dateSystem: 'dateSystem' };
+    const pairs: Pair[] = (rule ?? []).map(([n, v]) => {
+      if (n === 'daylightSavingShift' || typeof v !== 'number') return [names[n], v] as Pair;
+      return [names[n], iso ? formatSerialIso(v) : system === 1904 ? v - 1462 : v] as Pair;
+    });
+    if (system !== undefined) pairs.push([names.dateSystem, system]);
+    const raw: RawArg = down ? pairs.map(([n, v]) => [n, v]) : [pairs.map(([n]) => n), pairs.map(([, v]) => v)];
+    return { raw, dateSystem: system ?? 1900 };
+  });
+
+/** Clock ranges each refused for one reason: the end before the start, a shift or date system out of range, a start alone, a name that is no clock field. */
+const BAD_CLOCKS: readonly RawArg[] = [
+  [['daylightSavingStart', civilToSerial(2026, 10, 25, 3)], ['daylightSavingEnd', civilToSerial(2026, 3, 29, 2)]],
+  [['dstStart', '2026-03-29T02:00'], ['dstEnd', '2026-10-25T03:00'], ['dstShift', 2.5]],
+  [['dstStart', '2026-03-29T02:00'], ['dstEnd', '2026-10-25T03:00'], ['dstShift', 0]],
+  [['dateSystem', 1903]],
+  [['Date system'], ['Mac']],
+  [['daylightSavingStart', civilToSerial(2026, 3, 29, 2)]],
+  [['latitude', 40]],
+  [['dstStart', -5], ['dstEnd', 200], ['dateSystem', 1904]],
+  [['dstStart', civilToSerial(2026, 3, 29, 2), 1], ['dstEnd', civilToSerial(2026, 10, 25, 3), 2]],
+];
 
 /** Conduction: U-value, indoor temperature and the design day's dry-bulb and range, all together. */
 const CONDUCTION_ARB: fc.Arbitrary<Pair[]> = fc
@@ -351,6 +387,8 @@ function paramArb(fn: FunctionDescriptor, p: ParamDescriptor): fc.Arbitrary<RawA
       break;
     case 'window':
       return fc.constant(null); // drawn as a whole window by validCaseArb
+    case 'clock':
+      return fc.constant(null); // drawn as a whole clock by validCaseArb (its date system moves the date-times)
     case 'choiceList':
       arb = fc.subarray([...(p.choices ?? []), ...Object.keys(p.choiceAliases ?? {})], { minLength: 1, maxLength: Math.min(4, p.length?.max ?? 4) }).chain((xs) => fc.boolean().map((down) => (down ? xs.map((x) => [x]) : [xs])));
       break;
@@ -428,8 +466,24 @@ export function validCaseArb(fn: FunctionDescriptor): fc.Arbitrary<ValidCase> {
         }
       }
       const kDate = names.indexOf('dateTime');
-      if (site && kDate >= 0) return dateInYear(site.year).map((d) => ({ raw: withAt(out, kDate, d), site, bump }));
-      return fc.constant({ raw: out, site, bump });
+      const dated = site && kDate >= 0 ? dateInYear(site.year).map((d) => ({ raw: withAt(out, kDate, d), site, bump })) : fc.constant({ raw: out, site, bump });
+      const kClock = fn.params.findIndex((p) => p.kind === 'clock');
+      if (kClock < 0) return dated;
+      // The clock: blank one time in three, else a drawn clock; in its 1904 system the serial date-times count 1462 days fewer.
+      // A window function: the window's own dateSystem field now and then (no clock then: both would have to agree).
+      const ownSystem = windowK >= 0 ? fc.oneof({ weight: 5, arbitrary: fc.constant(false) }, { weight: 1, arbitrary: fc.constant(true) }) : fc.constant(false);
+      return fc.tuple(dated, fc.oneof({ weight: 1, arbitrary: fc.constant(undefined) }, { weight: 2, arbitrary: CLOCK_ARB }), ownSystem).map(([c, drawnClock, own]) => {
+        const clock = own ? { raw: null as RawArg, dateSystem: 1904 as const } : drawnClock;
+        if (clock === undefined) return c;
+        const raw = withAt(c.raw, kClock, clock.raw);
+        if (own) raw[windowK] = windowWith(raw[windowK], 'dateSystem', 1904);
+        if (clock.dateSystem === 1904) {
+          fn.params.forEach((p, k) => {
+            if (p.kind === 'dateTime' && typeof raw[k] === 'number' && (raw[k] as number) >= 1462) raw[k] = (raw[k] as number) - 1462;
+          });
+        }
+        return { ...c, raw };
+      });
     });
 }
 
@@ -440,7 +494,7 @@ function withAt(raw: RawArg[], k: number, v: RawArg): RawArg[] {
 }
 
 /** Bad values for one parameter, from its descriptor. */
-export function invalidArb(p: ParamDescriptor): fc.Arbitrary<RawArg> | undefined {
+export function invalidArb(p: ParamDescriptor, withClock = false): fc.Arbitrary<RawArg> | undefined {
   const bad: RawArg[] = [];
   switch (p.kind) {
     case 'number':
@@ -450,7 +504,8 @@ export function invalidArb(p: ParamDescriptor): fc.Arbitrary<RawArg> | undefined
       if (p.integer) bad.push((p.min ?? 0) + 0.5);
       break;
     case 'dateTime':
-      bad.push(60, 0, -1, MAX_SERIAL_EXCLUSIVE, Number.NaN, 'yesterday', '2026-02-30T10:00');
+      // 60 and 0 are 1900-system refusals only (the 1904 system starts at 0): not with a drawn clock
+      bad.push(...(withClock ? [] : [60, 0]), -1, MAX_SERIAL_EXCLUSIVE, Number.NaN, 'yesterday', '2026-02-30T10:00');
       break;
     case 'choice':
       bad.push('no-such-choice', 3);
@@ -463,6 +518,8 @@ export function invalidArb(p: ParamDescriptor): fc.Arbitrary<RawArg> | undefined
       break;
     case 'window':
       return invalidWindowArb();
+    case 'clock':
+      return fc.constantFrom(...BAD_CLOCKS);
     case 'numberList':
       // In a series with gaps, text and blanks are missing values, not errors.
       if (!p.gapsAreMissing) bad.push([['text']], [[Number.NaN]]);
@@ -484,12 +541,18 @@ export const MESSAGES: { fn: string; message: string }[] = [];
 /** The arguments as `evaluate` would see them, to ask the descriptor's `refuses`. */
 export function readArgs(fn: FunctionDescriptor, raw: readonly RawArg[]): Args {
   const args: Args = {};
+  const kClock = fn.params.findIndex((p) => p.kind === 'clock');
+  const clock = kClock >= 0 ? (readRange(fn.params[kClock], raw[kClock]) as ClockFields) : undefined;
+  const kWindow = fn.params.findIndex((p) => p.kind === 'window');
+  const windowSystem = kWindow >= 0 ? (readWindowRange(raw[kWindow], 'window').windows.map((w) => (w instanceof SunpaneError ? undefined : w.values.get('dateSystem'))).find((v) => v !== undefined) as DateSystem | undefined) : undefined;
+  const dateSystem: DateSystem = clock?.dateSystemGiven ? clock.dateSystem : (windowSystem ?? 1900);
   fn.params.forEach((p, k) => {
-    if (p.kind === 'window') {
+    if (p.kind === 'clock') args[p.name] = readRange(p, raw[k]);
+    else if (p.kind === 'window') {
       const w = readWindowRange(raw[k], p.name).windows[0];
       if (w instanceof SunpaneError) throw w;
       args[p.name] = w;
-    } else args[p.name] = p.kind === 'numberList' || p.kind === 'choiceList' || p.kind === 'table' ? readRange(p, raw[k]) : readScalar(p, raw[k] as Scalar);
+    } else args[p.name] = p.kind === 'numberList' || p.kind === 'choiceList' || p.kind === 'table' ? readRange(p, raw[k]) : readScalar(p, raw[k] as Scalar, dateSystem);
   });
   return args;
 }
@@ -780,16 +843,21 @@ const PHYSICS: Record<string, Physics> = {
 };
 
 function eventOnDay(name: string, a: Args, out: OutTable): void {
-  const v = single(out);
+  let v = single(out);
   if (v === undefined) {
     must(name !== 'SOLARNOON', 'SOLARNOON must always have a value');
     return;
   }
+  // on the local day of the clock (a.date is read as a 1900-system serial; the result is in the clock's system)
+  const clock = a.clock as ClockFields | undefined;
+  v += clock?.dateSystem === 1904 ? 1462 : 0;
   const day = Math.floor(a.date as number);
   // on the local day, to a minute (the SPA's events are worked out for the day's 0 h UT and can land
   // a second outside a local day whose transit falls at midnight, near the date line)
   const minute = 1 / 1440;
-  must(v >= day - minute && v <= day + 1 + minute, `${name} ${v} is not on the local day ${day}`);
+  // A clock day of 23 hours may hold no transit (solar noon near midnight): SOLARNOON then gives the nearest, up to the shift outside.
+  const slack = name === 'SOLARNOON' && clock?.rule !== undefined ? clock.rule.shift / 24 : 0;
+  must(v >= day - minute - slack && v <= day + 1 + minute + slack, `${name} ${v} is not on the local day ${day}`);
 }
 
 function sunDownGivesZero(fn: FunctionDescriptor, a: Args, out: OutTable): void {
@@ -818,7 +886,7 @@ function oneHourGain(fn: FunctionDescriptor, a: Args, raw: readonly RawArg[], ou
   const given = a.dni !== undefined;
   const w = range ? (a.window as { values: ReadonlyMap<string, unknown> }).values : undefined;
   // (a window on daylight saving reads its date-times on the clock: its night is checked by the steps' own sun)
-  if (!given && c.site && !w?.has('daylightSavingStart')) {
+  if (!given && c.site && !w?.has('daylightSavingStart') && (a.clock as ClockFields | undefined)?.rule === undefined) {
     const convention = range ? ((w!.get('timeConvention') as string) ?? 'hourEnding') : (a.timeConvention as string);
     const alt = altitudeAt(a.dateTime as number, c.site.latitude, c.site.longitude, c.site.utcOffset, convention);
     if (alt !== undefined && alt < -0.9) must(gain === 0, `${fn.name}: gain ${gain} at night (sun ${alt}°) under a clear sky`);
@@ -913,6 +981,15 @@ const YEAR_BOUNDS: Record<string, [number, number]> = {
   sunAzimuth: [0, 360],
   stamp: [MIN_SERIAL, MAX_SERIAL_EXCLUSIVE],
 };
+/** The daylight-saving shift [h] a year call runs under (the window's rule or the clock's), 0 without one. */
+function ruleShift(a: Args): number {
+  const clock = a.clock as ClockFields | undefined;
+  if (clock?.rule) return clock.rule.shift;
+  const values = (a.window as { values?: ReadonlyMap<string, unknown> } | undefined)?.values;
+  if (values?.has('daylightSavingStart')) return (values.get('daylightSavingShift') as number | undefined) ?? 1;
+  return 0;
+}
+
 const ALIAS: Record<string, string> = { sunlit: 'sunlitFraction', profile: 'profileAngle', altitude: 'sunAltitude', azimuth: 'sunAzimuth', skyview: 'skyViewRatio', groundview: 'groundViewRatio' };
 
 function yearSane(fn: FunctionDescriptor, a: Args, out: OutTable, quantities: string[]): void {
@@ -928,7 +1005,10 @@ function yearSane(fn: FunctionDescriptor, a: Args, out: OutTable, quantities: st
       if (typeof v !== 'number') continue;
       must(v >= lo - 1e-9 && v <= hi + 1e-9, `${fn.name}: ${name} ${v} outside ${lo}…${hi}`);
       if (name === 'stamp') {
-        must(prev === -Infinity || near(v - prev, 1 / 24, 1e-6), `${fn.name}: stamps not one hour apart`);
+        // on the clock: one hour apart, or one hour ± the shift where the clocks change
+        const shift = ruleShift(a);
+        const step = v - prev;
+        must(prev === -Infinity || near(step, 1 / 24, 1e-6) || (shift > 0 && (near(step, (1 + shift) / 24, 1e-6) || near(step, (1 - shift) / 24, 1e-6))), `${fn.name}: stamps ${prev} → ${v} not one hour apart (or an hour ± the daylight-saving shift)`);
         prev = v;
       }
     }
@@ -960,7 +1040,8 @@ type Drawn = { kind: 'valid'; c: ValidCase } | { kind: 'invalid'; c: ValidCase; 
 export function runFunction(fn: FunctionDescriptor, runs: number, file: string): Counts {
   const counts: Counts = { runs: 0, valid: 0, refused: 0, invalid: 0 };
   COUNTS.set(fn.name, counts);
-  const badable = fn.params.map((p, k) => ({ k, arb: invalidArb(p) })).filter((x) => x.arb !== undefined);
+  const withClock = fn.params.some((p) => p.kind === 'clock' || p.kind === 'window');
+  const badable = fn.params.map((p, k) => ({ k, arb: invalidArb(p, withClock) })).filter((x) => x.arb !== undefined);
   const valid = validCaseArb(fn);
   const invalid: fc.Arbitrary<Drawn> = fc
     .tuple(valid, fc.constantFrom(...badable))

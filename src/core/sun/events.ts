@@ -8,7 +8,7 @@
  * consecutive transits, which works on the LOCAL day asked for rather than the report's UT day.
  */
 import { DEG, RAD, asinClamped, wrap180 } from '../common';
-import { deltaTAt, julianDay, requireSerial, requireUtcOffset, serialToUtcMs, utcMsToSerial } from '../time';
+import { clockToStandard, type DaylightSavingRule, deltaTAt, julianDay, MIN_SERIAL, requireSerial, requireUtcOffset, serialToUtcMs, standardToClock, utcMsToSerial } from '../time';
 import { RISE_SET_ALTITUDE, type ResolvedSunOptions, type SunOptions, emptySteps, requireInstant, requireSite, resolveSunOptions, spaGeocentric } from './spa';
 
 const { sin, cos } = Math;
@@ -135,4 +135,43 @@ export function sunEvents(localDate: number, latitude: number, longitude: number
   }
   const toSerial = (t: number | null) => (t === null ? null : utcMsToSerial(t, utcOffset));
   return { condition, sunrise: toSerial(sunrise), solarNoon: utcMsToSerial(solarNoon, utcOffset), sunset: toSerial(sunset) };
+}
+
+/**
+ * Sunrise, solar noon and sunset on a local calendar day of the CLOCK: under a daylight-saving rule
+ * the day runs from the clock's midnight to the next (in standard time from `clockToStandard(D)`
+ * to `clockToStandard(D + 1)`, 23 or 25 hours on the days the clocks change), and the events are
+ * given as clock readings. An event of the standard day before that falls after the clock's
+ * midnight (a sunset just before standard midnight, near the polar circles) belongs to it, and one
+ * of the standard day that falls after the next clock midnight does not. Without a rule this is
+ * {@link sunEvents}.
+ * @param clockDate - spreadsheet serial (1900 system) of the clock day; only its calendar day is used
+ * @param rule - a checked daylight-saving rule, or undefined for standard time
+ * @returns as {@link sunEvents}, with clock-time serials; if an event happens twice in the clock
+ *   day, the first is given; solar noon is the transit in the clock day, or (a day of 23 hours
+ *   without one, where solar noon falls near midnight) the one nearest the day's middle
+ */
+export function sunEventsOnClock(clockDate: number, latitude: number, longitude: number, utcOffset: number, rule: DaylightSavingRule | undefined, options?: SunOptions): SunEvents {
+  if (rule === undefined) return sunEvents(clockDate, latitude, longitude, utcOffset, options);
+  requireSerial('date', clockDate);
+  const day = Math.floor(clockDate);
+  const from = clockToStandard(day, rule);
+  const to = clockToStandard(day + 1, rule);
+  const own = sunEvents(day, latitude, longitude, utcOffset, options);
+  // The clock day starts before the standard one while the clocks are ahead at its midnight.
+  const before = from < day && day - 1 >= MIN_SERIAL ? sunEvents(day - 1, latitude, longitude, utcOffset, options) : undefined;
+  const inDay = (t: number | null | undefined): t is number => typeof t === 'number' && t >= from && t < to;
+  const first = (key: 'sunrise' | 'sunset' | 'solarNoon'): number | null => {
+    const t = [before?.[key], own[key]].find(inDay);
+    return t === undefined ? null : standardToClock(t, rule);
+  };
+  const sunrise = first('sunrise');
+  const sunset = first('sunset');
+  // A clock day of 23 hours (the clocks go forward) may hold no transit where solar noon falls near
+  // midnight: then, as in sunEvents, the transit nearest the day's middle.
+  const middle = (from + to) / 2;
+  const nearest = [before?.solarNoon, own.solarNoon].filter((t): t is number => t !== undefined).reduce((best, t) => (Math.abs(t - middle) < Math.abs(best - middle) ? t : best));
+  const noon = first('solarNoon') ?? standardToClock(nearest, rule);
+  const condition = sunrise === null && sunset === null ? own.condition : 'normal';
+  return { condition, sunrise, solarNoon: noon, sunset };
 }

@@ -6,7 +6,7 @@
  *
  * This index is the folder's only public door: code outside the folder imports from here.
  */
-export { sunEvents } from './events';
+export { sunEvents, sunEventsOnClock } from './events';
 export { type Site } from './site';
 export { standardPressure, type SunOptions, type SunPosition, sunPosition } from './spa';
 export { clearSunNodes, sunPositionFromNodes } from './sunNodes';

@@ -17,7 +17,7 @@
  * - The 1904 date system counts days from 1 January 1904 (serial 0): serial1900 = serial1904 + 1462.
  */
 import { SunpaneError, requireRange } from '../common';
-import { civilToSerial, daysInMonth, formatSerialIso, hoursInYear, isLeapYear, requireSerial, serialToCivil } from './calendar';
+import { civilToSerial, daysInMonth, formatSerialIso, hoursInYear, isLeapYear, MAX_SERIAL_EXCLUSIVE, requireSerial, serialToCivil } from './calendar';
 
 /** A daylight-saving rule as given (serials in the 1900 date system). */
 export interface DaylightSavingRule {
@@ -179,10 +179,31 @@ export const DATE_1904_OFFSET = 1462;
 /** A workbook's date system. */
 export type DateSystem = 1900 | 1904;
 
-/** Checks a date system (1900 or 1904). */
+/** The allowed date systems in words (one wording for every message). */
+export const DATE_SYSTEM_WORDS = 'must be 1900 (the 1900 date system, the default) or 1904 (the 1904 date system, set in a workbook\'s calculation options; older Mac workbooks use it)';
+
+/** Checks a date system (1900 or 1904; the text "1900" or "1904" too). */
 export function requireDateSystem(value: unknown, argument = 'dateSystem'): DateSystem {
-  if (value !== 1900 && value !== 1904) throw new SunpaneError(argument, value, 'must be 1900 (Windows workbooks, the default) or 1904 (some Mac workbooks)');
-  return value;
+  const v = typeof value === 'string' && /^\s*(1900|1904)\s*$/.test(value) ? Number(value) : value;
+  if (v !== 1900 && v !== 1904) throw new SunpaneError(argument, value, DATE_SYSTEM_WORDS);
+  return v;
+}
+
+/** The last serial accepted in the 1904 system, exclusive (the end of 31 December 9999). */
+export const MAX_SERIAL_1904_EXCLUSIVE = MAX_SERIAL_EXCLUSIVE - DATE_1904_OFFSET;
+
+/**
+ * Checks a serial date-time of a workbook in `system` and gives the same instant as a 1900-system
+ * serial. In the 1904 system a serial counts days from 1 January 1904 (serial 0), the first date
+ * that system can show; in the 1900 system the range of {@link requireSerial} holds.
+ * @throws SunpaneError naming `argument`, with the value as given and the system's range
+ */
+export function requireSerialIn(argument: string, serial: unknown, system: DateSystem): number {
+  if (system === 1900) return requireSerial(argument, serial);
+  if (typeof serial !== 'number' || !Number.isFinite(serial) || serial < 0 || serial >= MAX_SERIAL_1904_EXCLUSIVE) {
+    throw new SunpaneError(argument, serial, `must be a date-time of the 1904 date system from 1 January 1904 (serial 0) to 31 December 9999 (serial below ${MAX_SERIAL_1904_EXCLUSIVE})`);
+  }
+  return serial + DATE_1904_OFFSET;
 }
 
 /** A serial of a workbook in `system` → the same instant as a 1900-system serial. */

@@ -13,6 +13,7 @@
  */
 import { SunpaneError } from '../common';
 import { MAX_SERIAL_EXCLUSIVE, MIN_SERIAL, requireSerial } from './calendar';
+import { clockToStandard, type DaylightSavingRule } from './clock';
 
 /** How a date-time standing for an hour is read (see the module comment). */
 export type TimeConvention = 'hourEnding' | 'instant';
@@ -84,4 +85,18 @@ export function requireStamp(argument: string, serial: unknown, convention: Time
     throw new SunpaneError(argument, s, `must be a date-time from 1 March 1900 01:00 (serial ${MIN_SERIAL + 1 / 24}, the end of the first whole hour) to 31 December 9999 (serial below ${MAX_SERIAL_EXCLUSIVE}) with the time convention hourEnding`);
   }
   return s;
+}
+
+/**
+ * A date-time read by a convention, from the local clock to local standard time: an hour-ending
+ * stamp moves with its hour's middle (the hour ending 14:00 on the clock is the hour ending 13:00
+ * standard, also in the hour the clocks change), an instant moves itself. Unchanged without a rule.
+ * @param stamp - the date-time as given (a clock reading; 1900-system serial)
+ * @param convention - how the date-time names its hour
+ * @param rule - a checked daylight-saving rule, or undefined
+ * @returns the standard-time stamp
+ */
+export function clockStampToStandard(stamp: number, convention: TimeConvention, rule: DaylightSavingRule | undefined): number {
+  if (rule === undefined) return stamp;
+  return convention === 'hourEnding' ? clockToStandard(stamp - 1 / 48, rule) + 1 / 48 : clockToStandard(stamp, rule);
 }
