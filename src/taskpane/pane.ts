@@ -22,7 +22,9 @@ import { readNamedTable, readSheetData, withCheckedWeather } from './sheetData';
 import { type SheetData, buildWindowSpec, findProblems, isClean } from './spec';
 import { drawSunPath } from './sunPathView';
 import { writeSmallTableSheet } from './tableSheet';
+import { workbookDateSystem } from './dateSystem';
 import { writeYearSheet } from './yearSheet';
+import type { DateSystem } from '../core/time';
 
 /** The caution shown in the pane and on every result sheet (one text for every output). */
 export { CAUTION };
@@ -199,7 +201,7 @@ export function createPane(doc: Document, host: PaneHost): void {
 
   /** What the last weather check had to say (problems within the limit, notes), shown under the form. */
   let weatherLines: string[] = [];
-  async function withSheetData(values: FormValues): Promise<{ spec: WindowSpec; data: SheetData } | undefined> {
+  async function withSheetData(values: FormValues): Promise<{ spec: WindowSpec; data: SheetData; dateSystem: DateSystem } | undefined> {
     weatherLines = [];
     if (!checkForm()) {
       say('Fix the marked boxes on the Window tab first.', 'error');
@@ -216,6 +218,9 @@ export function createPane(doc: Document, host: PaneHost): void {
       }
       throw err;
     }
+    // The workbook's date system: its serial stamps are read, and the pane's date-times written, in it.
+    const dateSystem = await workbookDateSystem(host.run);
+    if (data.weatherRanges) data = { ...data, weatherRanges: { ...data.weatherRanges, dateSystem } };
     // Hourly weather: checked as the command line checks it (src/io/weather.ts), for the form's year and site.
     try {
       const base = buildWindowSpec(values, {});
@@ -243,7 +248,7 @@ export function createPane(doc: Document, host: PaneHost): void {
       return undefined;
     }
     if (weatherLines.length) formGeneral.textContent = weatherLines.join('\n');
-    return { spec: buildWindowSpec(values, data), data };
+    return { spec: buildWindowSpec(values, data), data, dateSystem };
   }
   function fieldMessage(err: SunpaneError): Record<string, string> {
     for (const [id, f] of FIELD_BY_ID) if ((f.paths ?? []).some((p) => err.argument.startsWith(p))) return { [id]: err.message };
@@ -272,7 +277,7 @@ export function createPane(doc: Document, host: PaneHost): void {
       await breathe();
       const result: YearResult = runYear(ready.spec);
       const plan = await planFor(`${ready.spec.name} hourly`);
-      const written = await writeYearSheet(host.run, { ...plan, tableBase: `${ready.spec.name} hourly` }, { title: `Sunpane hourly solar gain: ${ready.spec.name}`, lines: describeSpec(ready.spec), timeConvention: ready.spec.timeConvention }, result.hourly, result.figures, {
+      const written = await writeYearSheet(host.run, { ...plan, tableBase: `${ready.spec.name} hourly` }, { title: `Sunpane hourly solar gain: ${ready.spec.name}`, lines: describeSpec(ready.spec), timeConvention: ready.spec.timeConvention, dateSystem: ready.dateSystem }, result.hourly, result.figures, {
         onProgress: (done, total) => setProgress(done, total, `Writing rows: ${done} of ${total}`),
         cancelled: () => cancelRequested,
       });
@@ -318,7 +323,7 @@ export function createPane(doc: Document, host: PaneHost): void {
     }
     const ready = await withSheetData(state.form);
     if (!ready) return;
-    const { rows, problems } = readSchedule(table, state.form, validateSpec, ready.data);
+    const { rows, problems } = readSchedule(table, state.form, validateSpec, ready.data, ready.dateSystem);
     if (problems.length) {
       for (const p of problems) schedProblems.append(h(doc, 'li', {}, p.message));
       say(`The schedule has ${problems.length} problem${problems.length > 1 ? 's' : ''}; nothing was written.`, 'error');
@@ -343,6 +348,7 @@ export function createPane(doc: Document, host: PaneHost): void {
         header: summaryHeader(withLoad),
         rows: out,
         formats: summaryFormats(withLoad),
+        dateSystem: ready.dateSystem,
         chartColumn: 3,
         chartTitle: 'Solar gain by window (kWh/yr)',
       });
@@ -445,6 +451,7 @@ export function createPane(doc: Document, host: PaneHost): void {
         header: compareHeader(withLoad),
         rows: comparisonRows(results, withLoad),
         formats: compareFormats(withLoad),
+        dateSystem: ready.dateSystem,
         chartColumn: 1,
         chartTitle: 'Solar gain by shading option (kWh/yr)',
         ...(withLoad ? { moreCharts: [{ column: PEAK_LOAD_COLUMN, title: 'Peak cooling load by shading option (W)' }] } : {}),

@@ -11,12 +11,13 @@
 import { SunpaneError } from '../core/common';
 import type { WindowSpec } from '../core/gain';
 import { EXAMPLE_SITES } from '../demo/sites';
-import { LOAD_WORDS, choiceFor } from '../registry/glossary';
+import { GLOSSARY, LOAD_WORDS, choiceFor } from '../registry/glossary';
 import { inGlossaryWords, readFieldCell, setPath } from '../registry/windowRange';
 import { SCHEDULE_COLUMNS, SITE_KEY, SKYLINE_KEY, type ScheduleColumn, columnForHeader, headerKey, matchHeaders, requiredColumns } from '../schedule/columns';
 import { FIELDS, type FieldDef, type FormValues, applyExampleSite, fieldForArgument } from './fields';
 import { withoutPath } from './messages';
 import { type SheetData, type SpecValidator, buildWindowSpec, readListText } from './spec';
+import type { DateSystem } from '../core/time';
 
 export { headerKey };
 
@@ -76,7 +77,7 @@ function boxText(field: FieldDef, text: string): string {
  * @param form - the form, supplying what a row leaves out
  * @param data - sheet data the form refers to (skyline, angle table, weather columns)
  */
-export function readSchedule(table: readonly (readonly unknown[])[], form: FormValues, validate: SpecValidator, data: SheetData = {}): { rows: ScheduleRow[]; problems: ScheduleProblem[] } {
+export function readSchedule(table: readonly (readonly unknown[])[], form: FormValues, validate: SpecValidator, data: SheetData = {}, dateSystem: DateSystem = 1900): { rows: ScheduleRow[]; problems: ScheduleProblem[] } {
   const problems: ScheduleProblem[] = [];
   const rows: ScheduleRow[] = [];
   if (table.length === 0) return { rows, problems: [{ row: 0, message: 'The table is empty: it needs a header row and one row per window.' }] };
@@ -100,7 +101,7 @@ export function readSchedule(table: readonly (readonly unknown[])[], form: FormV
   for (let r = 1; r < table.length; r++) {
     const line = table[r];
     if (line.every((v) => cellText(v) === '')) continue;
-    const problem = readRow(line, present, form, data, validate);
+    const problem = readRow(line, present, form, data, validate, dateSystem);
     if ('spec' in problem) rows.push({ row: r, spec: problem.spec });
     else problems.push({ row: r, column: problem.column, message: `Row ${r}${problem.label ? ` (${problem.label})` : ''}, ${problem.where}: ${problem.message}` });
   }
@@ -115,7 +116,7 @@ function labelOf(line: readonly unknown[], present: readonly { column: ScheduleC
 }
 
 /** One row: the form overridden by the row's cells, in the column list's order (both sides before one side). */
-function readRow(line: readonly unknown[], present: readonly { column: ScheduleColumn; index: number; header: string }[], form: FormValues, data: SheetData, validate: SpecValidator): RowOutcome {
+function readRow(line: readonly unknown[], present: readonly { column: ScheduleColumn; index: number; header: string }[], form: FormValues, data: SheetData, validate: SpecValidator, dateSystem: DateSystem): RowOutcome {
   let values: FormValues = { ...form };
   const rowData: SheetData = { ...data };
   const fieldToColumn = new Map<string, string>();
@@ -133,7 +134,7 @@ function readRow(line: readonly unknown[], present: readonly { column: ScheduleC
       siteHeader = header;
       continue;
     }
-    if (siteHeader && column.paths[0].startsWith('site.')) {
+    if (siteHeader && (column.paths[0] ?? '').startsWith('site.')) {
       return { label: labelOf(line, present), column: header, where: `column "${header}"`, message: `give either an example site (column "${siteHeader}") or its own latitude, longitude, UTC offset and elevation, not both.` };
     }
     if (column.key === SKYLINE_KEY) {
@@ -159,10 +160,17 @@ function readRow(line: readonly unknown[], present: readonly { column: ScheduleC
     const spec = buildWindowSpec(values, rowData);
     for (const x of extras) {
       extra = x;
-      const value = readFieldCell(x.column.field, x.text, x.header);
+      // Date-time cells are serials of the workbook's date system; a date-system column must name it.
+      const value = readFieldCell(x.column.field, x.text, x.header, dateSystem);
+      if (x.column.field.name === 'dateSystem' && value !== dateSystem) {
+        throw new SunpaneError(x.header, value, `must be this workbook's date system, ${dateSystem} (Excel's option "Use 1904 date system" is ${dateSystem === 1904 ? 'on' : 'off'}), or blank`);
+      }
       for (const p of x.column.paths) setPath(spec as unknown as Record<string, unknown>, p, value);
     }
     extra = undefined;
+    // A rule without its shift column moves the clocks 1 h, as everywhere else (the glossary's default).
+    const rule = spec.site.daylightSaving as { shift?: number } | undefined;
+    if (rule !== undefined && rule.shift === undefined) rule.shift = GLOSSARY.daylightSavingShift.default as number;
     validate(spec);
     return { spec };
   } catch (caught) {

@@ -3,7 +3,9 @@
  * a few lines of description, the table as an Excel table, and optionally a bar chart of one of its
  * columns.
  */
+import type { DateSystem } from '../core/time';
 import { escapeFormulaText } from '../io/textCells';
+import { rowsInDateSystem } from './dateSystem';
 import { cellAddress, rangeAddress } from './blocks';
 import { PALETTE, hexColour } from '../outputs/palette';
 import { type RunBatch, writingSheet } from './resultSheets';
@@ -21,6 +23,8 @@ export interface SmallTable {
   chartTitle?: string;
   /** Further bar charts of the labels against other columns (e.g. the peak cooling load), each under the one before. */
   moreCharts?: readonly { column: number; title: string }[];
+  /** The workbook's date system: cells whose format shows a date are written in it (default 1900). */
+  dateSystem?: DateSystem;
 }
 
 /** Rows (0-based, on the sheet) a chart of the table takes: 18 rows each, under the table. */
@@ -88,7 +92,7 @@ export async function writeSmallTableSheet(run: RunBatch, target: { name: string
       const end = Math.min(t.rows.length, start + per);
       await run(async (ctx) => {
         const sheet = ctx.workbook.worksheets.getItem(target.name);
-        const rows = t.rows.slice(start, end);
+        const rows = rowsInDateSystem(t.rows.slice(start, end), t.formats, t.dateSystem);
         const range = sheet.getRange(rangeAddress(top + 1 + start, 0, rows.length, width));
         range.values = rows.map(textSafeRow);
         range.numberFormat = rows.map(() => t.formats.slice());

@@ -13,6 +13,8 @@ import type { Site } from '../core/sun';
 import { readNumberText } from '../io/numberText';
 import { readStampText } from '../io/stampText';
 import { type CellValue, type HourStamp, type Quantity, type WeatherAdvice, type WeatherCheck, type WeatherColumn, type WeatherTable, HOUR_STAMPS, QUANTITY_WORDS, checkWeather, describeWeatherCheck, readUnitText } from '../io/weather';
+import type { DateSystem } from '../core/time';
+import { serialFromSheet } from './dateSystem';
 
 /** How the pane names its weather options in advice (the labels of its boxes). */
 export const PANE_WEATHER_ADVICE: WeatherAdvice = {
@@ -42,6 +44,8 @@ export interface SheetRange {
 export interface SheetWeather {
   columns: Partial<Record<Quantity, SheetRange>>;
   stamps?: SheetRange;
+  /** The workbook's date system: serial stamps count days in it (default 1900). */
+  dateSystem?: DateSystem;
 }
 
 function isHeaderCell(cell: CellValue, stamps: boolean): boolean {
@@ -65,6 +69,7 @@ export function weatherTableFromRanges(w: SheetWeather): WeatherTable {
   const quantities = (['dni', 'dhi', 'ghi'] as const).filter((q) => w.columns[q] !== undefined);
   const read = quantities.map((q) => ({ q, range: w.columns[q]!, ...columnOf(w.columns[q]!, false) }));
   const stamps = w.stamps ? columnOf(w.stamps, true) : undefined;
+  if (stamps && w.dateSystem === 1904) stamps.column = { ...stamps.column, cells: stamps.column.cells.map((c) => serialFromSheet(c, w.dateSystem)) };
   const first = read[0];
   const rows = first ? first.column.cells.length : 0;
   for (const r of read.slice(1)) {

@@ -10,7 +10,8 @@
  * workbook is left as it was before the run (apart from an earlier result sheet the user had
  * already agreed to replace). A request Excel refuses part-way does the same (WriteFailed).
  */
-import type { TimeConvention } from '../core/time';
+import type { DateSystem, TimeConvention } from '../core/time';
+import { rowsInDateSystem } from './dateSystem';
 import { escapeFormulaText } from '../io/textCells';
 import { HOURLY_COLUMNS, type HourlyData, type HourlyExtras, type HourlyKey, extrasOf, hourlyColumnsFor } from '../outputs/hourlyColumns';
 import { type ColumnRef, monthHourMeanFormula, monthlyGainFormula, tableColumnRef, yearFigureFormulas } from '../outputs/hourlyFormulas';
@@ -85,6 +86,8 @@ export interface YearHeading {
   lines: readonly string[];
   /** How the rows are stamped (the window's time convention); default hour ending. */
   timeConvention?: TimeConvention;
+  /** The workbook's date system: the stamps are written in it (default 1900). */
+  dateSystem?: DateSystem;
 }
 
 /** The hourly table's headers: the first column says how the rows are stamped. */
@@ -92,14 +95,17 @@ export function hourTableHeaders(convention: TimeConvention = 'hourEnding', extr
   return hourlyColumnsFor(convention, extras).map((c) => c.header);
 }
 
-/** The hourly rows from `start` to `end` (exclusive), rounded for the sheet (the columns `cols` has). */
-export function hourRows(cols: HourColumns, start: number, end: number): (number | string)[][] {
+/**
+ * The hourly rows from `start` to `end` (exclusive), rounded for the sheet (the columns `cols` has),
+ * the stamps in the workbook's date system (`dateSystem`, default 1900).
+ */
+export function hourRows(cols: HourColumns, start: number, end: number, dateSystem: DateSystem = 1900): (number | string)[][] {
   const columns = hourlyColumnsFor('hourEnding', extrasOf(cols));
   const rows: (number | string)[][] = [];
   for (let i = start; i < end; i++) {
     rows.push(columns.map((c) => roundForSheet((cols[c.key as HourlyKey] as ArrayLike<number>)[i], c.sheetDecimals)));
   }
-  return rows;
+  return rowsInDateSystem(rows, columns.map((c) => c.numFmt), dateSystem);
 }
 
 /** The year of an hourly table: that of its middle row (the first stamp may be the 1st at 01:00). */
@@ -232,7 +238,7 @@ export async function writeYearSheet(
         }
         const rows = block.end - block.start;
         const range = ctx.workbook.worksheets.getItem(target.name).getRange(rangeAddress(firstDataRow + block.start, 0, rows, width));
-        range.values = hourRows(cols, block.start, block.end);
+        range.values = hourRows(cols, block.start, block.end, heading.dateSystem);
         range.numberFormat = Array.from({ length: rows }, () => columns.map((c) => c.numFmt));
         await ctx.sync();
       });

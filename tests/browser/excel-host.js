@@ -17,8 +17,9 @@
  * Use in the browser: serve this file as office.js; it defines window.Office, window.Excel and
  * window.__excelHost (state and helpers for the test). Use in node: require it and call
  * createExcelHost() for { Excel, Office, host } without touching globals.
- * Options may be preset in the page as window.__excelHostOptions = { settings: {...}, syncDelayMs, theme }
- * (theme: the Office theme colours, e.g. { bodyBackgroundColor: '#262626', bodyForegroundColor: '#FFFFFF' }).
+ * Options may be preset in the page as window.__excelHostOptions = { settings: {...}, syncDelayMs, theme, dateSystem }
+ * (theme: the Office theme colours, e.g. { bodyBackgroundColor: '#262626', bodyForegroundColor: '#FFFFFF' };
+ * dateSystem: 1904 for a workbook in the 1904 date system, which workbook.functions.date answers in).
  */
 (function (root) {
   'use strict';
@@ -105,7 +106,13 @@
       syncDelayMs: options.syncDelayMs || 0,
       requestLimitBytes: options.requestLimitBytes || REQUEST_LIMIT_BYTES,
       runs: 0,
+      dateSystem: options.dateSystem === 1904 ? 1904 : 1900,
     };
+    /** DATE(y, m, d) as the workbook counts it: days since 30 December 1899 (from 1 March 1900 on), less 1462 in the 1904 system. */
+    function excelDate(y, m, d) {
+      var serial = (Date.UTC(y, m - 1, d) - Date.UTC(1899, 11, 30)) / 86400000;
+      return state.dateSystem === 1904 ? serial - 1462 : serial;
+    }
 
     function findSheet(name) {
       if (name === undefined) return state.sheets.find(function (s) { return s.name === state.active; });
@@ -244,6 +251,15 @@
       };
       this.settings = {
         add: queueFn(ctx, 'workbook.settings', 'settings.add', [], function (key, value) { state.documentSettings[key] = value; state.savedSettings[key] = value; }),
+      };
+      // Worksheet functions (ExcelApi 1.2): DATE only, its value read after load('value') + sync().
+      this.functions = {
+        date: function (y, m, d) {
+          var result = {};
+          loadable(result, ctx, function () { return 'functions.date'; }, function () { return { value: excelDate(y, m, d) }; });
+          loadedGetter(result, 'value');
+          return result;
+        },
       };
       void wb;
     }

@@ -49,8 +49,8 @@ afterAll(async () => {
   await browser?.close();
 });
 
-async function openPane(settings?: unknown): Promise<Page> {
-  const preset = settings ? `window.__excelHostOptions = ${JSON.stringify({ settings })};\n` : '';
+async function openPane(settings?: unknown, options: { dateSystem?: 1904 } = {}): Promise<Page> {
+  const preset = settings || options.dateSystem ? `window.__excelHostOptions = ${JSON.stringify({ ...(settings ? { settings } : {}), ...options })};\n` : '';
   const page = await openAddinPage(browser, preset + HOST_JS);
   await page.setViewportSize({ width: 420, height: 900 });
   await page.waitForSelector('#run-year');
@@ -632,6 +632,41 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     await page.click('#run-compare');
     expect(await waitForStatus(page, /^Wrote/)).toMatch(/^Wrote "Window A options" comparing 3 options: /);
     await page.close();
+  });
+
+  test('in a 1904 workbook the pane reads the weather stamps and writes the hourly stamps in the 1904 date system (DATE(1904,1,1) = 0), the same hours and watts as in a 1900 workbook', async () => {
+    // A weather year of the form's own clear sky (SOLARGAINYEAR's dni and dhi), stamped hour-ending in each workbook's own serials.
+    const clear = applyFunction(findFunction('SOLARGAINYEAR')!, [Object.entries(FORM_WINDOW) as RawArg, [['stamp', 'dni', 'dhi']]]) as number[][];
+    const hours = clear.length;
+    const start = Date.UTC(YEAR, 0, 1) / 86_400_000 + 25_569;
+    const weather = (offset: number) => [['Stamp', 'DNI [W/m²]', 'DHI [W/m²]'], ...clear.map(([stamp, dni, dhi]) => [stamp - offset, Math.round(dni * 10) / 10, Math.round(dhi * 10) / 10])];
+    const runIn = async (dateSystem: 1900 | 1904) => {
+      const page = await openPane(undefined, dateSystem === 1904 ? { dateSystem } : {});
+      expect(await host.eval<number>(page, 'host.state.dateSystem')).toBe(dateSystem);
+      await page.evaluate(([v]) => (window as never as { __excelHost: { addUserSheet(n: string, v: unknown[][]): void } }).__excelHost.addUserSheet('Weather', v), [weather(dateSystem === 1904 ? 1462 : 0)] as const);
+      await setField(page, 'year', String(YEAR));
+      await page.selectOption('#weatherSource', 'measured');
+      await setField(page, 'timeAddress', `Weather!A1:A${hours + 1}`);
+      await setField(page, 'dniAddress', `Weather!B1:B${hours + 1}`);
+      await setField(page, 'dhiAddress', `Weather!C1:C${hours + 1}`);
+      await page.click('#run-year');
+      const status = await waitForStatus(page, /Wrote|refused|Fix|cannot|Stopped/);
+      if (!/^Wrote/.test(status)) throw new Error(`${dateSystem} workbook: ${status} ${await page.textContent('#dniAddress-msg')} ${await page.textContent('#form-msg')}`);
+      expect(status).toMatch(/^Wrote "Window A hourly"/);
+      const rows = await host.read(page, 'Window A hourly', `A6:M${hours + 5}`);
+      const calls = await host.eval<{ op: string; target: string }[]>(page, 'host.state.calls');
+      await page.close();
+      return { rows, status, asked: calls.some((c) => c.target === 'functions.date') };
+    };
+    const in1900 = await runIn(1900);
+    const in1904 = await runIn(1904);
+    expect(in1904.asked).toBe(true);
+    expect(in1904.status).toBe(in1900.status);
+    // the stamps: 1462 days lower (1 January 1904 is serial 0), every hour; the rest of each row the same
+    expect(in1904.rows).toHaveLength(hours);
+    const wrong = in1904.rows.flatMap((r, i) => (Math.abs((in1900.rows[i][0] as number) - (r[0] as number) - 1462) < 1e-6 && JSON.stringify(r.slice(1)) === JSON.stringify(in1900.rows[i].slice(1)) ? [] : [i]));
+    expect(wrong).toEqual([]);
+    expect(in1904.rows[0][0] as number).toBeCloseTo(start + 1 / 24 - 1462, 5);
   });
 
   test('the largest table, a leap year of 8784 hourly rows, goes in requests under the 5 MB the stand-in enforces', async () => {
