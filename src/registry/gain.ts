@@ -77,7 +77,7 @@ const P = {
     default: 'gain',
     length: { max: 20 },
     description:
-      "columns of the hourly year, one per name: gain, gainBeam, gainDiffuse, conduction, radiant, convective, load, loadBeam, loadDiffuse, loadConduction in W (a load needs factors or the window's room); beam, sky, ground, skyUnshaded, groundUnshaded, dni, dhi in W/m²; sunlitFraction, skyViewRatio, groundViewRatio, horizonShare, shgc from 0 to 1; incidence, profileAngle, sunAltitude, sunAzimuth in °; stamp: the row's date-time, on the window's clock and in its date system (format the column yyyy-mm-dd hh:mm)",
+      "columns of the hourly year, one per name: gain, gainBeam, gainDiffuse, conduction, radiant, convective, load, loadBeam, loadDiffuse, loadConduction in W (a load needs factors or the window's room); beam, sky, ground, skyUnshaded, groundUnshaded, dni, dhi in W/m²; sunlitFraction, skyViewRatio, groundViewRatio, horizonShare, shgc from 0 to 1; incidence, profileAngle, sunAltitude, sunAzimuth in °; stamp: the row's date-time on the clock (yyyy-mm-dd hh:mm)",
   },
   day: { name: 'day', kind: 'number', integer: true, min: 1, max: 28, default: 21, description: 'day of each month for the clear design day' },
   factors: { name: 'factors', kind: 'numberList', min: 0, max: 1, length: { exact: 24 }, sumsToOne: true, description: 'the 24 radiant time factors r0…r23 of the room (from your handbook or room model), summing to 1' },
@@ -420,7 +420,7 @@ const SOLARGAINYEAR: FunctionDescriptor = {
   params: [WINDOW, P.quantities, { ...P.dniSeries, name: 'dni' }, { ...P.dhiSeries, name: 'dhi' }, G.headers, P.yearFactors, G.clock],
   result: {
     shape: 'spill',
-    description: "8760 rows (8784 in a leap year), one column per quantity; hour-ending rows (1 January 01:00 first, sun at mid-hour) or, with timeConvention instant, rows at 00:00 … 23:00",
+    description: "8760 rows (8784 in a leap year), one column per quantity; hour-ending rows (1 January 01:00 first, sun at mid-hour) or, with timeConvention instant, rows at 00:00 … 23:00; the stamp column is each row's reading on the clock (the clock's or the window's daylight-saving rule) in the workbook's date system",
   },
   evaluate: (a) => {
     const f = winOf(a);
