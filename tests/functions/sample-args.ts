@@ -53,6 +53,13 @@ export function sampleValue(p: ParamDescriptor, t = 0.5): FormulaArg {
         ['tauD', 2.3],
         ['year', 2024],
       ];
+    case 'clock':
+      // A workbook's clock: a daylight-saving rule by its 2024 dates (the last Sundays of March and October).
+      return [
+        ['daylightSavingStart', '2024-03-31T02:00'],
+        ['daylightSavingEnd', '2024-10-27T03:00'],
+        ['daylightSavingShift', 1],
+      ];
     case 'choiceList':
       return [[(p.choices ?? [])[0]]];
     case 'numberList': {
