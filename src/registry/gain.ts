@@ -65,8 +65,8 @@ const DIFFUSE_CONSTANTS: Record<string, (s: AnnualSeries) => number> = {
 };
 
 const P = {
-  dni: { ...G.dni, optional: true, description: "the hour's direct normal irradiance; blank: the window's clear sky" },
-  dhi: { ...G.dhi, optional: true, description: "the hour's diffuse horizontal irradiance; blank: the window's clear sky" },
+  dni: { ...G.dni, optional: true, description: "the hour's direct normal irradiance, at most the extraterrestrial value; blank: the window's clear sky" },
+  dhi: { ...G.dhi, optional: true, description: "the hour's diffuse horizontal irradiance, at most the physically possible limit at the hour's sun (Long & Shi 2008); blank: the window's clear sky" },
   tauB: { ...G.tauB, optional: true, description: 'beam pseudo-optical depth τb of the ASHRAE clear-sky model; used when dni and dhi are blank' },
   tauD: { ...G.tauD, optional: true, description: 'diffuse pseudo-optical depth τd of the ASHRAE clear-sky model; used when dni and dhi are blank' },
   quantities: {

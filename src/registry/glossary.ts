@@ -477,7 +477,7 @@ export const GLOSSARY = {
     min: 0,
     max: TAU_D_MAX,
     exclusiveMin: true,
-    description: 'diffuse pseudo-optical depth τd of the ASHRAE clear-sky model (site and month data); in a window: one value or 12 by month, with tauB',
+    description: 'diffuse pseudo-optical depth τd of the ASHRAE clear-sky model (site and month data); in a window: one value or 12 by month, with tauB; a pair giving more light than any sky can (high τb with high τd, or τd below about 0.9) is refused',
     window: windowField('weather.tauD', 'monthly', 'sky'),
   }),
   // Quantities functions take or give
@@ -485,8 +485,8 @@ export const GLOSSARY = {
   sunAzimuth: e({ name: 'sunAzimuth', label: 'Sun azimuth [°]', aliases: ['azimuth'], kind: 'number', unit: '°', min: 0, max: 360, description: 'sun azimuth clockwise from true north' }),
   incidence: e({ name: 'incidence', label: 'Incidence [°]', kind: 'number', unit: '°', min: 0, max: 180, description: 'incidence angle of the sun on the glass (90 or more: sun behind it)' }),
   dayOfYear: e({ name: 'dayOfYear', label: 'Day of year', kind: 'number', min: 1, max: 366, description: 'day of the year, 1 = 1 January (fractions allowed)' }),
-  dni: e({ name: 'dni', label: 'DNI (direct normal irradiance) [W/m²]', kind: 'number', unit: 'W/m²', min: 0, max: IRRADIANCE_MAX, description: 'direct normal irradiance' }),
-  dhi: e({ name: 'dhi', label: 'DHI (diffuse horizontal irradiance) [W/m²]', kind: 'number', unit: 'W/m²', min: 0, max: IRRADIANCE_MAX, description: 'diffuse horizontal irradiance' }),
+  dni: e({ name: 'dni', label: 'DNI (direct normal irradiance) [W/m²]', kind: 'number', unit: 'W/m²', min: 0, max: IRRADIANCE_MAX, description: 'direct normal irradiance; no more than the physically possible limit at the sun (Long & Shi 2008: the extraterrestrial value)' }),
+  dhi: e({ name: 'dhi', label: 'DHI (diffuse horizontal irradiance) [W/m²]', kind: 'number', unit: 'W/m²', min: 0, max: IRRADIANCE_MAX, description: 'diffuse horizontal irradiance; no more than the physically possible limit at the sun (Long & Shi 2008: 0.95 E0 sin(altitude)^1.2 + 50 W/m², and the global within its own)' }),
   headers: e({ name: 'headers', label: 'Headers', kind: 'flag', default: false, description: 'TRUE: the spilled table starts with a row of column names (the glossary tokens)' }),
   clock: e({
     name: 'clock',

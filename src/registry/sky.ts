@@ -139,7 +139,7 @@ export const SKY_FUNCTIONS: readonly FunctionDescriptor[] = [
     name: 'SPLITGLOBAL',
     summary: 'Splits global horizontal irradiance into direct normal and diffuse horizontal (Erbs et al. 1982).',
     category: 'Sky and irradiance',
-    params: [{ name: 'ghi', kind: 'number', unit: 'W/m²', min: 0, max: GHI_MAX, description: 'global horizontal irradiance (measured)' }, GLOSSARY.sunAltitude, dayOfYear],
+    params: [{ name: 'ghi', kind: 'number', unit: 'W/m²', min: 0, max: GHI_MAX, description: 'global horizontal irradiance (measured); no more than the physically possible limit at the sun (Long & Shi 2008: 1.5 E0 sin(altitude)^1.2 + 100 W/m²)' }, GLOSSARY.sunAltitude, dayOfYear],
     result: {
       shape: 'spill',
       columns: ['dni', 'dhi', 'clearnessIndex'],

@@ -88,7 +88,7 @@ describe('diffuse shading at the edges', () => {
       fc.property(
         fc.record({ projection: edge(0, cap), gap: edge(0, cap), ext: edge(-0.6, cap), fin: edge(0, cap), reveal: edge(0, cap), model: fc.constantFrom('perez', 'haydavies', 'isotropic'), hour: fc.integer({ min: 0, max: 23 }) }),
         (r) => {
-          const hour = [`2026-03-21T${String(r.hour).padStart(2, '0')}:30`, 40, -105, -7, 200, 1.2, 1.5, 0.6, 300, 150, 0.4, 2.3, 2, 0.1, 0.2, r.model, 90, 1];
+          const hour = [`2026-03-21T${String(r.hour).padStart(2, '0')}:30`, 40, -105, -7, 200, 1.2, 1.5, 0.6, 300, 45, 0.4, 2.3, 2, 0.1, 0.2, r.model, 90, 1];
           const shading = [r.projection, r.gap, r.ext, r.ext, r.fin, r.gap, r.reveal];
           const gain = cells(applyFunction(GAIN, [...hour, ...shading]))[0] as number;
           const bare = cells(applyFunction(GAIN, hour))[0] as number;

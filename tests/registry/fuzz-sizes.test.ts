@@ -41,7 +41,7 @@ describe('a size of 1e-200 m', () => {
 
   test.each(cases)('%s %s', (_name, _label, fn, k, size, tinyArg) => {
     const belowRange = size.min !== undefined && (TINY < size.min || (TINY === size.min && size.exclusiveMin === true));
-    const draws = fc.sample(validCaseArb(fn), { numRuns: 20, seed: 20261203 }).map((c) => {
+    const draws = fc.sample(validCaseArb(fn), { numRuns: 20, seed: 20261203 }).filter((c) => !c.wide).map((c) => {
       const args = [...c.raw];
       args[k] = tinyArg;
       return args;

@@ -27,6 +27,8 @@ import { SunpaneError } from '../../src/core/common/errors';
 import { civilToSerial, type DateSystem, formatSerialIso, hoursInYear, MAX_SERIAL_EXCLUSIVE, MIN_SERIAL } from '../../src/core/time';
 import type { ClockFields } from '../../src/registry/types';
 import { applyFunction, readRange, readScalar } from '../../src/registry/evaluate';
+import { globalWithinLimit, withinLimits } from './possibleIrradiance';
+import { requireClearSkyPair, TAU_B_MAX, TAU_D_MAX } from '../../src/core/sky';
 import { readWindowRange } from '../../src/registry/windowRange';
 import { FUNCTIONS, findFunction, isOptional } from '../../src/registry';
 import { GLOSSARY, type GlossaryEntry, WINDOW_FIELDS } from '../../src/registry/glossary';
@@ -270,13 +272,95 @@ const GLASS_ARB: fc.Arbitrary<Pair[]> = fc.oneof(
   { weight: 2, arbitrary: fc.tuple(shgcTableArb(), fc.boolean()).map(([t, named]) => [...(named ? [['glazingType', 'table'] as Pair] : []), ['shgcAngles', t.angles.join(' ')], ['shgcValues', t.values.join(' ')]] as Pair[]) },
 );
 
+/**
+ * A τb/τd pair brought into the pairs the engine accepts: a pair whose ASHRAE clear sky passes the
+ * physically possible limits at some sun is refused (requireClearSkyPair, checked against the
+ * limits in tests/core/sky/physically-possible.test.ts). τb below {@link TAU_B_FLOOR} (a beam above
+ * the extraterrestrial value whatever τd) is raised to it; for a given τb the accepted τd form one
+ * interval, found by bisection (kept per τb) and entered by a small margin so that a draw never sits
+ * on the edge of the trial grid. Pairs already inside are unchanged, so the box edges are still drawn.
+ */
+export function acceptedTauPair(tauB: number, tauD: number): [number, number] {
+  if (!(tauB > 0 && tauB <= TAU_B_MAX && tauD > 0 && tauD <= TAU_D_MAX)) return [tauB, tauD];
+  const tb = Math.max(tauB, TAU_B_FLOOR);
+  const ok = (td: number) => {
+    try {
+      requireClearSkyPair(tb, td);
+      return true;
+    } catch {
+      return false;
+    }
+  };
+  if (ok(tauD)) return [tb, tauD];
+  let range = TAU_D_RANGES.get(tb);
+  if (range === undefined) {
+    const inside = 1.9; // passes for every τb from the floor to the maximum
+    if (!ok(inside)) throw new Error(`no accepted tauD for tauB ${tb}`);
+    const edge = (bad: number) => {
+      let [a, b] = [inside, bad];
+      for (let k = 0; k < 40; k++) {
+        const m = (a + b) / 2;
+        if (ok(m)) a = m;
+        else b = m;
+      }
+      return a;
+    };
+    const lo = ok(Number.MIN_VALUE) ? Number.MIN_VALUE : edge(Number.MIN_VALUE) + 0.02;
+    const hi = ok(TAU_D_MAX) ? TAU_D_MAX : edge(TAU_D_MAX) - 0.02;
+    range = [lo, hi];
+    TAU_D_RANGES.set(tb, range);
+  }
+  return [tb, Math.min(range[1], Math.max(range[0], tauD))];
+}
+/** Lowest τb the fuzz draws: below about 0.002 the model's beam passes the extraterrestrial value. */
+const TAU_B_FLOOR = 0.01;
+const TAU_D_RANGES = new Map<number, [number, number]>();
+
+/** {@link acceptedTauD} over a window's τb/τd cells: one number each, or twelve written in one cell. */
+function clearSkyPairs(b: number | string, d: number | string): [number | string, number | string] {
+  if (typeof b === 'number' && typeof d === 'number') return acceptedTauPair(b, d);
+  const bs = String(b).split(' ').map(Number);
+  const ds = String(d).split(' ').map(Number);
+  if (bs.length === 1) {
+    const pairs = ds.map((x) => acceptedTauPair(bs[0], x));
+    return [pairs[0][0], pairs.map((p) => p[1]).join(' ')];
+  }
+  const pairs = ds.map((x, k) => acceptedTauPair(bs[k], x));
+  return [pairs.map((p) => p[0]).join(' '), pairs.map((p) => p[1]).join(' ')];
+}
+
+/** The positional τ arguments of a call (tauB/tauD, one number each or lists) brought into the accepted pairs in place. */
+function acceptedTauArgs(names: string[], out: RawArg[]): void {
+  for (const [x, y] of [['tauB', 'tauD'], ['yearTauB', 'yearTauD']]) {
+    const [kb, kd] = [names.indexOf(x), names.indexOf(y)];
+    if (kb < 0 || kd < 0) continue;
+    const b = out[kb];
+    const d = out[kd];
+    if (typeof b === 'number' && typeof d === 'number') [out[kb], out[kd]] = acceptedTauPair(b, d);
+    else if (Array.isArray(b) && Array.isArray(d)) {
+      const bs = (b as Scalar[][]).flat();
+      const ds = (d as Scalar[][]).flat();
+      if (!bs.every((v) => typeof v === 'number') || !ds.every((v) => typeof v === 'number')) continue;
+      const n = Math.max(bs.length, ds.length);
+      if ((bs.length !== 1 && bs.length !== n) || (ds.length !== 1 && ds.length !== n)) continue;
+      const pairs = Array.from({ length: n }, (_, k) => acceptedTauPair(bs[bs.length === 1 ? 0 : k] as number, ds[ds.length === 1 ? 0 : k] as number));
+      // a single value standing for every month is kept single when the pairs still agree, else written out by month
+      const single = (values: number[]) => values.every((v) => v === values[0]);
+      const bValues = pairs.map((p) => p[0]);
+      const dValues = pairs.map((p) => p[1]);
+      out[kb] = bs.length === 1 && single(bValues) ? [[bValues[0]]] : [bValues];
+      out[kd] = ds.length === 1 && single(dValues) ? [[dValues[0]]] : [dValues];
+    }
+  }
+}
+
 /** A window's clear sky: Linke turbidity, or τb with τd (as many values each: 1 or 12), or none. */
 function skyArb(noneWeight: number): fc.Arbitrary<Pair[]> {
   const G = GLOSSARY;
   const monthly = (f: GlossaryEntry, n: number) => (n === 1 ? numberArb({ ...f, kind: 'number' }) : fc.array(numberArb({ ...f, kind: 'number' }), { minLength: 12, maxLength: 12 }).map((xs) => xs.join(' ')));
   return fc.oneof(
     { weight: 4, arbitrary: fieldValue(G.linkeTurbidity).map((l) => [['linkeTurbidity', l]] as Pair[]) },
-    { weight: 4, arbitrary: fc.constantFrom(1, 12).chain((n) => fc.tuple(monthly(G.tauB, n), monthly(G.tauD, n))).map(([b, d]) => [['tauB', b], ['tauD', d]] as Pair[]) },
+    { weight: 4, arbitrary: fc.constantFrom(1, 12).chain((n) => fc.tuple(monthly(G.tauB, n), monthly(G.tauD, n))).map(([b, d]) => clearSkyPairs(b, d)).map(([b, d]) => [['tauB', b], ['tauD', d]] as Pair[]) },
     { weight: noneWeight, arbitrary: fc.constant([] as Pair[]) },
   );
 }
@@ -356,7 +440,17 @@ export interface ValidCase {
   raw: RawArg[];
   site?: (typeof SITE_POOL)[number];
   bump: number;
+  /**
+   * True when the hour's dni and dhi were drawn over their whole range (1 draw in 5) for a function
+   * that works out the sun itself: they may be past the physically possible limits at that sun, and
+   * such a call is then refused naming dni or dhi (counted refused, tests/core/sky/physically-possible.test.ts).
+   */
+  wide?: boolean;
 }
+
+/** A DNI/DHI pair some sky can give at any sun: DNI to 1320 W/m² (below the lowest extraterrestrial), DHI to 50 (the Long & Shi allowance). */
+const ANY_SUN_DNI_MAX = 1320;
+const ANY_SUN_DHI_MAX = 50;
 
 /** The functions that read a whole year of sun per call: they take their place from the pool. */
 const POOLED = new Set(['SOLARGAIN', 'SOLARGAINSTEPS', 'SOLARGAINPEAKS', 'SOLARGAINYEAR', 'WINDOWGAIN', 'GAINSTEPS', 'PEAKGAINS', 'WINDOWYEAR', 'WINDOWSUNLITMASK', 'SUNLITMASK']);
@@ -432,13 +526,17 @@ export function validCaseArb(fn: FunctionDescriptor): fc.Arbitrary<ValidCase> {
   const tilt = windowK < 0 && names.includes('surfaceTilt') && names.includes('overhangProjection') ? fc.oneof({ weight: 9, arbitrary: fc.constant(90) }, { weight: 1, arbitrary: numberArb(GLOSSARY.surfaceTilt) }) : fc.constant(undefined);
   const yearSeries = names.includes('dni') && fn.params[names.indexOf('dni')].kind === 'numberList' ? fc.constantFrom<'clear' | 'series' | 'short'>('clear', 'clear', 'clear', 'clear', 'clear', 'clear', 'series', 'series', 'series', 'short') : fc.constant(undefined);
   return fc
-    .tuple(fc.tuple(...fn.params.map((p) => paramArb(fn, p))), win, place, table, yearSeries, fc.double({ min: 0, max: 1, noNaN: true }), together, tilt, fc.tuple(...pairs.map(([x, y]) => fc.tuple(paramArb(fn, { ...fn.params[names.indexOf(x)], optional: false, default: undefined }), paramArb(fn, { ...fn.params[names.indexOf(y)], optional: false, default: undefined })))))
-    .chain(([raw, w, pl, tab, series, bump, both, t, pairValues]) => {
+    .tuple(fc.tuple(...fn.params.map((p) => paramArb(fn, p))), win, place, table, yearSeries, fc.double({ min: 0, max: 1, noNaN: true }), together, tilt, fc.tuple(...pairs.map(([x, y]) => pairArb(fn, x, y))))
+    .chain(([raw, w, pl, tab, series, bump, both, t, pairValues]): fc.Arbitrary<ValidCase> => {
       const out = [...raw];
+      let wide = false;
       pairs.forEach(([x, y], k) => {
         out[names.indexOf(x)] = both[k] ? pairValues[k][0] : null;
         out[names.indexOf(y)] = both[k] ? pairValues[k][1] : null;
+        if (both[k] && pairValues[k][2]) wide = true;
       });
+      heldWithinLimits(names, out);
+      acceptedTauArgs(names, out);
       if (t !== undefined) out[names.indexOf('surfaceTilt')] = t;
       const site = w?.site ?? pl;
       if (w) out[windowK] = w.raw;
@@ -466,7 +564,8 @@ export function validCaseArb(fn: FunctionDescriptor): fc.Arbitrary<ValidCase> {
         }
       }
       const kDate = names.indexOf('dateTime');
-      const dated = site && kDate >= 0 ? dateInYear(site.year).map((d) => ({ raw: withAt(out, kDate, d), site, bump })) : fc.constant({ raw: out, site, bump });
+      const extra = wide ? { wide } : {};
+      const dated: fc.Arbitrary<ValidCase> = site && kDate >= 0 ? dateInYear(site.year).map((d): ValidCase => ({ raw: withAt(out, kDate, d), site, bump, ...extra })) : fc.constant({ raw: out, site, bump, ...extra });
       const kClock = fn.params.findIndex((p) => p.kind === 'clock');
       if (kClock < 0) return dated;
       // The clock: blank one time in three, else a drawn clock; in its 1904 system the serial date-times count 1462 days fewer.
@@ -487,6 +586,38 @@ export function validCaseArb(fn: FunctionDescriptor): fc.Arbitrary<ValidCase> {
         return { ...c, raw };
       });
     });
+}
+
+/**
+ * The two values of an optional pair. For the hour's dni and dhi: 4 draws in 5 inside what some sky
+ * gives at any sun ({@link ANY_SUN_DNI_MAX}, {@link ANY_SUN_DHI_MAX}), 1 in 5 over the whole range
+ * (marked wide: the call may then be refused at the hour's sun).
+ */
+function pairArb(fn: FunctionDescriptor, x: string, y: string): fc.Arbitrary<[RawArg, RawArg, boolean]> {
+  const names = fn.params.map((p) => p.name);
+  const full = fc.tuple(paramArb(fn, { ...fn.params[names.indexOf(x)], optional: false, default: undefined }), paramArb(fn, { ...fn.params[names.indexOf(y)], optional: false, default: undefined }));
+  if (x !== 'dni' || fn.params[names.indexOf(x)].kind !== 'number') return full.map(([a, b]) => [a, b, false]);
+  const anySun = fc.tuple(fc.double({ min: 0, max: ANY_SUN_DNI_MAX, noNaN: true }), fc.double({ min: 0, max: ANY_SUN_DHI_MAX, noNaN: true }));
+  return fc.oneof({ weight: 4, arbitrary: anySun.map(([a, b]) => [a, b, false] as [RawArg, RawArg, boolean]) }, { weight: 1, arbitrary: full.map(([a, b]) => [a, b, true] as [RawArg, RawArg, boolean]) });
+}
+
+/**
+ * For functions given the sun's altitude and the day (the window-plane irradiance functions): dni and
+ * dhi brought within the physically possible limits at that sun (the engine refuses more; the
+ * refusal is checked in tests/core/sky/physically-possible.test.ts).
+ */
+function heldWithinLimits(names: string[], out: RawArg[]): void {
+  const [kDni, kDhi, kGhi, kAlt, kDay] = ['dni', 'dhi', 'ghi', 'sunAltitude', 'dayOfYear'].map((n) => names.indexOf(n));
+  if (kAlt < 0 || kDay < 0) return;
+  const [sunAltitude, dayOfYear] = [out[kAlt], out[kDay]];
+  if (typeof sunAltitude !== 'number' || typeof dayOfYear !== 'number' || !(dayOfYear >= 1 && dayOfYear <= 366)) return;
+  if (kGhi >= 0 && typeof out[kGhi] === 'number') out[kGhi] = globalWithinLimit(out[kGhi] as number, 90 - sunAltitude, dayOfYear);
+  if (kDni < 0 || kDhi < 0) return;
+  const [dni, dhi] = [out[kDni], out[kDhi]];
+  if (typeof dni !== 'number' || typeof dhi !== 'number') return;
+  const held = withinLimits({ dni, dhi, sunAltitude, dayOfYear });
+  out[kDni] = held.dni;
+  out[kDhi] = held.dhi;
 }
 
 function withAt(raw: RawArg[], k: number, v: RawArg): RawArg[] {
@@ -1071,7 +1202,17 @@ export function runFunction(fn: FunctionDescriptor, runs: number, file: string):
       counts.refused++;
       return;
     }
-    const out = evaluateValid(fn, raw);
+    let out: OutTable;
+    try {
+      out = evaluateValid(fn, raw);
+    } catch (err) {
+      // A wide draw of the hour's dni/dhi past what any sky gives at that sun: refused, in its own words.
+      if (d.c.wide && /^\S+: valid arguments gave an error: (dni|dhi) = .* the physically possible limit \(Long & Shi 2008\)/.test((err as Error).message)) {
+        counts.refused++;
+        return;
+      }
+      throw err;
+    }
     checkShape(fn, args, raw, out);
     checkRange(fn, args, out);
     PHYSICS[fn.name]?.(fn, args, raw, out, d.c);

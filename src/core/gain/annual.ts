@@ -27,7 +27,7 @@ import { SunpaneError, DEG, RAD, acosClamped, requireRange, wrap180 } from '../c
 import { type PreparedWindow, monthlyValue, prepareWindow } from './prepared';
 import { MAX_IRRADIANCE, outdoorTemperatureSource } from './windowSpec';
 import { DAILY_RANGE_FRACTIONS } from './outdoorTemperature';
-import { type PerezBrightnessColumns, type PlaneRows, type PreparedPlane, preparePlane } from '../sky';
+import { type PerezBrightnessColumns, type PlaneRows, type PreparedPlane, preparePlane, requirePossibleIrradiance } from '../sky';
 import type { ShgcCurve } from '../glazing';
 import { type PreparedShading, prepareShading } from '../shading';
 import { annualSunPath, type SunPathYear } from '../sun';
@@ -520,6 +520,7 @@ export function annualRowOfPrepared(w: PreparedWindow, row: number, weatherHour?
   if (weatherHour !== undefined) {
     out.dni[row] = requireRange('dni', weatherHour.dni, 0, MAX_IRRADIANCE, 'W/m²');
     out.dhi[row] = requireRange('dhi', weatherHour.dhi, 0, MAX_IRRADIANCE, 'W/m²');
+    requirePossibleIrradiance(out.dni[row], out.dhi[row], Math.sin(path.altitude[row] * RAD), dniExtraByDay()[((row / 24) | 0) + 1]);
   } else fillWeather(w, path.altitude, path.zenith, out, row, row + 1);
   runPasses(w, { altitude: path.altitude, azimuth: path.azimuth, sinAltitude: path.sinAltitude!, cosAltitude: path.cosAltitude!, sinAzimuth: path.sinAzimuth!, cosAzimuth: path.cosAzimuth! }, out, row, row + 1);
   return {

@@ -5,10 +5,10 @@
  * length, the row map of a supplied series, the time convention), and the weather of an hour taken
  * from the window's weather description.
  */
-import { SunpaneError } from '../common';
+import { RAD, SunpaneError } from '../common';
 import { glassArea as glassAreaOf, interiorAttenuationsOf, shgcBasisOf, shgcCurve, type ShgcCurve, solarArea } from '../glazing';
 import { BARE_VIEW_FACTORS, hasShading, skylineSkyViewFactor, type WindowViewFactors, windowViewFactors } from '../shading';
-import { ashraeClearSky, decomposeErbs, ineichenPerezClearSky, type SkyModel } from '../sky';
+import { ashraeClearSky, decomposeErbs, extraterrestrialSpencer, ineichenPerezClearSky, isPossibleGlobal, isPossibleIrradiance, type SkyModel } from '../sky';
 import type { SunOptions } from '../sun';
 import { civilToSerial, DEFAULT_TIME_CONVENTION, fitYearOfHours, hoursInYear, rowOfSerial, type TimeConvention, type YearFit } from '../time';
 import { fractionOfDailyRange } from './outdoorTemperature';
@@ -154,11 +154,13 @@ export function weatherFromSpec(w: PreparedWindow, hourIndex: number, month: num
       const dni = weather.dni[row];
       const dhi = weather.dhi[row];
       if (!Number.isFinite(dni) || !Number.isFinite(dhi)) return undefined;
+      // Past the physically possible limits at this sun: missing, as the annual series has it.
+      if (!isPossibleIrradiance(dni, dhi, Math.sin(sunAltitude * RAD), extraterrestrialSpencer(doy))) return undefined;
       return { dni, dhi };
     }
     case 'globalHorizontal': {
       const ghi = weather.ghi[w.yearFit!.rowOf[hourIndex]];
-      if (!Number.isFinite(ghi)) return undefined;
+      if (!Number.isFinite(ghi) || !isPossibleGlobal(ghi, Math.cos(sunZenith * RAD), extraterrestrialSpencer(doy))) return undefined;
       const d = decomposeErbs(ghi, sunZenith, doy);
       return { dni: d.dni, dhi: d.dhi };
     }

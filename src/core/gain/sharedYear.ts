@@ -10,8 +10,9 @@
  * Nothing here is approximate: a window's year from a shared year is the same numbers as from its
  * own (tests/core/gain/sharedYear.test.ts holds them equal).
  */
+import { RAD } from '../common';
 import { monthlyValue, type PreparedWindow } from './prepared';
-import { ashraeClearSky, decomposeErbs, extraterrestrialSpencer, ineichenPerezClearSky, perezBrightnessColumns, type PerezBrightnessColumns } from '../sky';
+import { ashraeClearSky, decomposeErbs, extraterrestrialSpencer, ineichenPerezClearSky, isPossibleGlobal, isPossibleIrradiance, perezBrightnessColumns, type PerezBrightnessColumns } from '../sky';
 import { annualSunPath, type Site, type SunTrigColumns } from '../sun';
 import { daysInMonth, type TimeConvention } from '../time';
 import type { Weather } from './window';
@@ -272,10 +273,12 @@ export function fillWeather(w: PreparedWindow, alt: Float64Array, zen: Float64Ar
       const dniIn = weather.dni;
       const dhiIn = weather.dhi;
       const rowOf = w.yearFit!.rowOf;
+      const dniExtra = dniExtraByDay();
       for (let i = from; i < to; i++) {
         const b = dniIn[rowOf[i]];
         const d = dhiIn[rowOf[i]];
-        if (Number.isFinite(b) && Number.isFinite(d)) {
+        // A value no sky can give at this sun (Long & Shi 2008) marks the hour missing, as the weather reader does.
+        if (Number.isFinite(b) && Number.isFinite(d) && isPossibleIrradiance(b, d, Math.sin(alt[i] * RAD), dniExtra[((i / 24) | 0) + 1])) {
           dni[i] = b;
           dhi[i] = d;
         } else missing[i] = 1;
@@ -285,9 +288,11 @@ export function fillWeather(w: PreparedWindow, alt: Float64Array, zen: Float64Ar
     case 'globalHorizontal': {
       const ghiIn = weather.ghi;
       const rowOf = w.yearFit!.rowOf;
+      const dniExtra = dniExtraByDay();
       for (let i = from; i < to; i++) {
         const ghi = ghiIn[rowOf[i]];
-        if (!Number.isFinite(ghi)) {
+        // As decomposeErbs judges it (same cosine, same day's value): past the limit the hour is missing.
+        if (!Number.isFinite(ghi) || !isPossibleGlobal(ghi, Math.cos(zen[i] * RAD), dniExtra[((i / 24) | 0) + 1])) {
           missing[i] = 1;
           continue;
         }

@@ -8,7 +8,8 @@
  * docs/methods.md#clear-sky-ashrae-pseudo-optical-depths.
  */
 import { airMassKastenYoung } from './airMass';
-import { RAD, requireRange } from '../common';
+import { RAD, SunpaneError, requireRange } from '../common';
+import { physicalIrradianceLimits } from './qualityLimits';
 import { standardPressure } from '../sun';
 import { extraterrestrialIrradiance, extraterrestrialSpencer, requireDayOfYear } from './extraterrestrial';
 
@@ -65,18 +66,111 @@ export function ashraeAirMassExponents(tauB: number, tauD: number): { ab: number
  * @remarks Eb = E0 exp(−τb m^ab), Ed = E0 exp(−τd m^ad) (ASHRAE Handbook—Fundamentals (2013)
  * ch. 14, Eqs. 15–16), E0 by the Handbook's Eq. 4 ({@link extraterrestrialIrradiance}), m by
  * Kasten & Young (1989), exponents by {@link ashraeAirMassExponents}. Global = Eb sin β + Ed.
+ * A pair that gives, at any sun altitude, more than the physically possible limits of Long & Shi
+ * (2008) is refused ({@link requireClearSkyPair}).
  */
 export function ashraeClearSky(sunAltitude: number, dayOfYear: number, tauB: number, tauD: number): ClearSky {
   const altitude = requireRange('sunAltitude', sunAltitude, -90, 90, '°');
   const e0 = extraterrestrialIrradiance(dayOfYear);
   const tb = requireRange('tauB', tauB, 0, TAU_B_MAX, undefined, { exclusiveMin: true });
   const td = requireRange('tauD', tauD, 0, TAU_D_MAX, undefined, { exclusiveMin: true });
+  requireClearSkyPair(tb, td);
   if (altitude <= 0) return { ...NO_SUN };
+  const sky = ashraeModel(altitude, e0, tb, td);
+  // The trial altitudes of requireClearSkyPair are a grid: between its points a pair at the edge is
+  // judged again at the sun asked for (same words), so no value past the limit is ever returned.
+  const problem = pastLimits(sky, altitude, extraterrestrialSpencer(requireDayOfYear(dayOfYear)));
+  if (problem !== undefined) throw pairError('tauB', 'tauD', tb, td, altitude, problem);
+  return sky;
+}
+
+/**
+ * What of a clear sky is past the physically possible limits (Long & Shi 2008) with the sun at
+ * `altitude` and the day's extraterrestrial irradiance `sa` by Spencer (1971) — the value every
+ * irradiance input of the engine is judged by — or undefined.
+ */
+function pastLimits(sky: ClearSky, altitude: number, sa: number): { what: string; value: number; limit: number } | undefined {
+  const limits = physicalIrradianceLimits(sin(altitude * RAD), sa);
+  if (sky.dni > limits.dni) return { what: 'a direct normal irradiance', value: sky.dni, limit: limits.dni };
+  if (sky.dhi > limits.dhi) return { what: 'a diffuse horizontal irradiance', value: sky.dhi, limit: limits.dhi };
+  if (sky.ghi > limits.ghi) return { what: 'a global horizontal irradiance', value: sky.ghi, limit: limits.ghi };
+  return undefined;
+}
+
+/** Eqs. 15–16 and the global, unchecked, with the sun above the horizon. */
+function ashraeModel(altitude: number, e0: number, tb: number, td: number): ClearSky {
   const m = airMassKastenYoung(altitude);
   const { ab, ad } = ashraeAirMassExponents(tb, td);
   const dni = e0 * exp(-tb * pow(m, ab)); // Eq. 15
   const dhi = e0 * exp(-td * pow(m, ad)); // Eq. 16
   return { dni, dhi, ghi: dni * sin(altitude * RAD) + dhi };
+}
+
+/**
+ * Sun altitudes [°] at which a τ pair is tried: dense near the horizon, where the model's diffuse
+ * goes wrong first for pairs whose diffuse air-mass exponent is small or negative, every half degree
+ * to 20° (a very small τd fails around 8–15°), then every two degrees. A pair at the edge that passes here and fails
+ * between two of these altitudes is refused when that sun is asked for ({@link ashraeClearSky}).
+ */
+const TRIAL_ALTITUDES: readonly number[] = (() => {
+  const a = [1e-6, 0.01, 0.02, 0.05, 0.1, 0.2, 0.3, 0.5, 0.75, 1, 1.5];
+  for (let x = 2; x < 20; x += 0.5) a.push(x);
+  for (let x = 20; x <= 90; x += 2) a.push(x);
+  return a;
+})();
+/** Days tried: near perihelion and aphelion (the model and the limits scale with different E0 formulas). */
+const TRIAL_DAYS = [3, 185];
+
+/** The last pairs judged (a year of hours asks about the same few pairs again and again). */
+const judged = new Map<string, true>();
+
+/**
+ * Refuses a τb/τd pair for which the ASHRAE clear-sky model gives, at some sun altitude, a diffuse
+ * or global horizontal irradiance past the physically possible limits of Long & Shi (2008):
+ * with a small or negative diffuse air-mass exponent the model's diffuse grows as the sun sets
+ * (τb 1.2, τd 4 gives 656 W/m² of diffuse with the sun 0.05° high, and the Perez sky turns that
+ * into tens of thousands of W/m² on a window facing the low sun); a very small τd gives a diffuse
+ * no clear sky has (τd 0.5: some 800 W/m² with the sun overhead); a τb below about 0.002 gives a
+ * beam above the extraterrestrial value (the model's E0 by the Handbook's Eq. 4 is judged against
+ * Spencer's, which every irradiance input of the engine is judged by). Pairs across the span of
+ * published climate tables pass (tests/core/sky/physically-possible.test.ts).
+ * @param tauB - beam pseudo-optical depth [-] (already checked 0 < τb ≤ {@link TAU_B_MAX})
+ * @param tauD - diffuse pseudo-optical depth [-] (already checked 0 < τd ≤ {@link TAU_D_MAX})
+ * @param names - the arguments' names as the user sees them (default `tauB`, `tauD`)
+ * @throws SunpaneError naming the τd argument, with τb, the altitude and the value past the limit
+ */
+export function requireClearSkyPair(tauB: number, tauD: number, names: { tauB: string; tauD: string } = { tauB: 'tauB', tauD: 'tauD' }): void {
+  if (tauB === lastB && tauD === lastD) return; // the same pair hour after hour: no key to build
+  const key = `${tauB}/${tauD}`;
+  if (judged.has(key)) {
+    lastB = tauB;
+    lastD = tauD;
+    return;
+  }
+  for (const day of TRIAL_DAYS) {
+    const e0 = extraterrestrialIrradiance(day);
+    const sa = extraterrestrialSpencer(day);
+    for (const altitude of TRIAL_ALTITUDES) {
+      const problem = pastLimits(ashraeModel(altitude, e0, tauB, tauD), altitude, sa);
+      if (problem !== undefined) throw pairError(names.tauB, names.tauD, tauB, tauD, altitude, problem);
+    }
+  }
+  if (judged.size > 64) judged.clear();
+  judged.set(key, true);
+  lastB = tauB;
+  lastD = tauD;
+}
+let lastB = Number.NaN;
+let lastD = Number.NaN;
+
+function pairError(tauBName: string, tauDName: string, tb: number, td: number, altitude: number, problem: { what: string; value: number; limit: number }): SunpaneError {
+  const sun = altitude < 0.005 ? 'at the horizon' : `${Number(altitude.toFixed(2))}° high`;
+  return new SunpaneError(
+    tauDName,
+    td,
+    `must give, with ${tauBName} = ${tb}, a clear sky within the physically possible limits (Long & Shi 2008) at every sun altitude`,
+    `the model gives ${problem.what} of ${problem.value.toFixed(1)} W/m² with the sun ${sun}, above the limit of ${problem.limit.toFixed(1)} W/m²; published climate tables give about τb 0.2–0.8 and τd 1.2–3.5 (from memory): check the pair against the table and that τb and τd are not swapped`,
+  );
 }
 
 /**
@@ -100,7 +194,10 @@ export function ashraeClearSky(sunAltitude: number, dayOfYear: number, tauB: num
  * get less global irradiance at low sun than a sea-level one, which is unphysical); I0 is the
  * extraterrestrial irradiance by Spencer (1971). The direct normal is also held at or below I0:
  * the beam coefficient b = 0.664 + 0.163/fh1 exceeds 1 above about 1,900 m, and with the sun high
- * above about 6,000 m the formula's beam would otherwise exceed the extraterrestrial value.
+ * above about 6,000 m the formula's beam would otherwise exceed the extraterrestrial value. The
+ * diffuse is held at the physically possible limit of Long & Shi (2008), 0.95 I0 cos(z)^1.2 + 50
+ * W/m², which the formula passes only with the sun within about half a degree of the horizon
+ * (TL up to 2.5 at sea level); the global is then beam · cos z + the held diffuse.
  */
 export function ineichenPerezClearSky(sunAltitude: number, dayOfYear: number, linkeTurbidity: number, elevation: number): ClearSky {
   const altitude = requireRange('sunAltitude', sunAltitude, -90, 90, '°');
@@ -123,6 +220,11 @@ export function ineichenPerezClearSky(sunAltitude: number, dayOfYear: number, li
   // Never above the extraterrestrial value: at high sites (fh1 small) b exceeds 1 and the model's
   // beam would pass I0 with the sun high (above about 6,000 m), which no atmosphere allows.
   const dni = Math.max(0, min(dniModel, dniLimit, i0));
-  const dhi = Math.max(0, ghi - dni * cosZ);
-  return { dni, dhi, ghi };
+  // Within about half a degree of the horizon the formula's enhancement term exp(0.01 m^1.8) lifts
+  // the global past anything a sky gives (sea level, TL 2, sun 0.3° high: a diffuse of 124 W/m²
+  // against a physically possible 52): the diffuse is held at the Long & Shi (2008) limit.
+  const dhiLimit = physicalIrradianceLimits(cosZ, i0).dhi;
+  const dhiModel = Math.max(0, ghi - dni * cosZ);
+  if (dhiModel <= dhiLimit) return { dni, dhi: dhiModel, ghi };
+  return { dni, dhi: dhiLimit, ghi: dni * cosZ + dhiLimit };
 }

@@ -2,8 +2,9 @@
  * Decomposition of global horizontal irradiance into its direct and diffuse parts by the
  * diffuse-fraction correlation of Erbs, Klein & Duffie (1982).
  */
-import { RAD, requireRange } from '../common';
+import { RAD, SunpaneError, requireRange } from '../common';
 import { extraterrestrialSpencer } from './extraterrestrial';
+import { isPossibleGlobal, physicalIrradianceLimits } from './qualityLimits';
 
 const { cos } = Math;
 
@@ -42,7 +43,8 @@ export function diffuseFractionErbs1982(clearnessIndex: number): number {
 /**
  * Splits global horizontal irradiance into direct normal and diffuse horizontal (Erbs et al. 1982).
  *
- * @param ghi - global horizontal irradiance [W/m²], 0…2000
+ * @param ghi - global horizontal irradiance [W/m²], 0…2000 and at most the physically possible global
+ *   at this sun (Long & Shi 2008: 1.5 E0 cos(z)^1.2 + 100; 100 with the sun down), else refused
  * @param sunZenith - sun zenith angle [°], 0…180
  * @param dayOfYear - day of the year, 1…366 (for the extraterrestrial irradiance)
  * @returns direct normal and diffuse horizontal irradiance [W/m²] and the clearness index. With the
@@ -57,6 +59,11 @@ export function decomposeErbs(ghi: number, sunZenith: number, dayOfYear: number)
   const zenith = requireRange('sunZenith', sunZenith, 0, 180, '°');
   const e0 = extraterrestrialSpencer(dayOfYear);
   const cosZ = cos(zenith * RAD);
+  if (!isPossibleGlobal(g, cosZ, e0)) {
+    const limit = physicalIrradianceLimits(Math.max(-1, Math.min(1, cosZ)), e0).ghi;
+    const sun = zenith < 90 ? `with the sun ${Number((90 - zenith).toFixed(2))}° high` : 'with the sun at or below the horizon';
+    throw new SunpaneError('ghi', ghi, `must be at most ${Number(limit.toFixed(1))} W/m², the physically possible limit (Long & Shi 2008) ${sun} and an extraterrestrial ${Number(e0.toFixed(1))} W/m²; check the units (W/m², not hourly sums in Wh/m² or kJ/m²), the date-time and the site`);
+  }
   const cosZFloored = cosZ > COS_ZENITH_FLOOR ? cosZ : COS_ZENITH_FLOOR;
   const kt = Math.min(1, g / (e0 * cosZFloored));
   if (zenith >= 90) return { dni: 0, dhi: g, clearnessIndex: kt };

@@ -16,6 +16,7 @@ import { extraterrestrialSpencer, requireDayOfYear } from './extraterrestrial';
 import { PEREZ_1990_COMPOSITE, type PerezBrightness, type PerezParts, perezBrightnessKernel, perezCombineKernel, perezPartsKernel } from './perez1990';
 import { incidenceAngle } from '../sun';
 import { COS_85, requireIrradiance, verticalDiffuseRatioFromCosine } from './transposition';
+import { requirePossibleIrradiance } from './qualityLimits';
 
 const { cos, sin } = Math;
 
@@ -104,7 +105,9 @@ export interface PlaneIrradiance {
 /**
  * Irradiance on a window plane by the chosen sky model.
  *
- * @param input - see {@link PlaneIrradianceInput}; errors name the field (`dni`, `groundAlbedo`, `skyModel`...)
+ * @param input - see {@link PlaneIrradianceInput}; errors name the field (`dni`, `groundAlbedo`, `skyModel`...).
+ *   A DNI/DHI pair no sky can give with the sun where it is (past the physically possible limits of
+ *   Long & Shi 2008, {@link requirePossibleIrradiance}) is refused naming `dni` or `dhi` with the limit.
  * @returns beam (unshaded), sky diffuse and ground-reflected reaching the glass through `shade`, their
  * total, the same sky and ground on the bare plane [W/m²], and the incidence angle [°]. With the sun
  * at or below the horizon the beam is 0 and any diffuse given is spread isotropically by every model
@@ -132,11 +135,14 @@ export function planeIrradiance(input: PlaneIrradianceInput): PlaneIrradiance {
   const model = requireSkyModel(input.skyModel);
   const shade = requireShade(input.shade);
 
+  const sinAltitude = sin(altitude * RAD);
+  const e0 = extraterrestrialSpencer(dayOfYear);
+  requirePossibleIrradiance(dni, dhi, sinAltitude, e0);
+
   const incidence = incidenceAngle(altitude, sunAzimuth, tilt, surfaceAzimuth);
   const plane = planeOf(tilt, albedo, model, shade);
   const out = { beam: 0, sky: 0, ground: 0, total: 0, skyUnshaded: 0, groundUnshaded: 0, incidence };
-  const e0 = model === 'isotropic' || model === 'ashraeClearDay' ? 0 : extraterrestrialSpencer(dayOfYear);
-  planeKernel(out, plane, dni, dhi, altitude, sin(altitude * RAD), cos(incidence * RAD), e0, shade.circumsolar);
+  planeKernel(out, plane, dni, dhi, altitude, sinAltitude, cos(incidence * RAD), e0, shade.circumsolar);
   return out;
 }
 

@@ -10,7 +10,7 @@
  * which can only be lower than the highest instant in it, so the limits at the middle of the hour
  * are generous for hourly data rather than strict.
  */
-import { requireRange } from '../common';
+import { SunpaneError, requireRange } from '../common';
 import { DNI_EXTRA_MAX, DNI_EXTRA_MIN } from './transposition';
 
 /** Lowest value any component may read [W/m²]: a small negative reading is a sensor's night offset. */
@@ -62,4 +62,63 @@ export function diffuseRatioLimit(zenith: number): number | undefined {
 export function closureTolerance(zenith: number): number | undefined {
   const z = requireRange('zenith', zenith, 0, 180, '°');
   return z < 75 ? 0.08 : z < 93 ? 0.15 : undefined;
+}
+
+/**
+ * Whether a direct normal and diffuse horizontal irradiance pair is one some sky could give with the
+ * sun where it is: DNI, DHI and the global DNI · sin β + DHI each at or below
+ * {@link physicalIrradianceLimits}. Unchecked arguments (for the hourly series: an hour that fails
+ * is treated as missing, as the weather reader does).
+ * @param dni - direct normal irradiance [W/m²]
+ * @param dhi - diffuse horizontal irradiance [W/m²]
+ * @param sinAltitude - sine of the sun's altitude (= cos zenith) [-], −1…1
+ * @param extraterrestrialNormal - the day's extraterrestrial normal irradiance [W/m²]
+ */
+export function isPossibleIrradiance(dni: number, dhi: number, sinAltitude: number, extraterrestrialNormal: number): boolean {
+  // The same expressions, in the same order, as physicalIrradianceLimits (a value at the limit passes both).
+  const m = sinAltitude > 0 ? sinAltitude ** 1.2 : 0;
+  const sa = extraterrestrialNormal;
+  return dni <= sa && dhi <= sa * 0.95 * m + 50 && (sinAltitude > 0 ? dni * sinAltitude : 0) + dhi <= sa * 1.5 * m + 100;
+}
+
+/**
+ * Whether a global horizontal irradiance is one some sky could give with the sun where it is:
+ * GHI ≤ 1.5 Sa μ0^1.2 + 100 ({@link physicalIrradianceLimits}). Unchecked arguments.
+ * @param ghi - global horizontal irradiance [W/m²]
+ * @param cosZenith - cosine of the solar zenith angle [-] (≤ 0: sun down, only the allowance)
+ * @param extraterrestrialNormal - the day's extraterrestrial normal irradiance [W/m²]
+ */
+export function isPossibleGlobal(ghi: number, cosZenith: number, extraterrestrialNormal: number): boolean {
+  // The same expression, in the same order, as physicalIrradianceLimits (a value at the limit passes both).
+  return ghi <= extraterrestrialNormal * 1.5 * (cosZenith > 0 ? cosZenith ** 1.2 : 0) + 100;
+}
+
+/**
+ * Refuses a direct normal and diffuse horizontal irradiance pair that no sky can give with the sun
+ * where it is ({@link isPossibleIrradiance}): such values come from a unit slip (hourly sums in
+ * Wh/m² or kJ/m²), a wrong date-time or site, or swapped columns, and they would drive the sky
+ * models far outside their range (a Perez circumsolar term of tens of thousands of W/m² on a
+ * window facing a low sun).
+ * @param dni - direct normal irradiance [W/m²] (already checked 0…2000)
+ * @param dhi - diffuse horizontal irradiance [W/m²] (already checked 0…2000)
+ * @param sinAltitude - sine of the sun's altitude [-], −1…1
+ * @param extraterrestrialNormal - the day's extraterrestrial normal irradiance [W/m²], 1000…1500
+ * @param names - the arguments' names as the user sees them (default `dni`, `dhi`)
+ * @throws SunpaneError naming the argument past its limit, with the limit at this sun
+ * @remarks Long & Shi (2008), physically possible limits (from memory).
+ */
+export function requirePossibleIrradiance(dni: number, dhi: number, sinAltitude: number, extraterrestrialNormal: number, names: { dni: string; dhi: string } = { dni: 'dni', dhi: 'dhi' }): void {
+  if (isPossibleIrradiance(dni, dhi, sinAltitude, extraterrestrialNormal)) return;
+  const limits = physicalIrradianceLimits(Math.max(-1, Math.min(1, sinAltitude)), extraterrestrialNormal);
+  const altitude = (Math.asin(Math.max(-1, Math.min(1, sinAltitude))) * 180) / Math.PI;
+  const sun = altitude > 0 ? `with the sun ${round(altitude, 2)}° high` : 'with the sun at or below the horizon';
+  const why = `the physically possible limit (Long & Shi 2008) ${sun} and an extraterrestrial ${round(extraterrestrialNormal, 1)} W/m²; check the units (W/m², not hourly sums in Wh/m² or kJ/m²), the date-time and the site`;
+  if (dni > limits.dni) throw new SunpaneError(names.dni, dni, `must be at most ${round(limits.dni, 1)} W/m², ${why}`);
+  if (dhi > limits.dhi) throw new SunpaneError(names.dhi, dhi, `must be at most ${round(limits.dhi, 1)} W/m², ${why}`);
+  const ghi = (sinAltitude > 0 ? dni * sinAltitude : 0) + dhi;
+  throw new SunpaneError(names.dhi, dhi, `must keep the global ${names.dni} × sin(altitude) + ${names.dhi} at or below ${round(limits.ghi, 1)} W/m², ${why}`, `the global is ${round(ghi, 1)} W/m²`);
+}
+
+function round(x: number, digits: number): number {
+  return Number(x.toFixed(digits));
 }

@@ -10,6 +10,7 @@ import { groundReflected, skyDiffuseAshraeClearDay, skyDiffuseHayDavies, skyDiff
 import { planeIrradiance, type PlaneIrradianceInput } from '../../../src/core/sky/planeIrradiance';
 import { perezParts, skyDiffusePerez1990 } from '../../../src/core/sky/perez1990';
 import { incidenceAngle } from '../../../src/core/sun/surfaceAngles';
+import { withinLimits } from '../../support/possibleIrradiance';
 import { expectArgumentError } from '../../support/expectError';
 
 const cosd = (d: number) => Math.cos((d * Math.PI) / 180);
@@ -136,7 +137,8 @@ describe('planeIrradiance', () => {
           skyModel: fc.constantFrom('isotropic' as const, 'hayDavies' as const, 'perez1990' as const),
           shade: fc.record({ isotropic: fc.double({ min: 0, max: 1, noNaN: true }), circumsolar: fc.double({ min: 0, max: 1, noNaN: true }), horizon: fc.double({ min: 0, max: 1, noNaN: true }), ground: fc.double({ min: 0, max: 1, noNaN: true }) }),
         }),
-        (input) => {
+        (drawn) => {
+          const input = withinLimits(drawn);
           const r = planeIrradiance(input);
           expect(r.sky).toBeLessThanOrEqual(r.skyUnshaded + 1e-9);
           expect(r.ground).toBeLessThanOrEqual(r.groundUnshaded + 1e-9);
