@@ -49,11 +49,9 @@ export function karlssonRoosModel(panes: number, q: number): (incidence: number)
   const beta = 2;
   const gamma = 5.26 + 0.06 * panes + (0.73 + 0.04 * panes) * q;
   return (incidence) => {
-    // Stryker disable next-line EqualityOperator: at 90° (z = 1) the polynomial is 1 − a − b − c = 0 exactly (c = 1 − a − b, the same rounding), so 0 either way
     if (incidence >= 90) return 0;
     const z = incidence / 90;
     const f = 1 - a * pow(z, alpha) - b * pow(z, beta) - c * pow(z, gamma); // Karlsson & Roos (2000)
-    // Stryker disable next-line EqualityOperator: at f = 0 and f = 1 both branches give the same value
     return f < 0 ? 0 : f > 1 ? 1 : f;
   };
 }

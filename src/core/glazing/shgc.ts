@@ -128,10 +128,8 @@ function physicalModel(shgcNormal: number, panes: number): (incidence: number) =
   const kl = paneExtinctionFor(shgcNormal, panes);
   const t0 = paneStackTransmittance(0, panes, kl);
   return (incidence) => {
-    // Stryker disable next-line EqualityOperator: at exactly 90° paneStackTransmittance is 0 too, so the SHGC is 0 either way
     if (incidence >= 90) return 0;
     const ratio = paneStackTransmittance(incidence, panes, kl) / t0;
-    // Stryker disable next-line EqualityOperator: at a ratio of exactly 1 both branches give 1
     return shgcNormal * (ratio < 1 ? ratio : 1);
   };
 }
@@ -283,7 +281,6 @@ export function shgcCurve(glazing: Glazing): ShgcCurve {
   }
   const atAngle = (incidence: number): number => {
     if (!(incidence >= 0 && incidence <= 180)) requireIncidence(incidence);
-    // Stryker disable next-line EqualityOperator: at exactly 90° the table's nodes 900 and 901 are both 0 (emptyLookup), so the SHGC is 0 either way
     if (incidence >= 90) return 0;
     const u = incidence / CURVE_STEP;
     const k = u | 0;
