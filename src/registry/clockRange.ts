@@ -17,9 +17,9 @@
  */
 import { SunpaneError, describeValue } from '../core/common';
 import { type DateSystem, type DaylightSavingRule, formatSerialIso, requireDaylightSaving } from '../core/time';
-import { GLOSSARY, type GlossaryEntry, nameKey, windowFieldFor } from './glossary';
+import { GLOSSARY, type GlossaryEntry, windowFieldFor } from './glossary';
 import type { ClockFields, RawArg, Scalar, WindowFields } from './types';
-import { editDistance, fieldsOf } from './windowRange';
+import { fieldsOf, nearestFieldName } from './windowRange';
 
 /** The fields a clock range takes, in the order help lists them. */
 export const CLOCK_FIELDS: readonly GlossaryEntry[] = [GLOSSARY.daylightSavingStart, GLOSSARY.daylightSavingEnd, GLOSSARY.daylightSavingShift, GLOSSARY.dateSystem];
@@ -161,17 +161,5 @@ export function windowOnClock(f: WindowFields, clock: ClockFields | undefined, a
 
 /** The clock field name nearest a name that matched none, when one is close (for "did you mean"). */
 function nearestClockName(text: string): string | undefined {
-  const k = nameKey(text);
-  let best: string | undefined;
-  let bestD = Math.max(2, Math.floor(k.length / 4)) + 1;
-  for (const f of CLOCK_FIELDS) {
-    for (const w of [f.name, f.label, ...(f.aliases ?? [])]) {
-      const d = editDistance(k, nameKey(w));
-      if (d < bestD) {
-        bestD = d;
-        best = f.name;
-      }
-    }
-  }
-  return best;
+  return nearestFieldName(text, CLOCK_FIELDS);
 }

@@ -86,12 +86,12 @@ export function editDistance(a: string, b: string): number {
   return row[b.length];
 }
 
-/** The field name nearest a name that matched none, when one is close. */
-export function nearestFieldName(text: string): string | undefined {
+/** The field name nearest a name that matched none, when one is close (among `fields`: the window's by default). */
+export function nearestFieldName(text: string, fields: readonly GlossaryEntry[] = WINDOW_FIELDS): string | undefined {
   const k = nameKey(text);
   let best: string | undefined;
   let bestD = Math.max(2, Math.floor(k.length / 4)) + 1;
-  for (const f of WINDOW_FIELDS) {
+  for (const f of fields) {
     for (const w of [f.name, f.label, ...(f.aliases ?? [])]) {
       const d = editDistance(k, nameKey(w));
       if (d < bestD) {
