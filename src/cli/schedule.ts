@@ -191,7 +191,7 @@ export function addSummaryTable(ws: ExcelJS.Worksheet, tableName: string, topRow
     r.summary.sunlitHours,
     r.summary.meanSunlitFraction,
     r.summary.missingHours,
-    ...extraCells<TableCell>(r, x, (v) => v, (v) => v, serialToCellDate, null),
+    ...extraCells<TableCell>(r, x, (v) => v, (v) => v, serialToCellDate, null, (w) => w),
     ...r.summary.monthlyKWh,
   ]);
   const t = addDataTable(ws, tableName, { row: topRow, column: 1 }, summaryHeaders(x).map((header, k) => ({ header, numFmt: numFmts[k], width: widths[k] })), rows);

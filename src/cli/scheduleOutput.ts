@@ -21,6 +21,7 @@ import type { AnnualSummary, WindowSpec } from '../core/gain';
 import type { LoadPeak } from '../core/load';
 import { COLOURS, NUMBER_FORMATS, address, serialToCellDate } from './workbook';
 import { LOAD_WORDS } from '../registry/glossary';
+import { type ScheduleConvention, TIME_CONVENTION_HEADER, peakAtHeaders, scheduleConventionOf } from '../schedule/columns';
 
 /** One window's results for the summary table. */
 export interface WindowResult {
@@ -33,10 +34,16 @@ export interface WindowResult {
   load?: LoadPeak;
 }
 
-/** Which extra columns a summary has: some window has a U-value (conduction), some a room (load). */
+/**
+ * Which extra columns a summary has: some window has a U-value (conduction), some a room (load);
+ * and how its windows stamp their rows (the peak columns' words follow; windows that differ add a
+ * time-convention column).
+ */
 export interface SummaryExtras {
   conduction: boolean;
   load: boolean;
+  /** The windows' time convention (all hour ending when left out). */
+  convention?: ScheduleConvention;
 }
 const NO_EXTRAS: SummaryExtras = { conduction: false, load: false };
 
@@ -46,29 +53,44 @@ export const LOAD_HEADERS = [LOAD_WORDS.peakLoad, LOAD_WORDS.peakLoadHourEnding]
 
 /** The extra columns a schedule's windows call for (known from the windows before any is worked out). */
 export function summaryExtrasOf(specs: readonly WindowSpec[]): SummaryExtras {
-  return { conduction: specs.some((s) => s.glazing.uValue !== undefined), load: specs.some((s) => s.room !== undefined) };
-}
-
-/** The summary's headers: SUMMARY_HEADERS with the extra columns before the months. */
-export function summaryHeaders(extras: SummaryExtras = NO_EXTRAS): string[] {
-  const at = SUMMARY_HEADERS.indexOf('Weather missing (h)') + 1;
-  return [...SUMMARY_HEADERS.slice(0, at), ...(extras.conduction ? CONDUCTION_HEADERS : []), ...(extras.load ? LOAD_HEADERS : []), ...SUMMARY_HEADERS.slice(at)];
+  return { conduction: specs.some((s) => s.glazing.uValue !== undefined), load: specs.some((s) => s.room !== undefined), convention: scheduleConventionOf(specs.map((s) => s.timeConvention)) };
 }
 
 /**
- * The extra cells of one window, each through its formatter (kWh, W, a stamp), blank where the
- * window lacks what the column needs.
+ * The summary's headers: SUMMARY_HEADERS with the peak's date-time column worded by the windows'
+ * time convention, and the extra columns before the months (the time convention of each window
+ * first when they differ).
  */
-export function extraCells<T>(r: WindowResult, x: SummaryExtras, kwh: (v: number) => T, watts: (v: number) => T, stamp: (v: number) => T, blank: T): T[] {
+export function summaryHeaders(extras: SummaryExtras = NO_EXTRAS): string[] {
+  const at = SUMMARY_HEADERS.indexOf('Weather missing (h)') + 1;
+  const convention = extras.convention ?? 'hourEnding';
+  const peakAt = peakAtHeaders(convention, 'cli');
+  const base = SUMMARY_HEADERS.map((h) => (h === 'Peak hour ending' ? peakAt.gain : h));
+  return [
+    ...base.slice(0, at),
+    ...(convention === 'mixed' ? [TIME_CONVENTION_HEADER] : []),
+    ...(extras.conduction ? CONDUCTION_HEADERS : []),
+    ...(extras.load ? [LOAD_HEADERS[0], peakAt.load] : []),
+    ...base.slice(at),
+  ];
+}
+
+/**
+ * The extra cells of one window, each through its formatter (kWh, W, a stamp, words), blank where
+ * the window lacks what the column needs — except the cooling load of a window without a room,
+ * which says so in the glossary's words (LOAD_WORDS.noRoom, as the pane writes it).
+ */
+export function extraCells<T>(r: WindowResult, x: SummaryExtras, kwh: (v: number) => T, watts: (v: number) => T, stamp: (v: number) => T, blank: T, text: (words: string) => T): T[] {
   const out: T[] = [];
+  if (x.convention === 'mixed') out.push(text(r.spec.timeConvention ?? 'hourEnding'));
   if (x.conduction) out.push(...(r.conduction ? [kwh(r.conduction.annualKWh), watts(r.conduction.peakW)] : [blank, blank]));
-  if (x.load) out.push(...(r.load ? [watts(r.load.peakLoadW), stamp(r.load.peakLoadStamp)] : [blank, blank]));
+  if (x.load) out.push(...(r.load ? [watts(r.load.peakLoadW), stamp(r.load.peakLoadStamp)] : [text(LOAD_WORDS.noRoom), blank]));
   return out;
 }
 
 /** Number formats of the extra columns. */
 function extraFormats(x: SummaryExtras): (string | undefined)[] {
-  return [...(x.conduction ? [NUMBER_FORMATS.kwh, NUMBER_FORMATS.watts] : []), ...(x.load ? [NUMBER_FORMATS.watts, NUMBER_FORMATS.dateTime] : [])];
+  return [...(x.convention === 'mixed' ? [undefined] : []), ...(x.conduction ? [NUMBER_FORMATS.kwh, NUMBER_FORMATS.watts] : []), ...(x.load ? [NUMBER_FORMATS.watts, NUMBER_FORMATS.dateTime] : [])];
 }
 
 /** The summary columns (headers of our own), shared by CSV, workbook and demo. */
@@ -121,7 +143,7 @@ export function summaryCsvLine(r: WindowResult, extras: SummaryExtras = NO_EXTRA
     s.sunlitHours,
     formatFixed(s.meanSunlitFraction, 4),
     s.missingHours,
-    ...extraCells<string | number>(r, extras, (v) => formatFixed(v, 3), (v) => formatFixed(v, 2), formatSerialIso, ''),
+    ...extraCells<string | number>(r, extras, (v) => formatFixed(v, 3), (v) => formatFixed(v, 2), formatSerialIso, '', (w) => w),
     ...s.monthlyKWh.map((k) => formatFixed(k, 3)),
   ]);
 }
@@ -216,7 +238,7 @@ export function xlsxSummaryWriter(target: string, options: OutputOptions, title:
         s.sunlitHours,
         s.meanSunlitFraction,
         s.missingHours,
-        ...extraCells<ExcelJS.CellValue>(r, extras, (v) => v, (v) => v, serialToCellDate, null),
+        ...extraCells<ExcelJS.CellValue>(r, extras, (v) => v, (v) => v, serialToCellDate, null, (w) => w),
         ...s.monthlyKWh,
       ];
       const row = summary.getRow(next++);

@@ -525,6 +525,24 @@ export const LOAD_WORDS = {
   noRoom: 'no room given — gains only',
 } as const;
 
+/**
+ * The words of a peak's date-time column, by how the rows are stamped (the windows' time
+ * convention): the hour ending then, the instant itself, or — in a schedule whose windows differ —
+ * each window's own, which a time-convention column beside them says.
+ */
+export const PEAK_AT_WORDS = {
+  /** The peak gain's hour, rows stamped at the hour's end (the pane's words). */
+  peakAtHourEnding: 'Peak at (hour ending)',
+  /** The command line schedule's words for the same (its first header, kept). */
+  peakHourEnding: 'Peak hour ending',
+  /** The peak gain's instant, rows stamped at an instant. */
+  peakAtInstant: 'Peak at (instant)',
+  /** The peak gain's stamp in a schedule whose windows read date-times differently. */
+  peakAtEither: `Peak at (hour ending or instant: see ${GLOSSARY.timeConvention.label})`,
+  /** The peak load's stamp in such a schedule. */
+  peakLoadAtEither: `Peak load at (hour ending or instant: see ${GLOSSARY.timeConvention.label})`,
+};
+
 /** The glossary's window fields, in glossary order. */
 export const WINDOW_FIELDS: readonly GlossaryEntry[] = Object.values(GLOSSARY).filter((g: GlossaryEntry) => g.window !== undefined);
 

@@ -20,7 +20,8 @@
  * above` / `below`) apply to each side that has a device; a one-side field beside them wins for its
  * side.
  */
-import { type GlossaryEntry, WINDOW_FIELDS, nameKey, windowFieldFor } from '../registry/glossary';
+import type { TimeConvention } from '../core/time';
+import { GLOSSARY, type GlossaryEntry, LOAD_WORDS, PEAK_AT_WORDS, WINDOW_FIELDS, nameKey, windowFieldFor } from '../registry/glossary';
 import { matchFieldNames } from '../registry/windowRange';
 
 /** How a cell is read: free text, one number, or one or more numbers (space, comma or semicolon separated). */
@@ -144,4 +145,27 @@ export function columnsForPath(path: string): ScheduleColumn[] {
 export function splitListCell(value: string | number): string[] {
   if (typeof value === 'number') return [String(value)];
   return value.split(/[\s;,]+/).filter((t) => t !== '');
+}
+
+/** How a schedule's windows stamp their rows: all by one time convention, or some each way. */
+export type ScheduleConvention = TimeConvention | 'mixed';
+
+/** The time convention of a schedule's windows (a window without one reads hour ending, the default). */
+export function scheduleConventionOf(conventions: readonly (TimeConvention | undefined)[]): ScheduleConvention {
+  const seen = new Set(conventions.map((c) => c ?? (GLOSSARY.timeConvention.default as TimeConvention)));
+  return seen.size > 1 ? 'mixed' : seen.has('instant') ? 'instant' : 'hourEnding';
+}
+
+/** The header of the column that says each window's time convention (in a schedule whose windows differ). */
+export const TIME_CONVENTION_HEADER = GLOSSARY.timeConvention.label;
+
+/**
+ * The headers of a schedule summary's peak-gain and peak-load date-time columns, following how the
+ * windows stamp their rows (the pane and the command line word the hour-ending case each their own
+ * way, as they always have; the instant and mixed cases alike).
+ */
+export function peakAtHeaders(convention: ScheduleConvention, reader: ScheduleReader): { gain: string; load: string } {
+  if (convention === 'instant') return { gain: PEAK_AT_WORDS.peakAtInstant, load: LOAD_WORDS.peakLoadAtInstant };
+  if (convention === 'mixed') return { gain: PEAK_AT_WORDS.peakAtEither, load: PEAK_AT_WORDS.peakLoadAtEither };
+  return reader === 'cli' ? { gain: PEAK_AT_WORDS.peakHourEnding, load: LOAD_WORDS.peakLoadHourEnding } : { gain: PEAK_AT_WORDS.peakAtHourEnding, load: LOAD_WORDS.peakLoadAtHourEnding };
 }

@@ -25,6 +25,7 @@ import { writeSmallTableSheet } from './tableSheet';
 import { workbookDateSystem } from './dateSystem';
 import { writeYearSheet } from './yearSheet';
 import type { DateSystem } from '../core/time';
+import { scheduleConventionOf } from '../schedule/columns';
 
 /** The caution shown in the pane and on every result sheet (one text for every output). */
 export { CAUTION };
@@ -339,15 +340,16 @@ export function createPane(doc: Document, host: PaneHost): void {
         figures.push(runYear(r.spec).figures);
       }
       const withLoad = figures.some((f) => f.peakLoadW !== undefined);
-      const out = rows.map((r, i) => summaryRow(r.spec, figures[i], withLoad));
+      const convention = scheduleConventionOf(rows.map((r) => r.spec.timeConvention));
+      const out = rows.map((r, i) => summaryRow(r.spec, figures[i], withLoad, convention));
       const plan = await planFor('Schedule results');
       writingNow('the schedule results');
       const name = await writeSmallTableSheet(host.run, plan, {
         title: `Sunpane window schedule: ${rows.length} windows, year ${rows[0].spec.year}`,
         lines: [`From table "${tableInput.value.trim()}"; ${weatherText(rows[0].spec)}.`, scheduleLoadLine(figures), CAUTION],
-        header: summaryHeader(withLoad),
+        header: summaryHeader(withLoad, convention),
         rows: out,
-        formats: summaryFormats(withLoad),
+        formats: summaryFormats(withLoad, convention),
         dateSystem: ready.dateSystem,
         chartColumn: 3,
         chartTitle: 'Solar gain by window (kWh/yr)',

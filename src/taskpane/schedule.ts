@@ -13,7 +13,7 @@ import type { WindowSpec } from '../core/gain';
 import { EXAMPLE_SITES } from '../demo/sites';
 import { GLOSSARY, LOAD_WORDS, choiceFor } from '../registry/glossary';
 import { inGlossaryWords, readFieldCell, setPath } from '../registry/windowRange';
-import { SCHEDULE_COLUMNS, SITE_KEY, SKYLINE_KEY, type ScheduleColumn, columnForHeader, headerKey, matchHeaders, requiredColumns } from '../schedule/columns';
+import { SCHEDULE_COLUMNS, SITE_KEY, SKYLINE_KEY, type ScheduleColumn, type ScheduleConvention, TIME_CONVENTION_HEADER, columnForHeader, headerKey, matchHeaders, peakAtHeaders, requiredColumns } from '../schedule/columns';
 import { FIELDS, type FieldDef, type FormValues, applyExampleSite, fieldForArgument } from './fields';
 import { withoutPath } from './messages';
 import { type SheetData, type SpecValidator, buildWindowSpec, readListText } from './spec';
@@ -192,9 +192,14 @@ export const SUMMARY_HEADER = ['Window', 'Faces (°)', 'Glass area (m²)', 'Sola
 /** The cooling-load columns that follow when some window of the schedule has a room (the glossary's words). */
 export const SUMMARY_LOAD_HEADER = [LOAD_WORDS.peakLoad, LOAD_WORDS.peakLoadAtHourEnding] as const;
 
-/** The summary's header: the cooling-load columns at the end when some window has a room. */
-export function summaryHeader(withLoad = false): string[] {
-  return [...SUMMARY_HEADER, ...(withLoad ? SUMMARY_LOAD_HEADER : [])];
+/**
+ * The summary's header: the peak's date-time columns worded by the windows' time convention
+ * (src/schedule/columns.ts `peakAtHeaders`), the cooling-load columns at the end when some window
+ * has a room, and each window's time convention last when the windows differ.
+ */
+export function summaryHeader(withLoad = false, convention: ScheduleConvention = 'hourEnding'): string[] {
+  const at = peakAtHeaders(convention, 'pane');
+  return [...SUMMARY_HEADER.map((h) => (h === 'Peak at (hour ending)' ? at.gain : h)), ...(withLoad ? [LOAD_WORDS.peakLoad, at.load] : []), ...(convention === 'mixed' ? [TIME_CONVENTION_HEADER] : [])];
 }
 
 /** A window's yearly figures as the summary needs them (the pane's YearFigures). */
@@ -215,7 +220,7 @@ export interface SummaryFigures {
  * hour at the end — for a window without a room, the words "no room given — gains only" in place of
  * the load and a blank hour.
  */
-export function summaryRow(spec: WindowSpec, fig: SummaryFigures, withLoad = false): (number | string)[] {
+export function summaryRow(spec: WindowSpec, fig: SummaryFigures, withLoad = false, convention: ScheduleConvention = 'hourEnding'): (number | string)[] {
   const round = (x: number, d: number) => Math.round(x * 10 ** d) / 10 ** d;
   const load = !withLoad ? [] : fig.peakLoadW === undefined ? [LOAD_WORDS.noRoom, ''] : [round(fig.peakLoadW, 1), fig.peakLoadStamp === undefined ? '' : round(fig.peakLoadStamp, 6)];
   return [
@@ -229,6 +234,7 @@ export function summaryRow(spec: WindowSpec, fig: SummaryFigures, withLoad = fal
     round(fig.meanSunlitFraction, 3),
     fig.missingHours,
     ...load,
+    ...(convention === 'mixed' ? [spec.timeConvention ?? 'hourEnding'] : []),
   ];
 }
 
@@ -236,6 +242,6 @@ export function summaryRow(spec: WindowSpec, fig: SummaryFigures, withLoad = fal
 export const SUMMARY_FORMATS = ['@', '0', '0.00', '0.0', '0.0', '0.0', 'yyyy-mm-dd hh:mm', '0.000', '0'];
 
 /** Number formats of a summary row with or without the cooling-load columns. */
-export function summaryFormats(withLoad = false): string[] {
-  return [...SUMMARY_FORMATS, ...(withLoad ? ['0.0', 'yyyy-mm-dd hh:mm'] : [])];
+export function summaryFormats(withLoad = false, convention: ScheduleConvention = 'hourEnding'): string[] {
+  return [...SUMMARY_FORMATS, ...(withLoad ? ['0.0', 'yyyy-mm-dd hh:mm'] : []), ...(convention === 'mixed' ? ['@'] : [])];
 }

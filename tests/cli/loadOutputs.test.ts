@@ -12,6 +12,7 @@ import { tableSummaryLine } from '../../src/cli/table';
 import { SUMMARY_HEADERS, summaryCsv, summaryHeaders, windowResult } from '../../src/cli/schedule';
 import { summaryExtrasOf } from '../../src/cli/scheduleOutput';
 import { parseCsv } from '../../src/cli/csv';
+import { formatSerialIso } from '../../src/core/time';
 
 /** The CSV's rows as lists of cells. */
 const cells = (text: string): string[][] => parseCsv(text).map((r) => r.fields);
@@ -51,7 +52,7 @@ describe('table: conduction and cooling load beside the solar gain', () => {
 });
 
 describe('schedule: conduction and peak load columns when a window has them', () => {
-  test('the extra columns come before the months; a window without them leaves them blank', () => {
+  test('the extra columns come before the months; a window without a U-value leaves them blank, one without a room says so', () => {
     const results = [windowResult(withRoom), windowResult(baseSpec({ name: 'Plain' }))];
     const headers = summaryHeaders(summaryExtrasOf(results.map((r) => r.spec)));
     const at = headers.indexOf('Weather missing (h)') + 1;
@@ -62,7 +63,8 @@ describe('schedule: conduction and peak load columns when a window has them', ()
     const conductionKWh = Array.from(series.conduction).reduce((a, b) => a + b, 0) / 1000;
     expect(Number(rows[1][at])).toBeCloseTo(conductionKWh, 3);
     expect(Number(rows[1][at + 2])).toBeCloseTo(results[0].load!.peakLoadW, 2);
-    expect(rows[2].slice(at, at + 4)).toEqual(['', '', '', '']);
+    // No U-value: blank conduction; no room: the pane's words in the load cell (LOAD_WORDS.noRoom), blank hour.
+    expect(rows[2].slice(at, at + 4)).toEqual(['', '', 'no room given — gains only', '']);
   });
 
   test('windows with neither keep the summary as it was', () => {
@@ -71,7 +73,7 @@ describe('schedule: conduction and peak load columns when a window has them', ()
 });
 
 describe('the streamed schedule workbook with the extra columns', () => {
-  test('headers, a blank for the window without a room, and the MAX of the peak loads in the totals row', async () => {
+  test('headers, the no-room words for the window without a room, and the MAX of the peak loads in the totals row', async () => {
     const fs = await import('node:fs');
     const os = await import('node:os');
     const path = await import('node:path');
@@ -91,10 +93,67 @@ describe('the streamed schedule workbook with the extra columns', () => {
     expect(headers).toEqual(summaryHeaders(extras));
     const col = headers.indexOf('Peak cooling load (W)') + 1;
     expect(ws.getRow(5).getCell(col).value).toBeCloseTo(results[0].load!.peakLoadW, 9);
-    expect(ws.getRow(6).getCell(col).value).toBeNull();
+    expect(ws.getRow(6).getCell(col).value).toBe('no room given — gains only');
+    expect(ws.getRow(6).getCell(col + 1).value).toBeNull();
     const total = ws.getRow(7).getCell(col).value as { formula: string; result: number };
     expect(total.formula).toMatch(/^MAX\(/);
     expect(total.result).toBeCloseTo(results[0].load!.peakLoadW, 9);
+    fs.rmSync(dir, { recursive: true, force: true });
+  });
+});
+
+describe('schedule headers follow the windows\' time convention', () => {
+  const instantRoom = { ...withRoom, name: 'Instant', timeConvention: 'instant' as const };
+  const csvHeaders = (results: ReturnType<typeof windowResult>[]) => cells(summaryCsv(results))[0];
+
+  test('hour-ending windows: "Peak hour ending" and "Peak load hour ending"; instant windows: "Peak at (instant)" and "Peak load at (instant)"', () => {
+    const ending = csvHeaders([windowResult(withRoom)]);
+    expect(ending[6]).toBe('Peak hour ending');
+    expect(ending).toContain('Peak load hour ending');
+    expect(ending.join('|')).not.toMatch(/instant/);
+    const instant = windowResult(instantRoom);
+    const rows = cells(summaryCsv([instant]));
+    expect(rows[0][6]).toBe('Peak at (instant)');
+    expect(rows[0]).toContain('Peak load at (instant)');
+    expect(rows[0].join('|')).not.toMatch(/hour ending/);
+    // The instant row's stamps are at the top of an hour (the instant itself), as the core gives them.
+    expect(rows[1][6]).toBe(formatSerialIso(instant.summary.peakStamp));
+    expect(rows[1][rows[0].indexOf('Peak load at (instant)')]).toBe(formatSerialIso(instant.load!.peakLoadStamp));
+  });
+
+  test('windows that differ: both words in the headers and a Time convention column saying each window\'s', () => {
+    const results = [windowResult(withRoom), windowResult(instantRoom)];
+    const rows = cells(summaryCsv(results));
+    expect(rows[0][6]).toBe('Peak at (hour ending or instant: see Time convention)');
+    const at = rows[0].indexOf('Time convention');
+    expect(at).toBe(rows[0].indexOf('Weather missing (h)') + 1);
+    expect(rows.slice(1).map((r) => r[at])).toEqual(['hourEnding', 'instant']);
+    expect(rows[0]).toContain('Peak load at (hour ending or instant: see Time convention)');
+  });
+
+  test('the streamed and the whole workbook write the same headers as the CSV', async () => {
+    const fs = await import('node:fs');
+    const os = await import('node:os');
+    const path = await import('node:path');
+    const ExcelJS = (await import('exceljs')).default;
+    const { xlsxSummaryWriter } = await import('../../src/cli/scheduleOutput');
+    const { addSummaryTable } = await import('../../src/cli/schedule');
+    const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'sunpane-conv-'));
+    for (const results of [[windowResult(instantRoom)], [windowResult(withRoom), windowResult({ ...baseSpec({ name: 'Plain instant' }), timeConvention: 'instant' as const })]]) {
+      const extras = summaryExtrasOf(results.map((r) => r.spec));
+      const target = path.join(dir, `s${results.length}.xlsx`);
+      const w = xlsxSummaryWriter(target, { force: false }, 'T', 'test', extras);
+      for (const r of results) await w.add(r);
+      await w.finish();
+      const wb = new ExcelJS.Workbook();
+      await wb.xlsx.readFile(target);
+      const streamed = (wb.getWorksheet('Summary')!.getRow(4).values as unknown[]).slice(1);
+      expect(streamed).toEqual(csvHeaders(results));
+      const whole = new ExcelJS.Workbook().addWorksheet('Summary');
+      addSummaryTable(whole, 'S', 4, results);
+      expect((whole.getRow(4).values as unknown[]).slice(1)).toEqual(csvHeaders(results));
+    }
+    expect(csvHeaders([windowResult(instantRoom)])[6]).toBe('Peak at (instant)');
     fs.rmSync(dir, { recursive: true, force: true });
   });
 });

@@ -122,4 +122,22 @@ describe('the window schedule', () => {
     // Without the load columns the row is as before, whatever the figures hold.
     expect(summaryRow(spec, { ...fig, peakLoadW: 401.26, peakLoadStamp: 45800.625 })).toHaveLength(9);
   });
+
+  test('the peak columns\' headers follow the windows\' time convention; windows that differ get a Time convention column', () => {
+    const fig = { annualKWh: 300, peakW: 512.345, peakStamp: 45800.5, meanSunlitFraction: 0.81234, missingHours: 2, glassArea: 2.5, peakLoadW: 401.26, peakLoadStamp: 45800.625 };
+    expect(summaryHeader(true, 'hourEnding')).toEqual(summaryHeader(true));
+    const instant = summaryHeader(true, 'instant');
+    expect(instant[6]).toBe('Peak at (instant)');
+    expect(instant.slice(-2)).toEqual(['Peak cooling load (W)', 'Peak load at (instant)']);
+    expect(instant.join('|')).not.toMatch(/hour ending/);
+    const mixed = summaryHeader(true, 'mixed');
+    expect(mixed[6]).toBe('Peak at (hour ending or instant: see Time convention)');
+    expect(mixed.slice(-3)).toEqual(['Peak cooling load (W)', 'Peak load at (hour ending or instant: see Time convention)', 'Time convention']);
+    expect(summaryFormats(true, 'mixed')).toHaveLength(mixed.length);
+    const a = { name: 'A', surfaceAzimuth: 90, timeConvention: 'instant' } as WindowSpec;
+    const b = { name: 'B', surfaceAzimuth: 90 } as WindowSpec;
+    expect(summaryRow(a, fig, true, 'mixed').slice(-1)).toEqual(['instant']);
+    expect(summaryRow(b, fig, true, 'mixed').slice(-1)).toEqual(['hourEnding']);
+    expect(summaryRow(a, fig, true, 'instant')).toHaveLength(instant.length);
+  });
 });
