@@ -529,23 +529,50 @@ export function earthPeriodicSeries(jme0: number, stepJme: number, count: number
   }
 }
 
-/** Per nutation row: the (argument, |multiplier|, sign) triples of its non-zero multipliers, flattened. */
-const NUT_FACTORS: Int32Array = Int32Array.from(
-  NUTATION_TERMS.flatMap((row) => {
-    const triples: number[] = [];
-    for (let j = 0; j < 5; j++) if (row[j] !== 0) triples.push(j, Math.abs(row[j]), Math.sign(row[j]));
-    return triples;
-  }),
-);
-const NUT_FACTOR_START: Int32Array = (() => {
-  const start = new Int32Array(NUTATION_TERMS.length + 1);
-  NUTATION_TERMS.forEach((row, i) => (start[i + 1] = start[i] + 3 * row.slice(0, 5).filter((y) => y !== 0).length));
-  return start;
-})();
+/**
+ * How to get cos and sin of every nutation row's argument Σ Y_j X_j with one complex product each.
+ * The phasor pool holds first cos and sin of m·X_j for j = 0…4 and m = −3…3 (index j·7 + m + 3), then
+ * one entry per product: a row's argument is an earlier entry's plus one m·X_j (a row of the table
+ * when one fits, else the row without its last multiplier, made as an entry of its own). Products of
+ * integer multiples are exact identities, so this changes nothing but rounding (≈ 1e-16).
+ */
+interface NutationPlan {
+  /** Per product: [pool index of the result, pool index of the earlier entry, pool index of m·X_j]. */
+  products: Int32Array;
+  /** Pool index of each row's phasor. */
+  rowEntry: Int32Array;
+  /** Pool size. */
+  size: number;
+}
+
+function buildNutationPlan(): NutationPlan {
+  const baseIndex = (j: number, m: number): number => j * 7 + m + 3;
+  const known = new Map<string, number>();
+  const products: number[] = [];
+  let size = 35;
+  const entryOf = (y: readonly number[]): number => {
+    const nonZero = [0, 1, 2, 3, 4].filter((j) => y[j] !== 0);
+    if (nonZero.length === 1) return baseIndex(nonZero[0], y[nonZero[0]]);
+    const key = y.join(',');
+    const found = known.get(key);
+    if (found !== undefined) return found;
+    // Prefer an entry that already exists: y minus one of its multipliers.
+    let split = nonZero[nonZero.length - 1];
+    for (const j of nonZero) if (known.has(y.map((v, k) => (k === j ? 0 : v)).join(','))) split = j;
+    const earlier = entryOf(y.map((v, k) => (k === split ? 0 : v)));
+    const index = size++;
+    products.push(index, earlier, baseIndex(split, y[split]));
+    known.set(key, index);
+    return index;
+  };
+  const rowEntry = Int32Array.from(NUTATION_TERMS, (row) => entryOf(row.slice(0, 5)));
+  return { products: Int32Array.from(products), rowEntry, size };
+}
+
+const NUTATION_PLAN = buildNutationPlan();
+const POOL_COS = new Float64Array(NUTATION_PLAN.size);
+const POOL_SIN = new Float64Array(NUTATION_PLAN.size);
 const NUT_COEFFICIENTS = Float64Array.from(NUTATION_TERMS.flatMap((r) => r.slice(5)));
-/** cos and sin of m·X_j for j = 0…4, m = 0…3, index j·4 + m. */
-const MULTIPLE_COS = new Float64Array(20);
-const MULTIPLE_SIN = new Float64Array(20);
 
 /** Nutation in longitude and obliquity [°]. */
 export interface Nutation {
@@ -563,41 +590,61 @@ export interface Nutation {
  *   Δε = Σ (c + dT) cos(Σ Xj Yj), in 0.0001″.
  */
 export function nutationSums(jce: number, x: readonly number[], out: Nutation): Nutation {
-  rowPhasors(x, ROW_COS, ROW_SIN);
-  return sumNutationRows(jce, out);
+  fillPhasorPool(x);
+  const { rowEntry } = NUTATION_PLAN;
+  let psiSum = 0;
+  let epsSum = 0;
+  for (let i = 0; i < rowEntry.length; i++) {
+    const q = i * 4;
+    const e = rowEntry[i];
+    psiSum += (NUT_COEFFICIENTS[q] + NUT_COEFFICIENTS[q + 1] * jce) * POOL_SIN[e]; // Eq. 20
+    epsSum += (NUT_COEFFICIENTS[q + 2] + NUT_COEFFICIENTS[q + 3] * jce) * POOL_COS[e]; // Eq. 21
+  }
+  out.deltaPsi = psiSum / 36_000_000; // Eq. 22
+  out.deltaEpsilon = epsSum / 36_000_000;
+  return out;
 }
 
-/** cos and sin of every row argument Σ Xj Yj by angle addition from cos and sin of X0…X4 [°]. */
-function rowPhasors(x: readonly number[], rowCos: Float64Array, rowSin: Float64Array): void {
+/** cos and sin of m·X_j (m = −3…3) and of every product of the plan into POOL_COS, POOL_SIN; X_j in degrees. */
+function fillPhasorPool(x: readonly number[]): void {
   for (let j = 0; j < 5; j++) {
     const argRad = ((x[j] % 360) * Math.PI) / 180;
     const c1 = Math.cos(argRad);
     const s1 = Math.sin(argRad);
     const c2 = c1 * c1 - s1 * s1;
     const s2 = 2 * s1 * c1;
-    const k = j * 4;
-    MULTIPLE_COS[k] = 1;
-    MULTIPLE_SIN[k] = 0;
-    MULTIPLE_COS[k + 1] = c1;
-    MULTIPLE_SIN[k + 1] = s1;
-    MULTIPLE_COS[k + 2] = c2;
-    MULTIPLE_SIN[k + 2] = s2;
-    MULTIPLE_COS[k + 3] = c2 * c1 - s2 * s1;
-    MULTIPLE_SIN[k + 3] = s2 * c1 + c2 * s1;
+    const c3 = c2 * c1 - s2 * s1;
+    const s3 = s2 * c1 + c2 * s1;
+    const k = j * 7 + 3;
+    POOL_COS[k] = 1;
+    POOL_SIN[k] = 0;
+    POOL_COS[k + 1] = POOL_COS[k - 1] = c1;
+    POOL_SIN[k + 1] = s1;
+    POOL_SIN[k - 1] = -s1;
+    POOL_COS[k + 2] = POOL_COS[k - 2] = c2;
+    POOL_SIN[k + 2] = s2;
+    POOL_SIN[k - 2] = -s2;
+    POOL_COS[k + 3] = POOL_COS[k - 3] = c3;
+    POOL_SIN[k + 3] = s3;
+    POOL_SIN[k - 3] = -s3;
   }
-  for (let i = 0; i < NUTATION_TERMS.length; i++) {
-    let re = 1;
-    let im = 0;
-    for (let f = NUT_FACTOR_START[i], end = NUT_FACTOR_START[i + 1]; f < end; f += 3) {
-      const k = NUT_FACTORS[f] * 4 + NUT_FACTORS[f + 1];
-      const c = MULTIPLE_COS[k];
-      const s = NUT_FACTORS[f + 2] * MULTIPLE_SIN[k];
-      const next = re * c - im * s;
-      im = re * s + im * c;
-      re = next;
-    }
-    rowCos[i] = re;
-    rowSin[i] = im;
+  const { products } = NUTATION_PLAN;
+  for (let p = 0; p < products.length; p += 3) {
+    const a = products[p + 1];
+    const b = products[p + 2];
+    const c = POOL_COS[a] * POOL_COS[b] - POOL_SIN[a] * POOL_SIN[b]; // cos(α + β)
+    POOL_SIN[products[p]] = POOL_SIN[a] * POOL_COS[b] + POOL_COS[a] * POOL_SIN[b]; // sin(α + β)
+    POOL_COS[products[p]] = c;
+  }
+}
+
+/** cos and sin of every row argument Σ Xj Yj [°] into rowCos, rowSin. */
+function rowPhasors(x: readonly number[], rowCos: Float64Array, rowSin: Float64Array): void {
+  fillPhasorPool(x);
+  const { rowEntry } = NUTATION_PLAN;
+  for (let i = 0; i < rowEntry.length; i++) {
+    rowCos[i] = POOL_COS[rowEntry[i]];
+    rowSin[i] = POOL_SIN[rowEntry[i]];
   }
 }
 
