@@ -82,8 +82,10 @@ export function perezParts(
   coefficients: readonly PerezCoefficientRow[] = PEREZ_1990_COMPOSITE,
 ): PerezParts {
   const tiltRad = surfaceTilt * RAD;
-  // The incidence angle only matters with the sun up and some diffuse (as before: not evaluated otherwise).
-  const cosTheta = dhi > 0 && sunZenith < 90 ? cos(incidenceAngle(90 - sunZenith, sunAzimuth, surfaceTilt, surfaceAzimuth) * RAD) : 0;
+  // Worked out whatever the sun and diffuse (the kernel reads it only with the sun up and some diffuse):
+  // a guard here would be a second copy of the kernel's condition that no result could tell apart.
+  const cosTheta = cos(incidenceAngle(90 - sunZenith, sunAzimuth, surfaceTilt, surfaceAzimuth) * RAD);
+  // Stryker disable next-line ObjectLiteral: every field is written by perezPartsKernel (either branch) before the record is returned
   const out = { epsilon: 1, delta: 0, bin: 1, f1: 0, f2: 0, isotropic: 0, circumsolar: 0, horizon: 0, total: 0 };
   return perezPartsKernel(out, (1 + cos(tiltRad)) / 2, sin(tiltRad), dhi, dni, dniExtra, sunZenith, cos(sunZenith * RAD), airMass, cosTheta, coefficients);
 }
