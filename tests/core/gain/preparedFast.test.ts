@@ -25,6 +25,7 @@ import { extraterrestrialSpencer } from '../../../src/core/sky/extraterrestrial'
 import { incidenceAngle, profileAngle } from '../../../src/core/sun/surfaceAngles';
 import type { Shading } from '../../../src/core/shading/types';
 import { shadedSpec } from './gainFixtures';
+import { Mismatches, must } from '../../support/mismatches';
 
 const EQUAL = 1e-12;
 
@@ -82,11 +83,12 @@ describe('prepared shading equals sunlitFraction', () => {
           const sunAzimuth = surfaceAzimuth + relative;
           const checked = sunlitFraction(window, shading, altitude, sunAzimuth, surfaceAzimuth);
           const prepared = prepareShading(window, shading, surfaceAzimuth);
-          expect(Math.abs(prepared.sunlit(altitude, sunAzimuth) - checked)).toBeLessThanOrEqual(EQUAL);
+          const sunlit = prepared.sunlit(altitude, sunAzimuth);
+          must(Math.abs(sunlit - checked) <= EQUAL, () => `sunlit ${sunlit}, sunlitFraction ${checked}`);
           const gamma = wrap180(surfaceAzimuth - sunAzimuth);
           const betaRad = altitude * RAD;
           const framed = prepared.sunlitInWallFrame(altitude, sunAzimuth, gamma, Math.sin(betaRad), Math.cos(betaRad), Math.sin(gamma * RAD), Math.cos(gamma * RAD));
-          expect(Math.abs(framed - checked)).toBeLessThanOrEqual(EQUAL);
+          must(Math.abs(framed - checked) <= EQUAL, () => `sunlitInWallFrame ${framed}, sunlitFraction ${checked}`);
         },
       ),
       { numRuns: 3000, seed: 8 },
@@ -128,9 +130,10 @@ describe('prepared shading equals sunlitFraction', () => {
           suns.forEach(([altitude], k) => {
             const i = 2 * k;
             const one = prepared.sunlitInWallFrame(altitude, cols.azimuth[i], cols.gamma[i], cols.sinAltitude[i], cols.cosAltitude[i], cols.sinGamma[i], cols.cosGamma[i]);
-            expect(Object.is(out[i], one)).toBe(true);
-            expect(Math.abs(out[i] - sunlitFraction(window, shading, altitude, cols.azimuth[i], surfaceAzimuth))).toBeLessThanOrEqual(EQUAL);
-            expect(out[i + 1]).toBe(-7);
+            must(Object.is(out[i], one), () => `sun ${k}: sunlitOfRows ${out[i]}, sunlitInWallFrame ${one}`);
+            const checked = sunlitFraction(window, shading, altitude, cols.azimuth[i], surfaceAzimuth);
+            must(Math.abs(out[i] - checked) <= EQUAL, () => `sun ${k}: sunlitOfRows ${out[i]}, sunlitFraction ${checked}`);
+            must(Object.is(out[i + 1], -7), () => `row ${i + 1} (not listed) was changed to ${out[i + 1]}`);
           });
         },
       ),
@@ -198,13 +201,10 @@ describe('prepared plane equals planeIrradiance', () => {
           Math.cos(betaRad) * Math.sin(input.surfaceTilt * RAD) * Math.cos((input.sunAzimuth - input.surfaceAzimuth) * RAD);
         plane.irradiance(out, input.dni, input.dhi, input.sunAltitude, Math.sin(betaRad), cosIncidence, extraterrestrialSpencer(input.dayOfYear), input.shade.circumsolar);
         const scale = input.dni + input.dhi;
-        expect(closeTo(out.beam, checked.beam, scale)).toBe(true);
-        expect(closeTo(out.sky, checked.sky, scale)).toBe(true);
-        expect(closeTo(out.ground, checked.ground, scale)).toBe(true);
-        expect(closeTo(out.total, checked.total, scale)).toBe(true);
-        expect(closeTo(out.skyUnshaded, checked.skyUnshaded, scale)).toBe(true);
-        expect(closeTo(out.groundUnshaded, checked.groundUnshaded, scale)).toBe(true);
-        expect(plane.needsDniExtra).toBe(input.skyModel !== 'isotropic');
+        for (const key of ['beam', 'sky', 'ground', 'total', 'skyUnshaded', 'groundUnshaded'] as const) {
+          must(closeTo(out[key], checked[key], scale), () => `${key}: prepared ${out[key]}, planeIrradiance ${checked[key]}`);
+        }
+        must(plane.needsDniExtra === (input.skyModel !== 'isotropic'), () => `needsDniExtra ${plane.needsDniExtra} for ${input.skyModel}`);
       }),
       { numRuns: 3000, seed: 9 },
     );
@@ -254,8 +254,8 @@ describe('prepared plane equals planeIrradiance', () => {
             if (withShared) plane.irradianceShared(one, h.dni, h.dhi, h.sunAltitude, c.sinAltitude[i], h.cosIncidence, h.dniExtra, h.circumsolar, shared, i);
             else plane.irradiance(one, h.dni, h.dhi, h.sunAltitude, c.sinAltitude[i], h.cosIncidence, h.dniExtra, h.circumsolar);
             for (const key of ['beam', 'sky', 'ground', 'skyUnshaded', 'groundUnshaded'] as const) {
-              expect([key, Object.is(c[key][i], one[key])]).toEqual([key, true]);
-              expect(c[key][i + 1]).toBe(-7);
+              must(Object.is(c[key][i], one[key]), () => `hour ${k} ${key}: irradianceRows ${c[key][i]}, one-hour call ${one[key]}`);
+              must(Object.is(c[key][i + 1], -7), () => `row ${i + 1} (not listed) ${key} was changed to ${c[key][i + 1]}`);
             }
           });
         },
@@ -298,7 +298,7 @@ describe('Perez kernel equals perezParts', () => {
           const cosTheta = zenith < 90 ? Math.cos(incidenceAngle(90 - zenith, sunAz, tilt, surfAz) * RAD) : 0;
           const out = { epsilon: 0, delta: 0, bin: 0, f1: 0, f2: 0, isotropic: 0, circumsolar: 0, horizon: 0, total: 0 };
           perezPartsKernel(out, (1 + Math.cos(tiltRad)) / 2, Math.sin(tiltRad), dhi, dni, e0, zenith, Math.cos(zenith * RAD), m, cosTheta, PEREZ_1990_COMPOSITE);
-          for (const key of Object.keys(p) as (keyof typeof p)[]) expect(closeTo(out[key], p[key], dhi + dni)).toBe(true);
+          for (const key of Object.keys(p) as (keyof typeof p)[]) must(closeTo(out[key], p[key], dhi + dni), () => `${key}: kernel ${out[key]}, perezParts ${p[key]}`);
         },
       ),
       { numRuns: 2000, seed: 10 },
@@ -311,23 +311,31 @@ describe('unrolled and unchecked helpers equal their plain definitions', () => {
     const byCount = (e: number) => 1 + PEREZ_EPSILON_EDGES.filter((edge) => e >= edge).length;
     const values = [Number.NaN, -1, 0, 1, Infinity, ...PEREZ_EPSILON_EDGES.flatMap((e) => [e, e * (1 - 1e-15), e * (1 + 1e-15), e - 0.01, e + 0.01])];
     for (let e = 0.9; e < 8; e += 0.001) values.push(e);
-    for (const e of values) expect(perezBin(e)).toBe(Number.isNaN(e) ? 1 : byCount(e));
+    const found = new Mismatches();
+    for (const e of values) {
+      const want = Number.isNaN(e) ? 1 : byCount(e);
+      found.check(perezBin(e) === want, () => `ε ${e}: bin ${perezBin(e)}, by count ${want}`);
+    }
+    expect(found.list).toEqual([]);
   });
 
   test('the unchecked Kasten–Young air mass equals Eq. 3 written with Math.pow within 1e-14 relative, and the checked one is it', () => {
+    const found = new Mismatches();
     for (let alt = -10; alt <= 90; alt += 0.01) {
       const beta = Math.max(alt, 0);
       const eq3 = 1 / (Math.sin(beta * RAD) + 0.50572 * Math.pow(beta + 6.07995, -1.6364));
       const m = airMassKastenYoungUnchecked(alt);
-      expect(Math.abs(m - eq3)).toBeLessThanOrEqual(1e-14 * eq3);
-      expect(airMassKastenYoung(alt)).toBe(m);
-      if (alt > 0) expect(airMassKastenYoungFromSine(alt, Math.sin(alt * RAD))).toBe(m);
+      found.check(Math.abs(m - eq3) <= 1e-14 * eq3, () => `${alt}°: unchecked ${m}, Eq. 3 ${eq3}`);
+      found.check(Object.is(airMassKastenYoung(alt), m), () => `${alt}°: checked ${airMassKastenYoung(alt)}, unchecked ${m}`);
+      if (alt > 0) found.check(Object.is(airMassKastenYoungFromSine(alt, Math.sin(alt * RAD)), m), () => `${alt}°: from the sine ${airMassKastenYoungFromSine(alt, Math.sin(alt * RAD))}, unchecked ${m}`);
     }
+    expect(found.list).toEqual([]);
     // Random altitudes between the grid points and at the series' nodes and midpoints (90/256° apart).
     fc.assert(
       fc.property(fc.oneof(fc.double({ min: 0, max: 90, noNaN: true }), fc.integer({ min: 0, max: 512 }).map((k) => (k * 90) / 512)), (alt) => {
         const eq3 = 1 / (Math.sin(alt * RAD) + 0.50572 * Math.pow(alt + 6.07995, -1.6364));
-        expect(Math.abs(airMassKastenYoungUnchecked(alt) - eq3)).toBeLessThanOrEqual(1e-14 * eq3);
+        const m = airMassKastenYoungUnchecked(alt);
+        must(Math.abs(m - eq3) <= 1e-14 * eq3, () => `${alt}°: unchecked ${m}, Eq. 3 ${eq3}`);
       }),
       { numRuns: 5000, seed: 13 },
     );
@@ -358,7 +366,7 @@ describe('shadow union with bounding boxes equals the union without them', () =>
         }
         const plain = unionAreaInRectangle(0, 0, 2, 1.5, planes, m);
         const boxed = unionAreaInRectangle(0, 0, 2, 1.5, planes, m, boxes);
-        expect(Math.abs(plain - boxed)).toBeLessThanOrEqual(EQUAL * 3);
+        must(Math.abs(plain - boxed) <= EQUAL * 3, () => `without boxes ${plain}, with them ${boxed}`);
       }),
       { numRuns: 3000, seed: 11 },
     );
@@ -445,7 +453,8 @@ describe('closed-form shadow union equals the general convex clipper', () => {
           const sunAzimuth = 180 - gamma;
           const closed = sunlitFraction({ width, height }, shading, altitude, sunAzimuth, 180);
           // γ as the kernel forms it from the two azimuths (180 − (180 − γ) need not be γ exactly).
-          expect(Math.abs(closed - sunlitByClipping(width, height, shading, altitude, wrap180(180 - sunAzimuth)))).toBeLessThanOrEqual(EQUAL);
+          const clipped = sunlitByClipping(width, height, shading, altitude, wrap180(180 - sunAzimuth));
+          must(Math.abs(closed - clipped) <= EQUAL, () => `closed form ${closed}, clipper ${clipped}`);
         },
       ),
       { numRuns: 10000, seed: 12 },
@@ -460,13 +469,16 @@ describe('closed-form shadow union equals the general convex clipper', () => {
       revealDepth: 0.1,
     };
     let partial = 0;
+    const found = new Mismatches();
     for (let altitude = 0.5; altitude < 90; altitude += 1.5) {
       for (let gamma = -89.5; gamma < 90; gamma += 1.5) {
         const closed = sunlitFraction({ width: 2, height: 1.5 }, shading, altitude, 200 - gamma, 200);
-        expect(Math.abs(closed - sunlitByClipping(2, 1.5, shading, altitude, wrap180(200 - (200 - gamma))))).toBeLessThanOrEqual(EQUAL);
+        const clipped = sunlitByClipping(2, 1.5, shading, altitude, wrap180(200 - (200 - gamma)));
+        found.check(Math.abs(closed - clipped) <= EQUAL, () => `altitude ${altitude}°, γ ${gamma}°: closed form ${closed}, clipper ${clipped}`);
         if (closed > 0 && closed < 1) partial++;
       }
     }
+    expect(found.list).toEqual([]);
     expect(partial).toBeGreaterThan(1000);
   });
 });
@@ -477,12 +489,13 @@ describe('annual series hour by hour equals the checked functions at its own sun
     const s = annualSeries(spec);
     const w = prepareWindow(spec);
     let front = 0;
+    const found = new Mismatches();
     for (let i = 0; i < s.hours; i++) {
       const alt = s.sunAltitude[i];
       const az = s.sunAzimuth[i];
       const inFront = alt > 0 && s.incidence[i] < 90;
       const lit = inFront ? sunlitFraction({ width: spec.width, height: spec.height }, spec.shading, alt, az, spec.surfaceAzimuth) : 0;
-      expect(Math.abs(s.sunlitFraction[i] - lit)).toBeLessThanOrEqual(EQUAL);
+      found.check(Math.abs(s.sunlitFraction[i] - lit) <= EQUAL, () => `hour ${i}: sunlit fraction ${s.sunlitFraction[i]}, sunlitFraction ${lit}`);
       if (inFront) front++;
       const dark = s.dhi[i] === 0 && (s.dni[i] === 0 || !(alt > 0));
       if (dark) continue;
@@ -499,13 +512,12 @@ describe('annual series hour by hour equals the checked functions at its own sun
         shade: { ...w.shade, circumsolar: circumsolarShade(w, lit) },
       });
       const scale = s.dni[i] + s.dhi[i];
-      expect(closeTo(s.beam[i], p.beam, scale)).toBe(true);
-      expect(closeTo(s.sky[i], p.sky, scale)).toBe(true);
-      expect(closeTo(s.ground[i], p.ground, scale)).toBe(true);
-      expect(closeTo(s.skyUnshaded[i], p.skyUnshaded, scale)).toBe(true);
-      expect(closeTo(s.groundUnshaded[i], p.groundUnshaded, scale)).toBe(true);
-      expect(Math.abs(s.incidence[i] - p.incidence)).toBeLessThan(1e-9);
+      for (const key of ['beam', 'sky', 'ground', 'skyUnshaded', 'groundUnshaded'] as const) {
+        found.check(closeTo(s[key][i], p[key], scale), () => `hour ${i} ${key}: series ${s[key][i]}, planeIrradiance ${p[key]}`);
+      }
+      found.check(Math.abs(s.incidence[i] - p.incidence) < 1e-9, () => `hour ${i}: incidence ${s.incidence[i]}, planeIrradiance ${p.incidence}`);
     }
+    expect(found.list).toEqual([]);
     expect(front).toBeGreaterThan(2000);
   });
 
@@ -514,13 +526,17 @@ describe('annual series hour by hour equals the checked functions at its own sun
       const spec = { ...shadedSpec(), surfaceAzimuth };
       const s = annualSeries(spec);
       let behind = 0;
+      const found = new Mismatches();
       for (let i = 0; i < s.hours; i++) {
         const alt = s.sunAltitude[i];
         const az = s.sunAzimuth[i];
-        expect(Math.abs(s.profileAngle[i] - profileAngle(alt, az, surfaceAzimuth))).toBeLessThanOrEqual(1e-12 * 180);
-        expect(Math.abs(s.incidence[i] - incidenceAngle(alt, az, spec.surfaceTilt, surfaceAzimuth))).toBeLessThanOrEqual(1e-9);
+        const profile = profileAngle(alt, az, surfaceAzimuth);
+        const incidence = incidenceAngle(alt, az, spec.surfaceTilt, surfaceAzimuth);
+        found.check(Math.abs(s.profileAngle[i] - profile) <= 1e-12 * 180, () => `${surfaceAzimuth}° wall, hour ${i}: profile angle ${s.profileAngle[i]}, profileAngle ${profile}`);
+        found.check(Math.abs(s.incidence[i] - incidence) <= 1e-9, () => `${surfaceAzimuth}° wall, hour ${i}: incidence ${s.incidence[i]}, incidenceAngle ${incidence}`);
         if (Math.abs(s.profileAngle[i]) > 90) behind++;
       }
+      expect(found.list).toEqual([]);
       expect(behind).toBeGreaterThan(1000);
     }
   });
