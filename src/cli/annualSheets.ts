@@ -114,16 +114,20 @@ export function sheetRef(sheet: string): string {
 
 /**
  * Mean gain [W] for each month and hour of the day (hour ending 1…24, or instants 0…23), as the
- * month × hour formulas work it out: rows whose hour falls in the month and hour of day, summed, over the days of the month.
+ * month × hour formulas work it out: the rows with weather whose hour falls in the month and hour
+ * of day, summed, over their count (0 when none has weather).
  */
 export function monthHourMeans(series: AnnualSeries): number[][] {
   const sums = Array.from({ length: 12 }, () => new Array<number>(24).fill(0));
+  const counts = Array.from({ length: 12 }, () => new Array<number>(24).fill(0));
   for (let i = 0; i < series.hours; i++) {
+    if (series.missing[i] === 1) continue;
     const inside = series.timeConvention === 'instant' ? 1 / 48 : -1 / 48; // a point inside the row's hour
     const mid = new Date(Math.round((series.stampSerial[i] + inside - 25_569) * 86_400_000));
     sums[mid.getUTCMonth()][mid.getUTCHours()] += series.gain[i];
+    counts[mid.getUTCMonth()][mid.getUTCHours()]++;
   }
-  return sums.map((row, m) => row.map((x) => x / new Date(Date.UTC(series.year, m + 1, 0)).getUTCDate()));
+  return sums.map((row, m) => row.map((x, h) => x / Math.max(1, counts[m][h])));
 }
 
 /**

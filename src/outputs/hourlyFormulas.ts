@@ -50,7 +50,7 @@ function monthMask(ref: ColumnRef, year: number, month: number): string {
  * the product as an array without an array formula (MAXIFS would need Excel 2019).
  */
 export function monthlyPeakFormula(ref: ColumnRef, key: HourlyKey, year: number, month: number): string {
-  return `SUMPRODUCT(MAX(${monthMask(ref, year, month)}*(${ref('missing')}=0)*${ref(key)}))`;
+  return `SUMPRODUCT(MAX(${monthMask(ref, year, month)}*${withWeather(ref)}*${ref(key)}))`;
 }
 
 /**
@@ -61,7 +61,34 @@ export function monthlyPeakFormula(ref: ColumnRef, key: HourlyKey, year: number,
  */
 export function monthlyPeakStampFormula(ref: ColumnRef, key: HourlyKey, year: number, month: number, peakCell: string): string {
   const after = `DATE(${year + 1},1,2)`;
-  return `IF(${peakCell}>0,${after}-SUMPRODUCT(MAX(${monthMask(ref, year, month)}*(${ref('missing')}=0)*(${ref(key)}=${peakCell})*(${after}-${ref('stampSerial')}))),"")`;
+  return `IF(${peakCell}>0,${after}-SUMPRODUCT(MAX(${monthMask(ref, year, month)}*${withWeather(ref)}*(${ref(key)}=${peakCell})*(${after}-${ref('stampSerial')}))),"")`;
+}
+
+/** 1 for a row with weather, 0 for an hour without (the worksheet functions give #N/A there), as an array term. */
+function withWeather(ref: ColumnRef): string {
+  return `(${ref('missing')}=0)`;
+}
+
+/**
+ * The year's largest value of column `key` over the rows that have weather, and 0 when none is
+ * above 0 — as the core counts a year's peaks (the annual summary's peak gain, the peak cooling
+ * load): an hour without weather, which SOLARGAINYEAR gives as #N/A, never counts, though the
+ * table holds a number there (0 gain; a cooling load made of the radiant tail of earlier hours).
+ */
+export function yearPeakFormula(ref: ColumnRef, key: HourlyKey): string {
+  return `MAX(0,SUMPRODUCT(MAX(${withWeather(ref)}*${ref(key)})))`;
+}
+
+/**
+ * The stamp of the first row with weather whose column `key` equals the year's peak
+ * ({@link yearPeakFormula}, written out so that the cell stands alone), blank when the peak is 0
+ * (the core names no peak hour then). The earliest stamp is found as a MAX of (a date after the
+ * last row − stamp), so that the rows left out, at 0, never win.
+ */
+export function yearPeakStampFormula(ref: ColumnRef, key: HourlyKey): string {
+  const peak = yearPeakFormula(ref, key);
+  const after = `(MAX(${ref('stampSerial')})+1)`;
+  return `IF(${peak}>0,${after}-SUMPRODUCT(MAX(${withWeather(ref)}*(${ref(key)}=${peak})*(${after}-${ref('stampSerial')}))),"")`;
 }
 
 /** Solar gain of month `month` (1…12) of `year` [kWh]. */
@@ -71,16 +98,20 @@ export function monthlyGainFormula(ref: ColumnRef, year: number, month: number):
 
 /**
  * Mean solar gain [W] in the day's `hourEnding`-th hour (1…24: the hour ending then, or for
- * `instant` rows the instant an hour earlier, 0:00…23:00) over the days of month `month`: the rows
- * whose hour falls in that month and that hour of the day, summed, over the days of the month.
+ * `instant` rows the instant an hour earlier, 0:00…23:00) over the days of month `month` that have
+ * weather in that hour: the rows whose hour falls in that month and that hour of the day and that
+ * have weather, summed, over their count (0 when none has weather). Hours without weather are left
+ * out, as the worksheet functions leave them (#N/A), rather than counted as hours without gain.
+ * `year` is kept for the callers' sake (the month of a row is read from its stamp).
  */
-export function monthHourMeanFormula(ref: ColumnRef, year: number, month: number, hourEnding: number): string {
+export function monthHourMeanFormula(ref: ColumnRef, _year: number, month: number, hourEnding: number): string {
   // A point inside the row's hour: its middle for hour-ending rows, just after the instant for instant rows.
   const mid = ref.convention === 'instant' ? `(${ref('stampSerial')}+1/48)` : `(${ref('stampSerial')}-1/48)`;
-  return `SUMPRODUCT((MONTH(${mid})=${month})*(HOUR(${mid})=${hourEnding - 1})*${ref('gain')})/DAY(DATE(${year},${month + 1},0))`;
+  const rows = `(MONTH(${mid})=${month})*(HOUR(${mid})=${hourEnding - 1})*${withWeather(ref)}`;
+  return `SUMPRODUCT(${rows}*${ref('gain')})/MAX(1,SUMPRODUCT(${rows}))`;
 }
 
-/** The year's figures as formulas over the table, by the core summary's definitions. */
+/** The year's figures as formulas over the table, by the core summary's definitions (hours without weather skipped). */
 export function yearFigureFormulas(ref: ColumnRef): {
   peakW: string;
   peakStamp: string;
@@ -88,10 +119,9 @@ export function yearFigureFormulas(ref: ColumnRef): {
   meanSunlitFraction: string;
   missingHours: string;
 } {
-  const g = ref('gain');
   return {
-    peakW: `MAX(${g})`,
-    peakStamp: `INDEX(${ref('stampSerial')},MATCH(MAX(${g}),${g},0))`,
+    peakW: yearPeakFormula(ref, 'gain'),
+    peakStamp: yearPeakStampFormula(ref, 'gain'),
     sunlitHours: `COUNTIFS(${ref('beam')},">0",${ref('sunlitFraction')},">0",${ref('missing')},0)`,
     meanSunlitFraction: `IFERROR(AVERAGEIFS(${ref('sunlitFraction')},${ref('sunAltitude')},">0",${ref('incidence')},"<90"),0)`,
     missingHours: `SUM(${ref('missing')})`,

@@ -14,7 +14,7 @@ import type { DateSystem, TimeConvention } from '../core/time';
 import { rowsInDateSystem } from './dateSystem';
 import { escapeFormulaText } from '../io/textCells';
 import { HOURLY_COLUMNS, type HourlyData, type HourlyExtras, type HourlyKey, extrasOf, hourlyColumnsFor } from '../outputs/hourlyColumns';
-import { type ColumnRef, monthHourMeanFormula, monthlyGainFormula, tableColumnRef, yearFigureFormulas } from '../outputs/hourlyFormulas';
+import { type ColumnRef, monthHourMeanFormula, monthlyGainFormula, tableColumnRef, yearFigureFormulas, yearPeakFormula, yearPeakStampFormula } from '../outputs/hourlyFormulas';
 import { PALETTE, hexColour } from '../outputs/palette';
 import { LOAD_WORDS } from '../registry/glossary';
 import { DEFAULT_BLOCK_ROWS, cellAddress, columnLetters, rangeAddress, roundForSheet, rowBlocks } from './blocks';
@@ -141,8 +141,8 @@ export function keyFigureRows(ref: ColumnRef, fig: Pick<YearFigures, 'glassArea'
   const f = yearFigureFormulas(ref);
   const load = withLoad
     ? [
-        [LOAD_WORDS.peakLoad, `=MAX(${ref('load')})`],
-        [ref.convention === 'instant' ? LOAD_WORDS.peakLoadAtInstant : LOAD_WORDS.peakLoadAtHourEnding, `=INDEX(${ref('stampSerial')},MATCH(MAX(${ref('load')}),${ref('load')},0))`],
+        [LOAD_WORDS.peakLoad, `=${yearPeakFormula(ref, 'load')}`],
+        [ref.convention === 'instant' ? LOAD_WORDS.peakLoadAtInstant : LOAD_WORDS.peakLoadAtHourEnding, `=${yearPeakStampFormula(ref, 'load')}`],
       ]
     : [];
   return [

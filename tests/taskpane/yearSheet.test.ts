@@ -79,12 +79,12 @@ describe('the hourly year sheet', () => {
       ['Beam cut by shading (%)', 31.2],
       ['Diffuse cut by shading (%)', 18.8],
     ]);
-    expect(host.read('East 1 hourly', `${col(0)}20:${col(1)}20`)).toEqual([['Peak gain (W)', '=MAX(East_1_hourly[[Solar gain (W)]])']]);
+    expect(host.read('East 1 hourly', `${col(0)}20:${col(1)}20`)).toEqual([['Peak gain (W)', '=MAX(0,SUMPRODUCT(MAX((East_1_hourly[[Weather missing (1 = yes)]]=0)*East_1_hourly[[Solar gain (W)]])))']]);
     const block = host.read('East 1 hourly', `${columnLetters(HEAT_COLUMN)}5:${columnLetters(HEAT_COLUMN + 24)}17`);
     expect(block[0]).toEqual(['Month', ...Array.from({ length: 24 }, (_, h) => String(h + 1))]);
     expect(block[7][0]).toBe('Jul');
     expect(block[7][14]).toBe(
-      '=SUMPRODUCT((MONTH((East_1_hourly[[Hour ending (local standard time)]]-1/48))=7)*(HOUR((East_1_hourly[[Hour ending (local standard time)]]-1/48))=13)*East_1_hourly[[Solar gain (W)]])/DAY(DATE(2025,8,0))',
+      '=SUMPRODUCT((MONTH((East_1_hourly[[Hour ending (local standard time)]]-1/48))=7)*(HOUR((East_1_hourly[[Hour ending (local standard time)]]-1/48))=13)*(East_1_hourly[[Weather missing (1 = yes)]]=0)*East_1_hourly[[Solar gain (W)]])/MAX(1,SUMPRODUCT((MONTH((East_1_hourly[[Hour ending (local standard time)]]-1/48))=7)*(HOUR((East_1_hourly[[Hour ending (local standard time)]]-1/48))=13)*(East_1_hourly[[Weather missing (1 = yes)]]=0)))',
     );
     const cfs = host.conditionalFormats('East 1 hourly');
     expect(cfs).toEqual([expect.objectContaining({ type: 'ColorScale', address: `${columnLetters(HEAT_COLUMN + 1)}6:${columnLetters(HEAT_COLUMN + 24)}17` })]);
