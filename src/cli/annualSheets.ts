@@ -13,7 +13,7 @@ import { LOAD_WORDS } from '../registry/glossary';
 import { PALETTE } from '../outputs/palette';
 import { csvLine, formatFixed } from './csv';
 import { type SheetChart, cellRef, columnRef } from './xlsxCharts';
-import { type ExcelJS, NUMBER_FORMATS, type TableCell, type TablePlacement, addColourScale, addDataTable, addSheetHeading, address, freezeAt, serialToCellDate, setFormula, setLabel, styleHeader } from './workbook';
+import { type ExcelJS, NUMBER_FORMATS, type TableCell, type TablePlacement, addColourScale, addDataTable, addSheetHeading, address, freezeAt, serialToCellDate, setFormula, setLabel, sheetSerial, styleHeader } from './workbook';
 
 /** Header of the stamp column (the hour's END, local standard time). */
 export const STAMP_HEADER = hourlyColumn('stampSerial').header;
@@ -220,7 +220,7 @@ export function addMonthlySheet(
       if (loadPeaks) {
         const p = loadPeaks[k];
         setFormula(ws, address(row, 4), monthlyPeakFormula(ref, 'load', hourly.series.year, k + 1), p.peakW, NUMBER_FORMATS.watts);
-        setFormula(ws, address(row, 5), monthlyPeakStampFormula(ref, 'load', hourly.series.year, k + 1, address(row, 4)), p.stamp === undefined ? '' : p.stamp, NUMBER_FORMATS.dateTime);
+        setFormula(ws, address(row, 5), monthlyPeakStampFormula(ref, 'load', hourly.series.year, k + 1, address(row, 4)), p.stamp === undefined ? '' : sheetSerial(ws, p.stamp), NUMBER_FORMATS.dateTime);
         load.push({ cell: `${sheet}!${address(row, 4)}`, expected: p.peakW, stampCell: `${sheet}!${address(row, 5)}`, expectedStamp: p.stamp });
       }
     });
@@ -238,7 +238,8 @@ export function addMonthlySheet(
     const top1 = loadPeaks.reduce((best, p, k) => (p.peakW > loadPeaks[best].peakW ? k : best), 0);
     const peaks = t.bodyRange(loadHeader);
     setFormula(ws, address(labelRow, 4), `MAX(${peaks})`, loadPeaks[top1].peakW, NUMBER_FORMATS.watts);
-    setFormula(ws, address(labelRow, 5), `INDEX(${t.bodyRange(loadAtHeader)},MATCH(${address(labelRow, 4)},${peaks},0))`, loadPeaks[top1].stamp ?? '', NUMBER_FORMATS.dateTime);
+    const yearStamp = loadPeaks[top1].stamp;
+    setFormula(ws, address(labelRow, 5), `INDEX(${t.bodyRange(loadAtHeader)},MATCH(${address(labelRow, 4)},${peaks},0))`, yearStamp === undefined ? '' : sheetSerial(ws, yearStamp), NUMBER_FORMATS.dateTime);
     cells.load.year = { cell: `${sheet}!${address(labelRow, 4)}`, expected: loadPeaks[top1].peakW, stampCell: `${sheet}!${address(labelRow, 5)}` };
   }
   setLabel(ws, address(labelRow + 1, 1), 'Largest month');

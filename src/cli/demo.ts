@@ -11,22 +11,22 @@ import type { Shading } from '../core/shading';
 import { DEMO_BUILDING, DEMO_HOURLY_TAG, DEMO_YEAR, type DemoWindow, SHADING_OPTIONS, demoWindows } from '../demo/building';
 import { EXAMPLE_SITES, findExampleSite } from '../demo/sites';
 import { CAUTION } from '../outputs/caution';
-import { civilToSerial } from '../core/time';
+import { DATE_1904_OFFSET, type DateSystem, civilToSerial } from '../core/time';
 import { applyFunction } from '../registry/evaluate';
 import { NAMESPACE, findFunction } from '../registry';
 import { GLOSSARY } from '../registry/glossary';
 import type { Output } from './call';
 import { MONTHS, addHeatMapSheet, addHourlySheet, addMonthlySheet } from './annualSheets';
 import { checkOutput, ensureFolder } from './atomicWrite';
-import { type Flags, parseFlags } from './flags';
-import { type DemoFormulaSet, addFormulaSheet, demoFormulas, storedFormula } from './demoFormulas';
+import { DATE_SYSTEM_FLAG, type Flags, dateSystemFlag, dateSystemHelp, parseFlags } from './flags';
+import { type DemoFormulaSet, addFormulaSheet, clockCells, demoFormulas, storedFormula } from './demoFormulas';
 import { ProgressBar } from './progress';
 import { type SummaryTotals, type WindowResult, addSummaryTable, summaryChart, windowResult } from './schedule';
 import { type SheetChart, cellRef, columnRef } from './xlsxCharts';
 import { PALETTE } from '../outputs/palette';
 import { type ExcelJS, NUMBER_FORMATS, type TableCell, addDataTable, addSheetHeading, address, columnLetter, fillContentsSheet, freezeAt, newWorkbook, saveWorkbook, serialToCellDate, setFormula, setLabel, styleHeader } from './workbook';
 
-export const DEMO_HELP = `usage: sunpane demo [--out DIR]
+export const DEMO_HELP = `usage: sunpane demo [--out DIR] [--${DATE_SYSTEM_FLAG} 1904]
 
 Writes DIR/sunpane-demo.xlsx (default DIR: out/demo) for an invented building, ${DEMO_BUILDING.name},
 on two example sites (invented names, rounded real coordinates; one in each hemisphere) under a
@@ -40,13 +40,14 @@ Formulas (example SUNPANE.* worksheet formulas with cached results; they recalcu
 once the add-in is installed).
 
   --out DIR   output folder (created if needed)
+${dateSystemHelp(14)}
   --force     replace the workbook if it exists (a read-only one is never replaced)
   --help      this text
 
 Every number in the demo building is invented; results are estimates by published methods.
 Exit codes: 0 done, 1 bad input (e.g. an unwritable folder), 2 wrong usage.`;
 
-const DEMO_FLAGS = { out: true, force: false, help: false } as const;
+const DEMO_FLAGS = { out: true, [DATE_SYSTEM_FLAG]: true, force: false, help: false } as const;
 
 /** Name of the demo workbook file. */
 export const DEMO_FILE = 'sunpane-demo.xlsx';
@@ -81,7 +82,7 @@ function optionWindows(windows: readonly DemoWindow[]): DemoWindow[] {
 }
 
 /** Works out every window's year, the option comparison and the example formulas. */
-export function computeDemo(onStep: () => void = () => undefined): DemoResults {
+export function computeDemo(onStep: () => void = () => undefined, dateSystem: DateSystem = 1900): DemoResults {
   const schedule = demoWindows();
   const windows = schedule.map((w) => {
     validateWindowSpec(w.spec);
@@ -98,7 +99,7 @@ export function computeDemo(onStep: () => void = () => undefined): DemoResults {
       onStep();
     }
   }
-  return { windows, options, formulas: demoFormulas(schedule.find((w) => w.tag === DEMO_HOURLY_TAG) ?? schedule[0]) };
+  return { windows, options, formulas: demoFormulas(schedule.find((w) => w.tag === DEMO_HOURLY_TAG) ?? schedule[0], dateSystem) };
 }
 
 /** Steps {@link computeDemo} reports (for the progress bar). */
@@ -289,7 +290,7 @@ function fieldWidth(k: number, header: string, rows: readonly TableCell[][]): nu
  * with the header row — `SUNPANE.SOLARGAIN(VSTACK(header, row), hour)` — cached by our core.
  * @returns the formula cells with the values they hold (for the tests)
  */
-function addSchedule(wb: ExcelJS.Workbook, results: DemoResults): { cell: string; formula: string; expected: number }[] {
+function addSchedule(wb: ExcelJS.Workbook, results: DemoResults, dateSystem: DateSystem): { cell: string; formula: string; expected: number }[] {
   const ws = wb.addWorksheet('Schedule');
   const top = addSheetHeading(ws, `${DEMO_BUILDING.name}: window schedule`, [
     'Each row is one window, described by the window fields (the same names as the functions, the window file and the pane). The gain column calls SUNPANE.SOLARGAIN with the header row stacked on its own row; results were worked out by Sunpane when the file was written.',
@@ -299,6 +300,15 @@ function addSchedule(wb: ExcelJS.Workbook, results: DemoResults): { cell: string
   hourCell.value = serialToCellDate(scheduleHour());
   hourCell.numFmt = NUMBER_FORMATS.dateTime;
   const hourRef = `$${address(top, HOUR_COLUMN).replace(/\d+$/, '')}$${top}`;
+  // In a 1904 workbook, the clock range beside the hour (Date system = 1904), SOLARGAIN's last argument.
+  const clock = dateSystem === 1904 ? clockCells(1904) : undefined;
+  let clockArgs = '';
+  if (clock) {
+    ws.getCell(top, HOUR_COLUMN + 2).value = clock[0][0];
+    ws.getCell(top, HOUR_COLUMN + 3).value = clock[0][1];
+    clockArgs = `,,,$${columnLetter(HOUR_COLUMN + 2)}$${top}:$${columnLetter(HOUR_COLUMN + 3)}$${top}`;
+  }
+  const cellHour = clock ? scheduleHour() - DATE_1904_OFFSET : scheduleHour();
   const header = scheduleHeader();
   const fieldCount = header.length;
   const rows: TableCell[][] = results.windows.map((w) => [...scheduleRowOf(w), w.room, glassArea(w.spec.width, w.spec.height, w.spec.frameFraction), null]);
@@ -322,9 +332,9 @@ function addSchedule(wb: ExcelJS.Workbook, results: DemoResults): { cell: string
   results.windows.forEach((w, k) => {
     const row = t.headerRow + 1 + k;
     const cells = scheduleRowOf(w);
-    const value = applyFunction(fn, [[header, cells], scheduleHour()])[0][0];
+    const value = applyFunction(fn, clock ? [[header, cells], cellHour, undefined, undefined, clock] : [[header, cells], cellHour])[0][0];
     if (typeof value !== 'number') throw new Error(`the demo's schedule row of ${w.tag} was refused: ${String((value as Error).message ?? value)}`);
-    const formula = `${NAMESPACE}.SOLARGAIN(_xlfn.VSTACK(${headerRef},$A${row}:$${lastField}${row}),${hourRef})`;
+    const formula = `${NAMESPACE}.SOLARGAIN(_xlfn.VSTACK(${headerRef},$A${row}:$${lastField}${row}),${hourRef}${clockArgs})`;
     const cell = address(row, t.columnOf(gainHeader));
     setFormula(ws, cell, storedFormula(formula), value, NUMBER_FORMATS.watts);
     out.push({ cell: `Schedule!${cell}`, formula, expected: value });
@@ -437,10 +447,12 @@ function addOptions(wb: ExcelJS.Workbook, results: DemoResults): { checks: { cel
 
 /** Builds the whole demo workbook; returns it with the formula cells a spreadsheet must reproduce. */
 export function buildDemoWorkbook(results: DemoResults, onHour?: () => void): { workbook: ExcelJS.Workbook; checks: DemoCheckCells; charts: SheetChart[]; schedule: { cell: string; formula: string; expected: number }[] } {
-  const wb = newWorkbook(`Sunpane demo: ${DEMO_BUILDING.name}`);
+  // The workbook's date system is the one the example formulas were worked out in (computeDemo).
+  const dateSystem = results.formulas.dateSystem;
+  const wb = newWorkbook(`Sunpane demo: ${DEMO_BUILDING.name}`, dateSystem);
   const contents = wb.addWorksheet('Contents');
   const overview = addOverview(wb, results);
-  const schedule = addSchedule(wb, results);
+  const schedule = addSchedule(wb, results, dateSystem);
   const summarySheet = wb.addWorksheet('Summary');
   const summaryTop = addSheetHeading(summarySheet, `${DEMO_BUILDING.name}: each window's year, clear-sky ${DEMO_YEAR}`);
   const summary = addSummaryTable(summarySheet, 'WindowSummary', summaryTop, results.windows);
@@ -487,6 +499,7 @@ export async function demoCommand(argv: readonly string[], io: Output): Promise<
     io.out(DEMO_HELP);
     return 0;
   }
+  const dateSystem = dateSystemFlag(flags, 'xlsx');
   const dir = outDir(flags);
   await ensureFolder(dir);
   const force = { force: flags.has('force') };
@@ -495,7 +508,7 @@ export async function demoCommand(argv: readonly string[], io: Output): Promise<
   const bar = new ProgressBar('demo windows', demoSteps());
   let results: DemoResults;
   try {
-    results = computeDemo(() => bar.tick());
+    results = computeDemo(() => bar.tick(), dateSystem);
   } catch (err) {
     if (err instanceof SunpaneError) throw new Error(`internal error: the demo data was refused: ${err.message}`);
     throw err;

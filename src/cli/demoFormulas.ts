@@ -11,13 +11,13 @@
  * renamed function or parameter makes the demo fail loudly rather than write a dead formula.
  */
 import { SunpaneError } from '../core/common';
-import { civilToSerial } from '../core/time';
+import { DATE_1904_OFFSET, type DateSystem, civilToSerial } from '../core/time';
 import type { DemoWindow } from '../demo/building';
 import { applyFunction } from '../registry/evaluate';
 import { NAMESPACE, findFunction } from '../registry';
 import { GLOSSARY, type GlossaryEntry } from '../registry/glossary';
 import { NotAvailable, type RawArg, type Scalar } from '../registry/types';
-import { type ExcelJS, NUMBER_FORMATS, addDataTable, addSheetHeading, address, freezeAt, serialToCellDate, setFormula, styleHeader } from './workbook';
+import { type ExcelJS, NUMBER_FORMATS, addDataTable, addSheetHeading, address, freezeAt, serialToCellDate, setFormula, sheetSerial, styleHeader } from './workbook';
 
 /** One field of the demo window block. */
 export interface DemoInput {
@@ -50,10 +50,15 @@ export interface DemoFormulaSet {
   hour: number;
   inputs: DemoInput[];
   formulas: DemoFormula[];
+  /**
+   * The workbook's date system: in 1904 the sheet gets a clock range (Date system = 1904) that every
+   * function reading or giving a date-time takes as its `clock`, so the 1904 serials read right.
+   */
+  dateSystem: DateSystem;
 }
 
 /** A formula argument: a window field's value cell, the whole window block, the hour, the mid-hour instant, or an earlier formula's result. */
-type ArgSource = { input: string } | { window: true } | { hour: true } | { midHour: true } | { formula: string };
+type ArgSource = { input: string } | { window: true } | { hour: true } | { midHour: true } | { formula: string } | { clock: true };
 
 interface FormulaPlan {
   label: string;
@@ -76,7 +81,14 @@ export function storedFormula(text: string): string {
 /** Rows of the sheet (1-based), under the title, its three lines and the caution: the design hour, the mid-hour instant, the block's header. */
 const HOUR_ROW = 7;
 const MID_ROW = 8;
+/** The clock range of a 1904 workbook (label in A, 1904 in B). */
+const CLOCK_ROW = 9;
 const BLOCK_HEADER = 10;
+
+/** A clock range that says the workbook's date system (the glossary's field, as a function's `clock` reads it). */
+export function clockCells(dateSystem: DateSystem): [string, number][] {
+  return [[GLOSSARY.dateSystem.label, dateSystem]];
+}
 
 /** The window fields the block gives, from the demo window (the invented clear sky by τb and τd). */
 export function demoInputs(window: DemoWindow): DemoInput[] {
@@ -151,17 +163,21 @@ function formulaTop(inputs: number): number {
  * Works out the example formulas: text with cell references, and cached results by applyFunction.
  * @throws Error when a planned function or parameter is not in the registry (renamed or removed)
  */
-export function demoFormulas(window: DemoWindow): DemoFormulaSet {
+export function demoFormulas(window: DemoWindow, dateSystem: DateSystem = 1900): DemoFormulaSet {
   const inputs = demoInputs(window);
   const hour = demoHour(window);
+  // The date-times as the workbook's cells hold them (1462 days less in a 1904 workbook).
+  const cellHour = dateSystem === 1904 ? hour - DATE_1904_OFFSET : hour;
   const inputIndex = new Map(inputs.map((x, i) => [x.key, i]));
   const block = `$A$${inputRow(0)}:$B$${inputRow(inputs.length - 1)}`;
   const blockCells: Scalar[][] = inputs.map((x) => [x.label, x.value]);
   const out: DemoFormula[] = [];
   const resultRow = (k: number) => formulaTop(inputs.length) + 1 + k;
-  for (const plan of PLANS) {
-    const fn = findFunction(plan.name);
-    if (!fn) throw new Error(`demo formula "${plan.label}": no worksheet function ${plan.name} in the registry`);
+  for (const planned of PLANS) {
+    const fn = findFunction(planned.name);
+    if (!fn) throw new Error(`demo formula "${planned.label}": no worksheet function ${planned.name} in the registry`);
+    const readsTime = Object.values(planned.args).some((a) => 'hour' in a || 'midHour' in a);
+    const plan: FormulaPlan = dateSystem === 1904 && readsTime ? { ...planned, args: { ...planned.args, clock: { clock: true } } } : planned;
     for (const p of Object.keys(plan.args)) {
       if (!fn.params.some((q) => q.name === p)) throw new Error(`demo formula "${plan.label}": ${plan.name} has no parameter ${p}`);
     }
@@ -181,10 +197,13 @@ export function demoFormulas(window: DemoWindow): DemoFormulaSet {
         raw.push(blockCells);
       } else if ('hour' in src) {
         refs.push(`$B$${HOUR_ROW}`);
-        raw.push(hour);
+        raw.push(cellHour);
       } else if ('midHour' in src) {
         refs.push(`$B$${MID_ROW}`);
-        raw.push(hour - 1 / 48);
+        raw.push(cellHour - 1 / 48);
+      } else if ('clock' in src) {
+        refs.push(`$A$${CLOCK_ROW}:$B$${CLOCK_ROW}`);
+        raw.push(clockCells(dateSystem));
       } else if ('input' in src) {
         const i = inputIndex.get(src.input);
         if (i === undefined) throw new Error(`demo formula "${plan.label}": no field ${src.input} in the window block`);
@@ -204,7 +223,7 @@ export function demoFormulas(window: DemoWindow): DemoFormulaSet {
     const result = cell instanceof NotAvailable ? '#N/A' : (cell as number | string);
     out.push({ label: plan.label, name: fn.name, formula: `${NAMESPACE}.${fn.name}(${refs.join(',')})`, result, unit: plan.unit, numFmt: plan.numFmt, rawArgs: raw });
   }
-  return { hour, inputs, formulas: out };
+  return { hour, inputs, formulas: out, dateSystem };
 }
 
 /**
@@ -226,7 +245,14 @@ export function addFormulaSheet(wb: ExcelJS.Workbook, sheet: string, set: DemoFo
   hourCell.value = serialToCellDate(set.hour);
   hourCell.numFmt = NUMBER_FORMATS.dateTime;
   ws.getCell(MID_ROW, 1).value = 'Sun taken at (mid-hour, time convention hourEnding)';
-  setFormula(ws, `B${MID_ROW}`, `B${HOUR_ROW}-1/48`, set.hour - 1 / 48, NUMBER_FORMATS.dateTime);
+  setFormula(ws, `B${MID_ROW}`, `B${HOUR_ROW}-1/48`, sheetSerial(ws, set.hour - 1 / 48), NUMBER_FORMATS.dateTime);
+  if (set.dateSystem === 1904) {
+    // The clock range the date-time functions take: this workbook counts dates in the 1904 system.
+    const [[label, value]] = clockCells(1904);
+    ws.getCell(CLOCK_ROW, 1).value = label;
+    ws.getCell(CLOCK_ROW, 2).value = value;
+    ws.getCell(CLOCK_ROW, 3).value = "the workbook's clock: the functions' last argument";
+  }
   ws.getCell(BLOCK_HEADER, 1).value = 'Window field';
   ws.getCell(BLOCK_HEADER, 2).value = 'Value';
   ws.getCell(BLOCK_HEADER, 3).value = 'Unit';
@@ -256,5 +282,5 @@ export function addFormulaSheet(wb: ExcelJS.Workbook, sheet: string, set: DemoFo
     else ws.getCell(cell).value = f.result;
   });
   freezeAt(ws, BLOCK_HEADER + 1);
-  return [{ cell: `${sheet}!B${MID_ROW}`, expected: set.hour - 1 / 48 }];
+  return [{ cell: `${sheet}!B${MID_ROW}`, expected: sheetSerial(ws, set.hour - 1 / 48) }];
 }

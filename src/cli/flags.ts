@@ -2,6 +2,8 @@
  * Reading `--name value` / `--name=value` flags of the table, schedule and demo commands. Unknown
  * flags, missing values and stray arguments are usage errors (exit code 2).
  */
+import { DATE_SYSTEM_WORDS, type DateSystem } from '../core/time';
+import { GLOSSARY } from '../registry/glossary';
 import { CliUsageError } from './cliError';
 
 /** The flags a command takes: `true` for flags with a value, `false` for switches. */
@@ -46,6 +48,39 @@ export function requireFlag(flags: Flags, name: string, what: string): string {
   const v = flags.get(name);
   if (v === undefined || v.trim() === '') throw new CliUsageError(`--${name} ${what} is required`);
   return v;
+}
+
+/** The flag that names the written workbook's date system (the glossary's dateSystem, its values). */
+export const DATE_SYSTEM_FLAG = 'date-system';
+
+/**
+ * The help lines of {@link DATE_SYSTEM_FLAG}, the same words for every command that writes a
+ * workbook; `column` is where the command's help puts its descriptions.
+ */
+export function dateSystemHelp(column: number): string {
+  const pad = ' '.repeat(column);
+  return [
+    `  --${DATE_SYSTEM_FLAG} ${GLOSSARY.dateSystem.choices!.join('|')}`,
+    `${pad}the workbook's date system (glossary field ${GLOSSARY.dateSystem.name}; default ${GLOSSARY.dateSystem.default}): 1904 writes`,
+    `${pad}it in Excel's 1904 date system (serial 0 = 1 January 1904), every date-time`,
+    `${pad}the same on screen; .xlsx only (a CSV's date-times are text)`,
+  ].join('\n');
+}
+
+/**
+ * The date system asked for with `--date-system` (1900 when left out).
+ * @param kind - the output's kind: a CSV writes date-times as ISO 8601 text, the same in both
+ *   systems, so 1904 is refused there rather than quietly left unused
+ * @throws CliUsageError naming the flag, the value and the allowed values
+ */
+export function dateSystemFlag(flags: Flags, kind: string): DateSystem {
+  const v = flags.get(DATE_SYSTEM_FLAG);
+  if (v === undefined) return 1900;
+  const choices = GLOSSARY.dateSystem.choices!;
+  if (!choices.includes(v.trim())) throw new CliUsageError(`--${DATE_SYSTEM_FLAG} ${JSON.stringify(v)} is not allowed: ${DATE_SYSTEM_WORDS} (allowed: ${choices.join(', ')})`);
+  const system = Number(v.trim()) as DateSystem;
+  if (system === 1904 && kind !== 'xlsx') throw new CliUsageError(`--${DATE_SYSTEM_FLAG} 1904 applies to a workbook (.xlsx): a .${kind} file writes date-times as ISO 8601 text, read the same in both date systems (leave the flag out)`);
+  return system;
 }
 
 /** The output kind from a file name's extension. */

@@ -16,7 +16,7 @@ import { checkOutput, describeFsError } from './atomicWrite';
 import { escapeFormulaText } from '../io/textCells';
 import { CliInputError } from './cliError';
 import { parseCsv } from './csv';
-import { outputKind, parseFlags, requireFlag } from './flags';
+import { DATE_SYSTEM_FLAG, dateSystemFlag, dateSystemHelp, outputKind, parseFlags, requireFlag } from './flags';
 import { ProgressBar } from './progress';
 import { LOAD_HEADERS, SUMMARY_HEADERS, type WindowResult, csvSummaryWriter, extraCells, summaryExtrasOf, summaryFormats, summaryHeaders, xlsxSummaryWriter } from './scheduleOutput';
 import { WEATHER_FLAGS, checkWeatherTable, readWeatherTable, weatherRequest } from './weatherCsv';
@@ -33,9 +33,9 @@ import { type MatchedHeaders, type ScheduleColumn, SCHEDULE_COLUMNS, columnForHe
  */
 export const STREAM_WORKBOOK_ABOVE = 1000;
 
-const SCHEDULE_FLAGS = { in: true, ...WEATHER_FLAGS, out: true, force: false, help: false } as const;
+const SCHEDULE_FLAGS = { in: true, ...WEATHER_FLAGS, out: true, [DATE_SYSTEM_FLAG]: true, force: false, help: false } as const;
 
-export const SCHEDULE_HELP = `usage: sunpane schedule --in FILE.csv|FILE.xlsx [--weather FILE.csv (--dni COL --dhi COL | --ghi COL) ...] --out FILE.xlsx|FILE.csv
+export const SCHEDULE_HELP = `usage: sunpane schedule --in FILE.csv|FILE.xlsx [--weather FILE.csv (--dni COL --dhi COL | --ghi COL) ...] --out FILE.xlsx|FILE.csv [--${DATE_SYSTEM_FLAG} 1904]
 
 Works out each window's year and writes one summary row per window: annual and monthly gain
 [kWh], peak hour [W] and when, sunlit hours, mean sunlit fraction, missing hours.
@@ -47,6 +47,7 @@ Works out each window's year and writes one summary row per window: annual and m
                  --max-unusable), checked for each window's year and site; without it each row
                  needs a clear sky (Linke turbidity, or both optical depths) or an example site
   --out FILE     .csv or .xlsx (a table with SUM/MAX totals)
+${dateSystemHelp(17)}
   --force        replace FILE if it exists (a read-only file is never replaced)
   --help         this text
 
@@ -299,6 +300,7 @@ export async function scheduleCommand(argv: readonly string[], io: Output): Prom
   const input = requireFlag(flags, 'in', 'FILE.csv|FILE.xlsx (the window schedule)');
   const out = requireFlag(flags, 'out', 'FILE.xlsx|FILE.csv (where to write)');
   const kind = outputKind(out, ['csv', 'xlsx']);
+  const dateSystem = dateSystemFlag(flags, kind);
   const force = { force: flags.has('force') };
   checkOutput(out, force);
   const inKind = /\.xlsx$/i.test(input) ? 'xlsx' : 'csv';
@@ -348,7 +350,7 @@ export async function scheduleCommand(argv: readonly string[], io: Output): Prom
   const bar = new ProgressBar('windows', specs.length);
   const stream = kind === 'csv' || specs.length > STREAM_WORKBOOK_ABOVE;
   const extras = summaryExtrasOf(specs.map((s) => s.spec));
-  const writer = !stream ? undefined : kind === 'csv' ? csvSummaryWriter(out, force, extras) : xlsxSummaryWriter(out, force, `Window schedule: each window's year (${path.basename(input)})`, path.basename(input), extras);
+  const writer = !stream ? undefined : kind === 'csv' ? csvSummaryWriter(out, force, extras) : xlsxSummaryWriter(out, force, `Window schedule: each window's year (${path.basename(input)})`, path.basename(input), extras, dateSystem);
   const kept: WindowResult[] = [];
   let total = 0;
   try {
@@ -369,7 +371,7 @@ export async function scheduleCommand(argv: readonly string[], io: Output): Prom
   }
   if (!writer) {
     const results = kept;
-    const wb = newWorkbook('Sunpane window schedule');
+    const wb = newWorkbook('Sunpane window schedule', dateSystem);
     const charts: SheetChart[] = [];
     const contents = wb.addWorksheet('Contents');
     const ws = wb.addWorksheet('Summary');

@@ -11,7 +11,7 @@
  * filtered range rather than an Excel table object, which the streaming writer cannot make.
  */
 import ExcelJS from 'exceljs';
-import { formatSerialIso } from '../core/time';
+import { DATE_1904_OFFSET, type DateSystem, formatSerialIso } from '../core/time';
 import { escapeFormulaText } from '../io/textCells';
 import { CAUTION } from '../outputs/caution';
 import { MONTHS } from './annualSheets';
@@ -186,11 +186,15 @@ const MAXED = new Set<string>(['Peak gain (W)', LOAD_HEADERS[0]]);
  * @param title - the Summary sheet's title (users' words: escaped)
  * @param source - what the schedule came from, for the Contents sheet
  */
-export function xlsxSummaryWriter(target: string, options: OutputOptions, title: string, source: string, extras: SummaryExtras = NO_EXTRAS): SummaryWriter {
+export function xlsxSummaryWriter(target: string, options: OutputOptions, title: string, source: string, extras: SummaryExtras = NO_EXTRAS, dateSystem: DateSystem = 1900): SummaryWriter {
   const HEADERS = summaryHeaders(extras);
   const { numFmts: NUM_FMTS, widths: WIDTHS } = summaryFormats(extras);
   const out = openAtomicOutput(target, options);
   const wb = new ExcelJS.stream.xlsx.WorkbookWriter({ stream: out.stream, useStyles: true, useSharedStrings: true });
+  // A stamp as its cell value: a Date in the 1900 system (as the in-memory workbook writes it); in the
+  // 1904 system the serial itself, 1462 days less, since the streaming writer converts Dates by 1900 only.
+  const stampCell = (serial: number): ExcelJS.CellValue => (dateSystem === 1904 ? serial - DATE_1904_OFFSET : serialToCellDate(serial));
+  if (dateSystem === 1904) mark1904(wb);
   wb.creator = 'Sunpane';
   wb.title = 'Sunpane window schedule';
   wb.created = new Date(0);
@@ -234,11 +238,11 @@ export function xlsxSummaryWriter(target: string, options: OutputOptions, title:
         r.glassArea,
         s.annualKWh,
         s.peakW,
-        serialToCellDate(s.peakStamp),
+        stampCell(s.peakStamp),
         s.sunlitHours,
         s.meanSunlitFraction,
         s.missingHours,
-        ...extraCells<ExcelJS.CellValue>(r, extras, (v) => v, (v) => v, serialToCellDate, null, (w) => w),
+        ...extraCells<ExcelJS.CellValue>(r, extras, (v) => v, (v) => v, stampCell, null, (w) => w),
         ...s.monthlyKWh,
       ];
       const row = summary.getRow(next++);
@@ -277,6 +281,25 @@ export function xlsxSummaryWriter(target: string, options: OutputOptions, title:
       await out.commit();
     },
     abort: () => out.abort(),
+  };
+}
+
+/**
+ * Marks a streamed workbook as in the 1904 date system (ECMA-376 Part 1, §18.17.4.1): ExcelJS's
+ * streaming writer writes its workbook part with no properties, so the attribute date1904 is put
+ * into that part's workbookPr element as the part goes into the zip. Fails loudly if the part ever
+ * comes without the element, rather than writing 1904 serials into a 1900 workbook.
+ */
+function mark1904(wb: ExcelJS.stream.xlsx.WorkbookWriter): void {
+  const zip = (wb as unknown as { zip: { append(data: unknown, options: { name: string }): unknown } }).zip;
+  const append = zip.append.bind(zip);
+  zip.append = (data, options) => {
+    if (options?.name === '/xl/workbook.xml') {
+      const xml = String(data);
+      if (!/<workbookPr\b/.test(xml)) throw new Error('the streamed workbook part has no workbookPr element to mark as 1904');
+      return append(xml.replace(/<workbookPr\b/, '<workbookPr date1904="1"'), options);
+    }
+    return append(data, options);
   };
 }
 

@@ -11,14 +11,14 @@ import type { Output } from './call';
 import { addHeatMapSheet, addHourlySheet, addMonthlySheet, hourlyCsv } from './annualSheets';
 import { checkOutput, writeFileAtomic } from './atomicWrite';
 import { CliInputError } from './cliError';
-import { outputKind, parseFlags, requireFlag } from './flags';
+import { DATE_SYSTEM_FLAG, dateSystemFlag, dateSystemHelp, outputKind, parseFlags, requireFlag } from './flags';
 import { ProgressBar } from './progress';
 import { WEATHER_FLAGS, WEATHER_HELP, type WeatherRequest, checkWeatherTable, readWeatherTable, weatherRequest } from './weatherCsv';
 import { readWindowFile } from './windowJson';
 import { windowFieldLines } from '../registry/windowRange';
 import { fillContentsSheet, newWorkbook, saveWorkbook } from './workbook';
 
-export const TABLE_HELP = `usage: sunpane table --window FILE.json [--weather FILE.csv (--dni COL --dhi COL | --ghi COL) ...] --out FILE.xlsx|FILE.csv
+export const TABLE_HELP = `usage: sunpane table --window FILE.json [--weather FILE.csv (--dni COL --dhi COL | --ghi COL) ...] --out FILE.xlsx|FILE.csv [--${DATE_SYSTEM_FLAG} 1904]
 
 Writes one window's hourly year: 8760 rows (8784 in a leap year), each stamped at the END of its
 hour in local standard time, the sun taken at mid-hour (the window's timeConvention "hourEnding",
@@ -29,6 +29,7 @@ ${WEATHER_HELP}
   --out FILE           .csv: the hourly columns; .xlsx: hourly table, monthly summary, heat map
                        (a window with uValue adds the conduction gain; one with roomConstruction, or
                        solarRadiantTimeSeries and nonSolarRadiantTimeSeries, the cooling load)
+${dateSystemHelp(23)}
   --force              replace FILE if it exists (a read-only file is never replaced)
   --help               this text
 
@@ -55,7 +56,7 @@ export const TABLE_CONTENTS = [
   { sheet: 'Hourly', holds: 'The hourly year as a table: sun position, incidence and profile angles, sunlit fraction, irradiance, SHGC at incidence and solar gain (with a U-value the conduction gain, with a room the cooling load), hour-ending in local standard time.' },
 ] as const;
 
-const TABLE_FLAGS = { window: true, ...WEATHER_FLAGS, out: true, force: false, help: false } as const;
+const TABLE_FLAGS = { window: true, ...WEATHER_FLAGS, out: true, [DATE_SYSTEM_FLAG]: true, force: false, help: false } as const;
 
 /** A window with its weather resolved and validated, and the weather report (for stderr). */
 export interface ResolvedWindow {
@@ -106,6 +107,7 @@ export async function tableCommand(argv: readonly string[], io: Output): Promise
   const windowFile = requireFlag(flags, 'window', 'FILE.json (the window)');
   const out = requireFlag(flags, 'out', 'FILE.xlsx|FILE.csv (where to write)');
   const kind = outputKind(out, ['csv', 'xlsx']);
+  const dateSystem = dateSystemFlag(flags, kind);
   const force = { force: flags.has('force') };
   checkOutput(out, force);
   const { spec, weatherReport } = resolveWindow(windowFile, weatherRequest(flags));
@@ -120,7 +122,7 @@ export async function tableCommand(argv: readonly string[], io: Output): Promise
     bar.finish();
     await writeFileAtomic(out, text, force);
   } else {
-    const wb = newWorkbook(`Sunpane: ${spec.name}`);
+    const wb = newWorkbook(`Sunpane: ${spec.name}`, dateSystem);
     const contents = wb.addWorksheet('Contents');
     const hourlySheet = 'Hourly';
     const monthlySheet = wb.addWorksheet('Monthly');

@@ -4,6 +4,7 @@
  * results, and a day × hour colour-scale heat map. The command line's only spreadsheet writer.
  */
 import ExcelJS from 'exceljs';
+import { DATE_1904_OFFSET, type DateSystem } from '../core/time';
 import { escapeFormulaText } from '../io/textCells';
 import { CAUTION } from '../outputs/caution';
 import { PALETTE, argbColour } from '../outputs/palette';
@@ -327,13 +328,26 @@ export function setPrintLayout(sheet: ExcelJS.Worksheet, titleRow?: number, reac
 }
 
 /** A new workbook with Sunpane's document properties. */
-export function newWorkbook(title: string): ExcelJS.Workbook {
+export function newWorkbook(title: string, dateSystem: DateSystem = 1900): ExcelJS.Workbook {
   const wb = new ExcelJS.Workbook();
   wb.creator = 'Sunpane';
   wb.title = title;
   wb.created = new Date(0);
   wb.modified = new Date(0);
+  // The 1904 date system (ECMA-376 Part 1, §18.17.4.1): the workbook property date1904, and ExcelJS
+  // then writes every Date cell as a 1904 serial (1462 days less). Formulas that build dates
+  // (DATE, MONTH, comparisons with stamps) read the same in either system.
+  if (dateSystem === 1904) wb.properties.date1904 = true;
   return wb;
+}
+
+/**
+ * A date-time serial (1900 system, as the core gives it) as a number for a cell of this sheet's
+ * workbook: 1462 days less in a 1904 workbook. For the cached results of formulas that give a
+ * date-time (a Date cell value is converted by the writer itself).
+ */
+export function sheetSerial(sheet: ExcelJS.Worksheet, serial: number): number {
+  return sheet.workbook?.properties?.date1904 ? serial - DATE_1904_OFFSET : serial;
 }
 
 /** Serialises a workbook and writes it atomically (temporary file, then rename; see atomicWrite.ts). */

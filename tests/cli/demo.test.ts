@@ -15,6 +15,7 @@ import { applyFunction } from '../../src/registry/evaluate';
 import { FUNCTIONS, findFunction } from '../../src/registry';
 import { functionsMetadata } from '../../src/functions/metadata';
 import { expectSaved, run, tempDir } from './run';
+import { storedDifferences, storedWorkbook } from '../support/storedXlsx';
 
 let dir: string;
 let stdout: string;
@@ -306,5 +307,36 @@ describe('sunpane demo', () => {
       expect(text).toMatch(new RegExp(`^_xldudf_SUNPANE_SOLARGAIN\\(_xlfn\\.VSTACK\\(\\$A\\$7:\\$[A-Z]+\\$7,\\$A${row}:\\$[A-Z]+${row}\\),\\$E\\$5\\)$`));
       expect(text.replace('_xldudf_SUNPANE_', 'SUNPANE.').replace('_xlfn.', '').length).toBeLessThan(55);
     }
+  });
+
+  it('--date-system 1904 writes the same demo in the 1904 date system: date-times 1462 days lower, the same results, the date-time functions given the clock', async () => {
+    const other = tempDir('sunpane-demo-1904-');
+    const r = await run('demo', '--out', other, '--date-system', '1904');
+    expect(r.code).toBe(0);
+    const a = await storedWorkbook(path.join(dir, 'nested', 'out', 'sunpane-demo.xlsx'));
+    const b = await storedWorkbook(path.join(other, 'sunpane-demo.xlsx'));
+    expect(a.workbook).not.toMatch(/date1904/);
+    expect(b.workbook).toMatch(/<workbookPr[^>]*date1904="1"/);
+    const lower = (d: { a?: string; b?: string }) => Math.abs(Number(d.a) - Number(d.b) - 1462) < 1e-8;
+    const clocked: string[] = [];
+    const withClock = (x?: string) => (x ?? '').replace(/,+\$[A-Z]+\$\d+:\$[A-Z]+\$\d+\)$/, ')');
+    const wrong = storedDifferences(a, b).filter((d) => {
+      if (d.fa === undefined && d.fb === undefined && /^=SUNPANE\./.test(d.a ?? '')) return withClock(d.b) !== d.a || d.b === d.a; // the formula's text, shown beside it
+      if (d.fa === d.fb) return !lower(d); // a date-time cell or a native formula giving one
+      // A Sunpane function that reads a date-time: the same call with the clock range as its last argument,
+      // and the same result (a date-time result 1462 days lower).
+      const clock = /,(\$[A-Z]+\$\d+:\$[A-Z]+\$\d+)\)$/.exec(d.fb ?? '');
+      if (!clock || withClock(d.fb) !== d.fa) return true;
+      clocked.push(d.at);
+      return !(d.a === d.b || lower(d));
+    });
+    expect(wrong).toEqual([]);
+    // Ten schedule rows (SOLARGAIN) and the formula sheet's date-time functions (SOLARGAIN, sun altitude and azimuth, sunrise, sunset, incidence).
+    expect(clocked.filter((at) => at.startsWith('Schedule!'))).toHaveLength(10);
+    expect(clocked.filter((at) => at.startsWith('Formulas!'))).toHaveLength(6);
+    // The clock ranges say 1904 in the glossary's words, where the formulas point.
+    expect(b.sheets.get('Formulas')!.get('A9')).toMatchObject({ v: 'Date system' });
+    expect(b.sheets.get('Formulas')!.get('B9')).toMatchObject({ v: '1904' });
+    fs.rmSync(other, { recursive: true, force: true });
   });
 });

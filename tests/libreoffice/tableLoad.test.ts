@@ -94,10 +94,10 @@ afterAll(() => {
   fs.rmSync(work, { recursive: true, force: true });
 });
 
-async function writeTable(window: Record<string, number | string>, file: string): Promise<void> {
+async function writeTable(window: Record<string, number | string>, file: string, ...flags: string[]): Promise<void> {
   const json = path.join(work, `${path.basename(file, '.xlsx')}.json`);
   fs.writeFileSync(json, JSON.stringify(window));
-  const r = await run('table', '--window', json, '--out', file);
+  const r = await run('table', '--window', json, '--out', file, ...flags);
   expect(r.err).toBe('');
   expect(r.code).toBe(0);
 }
@@ -165,6 +165,19 @@ describe('the table workbook: the peak cooling load of each month on the Monthly
     expect(Math.abs(csvNumber(yearRow[3]) - year.peakW)).toBeLessThanOrEqual(1e-9 * year.peakW);
     expect(Math.abs(csvNumber(yearRow[4]) - year.stamp!)).toBeLessThan(1 / 1440 / 2);
     expect(rows[1][0]).toBe(CAUTION);
+
+    // The same window written in the 1904 date system (--date-system 1904; ECMA-376 Part 1, §18.17.4.1):
+    // LibreOffice recalculates it to the same dates and values on every sheet — the monthly sums and
+    // peaks whose formulas build dates with DATE(), the peak hours, the hourly stamps, the heat map's
+    // days — although every date-time is stored 1462 days lower (tests/cli/dateSystem.test.ts).
+    const file1904 = path.join(work, 'sw-office-1904.xlsx');
+    await writeTable(WINDOW, file1904, '--date-system', '1904');
+    const sheets1904 = sheetsOf(convert(file1904, CSV_ALL_SHEETS, path.join(work, 'csv1904')), 'sw-office-1904');
+    for (const sheet of ['Monthly', 'Hourly', 'Heat map']) {
+      const same = readCsvRows(sheets1904.get(sheet)!);
+      expect(same).toEqual(readCsvRows(sheets.get(sheet)!));
+    }
+    expect(readCsvRows(sheets1904.get('Hourly')!).some((r) => /^2026-07-01 13:00/.test(r[0]))).toBe(true);
 
     // A picture of the Monthly sheet as LibreOffice draws it, to look at (test-artifacts/libreoffice/).
     const pdf = convert(file, 'pdf', path.join(work, 'pdf'), { recalc: false }).files.find((f) => f.endsWith('.pdf'))!;
