@@ -34,6 +34,8 @@ export interface HourlyExtras {
   conduction?: boolean;
   /** The cooling load by the radiant time series (a window with a room). */
   load?: boolean;
+  /** Stamps on the local clock (a window with a daylight-saving rule): the stamp column says so. */
+  clock?: boolean;
 }
 
 /** The columns every hourly table has. */
@@ -101,13 +103,19 @@ const LOAD: HourlyColumn = Object.freeze({ key: 'load', header: 'Cooling load (W
 
 /** The stamp column of a table whose rows are instants (time convention `instant`). */
 const INSTANT_STAMP: HourlyColumn = Object.freeze({ ...HOURLY_COLUMNS[0], header: 'Instant (local standard time)' });
+/** The stamp columns of a table stamped on the local clock (a daylight-saving rule), by time convention. */
+const CLOCK_STAMPS: Readonly<Record<TimeConvention, HourlyColumn>> = Object.freeze({
+  hourEnding: Object.freeze({ ...HOURLY_COLUMNS[0], header: 'Hour ending (local clock time)' }),
+  instant: Object.freeze({ ...HOURLY_COLUMNS[0], header: 'Instant (local clock time)' }),
+});
 
 /**
  * The hourly columns of a table read by a time convention (the stamp column's words differ), with
  * the conduction gain and the cooling load when the window has them.
  */
 export function hourlyColumnsFor(convention: TimeConvention = DEFAULT_TIME_CONVENTION, extras: HourlyExtras = {}): readonly HourlyColumn[] {
-  const base = convention === 'instant' ? INSTANT_COLUMNS : HOURLY_COLUMNS;
+  const plain = convention === 'instant' ? INSTANT_COLUMNS : HOURLY_COLUMNS;
+  const base = extras.clock ? [CLOCK_STAMPS[convention], ...plain.slice(1)] : plain;
   if (!extras.conduction && !extras.load) return base;
   const at = base.findIndex((c) => c.key === 'gain') + 1;
   return [...base.slice(0, at), ...(extras.conduction ? [CONDUCTION] : []), ...(extras.load ? [LOAD] : []), ...base.slice(at)];
@@ -123,9 +131,9 @@ export function hourlyHeadersFor(convention: TimeConvention = DEFAULT_TIME_CONVE
   return hourlyColumnsFor(convention, extras).map((c) => c.header);
 }
 
-/** The column of `key` (the stamp column's words by the time convention). */
-export function hourlyColumn(key: HourlyKey, convention: TimeConvention = DEFAULT_TIME_CONVENTION): HourlyColumn {
-  const c = hourlyColumnsFor(convention, { conduction: true, load: true }).find((x) => x.key === key);
+/** The column of `key` (the stamp column's words by the time convention, and on the clock with `clock`). */
+export function hourlyColumn(key: HourlyKey, convention: TimeConvention = DEFAULT_TIME_CONVENTION, clock = false): HourlyColumn {
+  const c = hourlyColumnsFor(convention, { conduction: true, load: true, clock }).find((x) => x.key === key);
   if (!c) throw new Error(`no hourly column ${key}`);
   return c;
 }

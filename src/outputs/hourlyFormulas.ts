@@ -22,9 +22,10 @@ export type ColumnRef = ((key: HourlyKey) => string) & { convention?: TimeConven
  * `[ ] # '` are escaped by a preceding `'`; the double brackets let any other character stand.
  * @param table - the table's name
  * @param convention - how the table's rows are stamped (names the stamp column; default `hourEnding`)
+ * @param clock - the stamps are on the local clock (a daylight-saving rule; names the stamp column)
  */
-export function tableColumnRef(table: string, convention: TimeConvention = DEFAULT_TIME_CONVENTION): ColumnRef {
-  const ref: ColumnRef = (key) => `${table}[[${hourlyColumn(key, convention).header.replace(/(['#[\]])/g, "'$1")}]]`;
+export function tableColumnRef(table: string, convention: TimeConvention = DEFAULT_TIME_CONVENTION, clock = false): ColumnRef {
+  const ref: ColumnRef = (key) => `${table}[[${hourlyColumn(key, convention, clock).header.replace(/(['#[\]])/g, "'$1")}]]`;
   ref.convention = convention;
   return ref;
 }

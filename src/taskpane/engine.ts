@@ -42,20 +42,25 @@ export function runYear(spec: WindowSpec): YearResult {
   const room = windowRoomSeries(spec);
   const load = room ? annualLoadParts(series, room).total : undefined;
   const peak = load ? loadPeak(series, load) : undefined;
+  // Under a daylight-saving rule the rows and the peak hours are given on the local clock (the
+  // series' clock stamps, as SOLARGAINYEAR's stamp column); without one the clock is standard time.
+  const clock = spec.site.daylightSaving !== undefined;
+  const onClock = (stamp: number) => (clock ? series.clockStamp[Math.round((stamp - series.stampSerial[0]) * 24)] : stamp);
   const figures: YearFigures = {
     monthlyKWh: summary.monthlyKWh,
     annualKWh: summary.annualKWh,
     peakW: summary.peakW,
-    peakStamp: summary.peakW > 0 ? summary.peakStamp : undefined,
+    peakStamp: summary.peakW > 0 ? onClock(summary.peakStamp) : undefined,
     sunlitHours: summary.sunlitHours,
     meanSunlitFraction: summary.meanSunlitFraction,
     beamCut: summary.beamCut,
     diffuseCut: summary.diffuseCut,
     missingHours: summary.missingHours,
     glassArea: series.glassArea,
-    ...(peak ? { peakLoadW: peak.peakLoadW, peakLoadStamp: peak.peakLoadStamp } : {}),
+    ...(peak ? { peakLoadW: peak.peakLoadW, peakLoadStamp: onClock(peak.peakLoadStamp) } : {}),
   };
-  return { series, summary, figures, hourly: hourlyData(series, load) };
+  const hourly = hourlyData(series, load);
+  return { series, summary, figures, hourly: clock ? { ...hourly, stampSerial: series.clockStamp } : hourly };
 }
 
 /** One point of a sun track. */

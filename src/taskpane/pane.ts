@@ -24,7 +24,7 @@ import { drawSunPath } from './sunPathView';
 import { writeSmallTableSheet } from './tableSheet';
 import { workbookDateSystem } from './dateSystem';
 import { writeYearSheet } from './yearSheet';
-import type { DateSystem } from '../core/time';
+import { type DateSystem, describeDaylightSaving } from '../core/time';
 import { scheduleConventionOf } from '../schedule/columns';
 
 /** The caution shown in the pane and on every result sheet (one text for every output). */
@@ -56,13 +56,23 @@ function weatherText(spec: WindowSpec): string {
   }
 }
 
+/**
+ * How the rows are stamped, in words: the time convention, and the clock — local standard time, or
+ * under a daylight-saving rule the local clock with the rule in words (as SOLARGAINSTEPS states it).
+ */
+function rowsText(spec: WindowSpec): string {
+  const rule = spec.site.daylightSaving;
+  const clock = rule ? `on the local clock (${describeDaylightSaving(rule)})` : 'local standard time';
+  return spec.timeConvention === 'instant' ? `Rows are instants at the top of each hour, ${clock}, sun at the stamp (time convention instant).` : `Rows are hour-ending, ${clock}, sun at mid-hour (time convention hourEnding).`;
+}
+
 /** The description lines above a result. */
 export function describeSpec(spec: WindowSpec): string[] {
   const s = spec.site;
   const off = s.utcOffset >= 0 ? `+${s.utcOffset}` : String(s.utcOffset);
   return [
     `${spec.name}: faces ${spec.surfaceAzimuth}°, tilt ${spec.surfaceTilt}°, opening ${spec.width} × ${spec.height} m, frame share ${spec.frameFraction}, SHGC ${spec.glazing.shgc}${spec.glazing.angleTable ? ' (angle table)' : `, ${spec.glazing.panes} panes`}`,
-    `Latitude ${s.latitude}°, longitude ${s.longitude}°, UTC${off} h, year ${spec.year}; ${weatherText(spec)}; sky model ${spec.skyModel}; ground reflectance ${spec.groundAlbedo}. ${spec.timeConvention === 'instant' ? 'Rows are instants at the top of each hour, local standard time, sun at the stamp (time convention instant).' : 'Rows are hour-ending, local standard time, sun at mid-hour (time convention hourEnding).'}`,
+    `Latitude ${s.latitude}°, longitude ${s.longitude}°, UTC${off} h, year ${spec.year}; ${weatherText(spec)}; sky model ${spec.skyModel}; ground reflectance ${spec.groundAlbedo}. ${rowsText(spec)}`,
     CAUTION,
   ];
 }
@@ -278,7 +288,7 @@ export function createPane(doc: Document, host: PaneHost): void {
       await breathe();
       const result: YearResult = runYear(ready.spec);
       const plan = await planFor(`${ready.spec.name} hourly`);
-      const written = await writeYearSheet(host.run, { ...plan, tableBase: `${ready.spec.name} hourly` }, { title: `Sunpane hourly solar gain: ${ready.spec.name}`, lines: describeSpec(ready.spec), timeConvention: ready.spec.timeConvention, dateSystem: ready.dateSystem }, result.hourly, result.figures, {
+      const written = await writeYearSheet(host.run, { ...plan, tableBase: `${ready.spec.name} hourly` }, { title: `Sunpane hourly solar gain: ${ready.spec.name}`, lines: describeSpec(ready.spec), timeConvention: ready.spec.timeConvention, dateSystem: ready.dateSystem, clock: ready.spec.site.daylightSaving !== undefined }, result.hourly, result.figures, {
         onProgress: (done, total) => setProgress(done, total, `Writing rows: ${done} of ${total}`),
         cancelled: () => cancelRequested,
       });

@@ -34,12 +34,16 @@ const COLUMN_FIELDS: ReadonlyMap<string, readonly FieldDef[]> = new Map(
   SCHEDULE_COLUMNS.map((c) => {
     if (c.key === SITE_KEY) return [c.key, []];
     if (c.key === SKYLINE_KEY) return [c.key, FIELDS.filter((f) => f.id === 'skylineAddress')];
+    // A row's daylight-saving rule is set on its window directly, as one rule over the form's: its
+    // date-time cells are serials of the workbook's date system, read by the window reader (the form's
+    // boxes hold typed text), and its shift belongs to its own dates.
+    if (c.paths.some((p) => p.startsWith('site.daylightSaving'))) return [c.key, []];
     const boxes = c.paths.map(fieldOfPath);
     return [c.key, boxes.every((b) => b !== undefined) ? (boxes as FieldDef[]) : []];
   }),
 );
 
-/** Columns the form has no box for (air pressure and temperature, an SHGC table, the radiant fraction): set on the row's window directly. */
+/** Columns the form has no box for (air pressure and temperature, an SHGC table, the radiant fraction) or whose cells a box would read otherwise (date-times): set on the row's window directly. */
 const BOXLESS = new Set(SCHEDULE_COLUMNS.filter((c) => c.key !== SITE_KEY && c.key !== SKYLINE_KEY && (COLUMN_FIELDS.get(c.key) ?? []).length === 0).map((c) => c.key));
 
 /** Weather kind a row switches to when it fills a clear-sky column. */

@@ -8,7 +8,10 @@ import { SunpaneError } from '../core/common';
 import type { AngleTable } from '../core/glazing';
 import type { Shading } from '../core/shading';
 import type { Weather, WindowSpec } from '../core/gain';
-import { inGlossaryWords } from '../registry/windowRange';
+import { GLOSSARY } from '../registry/glossary';
+import type { Scalar } from '../registry/types';
+import { fieldsOf, inGlossaryWords } from '../registry/windowRange';
+import type { DaylightSavingRule } from '../core/time';
 import { RANGE_ADDRESS_HELP, parseRangeAddress } from './addresses';
 import type { SheetWeather } from './weather';
 import { FIELDS, FIELD_BY_ID, type FieldDef, type FormValues, fieldForArgument } from './fields';
@@ -97,6 +100,25 @@ function weatherOf(values: FormValues, data: SheetData): Weather {
   }
 }
 
+/** The daylight-saving boxes, in the glossary's order. */
+const DAYLIGHT_SAVING = [GLOSSARY.daylightSavingStart, GLOSSARY.daylightSavingEnd, GLOSSARY.daylightSavingShift];
+
+/**
+ * The daylight-saving rule of the form, its cells read as the worksheet functions read the same
+ * fields of a window (the window reader: a date-time as a serial or ISO 8601 text), the shift 1 h
+ * when blank (the glossary's default); undefined when the three boxes are blank. Nothing is checked
+ * here: the core's validator checks the rule, so a bad one (an end before the start, a shift out of
+ * range, a start without an end) gets the functions' own message, naming the field.
+ * @throws SunpaneError naming the field when a box's text is no date-time or number
+ */
+export function daylightSavingOf(values: FormValues): DaylightSavingRule | undefined {
+  const given = DAYLIGHT_SAVING.filter((g) => (values[g.name] ?? '').trim() !== '');
+  if (given.length === 0) return undefined;
+  const f = fieldsOf(given.map((g) => ({ field: g, written: g.name, cell: readNumberText(values[g.name]) as Scalar })));
+  const at = (g: (typeof DAYLIGHT_SAVING)[number]) => f.values.get(g.name) as number | undefined;
+  return { start: at(GLOSSARY.daylightSavingStart), end: at(GLOSSARY.daylightSavingEnd), shift: at(GLOSSARY.daylightSavingShift) ?? (GLOSSARY.daylightSavingShift.default as number) } as DaylightSavingRule;
+}
+
 /**
  * The WindowSpec the form describes. Devices of depth 0 are left out; the skyline, angle table and
  * hourly weather come from `data` (read from the sheets beforehand).
@@ -124,6 +146,7 @@ export function buildWindowSpec(values: FormValues, data: SheetData = {}): Windo
   if (data.skyline) shading.skyline = data.skyline;
 
   const table = values.glassModel === 'table';
+  const daylightSaving = daylightSavingOf(values);
   return {
     name: (values.name ?? '').trim() || 'Window',
     site: {
@@ -131,6 +154,7 @@ export function buildWindowSpec(values: FormValues, data: SheetData = {}): Windo
       longitude: num(values, 'longitude'),
       utcOffset: num(values, 'utcOffset'),
       elevation: num(values, 'elevation'),
+      ...(daylightSaving ? { daylightSaving } : {}),
     },
     surfaceAzimuth: num(values, 'surfaceAzimuth'),
     surfaceTilt: num(values, 'surfaceTilt'),
@@ -190,6 +214,8 @@ export function findProblems(values: FormValues, validate: SpecValidator, data?:
       }
       problems.byField[field.id] = err.message;
       work[field.id] = field.kind === 'address' ? 'A1' : field.initial;
+      // The daylight-saving boxes are one rule: set back together, so a half rule left behind is not reported again.
+      if (DAYLIGHT_SAVING.some((g) => g.name === field.id)) for (const g of DAYLIGHT_SAVING) work[g.name] = FIELD_BY_ID.get(g.name)?.initial ?? '';
       if (field.kind === 'address' && data) return problems;
     }
   }

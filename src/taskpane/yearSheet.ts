@@ -88,6 +88,8 @@ export interface YearHeading {
   timeConvention?: TimeConvention;
   /** The workbook's date system: the stamps are written in it (default 1900). */
   dateSystem?: DateSystem;
+  /** The stamps are on the local clock (the window has a daylight-saving rule): the stamp column says so. */
+  clock?: boolean;
 }
 
 /** The hourly table's headers: the first column says how the rows are stamped. */
@@ -196,7 +198,7 @@ export async function writeYearSheet(
 ): Promise<WrittenYear> {
   return writingSheet(run, target.name, async () => {
     const total = cols.gain.length;
-    const extras = extrasOf(cols);
+    const extras = { ...extrasOf(cols), clock: heading.clock === true };
     const columns = hourlyColumnsFor(heading.timeConvention, extras);
     const width = columns.length;
     const SUMMARY_COLUMN = summaryColumnFor(width);
@@ -252,7 +254,7 @@ export async function writeYearSheet(
       const table = sheet.tables.add(rangeAddress(TABLE_HEADER_ROW, 0, total + 1, width), true);
       table.name = tableName;
       table.style = 'TableStyleLight9';
-      const ref = tableColumnRef(tableName, heading.timeConvention);
+      const ref = tableColumnRef(tableName, heading.timeConvention, heading.clock === true);
       const year = yearOf(cols);
 
       const keyRow = TABLE_HEADER_ROW + 15;

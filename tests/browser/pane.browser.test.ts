@@ -528,7 +528,7 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     await page.close();
   });
 
-  test("bad input shows the core's own message beside the box, and nothing is written", async () => {
+  test("bad input shows the core's own message beside the box, and nothing is written; then a daylight-saving rule: a bad one refused as the functions refuse it, a good one stamps the hourly sheet on the zone's clock", async () => {
     const page = await openPane();
     await setField(page, 'shgc', '1.4');
     await setField(page, 'latitude', 'north');
@@ -572,6 +572,65 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     );
     expect(await host.sheetNames(page)).toEqual(['Weather']);
     await page.screenshot({ path: path.join(ARTIFACTS, 'pane-bad-input.png'), fullPage: true });
+
+    // A daylight-saving rule on the same page. A bad one gets the worksheet functions' message beside its
+    // box (SOLARGAIN given the same fields in a window range), in the box's words.
+    await page.selectOption('#weatherSource', 'ineichenClearSky');
+    expect(await page.inputValue('#weatherSource')).toBe('ineichenClearSky');
+    expect(await page.isVisible('#dniAddress')).toBe(false);
+    const functionsSay = (rule: Record<string, string>, label: string): string => {
+      const out = applyFunction(findFunction('SOLARGAIN')!, [[...Object.entries(FORM_WINDOW), ...Object.entries(rule)] as RawArg, `${YEAR}-07-01T12:00`])[0][0];
+      if (!(out instanceof SunpaneError)) throw new Error('expected SOLARGAIN to refuse the rule');
+      return inUserWords(out.message.replace(/^window /, ''), label);
+    };
+    await setField(page, 'daylightSavingStart', `${YEAR}-10-26 03:00`);
+    await setField(page, 'daylightSavingEnd', `${YEAR}-03-30 02:00`);
+    await page.waitForFunction(() => (document.getElementById('daylightSavingEnd-msg')?.textContent ?? '') !== '');
+    expect(await page.textContent('#daylightSavingEnd-msg')).toBe(functionsSay({ daylightSavingStart: `${YEAR}-10-26 03:00`, daylightSavingEnd: `${YEAR}-03-30 02:00` }, 'Daylight saving end'));
+    await setField(page, 'daylightSavingStart', `${YEAR}-03-30 02:00`);
+    await setField(page, 'daylightSavingEnd', `${YEAR}-10-26 03:00`);
+    await setField(page, 'daylightSavingShift', '3');
+    await page.waitForFunction(() => (document.getElementById('daylightSavingShift-msg')?.textContent ?? '') !== '');
+    expect(await page.textContent('#daylightSavingShift-msg')).toBe(functionsSay({ daylightSavingStart: `${YEAR}-03-30 02:00`, daylightSavingEnd: `${YEAR}-10-26 03:00`, daylightSavingShift: '3' }, 'Daylight saving shift'));
+    expect(await page.textContent('#daylightSavingShift-msg')).toBe('Daylight saving shift: 3 is not allowed: must be a number above 0 and up to 2 h');
+
+    // The rule of the example location's zone (the form's 52.2° N 4.9° E, UTC+1: Europe/Amsterdam in the
+    // IANA database): the hourly sheet is stamped on the clock, each stamp as Node's Intl gives the zone's
+    // clock reading for the hour (its middle, then the half hour on, as an hour-ending row is stamped).
+    await setField(page, 'daylightSavingShift', '');
+    await page.click('#run-year');
+    // (the status still says the weather columns could not be used: wait for this run's own words)
+    expect(await waitForStatus(page, /^Wrote|refused|Fix|Stopped/)).toMatch(/^Wrote "Window A hourly"/);
+    const stamps = await host.read(page, 'Window A hourly', 'A5:A8765');
+    expect(stamps[0][0]).toBe('Hour ending (local clock time)');
+    const amsterdam = new Intl.DateTimeFormat('en-GB', { timeZone: 'Europe/Amsterdam', hourCycle: 'h23', year: 'numeric', month: 'numeric', day: 'numeric', hour: 'numeric', minute: 'numeric' });
+    const clockOf = (utcMs: number): number => {
+      const p = amsterdam.formatToParts(new Date(utcMs));
+      const get = (t: string) => Number(p.find((x) => x.type === t)!.value);
+      return Date.UTC(get('year'), get('month') - 1, get('day'), get('hour'), get('minute')) / 86_400_000 + 25_569;
+    };
+    const yearStartUtc = Date.UTC(YEAR, 0, 1) - 3_600_000; // 1 January 00:00 at UTC+1
+    const off = stamps.slice(1).flatMap(([v], i) => {
+      const expected = clockOf(yearStartUtc + i * 3_600_000 + 1_800_000) + 1 / 48; // the hour's middle on the clock, then half an hour on
+      return Math.abs((v as number) - expected) < 1e-5 ? [] : [`row ${i + 6}: ${v} vs ${expected}`];
+    });
+    expect(off).toEqual([]);
+    // Summer hours are an hour on from standard time, winter ones not.
+    expect((stamps[1][0] as number) - (Date.UTC(YEAR, 0, 1) / 86_400_000 + 25_569)).toBeCloseTo(1 / 24, 6);
+    expect((stamps[4345][0] as number) - (Date.UTC(YEAR, 0, 1) / 86_400_000 + 25_569 + 4345 / 24)).toBeCloseTo(1 / 24, 6);
+    // The rule in words on the sheet, as SOLARGAINSTEPS states it for the same window and rule.
+    const rule = { daylightSavingStart: `${YEAR}-03-30 02:00`, daylightSavingEnd: `${YEAR}-10-26 03:00` };
+    const steps = applyFunction(findFunction('SOLARGAINSTEPS')!, [[...Object.entries(FORM_WINDOW), ...Object.entries(rule)] as RawArg, `${YEAR}-07-01T12:00`]) as unknown[][];
+    const words = /daylight saving \+1 h from .*? \(clock time\), every year/.exec(steps.map((r) => r.join(' ')).join('\n'))![0];
+    expect(words).toBe('daylight saving +1 h from the last Sunday of March 02:00 to the last Sunday of October 03:00 (clock time), every year');
+    const heading = (await host.read(page, 'Window A hourly', 'A1:A4')).map((r) => String(r[0]));
+    expect(heading.some((l) => l.includes(`Rows are hour-ending, on the local clock (${words}), sun at mid-hour`))).toBe(true);
+    // The key figures refer to the stamp column by its clock-time header.
+    const peakAt = await host.read(page, 'Window A hourly', 'Q21:Q21');
+    expect(String(peakAt[0][0])).toContain('[[Hour ending (local clock time)]]');
+    await page.setViewportSize({ width: 350, height: 900 });
+    await page.click('#sunpane-root');
+    await page.screenshot({ path: path.join(ARTIFACTS, 'pane-daylight-saving-350.png'), fullPage: true });
     await page.close();
   });
 

@@ -10,6 +10,11 @@ import type { WindowSpec } from '../../src/core/gain/window';
 import { validateWindowSpec } from '../../src/core/gain/windowSpec';
 import { applyExampleSite, fieldForArgument, initialValues } from '../../src/taskpane/fields';
 import { buildWindowSpec, findProblems, isClean, readListText, readNumberText } from '../../src/taskpane/spec';
+import { validateSpec } from '../../src/taskpane/engine';
+import { applyFunction } from '../../src/registry/evaluate';
+import { findFunction } from '../../src/registry';
+import type { RawArg } from '../../src/registry/types';
+import { civilToSerial } from '../../src/core/time/calendar';
 
 const validate = (s: WindowSpec) => void validateWindowSpec(s);
 
@@ -93,5 +98,38 @@ describe('the window form', () => {
     const v = applyExampleSite(initialValues(), 'kestrelHeads');
     expect([v.latitude, v.longitude, v.utcOffset]).toEqual(['-37.9', '145', '10']);
     expect(readListText(v.linkeTurbidity)).toHaveLength(12);
+  });
+});
+
+describe('the daylight-saving rule in the form', () => {
+  const form = { ...initialValues(), year: '2025' };
+  /** The same window as a range of the worksheet functions' fields. */
+  const RANGE: [string, number | string][] = [['latitude', 52.2], ['longitude', 4.9], ['utcOffset', 1], ['surfaceAzimuth', 180], ['width', 1.8], ['height', 1.5], ['shgc', 0.4], ['year', 2025], ['linkeTurbidity', 3]];
+  /** SOLARGAIN's message for the window with these daylight-saving fields, without the argument's name before the field's. */
+  const functionsSay = (rule: Record<string, string>): string => {
+    const out = applyFunction(findFunction('SOLARGAIN')!, [[...RANGE, ...Object.entries(rule)] as RawArg, '2025-07-01T12:00'])[0][0];
+    if (!(out instanceof SunpaneError)) throw new Error('expected SOLARGAIN to refuse the rule');
+    return out.message.replace(/^window /, '');
+  };
+
+  test('a rule typed in the three boxes is the rule the functions read; blank boxes: standard time; a blank shift: 1 h', () => {
+    expect(buildWindowSpec(form).site.daylightSaving).toBeUndefined();
+    const rule = { daylightSavingStart: '2025-03-30 02:00', daylightSavingEnd: '2025-10-26T03:00' };
+    expect(buildWindowSpec({ ...form, ...rule }).site.daylightSaving).toEqual({ start: civilToSerial(2025, 3, 30, 2), end: civilToSerial(2025, 10, 26, 3), shift: 1 });
+    expect(buildWindowSpec({ ...form, ...rule, daylightSavingShift: '0.5' }).site.daylightSaving?.shift).toBe(0.5);
+    expect(isClean(findProblems({ ...form, ...rule }, validateSpec))).toBe(true);
+    // the same rule given to the functions: no refusal, the same gain as the pane's window
+    const gain = applyFunction(findFunction('SOLARGAIN')!, [[...RANGE, ['daylightSavingStart', rule.daylightSavingStart], ['daylightSavingEnd', rule.daylightSavingEnd]] as RawArg, '2025-07-01T12:00'])[0][0];
+    expect(typeof gain).toBe('number');
+  });
+
+  test.each([
+    ['an end before the start', { daylightSavingStart: '2025-10-26 03:00', daylightSavingEnd: '2025-03-30 02:00' }, 'daylightSavingEnd'],
+    ['a shift outside above 0 up to 2 h', { daylightSavingStart: '2025-03-30 02:00', daylightSavingEnd: '2025-10-26 03:00', daylightSavingShift: '3' }, 'daylightSavingShift'],
+    ['a shift with no dates', { daylightSavingShift: '1' }, 'daylightSavingStart'],
+    ['a start that is no date-time', { daylightSavingStart: 'soon', daylightSavingEnd: '2025-10-26 03:00' }, 'daylightSavingStart'],
+  ])('%s: the functions\' message, beside its box, once', (_what, rule, box) => {
+    const problems = findProblems({ ...form, ...rule }, validateSpec);
+    expect(problems).toEqual({ byField: { [box]: functionsSay(rule) }, general: [] });
   });
 });
