@@ -64,6 +64,17 @@ describe('every sky model inside the plane equals its stand-alone function', () 
     }
   });
 
+  test('the sun exactly on the horizon counts as down: no beam, and every model spreads the diffuse isotropically', () => {
+    // Altitude 0 with a beam given (any DNI up to E0n passes the limits there; the global is the diffuse alone).
+    for (const model of ['isotropic', 'hayDavies', 'perez1990', 'ashraeClearDay'] as const) {
+      const r = planeIrradiance({ ...base, skyModel: model, sunAltitude: 0, sunAzimuth: 200, dni: 500, dhi: 30 });
+      expect(r.incidence).toBeLessThan(90);
+      expect(r.beam).toBe(0);
+      expect(r.sky).toBeCloseTo(15, 9);
+      expect(r.ground).toBeCloseTo(30 * 0.25 * 0.5, 9);
+    }
+  });
+
   test('a low clear sun behind a vertical window: the Perez sum is negative and the sky diffuse is 0, shaded or not', () => {
     // Day 172, sun 2° high, DHI 72 and DNI 1320 (within the Long & Shi limits there): ε bin 7, Δ ≈ 1.06,
     // F1 held at 0, F2 ≈ −0.73, so DHI [(1 + cos 90°)/2 + F2 sin 90°] ≈ 72 (0.5 − 0.73) < 0.
@@ -117,18 +128,18 @@ describe('prepared planes', () => {
   });
 
   test('shared Perez coefficients: filled only for the hours listed with the sun up and some diffuse, and the planes that use them agree with planeIrradiance', () => {
-    // Four hours: sun up with diffuse, sun down, sun up with no diffuse, sun up but not listed.
-    const dni = [600, 0, 700, 500];
-    const dhi = [120, 10, 0, 90];
-    const altitude = [35, -3, 50, 20];
+    // Five hours: sun up with diffuse, sun down, sun up with no diffuse, sun up but not listed, sun on the horizon.
+    const dni = [600, 0, 700, 500, 0];
+    const dhi = [120, 10, 0, 90, 20];
+    const altitude = [35, -3, 50, 20, 0];
     const sinAltitude = altitude.map(sind);
     const days: number[] = [];
-    const cols = perezBrightnessColumns(dni, dhi, altitude, sinAltitude, (h) => (days.push(h), extraterrestrialSpencer(172)), [0, 1, 2]);
+    const cols = perezBrightnessColumns(dni, dhi, altitude, sinAltitude, (h) => (days.push(h), extraterrestrialSpencer(172)), [0, 1, 2, 4]);
     expect(days).toEqual([0]);
     const parts = perezParts(90, 180, 120, 600, extraterrestrialSpencer(172), 55, 200, airMassKastenYoung(35));
     expect([cols.f1[0], cols.f2[0]]).toEqual([parts.f1, parts.f2]);
-    expect([...cols.f1.slice(1)]).toEqual([0, 0, 0]);
-    expect([...cols.f2.slice(1)]).toEqual([0, 0, 0]);
+    expect([...cols.f1.slice(1)]).toEqual([0, 0, 0, 0]);
+    expect([...cols.f2.slice(1)]).toEqual([0, 0, 0, 0]);
     const plane = preparePlane({ surfaceTilt: 90, surfaceAzimuth: 180, groundAlbedo: 0.2, skyModel: 'perez1990' });
     const checked = planeIrradiance({ dni: 600, dhi: 120, sunAltitude: 35, sunAzimuth: 200, surfaceTilt: 90, surfaceAzimuth: 180, groundAlbedo: 0.2, dayOfYear: 172, skyModel: 'perez1990', shade: { isotropic: 1, circumsolar: 0.3, horizon: 1, ground: 1 } });
     const o = out();
