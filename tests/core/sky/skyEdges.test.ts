@@ -109,6 +109,8 @@ describe('Erbs et al. (1982) at the joins of its pieces and the floors of the sp
     expect(() => decomposeErbs(500, 80, 172)).toThrow(
       `ghi = 500 is not allowed: must be at most ${Number(limit.toFixed(1))} W/m², the physically possible limit (Long & Shi 2008) with the sun 10° high and an extraterrestrial ${Number(sa.toFixed(1))} W/m²; check the units (W/m², not hourly sums in Wh/m² or kJ/m²), the date-time and the site`,
     );
+    // The sun exactly on the horizon is "at or below" it, not "0° high".
+    expect(() => decomposeErbs(120, 90, 172)).toThrow(/^ghi = 120 is not allowed: must be at most 100 W\/m², the physically possible limit \(Long & Shi 2008\) with the sun at or below the horizon and/);
     expect(() => decomposeErbs(120, 95, 172)).toThrow(
       `ghi = 120 is not allowed: must be at most 100 W/m², the physically possible limit (Long & Shi 2008) with the sun at or below the horizon and an extraterrestrial ${Number(sa.toFixed(1))} W/m²`,
     );
@@ -156,6 +158,12 @@ describe('Long & Shi (2008) limits: a value at the limit passes, above it fails'
     expect(() => requirePossibleIrradiance(1300, 600, mu, sa, { dni: 'beamNormal', dhi: 'skyDiffuse' })).toThrow(
       `skyDiffuse = 600 is not allowed: must keep the global beamNormal × sin(altitude) + skyDiffuse at or below ${Number(l.ghi.toFixed(1))} W/m², ${why} (the global is 1250 W/m²)`,
     );
+    // The first component past its limit is named: a beam exactly at its limit passes, so a diffuse past its own is named;
+    // a diffuse exactly at its limit passes, so a global past its own is named.
+    expect(() => requirePossibleIrradiance(1367, 700, mu, sa)).toThrow(/^dhi = 700 is not allowed: must be at most /);
+    expect(1000 * 0.5 + l.dhi).toBeGreaterThan(l.ghi);
+    expect(() => requirePossibleIrradiance(1000, l.dhi, mu, sa)).toThrow(/^dhi = [\d.]+ is not allowed: must keep the global dni × sin\(altitude\) \+ dhi at or below /);
+    expect(() => requirePossibleIrradiance(0, 60, 0, sa)).toThrow(/with the sun at or below the horizon/);
     expect(() => requirePossibleIrradiance(0, 60, sind(-5), sa)).toThrow(
       'dhi = 60 is not allowed: must be at most 50 W/m², the physically possible limit (Long & Shi 2008) with the sun at or below the horizon and an extraterrestrial 1367 W/m²',
     );
