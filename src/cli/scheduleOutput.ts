@@ -212,6 +212,7 @@ export function xlsxSummaryWriter(target: string, options: OutputOptions, title:
   entries.forEach((e, k) => {
     const row = contents.getRow(6 + k);
     row.getCell(1).value = { text: e.sheet, hyperlink: `#'${e.sheet}'!A1` } as ExcelJS.CellHyperlinkValue;
+    row.getCell(1).alignment = { vertical: 'top' };
     row.getCell(2).value = e.holds;
     row.getCell(2).alignment = { wrapText: true, vertical: 'top' };
   });

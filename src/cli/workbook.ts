@@ -183,6 +183,7 @@ export function fillContentsSheet(ws: ExcelJS.Worksheet, title: string, lines: r
   entries.forEach((e, k) => {
     const c = ws.getCell(t.headerRow + 1 + k, 1);
     c.value = { text: e.sheet, hyperlink: `#'${e.sheet.replace(/'/g, "''")}'!A1` } as ExcelJS.CellHyperlinkValue;
+    c.alignment = { vertical: 'top' }; // beside its description's first line, however many lines that wraps to
     ws.getCell(t.headerRow + 1 + k, 2).alignment = { wrapText: true, vertical: 'top' };
   });
   freezeAt(ws, top + 1);

@@ -26,6 +26,22 @@ function writeTemp(dir: string, name: string, text: string): string {
   return file;
 }
 
+/**
+ * Contents rows whose sheet name and description do not both sit at the top of their cell: a
+ * description wraps to several lines, and a name left at Excel's default (bottom) alignment then
+ * prints beside its last line, next to the following row's name (seen in LibreOffice's PDF).
+ */
+function contentsMisaligned(wb: ExcelJS.Workbook): string[] {
+  const contents = wb.getWorksheet('Contents')!;
+  const wrong: string[] = [];
+  contents.eachRow((row) => {
+    const link = row.getCell(1).value as ExcelJS.CellHyperlinkValue | null;
+    if (link === null || typeof link !== 'object' || !('hyperlink' in link)) return;
+    if (row.getCell(1).alignment?.vertical !== 'top' || row.getCell(2).alignment?.vertical !== 'top') wrong.push(link.text);
+  });
+  return wrong.length === 0 && contents.rowCount < 6 ? ['(no contents rows)'] : wrong;
+}
+
 describe('help texts', () => {
   it.each(['table', 'schedule', 'demo'])('prints the saved help of %s and exits 0', async (command) => {
     const r = await run(command, '--help');
@@ -68,6 +84,7 @@ describe('sunpane table', () => {
     const wb = new ExcelJS.Workbook();
     await wb.xlsx.readFile(out);
     expect(wb.worksheets.map((w) => w.name)).toEqual(['Contents', 'Monthly', 'Heat map', 'Hourly']);
+    expect(contentsMisaligned(wb)).toEqual([]);
     const hourly = wb.getWorksheet('Hourly')!;
     // Title, note, caution, a blank row, then the table: header in row 5, the hour ending 01:00 in row 6.
     expect(hourly.rowCount).toBe(5 + 8760);
@@ -217,6 +234,7 @@ describe('sunpane schedule', () => {
     expect(total.result).toBeCloseTo(e2 + e3, 9);
     // The caution on every sheet and at the end of the printed summary.
     expect(wb.worksheets.map((w) => w.name)).toEqual(['Contents', 'Summary']);
+    expect(contentsMisaligned(wb)).toEqual([]);
     expect(sheetsWithoutCaution(wb)).toEqual([]);
     expect(r.out.split('\n').at(-1)).toBe(CAUTION);
   });
