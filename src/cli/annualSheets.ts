@@ -27,9 +27,22 @@ export function stampHeader(series: AnnualSeries): string {
 
 /** How the rows of a series are stamped, in words (a sheet's note under its title). */
 export function rowsNote(series: AnnualSeries): string {
-  return series.timeConvention === 'instant'
-    ? 'Rows are instants at the top of each hour, local standard time; the sun is taken at the instant (time convention instant).'
-    : 'Rows are hour-ending, local standard time; the sun is taken at the middle of the hour (time convention hourEnding).';
+  const rows =
+    series.timeConvention === 'instant'
+      ? 'Rows are instants at the top of each hour, local standard time; the sun is taken at the instant (time convention instant).'
+      : 'Rows are hour-ending, local standard time; the sun is taken at the middle of the hour (time convention hourEnding).';
+  const clock = standardTimeNote(series);
+  return clock === undefined ? rows : `${rows} ${clock}`;
+}
+
+/**
+ * For a window with a daylight-saving rule: that the command line's stamps stay in local standard
+ * time all year and how to read them on the clock (the worksheet functions and the pane give clock
+ * stamps; docs/conventions.md). Undefined without a rule.
+ */
+export function standardTimeNote(series: AnnualSeries): string | undefined {
+  if (series.clockStamp === series.stampSerial) return undefined;
+  return `Stamps stay in local standard time all year: the window's rule (${series.clockRule}) is not applied to them; while it is in force, clock time is standard time plus its shift.`;
 }
 
 /** The gain column's header (used by formulas that refer to it). */
@@ -167,7 +180,8 @@ export function addMonthlySheet(
   title = 'Solar gain by month',
 ): MonthlyCells {
   const sheet = ws.name;
-  const top = addSheetHeading(ws, title);
+  const clock = hourly ? standardTimeNote(hourly.series) : undefined;
+  const top = addSheetHeading(ws, title, clock === undefined ? [] : [clock]);
   const loadPeaks = hourly?.load ? monthlyLoadPeaks(hourly.series, hourly.load) : undefined;
   const instant = hourly?.series.timeConvention === 'instant';
   const loadHeader = LOAD_WORDS.peakLoad;
@@ -280,7 +294,8 @@ export function addMonthlySheet(
  */
 export function addHeatMapSheet(wb: ExcelJS.Workbook, sheet: string, series: AnnualSeries, title: string): void {
   const ws = wb.addWorksheet(sheet);
-  const headerRow = addSheetHeading(ws, title);
+  const clock = standardTimeNote(series);
+  const headerRow = addSheetHeading(ws, title, clock === undefined ? [] : [clock]);
   ws.getCell(headerRow, 1).value = 'Day';
   const first = series.timeConvention === 'instant' ? 0 : 1;
   for (let h = 0; h < 24; h++) ws.getCell(headerRow, h + 2).value = h + first;

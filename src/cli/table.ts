@@ -8,7 +8,7 @@ import { annualLoadParts, type LoadPeak, loadPeak, windowRoomSeries } from '../c
 import { formatSerialIso } from '../core/time';
 import { CAUTION } from '../outputs/caution';
 import type { Output } from './call';
-import { addHeatMapSheet, addHourlySheet, addMonthlySheet, hourlyCsv } from './annualSheets';
+import { addHeatMapSheet, addHourlySheet, addMonthlySheet, hourlyCsv, standardTimeNote } from './annualSheets';
 import { checkOutput, writeFileAtomic } from './atomicWrite';
 import { CliInputError } from './cliError';
 import { DATE_SYSTEM_FLAG, dateSystemFlag, dateSystemHelp, outputKind, parseFlags, requireFlag } from './flags';
@@ -134,6 +134,8 @@ export async function tableCommand(argv: readonly string[], io: Output): Promise
     await saveWorkbook(wb, out, force, [monthly.chart]);
   }
   io.out(tableSummaryLine(series, summary, load ? loadPeak(series, load) : undefined));
+  const clock = standardTimeNote(series);
+  if (clock !== undefined) io.out(clock);
   io.out(`wrote ${path.normalize(out)}`);
   io.out(CAUTION);
   return 0;

@@ -10,6 +10,9 @@ import ExcelJS from 'exceljs';
 import { CAUTION } from '../../src/outputs/caution';
 import { sheetsWithoutCaution } from '../support/caution';
 import { EXAMPLES, ROOT, expectSaved, run, tempDir } from './run';
+import { addHeatMapSheet, addHourlySheet, addMonthlySheet } from '../../src/cli/annualSheets';
+import { annualSeries, summarizeAnnual } from '../../src/core/gain';
+import { readWindowFile } from '../../src/cli/windowJson';
 
 const WINDOW = path.join(EXAMPLES, 'east-office.json');
 const WEATHER = path.join(EXAMPLES, 'weather-brackwater-2026.csv');
@@ -74,6 +77,33 @@ describe('sunpane table', () => {
     expectSaved('table-east-head.txt', lines.slice(0, 25).join('\n'));
     expect(r.out.split('\n').at(-1)).toBe(CAUTION);
     expect(r.out).toMatch(/^East meeting room: \d+\.\d kWh in 2026, peak \d+ W in the hour ending 2026-\d\d-\d\dT\d\d:00, \d+ sunlit hours\nwrote /);
+  });
+
+  it('says, for a window with a daylight-saving rule, that its stamps stay in standard time (printed and on every year sheet), and nothing without one', async () => {
+    // The command line's table is stamped in local standard time all year; the worksheet functions
+    // and the pane stamp on the clock (docs/conventions.md). A rule in the window file must not pass unseen.
+    const dir = tempDir();
+    const file = path.join(dir, 'with-rule.json');
+    const window = JSON.parse(fs.readFileSync(WINDOW, 'utf8'));
+    fs.writeFileSync(file, JSON.stringify({ ...window, daylightSavingStart: '2026-03-29T02:00', daylightSavingEnd: '2026-10-25T03:00' }));
+    const note = /^Stamps stay in local standard time all year: the window's rule \(daylight saving \+1 h from the last Sunday of March 02:00 to the last Sunday of October 03:00 \(clock time\), every year\) is not applied to them; while it is in force, clock time is standard time plus its shift\.$/m;
+    const r = await run('table', '--window', file, '--out', path.join(dir, 'with-rule.csv'));
+    expect(r).toMatchObject({ code: 0, err: '' });
+    expect(r.out).toMatch(note);
+    const plain = await run('table', '--window', WINDOW, '--out', path.join(dir, 'plain.csv'));
+    expect(plain.out).not.toMatch(/Stamps stay/);
+    // The sheets of the workbook, built in memory from the same window.
+    for (const [spec, expected] of [[readWindowFile(file).spec, true], [readWindowFile(WINDOW).spec, false]] as const) {
+      const series = annualSeries(spec);
+      const wb = new ExcelJS.Workbook();
+      const placement = addHourlySheet(wb, 'Hourly', 'Hourly', series);
+      addHeatMapSheet(wb, 'Heat map', series, 'heat map');
+      addMonthlySheet(wb.addWorksheet('Monthly'), 'Monthly', summarizeAnnual(series), { sheet: 'Hourly', placement, series });
+      for (const ws of wb.worksheets) {
+        const lines = [2, 3].map((row) => String(ws.getCell(row, 1).value ?? ''));
+        expect([ws.name, lines.some((l) => /Stamps stay in local standard time all year: the window's rule \(daylight saving \+1 h/.test(l))]).toEqual([ws.name, expected]);
+      }
+    }
   });
 
   it('reads hourly weather by column name and writes a workbook with hourly, monthly and heat-map sheets', async () => {
