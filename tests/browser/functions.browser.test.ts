@@ -21,6 +21,7 @@ import { NotAvailable, type OutTable } from '../../src/registry/types';
 import { type Cell, FORMULAS, type FormulaArg, excelArgs } from '../fixtures/formulas';
 import { badArgs, firstBroadcastIndex, otherValue, transpose, validArgs } from '../functions/sample-args';
 import { DIST, launchBrowser, openAddinPage } from './chromium';
+import { Mismatches } from '../support/mismatches';
 
 const HOST_JS = fs.readFileSync(path.join(__dirname, 'excel-host.js'), 'utf8');
 
@@ -117,14 +118,24 @@ function expectSame(actual: CallResult, expected: CallResult): void {
     expect(actual).toHaveProperty('ok');
     const got = (actual as { ok: Shown[][] }).ok;
     expect(got.length).toBe(expected.ok.length);
+    // Cell by cell with plain comparisons (a year's spill has tens of thousands of cells: see
+    // tests/support/mismatches.ts); the cells that are not numbers are compared in one toEqual.
+    const found = new Mismatches();
+    const gotOthers: Shown[] = [];
+    const expectedOthers: Shown[] = [];
     expected.ok.forEach((row, i) => {
-      expect(got[i].length).toBe(row.length);
+      found.check(got[i].length === row.length, () => `row ${i + 1}: ${got[i].length} cells, the registry in node gives ${row.length}`);
       row.forEach((cell, j) => {
         // Same code on both sides: equal to 1e-9 relative (allows only a different summation order).
-        if (typeof cell === 'number') expect(Math.abs((got[i][j] as number) - cell)).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(cell)));
-        else expect(got[i][j]).toEqual(cell);
+        if (typeof cell === 'number') found.check(Math.abs((got[i][j] as number) - cell) <= 1e-9 * Math.max(1, Math.abs(cell)), () => `row ${i + 1}, column ${j + 1}: ${JSON.stringify(got[i][j])}, the registry in node ${cell}`);
+        else {
+          gotOthers.push(got[i][j]);
+          expectedOthers.push(cell);
+        }
       });
     });
+    expect(found.list).toEqual([]);
+    expect(gotOthers).toEqual(expectedOthers);
   } else {
     expect(actual).toEqual(expected);
   }
@@ -178,7 +189,9 @@ describe.each(FUNCTIONS.map((fn) => [fn.name, fn] as const))('%s in the built ad
     const out = await call(name, args);
     expectSame(out, expectedFromNode(name, args));
     expect(out).toHaveProperty('ok');
-    for (const r of (out as { ok: Shown[][] }).ok) for (const c of r) expect(typeof c === 'number' || typeof c === 'string' || (c as { error?: string }).error === '#N/A').toBe(true);
+    const found = new Mismatches();
+    for (const r of (out as { ok: Shown[][] }).ok) for (const c of r) found.check(typeof c === 'number' || typeof c === 'string' || (c as { error?: string }).error === '#N/A', () => `cell ${JSON.stringify(c)}`);
+    expect(found.list).toEqual([]);
   });
 
   test('a 2 × 1 range in the first broadcast argument gives a 2 × 1 result (spilling functions refuse it; list-only functions read a column like a row)', async () => {

@@ -36,6 +36,16 @@ export class Mismatches {
   }
 }
 
+/**
+ * jest's `toBeCloseTo(expected, digits)` as a plain test: |expected − received| < 10^−digits / 2, and
+ * equal infinities pass.
+ */
+export function closeToDigits(received: number, expected: number, digits = 2): boolean {
+  if (received === Number.POSITIVE_INFINITY && expected === Number.POSITIVE_INFINITY) return true;
+  if (received === Number.NEGATIVE_INFINITY && expected === Number.NEGATIVE_INFINITY) return true;
+  return Math.abs(expected - received) < Math.pow(10, -digits) / 2;
+}
+
 /** Throws an Error with the words `what()` gives when `ok` is false (for fast-check properties). */
 export function must(ok: boolean, what: () => string): void {
   if (!ok) throw new Error(what());

@@ -7,6 +7,7 @@ import fc from 'fast-check';
 import { CURVE_STEP, diffuseShgc, diffuseShgcFromTable, glassArea, interiorAttenuationOf, shgcAtAngle, shgcCurve, shgcFromTable } from '../../../src/core/glazing/shgc';
 import { hemisphericalAverage } from '../../../src/core/common/hemispherical';
 import { expectArgumentError } from '../../support/expectError';
+import { must } from '../../support/mismatches';
 
 const TABLE = { angles: [0, 40, 50, 60, 70, 80], values: [0.7, 0.68, 0.66, 0.6, 0.48, 0.28] };
 
@@ -30,10 +31,9 @@ describe('SHGC by the physical model', () => {
         let previous = Infinity;
         for (let theta = 0; theta <= 90; theta += 0.5) {
           const v = shgcAtAngle(s, panes, theta);
-          expect(v).toBeLessThanOrEqual(previous + 1e-15);
-          expect(v).toBeGreaterThanOrEqual(0);
-          expect(v).toBeLessThanOrEqual(s + 1e-15);
-          expect(Math.abs(curve.atAngle(theta) - v)).toBeLessThan(1e-4);
+          must(v <= previous + 1e-15, () => `${theta}°: ${v} above the value before it, ${previous}`);
+          must(v >= 0 && v <= s + 1e-15, () => `${theta}°: ${v} outside 0…${s}`);
+          must(Math.abs(curve.atAngle(theta) - v) < 1e-4, () => `${theta}°: curve ${curve.atAngle(theta)}, model ${v}`);
           previous = v;
         }
       }),
@@ -156,7 +156,8 @@ describe('SHGC curve lookup filled on first use', () => {
         ] as const) {
           const lo = exact(k * CURVE_STEP);
           const hi = exact((k + 1) * CURVE_STEP);
-          expect(Math.abs(curve.atAngle(theta) - (lo + f * (hi - lo)))).toBeLessThanOrEqual(1e-15);
+          const between = lo + f * (hi - lo);
+          must(Math.abs(curve.atAngle(theta) - between) <= 1e-15, () => `${theta}°: curve ${curve.atAngle(theta)}, between the nodes ${between}`);
         }
       }),
       { numRuns: 2000, seed: 31 },
