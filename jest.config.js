@@ -10,5 +10,8 @@ module.exports = {
   // 2-core CI machine (quiet, December 2026); the browser and LibreOffice tests each start their
   // own Chromium and their own office profile, so two files at once do not meet.
   maxWorkers: 2,
+  // Longest files first, in a fresh clone too (jest's own order starts untimed files by size, and
+  // the fuzz files are a few lines each): tests/slow-first-sequencer.js.
+  testSequencer: '<rootDir>/tests/slow-first-sequencer.js',
   reporters: ['default', '<rootDir>/tests/summary-reporter.js'],
 };
