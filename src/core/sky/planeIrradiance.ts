@@ -188,6 +188,7 @@ function planeOf(tilt: number, albedo: number, model: SkyModel, shade: Omit<Diff
     isotropicShade: shade.isotropic,
     horizonShade: shade.horizon,
     groundShade: shade.ground,
+    // Stryker disable next-line ObjectLiteral: a scratch record; the kernels write every field they later read (f1 and f2 before the combination, the parts after it)
     perez: { epsilon: 1, delta: 0, bin: 1, f1: 0, f2: 0, isotropic: 0, circumsolar: 0, horizon: 0, total: 0 },
   };
 }
@@ -402,6 +403,7 @@ export function perezBrightnessColumns(dni: ArrayLike<number>, dhi: ArrayLike<nu
   const n = altitude.length;
   const f1 = new Float64Array(n);
   const f2 = new Float64Array(n);
+  // Stryker disable next-line ObjectLiteral: a scratch record; perezBrightnessKernel writes all five fields before f1 and f2 are read
   const b: PerezBrightness = { epsilon: 1, delta: 0, bin: 1, f1: 0, f2: 0 };
   for (let k = 0; k < hours.length; k++) {
     const i = hours[k];

@@ -103,6 +103,28 @@ describe('prepared planes', () => {
     expect(o.total).toBeCloseTo(o.beam + o.sky + o.ground, 9);
   });
 
+  test('many hours at once: only the rows listed (the first `count` of them) are worked out; the others are left as they were', () => {
+    const plane = preparePlane({ surfaceTilt: 90, surfaceAzimuth: 180, groundAlbedo: 0.2, skyModel: 'perez1990' });
+    const n = 3;
+    const col = (v: number) => new Float64Array(n).fill(v);
+    const c = { dni: col(600), dhi: col(100), altitude: col(35), sinAltitude: col(sind(35)), cosIncidence: col(cosd(35) * cosd(20)), dniExtra: col(1330), circumsolar: col(1), beam: col(-7), sky: col(-7), ground: col(-7), skyUnshaded: col(-7), groundUnshaded: col(-7) };
+    plane.irradianceRows(Int32Array.from([0, 2]), 1, c);
+    expect(c.beam[0]).toBeCloseTo(600 * cosd(35) * cosd(20), 9);
+    for (const key of ['beam', 'sky', 'ground', 'skyUnshaded', 'groundUnshaded'] as const) {
+      expect(c[key][1]).toBe(-7); // not listed
+      expect(c[key][2]).toBe(-7); // listed after the count
+    }
+  });
+
+  test('the clear-day form under a shade: all of it goes through the sky view ratio (it has no separate circumsolar or horizon part)', () => {
+    const input = { ...base, skyModel: 'ashraeClearDay' as const, sunAltitude: 40, sunAzimuth: 200, dni: 700, dhi: 110 };
+    const bare = planeIrradiance(input);
+    const shaded = planeIrradiance({ ...input, shade: { isotropic: 0.4, circumsolar: 0.2, horizon: 0.9, ground: 0.5 } });
+    expect(shaded.skyUnshaded).toBe(bare.sky);
+    expect(shaded.sky).toBeCloseTo(0.4 * bare.sky, 9);
+    expect(shaded.ground).toBeCloseTo(0.5 * bare.ground, 9);
+  });
+
   test('what each model needs: the extraterrestrial irradiance for Hay–Davies and Perez only; shared coefficients for Perez only', () => {
     const flags = (skyModel: PlaneIrradianceInput['skyModel']) => {
       const p = preparePlane({ surfaceTilt: 90, surfaceAzimuth: 180, groundAlbedo: 0.2, skyModel });
