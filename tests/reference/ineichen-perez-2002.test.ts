@@ -32,6 +32,24 @@ describe('Ineichen–Perez (2002) clear sky', () => {
     expect(r.dhi / (ghi - dni * cosZ)).toBeCloseTo(1, 9);
   });
 
+  test('a clean sky (TL 1.5) at 1500 m with the sun 20° high: the beam is the global-based limit, not the beam formula (1e-9 relative)', () => {
+    // There the second term of DNI = min(b I0 exp(−0.09 m (TL − 1)), GHI (1 − (0.1 − 0.2 e^−TL)/(0.1 + 0.882/fh1)) / cos z) is the smaller.
+    const [h, tl, altitude, day] = [1500, 1.5, 20, 172];
+    const i0 = extraterrestrialSpencer(day);
+    const m = airMassKastenYoung(altitude) * (1 - 2.25577e-5 * h) ** 5.25588; // absolute air mass
+    const cosZ = Math.sin((altitude * Math.PI) / 180);
+    const fh1 = Math.exp(-h / 8000);
+    const fh2 = Math.exp(-h / 1250);
+    const ghi = (5.09e-5 * h + 0.868) * i0 * cosZ * Math.exp(-(3.92e-5 * h + 0.0387) * m * (fh1 + fh2 * (tl - 1))) * Math.exp(0.01 * m ** 1.8);
+    const dniModel = (0.664 + 0.163 / fh1) * i0 * Math.exp(-0.09 * m * (tl - 1));
+    const dniLimit = (ghi * (1 - (0.1 - 0.2 * Math.exp(-tl)) / (0.1 + 0.882 / fh1))) / cosZ;
+    expect(dniLimit).toBeLessThan(dniModel - 10);
+    const r = ineichenPerezClearSky(altitude, day, tl, h);
+    expect(r.dni / dniLimit).toBeCloseTo(1, 9);
+    expect(r.ghi / ghi).toBeCloseTo(1, 9);
+    expect(r.dhi / (ghi - dniLimit * cosZ)).toBeCloseTo(1, 9);
+  });
+
   test('a higher site gets more beam and more global at every sun altitude, and global stays below the extraterrestrial on the horizontal (common practice, no source)', () => {
     for (const altitude of [5, 20, 45, 80]) {
       const low = ineichenPerezClearSky(altitude, 172, 3, 0);

@@ -109,6 +109,11 @@ describe('ASHRAE τb/τd pairs past the physically possible limits', () => {
       expect(() => ashraeClearSky(30, 100, 0.4, 2.3)).not.toThrow();
       expect(() => ashraeClearSky(30, 100, 0.001, 2.3)).toThrow(/^tauD = 2\.3 is not allowed: must give, with tauB = 0\.001/);
     }
+    // Judged on its own (the clear-sky function also checks the sun asked for, which would hide a pair let through here).
+    expect(() => requireClearSkyPair(0.4, 2.3)).not.toThrow();
+    expect(() => requireClearSkyPair(0.4, 0.5)).toThrow(/^tauD = 0\.5 is not allowed/);
+    expect(() => requireClearSkyPair(0.4, 2.3)).not.toThrow();
+    expect(() => requireClearSkyPair(0.001, 2.3)).toThrow(/^tauD = 2\.3 is not allowed/);
     expect(() => requireClearSkyPair(1.2, 4, { tauB: 'beamDepth', tauD: 'diffuseDepth' })).toThrow(/^diffuseDepth = 4 is not allowed: must give, with beamDepth = 1\.2, /);
   });
 });
