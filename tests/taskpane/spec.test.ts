@@ -8,7 +8,8 @@ import { inGlossaryWords } from '../../src/registry/windowRange';
 import { SunpaneError } from '../../src/core/common/errors';
 import type { WindowSpec } from '../../src/core/gain/window';
 import { validateWindowSpec } from '../../src/core/gain/windowSpec';
-import { applyExampleSite, fieldForArgument, initialValues } from '../../src/taskpane/fields';
+import { FIELD_BY_ID, applyExampleSite, fieldForArgument, initialValues } from '../../src/taskpane/fields';
+import { inUserWords } from '../../src/taskpane/messages';
 import { buildWindowSpec, findProblems, isClean, readListText, readNumberText } from '../../src/taskpane/spec';
 import { validateSpec } from '../../src/taskpane/engine';
 import { applyFunction } from '../../src/registry/evaluate';
@@ -78,6 +79,20 @@ describe('the window form', () => {
     expect(problems.byField.linkeTurbidity).toBe(coreMessage({ ...base, weather: { kind: 'ineichenClearSky', linkeTurbidity: monthly } }));
     expect(problems.byField.linkeTurbidity).toMatch(/^linkeTurbidity \(value 6\) = 30 is not allowed/);
     expect(isClean(findProblems({ ...initialValues(), year: '2025', linkeTurbidity: '3,3,3,3,3,3,3,3,3,3,3,3' }, validate))).toBe(true);
+  });
+
+  test('a τd list of a length other than 1 or 12 gets the monthly-list words beside the Tau d box, whatever τb holds; 1 beside 12 is accepted', () => {
+    const ashrae = { ...initialValues(), year: '2025', weatherSource: 'ashraeClearSky' };
+    const twelve = '0.4, 0.4, 0.4, 0.4, 0.4, 0.4, 0.4, 0.4, 0.4, 0.4, 0.4, 0.4';
+    const words = 'a list of 2 is not allowed: must be a list of 12 monthly values (January first) or of one value for the whole year';
+    for (const tauB of ['0.4', twelve]) {
+      const problems = findProblems({ ...ashrae, tauB, tauD: '2.2; 2.3' }, validateSpec);
+      expect(problems).toEqual({ byField: { tauD: `tauD = ${words}` }, general: [] });
+      // as the pane shows it under the box (formView.ts): the box's label, then the core's words
+      expect(inUserWords(problems.byField.tauD, FIELD_BY_ID.get('tauD')!.label)).toBe(`Tau d, diffuse optical depth (1 or 12 values): ${words}`);
+    }
+    expect(isClean(findProblems({ ...ashrae, tauB: twelve, tauD: '2.2' }, validateSpec))).toBe(true);
+    expect(isClean(findProblems({ ...ashrae, tauB: '0.4', tauD: twelve.replace(/0\.4/g, '2.2') }, validateSpec))).toBe(true);
   });
 
   test('hourly weather needs two range addresses, checked before anything is read', () => {

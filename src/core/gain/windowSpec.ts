@@ -119,10 +119,8 @@ function validateWeather(weather: Weather, year: number): void {
     case 'ashraeClearSky':
       validateMonthly('weather.tauB', weather.tauB, 0, TAU_B_MAX, true);
       validateMonthly('weather.tauD', weather.tauD, 0, TAU_D_MAX, true);
-      // One value stands for every month (monthlyValue), so one beside twelve is read month by month.
-      if (weather.tauB.length !== weather.tauD.length && weather.tauB.length !== 1 && weather.tauD.length !== 1) {
-        throw new SunpaneError('weather.tauD', weather.tauD, `must hold as many values as weather.tauB (${weather.tauB.length}), or one for every month`);
-      }
+      // Each list holds 1 or 12 values, so any pair goes together: one value stands for every month
+      // (monthlyValue), and one beside twelve is read month by month.
       validateDesignTemperatures(weather);
       break;
     case 'ineichenClearSky':

@@ -93,6 +93,9 @@ describe('window description refusals', () => {
     const monthly = 'is not allowed: must be a list of 12 monthly values (January first) or of one value for the whole year';
     expect(refusal(weather({ kind: 'ashraeClearSky', tauB: [0.4, 0.4], tauD: [2.3] }))).toBe(`weather.tauB = a list of 2 ${monthly}`);
     expect(refusal(weather({ kind: 'ashraeClearSky', tauB: [0.4], tauD: 2.3 }))).toBe(`weather.tauD = 2.3 ${monthly}`);
+    // τd of a length τb does not have: refused for its own length, in the same words, whatever τb holds
+    expect(refusal(weather({ kind: 'ashraeClearSky', tauB: new Array<number>(12).fill(0.4), tauD: [2.3, 2.3] }))).toBe(`weather.tauD = a list of 2 ${monthly}`);
+    expect(refusal(weather({ kind: 'ashraeClearSky', tauB: [0.4], tauD: new Array<number>(11).fill(2.3) }))).toBe(`weather.tauD = a list of 11 ${monthly}`);
     expect(refusal(weather({ kind: 'ashraeClearSky', tauB: [0], tauD: [2.3] }))).toBe('weather.tauB[0] = 0 is not allowed: must be a number above 0 and up to 1.2');
     expect(refusal(weather({ kind: 'ashraeClearSky', tauB: [0.4], tauD: [2.3, 2.3, 2.3, 2.3, 2.3, 2.3, 2.3, 2.3, 2.3, 2.3, 2.3, 4.5] }))).toBe(
       'weather.tauD[11] = 4.5 is not allowed: must be a number above 0 and up to 4',
