@@ -6,7 +6,7 @@
 import { type AnnualSeries, annualSeries, type AnnualSummary, summarizeAnnual, type WindowSpec, validateWindowSpec } from '../core/gain';
 import { shadingMaskGrid, type Shading } from '../core/shading';
 import { sunPosition, incidenceAngle } from '../core/sun';
-import { civilToSerial, serialToUtcMs } from '../core/time';
+import { civilToSerial, inDaylightSaving, serialToUtcMs } from '../core/time';
 import { annualLoadParts, loadPeak, windowRoomSeries } from '../core/load';
 import { type HourlyData, hourlyData } from '../outputs/hourlyColumns';
 import { inGlossaryWords } from '../registry/windowRange';
@@ -95,6 +95,16 @@ export function sunTracks(spec: WindowSpec, days: readonly (readonly [number, nu
     }
     return { month, day, points };
   });
+}
+
+/**
+ * How far the window's clock is ahead of local standard time on a day of its year [h]: the rule's
+ * shift when the day's noon (standard time) falls in daylight saving under the core's rule, else 0
+ * (and 0 with no rule). Noon stands for the day's daylight hours, since clocks change at night.
+ */
+export function clockAheadOn(spec: WindowSpec, month: number, day: number): number {
+  const rule = spec.site.daylightSaving;
+  return rule !== undefined && inDaylightSaving(civilToSerial(spec.year, month, day, 12), rule) ? rule.shift : 0;
 }
 
 /** Where the sun can be relative to the window, cell by cell of the sky. */

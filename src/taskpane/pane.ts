@@ -161,8 +161,22 @@ export function createPane(doc: Document, host: PaneHost): void {
     if (checkTimer) clearTimeout(checkTimer);
     checkTimer = setTimeout(checkForm, 250);
   }
+  /**
+   * The workbook's date system as Excel last said (1900, the default, until it has answered): a
+   * serial typed in a daylight-saving box counts days in it, as the workbook's cells do. Asked when
+   * the pane opens and again before each run and drawing (the option can change while the pane is open).
+   */
+  let dateSystem: DateSystem = 1900;
+  async function askDateSystem(): Promise<DateSystem> {
+    const system = await workbookDateSystem(host.run);
+    if (system !== dateSystem) {
+      dateSystem = system;
+      checkForm();
+    }
+    return system;
+  }
   function checkForm(): boolean {
-    const problems = findProblems(state.form, validateSpec);
+    const problems = findProblems(state.form, validateSpec, undefined, dateSystem);
     showProblems(doc, problems, formGeneral);
     return isClean(problems);
   }
@@ -214,6 +228,9 @@ export function createPane(doc: Document, host: PaneHost): void {
   let weatherLines: string[] = [];
   async function withSheetData(values: FormValues): Promise<{ spec: WindowSpec; data: SheetData; dateSystem: DateSystem } | undefined> {
     weatherLines = [];
+    // The workbook's date system first: the daylight-saving boxes' serials and the weather's serial
+    // stamps are read, and the pane's date-times written, in it.
+    const system = await askDateSystem();
     if (!checkForm()) {
       say('Fix the marked boxes on the Window tab first.', 'error');
       return undefined;
@@ -229,12 +246,10 @@ export function createPane(doc: Document, host: PaneHost): void {
       }
       throw err;
     }
-    // The workbook's date system: its serial stamps are read, and the pane's date-times written, in it.
-    const dateSystem = await workbookDateSystem(host.run);
-    if (data.weatherRanges) data = { ...data, weatherRanges: { ...data.weatherRanges, dateSystem } };
+    if (data.weatherRanges) data = { ...data, weatherRanges: { ...data.weatherRanges, dateSystem: system } };
     // Hourly weather: checked as the command line checks it (src/io/weather.ts), for the form's year and site.
     try {
-      const base = buildWindowSpec(values, {});
+      const base = buildWindowSpec(values, {}, system);
       const checked = withCheckedWeather(data, values, base.site, base.year);
       weatherLines = checked.lines;
       if (!checked.usable) {
@@ -252,14 +267,14 @@ export function createPane(doc: Document, host: PaneHost): void {
       }
       throw err;
     }
-    const problems = findProblems(values, validateSpec, data);
+    const problems = findProblems(values, validateSpec, data, system);
     if (!isClean(problems)) {
       showProblems(doc, problems, formGeneral);
       say('The ranges the form points at hold values the calculation cannot use: see the marked boxes.', 'error');
       return undefined;
     }
     if (weatherLines.length) formGeneral.textContent = weatherLines.join('\n');
-    return { spec: buildWindowSpec(values, data), data, dateSystem };
+    return { spec: buildWindowSpec(values, data, system), data, dateSystem: system };
   }
   function fieldMessage(err: SunpaneError): Record<string, string> {
     for (const [id, f] of FIELD_BY_ID) if ((f.paths ?? []).some((p) => err.argument.startsWith(p))) return { [id]: err.message };
@@ -481,11 +496,14 @@ export function createPane(doc: Document, host: PaneHost): void {
   const sunPath = drawSunPath(doc, panels.sunpath, () => {
     state.form = readForm(doc);
     return state.form;
-  }, validateSpec, host.run);
+  }, validateSpec, host.run, () => askDateSystem().catch(() => dateSystem));
   const redrawSunPath = sunPath.redraw;
   primaryOf.sunpath = sunPath.drawButton;
   footerActions.append(sunPath.drawButton);
 
   selectTab('window');
   checkForm();
+  // A workbook in the 1904 system: the form is checked again once Excel has said so (a failed
+  // request leaves 1900 until the next run asks again).
+  void askDateSystem().catch(() => undefined);
 }

@@ -161,7 +161,7 @@ function readRow(line: readonly unknown[], present: readonly { column: ScheduleC
   }
   let extra: { column: ScheduleColumn; header: string; text: string } | undefined;
   try {
-    const spec = buildWindowSpec(values, rowData);
+    const spec = buildWindowSpec(values, rowData, dateSystem);
     for (const x of extras) {
       extra = x;
       // Date-time cells are serials of the workbook's date system; a date-system column must name it.

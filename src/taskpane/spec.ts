@@ -11,7 +11,7 @@ import type { Weather, WindowSpec } from '../core/gain';
 import { GLOSSARY } from '../registry/glossary';
 import type { Scalar } from '../registry/types';
 import { fieldsOf, inGlossaryWords } from '../registry/windowRange';
-import type { DaylightSavingRule } from '../core/time';
+import type { DateSystem, DaylightSavingRule } from '../core/time';
 import { RANGE_ADDRESS_HELP, parseRangeAddress } from './addresses';
 import type { SheetWeather } from './weather';
 import { FIELDS, FIELD_BY_ID, type FieldDef, type FormValues, fieldForArgument } from './fields';
@@ -105,16 +105,22 @@ const DAYLIGHT_SAVING = [GLOSSARY.daylightSavingStart, GLOSSARY.daylightSavingEn
 
 /**
  * The daylight-saving rule of the form, its cells read as the worksheet functions read the same
- * fields of a window (the window reader: a date-time as a serial or ISO 8601 text), the shift 1 h
- * when blank (the glossary's default); undefined when the three boxes are blank. Nothing is checked
- * here: the core's validator checks the rule, so a bad one (an end before the start, a shift out of
- * range, a start without an end) gets the functions' own message, naming the field.
- * @throws SunpaneError naming the field when a box's text is no date-time or number
+ * fields of a window in the workbook (the window reader: a date-time as ISO 8601 text, or as a
+ * serial of the workbook's date system, as a window range with that dateSystem reads it), the shift
+ * 1 h when blank (the glossary's default); undefined when the three boxes are blank. Nothing is
+ * checked here: the core's validator checks the rule, so a bad one (an end before the start, a
+ * shift out of range, a start without an end) gets the functions' own message, naming the field.
+ * @param dateSystem - the workbook's date system (./dateSystem.ts): a serial typed in a box counts
+ *   days in it, as the workbook's own cells do
+ * @returns the rule, its dates as 1900-system serials (the core's)
+ * @throws SunpaneError naming the field when a box's text is no date-time or number, or a serial
+ *   outside the date system
  */
-export function daylightSavingOf(values: FormValues): DaylightSavingRule | undefined {
+export function daylightSavingOf(values: FormValues, dateSystem: DateSystem): DaylightSavingRule | undefined {
   const given = DAYLIGHT_SAVING.filter((g) => (values[g.name] ?? '').trim() !== '');
   if (given.length === 0) return undefined;
-  const f = fieldsOf(given.map((g) => ({ field: g, written: g.name, cell: readNumberText(values[g.name]) as Scalar })));
+  const boxes = given.map((g) => ({ field: g, written: g.name, cell: readNumberText(values[g.name]) as Scalar }));
+  const f = fieldsOf([...boxes, { field: GLOSSARY.dateSystem, written: GLOSSARY.dateSystem.name, cell: dateSystem }]);
   const at = (g: (typeof DAYLIGHT_SAVING)[number]) => f.values.get(g.name) as number | undefined;
   return { start: at(GLOSSARY.daylightSavingStart), end: at(GLOSSARY.daylightSavingEnd), shift: at(GLOSSARY.daylightSavingShift) ?? (GLOSSARY.daylightSavingShift.default as number) } as DaylightSavingRule;
 }
@@ -122,8 +128,10 @@ export function daylightSavingOf(values: FormValues): DaylightSavingRule | undef
 /**
  * The WindowSpec the form describes. Devices of depth 0 are left out; the skyline, angle table and
  * hourly weather come from `data` (read from the sheets beforehand).
+ * @param dateSystem - the workbook's date system, in which a serial in a daylight-saving box counts
+ *   (default 1900, the default system: for a caller with no workbook to ask)
  */
-export function buildWindowSpec(values: FormValues, data: SheetData = {}): WindowSpec {
+export function buildWindowSpec(values: FormValues, data: SheetData = {}, dateSystem: DateSystem = 1900): WindowSpec {
   const shading: Shading = {};
   if (!isZero(values, 'overhangProjection')) {
     shading.overhang = {
@@ -146,7 +154,7 @@ export function buildWindowSpec(values: FormValues, data: SheetData = {}): Windo
   if (data.skyline) shading.skyline = data.skyline;
 
   const table = values.glassModel === 'table';
-  const daylightSaving = daylightSavingOf(values);
+  const daylightSaving = daylightSavingOf(values, dateSystem);
   return {
     name: (values.name ?? '').trim() || 'Window',
     site: {
@@ -193,14 +201,15 @@ const STAND_IN_WEATHER: Weather = { kind: 'ineichenClearSky', linkeTurbidity: [3
  * @param values - the form as typed
  * @param validate - the core's WindowSpec validator
  * @param data - sheet data already read; without it, hourly weather is not checked here
+ * @param dateSystem - the workbook's date system (see {@link buildWindowSpec})
  */
-export function findProblems(values: FormValues, validate: SpecValidator, data?: SheetData): FormProblems {
+export function findProblems(values: FormValues, validate: SpecValidator, data?: SheetData, dateSystem: DateSystem = 1900): FormProblems {
   const problems: FormProblems = { byField: {}, general: [] };
   const work: FormValues = { ...values };
   for (let round = 0; round < FIELDS.length + 2; round++) {
     try {
       checkAddresses(work);
-      const spec = buildWindowSpec(work, data ?? {});
+      const spec = buildWindowSpec(work, data ?? {}, dateSystem);
       if (!data && (spec.weather.kind === 'measured' || spec.weather.kind === 'globalHorizontal')) spec.weather = STAND_IN_WEATHER;
       validate(spec);
       return problems;

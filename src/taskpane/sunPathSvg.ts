@@ -26,6 +26,8 @@ export const SUN_PATH_COLOURS = {
 const SIZE = 320;
 /** Height of the picture's lettering in its own units (the picture is 320 units wide). */
 export const TEXT_SIZE = 12;
+/** Height of one line of lettering under the sky [units]. */
+const NOTE_LINE = 15;
 const CX = 160;
 const CY = 160;
 const R = 136;
@@ -59,6 +61,8 @@ export interface SunPathDrawing {
   skyline?: readonly number[];
   /** Text under the title, e.g. which mask is shown. */
   caption: string;
+  /** Lines lettered under the sky, e.g. the time the hour dots are in. */
+  timeNote?: readonly string[];
 }
 
 function escapeXml(text: string): string {
@@ -69,7 +73,10 @@ function escapeXml(text: string): string {
 export function sunPathSvg(d: SunPathDrawing): string {
   const c = SUN_PATH_COLOURS;
   const parts: string[] = [];
-  parts.push(`<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 ${SIZE} ${SIZE}" width="100%" role="img" aria-labelledby="sp-title sp-desc" class="sun-path">`);
+  const notes = d.timeNote ?? [];
+  // The picture grows downwards by one line of lettering per note line.
+  const height = SIZE + notes.length * NOTE_LINE;
+  parts.push(`<svg xmlns="http://www.w3.org/2000/svg" viewBox="0 0 ${SIZE} ${height}" width="100%" role="img" aria-labelledby="sp-title sp-desc" class="sun-path">`);
   parts.push(`<title id="sp-title">Sun path and shading mask</title><desc id="sp-desc">${escapeXml(d.caption)}</desc>`);
   parts.push(`<circle class="sky" cx="${CX}" cy="${CY}" r="${R}" fill="${c.open}"/>`);
 
@@ -147,6 +154,8 @@ export function sunPathSvg(d: SunPathDrawing): string {
       if (i === 0 && p.hour % 2 === 0) parts.push(`<text x="${f(q.x + 3)}" y="${f(q.y - 3)}" font-size="${TEXT_SIZE}" fill="${c.rim}">${p.hour}</text>`);
     }
   });
+
+  notes.forEach((line, k) => parts.push(`<text class="time-note" x="${CX}" y="${SIZE + (k + 1) * NOTE_LINE - 4}" font-size="${TEXT_SIZE}" text-anchor="middle" fill="${c.rim}">${escapeXml(line)}</text>`));
 
   parts.push('</svg>');
   return parts.join('');

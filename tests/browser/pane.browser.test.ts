@@ -749,6 +749,90 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     expect(in1904.rows[0][0] as number).toBeCloseTo(start + 1 / 24 - 1462, 5);
   });
 
+  test('in a 1904 workbook the daylight-saving boxes read serials in the 1904 date system: the rule as ISO text and as 1904 serials stamps the same hours, a 1900 serial lands on the date the 1904 system gives it; the sun path says its hours are standard time', async () => {
+    // ECMA-376 Part 1, §18.17.4.1: the 1904 system counts days from 1 January 1904 (serial 0); the 1900
+    // system's serial of the same date-time is larger by the days between, 1462. Counted here with the Date.
+    const DAYS_1900_TO_1904 = (Date.UTC(1904, 0, 1) - Date.UTC(1899, 11, 30)) / 86_400_000;
+    const serial1904 = (iso: string) => (Date.parse(`${iso}Z`) - Date.UTC(1904, 0, 1)) / 86_400_000;
+    const serial1900 = (iso: string) => (Date.parse(`${iso}Z`) - Date.UTC(1899, 11, 30)) / 86_400_000;
+    const page = await openPane(undefined, { dateSystem: 1904 });
+    await setField(page, 'year', String(YEAR));
+    // Each run under its own window name, so its sheet is new (no question about replacing an earlier one).
+    const stampsOf = async (start: string, end: string, name: string): Promise<number[]> => {
+      const sheet = `${name} hourly`;
+      await setField(page, 'name', name);
+      await setField(page, 'daylightSavingStart', start);
+      await setField(page, 'daylightSavingEnd', end);
+      await page.click('#run-year');
+      const status = await waitForStatus(page, new RegExp(`^Wrote "${sheet}"|refused|Fix|Stopped|cannot`));
+      if (!status.startsWith(`Wrote "${sheet}"`)) throw new Error(`${start} – ${end}: ${status} ${await page.textContent('#daylightSavingStart-msg')} ${await page.textContent('#daylightSavingEnd-msg')}`);
+      return (await host.read(page, sheet, `A6:A${YEAR % 4 === 0 ? 8789 : 8765}`)).map((r) => r[0] as number);
+    };
+    // The rule of the form's zone (Europe/Amsterdam in the IANA database) as ISO text: each stamp is the
+    // zone's clock reading as Node's Intl gives it (the hour's middle, then half an hour on), in 1904 serials.
+    const iso = await stampsOf(`${YEAR}-03-30 02:00`, `${YEAR}-10-26 03:00`, 'Rule as text');
+    const amsterdam = new Intl.DateTimeFormat('en-GB', { timeZone: 'Europe/Amsterdam', hourCycle: 'h23', year: 'numeric', month: 'numeric', day: 'numeric', hour: 'numeric', minute: 'numeric' });
+    const clock1904 = (utcMs: number): number => {
+      const p = amsterdam.formatToParts(new Date(utcMs));
+      const get = (t: string) => Number(p.find((x) => x.type === t)!.value);
+      return (Date.UTC(get('year'), get('month') - 1, get('day'), get('hour'), get('minute')) - Date.UTC(1904, 0, 1)) / 86_400_000;
+    };
+    const yearStartUtc = Date.UTC(YEAR, 0, 1) - 3_600_000; // 1 January 00:00 at UTC+1
+    const offZone = iso.flatMap((v, i) => (Math.abs(v - (clock1904(yearStartUtc + i * 3_600_000 + 1_800_000) + 1 / 48)) < 1e-5 ? [] : [`row ${i + 6}: ${v}`]));
+    expect(offZone).toEqual([]);
+    // The same rule as serials of the 1904 system: the very same stamps.
+    const start1904 = serial1904(`${YEAR}-03-30T02:00`);
+    const end1904 = serial1904(`${YEAR}-10-26T03:00`);
+    expect(await stampsOf(String(start1904), String(end1904), 'Rule as 1904 serials')).toEqual(iso);
+    // The 1900 system's serials of those dates, typed in this workbook, are the 1904 system's dates 1462 days
+    // on: 31 March and 27 October 2029, Saturdays, so the rule runs from the last Saturday of March 02:00 to
+    // the last Saturday of October 03:00 (clock time); in the year drawn that is 29 March and 25 October.
+    expect(serial1900(`${YEAR}-03-30T02:00`) - start1904).toBe(DAYS_1900_TO_1904);
+    expect(new Date(Date.UTC(1904, 0, 1) + serial1900(`${YEAR}-03-30T02:00`) * 86_400_000).toISOString()).toBe('2029-03-31T02:00:00.000Z');
+    const shifted = await stampsOf(String(serial1900(`${YEAR}-03-30T02:00`)), String(serial1900(`${YEAR}-10-26T03:00`)), 'Rule as 1900 serials');
+    const lastSaturday = (month: number) => {
+      const last = new Date(Date.UTC(YEAR, month, 0));
+      return Date.UTC(YEAR, month - 1, last.getUTCDate() - ((last.getUTCDay() + 1) % 7));
+    };
+    const from = lastSaturday(3) + 2 * 3_600_000; // standard time, as UTC-like milliseconds of the local calendar
+    const to = lastSaturday(10) + 2 * 3_600_000; // 03:00 on the clock is 02:00 standard time
+    expect([new Date(from).toISOString(), new Date(to).toISOString()]).toEqual([`${YEAR}-03-29T02:00:00.000Z`, `${YEAR}-10-25T02:00:00.000Z`]);
+    const offRule = shifted.flatMap((v, i) => {
+      const middle = Date.UTC(YEAR, 0, 1) + (i + 0.5) * 3_600_000;
+      const expected = (middle + (middle >= from && middle < to ? 3_600_000 : 0) + 1_800_000 - Date.UTC(1904, 0, 1)) / 86_400_000;
+      return Math.abs(v - expected) < 1e-5 ? [] : [`row ${i + 6}: ${v} vs ${expected}`];
+    });
+    expect(offRule).toEqual([]);
+    expect(shifted).not.toEqual(iso);
+
+    // A serial the 1904 system has no date for: the worksheet functions' check and message (SOLARGAIN given
+    // the same cells in a window range of the 1904 system), beside the box in its words.
+    await setField(page, 'daylightSavingStart', '-1');
+    await page.waitForFunction(() => (document.getElementById('daylightSavingStart-msg')?.textContent ?? '') !== '');
+    const out = applyFunction(findFunction('SOLARGAIN')!, [[...Object.entries(FORM_WINDOW), ['dateSystem', 1904], ['daylightSavingStart', -1], ['daylightSavingEnd', serial1900(`${YEAR}-10-26T03:00`)]] as RawArg, `${YEAR}-07-01T12:00`])[0][0];
+    if (!(out instanceof SunpaneError)) throw new Error('expected SOLARGAIN to refuse the rule');
+    expect(await page.textContent('#daylightSavingStart-msg')).toBe(inUserWords(out.message.replace(/^window /, ''), 'Daylight saving start'));
+    expect(await page.textContent('#daylightSavingStart-msg')).toMatch(/^Daylight saving start: -1 is not allowed: must be a date-time of the 1904 date system from 1 January 1904 \(serial 0\)/);
+
+    // The sun path under the rule (as 1904 serials): standard-time hour dots, said on the picture, with the
+    // clock of each drawn day in the key (the zone's clock, as the node test of sunPathTime checks it).
+    await setField(page, 'daylightSavingStart', String(start1904));
+    await setField(page, 'daylightSavingEnd', String(end1904));
+    await page.waitForFunction(() => (document.getElementById('daylightSavingStart-msg')?.textContent ?? 'x') === '');
+    await page.setViewportSize({ width: 350, height: 900 });
+    await page.click('#sunpane-root');
+    await page.screenshot({ path: path.join(ARTIFACTS, 'pane-1904-daylight-saving-350.png'), fullPage: true });
+    await page.click('#tab-sunpath');
+    await page.waitForFunction(() => document.querySelectorAll('#sun-path svg text.time-note').length === 2);
+    expect(await page.$$eval('#sun-path svg text.time-note', (t) => t.map((x) => x.textContent))).toEqual(['Hour dots: local standard time (UTC+1 h),', 'not the daylight-saving clock']);
+    expect((await page.$$eval('#sun-path-legend li', (li) => li.map((x) => x.textContent))).slice(0, 3)).toEqual(['21 Jun (clock +1 h)', '21 Mar ≈ 23 Sep (clock +1 h on 23 Sep)', '21 Dec (clock on standard time)']);
+    expect(await page.textContent('#sun-path-caption')).toContain('the daylight-saving rule puts the clock 1 h ahead on 21 Jun and 23 Sep, so on those days a dot\'s hour reads 1 h later on the sheet.');
+    await page.screenshot({ path: path.join(ARTIFACTS, 'sun-path-daylight-saving-350.png'), fullPage: true });
+    await page.$eval('#sun-path-legend', (el) => el.scrollIntoView());
+    await page.screenshot({ path: path.join(ARTIFACTS, 'sun-path-daylight-saving-key-350.png'), fullPage: true });
+    await page.close();
+  });
+
   test('the largest table, a leap year of 8784 hourly rows, goes in requests under the 5 MB the stand-in enforces', async () => {
     const page = await openPane();
     await setField(page, 'year', '2024');

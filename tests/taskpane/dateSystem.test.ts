@@ -74,4 +74,16 @@ describe("the workbook's date system", () => {
     const clash = readSchedule([[...head, 'Date system'], ['S1', 180, 1.2, 1.4, start, end, 1900]], form, validate, {}, 1904);
     expect(clash.problems.map((p) => p.message)).toEqual([expect.stringMatching(/^Row 1 \(S1\), column "Date system": Date system = 1900 is not allowed: must be this workbook's date system, 1904/)]);
   });
+
+  test("in a 1904 workbook a schedule row without its own rule takes the form's rule, its box serials read in 1904", () => {
+    const validate = (s: WindowSpec) => void validateWindowSpec(s);
+    const form = { ...initialValues(), year: '2025' };
+    // ECMA-376 Part 1, §18.17.4.1: the 1904 system's serial of a date-time is the 1900 system's less 1462.
+    const start = civilToSerial(2025, 3, 30, 2);
+    const end = civilToSerial(2025, 10, 26, 3);
+    const boxes = { ...form, daylightSavingStart: String(start - 1462), daylightSavingEnd: String(end - 1462) };
+    const read = readSchedule([['Window', 'Faces', 'Width', 'Height'], ['S1', 180, 1.2, 1.4]], boxes, validate, {}, 1904);
+    expect(read.problems).toEqual([]);
+    expect(read.rows[0].spec.site.daylightSaving).toEqual({ start, end, shift: 1 });
+  });
 });

@@ -148,3 +148,56 @@ describe('the daylight-saving rule in the form', () => {
     expect(problems).toEqual({ byField: { [box]: functionsSay(rule) }, general: [] });
   });
 });
+
+describe('the daylight-saving boxes in a workbook of the 1904 date system', () => {
+  // ECMA-376 Part 1, §18.17.4.1: in the 1904 date system serial 0 is 1 January 1904 00:00, one day
+  // per unit; in the 1900 system the same date-time has a serial 1,462 larger. The serials here are
+  // counted from that definition with the JavaScript Date (not with the code under test).
+  const serial1904 = (iso: string) => (Date.parse(`${iso}Z`) - Date.UTC(1904, 0, 1)) / 86_400_000;
+  const serial1900 = (iso: string) => (Date.parse(`${iso}Z`) - Date.UTC(1899, 11, 30)) / 86_400_000;
+  const form = { ...initialValues(), year: '2025' };
+  const iso = { daylightSavingStart: '2025-03-30T02:00', daylightSavingEnd: '2025-10-26T03:00' };
+  const RANGE: [string, number | string][] = [['latitude', 52.2], ['longitude', 4.9], ['utcOffset', 1], ['surfaceAzimuth', 180], ['width', 1.8], ['height', 1.5], ['shgc', 0.4], ['year', 2025], ['linkeTurbidity', 3], ['dateSystem', 1904]];
+  /** SOLARGAIN's message for a window range of the 1904 date system with these daylight-saving cells. */
+  const functionsSay = (rule: Record<string, number | string>): string => {
+    const out = applyFunction(findFunction('SOLARGAIN')!, [[...RANGE, ...Object.entries(rule)] as RawArg, '2025-07-01T12:00'])[0][0];
+    if (!(out instanceof SunpaneError)) throw new Error('expected SOLARGAIN to refuse the rule');
+    return out.message.replace(/^window /, '');
+  };
+
+  test('the same rule as ISO text and as 1904 serials is the same rule; ISO text reads the same in both systems', () => {
+    const serials = { daylightSavingStart: String(serial1904(iso.daylightSavingStart)), daylightSavingEnd: String(serial1904(iso.daylightSavingEnd)) };
+    expect(serials).toEqual({ daylightSavingStart: String(44284 + 1 / 12), daylightSavingEnd: String(44494 + 1 / 8) });
+    const fromIso = buildWindowSpec({ ...form, ...iso }, {}, 1904).site.daylightSaving;
+    expect(fromIso).toEqual(buildWindowSpec({ ...form, ...iso }, {}, 1900).site.daylightSaving);
+    expect(buildWindowSpec({ ...form, ...serials }, {}, 1904).site.daylightSaving).toEqual(fromIso);
+    expect(fromIso).toEqual({ start: civilToSerial(2025, 3, 30, 2), end: civilToSerial(2025, 10, 26, 3), shift: 1 });
+    expect(isClean(findProblems({ ...form, ...serials }, validateSpec, undefined, 1904))).toBe(true);
+  });
+
+  test('a 1900 serial typed in a 1904 workbook is the date the 1904 system gives it: 1,462 days on', () => {
+    const typed = { daylightSavingStart: String(serial1900(iso.daylightSavingStart)), daylightSavingEnd: String(serial1900(iso.daylightSavingEnd)) };
+    expect(buildWindowSpec({ ...form, ...typed }, {}, 1900).site.daylightSaving).toEqual(buildWindowSpec({ ...form, ...iso }).site.daylightSaving);
+    expect(buildWindowSpec({ ...form, ...typed }, {}, 1904).site.daylightSaving).toEqual({
+      start: serial1900('2029-03-31T02:00'),
+      end: serial1900('2029-10-27T03:00'),
+      shift: 1,
+    });
+  });
+
+  test.each([
+    ['serial 0 (1 January 1904) and a day on: a rule in 1904, refused by the 1900 system alone', { daylightSavingStart: '0', daylightSavingEnd: '1' }, undefined],
+    ['a serial below 0', { daylightSavingStart: '-1', daylightSavingEnd: '200' }, 'daylightSavingStart'],
+    ['an end serial before the start serial', { daylightSavingStart: '44494.125', daylightSavingEnd: '44284.0833333333' }, 'daylightSavingEnd'],
+    ['a serial past 9999', { daylightSavingStart: '44284', daylightSavingEnd: '3000000' }, 'daylightSavingEnd'],
+  ])("%s: the functions' check and message", (_what, rule, box) => {
+    const problems = findProblems({ ...form, ...rule }, validateSpec, undefined, 1904);
+    if (box === undefined) {
+      expect(problems).toEqual({ byField: {}, general: [] });
+      expect(buildWindowSpec({ ...form, ...rule }, {}, 1904).site.daylightSaving).toEqual({ start: 1462, end: 1463, shift: 1 });
+      expect(findProblems({ ...form, ...rule }, validateSpec, undefined, 1900).byField.daylightSavingStart).toMatch(/^daylightSavingStart = 0 is not allowed/);
+    } else {
+      expect(problems).toEqual({ byField: { [box]: functionsSay(Object.fromEntries(Object.entries(rule).map(([k, v]) => [k, Number(v)]))) }, general: [] });
+    }
+  });
+});

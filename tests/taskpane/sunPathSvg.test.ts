@@ -5,8 +5,9 @@
  */
 import { initialValues } from '../../src/taskpane/fields';
 import { buildWindowSpec } from '../../src/taskpane/spec';
-import { shadingMask, sunTracks } from '../../src/taskpane/engine';
+import { clockAheadOn, shadingMask, sunTracks } from '../../src/taskpane/engine';
 import { project, sunPathSvg } from '../../src/taskpane/sunPathSvg';
+import { sunPathTime } from '../../src/taskpane/sunPathView';
 
 describe('the sun-path diagram', () => {
   test('zenith is the centre, the horizon the rim; north up, east right, south down, west left', () => {
@@ -57,5 +58,47 @@ describe('the sun-path diagram', () => {
     const mask = shadingMask(spec, { x: 0.1, y: 1.4 });
     expect(mask.cells.every((c) => c.sunlit === 0 || c.sunlit === 1)).toBe(true);
     expect(() => shadingMask(spec, { x: 5, y: 1 })).toThrow('x = 5 is not allowed: must be a number from 0 to 1.8');
+  });
+
+  test('the hour dots stay in local standard time, and the picture says so under the sky in its own lettering', () => {
+    const spec = buildWindowSpec({ ...initialValues(), year: '2025' });
+    const time = sunPathTime(spec);
+    expect(time.onPicture).toEqual(['Hour dots: local standard time (UTC+1 h)']);
+    expect(time.trackLabels).toEqual(['21 Jun', '21 Mar ≈ 23 Sep', '21 Dec']);
+    const svg = sunPathSvg({ tracks: sunTracks(spec, [[6, 21]]), surfaceAzimuth: 180, caption: '', timeNote: ['Hour dots: a & b', 'second line'] });
+    expect(svg).toContain('viewBox="0 0 320 350"');
+    expect(svg.match(/<text class="time-note"[^>]*font-size="12"[^>]*>([^<]*)<\/text>/g)?.map((t) => t.replace(/<[^>]*>/g, ''))).toEqual(['Hour dots: a &amp; b', 'second line']);
+    expect(sunPathSvg({ tracks: [], surfaceAzimuth: 180, caption: '' })).toContain('viewBox="0 0 320 320"');
+    // the dots themselves: at whole hours of standard time, whatever the rule (tracks of the same spec with and without one)
+    const ruled = buildWindowSpec({ ...initialValues(), year: '2025', daylightSavingStart: '2025-03-30 02:00', daylightSavingEnd: '2025-10-26 03:00' });
+    expect(sunTracks(ruled, [[6, 21]])).toEqual(sunTracks(spec, [[6, 21]]));
+  });
+
+  // Outside check: the clock of the example locations' zones on the drawn days, from the IANA time
+  // zone database as Node's Intl gives it (the form's 52.2° N 4.9° E at UTC+1 is in Europe/Amsterdam;
+  // the example site Kestrel Heads, 37.9° S 145° E at UTC+10, in Australia/Melbourne), each zone's
+  // rule given to the form as the dates of its 2025 changes.
+  test.each([
+    ['Europe/Amsterdam', 1, { daylightSavingStart: '2025-03-30 02:00', daylightSavingEnd: '2025-10-26 03:00' }, {}],
+    ['Australia/Melbourne', 10, { daylightSavingStart: '2025-10-05 02:00', daylightSavingEnd: '2026-04-05 03:00' }, { latitude: '-37.9', longitude: '145', utcOffset: '10' }],
+  ])('under the rule of %s, the key gives the clock of each drawn day as the zone keeps it', (zone, standardOffset, rule, place) => {
+    const spec = buildWindowSpec({ ...initialValues(), year: '2025', ...place, ...rule });
+    const zoneAhead = (month: number, day: number): number => {
+      const name = new Intl.DateTimeFormat('en-GB', { timeZone: zone, timeZoneName: 'longOffset' }).formatToParts(new Date(Date.UTC(2025, month - 1, day, 12 - standardOffset))).find((p) => p.type === 'timeZoneName')!.value;
+      const m = /GMT([+-])(\d\d):(\d\d)/.exec(name)!;
+      return (m[1] === '-' ? -1 : 1) * (Number(m[2]) + Number(m[3]) / 60) - standardOffset;
+    };
+    const days: [number, number][] = [[6, 21], [3, 21], [9, 23], [12, 21]];
+    const zoneSays = days.map(([m, d]) => zoneAhead(m, d));
+    expect(days.map(([m, d]) => clockAheadOn(spec, m, d))).toEqual(zoneSays);
+    const labelOf = (ahead: number) => (ahead > 0 ? ' (clock +1 h)' : ' (clock on standard time)');
+    const equinox = zoneSays[1] === zoneSays[2] ? labelOf(zoneSays[1]) : ` (clock +1 h on ${zoneSays[1] > 0 ? '21 Mar' : '23 Sep'})`;
+    const time = sunPathTime(spec);
+    expect(time.trackLabels).toEqual([`21 Jun${labelOf(zoneSays[0])}`, `21 Mar ≈ 23 Sep${equinox}`, `21 Dec${labelOf(zoneSays[3])}`]);
+    expect(time.onPicture).toEqual([`Hour dots: local standard time (UTC+${standardOffset} h),`, 'not the daylight-saving clock']);
+    const ahead = days.filter((_, i) => zoneSays[i] > 0).map(([m, d]) => `${d} ${['Mar', 'Jun', 'Sep', 'Dec'][[3, 6, 9, 12].indexOf(m)]}`);
+    expect(time.sentence).toBe(
+      `Hour dots are local standard time (UTC+${standardOffset} h), not the clock the hourly sheet is stamped on: the daylight-saving rule puts the clock 1 h ahead on ${ahead.join(' and ')}, so on those days a dot's hour reads 1 h later on the sheet.`,
+    );
   });
 });
