@@ -13,3 +13,19 @@ export function expectArgumentError(fn: () => unknown, argument: string, message
   expect((caught as SunpaneError).message.startsWith(argument)).toBe(true);
   if (message) expect((caught as SunpaneError).message).toMatch(message);
 }
+
+/** The typed error `fn` throws; a test fails when `fn` returns instead, or throws anything else. */
+export function refusalOf(fn: () => unknown): SunpaneError {
+  try {
+    fn();
+  } catch (err) {
+    if (err instanceof SunpaneError) return err;
+    throw err;
+  }
+  throw new Error('not refused');
+}
+
+/** The whole message of the typed error `fn` throws (see `refusalOf`). */
+export function refusalMessage(fn: () => unknown): string {
+  return refusalOf(fn).message;
+}

@@ -29,20 +29,9 @@ import {
 import { GLASS_REFRACTIVE_INDEX, interfaceReflectance, KL_MAX, paneExtinctionFor, paneStackTransmittance } from '../../../src/core/glazing/fresnel';
 import { karlssonRoosFactor } from '../../../src/core/glazing/karlssonRoos';
 import { diffuseShgc } from '../../../src/core/glazing/shgc';
-import { SunpaneError } from '../../../src/core/common/errors';
-import { expectArgumentError } from '../../support/expectError';
+import { expectArgumentError, refusalOf as refusal } from '../../support/expectError';
 
 /** The refusal thrown by fn (docs/architecture.md, "Errors": argument, value, allowed range in words). */
-function refusal(fn: () => unknown): SunpaneError {
-  try {
-    fn();
-  } catch (err) {
-    if (err instanceof SunpaneError) return err;
-    throw err;
-  }
-  throw new Error('not refused');
-}
-
 describe('which model a glazing gets (the documented defaults)', () => {
   test('no type: a table when an angle table is given, else clear panes; a given type is kept', () => {
     expect(glazingTypeOf({ shgc: 0.5, panes: 2 })).toBe('clear');

@@ -15,18 +15,9 @@ import { monthHourMask, shadingMaskGrid } from '../../../src/core/shading/shadin
 import { requireSkyline, skylineElevationAt, skylineSkyViewFactor } from '../../../src/core/shading/skyline';
 import { PATH_SHADING_NAMES, pointSunlit, requireShading, requireVerticalForShading, shadowDepth, shadowWidth, sunlitFraction } from '../../../src/core/shading/sunlit';
 import type { Fin, Overhang, Shading } from '../../../src/core/shading/types';
+import { refusalMessage as refusal } from '../../support/expectError';
 
 /** The message of the refusal thrown by `fn` (fails the test when `fn` does not refuse). */
-function refusal(fn: () => unknown): string {
-  try {
-    fn();
-  } catch (err) {
-    if (err instanceof SunpaneError) return err.message;
-    throw err;
-  }
-  throw new Error('not refused');
-}
-
 const W = { width: 1, height: 1 };
 const oh = (o: Partial<Overhang>): Shading => ({ overhang: { projection: 1, gap: 0, extensionLeft: 0, extensionRight: 0, ...o } });
 const lf = (f: Partial<Fin>): Shading => ({ leftFin: { projection: 1, gap: 0, extensionAbove: 0, extensionBelow: 0, ...f } });

@@ -17,6 +17,7 @@
  */
 import { SunpaneError } from '../../../src/core/common/errors';
 import { ashraeClearSky, ineichenPerezClearSky, requireClearSkyPair } from '../../../src/core/sky/clearSky';
+import { refusalOf as refusal } from '../../support/expectError';
 
 const RAD = Math.PI / 180;
 const ashraeE0 = (n: number) => 1367 * (1 + 0.033 * Math.cos((2 * Math.PI * (n - 3)) / 365));
@@ -37,16 +38,6 @@ function byHand(beta: number, n: number, tb: number, td: number) {
   const sa = spencer(n);
   const p = mu > 0 ? mu ** 1.2 : 0;
   return { dni, dhi, ghi: dni * mu + dhi, limit: { dni: sa, dhi: 0.95 * sa * p + 50, ghi: 1.5 * sa * p + 100 } };
-}
-
-function refusal(fn: () => unknown): SunpaneError {
-  try {
-    fn();
-  } catch (err) {
-    if (err instanceof SunpaneError) return err;
-    throw err;
-  }
-  throw new Error('not refused');
 }
 
 /**

@@ -11,7 +11,6 @@
  * above 0 up to 1.2, τd above 0 up to 4, Linke turbidity 1…10, elevation −500…9000 m, day 1…366).
  * The other sky tests check which argument is named; these check the whole message a user reads.
  */
-import { SunpaneError } from '../../../src/core/common/errors';
 import { airMassKastenYoung } from '../../../src/core/sky/airMass';
 import { ashraeClearSky, ineichenPerezClearSky } from '../../../src/core/sky/clearSky';
 import { decomposeErbs, diffuseFractionErbs1982 } from '../../../src/core/sky/decomposition';
@@ -26,18 +25,9 @@ import {
   skyDiffuseHayDavies,
   skyDiffuseIsotropic,
 } from '../../../src/core/sky/transposition';
+import { refusalMessage as refusal } from '../../support/expectError';
 
 /** The message of the refusal thrown by `fn` (fails the test when `fn` does not refuse). */
-function refusal(fn: () => unknown): string {
-  try {
-    fn();
-  } catch (err) {
-    if (err instanceof SunpaneError) return err.message;
-    throw err;
-  }
-  throw new Error('not refused');
-}
-
 const DEG = 'must be a number from 0 to 180 °';
 const AZ = 'must be a number from 0 to 360 °';
 const IRR = 'must be a number from 0 to 2000 W/m²';
