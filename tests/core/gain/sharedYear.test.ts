@@ -33,7 +33,8 @@ function measured(year = 2026): { dni: Float64Array; dhi: Float64Array } {
   return { dni, dhi };
 }
 
-const WEATHER = measured();
+/** The measured year and the dry-bulb series: built in beforeAll, not while jest collects the file (see below). */
+let WEATHER: { dni: Float64Array; dhi: Float64Array };
 
 /** A window's year worked out alone: its own sun path and weather, no shared or kept year. */
 /**
@@ -51,7 +52,15 @@ function ownYear(spec: WindowSpec) {
   return annualOfPrepared(prepareWindow(spec));
 }
 /** Outdoor dry-bulb [°C] for the window with a U-value: a daily swing, one hour missing. */
-const DRY_BULB = Float64Array.from({ length: 8760 }, (_, i) => (i === 4000 ? NaN : 12 + 8 * Math.sin((i / 24) * 2 * Math.PI)));
+let DRY_BULB: Float64Array;
+
+// Built before the tests, not at collection: work done while jest collects the file runs before any
+// test, so a mutation run could tell neither which test needs the code nor kill a mutant there (it
+// reported such mutants as runtime errors).
+beforeAll(() => {
+  WEATHER = measured();
+  DRY_BULB = Float64Array.from({ length: 8760 }, (_, i) => (i === 4000 ? NaN : 12 + 8 * Math.sin((i / 24) * 2 * Math.PI)));
+});
 
 /** Windows of one site in several shapes: facings, tilt, shading, sky models, weathers, a U-value, daylight saving. */
 function windows(): WindowSpec[] {
