@@ -43,5 +43,6 @@ export function fractionOfDailyRange(hourEnding: number): number {
   const k = Math.floor(hourEnding);
   const f = hourEnding - k;
   const at = (hour: number) => DAILY_RANGE_FRACTIONS[(((hour - 1) % 24) + 24) % 24];
-  return f === 0 ? at(k === 0 ? 24 : k) : at(k === 0 ? 24 : k) * (1 - f) + at(k + 1) * f;
+  // The look-up wraps (hour 0 is hour 24); on a whole hour f = 0 and the second term adds exactly 0.
+  return at(k) * (1 - f) + at(k + 1) * f;
 }
