@@ -9,6 +9,7 @@
  * the period), and geometry: at 80° N on 21 December the sun stays below the horizon all day (its
  * declination is about −23.4°, so its noon altitude is 90 − 80 − 23.4 < 0; from memory).
  */
+import { SunpaneError } from '../../../src/core/common/errors';
 import { designDayGains, peakOfDay } from '../../../src/core/gain/designDay';
 import { windowGainAt } from '../../../src/core/gain/windowGain';
 import { civilToSerial } from '../../../src/core/time/calendar';
@@ -53,7 +54,7 @@ describe('design-day gains', () => {
     expect(december.peakStamp).toBeCloseTo(civilToSerial(2026, 12, 21, 1), 12);
     expect(december.peakClockStamp).toBe(december.peakStamp); // no daylight-saving rule
     // Without a U-value there is no dry-bulb and no conduction.
-    expect(december.hourlyDryBulb).toEqual([]);
+    expect(december.hourlyDryBulb).toHaveLength(0); // toEqual([]) would let a list of undefined through
     expect(december.hourlyConduction.every((c) => c === 0)).toBe(true);
     const instant = designDayGains({ ...polar, timeConvention: 'instant' }).months[11];
     expect([instant.peakHour, instant.peakGain]).toEqual([0, 0]);
@@ -67,6 +68,40 @@ describe('design-day gains', () => {
       expect(months[6].peakClockStamp - months[6].peakStamp).toBeCloseTo(1 / 24, 9);
       expect(months[0].peakClockStamp).toBeCloseTo(months[0].peakStamp, 9);
     }
+  });
+
+  test('a daylight-saving period starting inside the peak hour: an hour-ending peak goes on the clock by its hour\'s middle, an instant by itself', () => {
+    // docs/conventions.md: an hour-ending row moves with its hour's middle; clock = standard + shift
+    // inside the period (the rule's start is a standard-time reading).
+    for (const timeConvention of ['hourEnding', 'instant'] as const) {
+      const spec = baseSpec({ surfaceAzimuth: 250, timeConvention });
+      const july = designDayGains(spec).months[6];
+      const start = july.peakStamp - 15 / 1440; // 15 minutes before the peak's stamp
+      const rule = { start, end: start + 30, shift: 1 };
+      const onClock = designDayGains({ ...spec, site: { ...spec.site, daylightSaving: rule } }).months[6];
+      expect(onClock.peakStamp).toBe(july.peakStamp);
+      if (timeConvention === 'hourEnding') {
+        // The hour's middle (30 minutes before its end) is before the start: standard time.
+        expect(onClock.peakClockStamp).toBeCloseTo(july.peakStamp, 9);
+      } else {
+        expect(onClock.peakClockStamp).toBeCloseTo(july.peakStamp + 1 / 24, 9);
+      }
+    }
+  });
+
+  test('a window without weather, or no window at all, is refused as weather.kind in the same words', () => {
+    const words = 'weather.kind = blank is not allowed: design days need a clear-sky model ("ashraeClearSky" or "ineichenClearSky"); give one as the clearSky option';
+    const refusal = (spec: unknown) => {
+      try {
+        designDayGains(spec as never);
+      } catch (err) {
+        return err instanceof SunpaneError ? err.message : `not a SunpaneError: ${String(err)}`;
+      }
+      return 'not refused';
+    };
+    expect(refusal({ ...baseSpec(), weather: undefined })).toBe(words);
+    expect(refusal(undefined)).toBe(words);
+    expect(refusal(null)).toBe(words);
   });
 
   test('a clear-sky option that is not a clear-sky model is refused as clearSky.kind; a bad day by its name and range', () => {
