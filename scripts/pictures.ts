@@ -44,7 +44,7 @@ async function panePictures(): Promise<void> {
     // An invented west-facing window with an overhang and a fin, at one of the example sites.
     await page.selectOption('#examplePlace', 'saltReach');
     const fields: [string, string][] = [
-      ['windowName', 'Studio west'],
+      ['name', 'Studio west'],
       ['surfaceAzimuth', '250'],
       ['width', '2.4'],
       ['height', '1.6'],
