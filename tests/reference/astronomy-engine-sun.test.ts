@@ -20,7 +20,9 @@
 import * as Astronomy from 'astronomy-engine';
 import { seeded, separation } from '../support/sky';
 import { sunEvents } from '../../src/core/sun/events';
-import { sunPosition } from '../../src/core/sun/spa';
+import { DEG, RAD } from '../../src/core/common';
+import { RISE_SET_ALTITUDE, spaSteps, sunPosition } from '../../src/core/sun/spa';
+import { Mismatches } from '../support/mismatches';
 import { civilToSerial, serialToUtcMs } from '../../src/core/time/calendar';
 
 const FROM = Date.UTC(1950, 0, 1);
@@ -100,6 +102,78 @@ describe('sunrise and sunset of the local day agree with astronomy-engine 2.1.19
     }
     expect(compared).toBeGreaterThan(550);
     expect(worst).toBeLessThan(0.012);
+  });
+
+  test('on 300 random local days 1900–2100 from pole to pole (half past ±60°): the same rises and sets within 0.012° of altitude, the same polar days and nights, solar noon within 1 s', () => {
+    // Away from grazing days the two agree on whether each event happens. On a grazing day (the
+    // sun's highest or lowest altitude within 0.05° of h′0, where the two horizon conventions above
+    // can decide differently), or with an event within two minutes of a day's edge (it may fall on the
+    // neighbouring day for one and not the other), only events both give are compared. Their event
+    // is held to ours as the altitude of OUR sun (direct SPA, geocentric, unrefracted) at THEIR
+    // instant: it must be h′0 within 0.012°, which stays meaningful where the sun barely climbs.
+    // Transits: astronomy-engine's SearchHourAngle (topocentric; the parallax in right ascension
+    // vanishes on the meridian) stops within 0.1 s of sidereal time; 1 s allows that and the SPA's 0.0003°.
+    const random = seeded(4_242);
+    const found = new Mismatches();
+    let compared = 0;
+    let grazingOrEdge = 0;
+    let noons = 0;
+    const conditions = { polarDay: 0, polarNight: 0, normal: 0 };
+    let worstAltitude = 0;
+    let worstNoon = 0;
+    const ourAltitude = (utcMs: number, latitude: number, longitude: number) => {
+      const s = spaSteps(utcMs, latitude, longitude);
+      const phi = latitude * RAD;
+      const delta = s.delta * RAD;
+      return Math.asin(Math.sin(phi) * Math.sin(delta) + Math.cos(phi) * Math.cos(delta) * Math.cos(s.H * RAD)) * DEG;
+    };
+    for (let i = 0; i < 300; i++) {
+      const latitude = i % 2 === 0 ? (random() < 0.5 ? -1 : 1) * (60 + 29.9 * random()) : -60 + 120 * random();
+      const longitude = -180 + 360 * random();
+      const utcOffset = Math.max(-12, Math.min(14, Math.round(longitude / 15)));
+      const serial = civilToSerial(1900 + Math.floor(random() * 200), 1, 1) + Math.floor(random() * 365);
+      const dayStart = serialToUtcMs(serial, utcOffset);
+      const dayEnd = dayStart + 86_400_000;
+      const ours = sunEvents(serial, latitude, longitude, utcOffset);
+      const where = () => `${latitude}, ${longitude}, UTC${utcOffset}, serial ${serial}: ${JSON.stringify(ours)}`;
+      conditions[ours.condition]++;
+      const noonMs = serialToUtcMs(ours.solarNoon, utcOffset);
+      // Highest and lowest altitudes around the day: the transits, 12 h apart to within a minute.
+      const extremes = [-2, -1, 0, 1, 2].map((k) => ourAltitude(noonMs + k * 43_200_000, latitude, longitude));
+      const grazing = extremes.some((h) => Math.abs(h - RISE_SET_ALTITUDE) < 0.05);
+      for (const [direction, event] of [[1, ours.sunrise], [-1, ours.sunset]] as const) {
+        const theirs = theirEvent(direction, latitude, longitude, dayStart);
+        const oursMs = event === null ? null : serialToUtcMs(event, utcOffset);
+        const nearEdge = [oursMs, theirs].some((t) => t !== null && (t - dayStart < 120_000 || dayEnd - t < 120_000));
+        if (grazing || nearEdge) grazingOrEdge++;
+        else found.check((oursMs === null) === (theirs === null), () => `${direction > 0 ? 'rise' : 'set'}: ours ${oursMs}, theirs ${theirs}: ${where()}`);
+        if (oursMs === null || theirs === null) continue;
+        const off = Math.abs(ourAltitude(theirs, latitude, longitude) - RISE_SET_ALTITUDE);
+        worstAltitude = Math.max(worstAltitude, off);
+        found.check(off < 0.012, () => `${direction > 0 ? 'rise' : 'set'}: our sun ${off}° off h′0 at their instant: ${where()}`);
+        compared++;
+      }
+      if (ours.condition !== 'normal' && !grazing) {
+        // No event for either (checked above): above or below all day, by their sun at our noon.
+        const observer = new Astronomy.Observer(latitude, longitude, 0);
+        const eq = Astronomy.Equator(Astronomy.Body.Sun, new Date(noonMs), observer, true, true);
+        const up = Astronomy.Horizon(new Date(noonMs), observer, eq.ra, eq.dec).altitude > RISE_SET_ALTITUDE;
+        found.check(up === (ours.condition === 'polarDay'), () => `their sun ${up ? 'up' : 'down'} at our noon: ${where()}`);
+      }
+      const transit = Astronomy.SearchHourAngle(Astronomy.Body.Sun, new Astronomy.Observer(latitude, longitude, 0), 0, new Date(dayStart), 1).time.date.getTime();
+      if (transit < dayEnd) {
+        worstNoon = Math.max(worstNoon, Math.abs(transit - noonMs));
+        found.check(Math.abs(transit - noonMs) < 1000, () => `noon ${(noonMs - transit) / 1000} s from theirs: ${where()}`);
+        noons++;
+      }
+    }
+    expect(found.list).toEqual([]);
+    expect(compared).toBeGreaterThan(400);
+    expect(noons).toBeGreaterThan(290);
+    // The exemptions stay few: grazing days and day edges are not where most events fall.
+    expect(grazingOrEdge).toBeLessThan(30);
+    expect(conditions.polarDay).toBeGreaterThan(15);
+    expect(conditions.polarNight).toBeGreaterThan(15);
   });
 
   test('the SPA example site sets on the LOCAL 17 October, not at the UT-day time 17:20:19', () => {

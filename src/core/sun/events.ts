@@ -1,20 +1,27 @@
 /**
- * Sunrise, solar noon and sunset of a local calendar day, found on the full NREL SPA.
+ * Sunrise, solar noon and sunset of a local calendar day, found on the NREL SPA.
  *
  * Source: Reda, I. & Andreas, A., *Solar Position Algorithm for Solar Radiation Applications*,
  * NREL/TP-560-34302 (revised January 2008), Appendix A.2 (the rise/transit/set definitions: the
  * upper limb on the refracted horizon, h′0 = −(0.26667° + 0.5667°)). The search itself is ours:
  * transits by Newton iteration on the hour angle, rise and set by the Illinois method between
  * consecutive transits, which works on the LOCAL day asked for rather than the report's UT day.
+ * Its probes take the SPA's slow terms from nodes two days apart, interpolated
+ * (src/core/sun/sunNodes.ts), so a call costs about eight full SPA evaluations instead of ninety,
+ * and a neighbouring day at the same ΔT next to none; tests/core/sun/events.test.ts holds the
+ * results to the definitions on the direct SPA.
  */
 import { DEG, RAD, asinClamped, wrap180 } from '../common';
-import { clockToStandard, type DaylightSavingRule, deltaTAt, julianDay, MIN_SERIAL, requireSerial, requireUtcOffset, serialToUtcMs, standardToClock, utcMsToSerial } from '../time';
-import { RISE_SET_ALTITUDE, type ResolvedSunOptions, type SunOptions, emptySteps, requireInstant, requireSite, resolveSunOptions, spaGeocentric } from './spa';
+import { clockToStandard, type DaylightSavingRule, MIN_SERIAL, requireSerial, requireUtcOffset, serialToUtcMs, standardToClock, utcMsToSerial } from '../time';
+import { RISE_SET_ALTITUDE, type ResolvedSunOptions, type SunOptions, requireInstant, requireSite, resolveSunOptions } from './spa';
+import { type GeocentricHourAngle, geocentricFromNodes } from './sunNodes';
 
-const { sin, cos } = Math;
+const { sin, cos, abs, floor } = Math;
 
 const MS_PER_DAY = 86_400_000;
-const scratch = emptySteps();
+const probe: GeocentricHourAngle = { hourAngle: 0, declination: 0 };
+/** Reused result of {@link eventProbe}: read before the next probe. */
+const probed = { altitude: 0, hourAngle: 0 };
 
 /** Sunrise, solar noon and sunset of one local day. */
 export interface SunEvents {
@@ -31,14 +38,19 @@ export interface SunEvents {
 /**
  * Geocentric altitude of the sun's centre without refraction [°] and the geocentric local hour angle
  * H [°] at an instant: the quantities the SPA's rise/transit/set routine (Appendix A.2) works with.
+ * The slow terms (α, δ, nutation) come from the SPA at nodes two days apart, interpolated
+ * (src/core/sun/sunNodes.ts: within 1e-6° of the direct SPA, its stated uncertainty being
+ * ±0.0003°), so that the search's hundred-odd probes cost a handful of full SPA evaluations, and
+ * none for a neighbouring day at the same ΔT.
  */
 function eventProbe(utcMs: number, latitude: number, longitude: number, o: ResolvedSunOptions): { altitude: number; hourAngle: number } {
-  const s = spaGeocentric(julianDay(utcMs), o.deltaT ?? deltaTAt(utcMs), scratch);
-  const hourAngle = s.nu + longitude - s.alpha; // Eq. 31
+  const g = geocentricFromNodes(utcMs, longitude, o.deltaT, probe);
   const latRad = latitude * RAD;
-  const deltaRad = s.delta * RAD;
-  const altitude = asinClamped(sin(latRad) * sin(deltaRad) + cos(latRad) * cos(deltaRad) * cos(hourAngle * RAD)) * DEG; // as Eq. 41 with geocentric δ, H (Appendix A.2)
-  return { altitude, hourAngle };
+  const deltaRad = g.declination * RAD;
+  const altitude = asinClamped(sin(latRad) * sin(deltaRad) + cos(latRad) * cos(deltaRad) * cos(g.hourAngle * RAD)) * DEG; // as Eq. 41 with geocentric δ, H (Appendix A.2)
+  probed.altitude = altitude;
+  probed.hourAngle = g.hourAngle;
+  return probed;
 }
 
 /** Instant near `guessMs` when the geocentric hour angle is `target` (0 upper, 180 lower transit). */
@@ -48,7 +60,7 @@ function transitNear(guessMs: number, target: number, latitude: number, longitud
     // The hour angle advances about 360° per day (sidereal rate less the sun's motion).
     const offset = wrap180(eventProbe(t, latitude, longitude, o).hourAngle - target);
     t -= (offset / 360) * MS_PER_DAY;
-    if (Math.abs(offset) < 1e-8) break;
+    if (abs(offset) < 1e-8) break;
   }
   return t;
 }
@@ -71,7 +83,7 @@ function crossing(a: number, fa: number, b: number, fb: number, latitude: number
       if (side === 1) fb /= 2;
       side = 1;
     }
-    if (Math.abs(fc) < 1e-7) return c;
+    if (abs(fc) < 1e-7) return c;
   }
   return (a + b) / 2;
 }
@@ -91,7 +103,8 @@ function crossing(a: number, fa: number, b: number, fb: number, latitude: number
  *   set when the sun stays above / below that altitude all day. On a day when only one of the two
  *   events happens (near the polar circles, or when an event falls just across midnight) the other
  *   is null and the condition is `normal`; if an event happens twice in one day, the first is given.
- * @remarks Events are found on the full SPA: transits by Newton iteration on the hour angle, rise
+ * @remarks Events are found on the SPA (its slow terms interpolated between nodes two days apart,
+ *   within 1e-6° of the direct algorithm): transits by Newton iteration on the hour angle, rise
  *   and set by the Illinois method between consecutive transits (altitude is monotonic there). This
  *   replaces the SPA's Appendix A.2 interpolation, which works on the UT day.
  */
@@ -100,7 +113,7 @@ export function sunEvents(localDate: number, latitude: number, longitude: number
   requireSite(latitude, longitude);
   requireUtcOffset(utcOffset);
   const o = resolveSunOptions(options);
-  const dayStart = serialToUtcMs(Math.floor(localDate), utcOffset);
+  const dayStart = serialToUtcMs(floor(localDate), utcOffset);
   const dayEnd = dayStart + MS_PER_DAY;
   requireInstant(dayStart - MS_PER_DAY, o.deltaT !== undefined);
 
@@ -126,7 +139,7 @@ export function sunEvents(localDate: number, latitude: number, longitude: number
   }
   if (solarNoon === null) {
     const middle = dayStart + MS_PER_DAY / 2;
-    solarNoon = transits.filter((_, k) => (k - 4) % 2 === 0).reduce((best, t) => (Math.abs(t - middle) < Math.abs(best - middle) ? t : best));
+    solarNoon = transits.filter((_, k) => (k - 4) % 2 === 0).reduce((best, t) => (abs(t - middle) < abs(best - middle) ? t : best));
   }
   let condition: SunEvents['condition'] = 'normal';
   if (sunrise === null && sunset === null) {
@@ -154,7 +167,7 @@ export function sunEvents(localDate: number, latitude: number, longitude: number
 export function sunEventsOnClock(clockDate: number, latitude: number, longitude: number, utcOffset: number, rule: DaylightSavingRule | undefined, options?: SunOptions): SunEvents {
   if (rule === undefined) return sunEvents(clockDate, latitude, longitude, utcOffset, options);
   requireSerial('date', clockDate);
-  const day = Math.floor(clockDate);
+  const day = floor(clockDate);
   const from = clockToStandard(day, rule);
   const to = clockToStandard(day + 1, rule);
   const own = sunEvents(day, latitude, longitude, utcOffset, options);
@@ -170,7 +183,7 @@ export function sunEventsOnClock(clockDate: number, latitude: number, longitude:
   // A clock day of 23 hours (the clocks go forward) may hold no transit where solar noon falls near
   // midnight: then, as in sunEvents, the transit nearest the day's middle.
   const middle = (from + to) / 2;
-  const nearest = [before?.solarNoon, own.solarNoon].filter((t): t is number => t !== undefined).reduce((best, t) => (Math.abs(t - middle) < Math.abs(best - middle) ? t : best));
+  const nearest = [before?.solarNoon, own.solarNoon].filter((t): t is number => t !== undefined).reduce((best, t) => (abs(t - middle) < abs(best - middle) ? t : best));
   const noon = first('solarNoon') ?? standardToClock(nearest, rule);
   const condition = sunrise === null && sunset === null ? own.condition : 'normal';
   return { condition, sunrise, solarNoon: noon, sunset };

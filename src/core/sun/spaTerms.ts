@@ -332,6 +332,13 @@ export const NUTATION_TERMS: readonly NutationTerm[] = [
   [2, -1, 0, 2, 2, -3, 0, 0, 0],
 ];
 
+/**
+ * Math's functions bound once: the hot loops below call them by a module constant rather than
+ * through the global `Math` (the same functions; under jest, which runs code in a vm context, each
+ * lookup of a global there is slow — docs/testing.md, "Keeping npm test fast").
+ */
+const { cos, sin, PI } = Math;
+
 /** Merging of equal-but-for-rounding frequencies: at most this far apart [rad per millennium]. */
 const FREQUENCY_MERGE = 0.01;
 /** Largest Σ A·|ΔC| a composed frequency may add [1e-8 rad or AU per unit τ]. */
@@ -465,8 +472,8 @@ function seedFrequencies(jme: number): void {
     const i = recipe[k + 1];
     if (i < 0) {
       const arg = frequencies[g] * jme;
-      FREQ_COS[g] = Math.cos(arg);
-      FREQ_SIN[g] = Math.sin(arg);
+      FREQ_COS[g] = cos(arg);
+      FREQ_SIN[g] = sin(arg);
     } else {
       const j = recipe[k + 2];
       const sj = recipe[k + 3] * FREQ_SIN[j];
@@ -608,9 +615,9 @@ export function nutationSums(jce: number, x: readonly number[], out: Nutation): 
 /** cos and sin of m·X_j (m = −3…3) and of every product of the plan into POOL_COS, POOL_SIN; X_j in degrees. */
 function fillPhasorPool(x: readonly number[]): void {
   for (let j = 0; j < 5; j++) {
-    const argRad = ((x[j] % 360) * Math.PI) / 180;
-    const c1 = Math.cos(argRad);
-    const s1 = Math.sin(argRad);
+    const argRad = ((x[j] % 360) * PI) / 180;
+    const c1 = cos(argRad);
+    const s1 = sin(argRad);
     const c2 = c1 * c1 - s1 * s1;
     const s2 = 2 * s1 * c1;
     const c3 = c2 * c1 - s2 * s1;

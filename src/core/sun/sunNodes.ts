@@ -27,6 +27,9 @@ import { deltaTAt, julianDay } from '../time';
 import { EARTH_RADIUS_M, POLAR_RATIO, RISE_SET_ALTITUDE, type SunOptions, type SunPosition, emptySteps, requireInstant, requireSite, resolveSunOptions, type ResolvedSunOptions, spaGeocentric } from './spa';
 import { refractionFromComponents } from './sunPath';
 
+/** Math's functions bound once (see src/core/sun/spaTerms.ts). */
+const { floor, sin, cos, tan, atan, atan2, sqrt } = Math;
+
 /** Most nodes kept before the store is emptied (each is five numbers). */
 export const MAX_NODES = 60_000;
 const MS_PER_DAY = 86_400_000;
@@ -77,9 +80,9 @@ function nodeOf(day: number, deltaT: number | undefined): Node {
     node[2] = s.delta;
     node[3] = s.R;
     node[4] = s.E;
-    const inverseSinXi = 1 / Math.sin(((8.794 / 3600) * RAD) / s.R); // Eq. 32: distance in Earth radii
-    node[5] = Math.cos(s.delta * RAD) * inverseSinXi;
-    node[6] = Math.sin(s.delta * RAD) * inverseSinXi;
+    const inverseSinXi = 1 / sin(((8.794 / 3600) * RAD) / s.R); // Eq. 32: distance in Earth radii
+    node[5] = cos(s.delta * RAD) * inverseSinXi;
+    node[6] = sin(s.delta * RAD) * inverseSinXi;
     store.set(day, node);
     held++;
   }
@@ -88,7 +91,7 @@ function nodeOf(day: number, deltaT: number | undefined): Node {
 
 /** An angle to 0…360 by floor (cheaper than the remainder `%` on a hot path; equal to an ulp). */
 function floorWrap360(x: number): number {
-  const r = x - 360 * Math.floor(x / 360);
+  const r = x - 360 * floor(x / 360);
   return r >= 360 ? 0 : r;
 }
 
@@ -160,11 +163,11 @@ let refractionScale = 0;
 function observer(latitude: number, o: ResolvedSunOptions): void {
   if (latitude === obsLatitude && o.elevation === obsElevation && o.pressure === obsPressure && o.temperature === obsTemperature) return;
   const latRad = latitude * RAD;
-  sinLat = Math.sin(latRad);
-  cosLat = Math.cos(latRad);
-  const uRad = Math.atan(POLAR_RATIO * Math.tan(latRad)); // Eq. 33
-  obsX = Math.cos(uRad) + (o.elevation / EARTH_RADIUS_M) * cosLat; // Eq. 34
-  obsY = POLAR_RATIO * Math.sin(uRad) + (o.elevation / EARTH_RADIUS_M) * sinLat; // Eq. 35
+  sinLat = sin(latRad);
+  cosLat = cos(latRad);
+  const uRad = atan(POLAR_RATIO * tan(latRad)); // Eq. 33
+  obsX = cos(uRad) + (o.elevation / EARTH_RADIUS_M) * cosLat; // Eq. 34
+  obsY = POLAR_RATIO * sin(uRad) + (o.elevation / EARTH_RADIUS_M) * sinLat; // Eq. 35
   refractionScale = ((o.pressure / 1010) * (283 / (273 + o.temperature)) * 1.02) / 60; // Eq. 42, constant part
   obsLatitude = latitude;
   obsElevation = o.elevation;
@@ -191,6 +194,43 @@ function resolveOnce(options: SunOptions | undefined): ResolvedSunOptions {
   return resolved;
 }
 
+/** Geocentric local hour angle and declination at an instant: what the rise/transit/set search works on. */
+export interface GeocentricHourAngle {
+  /** Observer's geocentric local hour angle H [°], 0…360 (Eq. 31). */
+  hourAngle: number;
+  /** Geocentric declination δ [°] (Eq. 30). */
+  declination: number;
+}
+
+/**
+ * Geocentric local hour angle and declination of the sun at an instant, with the slow terms
+ * interpolated between the kept nodes (as {@link sunPositionFromNodes}); no checks, for a caller that
+ * has checked the site and the instant.
+ * @param utcMs - UTC instant [ms since 1970-01-01]
+ * @param longitude - [°] east positive
+ * @param deltaT - TT − UT [s], or undefined for the default polynomial at each node
+ * @param out - filled and returned
+ * @returns H = ν0 + Δψ cos ε + λ − α (Eq. 27, 28, 31; ν0 exact for the instant) and δ (Eq. 30);
+ *   tests/core/sun/sunNodes.test.ts holds both to the direct SPA within 1e-6°
+ * @remarks Reda & Andreas (2008), NREL/TP-560-34302: Eq. 4–30 at the nodes, Eq. 27, 28, 31 at the instant.
+ */
+export function geocentricFromNodes(utcMs: number, longitude: number, deltaT: number | undefined, out: GeocentricHourAngle): GeocentricHourAngle {
+  const nodesSinceUnix = utcMs / MS_PER_NODE;
+  const day = floor(nodesSinceUnix);
+  gather(day, deltaT);
+  const w = weights(nodesSinceUnix - day);
+  out.hourAngle = floorWrap360(siderealTime(utcMs) + longitude - interpolate(0, w));
+  out.declination = interpolate(2, w);
+  return out;
+}
+
+/** Mean sidereal time at Greenwich ν0 [°] at an instant, not reduced to one turn (Eq. 27). */
+function siderealTime(utcMs: number): number {
+  const jd = utcMs / MS_PER_DAY + JD_UNIX;
+  const jc = (jd - 2_451_545) / 36_525;
+  return 280.46061837 + 360.98564736629 * (jd - 2_451_545) + jc * jc * (0.000387933 - jc / 38_710_000);
+}
+
 /**
  * Topocentric sun position at an instant by the NREL SPA with the slow terms interpolated between
  * nodes two days apart (see the module comment); same arguments, checks and results as {@link sunPosition}.
@@ -208,7 +248,7 @@ export function sunPositionFromNodes(utcMs: number, latitude: number, longitude:
   requireSite(latitude, longitude);
   requireInstant(utcMs, o.deltaT !== undefined);
   const nodesSinceUnix = utcMs / MS_PER_NODE;
-  const day = Math.floor(nodesSinceUnix);
+  const day = floor(nodesSinceUnix);
   const f = nodesSinceUnix - day;
   gather(day, o.deltaT);
   const w = weights(f);
@@ -217,24 +257,22 @@ export function sunPositionFromNodes(utcMs: number, latitude: number, longitude:
   const b = interpolate(6, w);
   observer(latitude, o);
   // Eq. 27 (exact for the instant) and Eq. 28, 31: H = ν0 + Δψ cos ε + λ − α.
-  const jd = utcMs / MS_PER_DAY + JD_UNIX;
-  const jc = (jd - 2_451_545) / 36_525;
-  const nu0 = 280.46061837 + 360.98564736629 * (jd - 2_451_545) + jc * jc * (0.000387933 - jc / 38_710_000);
+  const nu0 = siderealTime(utcMs);
   // Reduced to 0…360 by floor rather than %: ν0 is some 10⁷ degrees, and floor is the cheaper way
   // (the result differs from an exact remainder by an ulp of ν0, ~2e-9°).
   const H = floorWrap360(nu0 + longitude - g);
   const HRad = H * RAD;
   // Eq. 36–41 in vector form (as src/core/sun/sunPath.ts): the topocentric vector in Earth radii,
   // X toward the meridian, Y westward, Z toward the pole, turned to up / horizontal / west / south.
-  const vx = a * Math.cos(HRad) - obsX;
-  const vy = a * Math.sin(HRad);
+  const vx = a * cos(HRad) - obsX;
+  const vy = a * sin(HRad);
   const vz = b - obsY;
   const south = vx * sinLat - vz * cosLat;
   const up = sinLat * vz + cosLat * vx;
-  const horizontal = Math.sqrt(vy * vy + south * south);
-  const e0 = Math.atan2(up, horizontal) * DEG; // Eq. 41
+  const horizontal = sqrt(vy * vy + south * south);
+  const e0 = atan2(up, horizontal) * DEG; // Eq. 41
   const e = e0 < RISE_SET_ALTITUDE ? e0 : e0 + refractionFromComponents(refractionScale, up, horizontal, e0); // Eq. 42, 43
-  const az = Math.atan2(vy, south) * DEG + 180; // Eq. 45, 46
+  const az = atan2(vy, south) * DEG + 180; // Eq. 45, 46
   const hourAngle = H > 180 ? H - 360 : H; // H is in 0…360: (−180, 180]
   const p = out ?? ({} as SunPosition);
   p.altitude = e;

@@ -4,8 +4,9 @@
  * suncalc in tests/reference): the same position within 1e-6° over random instants and sites, the
  * same checks and messages, and the report's worked example to its printed digits.
  */
-import { sunPosition } from '../../../src/core/sun/spa';
-import { clearSunNodes, sunPositionFromNodes } from '../../../src/core/sun/sunNodes';
+import { spaSteps, sunPosition } from '../../../src/core/sun/spa';
+import { clearSunNodes, geocentricFromNodes, sunPositionFromNodes } from '../../../src/core/sun/sunNodes';
+import { Mismatches } from '../../support/mismatches';
 import { seeded } from '../../support/sky';
 
 describe('sun position from interpolated nodes', () => {
@@ -32,6 +33,26 @@ describe('sun position from interpolated nodes', () => {
     }
     expect(worstAlt).toBeGreaterThan(0); // a real interpolation, not the same call
     expect(worstDecl).toBeLessThan(1e-6);
+  });
+
+  test('geocentric hour angle and declination (what the rise/set search reads) agree with the direct SPA within 1e-6° over random instants 1900–9999, ΔT by default and given', () => {
+    const rnd = seeded(977);
+    const found = new Mismatches();
+    let worst = 0;
+    const out = { hourAngle: 0, declination: 0 };
+    for (let k = 0; k < 1500; k++) {
+      const utcMs = Date.UTC(1900, 0, 1) + rnd() * (Date.UTC(9999, 11, 31) - Date.UTC(1900, 0, 1));
+      const lon = -180 + 360 * rnd();
+      const deltaT = rnd() < 0.3 ? -100 + 10_100 * rnd() : undefined;
+      const s = spaSteps(utcMs, 0, lon, deltaT === undefined ? undefined : { deltaT });
+      const g = geocentricFromNodes(utcMs, lon, deltaT, out);
+      const dH = Math.abs(((g.hourAngle - s.H + 540) % 360) - 180);
+      const dDelta = Math.abs(g.declination - s.delta);
+      worst = Math.max(worst, dH, dDelta);
+      found.check(dH < 1e-6 && dDelta < 1e-6 && g.hourAngle >= 0 && g.hourAngle < 360, () => `${new Date(utcMs).toISOString()} ${lon} ΔT ${deltaT}: H ${g.hourAngle} vs ${s.H}, δ ${g.declination} vs ${s.delta}`);
+    }
+    expect(found.list).toEqual([]);
+    expect(worst).toBeGreaterThan(0); // a real interpolation, not the same call
   });
 
   test('gives the NREL SPA worked example to the printed digits (Reda & Andreas 2008, Table A5.1)', () => {
