@@ -6,6 +6,7 @@ import type { BenchSection } from './harness';
 
 const SECTIONS: { file: string; exportName: string }[] = [
   { file: './sun', exportName: 'sunBench' },
+  { file: './events', exportName: 'eventsBench' },
   { file: './shading', exportName: 'shadingBench' },
   { file: './annual', exportName: 'annualBench' },
   { file: './viewFactors', exportName: 'viewFactorsBench' },

@@ -46,9 +46,6 @@ export const DEFAULT_RUNS = 10_000;
  * `npm run fuzz` runs every function 10,000 times (FUZZ_RUNS sets any count).
  */
 export const HEAVY_RUNS: Readonly<Record<string, number>> = {
-  SUNRISE: 1_000, // the SPA at three days and an iteration per event (about 1 ms a call)
-  SOLARNOON: 1_000,
-  SUNSET: 1_000,
   SOLARGAIN: 1_000, // the window prepared (view factors of its devices) on every call, and the monotone re-evaluations
   SOLARGAINSTEPS: 1_000,
   WINDOWGAIN: 1_000,
