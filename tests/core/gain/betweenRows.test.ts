@@ -20,13 +20,13 @@
  *   Thevenard 2013), Ineichen & Perez (2002), Erbs et al. (1982); the error convention of
  *   docs/architecture.md for the refusal.
  */
-import { SunpaneError } from '../../../src/core/common/errors';
 import { annualSeries } from '../../../src/core/gain/annual';
 import { gainSteps } from '../../../src/core/gain/gainSteps';
 import type { WindowSpec } from '../../../src/core/gain/window';
 import { windowGainAt } from '../../../src/core/gain/windowGain';
 import { ineichenPerezClearSky } from '../../../src/core/sky/clearSky';
 import { civilToSerial, dayOfYear } from '../../../src/core/time/calendar';
+import { refusalMessage } from '../../support/expectError';
 import { baseSpec } from './gainFixtures';
 
 const hours = (v: number) => new Array<number>(8760).fill(v);
@@ -88,15 +88,7 @@ describe('the one-hour gain between the rows of the year', () => {
     const spec = baseSpec({ weather: { kind: 'measured', dni: hours(0), dhi: hours(40) } });
     // 00:40 on 1 January ends an hour whose stamp is nearest 01:00: the first row.
     expect(windowGainAt(spec, civilToSerial(2026, 1, 1, 0, 40)).dhi).toBe(40);
-    const refusal = (t: number) => {
-      try {
-        windowGainAt(spec, t);
-      } catch (err) {
-        if (err instanceof SunpaneError) return err.message;
-        throw err;
-      }
-      return 'not refused';
-    };
+    const refusal = (t: number) => refusalMessage(() => windowGainAt(spec, t));
     // 00:20 on 1 January is nearest the stamp 00:00, the last row of 2025.
     expect(refusal(civilToSerial(2026, 1, 1, 0, 20))).toBe("dateTime = 46023.01389 is not allowed: must fall in 2026, the year of the window's weather series");
     // 00:40 on 1 January 2027 is nearest 01:00 of 2027, a row past the year's last (24:00 on 31 December).

@@ -9,10 +9,10 @@
  * the period), and geometry: at 80° N on 21 December the sun stays below the horizon all day (its
  * declination is about −23.4°, so its noon altitude is 90 − 80 − 23.4 < 0; from memory).
  */
-import { SunpaneError } from '../../../src/core/common/errors';
 import { designDayGains, peakOfDay } from '../../../src/core/gain/designDay';
 import { windowGainAt } from '../../../src/core/gain/windowGain';
 import { civilToSerial } from '../../../src/core/time/calendar';
+import { refusalMessage } from '../../support/expectError';
 import { baseSpec } from './gainFixtures';
 
 describe('design-day gains', () => {
@@ -91,14 +91,7 @@ describe('design-day gains', () => {
 
   test('a window without weather, or no window at all, is refused as weather.kind in the same words', () => {
     const words = 'weather.kind = blank is not allowed: design days need a clear-sky model ("ashraeClearSky" or "ineichenClearSky"); give one as the clearSky option';
-    const refusal = (spec: unknown) => {
-      try {
-        designDayGains(spec as never);
-      } catch (err) {
-        return err instanceof SunpaneError ? err.message : `not a SunpaneError: ${String(err)}`;
-      }
-      return 'not refused';
-    };
+    const refusal = (spec: unknown) => refusalMessage(() => designDayGains(spec as never)); // a TypeError fails the test
     expect(refusal({ ...baseSpec(), weather: undefined })).toBe(words);
     expect(refusal(undefined)).toBe(words);
     expect(refusal(null)).toBe(words);

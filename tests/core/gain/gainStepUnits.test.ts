@@ -13,10 +13,10 @@
  * (an hour-ending date-time names the hour that ends then, the sun at its middle); and the error
  * convention of docs/architecture.md (a refusal names the argument, the value and the range in words).
  */
-import { SunpaneError } from '../../../src/core/common/errors';
 import { gainSteps } from '../../../src/core/gain/gainSteps';
 import { windowGainAt } from '../../../src/core/gain/windowGain';
 import { civilToSerial } from '../../../src/core/time/calendar';
+import { refusalMessage } from '../../support/expectError';
 import { baseSpec, shadedSpec } from './gainFixtures';
 
 const T = civilToSerial(2026, 9, 21, 15);
@@ -100,15 +100,7 @@ describe('the gain explanation as a reader sees it', () => {
   });
 
   test('a date-time out of range is refused naming dateTime, the value and the range', () => {
-    const refusal = (t: number) => {
-      try {
-        gainSteps(baseSpec(), t);
-      } catch (err) {
-        if (err instanceof SunpaneError) return err.message;
-        throw err;
-      }
-      return 'not refused';
-    };
+    const refusal = (t: number) => refusalMessage(() => gainSteps(baseSpec(), t));
     expect(refusal(60)).toBe('dateTime = 60 is not allowed: must be a date-time from 1 March 1900 (serial 61) to 31 December 9999 (serial below 2958466)');
     expect(refusal(Number.NaN)).toBe('dateTime = NaN is not allowed: must be a date-time from 1 March 1900 (serial 61) to 31 December 9999 (serial below 2958466)');
   });

@@ -16,22 +16,12 @@
  * - The error convention of docs/architecture.md: a refusal names the argument as the user wrote it,
  *   the value, and the allowed range with its unit, word for word.
  */
-import { SunpaneError } from '../../../src/core/common/errors';
 import { DAILY_RANGE_FRACTIONS, designDayDryBulb, fractionOfDailyRange } from '../../../src/core/gain/outdoorTemperature';
 import { windowGainAt } from '../../../src/core/gain/windowGain';
 import { civilToSerial } from '../../../src/core/time/calendar';
+import { refusalMessage as refusal } from '../../support/expectError';
 import { Mismatches } from '../../support/mismatches';
 import { baseSpec } from './gainFixtures';
-
-function refusal(f: () => unknown): string {
-  try {
-    f();
-  } catch (err) {
-    if (err instanceof SunpaneError) return err.message;
-    throw err;
-  }
-  throw new Error('not refused');
-}
 
 describe('design-day dry-bulb profile', () => {
   test('the coolest hour (ending 05:00) is Tmax − DR, the warmest (ending 14:00 and 15:00) Tmax, every other hour between them', () => {
