@@ -7,8 +7,9 @@
  * transits by Newton iteration on the hour angle, rise and set by the Illinois method between
  * consecutive transits, which works on the LOCAL day asked for rather than the report's UT day.
  * Its probes take the SPA's slow terms from nodes two days apart, interpolated
- * (src/core/sun/sunNodes.ts), so a call costs about eight full SPA evaluations instead of ninety,
- * and a neighbouring day at the same ΔT next to none; tests/core/sun/events.test.ts holds the
+ * (src/core/sun/sunNodes.ts), and transits are found only as far as the day reaches (four or
+ * five of them, not nine): a call costs some 46 cheap probes and about seven full SPA evaluations
+ * instead of ninety, a neighbouring day at the same ΔT next to none; tests/core/sun/events.test.ts holds the
  * results to the definitions on the direct SPA.
  */
 import { DEG, RAD, asinClamped, wrap180 } from '../common';
@@ -117,17 +118,24 @@ export function sunEvents(localDate: number, latitude: number, longitude: number
   const dayEnd = dayStart + MS_PER_DAY;
   requireInstant(dayStart - MS_PER_DAY, o.deltaT !== undefined);
 
-  // Upper transit nearest local noon, then alternating lower/upper transits half a day apart.
+  // Upper transit nearest local noon, then alternating lower/upper transits half a day apart (k
+  // half days from it, up to two days either way), only as far as the intervals between them reach
+  // into the local day: one transit before its start and one at or after its end.
   const noon = transitNear(dayStart + MS_PER_DAY / 2, 0, latitude, longitude, o);
-  const transits: number[] = [];
-  for (let k = -4; k <= 4; k++) transits.push(k === 0 ? noon : transitNear(noon + (k * MS_PER_DAY) / 2, k % 2 === 0 ? 0 : 180, latitude, longitude, o));
+  const transits: number[] = [noon];
+  let first = 0;
+  while (first > -4 && transits[0] >= dayStart) {
+    first--;
+    transits.unshift(transitNear(noon + (first * MS_PER_DAY) / 2, first % 2 === 0 ? 0 : 180, latitude, longitude, o));
+  }
+  for (let k = 1; k <= 4 && transits[transits.length - 1] < dayEnd; k++) transits.push(transitNear(noon + (k * MS_PER_DAY) / 2, k % 2 === 0 ? 0 : 180, latitude, longitude, o));
   const f = transits.map((t) => eventProbe(t, latitude, longitude, o).altitude - RISE_SET_ALTITUDE);
 
   let sunrise: number | null = null;
   let sunset: number | null = null;
   let solarNoon: number | null = null;
   for (let k = 0; k < transits.length; k++) {
-    const isUpper = (k - 4) % 2 === 0;
+    const isUpper = (k + first) % 2 === 0;
     if (isUpper && transits[k] >= dayStart && transits[k] < dayEnd && solarNoon === null) solarNoon = transits[k];
     if (k + 1 === transits.length) break;
     const [a, b] = [transits[k], transits[k + 1]];
@@ -139,7 +147,7 @@ export function sunEvents(localDate: number, latitude: number, longitude: number
   }
   if (solarNoon === null) {
     const middle = dayStart + MS_PER_DAY / 2;
-    solarNoon = transits.filter((_, k) => (k - 4) % 2 === 0).reduce((best, t) => (abs(t - middle) < abs(best - middle) ? t : best));
+    solarNoon = transits.filter((_, k) => (k + first) % 2 === 0).reduce((best, t) => (abs(t - middle) < abs(best - middle) ? t : best));
   }
   let condition: SunEvents['condition'] = 'normal';
   if (sunrise === null && sunset === null) {
