@@ -30,7 +30,8 @@ on stderr.
   --iso    print date-time results as ISO 8601 local date-times instead of serial numbers
   --help   this text; \`sunpane call NAME --help\` describes that function
 
-Exit codes: 0 done, 1 a cell is an error, 2 wrong usage.`;
+Exit codes: 0 done (a #N/A cell is an answer, e.g. no sunrise on a polar day), 1 a cell is #VALUE!
+(a refused argument), 2 wrong usage.`;
 
 /** Prints every function's signature and summary, one per line. */
 export function listCommand(argv: readonly string[], io: Output): number {

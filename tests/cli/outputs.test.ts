@@ -159,6 +159,21 @@ describe('--help everywhere', () => {
   });
 });
 
+describe('exit status of `sunpane call`', () => {
+  it('#N/A is an answer (no sunrise on a polar day: 0), #VALUE! a refusal (1); the help says which', async () => {
+    // 85° N on 21 June: the sun stays up all day (any almanac; NREL SPA's own event search says so too).
+    const polar = await run('call', 'SUNRISE', '2026-06-21', '85', '0', '0');
+    expect([polar.code, polar.out]).toEqual([0, '#N/A']);
+    expect(polar.err).toMatch(/polar day/);
+    const bad = await run('call', 'SUNRISE', '2026-06-21', '95', '0', '0');
+    expect([bad.code, bad.out]).toEqual([1, '#VALUE!']);
+    expect(bad.err).toMatch(/^latitude = 95 is not allowed/);
+    const help = await run('call', '--help');
+    expect(help.out).toMatch(/0 done \(a #N\/A cell is an answer/);
+    expect(help.out).toMatch(/1 a cell is #VALUE!/);
+  });
+});
+
 describe('a closed pipe', () => {
   /** Runs `sunpane ARGS | READER` in bash with pipefail; returns the pipeline's status and sunpane's stderr. */
   function piped(args: string, reader: string): { status: string; stderr: string } {
