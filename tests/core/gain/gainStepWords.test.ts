@@ -92,6 +92,8 @@ describe('the gain explanation states what it used', () => {
     }
     // A τb/τd clear sky with no model given uses the clear-day procedure.
     expect(method(baseSpec({ skyModel: undefined }), 'sky diffuse on the bare window')).toBe('handbook clear-day procedure, no devices and no skyline');
+    // Any other weather with no model given uses Perez 1990 (window.ts: skyModel's default).
+    expect(method(baseSpec({ skyModel: undefined, weather: { kind: 'ineichenClearSky', linkeTurbidity: [3] } }), 'sky diffuse on the bare window')).toBe('Perez et al. (1990) sky, no devices and no skyline');
     expect(method(baseSpec({ groundAlbedo: 0.35 }), 'ground-reflected on the bare window')).toBe('GHI × albedo 0.35 × (1 − cos tilt) / 2');
   });
 

@@ -10,7 +10,9 @@
  * temperature −90…60 °C, azimuth 0…360 °, tilt 0…180 °, width and height 0.01…100 m, frame fraction
  * 0 up to below 1, SHGC and fractions 0…1, panes 1…4 whole, U-value 0…10 W/(m²·K), indoor −20…50 °C,
  * τb above 0 up to 1.2, τd above 0 up to 4, Linke turbidity 1…10, irradiance series 0…2000 W/m².
- * The other gain tests check which field is named; these check the whole message a user reads.
+ * The other gain tests check which field is named; these check the whole message a user reads, and
+ * that values at the ends of the ranges (−60 and 60 °C, 0 and 2000 W/m², a daily range of 0 and 40 K)
+ * are accepted.
  */
 import { SunpaneError } from '../../../src/core/common/errors';
 import { validateWindowSpec } from '../../../src/core/gain/windowSpec';
@@ -135,5 +137,37 @@ describe('window description refusals', () => {
     const gaps = hours();
     gaps[9] = Number.NaN;
     expect(() => validateWindowSpec(weather({ kind: 'measured', dni: gaps, dhi: new Float64Array(8760) }))).not.toThrow();
+  });
+
+  test('the glazing model\'s own fields and the shading lengths are checked with the description, by their paths', () => {
+    expect(refusal(glazing({ type: 'coated', typeParameter: 99 }))).toBe('glazing.typeParameter = 99 is not allowed: must be a number from 1 to 10');
+    expect(refusal(glazing({ type: 'coated' }))).toBe(
+      'glazing.typeParameter = blank is not allowed: must be given for a coated unit: the glazing-type parameter q of Karlsson & Roos (2000), from 1 to 10 (larger keeps the SHGC up to higher angles)',
+    );
+    expect(refusal(glazing({ type: 'table', angleTable: { angles: [0, 90], values: [0.5] } }))).toBe('glazing.angleTable.values = a list of 1 is not allowed: must be a list of 2 SHGC values, one per angle');
+    expect(refusal(baseSpec({ shading: { overhang: { projection: 101, gap: 0, extensionLeft: 0, extensionRight: 0 } } }))).toBe(
+      'shading.overhang.projection = 101 is not allowed: must be a number from 0 to 100 m',
+    );
+  });
+
+  test('design-day temperatures: the highest dry-bulb −60…60 and the daily range 0…40, ends included, one value or twelve', () => {
+    const design = (dryBulbMax: unknown, dailyRange: unknown) => weather({ kind: 'ashraeClearSky', tauB: [0.4], tauD: [2.3], dryBulbMax, dailyRange });
+    expect(refusal(design([61], [10]))).toBe('weather.dryBulbMax[0] = 61 is not allowed: must be a number from -60 to 60');
+    expect(refusal(design([30], [41]))).toBe('weather.dailyRange[0] = 41 is not allowed: must be a number from 0 to 40');
+    const monthly = 'is not allowed: must be a list of 12 monthly values (January first) or of one value for the whole year';
+    expect(refusal(design([30, 31], [10]))).toBe(`weather.dryBulbMax = a list of 2 ${monthly}`);
+    expect(refusal(design([30], [10, 11, 12]))).toBe(`weather.dailyRange = a list of 3 ${monthly}`);
+    expect(() => validateWindowSpec(design([-60], [0]))).not.toThrow();
+    expect(() => validateWindowSpec(design(new Array<number>(12).fill(60), new Array<number>(12).fill(40)))).not.toThrow();
+  });
+
+  test('hourly values at the ends of their ranges are accepted: 0 and 2000 W/m², −60 and 60 °C', () => {
+    const dni = hours();
+    dni[100] = 2000;
+    const dryBulb = hours(20);
+    dryBulb[7] = 60;
+    dryBulb[8] = -60;
+    expect(() => validateWindowSpec(weather({ kind: 'measured', dni, dhi: hours(2000), dryBulb }))).not.toThrow();
+    expect(() => validateWindowSpec(weather({ kind: 'globalHorizontal', ghi: hours(2000) }))).not.toThrow();
   });
 });
