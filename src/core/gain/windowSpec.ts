@@ -87,11 +87,11 @@ function validateShading(shading: Shading, width: number, height: number, surfac
   requireVerticalForShading(surfaceTilt, shading);
 }
 
-function validateMonthly(path: string, values: unknown, min: number, max: number, exclusiveMin: boolean): void {
+function validateMonthly(path: string, values: unknown, min: number, max: number, exclusiveMin: boolean, unit?: string): void {
   if (!Array.isArray(values) || (values.length !== 1 && values.length !== 12)) {
     throw new SunpaneError(path, values, 'must be a list of 12 monthly values (January first) or of one value for the whole year');
   }
-  for (let i = 0; i < values.length; i++) requireRange(`${path}[${i}]`, values[i], min, max, undefined, { exclusiveMin });
+  for (let i = 0; i < values.length; i++) requireRange(`${path}[${i}]`, values[i], min, max, unit, { exclusiveMin });
 }
 
 function validateSeries(path: string, values: unknown, year: number, min = 0, max = MAX_IRRADIANCE, unit = 'W/m²'): number {
@@ -147,8 +147,8 @@ function validateDryBulbSeries(values: unknown, rows: number, year: number): voi
 }
 
 function validateDesignTemperatures(weather: { dryBulbMax?: number[]; dailyRange?: number[] }): void {
-  if (weather.dryBulbMax !== undefined) validateMonthly('weather.dryBulbMax', weather.dryBulbMax, DRY_BULB_MIN, DRY_BULB_MAX, false);
-  if (weather.dailyRange !== undefined) validateMonthly('weather.dailyRange', weather.dailyRange, 0, DAILY_RANGE_MAX, false);
+  if (weather.dryBulbMax !== undefined) validateMonthly('weather.dryBulbMax', weather.dryBulbMax, DRY_BULB_MIN, DRY_BULB_MAX, false, '°C');
+  if (weather.dailyRange !== undefined) validateMonthly('weather.dailyRange', weather.dailyRange, 0, DAILY_RANGE_MAX, false, 'K');
   if ((weather.dryBulbMax === undefined) !== (weather.dailyRange === undefined)) {
     const missing = weather.dryBulbMax === undefined ? 'weather.dryBulbMax' : 'weather.dailyRange';
     throw new SunpaneError(missing, undefined, 'must be given with the other: the design-day dry-bulb needs its highest value and its daily range');

@@ -152,8 +152,8 @@ describe('window description refusals', () => {
 
   test('design-day temperatures: the highest dry-bulb −60…60 and the daily range 0…40, ends included, one value or twelve', () => {
     const design = (dryBulbMax: unknown, dailyRange: unknown) => weather({ kind: 'ashraeClearSky', tauB: [0.4], tauD: [2.3], dryBulbMax, dailyRange });
-    expect(refusal(design([61], [10]))).toBe('weather.dryBulbMax[0] = 61 is not allowed: must be a number from -60 to 60');
-    expect(refusal(design([30], [41]))).toBe('weather.dailyRange[0] = 41 is not allowed: must be a number from 0 to 40');
+    expect(refusal(design([61], [10]))).toBe('weather.dryBulbMax[0] = 61 is not allowed: must be a number from -60 to 60 °C');
+    expect(refusal(design([30], [41]))).toBe('weather.dailyRange[0] = 41 is not allowed: must be a number from 0 to 40 K');
     const monthly = 'is not allowed: must be a list of 12 monthly values (January first) or of one value for the whole year';
     expect(refusal(design([30, 31], [10]))).toBe(`weather.dryBulbMax = a list of 2 ${monthly}`);
     expect(refusal(design([30], [10, 11, 12]))).toBe(`weather.dailyRange = a list of 3 ${monthly}`);
