@@ -20,7 +20,7 @@ import { LOAD_WORDS } from '../registry/glossary';
 import { compareSummaryText, roomText, scheduleLoadLine, scheduleSummaryText } from './loadText';
 import { readNamedTable, readSheetData, withCheckedWeather } from './sheetData';
 import { type SheetData, buildWindowSpec, findProblems, isClean } from './spec';
-import { drawSunPath } from './sunPathView';
+import { drawSunPath, utcOffsetText } from './sunPathView';
 import { writeSmallTableSheet } from './tableSheet';
 import { workbookDateSystem } from './dateSystem';
 import { writeYearSheet } from './yearSheet';
@@ -69,10 +69,9 @@ function rowsText(spec: WindowSpec): string {
 /** The description lines above a result. */
 export function describeSpec(spec: WindowSpec): string[] {
   const s = spec.site;
-  const off = s.utcOffset >= 0 ? `+${s.utcOffset}` : String(s.utcOffset);
   return [
     `${spec.name}: faces ${spec.surfaceAzimuth}°, tilt ${spec.surfaceTilt}°, opening ${spec.width} × ${spec.height} m, frame share ${spec.frameFraction}, SHGC ${spec.glazing.shgc}${spec.glazing.angleTable ? ' (angle table)' : `, ${spec.glazing.panes} panes`}`,
-    `Latitude ${s.latitude}°, longitude ${s.longitude}°, UTC${off} h, year ${spec.year}; ${weatherText(spec)}; sky model ${spec.skyModel}; ground reflectance ${spec.groundAlbedo}. ${rowsText(spec)}`,
+    `Latitude ${s.latitude}°, longitude ${s.longitude}°, ${utcOffsetText(s.utcOffset)}, year ${spec.year}; ${weatherText(spec)}; sky model ${spec.skyModel}; ground reflectance ${spec.groundAlbedo}. ${rowsText(spec)}`,
     CAUTION,
   ];
 }

@@ -25,6 +25,11 @@ const TRACK_LABELS = ['21 Jun', '21 Mar ≈ 23 Sep', '21 Dec'];
 const TRACK_DATES: readonly (readonly (readonly [number, number])[])[] = [[[6, 21]], [[3, 21], [9, 23]], [[12, 21]]];
 const MONTH_SHORT = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
 
+/** A standard-time offset as the pane writes it: `UTC+1 h`, `UTC-5 h`. */
+export function utcOffsetText(utcOffset: number): string {
+  return `UTC${utcOffset >= 0 ? '+' : ''}${utcOffset} h`;
+}
+
 /** What the drawing says about its hours. */
 export interface SunPathTime {
   /** The lines lettered on the picture, under the sky. */
@@ -43,8 +48,7 @@ export interface SunPathTime {
  * ahead, and the sentence says how to read a dot's hour on the hourly sheet's clock.
  */
 export function sunPathTime(spec: WindowSpec): SunPathTime {
-  const off = spec.site.utcOffset >= 0 ? `+${spec.site.utcOffset}` : String(spec.site.utcOffset);
-  const standard = `local standard time (UTC${off} h)`;
+  const standard = `local standard time (${utcOffsetText(spec.site.utcOffset)})`;
   const rule = spec.site.daylightSaving;
   if (rule === undefined) {
     return { onPicture: [`Hour dots: ${standard}`], sentence: `Hour dots are ${standard}, as the hourly sheet's stamps.`, trackLabels: [...TRACK_LABELS] };
@@ -141,14 +145,15 @@ export function drawSunPath(doc: Document, panel: HTMLElement, getForm: () => Fo
       const tracks = sunTracks(spec, TRACK_DAYS);
       const where = at ? `point ${at.x} m from the left jamb, ${at.y} m above the sill` : 'whole glass';
       const time = sunPathTime(spec);
-      caption.textContent = `${spec.name}, facing ${spec.surfaceAzimuth}°, latitude ${spec.site.latitude}°, ${spec.year}; mask of the ${where}. ${time.sentence}`;
+      const captionText = `${spec.name}, facing ${spec.surfaceAzimuth}°, latitude ${spec.site.latitude}°, ${spec.year}; mask of the ${where}. ${time.sentence}`;
+      caption.textContent = captionText;
       renderLegend(time.trackLabels);
       figure.innerHTML = sunPathSvg({
         tracks,
         mask,
         surfaceAzimuth: spec.surfaceAzimuth,
         skyline: spec.shading.skyline,
-        caption: `${spec.name}, facing ${spec.surfaceAzimuth}°, latitude ${spec.site.latitude}°, ${spec.year}; mask of the ${where}. ${time.sentence}`,
+        caption: captionText,
         timeNote: time.onPicture,
       });
     } catch (err) {
