@@ -14,7 +14,7 @@
 import { type Weather, MAX_IRRADIANCE } from '../core/gain';
 import { COMPARISON_MIN_GHI, IRRADIANCE_FLOOR, closureTolerance, diffuseRatioLimit, extraterrestrialSpencer, physicalIrradianceLimits } from '../core/sky';
 import { type Site, annualSunPath } from '../core/sun';
-import { civilToSerial, fitYearOfHours, formatSerialIso, hoursInYear, serialToCivil } from '../core/time';
+import { civilToSerial, fitYearOfHours, formatSerialIso, hoursInYear, serialToCivil, utcOffsetText } from '../core/time';
 import { type DecimalMark, type PlacedText, findDecimalMark, readNumberText } from './numberText';
 import { type CivilStamp, readStampText, stampFromSerial } from './stampText';
 
@@ -577,7 +577,7 @@ function placeByStamps(
     problems.hint('stampOffHour', `stamps at half past: if each marks the middle of its hour, say so (${advice.hourStamp('middle')})`);
   }
   if (zoned !== undefined && zoned !== siteOffsetMinutes) {
-    notes.push(`stamps with a time zone converted to the window's standard time (UTC${site.utcOffset >= 0 ? '+' : ''}${site.utcOffset})`);
+    notes.push(`stamps with a time zone converted to the window's standard time (${utcOffsetText(site.utcOffset)})`);
   }
   if (options.typicalYear && feb29Dropped > 0) notes.push(`29 February's ${feb29Dropped} row${feb29Dropped > 1 ? 's' : ''} dropped: ${year} has no 29 February`);
   if (options.typicalYear && hoursInYear(year) === 8784) {

@@ -20,11 +20,11 @@ import { LOAD_WORDS } from '../registry/glossary';
 import { compareSummaryText, roomText, scheduleLoadLine, scheduleSummaryText } from './loadText';
 import { readNamedTable, readSheetData, withCheckedWeather } from './sheetData';
 import { type SheetData, buildWindowSpec, findProblems, isClean } from './spec';
-import { drawSunPath, utcOffsetText } from './sunPathView';
+import { drawSunPath } from './sunPathView';
 import { writeSmallTableSheet } from './tableSheet';
 import { workbookDateSystem } from './dateSystem';
 import { writeYearSheet } from './yearSheet';
-import { type DateSystem, describeDaylightSaving } from '../core/time';
+import { type DateSystem, describeDaylightSaving, utcOffsetText } from '../core/time';
 import { scheduleConventionOf } from '../schedule/columns';
 
 /** The caution shown in the pane and on every result sheet (one text for every output). */

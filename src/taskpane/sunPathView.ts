@@ -4,7 +4,7 @@
  */
 import { SunpaneError } from '../core/common';
 import type { WindowSpec } from '../core/gain';
-import type { DateSystem } from '../core/time';
+import { type DateSystem, utcOffsetText } from '../core/time';
 import { byId, h } from './dom';
 import { clockAheadOn, shadingMask, sunTracks } from './engine';
 import type { FormValues } from './fields';
@@ -24,11 +24,6 @@ const TRACK_LABELS = ['21 Jun', '21 Mar ≈ 23 Sep', '21 Dec'];
 /** The days each track stands for: the middle one both equinoxes, whose paths nearly coincide. */
 const TRACK_DATES: readonly (readonly (readonly [number, number])[])[] = [[[6, 21]], [[3, 21], [9, 23]], [[12, 21]]];
 const MONTH_SHORT = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
-
-/** A standard-time offset as the pane writes it: `UTC+1 h`, `UTC-5 h`. */
-export function utcOffsetText(utcOffset: number): string {
-  return `UTC${utcOffset >= 0 ? '+' : ''}${utcOffset} h`;
-}
 
 /** What the drawing says about its hours. */
 export interface SunPathTime {

@@ -141,7 +141,7 @@ describe('time stamps', () => {
   test('stamps with a zone are converted to the site\'s standard time', () => {
     const c = check(table((r) => r.map(([, a, b], i) => [`${formatSerialIso(W.stampSerial[i] - 1 / 24)}Z`, a, b])));
     expect(c.usable).toBe(true);
-    expect(c.lines).toEqual(["w.csv: stamps with a time zone converted to the window's standard time (UTC+1)"]);
+    expect(c.lines).toEqual(["w.csv: stamps with a time zone converted to the window's standard time (UTC+1 h)"]);
   });
 
   test('stamps at half past are not on the hour, with advice', () => {

@@ -59,6 +59,11 @@ export function requireUtcOffset(utcOffset: unknown, argument = 'utcOffset'): nu
   return requireRange(argument, utcOffset, UTC_OFFSET_MIN, UTC_OFFSET_MAX, 'h');
 }
 
+/** A standard-time offset as every output writes it: `UTC+1 h`, `UTC-5 h`, `UTC+5.5 h`. */
+export function utcOffsetText(utcOffset: number): string {
+  return `UTC${utcOffset >= 0 ? '+' : ''}${utcOffset} h`;
+}
+
 /**
  * Local standard-time serial → UTC instant.
  * @param serial - spreadsheet serial date-time, local standard time, ≥ 61 (1 March 1900)

@@ -6,7 +6,7 @@
  *
  * This index is the folder's only public door: code outside the folder imports from here.
  */
-export { civilToSerial, dayOfYear, daysInMonth, formatSerialIso, hoursInYear, isLeapYear, julianDay, MAX_SERIAL_EXCLUSIVE, MIN_SERIAL, parseIsoLocal, requireSerial, requireUtcOffset, requireYear, serialToCivil, serialToUtcMs, UTC_OFFSET_MAX, UTC_OFFSET_MIN, utcMsToSerial } from './calendar';
+export { civilToSerial, dayOfYear, daysInMonth, formatSerialIso, hoursInYear, isLeapYear, julianDay, MAX_SERIAL_EXCLUSIVE, MIN_SERIAL, parseIsoLocal, requireSerial, requireUtcOffset, requireYear, serialToCivil, serialToUtcMs, UTC_OFFSET_MAX, UTC_OFFSET_MIN, utcMsToSerial, utcOffsetText } from './calendar';
 export { clockToStandard, DATE_1904_OFFSET, DATE_SYSTEM_WORDS, type DateSystem, type DaylightSavingRule, describeDaylightSaving, DST_SHIFT_MAX, fitYearOfHours, fromSerial1900, inDaylightSaving, MAX_SERIAL_1904_EXCLUSIVE, requireDateSystem, requireDaylightSaving, requireSerialIn, standardToClock, toSerial1900, type YearFit, type YearFitRule } from './clock';
 export { deltaTAt } from './deltaT';
 export { clockStampToStandard, DEFAULT_TIME_CONVENTION, evaluationSerial, hourFraction, requireStamp, requireTimeConvention, rowOfSerial, rowStamp, TIME_CONVENTIONS, type TimeConvention } from './convention';
