@@ -77,8 +77,8 @@ export const FIELDS: readonly FieldDef[] = [
   box(GLOSSARY.longitude, 'site', '4.9', { hint: 'east positive' }),
   box(GLOSSARY.elevation, 'site', '0'),
   box(GLOSSARY.utcOffset, 'site', '1', { hint: 'standard time, east positive' }),
-  box(GLOSSARY.daylightSavingStart, 'site', '', { kind: 'text', hint: 'clock reading when the clocks go forward, e.g. 2025-03-30 02:00; repeats yearly on that weekday of the month; blank: standard time all year' }),
-  box(GLOSSARY.daylightSavingEnd, 'site', '', { kind: 'text', hint: 'clock reading when they go back (daylight time), e.g. 2025-10-26 03:00' }),
+  box(GLOSSARY.daylightSavingStart, 'site', '', { kind: 'text', hint: 'clock reading when the clocks go forward, e.g. 2025-03-30 02:00 (a date serial counts in this workbook\'s date system); repeats yearly on that weekday of the month; blank: standard time all year' }),
+  box(GLOSSARY.daylightSavingEnd, 'site', '', { kind: 'text', hint: 'clock reading when they go back (daylight time), e.g. 2025-10-26 03:00, or a date serial as above' }),
   box(GLOSSARY.daylightSavingShift, 'site', '', { hint: 'blank: 1 h' }),
 
   box(GLOSSARY.surfaceAzimuth, 'facing', '180', { hint: 'the way the glass faces, from north: N 0 · E 90 · S 180 · W 270' }),
