@@ -17,7 +17,7 @@
  *   serial date-times of the call are read in its date system (ISO 8601 text reads the same in both);
  * - `spill` functions take single values (and one window) for their broadcast parameters.
  */
-import { SunpaneError, rangeText, requireRange } from '../core/common';
+import { MONTHLY_LIST_RULE, SunpaneError, rangeText, requireRange } from '../core/common';
 import { type DateSystem, parseIsoLocal, requireSerialIn } from '../core/time';
 import { readClockRange } from './clockRange';
 import { choiceFor } from './glossary';
@@ -109,6 +109,10 @@ export function readRange(param: ParamDescriptor, raw: RawArg | undefined): ArgV
     throw new SunpaneError(param.name, raw ?? null, `is required: must be a range of numbers ${allowedText(param)}`);
   }
   const { exact, min, max, oneOf } = param.length ?? {};
+  // One value for the year or twelve for the months: the words every monthly list is refused in.
+  if (oneOf !== undefined && oneOf.length === 2 && oneOf[0] === 1 && oneOf[1] === 12 && values.length !== 1 && values.length !== 12) {
+    throw new SunpaneError(param.name, values, MONTHLY_LIST_RULE);
+  }
   if ((exact !== undefined && values.length !== exact) || (min !== undefined && values.length < min) || (max !== undefined && values.length > max) || (oneOf !== undefined && !oneOf.includes(values.length))) {
     const want =
       oneOf !== undefined

@@ -87,9 +87,9 @@ const P = {
   parts: { name: 'parts', kind: 'flag', default: false, description: "TRUE: also the peak hour's gain by part (beam, diffuse, conduction) and, with a room, the peak load's parts; FALSE (default): the columns as before" },
   showGain: { name: 'showGain', kind: 'flag', default: false, description: 'TRUE: two columns, the gain as given and its cooling load; FALSE (default): the load alone' },
   monthlyTauB: { ...G.tauB, kind: 'numberList', length: { oneOf: [1, 12] }, optional: false, description: 'beam pseudo-optical depth τb of the ASHRAE clear-sky model for the design days: one value, or 12 by month (January first)' },
-  monthlyTauD: { ...G.tauD, kind: 'numberList', length: { oneOf: [1, 12] }, optional: false, description: 'diffuse pseudo-optical depth τd for the design days: one value, or 12 by month (as many as tauB)' },
+  monthlyTauD: { ...G.tauD, kind: 'numberList', length: { oneOf: [1, 12] }, optional: false, description: 'diffuse pseudo-optical depth τd for the design days: one value (read for every month), or 12 by month (January first)' },
   yearTauB: { ...G.tauB, kind: 'numberList', length: { oneOf: [1, 12] }, optional: true, description: 'beam pseudo-optical depth τb of the ASHRAE clear-sky model: one value, or 12 by month; used when dni and dhi are blank' },
-  yearTauD: { ...G.tauD, kind: 'numberList', length: { oneOf: [1, 12] }, optional: true, description: 'diffuse pseudo-optical depth τd: one value, or 12 by month (as many as tauB); used when dni and dhi are blank' },
+  yearTauD: { ...G.tauD, kind: 'numberList', length: { oneOf: [1, 12] }, optional: true, description: 'diffuse pseudo-optical depth τd: one value (read for every month), or 12 by month (January first); used when dni and dhi are blank' },
   gains: { name: 'gains', kind: 'numberList', unit: 'W', min: -1e7, max: 1e7, length: { exact: 24 }, description: 'hourly gain of the design day, hour ending 1:00 first' },
   dniSeries: {
     ...G.dni,

@@ -14,7 +14,7 @@
  * check the whole. Every message names the field as the user wrote it, never a path inside the
  * program (`site.latitude`, `glazing.angleTable.values`).
  */
-import { SunpaneError, describeValue, rangeText } from '../core/common';
+import { MONTHLY_LIST_RULE, SunpaneError, describeValue, rangeText } from '../core/common';
 import type { Weather, WindowSpec } from '../core/gain';
 import { validateWindowSpec } from '../core/gain';
 import { windowRoomSeries } from '../core/load';
@@ -185,7 +185,7 @@ export function readFieldCell(field: GlossaryEntry, cell: Scalar | number | read
       const items = splitList(cell);
       const count = items.length;
       if (cellKind === 'monthly' && count !== 1 && count !== 12) {
-        throw new SunpaneError(name, cell, 'must hold one value for the whole year or 12 monthly values (January first), separated by spaces, commas or semicolons');
+        throw new SunpaneError(name, cell, `${MONTHLY_LIST_RULE}, separated by spaces, commas or semicolons`);
       }
       const { min, max, exact } = field.length ?? {};
       if (exact !== undefined && count !== exact) throw new SunpaneError(name, cell, `must hold exactly ${exact} values, separated by spaces, commas or semicolons (it holds ${count})`);

@@ -111,7 +111,9 @@ describe('design-day peaks with load and parts', () => {
     expect(monthly[0]).toEqual(hazier[0]);
     // one τd for the whole year beside twelve τb: the same τd every month
     expect(call('PEAKGAINS', [...site, [tauB], 2.3])).toEqual(monthly);
-    expect(() => call('PEAKGAINS', [...site, [[0.4, 0.4]], [[2.3, 2.3]]])).toThrow(/^tauB = a list of 2 is not allowed: must hold 1 or 12 numbers/);
+    // the same words as a window range's or the pane's monthly list
+    expect(() => call('PEAKGAINS', [...site, 0.4, [[2.3, 2.3, 2.3]]])).toThrow(/^tauD = a list of 3 is not allowed: must hold one value for the whole year or 12 monthly values \(January first\)$/);
+    expect(() => call('PEAKGAINS', [...site, [[0.4, 0.4]], [[2.3, 2.3]]])).toThrow(/^tauB = a list of 2 is not allowed: must hold one value for the whole year or 12 monthly values \(January first\)$/);
   });
 
   test('PEAKGAINS with factors and parts: 11 columns, the load parts adding up', () => {

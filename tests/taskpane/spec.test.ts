@@ -84,7 +84,7 @@ describe('the window form', () => {
   test('a τd list of a length other than 1 or 12 gets the monthly-list words beside the Tau d box, whatever τb holds; 1 beside 12 is accepted', () => {
     const ashrae = { ...initialValues(), year: '2025', weatherSource: 'ashraeClearSky' };
     const twelve = '0.4, 0.4, 0.4, 0.4, 0.4, 0.4, 0.4, 0.4, 0.4, 0.4, 0.4, 0.4';
-    const words = 'a list of 2 is not allowed: must be a list of 12 monthly values (January first) or of one value for the whole year';
+    const words = 'a list of 2 is not allowed: must hold one value for the whole year or 12 monthly values (January first)';
     for (const tauB of ['0.4', twelve]) {
       const problems = findProblems({ ...ashrae, tauB, tauD: '2.2; 2.3' }, validateSpec);
       expect(problems).toEqual({ byField: { tauD: `tauD = ${words}` }, general: [] });

@@ -1,3 +1,6 @@
+/** The rule every monthly list states when refused (window JSON, worksheet arguments, window ranges, the pane). */
+export const MONTHLY_LIST_RULE = 'must hold one value for the whole year or 12 monthly values (January first)';
+
 /**
  * The one error type of the calculation core.
  *

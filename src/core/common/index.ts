@@ -7,6 +7,6 @@
  * This index is the folder's only public door: code outside the folder imports from here.
  */
 export { acosClamped, asinClamped, DEG, RAD, wrap180, wrap360 } from './angles';
-export { describeValue, rangeText, requireFinite, requireRange, SunpaneError } from './errors';
+export { describeValue, MONTHLY_LIST_RULE, rangeText, requireFinite, requireRange, SunpaneError } from './errors';
 export { hemisphericalAverage } from './hemispherical';
 export { type MonotoneCubic, monotoneCubic } from './monotoneCubic';

@@ -3,7 +3,7 @@
  * (`glazing.shgc`, `shading.overhang.projection`, `weather.dni`, `site.latitude` ...), and the
  * defaults of the optional fields in one place.
  */
-import { SunpaneError, requireRange } from '../common';
+import { MONTHLY_LIST_RULE, SunpaneError, requireRange } from '../common';
 import { LINKE_MAX, LINKE_MIN, TAU_B_MAX, TAU_D_MAX, type SkyModel } from '../sky';
 import { fitYearOfHours, requireDaylightSaving, requireTimeConvention, requireYear } from '../time';
 import { glazingTypeOf, interiorAttenuationsOf, requireAngleTable, requireTypeParameter, shgcBasisOf, type Glazing } from '../glazing';
@@ -89,7 +89,7 @@ function validateShading(shading: Shading, width: number, height: number, surfac
 
 function validateMonthly(path: string, values: unknown, min: number, max: number, exclusiveMin: boolean, unit?: string): void {
   if (!Array.isArray(values) || (values.length !== 1 && values.length !== 12)) {
-    throw new SunpaneError(path, values, 'must be a list of 12 monthly values (January first) or of one value for the whole year');
+    throw new SunpaneError(path, values, MONTHLY_LIST_RULE);
   }
   for (let i = 0; i < values.length; i++) requireRange(`${path}[${i}]`, values[i], min, max, unit, { exclusiveMin });
 }

@@ -92,7 +92,7 @@ describe('window description refusals', () => {
   test('clear-sky weather: the kind, monthly lists, τ pairs and design temperatures', () => {
     expect(refusal(baseSpec({ weather: null as never }))).toBe('weather = blank is not allowed: must be given (an object)');
     expect(refusal(weather({ kind: 'sunny' }))).toBe('weather.kind = "sunny" is not allowed: must be one of "ashraeClearSky", "ineichenClearSky", "measured", "globalHorizontal"');
-    const monthly = 'is not allowed: must be a list of 12 monthly values (January first) or of one value for the whole year';
+    const monthly = 'is not allowed: must hold one value for the whole year or 12 monthly values (January first)';
     expect(refusal(weather({ kind: 'ashraeClearSky', tauB: [0.4, 0.4], tauD: [2.3] }))).toBe(`weather.tauB = a list of 2 ${monthly}`);
     expect(refusal(weather({ kind: 'ashraeClearSky', tauB: [0.4], tauD: 2.3 }))).toBe(`weather.tauD = 2.3 ${monthly}`);
     // τd of a length τb does not have: refused for its own length, in the same words, whatever τb holds
@@ -154,7 +154,7 @@ describe('window description refusals', () => {
     const design = (dryBulbMax: unknown, dailyRange: unknown) => weather({ kind: 'ashraeClearSky', tauB: [0.4], tauD: [2.3], dryBulbMax, dailyRange });
     expect(refusal(design([61], [10]))).toBe('weather.dryBulbMax[0] = 61 is not allowed: must be a number from -60 to 60 °C');
     expect(refusal(design([30], [41]))).toBe('weather.dailyRange[0] = 41 is not allowed: must be a number from 0 to 40 K');
-    const monthly = 'is not allowed: must be a list of 12 monthly values (January first) or of one value for the whole year';
+    const monthly = 'is not allowed: must hold one value for the whole year or 12 monthly values (January first)';
     expect(refusal(design([30, 31], [10]))).toBe(`weather.dryBulbMax = a list of 2 ${monthly}`);
     expect(refusal(design([30], [10, 11, 12]))).toBe(`weather.dailyRange = a list of 3 ${monthly}`);
     expect(() => validateWindowSpec(design([-60], [0]))).not.toThrow();
