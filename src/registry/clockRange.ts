@@ -21,6 +21,8 @@ import { GLOSSARY, type GlossaryEntry, windowFieldFor } from './glossary';
 import type { ClockFields, RawArg, Scalar, WindowFields } from './types';
 import { fieldsOf, nearestFieldName } from './windowRange';
 
+const { max } = Math;
+
 /** The fields a clock range takes, in the order help lists them. */
 export const CLOCK_FIELDS: readonly GlossaryEntry[] = [GLOSSARY.daylightSavingStart, GLOSSARY.daylightSavingEnd, GLOSSARY.daylightSavingShift, GLOSSARY.dateSystem];
 
@@ -55,7 +57,7 @@ export function readClockRange(raw: RawArg | undefined, argument = 'clock'): Clo
   if (!Array.isArray(raw) || raw.length === 0) throw new SunpaneError(argument, raw, CLOCK_HELP);
   if (raw.every((r) => r.every(isBlank))) return STANDARD_CLOCK;
   const rows = raw.length;
-  const cols = raw.reduce((w, r) => Math.max(w, r.length), 0);
+  const cols = raw.reduce((w, r) => max(w, r.length), 0);
   const at = (i: number, j: number): Scalar => raw[i]?.[j] ?? null;
   const firstColumn = Array.from({ length: rows }, (_, i) => at(i, 0));
   const firstRow = Array.from({ length: cols }, (_, j) => at(0, j));

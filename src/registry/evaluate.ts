@@ -24,6 +24,10 @@ import { choiceFor } from './glossary';
 import { type ArgValue, type Args, type ClockFields, type FunctionDescriptor, type Matrix, NotAvailable, type OutCell, type OutTable, type ParamDescriptor, type RawArg, type Scalar, type WindowFields } from './types';
 import { choiceText, readWindowRange } from './windowRange';
 
+const { max: mathMax } = Math;
+const { isFinite: numberIsFinite, isNaN: numberIsNaN } = Number;
+const NAN = Number.NaN;
+
 function isMatrix(raw: RawArg | undefined): raw is Matrix {
   return Array.isArray(raw);
 }
@@ -45,13 +49,13 @@ export function readScalar(param: ParamDescriptor, value: Scalar | undefined, da
   }
   switch (param.kind) {
     case 'number': {
-      const n = typeof value === 'string' && value.trim() !== '' && !Number.isNaN(Number(value)) ? Number(value) : value;
+      const n = typeof value === 'string' && value.trim() !== '' && !numberIsNaN(Number(value)) ? Number(value) : value;
       return requireRange(param.name, n, param.min, param.max, param.unit, param);
     }
     case 'dateTime':
       if (typeof value === 'string') {
         const t = value.trim();
-        return t !== '' && !Number.isNaN(Number(t)) ? requireSerialIn(param.name, Number(t), dateSystem) : parseIsoLocal(t, param.name);
+        return t !== '' && !numberIsNaN(Number(t)) ? requireSerialIn(param.name, Number(t), dateSystem) : parseIsoLocal(t, param.name);
       }
       return requireSerialIn(param.name, value, dateSystem);
     case 'choice': {
@@ -89,8 +93,8 @@ export function readRange(param: ParamDescriptor, raw: RawArg | undefined): ArgV
     // A series with gaps: every cell keeps its place; a blank or non-numeric cell is a missing value (NaN).
     for (const row of rows) {
       for (const cell of row) {
-        const n = typeof cell === 'number' ? cell : typeof cell === 'string' && cell.trim() !== '' && !Number.isNaN(Number(cell)) ? Number(cell) : Number.NaN;
-        if (!Number.isNaN(n)) requireRange(`${param.name} (value ${values.length + 1})`, n, param.min, param.max, param.unit);
+        const n = typeof cell === 'number' ? cell : typeof cell === 'string' && cell.trim() !== '' && !numberIsNaN(Number(cell)) ? Number(cell) : NAN;
+        if (!numberIsNaN(n)) requireRange(`${param.name} (value ${values.length + 1})`, n, param.min, param.max, param.unit);
         values.push(n);
       }
     }
@@ -99,7 +103,7 @@ export function readRange(param: ParamDescriptor, raw: RawArg | undefined): ArgV
     for (const cell of row) {
       if (isBlank(cell) && rows.length * (row.length || 1) > 1) continue;
       if (isBlank(cell)) break;
-      const n = typeof cell === 'string' && cell.trim() !== '' && !Number.isNaN(Number(cell)) ? Number(cell) : cell;
+      const n = typeof cell === 'string' && cell.trim() !== '' && !numberIsNaN(Number(cell)) ? Number(cell) : cell;
       requireRange(`${param.name} (value ${values.length + 1})`, n, param.min, param.max, param.unit);
       values.push(n as number);
     }
@@ -185,7 +189,7 @@ function isWholeRange(param: ParamDescriptor): boolean {
 
 function shapeOf(raw: RawArg | undefined): [number, number] {
   if (!isMatrix(raw)) return [1, 1];
-  return [raw.length, raw.reduce((w, r) => Math.max(w, r.length), 0)];
+  return [raw.length, raw.reduce((w, r) => mathMax(w, r.length), 0)];
 }
 
 /** Turns anything a function throws into a result cell; programming errors are re-thrown. */
@@ -276,8 +280,8 @@ export function applyFunction(fn: FunctionDescriptor, rawArgs: readonly (RawArg 
     }
     broadcast.push({ param: p, arg });
     if (arg.rows * arg.cols > rows * cols) shapeFrom = p.name;
-    rows = Math.max(rows, arg.rows);
-    cols = Math.max(cols, arg.cols);
+    rows = mathMax(rows, arg.rows);
+    cols = mathMax(cols, arg.cols);
   }
   if (fn.result.shape === 'spill' && (rows > 1 || cols > 1)) {
     const what = fn.params.find((p) => p.name === shapeFrom)?.kind === 'window' ? 'one window' : 'a single value';
@@ -366,7 +370,7 @@ function cellOf(fn: FunctionDescriptor, args: Args | OutCell): OutCell {
 
 /** Last guard: a number leaving Sunpane is finite. */
 function checkCell(cell: OutCell): OutCell {
-  if (typeof cell === 'number' && !Number.isFinite(cell)) {
+  if (typeof cell === 'number' && !numberIsFinite(cell)) {
     throw new Error(`internal error: a non-finite result (${cell}) reached the adapter`);
   }
   return cell;

@@ -25,6 +25,8 @@ import { GLOSSARY, type GlossaryEntry } from './glossary';
 import { type Args, type ClockFields, type FunctionDescriptor, NotAvailable, type OutCell, type OutsideCheck, type OutTable, type ParamDescriptor, type WindowFields } from './types';
 import { fieldsOf, skyWithDesignDays, windowSpecFromFields } from './windowRange';
 
+const { max: mathMax, min: mathMin } = Math;
+
 const G = GLOSSARY;
 
 /** Year of design days when the window gives none (the year moves the sun by well under 0.3°). */
@@ -148,7 +150,7 @@ const POSITIONAL_FIELDS = [...SITE_AND_WINDOW, ...GLASS_AND_GROUND, ...SHADING, 
 
 /** The year a one-hour calculation lies in: that of its evaluation instant, within what a window accepts. */
 function yearOfHour(dateTime: number, convention: TimeConvention): number {
-  return Math.min(9998, Math.max(1901, serialToCivil(evaluationSerial(dateTime, convention)).year));
+  return mathMin(9998, mathMax(1901, serialToCivil(evaluationSerial(dateTime, convention)).year));
 }
 
 /** A clear sky that nothing reads: a window whose hour comes with its own DNI and DHI still needs a weather. */

@@ -25,6 +25,9 @@ import { EXAMPLE_SITES, findExampleSite } from '../demo/sites';
 import { GLOSSARY, type GlossaryEntry, LENGTH_MAX, WINDOW_FIELDS, choiceFor, nameKey, windowFieldFor } from './glossary';
 import type { Matrix, RawArg, Scalar, WindowFields } from './types';
 
+const { floor, max: mathMax, min: mathMin } = Math;
+const { isFinite: numberIsFinite, isInteger: numberIsInteger, isNaN: numberIsNaN } = Number;
+
 /** A name cell that names no field, or a field already named. */
 export interface NameProblem {
   /** 0-based position along the names. */
@@ -79,7 +82,7 @@ export function editDistance(a: string, b: string): number {
     row[0] = i;
     for (let j = 1; j <= b.length; j++) {
       const here = row[j];
-      row[j] = Math.min(row[j] + 1, row[j - 1] + 1, prev + (a[i - 1] === b[j - 1] ? 0 : 1));
+      row[j] = mathMin(row[j] + 1, row[j - 1] + 1, prev + (a[i - 1] === b[j - 1] ? 0 : 1));
       prev = here;
     }
   }
@@ -90,7 +93,7 @@ export function editDistance(a: string, b: string): number {
 export function nearestFieldName(text: string, fields: readonly GlossaryEntry[] = WINDOW_FIELDS): string | undefined {
   const k = nameKey(text);
   let best: string | undefined;
-  let bestD = Math.max(2, Math.floor(k.length / 4)) + 1;
+  let bestD = mathMax(2, floor(k.length / 4)) + 1;
   for (const f of fields) {
     for (const w of [f.name, f.label, ...(f.aliases ?? [])]) {
       const d = editDistance(k, nameKey(w));
@@ -114,15 +117,15 @@ function numberOf(cell: Scalar | number): unknown {
   if (typeof cell === 'number') return cell;
   if (typeof cell === 'string') {
     const t = cell.trim();
-    if (t !== '' && Number.isFinite(Number(t))) return Number(t);
+    if (t !== '' && numberIsFinite(Number(t))) return Number(t);
     return t;
   }
   return cell;
 }
 
 function inRange(f: GlossaryEntry, v: unknown): v is number {
-  if (typeof v !== 'number' || !Number.isFinite(v)) return false;
-  if (f.integer && !Number.isInteger(v)) return false;
+  if (typeof v !== 'number' || !numberIsFinite(v)) return false;
+  if (f.integer && !numberIsInteger(v)) return false;
   if (f.min !== undefined && (f.exclusiveMin ? !(v > f.min) : !(v >= f.min))) return false;
   if (f.max !== undefined && (f.exclusiveMax ? !(v < f.max) : !(v <= f.max))) return false;
   return true;
@@ -139,7 +142,7 @@ export function splitList(value: Scalar | number | readonly unknown[]): unknown[
   return String(value ?? '')
     .split(/[\s;,]+/)
     .filter((t) => t !== '')
-    .map((t) => (Number.isFinite(Number(t)) ? Number(t) : t));
+    .map((t) => (numberIsFinite(Number(t)) ? Number(t) : t));
 }
 
 /**
@@ -176,7 +179,7 @@ export function readFieldCell(field: GlossaryEntry, cell: Scalar | number | read
       // A date-time cell: a serial (the workbook's date-time) or ISO 8601 local text (a file).
       if (typeof cell === 'string') {
         const t = cell.trim();
-        return t !== '' && !Number.isNaN(Number(t)) ? requireSerialIn(name, Number(t), dateSystem) : parseIsoLocal(t, name);
+        return t !== '' && !numberIsNaN(Number(t)) ? requireSerialIn(name, Number(t), dateSystem) : parseIsoLocal(t, name);
       }
       return requireSerialIn(name, cell, dateSystem);
     }
@@ -249,7 +252,7 @@ const WINDOW_HELP = 'must be a range of window fields: names (latitude, surfaceA
 export function readWindowRange(raw: RawArg | undefined, argument = 'window'): WindowRange {
   if (!isMatrix(raw) || raw.length === 0) throw new SunpaneError(argument, raw ?? null, WINDOW_HELP);
   const rows = raw.length;
-  const cols = raw.reduce((w, r) => Math.max(w, r.length), 0);
+  const cols = raw.reduce((w, r) => mathMax(w, r.length), 0);
   const at = (i: number, j: number): Scalar => raw[i]?.[j] ?? null;
   const firstRow = Array.from({ length: cols }, (_, j) => at(0, j));
   const firstColumn = Array.from({ length: rows }, (_, i) => at(i, 0));
@@ -366,7 +369,7 @@ export function inFieldWords(err: unknown, fields: WindowFields, prefix: Namer =
   const name = shown(field, fields, prefix) + (index ? ` (value ${Number(index[1]) + 1})` : '');
   const given = fields.values.get(field.name) ?? err.value;
   // A date-time field is shown as the date-time it is, not as its serial.
-  const value = field.window!.cell === 'dateTime' && typeof given === 'number' && Number.isFinite(given) ? formatSerialIso(given) : given;
+  const value = field.window!.cell === 'dateTime' && typeof given === 'number' && numberIsFinite(given) ? formatSerialIso(given) : given;
   return new SunpaneError(name, index ? err.value : value, err.allowed.replace(/weather\.|glazing\.angleTable\.|glazing\.|shading\.|site\.|room\./g, ''), err.detail);
 }
 

@@ -1,3 +1,5 @@
+
+const { abs, hypot } = Math;
 /**
  * Shape-preserving piecewise cubic Hermite interpolation (Fritsch & Carlson 1980): on data that rise
  * or fall monotonically the interpolant does too, with no overshoot between the points.
@@ -48,8 +50,8 @@ export function monotoneCubic(xs: readonly number[], ys: readonly number[]): Mon
       // α = m[k]/Δk and β = m[k+1]/Δk, kept as products: α² + β² > 9 ⇔ |(m[k], m[k+1])| > 3|Δk|, and
       // the scaled tangents τα·Δk = 3|Δk|·m/|(m[k], m[k+1])| (the same numbers, without the ratios,
       // which overflow to Infinity when a secant of 1e-320 sits beside one of 0.3 and then give NaN).
-      const r = Math.hypot(m[k], m[k + 1]);
-      const limit = 3 * Math.abs(d[k]);
+      const r = hypot(m[k], m[k + 1]);
+      const limit = 3 * abs(d[k]);
       if (r > limit) {
         m[k] = (limit * m[k]) / r;
         m[k + 1] = (limit * m[k + 1]) / r;

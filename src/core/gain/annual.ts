@@ -35,6 +35,10 @@ import { describeDaylightSaving, standardToClock, type TimeConvention } from '..
 import { type SharedYear, SharedYears, dniExtraByDay, fillWeather, monthOfDay, perezBrightnessOf, sharedYearKey, sharedYearOf, sunPathAt } from './sharedYear';
 import type { DiffuseShading, WindowSpec } from './window';
 
+const { atan2, cos, max, min, sin } = Math;
+const { isFinite: numberIsFinite } = Number;
+const NAN = Number.NaN;
+
 /**
  * One window's year, hour by hour. Every column has `hours` entries; row i is the hour stamped
  * stampSerial[i], read by `timeConvention` (hour ending at the stamp, or the instant itself).
@@ -203,7 +207,7 @@ export function annualOfPrepared(w: PreparedWindow, shared?: SharedYear, reuse =
     convective: col(c.convective as Float64Array),
     gainBeam: col(c.gainBeam as Float64Array),
     gainDiffuse: col(c.gainDiffuse as Float64Array),
-    dryBulb: scratch && spec.glazing.uValue === undefined ? scratch.dryBulb : col(c.dryBulb as Float64Array).fill(Number.NaN), // (a summary reads no dry-bulb)
+    dryBulb: scratch && spec.glazing.uValue === undefined ? scratch.dryBulb : col(c.dryBulb as Float64Array).fill(NAN), // (a summary reads no dry-bulb)
     conduction: col(c.conduction as Float64Array),
     hasConduction: spec.glazing.uValue !== undefined,
     interiorShade: w.interiorShade,
@@ -325,7 +329,7 @@ export function yearTotalsOfShared(w: PreparedWindow, sy: SharedYear): YearTotal
   const shade = w.vertical ? prepareShading({ width: spec.width, height: spec.height }, spec.shading, surfAz) : undefined;
   const plane = preparePlane({ surfaceTilt: tilt, surfaceAzimuth: surfAz, groundAlbedo: spec.groundAlbedo, skyModel: w.skyModel, shade: w.shade });
   const brightness = plane.perez ? perezBrightnessOf(sy) : undefined;
-  hourlyAngles(0, n, sy.daylight, sy, Math.cos(tilt * RAD), Math.sin(tilt * RAD), Math.cos(surfAz * RAD), Math.sin(surfAz * RAD), scratch.incidence, scratch.profileAngle, true);
+  hourlyAngles(0, n, sy.daylight, sy, cos(tilt * RAD), sin(tilt * RAD), cos(surfAz * RAD), sin(surfAz * RAD), scratch.incidence, scratch.profileAngle, true);
   hourlyShading(0, n, sy.daylight, shade, w.curve, surfAz, sy, scratch.incidence, scratch.sunlitFraction, scratch.shgc);
   totals.sunOnWallHours = SHADING_TOTALS.hours;
   totals.sunlitSum = SHADING_TOTALS.sunlitSum;
@@ -375,7 +379,7 @@ function runPasses(w: PreparedWindow, sun: SharedYear | SunColumns, out: AnnualS
   // loops with few live values run much faster than one long loop body, and a function of its own
   // keeps its type feedback): angles for every hour; shading and SHGC for the hours with the sun in
   // front of the window; irradiance and gain for the hours with light.
-  hourlyAngles(from, to, summaryOnly ? hours?.daylight : undefined, sun, Math.cos(tilt * RAD), Math.sin(tilt * RAD), Math.cos(surfAz * RAD), Math.sin(surfAz * RAD), out.incidence, out.profileAngle, summaryOnly);
+  hourlyAngles(from, to, summaryOnly ? hours?.daylight : undefined, sun, cos(tilt * RAD), sin(tilt * RAD), cos(surfAz * RAD), sin(surfAz * RAD), out.incidence, out.profileAngle, summaryOnly);
   hourlyShading(from, to, hours?.daylight, shade, w.curve, surfAz, sun, out.incidence, out.sunlitFraction, out.shgc);
   if (out.hasConduction) hourlyConduction(w, out, from, to); // before the gain: a missing dry-bulb marks its hour missing
   hourlyGain(from, to, hours?.lit, plane, brightness, w.solarArea * w.interiorAttenuation, w.solarArea * w.interiorAttenuationDiffuse, w.radiantFraction, w.radiantFractionDiffuse, w.curve.diffuse, w.beamOnly ? w.skylineSky : -1, sun, out, summaryOnly);
@@ -515,12 +519,12 @@ export function annualRowOfPrepared(w: PreparedWindow, row: number, weatherHour?
   if (!(row >= 0 && row < path.hours)) throw new SunpaneError('row', row, `must be a row of ${w.spec.year}: 0 to ${path.hours - 1}`);
   const out = scratchSeries(w, path);
   for (const c of [out.incidence, out.profileAngle, out.sunlitFraction, out.dni, out.dhi, out.beam, out.sky, out.ground, out.skyUnshaded, out.groundUnshaded, out.shgc, out.gain, out.radiant, out.convective, out.gainBeam, out.gainDiffuse, out.conduction]) c[row] = 0;
-  out.dryBulb[row] = Number.NaN;
+  out.dryBulb[row] = NAN;
   out.missing[row] = 0;
   if (weatherHour !== undefined) {
     out.dni[row] = requireRange('dni', weatherHour.dni, 0, MAX_IRRADIANCE, 'W/m²');
     out.dhi[row] = requireRange('dhi', weatherHour.dhi, 0, MAX_IRRADIANCE, 'W/m²');
-    requirePossibleIrradiance(out.dni[row], out.dhi[row], Math.sin(path.altitude[row] * RAD), dniExtraByDay()[((row / 24) | 0) + 1]);
+    requirePossibleIrradiance(out.dni[row], out.dhi[row], sin(path.altitude[row] * RAD), dniExtraByDay()[((row / 24) | 0) + 1]);
   } else fillWeather(w, path.altitude, path.zenith, out, row, row + 1);
   runPasses(w, { altitude: path.altitude, azimuth: path.azimuth, sinAltitude: path.sinAltitude!, cosAltitude: path.cosAltitude!, sinAzimuth: path.sinAzimuth!, cosAzimuth: path.cosAzimuth! }, out, row, row + 1);
   return {
@@ -566,7 +570,7 @@ function hourlyConduction(w: PreparedWindow, out: AnnualSeries, from: number, to
     const rowOf = w.yearFit!.rowOf;
     for (let i = from; i < to; i++) {
       const t = series[rowOf[i]];
-      if (!Number.isFinite(t)) {
+      if (!numberIsFinite(t)) {
         missing[i] = 1;
         continue;
       }
@@ -583,7 +587,7 @@ function hourlyConduction(w: PreparedWindow, out: AnnualSeries, from: number, to
   for (let day = (from / 24) | 0; day * 24 < to; day++) {
     const tMax = monthlyValue(d.dryBulbMax, months[day]);
     const range = monthlyValue(d.dailyRange, months[day]);
-    for (let i = Math.max(from, day * 24); i < Math.min(to, day * 24 + 24); i++) {
+    for (let i = max(from, day * 24); i < min(to, day * 24 + 24); i++) {
       const t = tMax - DAILY_RANGE_FRACTIONS[(i - day * 24 + shift) % 24] * range;
       dryBulb[i] = t;
       conduction[i] = ua * (t - tIn);
@@ -700,7 +704,7 @@ function hourlyAngles(
       continue;
     }
     incidence[i] = acosClamped(cosTheta) * deg;
-    const omega = Math.atan2(sinBeta, cosBeta * cosGamma) * deg; // D&B Eq. 1.9.1a
+    const omega = atan2(sinBeta, cosBeta * cosGamma) * deg; // D&B Eq. 1.9.1a
     profileAngle[i] = omega === -180 ? 180 : omega;
   }
 }

@@ -15,6 +15,10 @@ import { fractionOfDailyRange } from './outdoorTemperature';
 import { outdoorTemperatureSource, radiantFractionsOf, skyModelOf, validateWindowSpec } from './windowSpec';
 import type { Weather, WindowSpec } from './window';
 
+const { abs, cos, floor, min, round, sin } = Math;
+const { isFinite: numberIsFinite } = Number;
+const NAN = Number.NaN;
+
 /** Direct normal and diffuse horizontal irradiance of one hour [W/m²]. */
 export interface WeatherHour {
   dni: number;
@@ -153,14 +157,14 @@ export function weatherFromSpec(w: PreparedWindow, hourIndex: number, month: num
       const row = w.yearFit!.rowOf[hourIndex];
       const dni = weather.dni[row];
       const dhi = weather.dhi[row];
-      if (!Number.isFinite(dni) || !Number.isFinite(dhi)) return undefined;
+      if (!numberIsFinite(dni) || !numberIsFinite(dhi)) return undefined;
       // Past the physically possible limits at this sun: missing, as the annual series has it.
-      if (!isPossibleIrradiance(dni, dhi, Math.sin(sunAltitude * RAD), extraterrestrialSpencer(doy))) return undefined;
+      if (!isPossibleIrradiance(dni, dhi, sin(sunAltitude * RAD), extraterrestrialSpencer(doy))) return undefined;
       return { dni, dhi };
     }
     case 'globalHorizontal': {
       const ghi = weather.ghi[w.yearFit!.rowOf[hourIndex]];
-      if (!Number.isFinite(ghi) || !isPossibleGlobal(ghi, Math.cos(sunZenith * RAD), extraterrestrialSpencer(doy))) return undefined;
+      if (!numberIsFinite(ghi) || !isPossibleGlobal(ghi, cos(sunZenith * RAD), extraterrestrialSpencer(doy))) return undefined;
       const d = decomposeErbs(ghi, sunZenith, doy);
       return { dni: d.dni, dhi: d.dhi };
     }
@@ -192,16 +196,16 @@ export function outdoorTemperatureAt(w: PreparedWindow, stamp: number, month: nu
   if (source === 'series') {
     const series = (weather as { dryBulb: ArrayLike<number> }).dryBulb;
     const value = series[w.yearFit!.rowOf[hourIndexOf(w, stamp)]];
-    return Number.isFinite(value) ? value : Number.NaN;
+    return numberIsFinite(value) ? value : NAN;
   }
   const d = weather as { dryBulbMax: number[]; dailyRange: number[] };
   let hour: number;
   if (w.convention === 'instant') {
-    hour = (stamp - Math.floor(stamp)) * 24;
-    if (Math.abs(hour - Math.round(hour)) < 1e-6) hour = Math.round(hour); // on the hour: the profile's own value
+    hour = (stamp - floor(stamp)) * 24;
+    if (abs(hour - round(hour)) < 1e-6) hour = round(hour); // on the hour: the profile's own value
   } else {
     const middle = stamp - 1 / 48;
-    hour = Math.min(24, Math.floor((middle - Math.floor(middle)) * 24 + 1e-9) + 1);
+    hour = min(24, floor((middle - floor(middle)) * 24 + 1e-9) + 1);
   }
   return monthlyValue(d.dryBulbMax, month) - fractionOfDailyRange(hour) * monthlyValue(d.dailyRange, month);
 }

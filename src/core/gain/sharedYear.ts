@@ -17,6 +17,9 @@ import { annualSunPath, type Site, type SunTrigColumns } from '../sun';
 import { daysInMonth, type TimeConvention } from '../time';
 import type { Weather } from './window';
 
+const { cos, max, min, sin } = Math;
+const { isFinite: numberIsFinite } = Number;
+
 /** The sun's path and the weather of one site and year, hour by hour. */
 export interface SharedYear {
   /** Year, site and weather this was worked out for (see {@link sharedYearKey}). */
@@ -248,7 +251,7 @@ export function fillWeather(w: PreparedWindow, alt: Float64Array, zen: Float64Ar
         const month = months[day];
         const tauB = monthlyValue(weather.tauB, month);
         const tauD = monthlyValue(weather.tauD, month);
-        for (let i = Math.max(from, day * 24); i < Math.min(to, day * 24 + 24); i++) {
+        for (let i = max(from, day * 24); i < min(to, day * 24 + 24); i++) {
           if (!(alt[i] > 0)) continue; // sun down: no irradiance (the columns start at 0)
           const c = ashraeClearSky(alt[i], day + 1, tauB, tauD);
           dni[i] = c.dni;
@@ -260,7 +263,7 @@ export function fillWeather(w: PreparedWindow, alt: Float64Array, zen: Float64Ar
       const elevation = w.spec.site.elevation ?? 0;
       for (let day = (from / 24) | 0; day * 24 < to; day++) {
         const linke = monthlyValue(weather.linkeTurbidity, months[day]);
-        for (let i = Math.max(from, day * 24); i < Math.min(to, day * 24 + 24); i++) {
+        for (let i = max(from, day * 24); i < min(to, day * 24 + 24); i++) {
           if (!(alt[i] > 0)) continue;
           const c = ineichenPerezClearSky(alt[i], day + 1, linke, elevation);
           dni[i] = c.dni;
@@ -278,7 +281,7 @@ export function fillWeather(w: PreparedWindow, alt: Float64Array, zen: Float64Ar
         const b = dniIn[rowOf[i]];
         const d = dhiIn[rowOf[i]];
         // A value no sky can give at this sun (Long & Shi 2008) marks the hour missing, as the weather reader does.
-        if (Number.isFinite(b) && Number.isFinite(d) && isPossibleIrradiance(b, d, Math.sin(alt[i] * RAD), dniExtra[((i / 24) | 0) + 1])) {
+        if (numberIsFinite(b) && numberIsFinite(d) && isPossibleIrradiance(b, d, sin(alt[i] * RAD), dniExtra[((i / 24) | 0) + 1])) {
           dni[i] = b;
           dhi[i] = d;
         } else missing[i] = 1;
@@ -292,7 +295,7 @@ export function fillWeather(w: PreparedWindow, alt: Float64Array, zen: Float64Ar
       for (let i = from; i < to; i++) {
         const ghi = ghiIn[rowOf[i]];
         // As decomposeErbs judges it (same cosine, same day's value): past the limit the hour is missing.
-        if (!Number.isFinite(ghi) || !isPossibleGlobal(ghi, Math.cos(zen[i] * RAD), dniExtra[((i / 24) | 0) + 1])) {
+        if (!numberIsFinite(ghi) || !isPossibleGlobal(ghi, cos(zen[i] * RAD), dniExtra[((i / 24) | 0) + 1])) {
           missing[i] = 1;
           continue;
         }

@@ -12,6 +12,8 @@ import type { Site } from '../sun';
 import type { DiffuseShading, Weather, WindowSpec } from './window';
 import { DAILY_RANGE_MAX, DRY_BULB_MAX, DRY_BULB_MIN } from './outdoorTemperature';
 
+const { isFinite: numberIsFinite } = Number;
+
 /**
  * Default radiant fraction of the window gain: 1, all transmitted solar gain treated as radiant
  * (reaching the floor and furnishings before the air), the usual treatment of unshaded glazing in
@@ -104,7 +106,7 @@ function validateSeries(path: string, values: unknown, year: number, min = 0, ma
     const x = v[i];
     if (typeof x !== 'number') throw new SunpaneError(`${path}[${i}]`, x, `must be a number from ${min} to ${max} ${unit}, or NaN for a missing hour`);
     // Non-finite values mark missing hours (documented); finite ones must be physical.
-    if (Number.isFinite(x) && (x < min || x > max)) {
+    if (numberIsFinite(x) && (x < min || x > max)) {
       throw new SunpaneError(`${path}[${i}]`, x, `must be a number from ${min} to ${max} ${unit}, or NaN for a missing hour`);
     }
   }

@@ -14,6 +14,10 @@ import { paneExtinctionFor, paneStackTransmittance } from './fresnel';
 import { KR_TYPE_PARAMETER_MAX, KR_TYPE_PARAMETER_MIN, karlssonRoosModel } from './karlssonRoos';
 import type { AngleTable, Glazing, GlazingType, ShgcBasis } from './types';
 
+const { round } = Math;
+const { isNaN: numberIsNaN } = Number;
+const NAN = Number.NaN;
+
 /** Panes accepted by the physical model. */
 export const PANES_MIN = 1;
 export const PANES_MAX = 4;
@@ -286,9 +290,9 @@ export function shgcCurve(glazing: Glazing): ShgcCurve {
     const k = u | 0;
     const f = u - k;
     let lo = lookup[k];
-    if (Number.isNaN(lo)) lo = lookup[k] = model(k * CURVE_STEP);
+    if (numberIsNaN(lo)) lo = lookup[k] = model(k * CURVE_STEP);
     let hi = lookup[k + 1];
-    if (Number.isNaN(hi)) hi = lookup[k + 1] = model((k + 1) * CURVE_STEP);
+    if (numberIsNaN(hi)) hi = lookup[k + 1] = model((k + 1) * CURVE_STEP);
     return lo + f * (hi - lo);
   };
   return { atAngle, diffuse, normal: lookup[0] };
@@ -300,8 +304,8 @@ export function shgcCurve(glazing: Glazing): ShgcCurve {
  * lookup[count] (90°) and lookup[count + 1] are 0.
  */
 function emptyLookup(model: (incidence: number) => number): Float64Array {
-  const count = Math.round(90 / CURVE_STEP);
-  const lookup = new Float64Array(count + 2).fill(Number.NaN, 0, count);
+  const count = round(90 / CURVE_STEP);
+  const lookup = new Float64Array(count + 2).fill(NAN, 0, count);
   lookup[0] = model(0);
   return lookup;
 }

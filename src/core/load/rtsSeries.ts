@@ -27,6 +27,8 @@
  */
 import { SunpaneError } from '../common';
 
+const { exp } = Math;
+
 /** Construction weights with shipped illustrative series. */
 export type Construction = 'light' | 'medium' | 'heavy';
 export const CONSTRUCTIONS: readonly Construction[] = Object.freeze(['light', 'medium', 'heavy'] as Construction[]);
@@ -49,8 +51,8 @@ export const ILLUSTRATIVE_SOURCE = 'illustrative series computed by Sunpane from
  */
 export function firstOrderRadiantTimeSeries(f0: number, tau: number): Float64Array {
   const r = new Float64Array(24);
-  const wrap = 1 - Math.exp(-24 / tau);
-  for (let k = 0; k < 24; k++) r[k] = ((1 - f0) * (Math.exp(-k / tau) - Math.exp(-(k + 1) / tau))) / wrap;
+  const wrap = 1 - exp(-24 / tau);
+  for (let k = 0; k < 24; k++) r[k] = ((1 - f0) * (exp(-k / tau) - exp(-(k + 1) / tau))) / wrap;
   r[0] += f0;
   return r;
 }

@@ -1,3 +1,5 @@
+
+const { abs, sqrt } = Math;
 /**
  * Exact area of the intersection of an axis-aligned rectangle with convex polygons given as
  * half-planes, and of a rectangle with a strip ({@link rectangleStripArea}, the closed form the
@@ -56,7 +58,7 @@ export function writeQuadHalfPlanes(
 ): boolean {
   // Shoelace, twice the signed area.
   const twiceArea = (x0 * y1 - x1 * y0) + (x1 * y2 - x2 * y1) + (x2 * y3 - x3 * y2) + (x3 * y0 - x0 * y3);
-  if (!(Math.abs(twiceArea) > 0)) return false;
+  if (!(abs(twiceArea) > 0)) return false;
   if (box !== undefined) {
     box[at] = min4(x0, x1, x2, x3);
     box[at + 1] = min4(y0, y1, y2, y3);
@@ -83,7 +85,7 @@ function writeEdge(out: Float64Array, k: number, ax: number, ay: number, bx: num
   const dy = (by - ay) * s;
   // √(dx² + dy²) rather than Math.hypot (several times slower): the shadow vertices stay far below
   // 1e150, and an axis-aligned edge still gets an exact unit normal (√(dx²) = |dx| in IEEE arithmetic).
-  const len = Math.sqrt(dx * dx + dy * dy);
+  const len = sqrt(dx * dx + dy * dy);
   if (len === 0) {
     // A repeated vertex: a half-plane that keeps everything (0·x + 0·y ≤ 1).
     out[k] = 0;
@@ -95,7 +97,7 @@ function writeEdge(out: Float64Array, k: number, ax: number, ay: number, bx: num
   const b = -dx / len;
   // Use the vertex nearer the origin for C: the rectangle lives near the origin, so this keeps the
   // rounding of C small when the other vertex is far away (sun grazing the wall).
-  const near = Math.abs(ax) + Math.abs(ay) <= Math.abs(bx) + Math.abs(by);
+  const near = abs(ax) + abs(ay) <= abs(bx) + abs(by);
   out[k] = a;
   out[k + 1] = b;
   out[k + 2] = near ? a * ax + b * ay : a * bx + b * by;
@@ -223,7 +225,7 @@ function polygonArea(p: Float64Array, n: number): number {
   for (let i = 1; i < n - 1; i++) {
     twice += (p[2 * i] - ox) * (p[2 * i + 3] - oy) - (p[2 * i + 2] - ox) * (p[2 * i + 1] - oy);
   }
-  return Math.abs(twice) / 2;
+  return abs(twice) / 2;
 }
 
 const unionStarts = new Int32Array(3);

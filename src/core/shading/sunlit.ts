@@ -58,7 +58,7 @@ import { requireSkyline, skylineElevationUnchecked } from './skyline';
 import type { Fin, Overhang, Shading } from './types';
 
 
-const { sin, cos, abs, max, min } = Math;
+const { abs, cos, floor, max, min, sin } = Math;
 
 /** The glass of a window: width and height in one length unit (only ratios matter). */
 export interface WindowOpening {
@@ -451,7 +451,7 @@ export function prepareShading(window: WindowOpening, shading: Shading, surfaceA
         const sunAzimuth = azimuth[i];
         // skylineElevationUnchecked (src/core/shading/skyline.ts) without its wrap for an azimuth already in 0…360.
         if (sunAzimuth >= 0 && sunAzimuth < 360) {
-          const j = Math.floor((sunAzimuth * sectors) / 360);
+          const j = floor((sunAzimuth * sectors) / 360);
           if (sunAltitude < skyline[j >= sectors ? sectors - 1 : j]) {
             out[i] = 0;
             continue;
@@ -505,7 +505,7 @@ let PLAN_SCRATCH = { rows: new Int32Array(0), a: new Float64Array(0), b: new Flo
 
 function planScratch(n: number): typeof PLAN_SCRATCH {
   if (PLAN_SCRATCH.rows.length < n) {
-    const size = Math.max(n, 8784);
+    const size = max(n, 8784);
     PLAN_SCRATCH = { rows: new Int32Array(size), a: new Float64Array(size), b: new Float64Array(size), p: new Float64Array(size), q: new Float64Array(size) };
   }
   return PLAN_SCRATCH;

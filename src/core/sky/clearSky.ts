@@ -9,7 +9,7 @@
  */
 import { airMassKastenYoung } from './airMass';
 import { RAD, SunpaneError, requireRange } from '../common';
-import { physicalIrradianceLimits } from './qualityLimits';
+import { type IrradianceLimits, physicalIrradianceLimits } from './qualityLimits';
 import { standardPressure } from '../sun';
 import { extraterrestrialIrradiance, extraterrestrialSpencer, requireDayOfYear } from './extraterrestrial';
 
@@ -121,6 +121,53 @@ const TRIAL_ALTITUDES: readonly number[] = (() => {
 /** Days tried: near perihelion and aphelion (the model and the limits scale with different E0 formulas). */
 const TRIAL_DAYS = [3, 185];
 
+/**
+ * What the trials of a pair share, worked out once: for each trial day and altitude (days outer, in
+ * the order tried) the model's E0, the air mass, the sine of the altitude and the physically possible
+ * limits — the same functions of the same arguments as {@link ashraeModel} and {@link pastLimits}
+ * evaluate, so every verdict and message is the one they give. A pair is then judged with two powers
+ * and two exponentials per trial.
+ */
+interface Trial {
+  altitude: number;
+  e0: number;
+  m: number;
+  sinAltitude: number;
+  limits: IrradianceLimits;
+}
+const TRIALS: readonly Trial[] = TRIAL_DAYS.flatMap((day) => {
+  const e0 = extraterrestrialIrradiance(day);
+  const sa = extraterrestrialSpencer(day);
+  return TRIAL_ALTITUDES.map((altitude) => {
+    const sinAltitude = sin(altitude * RAD);
+    return { altitude, e0, m: airMassKastenYoung(altitude), sinAltitude, limits: physicalIrradianceLimits(sinAltitude, sa) };
+  });
+});
+
+/** The first trial at which the pair's clear sky is past the limits, with what is past them, or undefined. */
+function pairProblem(tauB: number, tauD: number): { altitude: number; problem: { what: string; value: number; limit: number } } | undefined {
+  const { ab, ad } = ashraeAirMassExponents(tauB, tauD);
+  for (const t of TRIALS) {
+    const dni = t.e0 * exp(-tauB * pow(t.m, ab)); // Eq. 15, as ashraeModel
+    const dhi = t.e0 * exp(-tauD * pow(t.m, ad)); // Eq. 16
+    const ghi = dni * t.sinAltitude + dhi;
+    const limits = t.limits;
+    // the order of pastLimits: the direct normal, the diffuse, the global
+    if (dni > limits.dni) return { altitude: t.altitude, problem: { what: 'a direct normal irradiance', value: dni, limit: limits.dni } };
+    if (dhi > limits.dhi) return { altitude: t.altitude, problem: { what: 'a diffuse horizontal irradiance', value: dhi, limit: limits.dhi } };
+    if (ghi > limits.ghi) return { altitude: t.altitude, problem: { what: 'a global horizontal irradiance', value: ghi, limit: limits.ghi } };
+  }
+  return undefined;
+}
+
+/**
+ * Whether {@link requireClearSkyPair} accepts a τb/τd pair, without an error to build (for callers
+ * that search the accepted pairs). Arguments as there, already checked.
+ */
+export function isAcceptedClearSkyPair(tauB: number, tauD: number): boolean {
+  return (tauB === lastB && tauD === lastD) || pairProblem(tauB, tauD) === undefined;
+}
+
 /** The last pairs judged (a year of hours asks about the same few pairs again and again). */
 const judged = new Map<string, true>();
 
@@ -148,14 +195,8 @@ export function requireClearSkyPair(tauB: number, tauD: number, names: { tauB: s
     lastD = tauD;
     return;
   }
-  for (const day of TRIAL_DAYS) {
-    const e0 = extraterrestrialIrradiance(day);
-    const sa = extraterrestrialSpencer(day);
-    for (const altitude of TRIAL_ALTITUDES) {
-      const problem = pastLimits(ashraeModel(altitude, e0, tauB, tauD), altitude, sa);
-      if (problem !== undefined) throw pairError(names.tauB, names.tauD, tauB, tauD, altitude, problem);
-    }
-  }
+  const found = pairProblem(tauB, tauD);
+  if (found !== undefined) throw pairError(names.tauB, names.tauD, tauB, tauD, found.altitude, found.problem);
   // Stryker disable next-line ConditionalExpression,EqualityOperator: when the cache is emptied only changes how often a pair is judged again, never the verdict
   if (judged.size > 64) judged.clear();
   // Stryker disable next-line BooleanLiteral: the cache is read by has() only, never by its value

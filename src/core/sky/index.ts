@@ -7,7 +7,7 @@
  * This index is the folder's only public door: code outside the folder imports from here.
  */
 export { AIR_MASS_HORIZON, airMassKastenYoung } from './airMass';
-export { ashraeClearSky, ineichenPerezClearSky, requireClearSkyPair, LINKE_MAX, LINKE_MIN, TAU_B_MAX, TAU_D_MAX } from './clearSky';
+export { ashraeClearSky, ineichenPerezClearSky, isAcceptedClearSkyPair, requireClearSkyPair, LINKE_MAX, LINKE_MIN, TAU_B_MAX, TAU_D_MAX } from './clearSky';
 export { decomposeErbs, GHI_MAX } from './decomposition';
 export { extraterrestrialIrradiance, extraterrestrialSpencer } from './extraterrestrial';
 export { type DiffuseShade, perezBrightnessColumns, type PerezBrightnessColumns, planeIrradiance, type PlaneParts, type PlaneRows, type PreparedPlane, preparePlane, type SkyModel } from './planeIrradiance';

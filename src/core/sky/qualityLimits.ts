@@ -13,6 +13,8 @@
 import { SunpaneError, requireRange } from '../common';
 import { DNI_EXTRA_MAX, DNI_EXTRA_MIN } from './transposition';
 
+const { PI, asin, max, min } = Math;
+
 /** Lowest value any component may read [W/m²]: a small negative reading is a sensor's night offset. */
 export const IRRADIANCE_FLOOR = -4;
 
@@ -109,8 +111,8 @@ export function isPossibleGlobal(ghi: number, cosZenith: number, extraterrestria
  */
 export function requirePossibleIrradiance(dni: number, dhi: number, sinAltitude: number, extraterrestrialNormal: number, names: { dni: string; dhi: string } = { dni: 'dni', dhi: 'dhi' }): void {
   if (isPossibleIrradiance(dni, dhi, sinAltitude, extraterrestrialNormal)) return;
-  const limits = physicalIrradianceLimits(Math.max(-1, Math.min(1, sinAltitude)), extraterrestrialNormal);
-  const altitude = (Math.asin(Math.max(-1, Math.min(1, sinAltitude))) * 180) / Math.PI;
+  const limits = physicalIrradianceLimits(max(-1, min(1, sinAltitude)), extraterrestrialNormal);
+  const altitude = (asin(max(-1, min(1, sinAltitude))) * 180) / PI;
   const sun = altitude > 0 ? `with the sun ${round(altitude, 2)}° high` : 'with the sun at or below the horizon';
   const why = `the physically possible limit (Long & Shi 2008) ${sun} and an extraterrestrial ${round(extraterrestrialNormal, 1)} W/m²; check the units (W/m², not hourly sums in Wh/m² or kJ/m²), the date-time and the site`;
   if (dni > limits.dni) throw new SunpaneError(names.dni, dni, `must be at most ${round(limits.dni, 1)} W/m², ${why}`);

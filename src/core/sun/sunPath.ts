@@ -29,14 +29,14 @@ import { EARTH_RADIUS_M, POLAR_RATIO, RISE_SET_ALTITUDE, requireSite, resolveSun
 import { civilToSerial, deltaTAt, hoursInYear, julianDay, requireUtcOffset, requireYear, serialToUtcMs } from '../time';
 import type { Site } from './site';
 
-const { sin, cos, tan, atan, atan2, sqrt, floor } = Math;
+const { atan, atan2, ceil, cos, floor, min, round, sin, sqrt, tan } = Math;
 
 const MS_PER_HOUR = 3_600_000;
 const MS_PER_DAY = 86_400_000;
 /** Days from 1970-01-01 00:00 UT to J2000.0 (JD 2451545.0). */
 const DAYS_UNIX_TO_J2000 = 10_957.5;
-const COS_15 = Math.cos(15 * RAD);
-const SIN_15 = Math.sin(15 * RAD);
+const COS_15 = cos(15 * RAD);
+const SIN_15 = sin(15 * RAD);
 /**
  * Days between nodes. The slow terms' fastest periodic parts (lunar terms of 9.1–29.5 days in the
  * nutation and the Earth series, amplitudes ≤ 0.002°) make the interpolation error grow as
@@ -296,7 +296,7 @@ function hourlyVectors(
     } else {
       // H advances 15° + ε per hour (|ε| ≈ 0.04°): rotate by 15° and by ε (Taylor to ε⁵, exact to 1e-20).
       let step = hourAngle - previousHourAngle - 15;
-      step -= 360 * Math.round(step / 360);
+      step -= 360 * round(step / 360);
       const eps = step * rad;
       const eps2 = eps * eps;
       const cosEps = 1 - eps2 * (0.5 - eps2 / 24);
@@ -540,7 +540,7 @@ function interpolateHourly(nodeValues: Float64Array, hourOffset: number, hours: 
     const c4 = f0 * w[4] + f1 * w[10] + f2 * w[16] + f3 * w[22] + f4 * w[28] + f5 * w[34];
     const c5 = f0 * w[5] + f1 * w[11] + f2 * w[17] + f3 * w[23] + f4 * w[29] + f5 * w[35];
     // Hours of this step: from i up to (not including) the first at or past node k + 1.
-    const end = Math.min(hours, Math.ceil(HOURS_PER_STEP * (k + 1) - hourOffset));
+    const end = min(hours, ceil(HOURS_PER_STEP * (k + 1) - hourOffset));
     const hourOfNode = hourOffset - HOURS_PER_STEP * k;
     for (; i < end; i++) {
       const p = (hourOfNode + i) * (1 / HOURS_PER_STEP);

@@ -15,6 +15,9 @@
  */
 import { SunpaneError, requireRange } from '../common';
 
+const { floor, round } = Math;
+const { isFinite: numberIsFinite } = Number;
+
 const MS_PER_DAY = 86_400_000;
 const MS_PER_HOUR = 3_600_000;
 /** Serial of 1970-01-01 00:00 in the 1900 date system. */
@@ -44,7 +47,7 @@ export interface CivilDateTime {
 
 /** Validates a spreadsheet serial date-time; returns it. */
 export function requireSerial(argument: string, serial: unknown): number {
-  if (typeof serial !== 'number' || !Number.isFinite(serial) || serial < MIN_SERIAL || serial >= MAX_SERIAL_EXCLUSIVE) {
+  if (typeof serial !== 'number' || !numberIsFinite(serial) || serial < MIN_SERIAL || serial >= MAX_SERIAL_EXCLUSIVE) {
     throw new SunpaneError(
       argument,
       serial,
@@ -88,23 +91,23 @@ export function utcMsToSerial(utcMs: number, utcOffset: number): number {
 /** Days from 1970-01-01 to the given proleptic Gregorian date (Howard Hinnant's days_from_civil). */
 function daysFromCivil(year: number, month: number, day: number): number {
   const y = month <= 2 ? year - 1 : year;
-  const era = Math.floor(y / 400);
+  const era = floor(y / 400);
   const yoe = y - era * 400;
   const mp = (month + 9) % 12;
-  const doy = Math.floor((153 * mp + 2) / 5) + day - 1;
-  const doe = yoe * 365 + Math.floor(yoe / 4) - Math.floor(yoe / 100) + doy;
+  const doy = floor((153 * mp + 2) / 5) + day - 1;
+  const doe = yoe * 365 + floor(yoe / 4) - floor(yoe / 100) + doy;
   return era * 146_097 + doe - 719_468;
 }
 
 /** Proleptic Gregorian date of a day count from 1970-01-01 (Hinnant's civil_from_days). */
 function civilFromDays(days: number): { year: number; month: number; day: number } {
   const z = days + 719_468;
-  const era = Math.floor(z / 146_097);
+  const era = floor(z / 146_097);
   const doe = z - era * 146_097;
-  const yoe = Math.floor((doe - Math.floor(doe / 1460) + Math.floor(doe / 36_524) - Math.floor(doe / 146_096)) / 365);
-  const doy = doe - (365 * yoe + Math.floor(yoe / 4) - Math.floor(yoe / 100));
-  const mp = Math.floor((5 * doy + 2) / 153);
-  const day = doy - Math.floor((153 * mp + 2) / 5) + 1;
+  const yoe = floor((doe - floor(doe / 1460) + floor(doe / 36_524) - floor(doe / 146_096)) / 365);
+  const doy = doe - (365 * yoe + floor(yoe / 4) - floor(yoe / 100));
+  const mp = floor((5 * doy + 2) / 153);
+  const day = doy - floor((153 * mp + 2) / 5) + 1;
   const month = mp < 10 ? mp + 3 : mp - 9;
   return { year: yoe + era * 400 + (month <= 2 ? 1 : 0), month, day };
 }
@@ -124,10 +127,10 @@ export function civilToSerial(year: number, month: number, day: number, hour = 0
  * 29 February 1900; serials 1…59 give January and February 1900.
  */
 export function serialToCivil(serial: number): CivilDateTime {
-  let whole = Math.floor(serial);
+  let whole = floor(serial);
   let fraction = serial - whole;
   // Round to the millisecond so that 0.999999999 of a day reads as the next midnight, not 23:59:60.
-  let ms = Math.round(fraction * MS_PER_DAY);
+  let ms = round(fraction * MS_PER_DAY);
   if (ms >= MS_PER_DAY) {
     whole += 1;
     ms -= MS_PER_DAY;
@@ -136,8 +139,8 @@ export function serialToCivil(serial: number): CivilDateTime {
   let date: { year: number; month: number; day: number };
   if (whole === 60) date = { year: 1900, month: 2, day: 29 };
   else date = civilFromDays((whole < MIN_SERIAL ? whole + 1 : whole) - SERIAL_UNIX_EPOCH);
-  const hour = Math.floor(fraction / MS_PER_HOUR);
-  const minute = Math.floor((fraction - hour * MS_PER_HOUR) / 60_000);
+  const hour = floor(fraction / MS_PER_HOUR);
+  const minute = floor((fraction - hour * MS_PER_HOUR) / 60_000);
   const second = (fraction - hour * MS_PER_HOUR - minute * 60_000) / 1000;
   return { ...date, hour, minute, second };
 }

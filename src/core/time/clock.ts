@@ -19,6 +19,9 @@
 import { SunpaneError, requireRange } from '../common';
 import { civilToSerial, daysInMonth, formatSerialIso, hoursInYear, isLeapYear, MAX_SERIAL_EXCLUSIVE, requireSerial, serialToCivil } from './calendar';
 
+const { ceil, floor } = Math;
+const { isFinite: numberIsFinite } = Number;
+
 /** A daylight-saving rule as given (serials in the 1900 date system). */
 export interface DaylightSavingRule {
   /** Clock reading (standard time) when the clocks go forward, as a serial of one year's date. */
@@ -50,14 +53,14 @@ const ORDINAL = ['', 'first', 'second', 'third', 'fourth', 'last'];
 /** Weekday of a serial date, 0 = Sunday (valid from serial 61 on). */
 function weekdayOf(serial: number): number {
   // Serial 61 (1 March 1900) was a Thursday (4).
-  return (((Math.floor(serial) - 61 + 4) % 7) + 7) % 7;
+  return (((floor(serial) - 61 + 4) % 7) + 7) % 7;
 }
 
 function recurringOf(serial: number): RecurringDate {
   const c = serialToCivil(serial);
-  const whole = Math.floor(serial);
+  const whole = floor(serial);
   const last = c.day + 7 > daysInMonth(c.year, c.month);
-  return { month: c.month, nth: last ? 5 : Math.ceil(c.day / 7), weekday: weekdayOf(whole), timeOfDay: serial - whole };
+  return { month: c.month, nth: last ? 5 : ceil(c.day / 7), weekday: weekdayOf(whole), timeOfDay: serial - whole };
 }
 
 /** The serial of a recurring date in a year. */
@@ -200,7 +203,7 @@ export const MAX_SERIAL_1904_EXCLUSIVE = MAX_SERIAL_EXCLUSIVE - DATE_1904_OFFSET
  */
 export function requireSerialIn(argument: string, serial: unknown, system: DateSystem): number {
   if (system === 1900) return requireSerial(argument, serial);
-  if (typeof serial !== 'number' || !Number.isFinite(serial) || serial < 0 || serial >= MAX_SERIAL_1904_EXCLUSIVE) {
+  if (typeof serial !== 'number' || !numberIsFinite(serial) || serial < 0 || serial >= MAX_SERIAL_1904_EXCLUSIVE) {
     throw new SunpaneError(argument, serial, `must be a date-time of the 1904 date system from 1 January 1904 (serial 0) to 31 December 9999 (serial below ${MAX_SERIAL_1904_EXCLUSIVE})`);
   }
   return serial + DATE_1904_OFFSET;

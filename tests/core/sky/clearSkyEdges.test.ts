@@ -16,7 +16,7 @@
  * Every value below is these equations written out by hand.
  */
 import { SunpaneError } from '../../../src/core/common/errors';
-import { ashraeClearSky, ineichenPerezClearSky, requireClearSkyPair } from '../../../src/core/sky/clearSky';
+import { ashraeClearSky, ineichenPerezClearSky, isAcceptedClearSkyPair, requireClearSkyPair } from '../../../src/core/sky/clearSky';
 import { refusalOf as refusal } from '../../support/expectError';
 
 const RAD = Math.PI / 180;
@@ -106,6 +106,29 @@ describe('ASHRAE τb/τd pairs past the physically possible limits', () => {
     expect(() => requireClearSkyPair(0.4, 2.3)).not.toThrow();
     expect(() => requireClearSkyPair(0.001, 2.3)).toThrow(/^tauD = 2\.3 is not allowed/);
     expect(() => requireClearSkyPair(1.2, 4, { tauB: 'beamDepth', tauD: 'diffuseDepth' })).toThrow(/^diffuseDepth = 4 is not allowed: must give, with beamDepth = 1\.2, /);
+  });
+
+  test('isAcceptedClearSkyPair gives the verdict of requireClearSkyPair, pair by pair and right after an accepted pair', () => {
+    const differ: string[] = [];
+    let accepted = 0;
+    for (let b = 1; b <= 120; b += 7) {
+      for (let d = 1; d <= 400; d += 13) {
+        const [tb, td] = [b / 100 - 0.009, d / 100];
+        let thrown = false;
+        try {
+          requireClearSkyPair(tb, td);
+        } catch {
+          thrown = true;
+        }
+        if (!thrown) accepted++;
+        // asked twice: cold, and with the pair the last one judged (accepted or not)
+        for (let k = 0; k < 2; k++) if (isAcceptedClearSkyPair(tb, td) === thrown) differ.push(`${tb}/${td}`);
+      }
+    }
+    expect(differ).toEqual([]);
+    // both verdicts occur on the grid (τd 0.01 is refused at every τb, τb 0.4 with τd 2.3 passes, above)
+    expect(accepted).toBeGreaterThan(0);
+    expect(accepted).toBeLessThan(18 * 31);
   });
 });
 
