@@ -48,8 +48,10 @@ export interface Conversion {
 }
 
 /**
- * Converts `input` with LibreOffice headless.
- * @param input - file to open
+ * Converts `input` with LibreOffice headless: one program start for every file given (each start
+ * costs about a second of CPU before any work, so files converted the same way go in one call).
+ * @param input - the file to open, or several files (their outputs must have different names: the
+ *   output is named after the input)
  * @param convertTo - the `--convert-to` argument, e.g. `xlsx`, `ods`, `pdf` or {@link CSV_ALL_SHEETS}
  * @param outDir - folder for the output (created; should be empty)
  * @param options - `recalc: false` shows the results stored in the file (what LibreOffice itself
@@ -57,7 +59,7 @@ export interface Conversion {
  *   on load, for checks of shape, print and drawing that need no new numbers
  * @returns the files that appeared in `outDir`
  */
-export function convert(input: string, convertTo: string, outDir: string, options: { recalc?: boolean } = {}): Conversion {
+export function convert(input: string | string[], convertTo: string, outDir: string, options: { recalc?: boolean } = {}): Conversion {
   const profile = fs.mkdtempSync(path.join(os.tmpdir(), 'sunpane-lo-profile-'));
   fs.mkdirSync(path.join(profile, 'user'), { recursive: true });
   fs.writeFileSync(path.join(profile, 'user', 'registrymodifications.xcu'), profileSettings(options.recalc ?? true));
@@ -65,7 +67,7 @@ export function convert(input: string, convertTo: string, outDir: string, option
   try {
     const r = spawnSync(
       sofficePath(),
-      [`-env:UserInstallation=file://${profile}`, '--headless', '--norestore', '--nolockcheck', '--convert-to', convertTo, '--outdir', outDir, input],
+      [`-env:UserInstallation=file://${profile}`, '--headless', '--norestore', '--nolockcheck', '--convert-to', convertTo, '--outdir', outDir, ...(Array.isArray(input) ? input : [input])],
       { encoding: 'utf8', timeout: 180_000 },
     );
     if (r.error) throw r.error;
