@@ -247,14 +247,16 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     await page.close();
   });
 
-  test('the hourly table has one header row — the same words, order and units — in the pane, the CSV, the workbook and the demo', async () => {
+  // The demo workbook's hourly table header, found the same way, is HOURLY_HEADERS too, which the
+  // previous test finds the pane's header to be: tests/cli/demo.test.ts, which reads the demo's file
+  // already (the demo made again here cost this file about 3 s).
+  test('the hourly table has one header row — the same words, order and units — in the pane, the CSV and the workbook', async () => {
     if (!paneHourlyHeader) throw new Error("the pane's header row is read by the previous test, which did not get that far");
     const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'sunpane-headers-'));
     const windowFile = path.join(__dirname, '..', '..', 'examples', 'east-office.json');
     expect((await run('table', '--window', windowFile, '--out', path.join(dir, 'east.csv'))).code).toBe(0);
     const csvHeader = fs.readFileSync(path.join(dir, 'east.csv'), 'utf8').split('\n')[0].split(',');
     expect((await run('table', '--window', windowFile, '--out', path.join(dir, 'east.xlsx'))).code).toBe(0);
-    expect((await run('demo', '--out', dir)).code).toBe(0);
     /** The header row of the hourly table (found by its place in the file, not by its words). */
     const xlsxHeader = async (file: string, sheet: string) => {
       const wb = new ExcelJS.Workbook();
@@ -266,9 +268,8 @@ describe('the task pane in Chromium with a fake Excel host', () => {
       return Array.from({ length: Number(last.col) - Number(first.col) + 1 }, (_, k) => row.getCell(Number(first.col) + k).value);
     };
     const workbookHeader = await xlsxHeader(path.join(dir, 'east.xlsx'), 'Hourly');
-    const demoHeader = await xlsxHeader(path.join(dir, 'sunpane-demo.xlsx'), 'Hourly BW-S1');
     expect(paneHourlyHeader.length).toBe(14);
-    expect({ csv: csvHeader, workbook: workbookHeader, demo: demoHeader }).toEqual({ csv: paneHourlyHeader, workbook: paneHourlyHeader, demo: paneHourlyHeader });
+    expect({ csv: csvHeader, workbook: workbookHeader }).toEqual({ csv: paneHourlyHeader, workbook: paneHourlyHeader });
   });
 
   test('an earlier result sheet is never overwritten without asking, and a user sheet of the same name is left alone', async () => {

@@ -162,6 +162,13 @@ describe('sunpane demo', () => {
     // Title, note, caution, a blank row, then the table: header in row 5.
     expect(ws.rowCount).toBe(5 + 8760);
     expect(ws.getRow(5).values).toEqual([undefined, ...HOURLY_HEADERS]);
+    // The header row of its table, found by the table's place (not by its words), is the one header
+    // row of every hourly table: the pane's (tests/browser/pane.browser.test.ts reads it in the
+    // browser and finds it HOURLY_HEADERS), the table command's CSV and workbook.
+    const ref = (ws.getTables()[0] as unknown as { table: { tableRef: string } }).table.tableRef;
+    const [first, last] = ref.split(':').map((a) => ws.getCell(a));
+    const header = Array.from({ length: Number(last.col) - Number(first.col) + 1 }, (_, k) => ws.getRow(Number(first.row)).getCell(Number(first.col) + k).value);
+    expect(header).toEqual([...HOURLY_HEADERS]);
     expect(numberOf(ws.getCell('A6').value)).toBeCloseTo(46023 + 1 / 24, 9); // 2026-01-01 01:00
     expect(numberOf(ws.getCell('A8765').value)).toBeCloseTo(46388, 9); // 2027-01-01 00:00
     expect(ws.getCell('A6').numFmt).toBe('yyyy-mm-dd hh:mm');
