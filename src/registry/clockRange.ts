@@ -22,6 +22,7 @@ import type { ClockFields, RawArg, Scalar, WindowFields } from './types';
 import { fieldsOf, nearestFieldName } from './windowRange';
 
 const { max } = Math;
+const { isArray } = Array;
 
 /** The fields a clock range takes, in the order help lists them. */
 export const CLOCK_FIELDS: readonly GlossaryEntry[] = [GLOSSARY.daylightSavingStart, GLOSSARY.daylightSavingEnd, GLOSSARY.daylightSavingShift, GLOSSARY.dateSystem];
@@ -54,7 +55,7 @@ function isBlank(v: unknown): boolean {
  */
 export function readClockRange(raw: RawArg | undefined, argument = 'clock'): ClockFields {
   if (raw === undefined || raw === null || (typeof raw === 'string' && raw.trim() === '')) return STANDARD_CLOCK;
-  if (!Array.isArray(raw) || raw.length === 0) throw new SunpaneError(argument, raw, CLOCK_HELP);
+  if (!isArray(raw) || raw.length === 0) throw new SunpaneError(argument, raw, CLOCK_HELP);
   if (raw.every((r) => r.every(isBlank))) return STANDARD_CLOCK;
   const rows = raw.length;
   const cols = raw.reduce((w, r) => max(w, r.length), 0);

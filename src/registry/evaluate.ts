@@ -25,11 +25,12 @@ import { type ArgValue, type Args, type ClockFields, type FunctionDescriptor, ty
 import { choiceText, readWindowRange } from './windowRange';
 
 const { max: mathMax } = Math;
+const { isArray } = Array;
 const { isFinite: numberIsFinite, isNaN: numberIsNaN } = Number;
 const NAN = Number.NaN;
 
 function isMatrix(raw: RawArg | undefined): raw is Matrix {
-  return Array.isArray(raw);
+  return isArray(raw);
 }
 
 function isBlank(v: Scalar | undefined): boolean {
@@ -296,7 +297,7 @@ export function applyFunction(fn: FunctionDescriptor, rawArgs: readonly (RawArg 
     } catch (err) {
       return [[errorCell(err)]];
     }
-    return Array.isArray(value) ? value.map((r) => r.map(checkCell)) : [[checkCell(value)]];
+    return isArray(value) ? value.map((r) => r.map(checkCell)) : [[checkCell(value)]];
   }
   const out: OutTable = new Array(rows);
   // One arguments object for every cell, its broadcast entries set cell by cell (descriptors never
@@ -364,7 +365,7 @@ function cellOf(fn: FunctionDescriptor, args: Args | OutCell): OutCell {
   } catch (err) {
     return errorCell(err);
   }
-  if (Array.isArray(value)) throw new Error(`${fn.name} is declared to return one value per cell but returned a table`);
+  if (isArray(value)) throw new Error(`${fn.name} is declared to return one value per cell but returned a table`);
   return checkCell(value);
 }
 

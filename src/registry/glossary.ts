@@ -553,6 +553,20 @@ export const WINDOW_FIELDS: readonly GlossaryEntry[] = Object.values(GLOSSARY).f
  * @returns the key; '' for a blank
  */
 export function nameKey(text: unknown): string {
+  if (typeof text !== 'string') return keyOf(text);
+  let k = NAME_KEYS.get(text);
+  if (k === undefined) {
+    k = keyOf(text);
+    if (NAME_KEYS.size >= 1024) NAME_KEYS.clear();
+    NAME_KEYS.set(text, k);
+  }
+  return k;
+}
+
+/** The keys of names already read (a window range's names are read again on every call). */
+const NAME_KEYS = new Map<string, string>();
+
+function keyOf(text: unknown): string {
   return String(text ?? '')
     .replace(/[([][^)\]]*[)\]]/g, '')
     .toLowerCase()

@@ -26,6 +26,7 @@ import { GLOSSARY, type GlossaryEntry, LENGTH_MAX, WINDOW_FIELDS, choiceFor, nam
 import type { Matrix, RawArg, Scalar, WindowFields } from './types';
 
 const { floor, max: mathMax, min: mathMin } = Math;
+const { isArray } = Array;
 const { isFinite: numberIsFinite, isInteger: numberIsInteger, isNaN: numberIsNaN } = Number;
 
 /** A name cell that names no field, or a field already named. */
@@ -137,7 +138,7 @@ function rangeOf(f: GlossaryEntry): string {
 
 /** A list cell split into its entries (space, comma or semicolon separated); a number cell is one entry. */
 export function splitList(value: Scalar | number | readonly unknown[]): unknown[] {
-  if (Array.isArray(value)) return [...value];
+  if (isArray(value)) return [...value];
   if (typeof value === 'number') return [value];
   return String(value ?? '')
     .split(/[\s;,]+/)
@@ -160,10 +161,10 @@ export function readFieldCell(field: GlossaryEntry, cell: Scalar | number | read
   const cellKind = field.window?.cell ?? 'number';
   switch (cellKind) {
     case 'dateSystem':
-      if (Array.isArray(cell)) throw new SunpaneError(name, cell, DATE_SYSTEM_WORDS);
+      if (isArray(cell)) throw new SunpaneError(name, cell, DATE_SYSTEM_WORDS);
       return requireDateSystem(typeof cell === 'string' ? cell.trim() : cell, name);
     case 'text':
-      if (typeof cell === 'boolean' || Array.isArray(cell)) throw new SunpaneError(name, cell, 'must be a text');
+      if (typeof cell === 'boolean' || isArray(cell)) throw new SunpaneError(name, cell, 'must be a text');
       return String(cell).trim();
     case 'choice': {
       const token = typeof cell === 'string' ? choiceFor(field, cell) : undefined;
@@ -214,7 +215,7 @@ export function choiceText(field: { choices?: readonly string[]; choiceAliases?:
 export function fieldsOf(entries: readonly { field: GlossaryEntry; written: string; cell: Scalar | number | readonly unknown[] }[]): WindowFields {
   const values = new Map<string, string | number | number[]>();
   const written = new Map<string, string>();
-  const empty = (cell: Scalar | number | readonly unknown[]) => isBlank(cell) || (Array.isArray(cell) && cell.length === 0);
+  const empty = (cell: Scalar | number | readonly unknown[]) => isBlank(cell) || (isArray(cell) && cell.length === 0);
   // The date system first: the serial date-times of the same fields count days in it.
   const system = entries.find((x) => x.field.name === 'dateSystem' && !empty(x.cell));
   const dateSystem = system ? (readFieldCell(system.field, system.cell, system.written) as DateSystem) : 1900;
@@ -236,7 +237,7 @@ export interface WindowRange {
 }
 
 function isMatrix(raw: RawArg | undefined): raw is Matrix {
-  return Array.isArray(raw);
+  return isArray(raw);
 }
 
 const WINDOW_HELP = 'must be a range of window fields: names (latitude, surfaceAzimuth, width, height, shgc, …) in the first column with values beside them, or a header row of names over one row of values';
@@ -396,7 +397,7 @@ function num(fields: WindowFields, name: string): number | undefined {
 
 function list(fields: WindowFields, name: string): number[] | undefined {
   const v = fields.values.get(name);
-  return Array.isArray(v) ? v : undefined;
+  return isArray(v) ? v : undefined;
 }
 
 function missing(fields: WindowFields, prefix: Namer, name: string, why: string): SunpaneError {

@@ -47,10 +47,10 @@ export const DEFAULT_RUNS = 10_000;
  * December 2026 figure); `npm run fuzz` runs every function 10,000 times (FUZZ_RUNS sets any count).
  */
 export const HEAVY_RUNS: Readonly<Record<string, number>> = {
-  SOLARGAIN: 2_000, // the window prepared (view factors of its devices) on every call, and the monotone re-evaluations
-  SOLARGAINSTEPS: 2_000,
-  WINDOWGAIN: 2_000,
-  GAINSTEPS: 2_000,
+  SOLARGAIN: 3_000, // the window prepared (view factors of its devices) on every call, and the monotone re-evaluations
+  SOLARGAINSTEPS: 3_000,
+  WINDOWGAIN: 3_000,
+  GAINSTEPS: 3_000,
   WINDOWSUNLIT: 6_000, // window ranges read and built on every call
   VIEWFACTORS: 6_000, // a numerical hemisphere integration per call
   WINDOWVIEWFACTORS: 6_000,

@@ -142,7 +142,7 @@ export function serialToCivil(serial: number): CivilDateTime {
   const hour = floor(fraction / MS_PER_HOUR);
   const minute = floor((fraction - hour * MS_PER_HOUR) / 60_000);
   const second = (fraction - hour * MS_PER_HOUR - minute * 60_000) / 1000;
-  return { ...date, hour, minute, second };
+  return { year: date.year, month: date.month, day: date.day, hour, minute, second };
 }
 
 /** True for Gregorian leap years. */
