@@ -240,12 +240,11 @@ function hourOfRow(w: PreparedWindow, r: AnnualRow, stamp: number, instant: numb
  * weather given or taken from the spec.
  * @param w - the prepared window
  * @param serial - local standard serial of the instant the sun is evaluated at
- * @param weatherHour - the hour's DNI and DHI; omitted: the window's weather (a supplied series'
+ * @param weatherHour - the hour's DNI and DHI; undefined: the window's weather (a supplied series'
  *   row is the one `stamp` belongs to)
- * @param stamp - the date-time as given, read by the window's convention (default: the stamp whose
- *   evaluation instant is `serial`)
+ * @param stamp - the date-time as given, read by the window's convention (its evaluation instant is `serial`)
  */
-export function gainOfPrepared(w: PreparedWindow, serial: number, weatherHour?: WeatherHour, stamp = w.convention === 'hourEnding' ? serial + 1 / 48 : serial): WindowGainHour {
+export function gainOfPrepared(w: PreparedWindow, serial: number, weatherHour: WeatherHour | undefined, stamp: number): WindowGainHour {
   const { spec } = w;
   const { site } = spec;
   const utcMs = serialToUtcMs(serial, site.utcOffset);
@@ -296,9 +295,10 @@ export function gainOfPrepared(w: PreparedWindow, serial: number, weatherHour?: 
     radiantFractionDiffuse: w.radiantFractionDiffuse,
   });
   let outdoorTemperature: number | undefined;
-  if (w.conductance > 0 || spec.glazing.uValue !== undefined) {
+  if (spec.glazing.uValue !== undefined) {
     outdoorTemperature = outdoorTemperatureAt(w, stamp, month);
-    const dt = outdoorTemperature !== undefined && Number.isFinite(outdoorTemperature) ? outdoorTemperature - spec.indoorTemperature! : 0;
+    // A missing dry-bulb (NaN) conducts nothing.
+    const dt = Number.isFinite(outdoorTemperature) ? (outdoorTemperature as number) - spec.indoorTemperature! : 0;
     gain.conduction = w.conductance * dt; // U · A · (T_out − T_in)
   }
   return {
@@ -379,7 +379,7 @@ export function standardStamp(w: PreparedWindow, dateTime: number): number {
  */
 export function forHour(spec: WindowSpec, dateTime: number): WindowSpec {
   const clear = spec?.weather?.kind === 'ashraeClearSky' || spec?.weather?.kind === 'ineichenClearSky';
-  if (!clear || typeof dateTime !== 'number' || !Number.isFinite(dateTime)) return spec;
+  if (!clear || !Number.isFinite(dateTime)) return spec; // (not a number: refused as dateTime by the caller)
   const convention = spec.timeConvention === 'instant' ? 'instant' : DEFAULT_TIME_CONVENTION;
   const year = serialToCivil(evaluationSerial(dateTime, convention)).year;
   return year === spec.year || year < 1901 || year > 9998 ? spec : { ...spec, year };
