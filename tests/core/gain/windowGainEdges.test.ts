@@ -158,8 +158,29 @@ describe('an hour between the rows of the year', () => {
   });
 
   test('the diffuse treatment is reported as at the rows', () => {
-    expect(windowGainAt(instantSpec(), between).diffuseShading).toBe('viewFactors');
-    expect(windowGainAt(instantSpec({ diffuseShading: 'beamOnly' }), between).diffuseShading).toBe('beamOnly');
+    const atRow = civilToSerial(2026, 7, 21, 10);
+    for (const t of [atRow, between]) {
+      expect(windowGainAt(instantSpec(), t).diffuseShading).toBe('viewFactors');
+      expect(windowGainAt(instantSpec({ diffuseShading: 'beamOnly' }), t).diffuseShading).toBe('beamOnly');
+    }
+  });
+
+  test('at a row and between rows, the diffuse gains are area × IAC × E × diffuse SHGC of the hour\'s own numbers, with an interior shade', () => {
+    const spec = instantSpec({ glazing: { shgc: 0.6, panes: 2, interiorAttenuation: 0.7 } });
+    for (const t of [civilToSerial(2026, 7, 21, 10), between]) {
+      const h = windowGainAt(spec, t);
+      expect(h.interiorAttenuationDiffuse).toBeLessThan(1);
+      expect(h.gain.sky).toBeCloseTo(h.solarArea * h.interiorAttenuationDiffuse * h.sky * h.shgcDiffuse, 9);
+      expect(h.gain.ground).toBeCloseTo(h.solarArea * h.interiorAttenuationDiffuse * h.ground * h.shgcDiffuse, 9);
+      expect(h.gain.sky).toBeGreaterThan(0);
+    }
+  });
+
+  test('a supplied series\' window asked for an hour past its year is refused as dateTime, naming the year', () => {
+    const spec = baseSpec({ weather: { kind: 'measured', dni: new Float64Array(8760), dhi: new Float64Array(8760) } });
+    for (const t of [civilToSerial(2027, 1, 1, 1), civilToSerial(2027, 1, 1, 0, 30), civilToSerial(2025, 12, 31, 23)]) {
+      expect(() => windowGainAt(spec, t)).toThrow(/^dateTime = .* must fall in 2026, the year of the window's weather series/);
+    }
   });
 
   test('a tilted window has no sunlit glass and no beam SHGC with the sun behind it or below the horizon', () => {
