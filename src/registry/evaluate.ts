@@ -90,12 +90,16 @@ export function readRange(param: ParamDescriptor, raw: RawArg | undefined): ArgV
     return rows;
   }
   const values: number[] = [];
+  // A cell inside the bounds passes without a call: a year of weather is 8,760 cells, and the
+  // argument's name for a message ("dni (value 17)") is built only for a cell that fails.
+  const lo = param.min ?? -Infinity;
+  const hi = param.max ?? Infinity;
   if (param.gapsAreMissing && rows.some((r) => r.some((c) => !isBlank(c)))) {
     // A series with gaps: every cell keeps its place; a blank or non-numeric cell is a missing value (NaN).
     for (const row of rows) {
       for (const cell of row) {
         const n = typeof cell === 'number' ? cell : typeof cell === 'string' && cell.trim() !== '' && !numberIsNaN(Number(cell)) ? Number(cell) : NAN;
-        if (!numberIsNaN(n)) requireRange(`${param.name} (value ${values.length + 1})`, n, param.min, param.max, param.unit);
+        if (!numberIsNaN(n) && !(numberIsFinite(n) && n >= lo && n <= hi)) requireRange(`${param.name} (value ${values.length + 1})`, n, param.min, param.max, param.unit);
         values.push(n);
       }
     }
@@ -105,7 +109,7 @@ export function readRange(param: ParamDescriptor, raw: RawArg | undefined): ArgV
       if (isBlank(cell) && rows.length * (row.length || 1) > 1) continue;
       if (isBlank(cell)) break;
       const n = typeof cell === 'string' && cell.trim() !== '' && !numberIsNaN(Number(cell)) ? Number(cell) : cell;
-      requireRange(`${param.name} (value ${values.length + 1})`, n, param.min, param.max, param.unit);
+      if (!(typeof n === 'number' && numberIsFinite(n) && n >= lo && n <= hi)) requireRange(`${param.name} (value ${values.length + 1})`, n, param.min, param.max, param.unit);
       values.push(n as number);
     }
   }

@@ -37,29 +37,32 @@ import { type Args, type FunctionDescriptor, NotAvailable, type OutCell, type Ou
 // ---------------------------------------------------------------------------------------------
 // Run counts and seed
 
-/** Runs per function in `npm test`. */
+/** Runs per function in `npm test`: every function, the heavy ones below included. */
 export const DEFAULT_RUNS = 10_000;
 /**
  * Functions whose every valid evaluation costs a millisecond or more on the machine `npm test` is
- * budgeted for (2 cores, the whole suite under about 4 minutes, the fuzz well under a minute of
- * CPU): in `npm test` they run these counts, stated in their test names and in docs/testing.md
- * (with the per-run costs they were set from: each fuzz file's CPU time kept at or below its
- * December 2026 figure); `npm run fuzz` runs every function 10,000 times (FUZZ_RUNS sets any count).
+ * budgeted for (2 cores, the whole suite under about 4 minutes): in `npm test` they run 10,000 times
+ * like every other function, but only this many of their runs draw valid arguments (each a full
+ * evaluation: a year of hours, 12 design days, 288 mask positions, a window's view factors); the
+ * rest draw one invalid argument, which must be refused, naming it, before anything is worked out
+ * (about a tenth of a millisecond). Stated in their test names and in docs/testing.md, with the
+ * per-run costs they were set from. With FUZZ_RUNS (and in `npm run fuzz`) every function draws
+ * valid arguments four runs in five, as the others always do.
  */
-export const HEAVY_RUNS: Readonly<Record<string, number>> = {
-  SOLARGAIN: 3_000, // the window prepared (view factors of its devices) on every call, and the monotone re-evaluations
-  SOLARGAINSTEPS: 3_000,
-  WINDOWGAIN: 3_000,
-  GAINSTEPS: 3_000,
-  WINDOWSUNLIT: 7_000, // window ranges read and built on every call
-  VIEWFACTORS: 7_000, // a numerical hemisphere integration per call
-  WINDOWVIEWFACTORS: 7_000,
-  WINDOWSUNLITMASK: 600, // 288 sun positions and sunlit fractions per call
-  SUNLITMASK: 600,
-  SOLARGAINPEAKS: 400, // 12 design days × 24 hours per call
-  PEAKGAINS: 400,
-  SOLARGAINYEAR: 500, // 8,760 or 8,784 hours per call
-  WINDOWYEAR: 500,
+export const HEAVY_VALID_DRAWS: Readonly<Record<string, number>> = {
+  SOLARGAIN: 2_400, // the window prepared (view factors of its devices) on every call, and the monotone re-evaluations
+  SOLARGAINSTEPS: 2_400,
+  WINDOWGAIN: 2_400,
+  GAINSTEPS: 2_400,
+  WINDOWSUNLIT: 5_600, // window ranges read and built on every call
+  VIEWFACTORS: 5_600, // a numerical hemisphere integration per call
+  WINDOWVIEWFACTORS: 5_600,
+  WINDOWSUNLITMASK: 480, // 288 sun positions and sunlit fractions per call
+  SUNLITMASK: 480,
+  SOLARGAINPEAKS: 320, // 12 design days × 24 hours per call
+  PEAKGAINS: 320,
+  SOLARGAINYEAR: 400, // 8,760 or 8,784 hours per call
+  WINDOWYEAR: 400,
 };
 
 const envRuns = process.env.FUZZ_RUNS !== undefined && process.env.FUZZ_RUNS !== '' ? Number(process.env.FUZZ_RUNS) : undefined;
@@ -70,13 +73,19 @@ if (envSeed !== undefined && !Number.isInteger(envSeed)) throw new Error(`FUZZ_S
 /** The seed of every property in this run. */
 export const SEED = envSeed ?? 20261203;
 
-/** Runs of one function: FUZZ_RUNS when set, else its heavy count or {@link DEFAULT_RUNS}. */
-export function runsOf(name: string): number {
-  return envRuns ?? HEAVY_RUNS[name] ?? DEFAULT_RUNS;
+/** Runs of one function: FUZZ_RUNS when set, else {@link DEFAULT_RUNS}. */
+export function runsOf(): number {
+  return envRuns ?? DEFAULT_RUNS;
 }
 
-/** Share of a function's runs that must end in a checked valid evaluation. */
-export const MIN_VALID_SHARE = 0.4;
+/** Share of a function's runs that draw valid arguments: four in five, or a heavy function's own in `npm test`. */
+export function validShareOf(name: string): number {
+  const heavy = HEAVY_VALID_DRAWS[name];
+  return envRuns === undefined && heavy !== undefined ? heavy / DEFAULT_RUNS : 0.8;
+}
+
+/** Share of a function's valid draws that must end in a checked valid evaluation (the rest refused combinations). */
+export const MIN_VALID_SHARE = 0.5;
 
 // ---------------------------------------------------------------------------------------------
 // Which file fuzzes which functions (jest runs the files on separate workers)
@@ -192,6 +201,22 @@ function seriesOf(hours: number): [number[], number[]] {
     SERIES.set(hours, s);
   }
   return s;
+}
+
+/**
+ * The same weather as the worksheet ranges a call receives (a column of 8,760 or 8,784 cells, and a
+ * row of the first 48 hours, too short), built once per length: a draw shares them, as nothing
+ * changes a range it reads.
+ */
+const SERIES_RANGES = new Map<number, { dni: RawArg; dhi: RawArg; dniShort: RawArg; dhiShort: RawArg }>();
+function seriesRangesOf(hours: number): { dni: RawArg; dhi: RawArg; dniShort: RawArg; dhiShort: RawArg } {
+  let r = SERIES_RANGES.get(hours);
+  if (r === undefined) {
+    const [dni, dhi] = seriesOf(hours);
+    r = { dni: dni.map((v) => [Number.isNaN(v) ? null : v]), dhi: dhi.map((v) => [v]), dniShort: [dni.slice(0, 48)], dhiShort: [dhi.slice(0, 48)] };
+    SERIES_RANGES.set(hours, r);
+  }
+  return r;
 }
 
 /** Fields no generated window sets at random: its place, the sky and the glass type with its table (each drawn as one). */
@@ -567,16 +592,16 @@ export function validCaseArb(fn: FunctionDescriptor): fc.Arbitrary<ValidCase> {
       }
       if (series !== undefined) {
         const year = site?.year ?? 2026;
-        const [dni, dhi] = seriesOf(hoursInYear(year));
+        const ranges = seriesRangesOf(hoursInYear(year));
         const kDni = names.indexOf('dni');
         const kDhi = names.indexOf('dhi');
         if (series === 'clear') out[kDni] = out[kDhi] = null;
         else if (series === 'series') {
-          out[kDni] = dni.map((v) => [Number.isNaN(v) ? null : v]);
-          out[kDhi] = dhi.map((v) => [v]);
+          out[kDni] = ranges.dni;
+          out[kDhi] = ranges.dhi;
         } else {
-          out[kDni] = [dni.slice(0, 48)];
-          out[kDhi] = [dhi.slice(0, 48)];
+          out[kDni] = ranges.dniShort;
+          out[kDhi] = ranges.dhiShort;
         }
       }
       const kDate = names.indexOf('dateTime');
@@ -1196,7 +1221,7 @@ export const COUNTS = new Map<string, Counts>();
 
 type Drawn = { kind: 'valid'; c: ValidCase } | { kind: 'invalid'; c: ValidCase; k: number; bad: RawArg };
 
-/** The runs of one function: valid cases (4 in 5) and one-invalid-argument cases (1 in 5). */
+/** The runs of one function: valid cases ({@link validShareOf} of them) and one-invalid-argument cases. */
 export function runFunction(fn: FunctionDescriptor, runs: number, file: string): Counts {
   const counts: Counts = { runs: 0, valid: 0, refused: 0, invalid: 0 };
   COUNTS.set(fn.name, counts);
@@ -1206,7 +1231,8 @@ export function runFunction(fn: FunctionDescriptor, runs: number, file: string):
   const invalid: fc.Arbitrary<Drawn> = fc
     .tuple(valid, fc.constantFrom(...badable))
     .chain(([c, { k, arb }]) => arb!.map((bad) => ({ kind: 'invalid' as const, c, k, bad })));
-  const drawn: fc.Arbitrary<Drawn> = fc.oneof({ weight: 4, arbitrary: valid.map((c) => ({ kind: 'valid' as const, c })) }, { weight: 1, arbitrary: invalid });
+  const validWeight = Math.round(validShareOf(fn.name) * 1000);
+  const drawn: fc.Arbitrary<Drawn> = fc.oneof({ weight: validWeight, arbitrary: valid.map((c) => ({ kind: 'valid' as const, c })) }, { weight: 1000 - validWeight, arbitrary: invalid });
   const property = fc.property(drawn, (d) => {
     counts.runs++;
     if (d.kind === 'invalid') {
@@ -1261,8 +1287,8 @@ export function fuzzPart(part: FuzzPart, file: string): void {
     expect(fns.length).toBeGreaterThan(0);
   });
   for (const fn of fns) {
-    const runs = runsOf(fn.name);
-    const floor = Math.ceil(runs * MIN_VALID_SHARE);
+    const runs = runsOf();
+    const floor = Math.ceil(runs * validShareOf(fn.name) * MIN_VALID_SHARE);
     test(`${fn.name}: ${runs.toLocaleString('en-US')} runs (seed ${SEED}), at least ${floor.toLocaleString('en-US')} valid evaluations checked`, () => {
       const c = runFunction(fn, runs, file);
       if (process.env.FUZZ_REPORT) process.stdout.write(`fuzz ${fn.name}: ${c.runs} runs, ${c.valid} valid evaluations, ${c.refused} refused combinations, ${c.invalid} invalid arguments\n`);
