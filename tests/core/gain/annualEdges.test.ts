@@ -1,0 +1,137 @@
+/**
+ * Edges of a window's year (src/core/gain/annual.ts) that the whole-year tests of annual.test.ts and
+ * sharedYear.test.ts do not reach: the refusals of the internal entry points (a shared year of
+ * another site, a window with conduction in the totals path, a row outside the year), and a
+ * property of the summary-only year: a window's summary does not depend on which window was
+ * summed up before it (the scratch columns one window leaves must not reach the next).
+ *
+ * Properties, named beside each check: a year has its hours numbered 0 … 8759 (8784 hours in a
+ * leap year, docs/conventions.md#hourly-rows); a summary of a window is a function of that window
+ * alone. The windows are invented test inputs (tests/core/gain/gainFixtures.ts).
+ */
+import { SunpaneError } from '../../../src/core/common/errors';
+import { annualOfPrepared, annualRowOfPrepared, yearTotalsOfShared } from '../../../src/core/gain/annual';
+import { summarizeAnnual, summarizeWindowYear } from '../../../src/core/gain/annualSummary';
+import { prepareWindow } from '../../../src/core/gain/prepared';
+import { SharedYears } from '../../../src/core/gain/sharedYear';
+import { baseSpec } from './gainFixtures';
+
+const SITE = baseSpec().site;
+
+/** The refusal a call throws (fails the test when it throws none or another kind). */
+function refusal(f: () => unknown): SunpaneError {
+  try {
+    f();
+  } catch (e) {
+    if (e instanceof SunpaneError) return e;
+    throw e;
+  }
+  throw new Error('no refusal');
+}
+
+describe('refusals of the year’s internal entry points', () => {
+  test('the summary totals refuse a shared year of another site or year, naming year', () => {
+    const years = new SharedYears();
+    const here = prepareWindow(baseSpec());
+    for (const other of [baseSpec({ site: { ...SITE, latitude: 41 } }), baseSpec({ year: 2027 }), baseSpec({ year: 2028 })]) {
+      const e = refusal(() => yearTotalsOfShared(prepareWindow(other), years.of(here)));
+      expect(e.argument).toBe('year');
+      expect(e.value).toBe(other.year);
+      expect(e.message).toMatch(/the shared sun and weather are not those of this window's site, year and weather \(2026\|/);
+    }
+  });
+
+  test('the summary totals refuse a window with a U-value, naming glazing.uValue (its conduction can mark hours missing)', () => {
+    const spec = baseSpec({ glazing: { shgc: 0.6, panes: 2, uValue: 1.4 }, indoorTemperature: 24, weather: { kind: 'ashraeClearSky', tauB: [0.4], tauD: [2.3], dryBulbMax: [30], dailyRange: [10] } });
+    const w = prepareWindow(spec);
+    const e = refusal(() => yearTotalsOfShared(w, new SharedYears().of(w)));
+    expect(e.argument).toBe('glazing.uValue');
+    expect(e.value).toBe(1.4);
+    expect(e.message).toMatch(/is not read by the summary totals: a window with conduction is summed up from its summary-only year/);
+  });
+
+  test('one row of the year is refused outside 0 … hours − 1, naming row (docs/conventions.md#hourly-rows: 8760 rows, 8784 in a leap year)', () => {
+    const common = prepareWindow(baseSpec());
+    for (const row of [-1, 8760, Number.NaN]) {
+      const e = refusal(() => annualRowOfPrepared(common, row));
+      expect(e.argument).toBe('row');
+      expect(e.message).toMatch(/must be a row of 2026: 0 to 8759/);
+    }
+    const leap = prepareWindow(baseSpec({ year: 2028 }));
+    expect(refusal(() => annualRowOfPrepared(leap, 8784)).message).toMatch(/must be a row of 2028: 0 to 8783/);
+    // The first and last rows are rows: the same numbers as the year's (one row is its year's row).
+    const year = annualOfPrepared(leap);
+    for (const row of [0, 8783, 4000]) {
+      const r = annualRowOfPrepared(leap, row);
+      expect(r.row).toBe(row);
+      expect(r.gain).toBe(year.gain[row]);
+      expect(r.stampSerial).toBe(year.stampSerial[row]);
+    }
+  });
+});
+
+describe('a window’s summary is its own, whatever was summed up before it', () => {
+  test('windows with a U-value at two sites, summed up in turn, each give their own year’s summary', () => {
+    // A window with a U-value goes through the summary-only year (scratch columns shared by all
+    // windows); the rows its passes skip (night, no light) must not keep another site's numbers.
+    const cond = { glazing: { shgc: 0.6, panes: 2, uValue: 1.4 }, indoorTemperature: 24 } as const;
+    const weather = { kind: 'ashraeClearSky' as const, tauB: [0.4], tauD: [2.3], dryBulbMax: [30], dailyRange: [10] };
+    const specs = [
+      baseSpec({ ...cond, weather, site: { ...SITE, latitude: 5 } }),
+      baseSpec({ ...cond, weather, site: { ...SITE, latitude: 60 } }),
+      baseSpec({ ...cond, weather, site: { ...SITE, latitude: 5 }, surfaceAzimuth: 0 }),
+      baseSpec({ site: { ...SITE, latitude: 60 } }), // no U-value: added up while its hours are worked out
+    ];
+    const own = specs.map((s) => summarizeAnnual(annualOfPrepared(prepareWindow(s))));
+    const years = new SharedYears();
+    for (const k of [0, 1, 2, 3, 0, 1, 3, 2]) expect(summarizeWindowYear(specs[k], years).summary).toEqual(own[k]);
+  });
+});
+
+/** Spencer (1971): (r0/r)² = 1.000110 + 0.034221 cos Γ + 0.001280 sin Γ + 0.000719 cos 2Γ + 0.000077 sin 2Γ, Γ = 2π (n − 1)/365, times 1366.1 W/m². */
+function spencer(n: number): number {
+  const g = (2 * Math.PI * (n - 1)) / 365;
+  return 1366.1 * (1.00011 + 0.034221 * Math.cos(g) + 0.00128 * Math.sin(g) + 0.000719 * Math.cos(2 * g) + 0.000077 * Math.sin(2 * g));
+}
+
+describe('one row of the year worked out alone', () => {
+  const cond = { glazing: { shgc: 0.6, panes: 2, uValue: 1.4 }, indoorTemperature: 24 } as const;
+  const measured = () => ({ kind: 'measured' as const, dni: new Float64Array(8760).fill(600), dhi: new Float64Array(8760).fill(100), dryBulb: new Float64Array(8760).fill(30) });
+  // 21 June 2026, the hour ending 13:00 (row 171·24 + 12): the sun high on a south wall at 40° N.
+  const NOON = 171 * 24 + 12;
+
+  test('a row is a function of its window and weather alone: what an earlier call left at that row never shows', () => {
+    const lit = prepareWindow(baseSpec({ ...cond, weather: measured() }));
+    const first = annualRowOfPrepared(lit, NOON);
+    expect(first.gain).toBeGreaterThan(0);
+    expect(first.dryBulb).toBe(30);
+    expect(first.conduction).toBeCloseTo(1.4 * (2 * 1.5) * (30 - 24), 9); // U·A·ΔT, A the window's 2 m × 1.5 m
+    // No light given: no irradiance and no solar gain (nothing to transmit), whatever the row held before.
+    const dark = annualRowOfPrepared(lit, NOON, { dni: 0, dhi: 0 });
+    for (const k of ['beam', 'sky', 'ground', 'skyUnshaded', 'groundUnshaded', 'gain', 'gainBeam', 'gainDiffuse', 'radiant'] as const) expect(dark[k]).toBe(0);
+    // The same row of a window without a U-value: no dry-bulb (NaN, AnnualSeries.dryBulb) and no conduction.
+    const bare = annualRowOfPrepared(prepareWindow(baseSpec({ weather: { kind: 'measured', dni: measured().dni, dhi: measured().dhi } })), NOON);
+    expect(bare.dryBulb).toBeNaN();
+    expect(bare.conduction).toBe(0);
+    // A missing row, then the same row with its weather given: not missing any more.
+    const gap = measured();
+    gap.dni[NOON] = Number.NaN;
+    const holed = prepareWindow(baseSpec({ weather: gap }));
+    expect(annualRowOfPrepared(holed, NOON).missing).toBe(true);
+    const given = annualRowOfPrepared(holed, NOON, { dni: 600, dhi: 100 });
+    expect(given.missing).toBe(false);
+    expect(given.gain).toBeGreaterThan(0);
+  });
+
+  test('given weather is checked against the Long & Shi limit with the extraterrestrial irradiance of the row’s own day (Spencer 1971)', () => {
+    const w = prepareWindow(baseSpec());
+    // Rows of days across the year (the hour ending 01:00 and the one ending 13:00): a DNI of
+    // 1500 W/m² is above the extraterrestrial irradiance of every day (at most about 1413 W/m²),
+    // and the message gives the day's to 0.1 W/m².
+    for (const [day, hour] of [[1, 0], [80, 12], [81, 0], [180, 12], [265, 0], [365, 12]]) {
+      const e = refusal(() => annualRowOfPrepared(w, (day - 1) * 24 + hour, { dni: 1500, dhi: 0 }));
+      expect(e.argument).toBe('dni');
+      expect(e.message).toContain(`an extraterrestrial ${Number(spencer(day).toFixed(1))} W/m²`);
+    }
+  });
+});
