@@ -135,3 +135,21 @@ describe('one row of the year worked out alone', () => {
     }
   });
 });
+
+describe('the peak of a summary added up while the hours are worked out', () => {
+  test('of equal hourly gains the first is the peak, as in the summary of the columns (AnnualSummary.peakStamp: the first such hour on ties)', () => {
+    // A horizontal window under an isotropic sky with only diffuse light: the sky on the plane is
+    // DHI · (1 + cos 0°)/2 = DHI and the ground (1 − cos 0°)/2 = 0 (Liu & Jordan), so every lit hour
+    // has the same gain, to the last bit, and the peak is the first lit hour.
+    const spec = baseSpec({ surfaceTilt: 0, skyModel: 'isotropic', weather: { kind: 'measured', dni: new Float64Array(8760), dhi: new Float64Array(8760).fill(60) } });
+    const own = annualOfPrepared(prepareWindow(spec));
+    const first = own.gain.findIndex((q) => q > 0);
+    expect(first).toBeGreaterThan(0);
+    const peak = own.gain[first];
+    expect(own.gain.filter((q) => q > 0).every((q) => q === peak)).toBe(true);
+    const shared = summarizeWindowYear(spec, new SharedYears()).summary;
+    expect(shared).toEqual(summarizeAnnual(own));
+    expect(shared.peakW).toBe(peak);
+    expect(shared.peakStamp).toBe(own.stampSerial[first]);
+  });
+});
