@@ -10,10 +10,12 @@
  * alone. The windows are invented test inputs (tests/core/gain/gainFixtures.ts).
  */
 import { SunpaneError } from '../../../src/core/common/errors';
-import { annualOfPrepared, annualRowOfPrepared, yearTotalsOfShared } from '../../../src/core/gain/annual';
+import { annualOfPrepared, annualRowOfPrepared, monthOfDay, yearTotalsOfShared } from '../../../src/core/gain/annual';
 import { summarizeAnnual, summarizeWindowYear } from '../../../src/core/gain/annualSummary';
+import { designDayDryBulb } from '../../../src/core/gain/outdoorTemperature';
 import { prepareWindow } from '../../../src/core/gain/prepared';
 import { SharedYears } from '../../../src/core/gain/sharedYear';
+import { Mismatches } from '../../support/mismatches';
 import { baseSpec } from './gainFixtures';
 
 const SITE = baseSpec().site;
@@ -151,5 +153,37 @@ describe('the peak of a summary added up while the hours are worked out', () => 
     expect(shared).toEqual(summarizeAnnual(own));
     expect(shared.peakW).toBe(peak);
     expect(shared.peakStamp).toBe(own.stampSerial[first]);
+  });
+});
+
+describe('the design-day dry-bulb of the year’s rows', () => {
+  test('each row takes its month’s design day at its own hour: hour ending h + 1 for row h, the instant h:00 (00:00 = 24:00) for an instant row', () => {
+    // The handbook's profile (ASHRAE Fundamentals, "Generating design-day data"; hours from memory):
+    // the coolest hour ending 05:00 is Tmax − DR, hours ending 14:00 and 15:00 are Tmax;
+    // designDayDryBulb is held to it by tests/core/gain/outdoorTemperature.test.ts.
+    const dryBulbMax = [5, 7, 10, 14, 19, 24, 30, 29, 24, 17, 10, 6];
+    const dailyRange = [6, 7, 8, 9, 10, 11, 12, 11, 10, 9, 8, 7];
+    const cond = { glazing: { shgc: 0.6, panes: 2, uValue: 2 }, indoorTemperature: 22 } as const;
+    const weather = { kind: 'ashraeClearSky' as const, tauB: [0.4], tauD: [2.3], dryBulbMax, dailyRange };
+    const found = new Mismatches();
+    for (const timeConvention of ['hourEnding', 'instant'] as const) {
+      const year = annualOfPrepared(prepareWindow(baseSpec({ ...cond, weather, timeConvention })));
+      const months = monthOfDay(2026);
+      for (let i = 0; i < year.hours; i++) {
+        const m = months[Math.floor(i / 24)];
+        const hour = timeConvention === 'hourEnding' ? (i % 24) + 1 : i % 24;
+        const want = designDayDryBulb(dryBulbMax[m - 1], dailyRange[m - 1], hour);
+        found.check(year.dryBulb[i] === want, () => `${timeConvention} row ${i}: ${year.dryBulb[i]} against ${want}`);
+        // q = U · A · (T_out − T_in), A = 2 m × 1.5 m.
+        found.check(Math.abs(year.conduction[i] - 2 * 3 * (want - 22)) < 1e-9, () => `${timeConvention} row ${i}: conduction ${year.conduction[i]}`);
+      }
+      // The anchors themselves, on 15 July (day 196): the coolest hour Tmax − DR, the warmest Tmax.
+      const day = 195 * 24;
+      const coolest = timeConvention === 'hourEnding' ? 4 : 5;
+      expect(year.dryBulb[day + coolest]).toBe(30 - 12);
+      expect(year.dryBulb[day + coolest + 9]).toBe(30);
+      expect(year.dryBulb[day + coolest + 10]).toBe(30);
+    }
+    expect(found.list).toEqual([]);
   });
 });
