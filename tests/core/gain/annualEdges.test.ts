@@ -187,3 +187,24 @@ describe('the design-day dry-bulb of the year’s rows', () => {
     expect(found.list).toEqual([]);
   });
 });
+
+describe('a full series from a shared year', () => {
+  test('hands out columns of its own: what one caller writes into its series reaches neither the shared year nor the next series', () => {
+    const gap = { kind: 'measured' as const, dni: new Float64Array(8760).fill(500), dhi: new Float64Array(8760).fill(80) };
+    gap.dni[3000] = Number.NaN;
+    const w = prepareWindow(baseSpec({ weather: gap }));
+    const years = new SharedYears();
+    const sy = years.of(w);
+    const own = annualOfPrepared(w);
+    const first = annualOfPrepared(w, sy);
+    for (const k of ['stampSerial', 'clockStamp', 'sunAltitude', 'sunAzimuth', 'dni', 'dhi'] as const) first[k].fill(-1);
+    first.missing.fill(1);
+    const second = annualOfPrepared(w, years.of(w));
+    const found = new Mismatches();
+    for (const k of ['stampSerial', 'clockStamp', 'sunAltitude', 'sunAzimuth', 'dni', 'dhi', 'missing', 'sky', 'gain'] as const) {
+      for (let i = 0; i < 8760; i++) found.check(Object.is(second[k][i], own[k][i]), () => `${k}[${i}]: ${second[k][i]} against ${own[k][i]}`);
+    }
+    expect(found.list.slice(0, 5)).toEqual([]);
+    expect(second.missing[3000]).toBe(1);
+  });
+});
