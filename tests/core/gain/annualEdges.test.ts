@@ -32,9 +32,12 @@ function refusal(f: () => unknown): SunpaneError {
 }
 
 describe('refusals of the year’s internal entry points', () => {
-  test('the summary totals refuse a shared year of another site or year, naming year', () => {
+  test('the summary totals and a window’s year refuse a shared year of another site or year, naming year', () => {
     const years = new SharedYears();
     const here = prepareWindow(baseSpec());
+    const series = refusal(() => annualOfPrepared(prepareWindow(baseSpec({ year: 2027 })), years.of(here)));
+    expect(series.argument).toBe('year');
+    expect(series.value).toBe(2027);
     for (const other of [baseSpec({ site: { ...SITE, latitude: 41 } }), baseSpec({ year: 2027 }), baseSpec({ year: 2028 })]) {
       const e = refusal(() => yearTotalsOfShared(prepareWindow(other), years.of(here)));
       expect(e.argument).toBe('year');
@@ -123,6 +126,21 @@ describe('one row of the year worked out alone', () => {
     const given = annualRowOfPrepared(holed, NOON, { dni: 600, dhi: 100 });
     expect(given.missing).toBe(false);
     expect(given.gain).toBeGreaterThan(0);
+    // A missing dry-bulb (AnnualSeries.dryBulb: NaN on a missing row) marks the row missing: no
+    // conduction and no gain, as a missing irradiance does.
+    const cold = measured();
+    cold.dryBulb[NOON] = Number.NaN;
+    const noTemperature = annualRowOfPrepared(prepareWindow(baseSpec({ ...cond, weather: cold })), NOON);
+    expect(noTemperature.missing).toBe(true);
+    expect(noTemperature.dryBulb).toBeNaN();
+    expect(noTemperature.conduction).toBe(0);
+    expect(noTemperature.gain).toBe(0);
+  });
+
+  test('given weather outside 0 … 2000 W/m² is refused naming dni or dhi with the range and unit (docs/architecture.md error convention)', () => {
+    const w = prepareWindow(baseSpec());
+    expect(refusal(() => annualRowOfPrepared(w, NOON, { dni: 2500, dhi: 0 })).message).toBe('dni = 2500 is not allowed: must be a number from 0 to 2000 W/m²');
+    expect(refusal(() => annualRowOfPrepared(w, NOON, { dni: 0, dhi: -1 })).message).toBe('dhi = -1 is not allowed: must be a number from 0 to 2000 W/m²');
   });
 
   test('given weather is checked against the Long & Shi limit with the extraterrestrial irradiance of the row’s own day (Spencer 1971)', () => {
