@@ -226,3 +226,56 @@ describe('a full series from a shared year', () => {
     expect(second.missing[3000]).toBe(1);
   });
 });
+
+describe('the columns of a year', () => {
+  test('the radiant and convective parts split the gain by the radiant fractions: radiant = f_b · beam part + f_d · diffuse part, convective = gain − radiant (AnnualSeries.radiantFractions)', () => {
+    const year = annualOfPrepared(prepareWindow(baseSpec({ glazing: { shgc: 0.6, panes: 2, radiantFractionBeam: 0.9, radiantFractionDiffuse: 0.5 } })));
+    const { beam: fb, diffuse: fd } = year.radiantFractions;
+    expect(fb).not.toBe(fd);
+    const found = new Mismatches();
+    let lit = 0;
+    for (let i = 0; i < year.hours; i++) {
+      if (year.gainBeam[i] > 0) lit++;
+      found.check(Math.abs(year.gainBeam[i] + year.gainDiffuse[i] - year.gain[i]) <= 1e-9 * year.gain[i], () => `row ${i}: parts ${year.gainBeam[i]} + ${year.gainDiffuse[i]} against ${year.gain[i]}`);
+      found.check(Math.abs(year.radiant[i] - (fb * year.gainBeam[i] + fd * year.gainDiffuse[i])) <= 1e-9 * year.gain[i], () => `row ${i}: radiant ${year.radiant[i]}`);
+      found.check(Math.abs(year.convective[i] - (year.gain[i] - year.radiant[i])) <= 1e-9 * year.gain[i], () => `row ${i}: convective ${year.convective[i]}`);
+    }
+    expect(lit).toBeGreaterThan(1000);
+    expect(found.list.slice(0, 5)).toEqual([]);
+  });
+
+  test('no sunlit glass and no beam SHGC with the sun at or below the horizon (AnnualSeries.sunlitFraction, .shgc)', () => {
+    // A wall facing east: at sunrise the sun is in front of it while still below the horizon.
+    for (const surfaceAzimuth of [90, 270]) {
+      const year = annualOfPrepared(prepareWindow(baseSpec({ surfaceAzimuth })));
+      let inFrontBelow = 0;
+      const found = new Mismatches();
+      for (let i = 0; i < year.hours; i++) {
+        if (year.sunAltitude[i] > 0) continue;
+        found.check(year.sunlitFraction[i] === 0 && year.shgc[i] === 0, () => `row ${i}: sunlit ${year.sunlitFraction[i]}, SHGC ${year.shgc[i]}`);
+        if (year.incidence[i] >= 90) continue;
+        // The same row worked out alone (no list of daylight hours: the pass checks the sun itself).
+        if (inFrontBelow++ % 50 === 0) {
+          const r = annualRowOfPrepared(prepareWindow(baseSpec({ surfaceAzimuth })), i);
+          found.check(r.sunlitFraction === 0 && r.shgc === 0, () => `row ${i} alone: sunlit ${r.sunlitFraction}, SHGC ${r.shgc}`);
+        }
+      }
+      expect(inFrontBelow).toBeGreaterThan(100);
+      expect(found.list.slice(0, 5)).toEqual([]);
+    }
+  });
+
+  test('one-row calls at sites whose numbers run together (4° N 15° E, 41° N 5° E) each take their own site’s sun', () => {
+    const a = prepareWindow(baseSpec({ site: { latitude: 4, longitude: 15, utcOffset: 1, elevation: 100 } }));
+    const b = prepareWindow(baseSpec({ site: { latitude: 41, longitude: 5, utcOffset: 1, elevation: 100 } }));
+    const ya = annualOfPrepared(a);
+    const yb = annualOfPrepared(b);
+    for (const row of [NOON_ROW, NOON_ROW + 1]) {
+      expect(annualRowOfPrepared(a, row).sunAltitude).toBe(ya.sunAltitude[row]);
+      expect(annualRowOfPrepared(b, row).sunAltitude).toBe(yb.sunAltitude[row]);
+    }
+    expect(ya.sunAltitude[NOON_ROW]).not.toBe(yb.sunAltitude[NOON_ROW]);
+  });
+});
+
+const NOON_ROW = 171 * 24 + 12;
