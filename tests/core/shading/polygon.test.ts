@@ -125,3 +125,51 @@ describe('rectangleStripArea', () => {
     );
   });
 });
+
+describe('edges the first mutation run of polygon.ts found untested', () => {
+  test('a quadrilateral with a repeated vertex is its triangle: area ½·base·height, wherever the repeat falls', () => {
+    // Elementary geometry: the triangle (0,0), (2,0), (0,2) has area ½ · 2 · 2 = 2. The repeated vertex
+    // gives an edge of length 0, whose half-plane must keep everything. The buffer starts full of
+    // non-zero values, so a half-plane left partly unwritten would show.
+    const triangles = [
+      [0, 0, 2, 0, 0, 2, 0, 2], // repeat on the third edge
+      [0, 0, 0, 0, 2, 0, 0, 2], // repeat on the first edge
+    ];
+    for (const t of triangles) {
+      const planes = new Float64Array(36).fill(7);
+      expect(writeQuadHalfPlanes(planes, 0, t[0], t[1], t[2], t[3], t[4], t[5], t[6], t[7])).toBe(true);
+      expect(Math.abs(unionAreaInRectangle(-1, -1, 3, 3, planes, 1) - 2)).toBeLessThan(TOL);
+    }
+  });
+
+  test('a rectangle given right to left or top to bottom is empty (x1 ≤ x0 or y1 ≤ y0 gives 0, as documented)', () => {
+    expect(clippedRectangleArea(2, 0, 1, 1, new Float64Array(0), [], [], 0)).toBe(0);
+    expect(clippedRectangleArea(0, 1, 1, 0, new Float64Array(0), [], [], 0)).toBe(0);
+    expect(rectangleStripArea(2, 0, 1, 1, 1, 1, -9, 9)).toBe(0);
+    expect(rectangleStripArea(0, 1, 1, 0, 1, 1, -9, 9)).toBe(0);
+  });
+
+  test('exactly MAX_HALF_PLANES half-planes are accepted; one more is refused, naming both counts', () => {
+    // Clipping by the same half-plane again changes nothing (A ∩ A = A): 28 copies of x ≤ 0.5 leave
+    // half of the unit square.
+    const planes = new Float64Array(3 * (MAX_HALF_PLANES + 1));
+    for (let k = 0; k < MAX_HALF_PLANES + 1; k++) planes.set([1, 0, 0.5], 3 * k);
+    expect(Math.abs(clippedRectangleArea(0, 0, 1, 1, planes, [0], [MAX_HALF_PLANES], 1) - 0.5)).toBeLessThan(TOL);
+    expect(() => clippedRectangleArea(0, 0, 1, 1, planes, [0], [MAX_HALF_PLANES + 1], 1)).toThrow(`${MAX_HALF_PLANES + 1} half-planes, at most ${MAX_HALF_PLANES}`);
+  });
+
+  test('the union takes 0 to 3 quadrilaterals; a count outside that is refused, naming it', () => {
+    const planes = new Float64Array(48);
+    expect(() => unionAreaInRectangle(0, 0, 1, 1, planes, 4)).toThrow('4 quadrilaterals, at most 3');
+    expect(() => unionAreaInRectangle(0, 0, 1, 1, planes, -1)).toThrow(RangeError);
+  });
+
+  test('a rectangle away from the origin, wholly inside the shape, is wholly covered (covered area = its own area)', () => {
+    // [−1, 1] × [−1, 1] inside the square [−2, 2]²: the covered part is the whole rectangle, 2 × 2 = 4.
+    const planes = quads([-2, -2, 2, -2, 2, 2, -2, 2]);
+    expect(Math.abs(unionAreaInRectangle(-1, -1, 1, 1, planes, 1) - 4)).toBeLessThan(TOL);
+    // And [1, 3] × [1, 2] inside [0, 4] × [0, 4]: 2 × 1 = 2.
+    const far = quads([0, 0, 4, 0, 4, 4, 0, 4]);
+    expect(Math.abs(unionAreaInRectangle(1, 1, 3, 2, far, 1) - 2)).toBeLessThan(TOL);
+  });
+});
