@@ -15,6 +15,7 @@ import { summarizeAnnual, summarizeWindowYear } from '../../../src/core/gain/ann
 import { designDayDryBulb } from '../../../src/core/gain/outdoorTemperature';
 import { prepareWindow } from '../../../src/core/gain/prepared';
 import { SharedYears } from '../../../src/core/gain/sharedYear';
+import { sunlitFraction } from '../../../src/core/shading/sunlit';
 import { Mismatches } from '../../support/mismatches';
 import { baseSpec } from './gainFixtures';
 
@@ -279,3 +280,21 @@ describe('the columns of a year', () => {
 });
 
 const NOON_ROW = 171 * 24 + 12;
+
+describe('the shading of a window that is not its own mirror image', () => {
+  test('with one fin, every daylight row’s sunlit fraction is sunlitFraction at the row’s sun (the checked shadow polygons)', () => {
+    const shading = { leftFin: { projection: 0.5, gap: 0.1, extensionAbove: 0.2, extensionBelow: 0 }, overhang: { projection: 0.4, gap: 0.1, extensionLeft: 0, extensionRight: 0.6 } };
+    const spec = baseSpec({ shading, surfaceAzimuth: 160 });
+    const year = annualOfPrepared(prepareWindow(spec));
+    const found = new Mismatches();
+    let partly = 0;
+    for (let i = 0; i < year.hours; i++) {
+      if (!(year.sunAltitude[i] > 0 && year.incidence[i] < 90)) continue;
+      const checked = sunlitFraction({ width: spec.width, height: spec.height }, shading, year.sunAltitude[i], year.sunAzimuth[i], spec.surfaceAzimuth);
+      if (checked > 0 && checked < 1) partly++;
+      found.check(Math.abs(year.sunlitFraction[i] - checked) <= 1e-9, () => `row ${i}: ${year.sunlitFraction[i]} against ${checked}`);
+    }
+    expect(partly).toBeGreaterThan(500);
+    expect(found.list.slice(0, 5)).toEqual([]);
+  });
+});
