@@ -104,7 +104,7 @@ export function rangeText(
   const u = unitSuffix(unit);
   if (min !== undefined && max !== undefined) {
     if (options.exclusiveMin || options.exclusiveMax) {
-      return `must be ${kind} ${options.exclusiveMin ? 'above' : 'from'} ${min} and ${options.exclusiveMax ? 'below' : 'up to'} ${max}${u}`;
+      return `must be ${kind} ${options.exclusiveMin ? 'above' : 'of at least'} ${min} and ${options.exclusiveMax ? 'below' : 'up to'} ${max}${u}`;
     }
     return `must be ${kind} from ${min} to ${max}${u}`;
   }
