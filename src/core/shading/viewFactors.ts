@@ -50,7 +50,7 @@
  *   ∫ A(α + β y) dy = [B(τ)] / β with B(τ) = ½ τ atan τ (B' = A);
  * - azimuth ψ: Gauss–Legendre (3 nodes, panels of at most 0.5 rad) between the azimuths where the
  *   height integral jumps or has a kink for every height — the wall normal, the reveal's jambs, a
- *   fin's depth limits, where an overhang end's bound takes over from its depth bound, the skyline's
+ *   fin's outer depth limit (its inner one lies beyond the jamb's), where an overhang end's bound takes over from its depth bound, the skyline's
  *   sector edges;
  * - width x: Gauss–Legendre (3 nodes, panels of at most W/3) between the abscissas where two of those
  *   jumps meet (the line integral has a kink there) or an overhang end stands over the glass, and
@@ -377,7 +377,7 @@ function collectBreaks(g: ShadowPlan, pieces: SkylinePieces, x: number, y: numbe
 
 /**
  * The azimuths where the integrand of a glass line jumps or has a kink whatever the height: the wall
- * normal, a fin's depth limits, where the overhang's end bound takes over from its depth bound, and
+ * normal, a fin's outer depth limit, where the overhang's end bound takes over from its depth bound, and
  * the skyline's sector edges.
  */
 function structuralBreaks(g: ShadowPlan, pieces: SkylinePieces, x: number, lo: number, hi: number): void {
@@ -395,7 +395,6 @@ function structuralBreaks(g: ShadowPlan, pieces: SkylinePieces, x: number, lo: n
 function finDepthBreaks(e: number, P: number, R: number, lo: number, hi: number): void {
   if (e === 0) return;
   addBreak(atan(e / (P + R)), lo, hi);
-  if (R > 0) addBreak(atan(e / R), lo, hi);
 }
 
 /** The azimuth range a glass point at x sees through the reveal (the whole front half without one). */
@@ -739,11 +738,15 @@ function lineIntegrals(g: ShadowPlan, pieces: SkylinePieces, x: number, q: ViewF
   out[2] = band;
 }
 
-/** A fin's break azimuths (where its depth test switches) and its two height bounds (k·sin ψ). */
+/**
+ * A fin's break azimuth (where its depth test switches) and its two height bounds (k·sin ψ). Only the
+ * outer depth limit |tan ψ| = |e| / (P + R) can fall inside the range the reveal leaves open: the inner
+ * one, |e| / R, lies at or beyond the jamb's own limit (|e| = gap + x ≥ x for the left fin, and
+ * likewise on the right), so it is never a break.
+ */
 function finBreaks(e: number, yb: number, yt: number, P: number, R: number, lo: number, hi: number, nl: number): number {
   if (e === 0) return nl;
   addBreak(atan(e / (P + R)), lo, hi);
-  if (R > 0) addBreak(atan(e / R), lo, hi);
   lBounds[nl++] = yb / e;
   lBounds[nl++] = yt / e;
   return nl;
@@ -770,7 +773,7 @@ function crossingsWithLevel(t: number, from: number, to: number, lo: number, hi:
 
 /**
  * Abscissas of the glass where the line integral has a kink: where two azimuths at which the
- * integrand jumps (the reveal's jambs, a fin's depth limits, the skyline's sector edges, the wall
+ * integrand jumps (the reveal's jambs, a fin's outer depth limit, the skyline's sector edges, the wall
  * normal) meet, and where an overhang end stands over the glass; plus a grading towards each jamb
  * at the scale of the reveal depth, where the view changes fastest. Ascending, inside (0, W).
  */
@@ -802,11 +805,9 @@ function glassBreaks(g: ShadowPlan, pieces: SkylinePieces): number[] {
   }
   if (g.leftFin) {
     form(g.lfX, g.lfP + R, -1);
-    if (R > 0) form(g.lfX, R, -1);
   }
   if (g.rightFin) {
     form(g.rfX, g.rfP + R, 1);
-    if (R > 0) form(g.rfX, R, 1);
   }
   if (g.overhang) {
     add(g.ohXl);
@@ -922,6 +923,7 @@ export function windowViewFactors(window: WindowOpening, shading: Shading, surfa
   const hit = CACHE.get(key);
   if (hit !== undefined) return { ...hit };
   const vf = viewFactorsUnchecked(window, shading, surfaceAzimuth);
+  // Stryker disable next-line ConditionalExpression,EqualityOperator: the bound on the cache's size changes memory use, never a value (every entry is the calculation's own result)
   if (CACHE.size >= CACHE_SIZE) CACHE.delete(CACHE.keys().next().value as string);
   CACHE.set(key, Object.freeze({ ...vf }));
   return vf;
@@ -967,8 +969,13 @@ export function pointViewFactors(window: WindowOpening, shading: Shading, surfac
   requireFinite('surfaceAzimuth', surfaceAzimuth, '°');
   requireRange('x', x, 0, window.width);
   requireRange('y', y, 0, window.height);
+  return pointViewFactorsUnchecked(window, shading, surfaceAzimuth, x, y);
+}
+
+/** The view factors of one glass point whose arguments are already checked, with a chosen quadrature (the tests' finer grids). */
+export function pointViewFactorsUnchecked(window: WindowOpening, shading: Shading, surfaceAzimuth: number, x: number, y: number, quadrature: ViewFactorQuadrature = DEFAULT_QUADRATURE): { sky: number; ground: number; horizonShare: number } {
   const g = shadowPlanOf(window.width, window.height, shading);
-  pointIntegrals(g, skylinePieces(shading.skyline, surfaceAzimuth), x, y, DEFAULT_QUADRATURE, scratch);
+  pointIntegrals(g, skylinePieces(shading.skyline, surfaceAzimuth), x, y, quadrature, scratch);
   const f = finish(scratch[0] / PI, scratch[1] / PI, scratch[2] / (2 * BAND_A));
   return { sky: f.sky, ground: f.ground, horizonShare: f.horizonShare };
 }
