@@ -153,7 +153,7 @@ describe('argument help in functions.json: unit and allowed range', () => {
       case 'number':
       case 'numberList':
         if (p.min === undefined || p.max === undefined) out.push('no lower or upper bound');
-        else if (!/from -?[\d.e+]+ (and )?(to|below)|above -?[\d.e+]+ and (up to|below)/.test(text)) out.push('the range is not stated');
+        else if (!/from -?[\d.e+]+ (and )?(to|below)|(above|of at least) -?[\d.e+]+ and (up to|below)/.test(text)) out.push('the range is not stated');
         if (p.unit ? !text.includes(p.unit) : !text.includes('no unit')) out.push('neither its unit nor "no unit"');
         for (const [name, unit] of DIMENSIONS) if (name.test(p.name) && p.unit !== unit) out.push(`measured in ${unit} but declares ${p.unit ?? 'no unit'}`);
         break;
