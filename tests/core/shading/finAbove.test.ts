@@ -17,3 +17,14 @@ test('a left fin from 1.2 to 2 above a 1 × 1 window casts the hand-worked 0.05 
   const f = sunlitFraction({ width: 1, height: 1 }, shading, beta * deg, 180 - gamma * deg, 180);
   expect(Math.abs(f - 0.95)).toBeLessThan(1e-9);
 });
+
+test('the mirror image: a right fin from 1.2 to 2 above a 1 × 1 window with the sun to the right casts 0.05 (a = 0.5, b = 0.2, P = 2)', () => {
+  // The fin edge x = 1 shifted by (−a·P, −b·P) = (−1, −0.4): its lower edge runs from (1, 1.2) to (0, 0.8),
+  // the mirror of the case above, so the shaded part is the same 0.05 (worked by hand as above).
+  const gamma = Math.atan(0.5);
+  const beta = Math.atan(0.2 * Math.cos(gamma));
+  const deg = 180 / Math.PI;
+  const shading = { rightFin: { projection: 2, gap: 0, extensionAbove: 1, extensionBelow: -1.2 } };
+  const f = sunlitFraction({ width: 1, height: 1 }, shading, beta * deg, 180 - gamma * deg, 180);
+  expect(Math.abs(f - 0.95)).toBeLessThan(1e-9);
+});
