@@ -3,8 +3,8 @@
  * single point of the glass behind a skyline, the refusals of a missing window or device given as
  * `null` (a script or a JSON file can send one), a fin shortened to exactly nothing, and the unit in
  * the prepared function's refusal. The expected values follow from the documented conventions
- * (docs/conventions.md: a skyline hides the sun below its elevation; a device's extensions may shorten
- * it down to nothing but not beyond).
+ * (docs/conventions.md, window shading geometry: a skyline hides the sun below its elevation; a fin's
+ * extensions may shorten it down to no length but not beyond).
  */
 import { pointSunlit, prepareShading, sunlitFraction } from '../../../src/core/shading/sunlit';
 import type { Shading } from '../../../src/core/shading/types';
