@@ -3,6 +3,7 @@
  * test inputs (a plausible window and clear sky), not reference values.
  */
 import type { WindowSpec } from '../../../src/core/gain/window';
+import { EVERY_DEVICE_SHADING } from '../../support/shadedWindow';
 
 export function baseSpec(overrides: Partial<WindowSpec> = {}): WindowSpec {
   return {
@@ -25,13 +26,7 @@ export function baseSpec(overrides: Partial<WindowSpec> = {}): WindowSpec {
 
 export function shadedSpec(overrides: Partial<WindowSpec> = {}): WindowSpec {
   return baseSpec({
-    shading: {
-      overhang: { projection: 0.6, gap: 0.2, extensionLeft: 0.3, extensionRight: 0.3 },
-      leftFin: { projection: 0.4, gap: 0.1, extensionAbove: 0.2, extensionBelow: 0 },
-      rightFin: { projection: 0.4, gap: 0.1, extensionAbove: 0.2, extensionBelow: 0 },
-      revealDepth: 0.1,
-      skyline: [5, 10, 20, 15, 0, 0, 5, 30],
-    },
+    shading: structuredClone(EVERY_DEVICE_SHADING),
     ...overrides,
   });
 }

@@ -15,6 +15,7 @@
 import { DEFAULT_QUADRATURE, pointViewFactors, pointViewFactorsUnchecked, viewFactorsUnchecked, windowViewFactors } from '../../../src/core/shading/viewFactors';
 import type { Shading } from '../../../src/core/shading/types';
 import { expectArgumentError } from '../../support/expectError';
+import { EVERY_DEVICE_SHADING, EVERY_DEVICE_WINDOW } from '../../support/shadedWindow';
 
 const { abs, atan, sin, max } = Math;
 
@@ -43,14 +44,8 @@ const CASES: Case[] = [
   { name: 'a reveal and a skyline', window: { width: 1.2, height: 1.5 }, shading: { revealDepth: 0.25, skyline: [5, 10, 20, 15, 0, 3, 5, 30] }, azimuth: 200 },
   {
     name: 'every device, a reveal and a skyline',
-    window: { width: 2, height: 1.5 },
-    shading: {
-      overhang: { projection: 0.6, gap: 0.2, extensionLeft: 0.3, extensionRight: 0.3 },
-      leftFin: { projection: 0.4, gap: 0.1, extensionAbove: 0.2, extensionBelow: 0 },
-      rightFin: { projection: 0.4, gap: 0.1, extensionAbove: 0.2, extensionBelow: 0 },
-      revealDepth: 0.1,
-      skyline: [5, 10, 20, 15, 0, 0, 5, 30],
-    },
+    window: EVERY_DEVICE_WINDOW,
+    shading: EVERY_DEVICE_SHADING,
     azimuth: 200,
   },
 ];
