@@ -50,8 +50,8 @@
  *   ∫ A(α + β y) dy = [B(τ)] / β with B(τ) = ½ τ atan τ (B' = A);
  * - azimuth ψ: Gauss–Legendre (3 nodes, panels of at most 0.5 rad) between the azimuths where the
  *   height integral jumps or has a kink for every height — the wall normal, the reveal's jambs, a
- *   fin's outer depth limit (its inner one lies beyond the jamb's), where an overhang end's bound takes over from its depth bound, the skyline's
- *   sector edges;
+ *   fin's outer depth limit (its inner one lies beyond the jamb's), where an overhang end's bound
+ *   takes over from its depth bound, the skyline's sector edges;
  * - width x: Gauss–Legendre (3 nodes, panels of at most W/3) between the abscissas where two of those
  *   jumps meet (the line integral has a kink there) or an overhang end stands over the glass, and
  *   graded towards each jamb (W/4, W/16, W/64), where devices and reveal faces meet the glass's edge
@@ -333,11 +333,6 @@ const cBounds = new Float64Array(3);
 const lBounds = new Float64Array(6);
 
 /**
- * The open sky, ground and band of one glass point: ∫ cos ψ (∫ cos²h dh) dψ over the open directions,
- * written into `out` [sky, ground, band] (divide sky and ground by π for view factors; band by 2 A(tan 6.5°)
- * for the share).
- */
-/**
  * Adds the azimuths at which one glass point's column changes form (module comment) to the break list.
  */
 function collectBreaks(g: ShadowPlan, pieces: SkylinePieces, x: number, y: number, lo: number, hi: number): void {
@@ -377,8 +372,8 @@ function collectBreaks(g: ShadowPlan, pieces: SkylinePieces, x: number, y: numbe
 
 /**
  * The azimuths where the integrand of a glass line jumps or has a kink whatever the height: the wall
- * normal, a fin's outer depth limit, where the overhang's end bound takes over from its depth bound, and
- * the skyline's sector edges.
+ * normal, a fin's outer depth limit, where the overhang's end bound takes over from its depth bound,
+ * and the skyline's sector edges.
  */
 function structuralBreaks(g: ShadowPlan, pieces: SkylinePieces, x: number, lo: number, hi: number): void {
   const R = g.reveal;
