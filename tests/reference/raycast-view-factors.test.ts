@@ -9,11 +9,8 @@
  * the sky (or the ground). Directions drawn with density cos θ / π over the hemisphere in front of
  * the glass (a uniform point on the unit disc in the glass plane, lifted onto the hemisphere —
  * Malley's method) make F the probability that a ray reaches the sky: F ≈ (rays to the open sky) / N.
- * A ray reaches the sky when it points above the horizon (world z > 0), meets no triangle, and passes
- * above the skyline at its compass azimuth (the skyline is not geometry: its definition, an
- * elevation by azimuth sector, docs/conventions.md#skyline, is applied to the ray's altitude and
- * azimuth); the ground when it points below the horizon and meets no triangle. The glass average comes from drawing the ray's
- * start on the glass too.
+ * Which rays reach the sky or the ground: tests/reference/raycast-hemisphere.ts. The glass average
+ * comes from drawing the ray's start on the glass too.
  *
  * The horizon band share (directions 0…6.5° above the horizon, weighted by cos θ) is estimated
  * apart: azimuth ψ from the wall normal with sin ψ uniform on (−1, 1) (density ∝ cos ψ), elevation h
@@ -30,8 +27,8 @@
  * 0.010 and is allowed 0.02. The PRNG is seeded, so the test is repeatable.
  */
 import { windowViewFactors } from '../../src/core/shading/viewFactors';
-import type { Fin, Shading } from '../../src/core/shading/types';
-import { RaycastScene, seededRandom } from './raycast-scene';
+import { classifyDirection, randomShadedWindow } from './raycast-hemisphere';
+import { RaycastScene, seededRandom, type RaycastWindow } from './raycast-scene';
 
 const GEOMETRIES = 200;
 const GLASS = 16;
@@ -41,51 +38,11 @@ const VIEW_TOLERANCE = 0.003;
 const MEAN_BIAS = 0.00015;
 const BAND_TOLERANCE = 0.02;
 // Math's functions as locals: under Jest a global lookup in a hot loop costs ~25× a local one.
-const { PI, sqrt, sin, cos, asin, atan2, min, max, floor } = Math;
+const { PI, sqrt, sin, cos, max } = Math;
 const D2R = PI / 180;
 const BAND_TOP = 6.5;
 
-interface Geometry {
-  width: number;
-  height: number;
-  shading: Shading;
-  surfaceAzimuth: number;
-}
-
-function randomGeometry(rnd: () => number): Geometry {
-  const u = (lo: number, hi: number) => lo + (hi - lo) * rnd();
-  const width = u(0.4, 3);
-  const height = u(0.4, 3);
-  const proj = () => (rnd() < 0.1 ? 0 : u(0.05, 1.5));
-  const gap = () => (rnd() < 0.3 ? 0 : u(0, 0.6));
-  const shading: Shading = {};
-  if (rnd() < 0.7) shading.overhang = { projection: proj(), gap: gap(), extensionLeft: u(-0.45 * width, 1.5), extensionRight: u(-0.45 * width, 1.5) };
-  const fin = (): Fin => ({ projection: proj(), gap: gap(), extensionAbove: u(-0.45 * height, 1), extensionBelow: u(-0.45 * height, 1) });
-  if (rnd() < 0.5) shading.leftFin = fin();
-  if (rnd() < 0.5) shading.rightFin = fin();
-  if (rnd() < 0.5) shading.revealDepth = u(0, 0.4);
-  if (rnd() < 0.4) shading.skyline = Array.from({ length: 1 + floor(rnd() * 24) }, () => (rnd() < 0.4 ? 0 : u(0, 40)));
-  return { width, height, shading, surfaceAzimuth: u(0, 360) };
-}
-
-/** Skyline elevation [°] at a compass azimuth [°] (sector k covers [k·360/n, (k+1)·360/n)). */
-function skylineAt(skyline: readonly number[] | undefined, azimuth: number): number {
-  if (!skyline) return 0;
-  const a = ((azimuth % 360) + 360) % 360;
-  const k = min(skyline.length - 1, floor((a * skyline.length) / 360));
-  return skyline[k];
-}
-
-/** Does a world direction (unit, z up) from glass point (x, y) reach the open sky (1), the open ground (2), or neither (0)? */
-function classify(scene: RaycastScene, g: Geometry, x: number, y: number, dx: number, dy: number, dz: number): 0 | 1 | 2 {
-  if (!scene.directionOpen(x, y, dx, dy, dz)) return 0;
-  if (dz <= 0) return 2;
-  const altitude = asin(min(1, dz)) / D2R;
-  const azimuth = atan2(dx, dy) / D2R; // compass: x east, y north
-  return altitude < skylineAt(g.shading.skyline, azimuth) ? 0 : 1;
-}
-
-function rayCast(g: Geometry, rnd: () => number): { sky: number; ground: number; band: number } {
+function rayCast(g: RaycastWindow, rnd: () => number): { sky: number; ground: number; band: number } {
   const scene = new RaycastScene(g);
   const { right, up, normal } = scene.frame();
   let sky = 0;
@@ -105,7 +62,7 @@ function rayCast(g: Geometry, rnd: () => number): { sky: number; ground: number;
           const dx = a * right[0] + b * up[0] + c * normal[0];
           const dy = a * right[1] + b * up[1] + c * normal[1];
           const dz = a * right[2] + b * up[2] + c * normal[2];
-          const kind = classify(scene, g, x, y, dx, dy, dz);
+          const kind = classifyDirection(scene, g, x, y, dx, dy, dz);
           if (kind === 1) sky++;
           else if (kind === 2) ground++;
         }
@@ -132,7 +89,7 @@ function rayCast(g: Geometry, rnd: () => number): { sky: number; ground: number;
       const dx = a * right[0] + b * up[0] + c * normal[0];
       const dy = a * right[1] + b * up[1] + c * normal[1];
       const dz = a * right[2] + b * up[2] + c * normal[2];
-      if (classify(scene, g, x, y, dx, dy, dz) === 1) open++;
+      if (classifyDirection(scene, g, x, y, dx, dy, dz) === 1) open++;
       drawn++;
     }
   }
@@ -150,7 +107,7 @@ describe('view factors agree with a three.js ray-cast hemisphere integration', (
     let sumSq = 0;
     let shaded = 0;
     for (let k = 0; k < GEOMETRIES; k++) {
-      const g = randomGeometry(rnd);
+      const g = randomShadedWindow(rnd);
       const ours = windowViewFactors({ width: g.width, height: g.height }, g.shading, g.surfaceAzimuth);
       const ref = rayCast(g, sampler);
       const dSky = ours.sky - ref.sky;
