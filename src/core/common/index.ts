@@ -8,5 +8,5 @@
  */
 export { acosClamped, asinClamped, DEG, RAD, wrap180, wrap360 } from './angles';
 export { describeValue, MONTHLY_LIST_RULE, rangeText, requireFinite, requireRange, SunpaneError } from './errors';
-export { hemisphericalAverage } from './hemispherical';
+export { gaussLegendre, hemisphericalAverage } from './hemispherical';
 export { type MonotoneCubic, monotoneCubic } from './monotoneCubic';

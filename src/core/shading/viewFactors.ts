@@ -73,7 +73,7 @@
  *
  * Vertical windows only, like the sunlit fraction ({@link requireVerticalForShading}).
  */
-import { RAD, requireFinite, requireRange, wrap180, wrap360 } from '../common';
+import { gaussLegendre as gaussLegendreRule, RAD, requireFinite, requireRange, wrap180, wrap360 } from '../common';
 import { type ShadowPlan, shadowPlanOf } from './shadowPlan';
 import { skylineSkyViewFactor } from './skyline';
 import { requireShading, type WindowOpening } from './sunlit';
@@ -173,38 +173,14 @@ export interface ViewFactorQuadrature {
 /** The settings used (docs/diffuse-shading.md; the error test holds them to {@link VIEW_FACTOR_ERROR}). */
 export const DEFAULT_QUADRATURE: Readonly<ViewFactorQuadrature> = Object.freeze({ glassPanels: 3, glassNodes: 3, panelWidth: 0.5, panelNodes: 3 });
 
-// Gauss–Legendre nodes and weights on [−1, 1] (Golub–Welsch by Newton on P_n, done once per order).
+// Gauss–Legendre nodes and weights on [−1, 1] (the common rule, checked against Abramowitz &
+// Stegun), kept per order.
 const GL_CACHE: { x: Float64Array; w: Float64Array }[] = [];
 function gaussLegendre(n: number): { x: Float64Array; w: Float64Array } {
   const hit = GL_CACHE[n];
   if (hit) return hit;
-  const x = new Float64Array(n);
-  const w = new Float64Array(n);
-  for (let i = 0; i < n; i++) {
-    let z = cos((PI * (i + 0.75)) / (n + 0.5));
-    for (let it = 0; it < 100; it++) {
-      let p0 = 1;
-      let p1 = z;
-      for (let k = 2; k <= n; k++) {
-        const p2 = ((2 * k - 1) * z * p1 - (k - 1) * p0) / k;
-        p0 = p1;
-        p1 = p2;
-      }
-      const dp = (n * (z * p1 - p0)) / (z * z - 1);
-      const dz = p1 / dp;
-      z -= dz;
-      if (Math.abs(dz) < 1e-16) {
-        x[i] = z;
-        w[i] = 2 / ((1 - z * z) * dp * dp);
-        break;
-      }
-      x[i] = z;
-      w[i] = 2 / ((1 - z * z) * dp * dp);
-    }
-  }
-  const rule = { x, w };
-  GL_CACHE[n] = rule;
-  return rule;
+  const { nodes, weights } = gaussLegendreRule(n);
+  return (GL_CACHE[n] = { x: nodes, w: weights });
 }
 
 // Scratch (one evaluation at a time; no allocation per azimuth).
