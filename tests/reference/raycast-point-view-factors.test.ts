@@ -109,3 +109,29 @@ describe('point view factors agree with a three.js ray cast from the point', () 
     expect(worstBand).toBeLessThan(BAND_TOLERANCE);
   });
 });
+
+describe('points exactly below an end of an overhang narrower than the glass', () => {
+  // Directly below an end, the rays toward that end's side pass it at every elevation: the
+  // overhang blocks only on the other side. Random points never fall exactly there.
+  const cases: RaycastWindow[] = [
+    { width: 2, height: 1.5, shading: { overhang: { projection: 0.6, gap: 0.2, extensionLeft: -0.4, extensionRight: -0.5 } }, surfaceAzimuth: 180 },
+    { width: 1.2, height: 2, shading: { overhang: { projection: 1, gap: 0, extensionLeft: -0.3, extensionRight: -0.3 }, revealDepth: 0.1 }, surfaceAzimuth: 75 },
+  ];
+  test.each(cases.flatMap((g) => {
+    const o = g.shading.overhang!;
+    return [
+      { g, x: -o.extensionLeft, side: 'left' },
+      { g, x: g.width + o.extensionRight, side: 'right' },
+    ];
+  }))(`$side end at x = $x, three heights: within ${VIEW_TOLERANCE}`, ({ g, x }) => {
+    const scene = new RaycastScene(g);
+    const sampler = seededRandom(11);
+    for (const y of [0.1 * g.height, 0.5 * g.height, 0.9 * g.height]) {
+      const ours = pointViewFactors({ width: g.width, height: g.height }, g.shading, g.surfaceAzimuth, x, y);
+      const ref = rayCastPoint(g, scene, x, y, sampler);
+      expect(abs(ours.sky - ref.sky)).toBeLessThan(VIEW_TOLERANCE);
+      expect(abs(ours.ground - ref.ground)).toBeLessThan(VIEW_TOLERANCE);
+      expect(abs(ours.horizonShare - ref.band)).toBeLessThan(BAND_TOLERANCE);
+    }
+  });
+});
