@@ -211,7 +211,6 @@ function openMeasure(lo: number, hi: number, count: number): number {
       m++;
     }
   }
-  if (m === 0) return A(hi) - A(lo);
   let cur = lo;
   let total = 0;
   for (let i = 0; i < m; i++) {
@@ -273,21 +272,27 @@ function evaluateColumn(g: ShadowPlan, x: number, y: number, s: number, c: numbe
   }
   if (s < 0 && g.leftFin) finBlock(g.lfX - x, g.lfYb - y, g.lfYt - y, g.lfP, R, s, c);
   else if (s > 0 && g.rightFin) finBlock(g.rfX - x, g.rfYb - y, g.rfYt - y, g.rfP, R, s, c);
+  // A point on the glass has lo ≤ 0 ≤ hi: the reveal's sill and head bounds never pass the horizontal.
   const devices = blockCount;
-  column.ground = openMeasure(lo, hi < 0 ? hi : 0, devices);
+  column.ground = openMeasure(lo, 0, devices);
   if (t > 0) pushBlock(0, t);
-  const skyLo = lo > 0 ? lo : 0;
-  column.sky = openMeasure(skyLo, hi, blockCount);
-  column.band = openMeasure(skyLo, hi < TAN_BAND ? hi : TAN_BAND, blockCount);
+  column.sky = openMeasure(0, hi, blockCount);
+  column.band = openMeasure(0, hi < TAN_BAND ? hi : TAN_BAND, blockCount);
 }
 
-/** The interval a fin at offset e (= x_f − x, on the side of s) blocks, if the ray meets it within its depth. */
+/**
+ * The interval a fin at offset e (= x_f − x, on the side of s: the callers pass the left fin for s < 0
+ * and the right one for s > 0) blocks, if the ray meets it within its depth.
+ */
 function finBlock(e: number, yb: number, yt: number, P: number, R: number, s: number, c: number): void {
-  // |tan ψ| between |e| / (P + R) and |e| / R, written without dividing by c: |s| (P + R) ≥ |e| c ≥ |s| R.
+  // The ray meets the fin's plane within its depth when |tan ψ| ≥ |e| / (P + R), written without
+  // dividing by c: |s| (P + R) ≥ |e| c. The inner limit |tan ψ| ≤ |e| / R is never passed inside the
+  // azimuths the reveal leaves open (|e| = gap + x ≥ x, as for the breaks). A fin in the point's own
+  // plane (e = 0) blocks nothing: every ray toward it leaves that plane at once.
+  if (e === 0) return;
   const as = s < 0 ? -s : s;
   const ae = e < 0 ? -e : e;
-  if (e === 0 || (e < 0) !== (s < 0)) return;
-  if (as * (P + R) < ae * c || as * R > ae * c) return;
+  if (as * (P + R) < ae * c) return;
   const k = s / e; // > 0
   pushBlock(yb * k, yt * k);
 }
