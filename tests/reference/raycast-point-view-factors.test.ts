@@ -4,20 +4,22 @@
  * reach the sky or the ground: tests/reference/raycast-hemisphere.ts. Nothing here uses Sunpane's
  * view-factor code, its azimuth columns or its (ψ, τ) coordinates.
  *
- * The view factors of single glass points (`pointViewFactors`, the path a designer uses to see how the
- * sky view changes over the glass) by ray casting from that point. F = (1/π) ∫ cos θ dω over the
- * directions that reach the sky (or the ground); directions drawn with density cos θ / π (a uniform
- * point on the unit disc in the glass plane lifted onto the hemisphere, Malley's method) make F the
- * share of rays that get there. The horizon band share (0…6.5° above the horizon, weighted by cos θ):
- * sin ψ uniform on (−1, 1), h uniform on (0, 6.5°) kept with probability cos²h, as in
- * raycast-view-factors.test.ts.
+ * The view factors of single glass points (`pointViewFactors`, the core's function for one point of
+ * the glass, the independent path the window's glass average is checked against) by ray casting from
+ * that point. F = (1/π) ∫ cos θ dω over the directions that reach the sky (or the ground); directions
+ * drawn with density cos θ / π (a uniform point on the unit disc in the glass plane lifted onto the
+ * hemisphere, Malley's method) make F the share of rays that get there. The horizon band share
+ * (0…6.5° above the horizon, weighted by cos θ): sin ψ uniform on (−1, 1), h uniform on (0, 6.5°)
+ * kept with probability cos²h, as in raycast-view-factors.test.ts.
  *
  * Sampling and tolerance. DISC × DISC disc cells (jittered stratified: 25 600 rays) per point and
  * BAND × BAND for the band. Stratification leaves variance only in the cells a visibility edge
- * crosses. Over these 120 points the spread of (ray cast − Sunpane) measured a standard deviation of
- * 0.0002 and a worst case of 0.00066 for the view factors, 0.0022 for the band share (its rays are
- * fewer); the view factors are allowed 0.0012 (6σ), their mean signed difference over the 240 values
- * 0.00008 (6σ of a mean of 240: a systematic bias shows there first), the band share 0.006. The PRNG is seeded, so the test is repeatable.
+ * crosses. Over the 120 random points the spread of (ray cast − Sunpane) measured a standard
+ * deviation of 0.0002 and a worst case of 0.00066 for the view factors, 0.0022 for the band share (its
+ * rays are fewer); the view factors are allowed 0.0012 (6σ), their mean signed difference over the
+ * 240 values 0.00008 (6σ of a mean of 240: a systematic bias shows there first), the band share
+ * 0.006. The points exactly below an overhang's end are held to the same tolerances. The PRNGs are
+ * seeded, so the test is repeatable.
  */
 import { pointViewFactors } from '../../src/core/shading/viewFactors';
 import { classifyDirection, randomShadedWindow } from './raycast-hemisphere';
