@@ -1,8 +1,8 @@
 /**
  * Source: three.js 0.187.0 ray casting (tests/reference/raycast-scene.ts) — the pieces of a
  * hemisphere integration by ray casting that the window and the point view-factor references share:
- * random shaded windows, and the classification of one ray from a glass point as reaching the open
- * sky, the open ground or neither. Nothing here uses Sunpane's view-factor code, its azimuth columns
+ * random shaded windows, the classification of one ray from a glass point as reaching the open sky,
+ * the open ground or neither, and the tally of the differences with their tolerances. Nothing here uses Sunpane's view-factor code, its azimuth columns
  * or its (ψ, τ) coordinates.
  *
  * Used by tests/reference/raycast-view-factors.test.ts and raycast-point-view-factors.test.ts (not a
@@ -55,4 +55,54 @@ export function classifyDirection(scene: RaycastScene, g: RaycastWindow, x: numb
   const altitude = asin(min(1, dz)) / D2R;
   const azimuth = atan2(dx, dy) / D2R; // compass: x east, y north
   return altitude < skylineAt(g.shading.skyline, azimuth) ? 0 : 1;
+}
+
+/** Sunpane's view factors and the ray cast's estimate of them, for {@link RaycastTally}. */
+interface Pair {
+  ours: { sky: number; ground: number; horizonShare: number };
+  ref: { sky: number; ground: number; band: number };
+}
+
+/**
+ * The differences (Sunpane − ray cast) over many cases: the worst sky or ground difference with its
+ * case, the worst band-share difference, the mean signed difference and its spread, and how many
+ * cases the devices actually shade.
+ */
+export class RaycastTally {
+  private worst = 0;
+  private worstText = '';
+  private worstBand = 0;
+  private bias = 0;
+  private sumSq = 0;
+  private values = 0;
+  private cases = 0;
+  private shaded = 0;
+
+  /** Adds one case; `shaded` says whether its devices cut the view by more than 5 %; `what` names it. */
+  add({ ours, ref }: Pair, shaded: boolean, what: () => string): void {
+    const dSky = ours.sky - ref.sky;
+    const dGround = ours.ground - ref.ground;
+    this.bias += dSky + dGround;
+    this.sumSq += dSky * dSky + dGround * dGround;
+    this.values += 2;
+    this.cases++;
+    if (shaded) this.shaded++;
+    const d = Math.max(Math.abs(dSky), Math.abs(dGround));
+    if (d > this.worst) {
+      this.worst = d;
+      this.worstText = `${what()}: ours ${JSON.stringify(ours)}, ray cast ${JSON.stringify(ref)}`;
+    }
+    this.worstBand = Math.max(this.worstBand, Math.abs(ours.horizonShare - ref.band));
+  }
+
+  /**
+   * Most cases must be shaded; every view factor within `view` of the ray cast (the failure names the
+   * worst case and the spread); the mean signed difference within `meanBias`; the band share within `band`.
+   */
+  expectWithin(view: number, meanBias: number, band: number): void {
+    expect(this.shaded).toBeGreaterThan(this.cases / 2);
+    if (this.worst > view) throw new Error(`worst |difference| ${this.worst} (spread σ ${Math.sqrt(this.sumSq / this.values)}) for ${this.worstText}`);
+    expect(Math.abs(this.bias / this.values)).toBeLessThan(meanBias);
+    expect(this.worstBand).toBeLessThan(band);
+  }
 }
