@@ -653,12 +653,17 @@ function addCrossing(p: number, q: number, H: number, nb: number): number {
   return nb + 1;
 }
 
-/** Sets the fin's two lines τ = (y_f − y)·s/e if the ray meets the fin within its depth; false if not. */
+/**
+ * Sets the fin's two lines τ = (y_f − y)·s/e if the ray meets the fin within its depth; false if not.
+ * As in {@link finBlock}, the caller passes only the fin on the side the ray turns to (e and s share
+ * their sign) and the inner depth limit |e| / R is never passed inside the azimuths the reveal
+ * leaves open, so only the outer limit is tested.
+ */
 function finLines(e: number, yb: number, yt: number, P: number, R: number, s: number, c: number): boolean {
+  if (e === 0) return false;
   const as = s < 0 ? -s : s;
   const ae = e < 0 ? -e : e;
-  if (e === 0 || (e < 0) !== (s < 0)) return false;
-  if (as * (P + R) < ae * c || as * R > ae * c) return false;
+  if (as * (P + R) < ae * c) return false;
   const k = s / e; // > 0
   la[L_FIN_LO] = yb * k;
   lb[L_FIN_LO] = -k;
