@@ -1,7 +1,7 @@
 /**
  * Edges of src/core/shading/sunlit.ts that its mutation run (2026-12-04, 85.3 %) found unchecked: a
- * single point of the glass behind a skyline, the refusals of a missing window or device given as
- * `null` (a script or a JSON file can send one), a fin shortened to exactly nothing, and the unit in
+ * single point of the glass behind a skyline, the refusals of a window or device given as `null` or
+ * as a number or a string (a script or a JSON file can send one), a fin shortened to exactly nothing, and the unit in
  * the prepared function's refusal. The expected values follow from the documented conventions
  * (docs/conventions.md, window shading geometry: a skyline hides the sun below its elevation; a fin's
  * extensions may shorten it down to no length but not beyond).
@@ -35,6 +35,14 @@ describe('refusals', () => {
   test('an overhang or a fin given as null is refused naming its projection', () => {
     expectArgumentError(() => sunlitFraction(window, { overhang: null as never }, 30, 180, 180), 'overhangProjection', /must be an overhang/);
     expectArgumentError(() => sunlitFraction(window, { leftFin: null as never }, 30, 180, 180), 'leftFinProjection', /must be a fin/);
+  });
+
+  test('a window, an overhang or a fin given as a number or a string is refused as not one, not as a missing length', () => {
+    // A worksheet cell or a JSON value of the wrong kind: the message must say what was expected, the
+    // same words as for null (a number passing the kind check would be refused only as "width undefined").
+    expectArgumentError(() => sunlitFraction(2 as never, {}, 30, 180, 180), 'width', /must be a window of width and height above 0/);
+    expectArgumentError(() => sunlitFraction(window, { overhang: 0.5 as never }, 30, 180, 180), 'overhangProjection', /must be an overhang/);
+    expectArgumentError(() => sunlitFraction(window, { rightFin: 'fin' as never }, 30, 180, 180), 'rightFinProjection', /must be a fin/);
   });
 
   test('the prepared function refuses a surface azimuth that is not finite, with its unit', () => {
