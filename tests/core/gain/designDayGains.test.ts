@@ -89,6 +89,19 @@ describe('design-day gains', () => {
     }
   });
 
+  test('a peak well inside a daylight-saving period (begun 30 days before, ending 30 days after) is an hour later on the clock under either convention', () => {
+    // The hour-ending stamp's move by its hour's middle is half an hour, not more: a period that began
+    // 30 days earlier covers the peak either way (the mutation run left 1 · 48 for 1 / 48 alive).
+    for (const timeConvention of ['hourEnding', 'instant'] as const) {
+      const spec = baseSpec({ surfaceAzimuth: 250, timeConvention });
+      const july = designDayGains(spec).months[6];
+      const rule = { start: july.peakStamp - 30, end: july.peakStamp + 30, shift: 1 };
+      const onClock = designDayGains({ ...spec, site: { ...spec.site, daylightSaving: rule } }).months[6];
+      expect(onClock.peakStamp).toBe(july.peakStamp);
+      expect(onClock.peakClockStamp).toBeCloseTo(july.peakStamp + 1 / 24, 9);
+    }
+  });
+
   test('a window without weather, or no window at all, is refused as weather.kind in the same words', () => {
     const words = 'weather.kind = blank is not allowed: design days need a clear-sky model ("ashraeClearSky" or "ineichenClearSky"); give one as the clearSky option';
     const refusal = (spec: unknown) => refusalMessage(() => designDayGains(spec as never)); // a TypeError fails the test
