@@ -281,20 +281,26 @@ function evaluateColumn(g: ShadowPlan, x: number, y: number, s: number, c: numbe
 }
 
 /**
- * The interval a fin at offset e (= x_f − x, on the side of s: the callers pass the left fin for s < 0
- * and the right one for s > 0) blocks, if the ray meets it within its depth.
+ * The slope k = s/e (> 0) of a fin's bounds τ = (y_f − y)·k for a ray at sin ψ = s, cos ψ = c, if the
+ * ray meets the fin within its depth; 0 if it does not. e = x_f − x is the fin's offset on the side of
+ * s (the callers pass the left fin for s < 0 and the right one for s > 0, so e and s share their sign).
+ * The ray meets the fin's plane within its depth when |tan ψ| ≥ |e| / (P + R), written without dividing
+ * by c: |s| (P + R) ≥ |e| c. The inner limit |tan ψ| ≤ |e| / R is never passed inside the azimuths the
+ * reveal leaves open (|e| = gap + x ≥ x, as for the breaks). A fin in the glass point's own plane
+ * (e = 0) blocks nothing: every ray toward it leaves that plane at once.
  */
-function finBlock(e: number, yb: number, yt: number, P: number, R: number, s: number, c: number): void {
-  // The ray meets the fin's plane within its depth when |tan ψ| ≥ |e| / (P + R), written without
-  // dividing by c: |s| (P + R) ≥ |e| c. The inner limit |tan ψ| ≤ |e| / R is never passed inside the
-  // azimuths the reveal leaves open (|e| = gap + x ≥ x, as for the breaks). A fin in the point's own
-  // plane (e = 0) blocks nothing: every ray toward it leaves that plane at once.
-  if (e === 0) return;
+function finSlope(e: number, P: number, R: number, s: number, c: number): number {
+  if (e === 0) return 0;
   const as = s < 0 ? -s : s;
   const ae = e < 0 ? -e : e;
-  if (as * (P + R) < ae * c) return;
-  const k = s / e; // > 0
-  pushBlock(yb * k, yt * k);
+  if (as * (P + R) < ae * c) return 0;
+  return s / e;
+}
+
+/** Blocks the interval of a fin (see {@link finSlope}) for one glass point's column. */
+function finBlock(e: number, yb: number, yt: number, P: number, R: number, s: number, c: number): void {
+  const k = finSlope(e, P, R, s, c);
+  if (k > 0) pushBlock(yb * k, yt * k);
 }
 
 let breakCount = 0;
@@ -648,18 +654,10 @@ function addCrossing(p: number, q: number, H: number, nb: number): number {
   return nb + 1;
 }
 
-/**
- * Sets the fin's two lines τ = (y_f − y)·s/e if the ray meets the fin within its depth; false if not.
- * As in {@link finBlock}, the caller passes only the fin on the side the ray turns to (e and s share
- * their sign) and the inner depth limit |e| / R is never passed inside the azimuths the reveal
- * leaves open, so only the outer limit is tested.
- */
+/** Sets the fin's two lines τ = (y_f − y)·k (see {@link finSlope}) for a glass line; false if the ray misses the fin. */
 function finLines(e: number, yb: number, yt: number, P: number, R: number, s: number, c: number): boolean {
-  if (e === 0) return false;
-  const as = s < 0 ? -s : s;
-  const ae = e < 0 ? -e : e;
-  if (as * (P + R) < ae * c) return false;
-  const k = s / e; // > 0
+  const k = finSlope(e, P, R, s, c);
+  if (!(k > 0)) return false;
   la[L_FIN_LO] = yb * k;
   lb[L_FIN_LO] = -k;
   la[L_FIN_HI] = yt * k;
