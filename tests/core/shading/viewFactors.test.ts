@@ -194,6 +194,27 @@ describe('geometry', () => {
     }
   });
 
+  test('a fine horizon survey (1,440 quarter-degree sectors) behind a 1 µm reveal gives the skyline\'s closed form, for the glass and for a point', () => {
+    // Check: a reveal of 1 µm on a 1.5 m window removes about 1e-6 of the sky, so both integrals must
+    // reproduce the skyline's closed form (skylineSkyViewFactor, per sector (1/π)(sin ψ2 − sin ψ1)
+    // (π/4 − α/2 − sin 2α/4), the view-factor integral of Incropera & DeWitt ch. 13), and the horizon
+    // share of the skyline alone. Alternating elevations keep the 720 sectors in view apart (equal
+    // neighbours are merged), so the integrals run through far more breaks than a coarse skyline.
+    const skyline = Array.from({ length: 1440 }, (_, k) => (k % 2 === 0 ? 2 : 30));
+    const survey = { skyline, revealDepth: 1e-6 };
+    for (const azimuth of [180, 97.3]) {
+      const exact = skylineSkyViewFactor(skyline, azimuth);
+      const alone = windowViewFactors(window, { skyline }, azimuth);
+      const glass = windowViewFactors(window, survey, azimuth);
+      expect(abs(glass.skyRatio - exact)).toBeLessThan(1e-5);
+      expect(abs(glass.groundRatio - 1)).toBeLessThan(1e-5);
+      expect(abs(glass.horizonShare - alone.horizonShare)).toBeLessThan(1e-5);
+      const point = pointViewFactors(window, survey, azimuth, 0.6, 0.5);
+      expect(abs(2 * point.sky - exact)).toBeLessThan(1e-5);
+      expect(abs(point.horizonShare - alone.horizonShare)).toBeLessThan(1e-5);
+    }
+  });
+
   test('random windows, devices and skylines: every value finite and in range (property test)', () => {
     const len = fc.double({ min: 0, max: 50, noNaN: true });
     const ext = fc.double({ min: -2, max: 50, noNaN: true });
