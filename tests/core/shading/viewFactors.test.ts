@@ -245,7 +245,8 @@ describe('the cache of recent windows', () => {
   // geometry gets its own calculation's values (viewFactorsUnchecked, which bypasses the cache), even
   // right after a window that differs from it in one number only. The variants below each change one
   // dimension the view factors depend on, and each is checked to move them, so a key that forgot that
-  // dimension would hand back the previous window's values and fail.
+  // dimension, or wrote two of them so that they run together, would hand back the previous window's
+  // values and fail.
   type Variant = [string, { width: number; height: number }, Shading, number];
   const base = EVERY_DEVICE_SHADING;
   const w = EVERY_DEVICE_WINDOW;
@@ -268,6 +269,8 @@ describe('the cache of recent windows', () => {
     ['reveal depth', w, with_({ revealDepth: 0.3 }), 180],
     ['one skyline sector', w, with_({ skyline: [5, 10, 20, 15, 20, 0, 5, 30] }), 180],
     ['the wall azimuth, with a skyline', w, base, 225],
+    // Written without its commas this skyline reads as the first one's (…20 15 0… and …20 1 50…).
+    ['skyline whose numbers run together alike', w, with_({ skyline: [5, 10, 20, 1, 50, 0, 5, 30] }), 180],
   ];
 
   test.each(variants)('a window that differs only in its %s gets its own values', (_name, window, shading, azimuth) => {
