@@ -204,6 +204,14 @@ describe('the cache answers only for the same window', () => {
   // first's (cached) answer. The reference is the uncached calculation.
   const fin = { projection: 0.4, gap: 0.1, extensionAbove: 0.2, extensionBelow: 0 };
   const overhang = { projection: 0.6, gap: 0.2, extensionLeft: 0.3, extensionRight: 0.3 };
+  /** One pair per changed field of one device on a 1 × 1 window facing north. */
+  function oneFieldPairs<D extends object>(device: 'overhang' | 'leftFin' | 'rightFin', base: D, changes: Partial<D>): [string, Case, Case][] {
+    return Object.entries(changes).map(([field, value]) => [
+      `${device} ${field} changed`,
+      { name: '', window: { width: 1, height: 1 }, shading: { [device]: base }, azimuth: 0 },
+      { name: '', window: { width: 1, height: 1 }, shading: { [device]: { ...base, [field]: value } }, azimuth: 0 },
+    ]);
+  }
   const pairs: [string, Case, Case][] = [
     ['width 12 × height 3 and width 1 × height 23 (the key separates its fields)', { name: '', window: { width: 12, height: 3 }, shading: { overhang }, azimuth: 180 }, { name: '', window: { width: 1, height: 23 }, shading: { overhang }, azimuth: 180 }],
     ['reveal 0.2 and reveal 0.4', { name: '', window: { width: 1, height: 1 }, shading: { revealDepth: 0.2 }, azimuth: 180 }, { name: '', window: { width: 1, height: 1 }, shading: { revealDepth: 0.4 }, azimuth: 180 }],
@@ -212,6 +220,13 @@ describe('the cache answers only for the same window', () => {
     ['overhangs of different extensions', { name: '', window: { width: 1, height: 1 }, shading: { overhang }, azimuth: 0 }, { name: '', window: { width: 1, height: 1 }, shading: { overhang: { ...overhang, extensionLeft: 0 } }, azimuth: 0 }],
     ['left fins of different extensions below', { name: '', window: { width: 1, height: 1 }, shading: { leftFin: fin }, azimuth: 0 }, { name: '', window: { width: 1, height: 1 }, shading: { leftFin: { ...fin, extensionBelow: 0.5 } }, azimuth: 0 }],
     ['right fins of different extensions above', { name: '', window: { width: 1, height: 1 }, shading: { rightFin: fin }, azimuth: 0 }, { name: '', window: { width: 1, height: 1 }, shading: { rightFin: { ...fin, extensionAbove: -0.1 } }, azimuth: 0 }],
+    // The other fields of each device, one pair each, so that a key missing any one of them fails.
+    ...oneFieldPairs('overhang', overhang, { projection: 0.9, gap: 0.5, extensionRight: 0 }),
+    ...oneFieldPairs('leftFin', fin, { projection: 0.8, gap: 0.4, extensionAbove: -0.1 }),
+    ...oneFieldPairs('rightFin', fin, { projection: 0.8, gap: 0.4, extensionBelow: 0.5 }),
+    // Written without their commas these two skylines read alike (…20 15 0… and …20 1 50…); sectors 3
+    // and 4 are both in view of a wall facing south.
+    ['two skylines that read alike without their commas', { name: '', window: { width: 1, height: 1 }, shading: { overhang, skyline: [5, 10, 20, 15, 0, 0, 5, 30] }, azimuth: 180 }, { name: '', window: { width: 1, height: 1 }, shading: { overhang, skyline: [5, 10, 20, 1, 50, 0, 5, 30] }, azimuth: 180 }],
   ];
   test.each(pairs)('%s', (_name, a, b) => {
     const first = windowViewFactors(a.window, a.shading, a.azimuth);
@@ -219,6 +234,14 @@ describe('the cache answers only for the same window', () => {
     expect(first).toEqual(viewFactorsUnchecked(a.window, a.shading, a.azimuth));
     expect(second).toEqual(viewFactorsUnchecked(b.window, b.shading, b.azimuth));
     expect(second).not.toEqual(first);
+  });
+
+  test('a change to a returned result does not reach the next caller', () => {
+    const window = { width: 1, height: 1 };
+    const first = windowViewFactors(window, { overhang }, 180);
+    const sky = first.sky;
+    first.sky = 0.9;
+    expect(windowViewFactors(window, { overhang }, 180).sky).toBe(sky);
   });
 });
 

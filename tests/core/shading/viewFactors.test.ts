@@ -240,58 +240,6 @@ describe('geometry', () => {
   });
 });
 
-describe('the cache of recent windows', () => {
-  // windowViewFactors keeps the last windows' results by geometry. A cache must be invisible: each
-  // geometry gets its own calculation's values (viewFactorsUnchecked, which bypasses the cache), even
-  // right after a window that differs from it in one number only. The variants below each change one
-  // dimension the view factors depend on, and each is checked to move them, so a key that forgot that
-  // dimension, or wrote two of them so that they run together, would hand back the previous window's
-  // values and fail.
-  type Variant = [string, { width: number; height: number }, Shading, number];
-  const base = EVERY_DEVICE_SHADING;
-  const w = EVERY_DEVICE_WINDOW;
-  const with_ = (patch: Partial<Shading>): Shading => ({ ...base, ...patch });
-  const variants: Variant[] = [
-    ['width', { ...w, width: 2.5 }, base, 180],
-    ['height', { ...w, height: 1.2 }, base, 180],
-    ['overhang projection', w, with_({ overhang: { ...base.overhang!, projection: 0.9 } }), 180],
-    ['overhang gap', w, with_({ overhang: { ...base.overhang!, gap: 0.5 } }), 180],
-    ['overhang extension left', w, with_({ overhang: { ...base.overhang!, extensionLeft: 0 } }), 180],
-    ['overhang extension right', w, with_({ overhang: { ...base.overhang!, extensionRight: 1 } }), 180],
-    ['left fin projection', w, with_({ leftFin: { ...base.leftFin!, projection: 0.8 } }), 180],
-    ['left fin gap', w, with_({ leftFin: { ...base.leftFin!, gap: 0.4 } }), 180],
-    ['left fin extension above', w, with_({ leftFin: { ...base.leftFin!, extensionAbove: 0 } }), 180],
-    ['left fin extension below', w, with_({ leftFin: { ...base.leftFin!, extensionBelow: 0.5 } }), 180],
-    ['right fin projection', w, with_({ rightFin: { ...base.rightFin!, projection: 0.8 } }), 180],
-    ['right fin gap', w, with_({ rightFin: { ...base.rightFin!, gap: 0.4 } }), 180],
-    ['right fin extension above', w, with_({ rightFin: { ...base.rightFin!, extensionAbove: 0 } }), 180],
-    ['right fin extension below', w, with_({ rightFin: { ...base.rightFin!, extensionBelow: 0.5 } }), 180],
-    ['reveal depth', w, with_({ revealDepth: 0.3 }), 180],
-    ['one skyline sector', w, with_({ skyline: [5, 10, 20, 15, 20, 0, 5, 30] }), 180],
-    ['the wall azimuth, with a skyline', w, base, 225],
-    // Written without its commas this skyline reads as the first one's (…20 15 0… and …20 1 50…).
-    ['skyline whose numbers run together alike', w, with_({ skyline: [5, 10, 20, 1, 50, 0, 5, 30] }), 180],
-  ];
-
-  test.each(variants)('a window that differs only in its %s gets its own values', (_name, window, shading, azimuth) => {
-    const before = viewFactorsUnchecked(w, base, 180);
-    expect(windowViewFactors(w, base, 180)).toEqual(before);
-    const own = viewFactorsUnchecked(window, shading, azimuth);
-    const moved = max(abs(own.sky - before.sky), abs(own.ground - before.ground), abs(own.horizonShare - before.horizonShare));
-    expect(moved).toBeGreaterThan(1e-6);
-    expect(windowViewFactors(window, shading, azimuth)).toEqual(own);
-    // And the first window again, after the variant: still its own values.
-    expect(windowViewFactors(w, base, 180)).toEqual(before);
-  });
-
-  test('a change to the returned object does not reach the next caller', () => {
-    const first = windowViewFactors(w, base, 180);
-    const sky = first.sky;
-    first.sky = 0.9;
-    expect(windowViewFactors(w, base, 180).sky).toBe(sky);
-  });
-});
-
 describe('bad input', () => {
   const window = { width: 1, height: 1 };
   test('names the argument', () => {
