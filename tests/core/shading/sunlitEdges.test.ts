@@ -45,6 +45,12 @@ describe('refusals', () => {
     expectArgumentError(() => sunlitFraction(window, { rightFin: 'fin' as never }, 30, 180, 180), 'rightFinProjection', /must be a fin/);
   });
 
+  test('a shading set given as a number or a string is refused, not read as no shading', () => {
+    // Without the kind check a number's missing fields read as "no device": a silently bare window.
+    expectArgumentError(() => sunlitFraction(window, 0.5 as never, 30, 180, 180), 'shading', /must be a shading description/);
+    expectArgumentError(() => pointSunlit(window, 'overhang' as never, 0.5, 0.5, 30, 180, 180), 'shading', /must be a shading description/);
+  });
+
   test('the prepared function refuses a surface azimuth that is not finite, with its unit', () => {
     expectArgumentError(() => prepareShading(window, {}, NaN), 'surfaceAzimuth', /must be a finite number in °/);
   });
