@@ -14,15 +14,9 @@
  * 0.256 − 0.128 = 0.128, so the sunlit fraction is 0.872.
  */
 import { pointSunlit, sunlitFraction } from '../../../src/core/shading/sunlit';
+import { sunFromSlopes } from '../../support/sunFromSlopes';
 
-const deg = 180 / Math.PI;
 const window = { width: 1, height: 1 };
-
-/** Sun angles for the slopes a = tan γ and b = tan Ω on a wall facing 180°. */
-function sunFor(a: number, b: number): { altitude: number; azimuth: number } {
-  const gamma = Math.atan(a);
-  return { altitude: Math.atan(b * Math.cos(gamma)) * deg, azimuth: 180 - gamma * deg };
-}
 
 describe('an overhang over the next bay, its shadow thrown across the glass', () => {
   const right = { overhang: { projection: 2, gap: 0, extensionLeft: -1.2, extensionRight: 1 } };
@@ -33,7 +27,7 @@ describe('an overhang over the next bay, its shadow thrown across the glass', ()
     ['right', right, 0.5, (x: number) => x],
     ['left', left, -0.5, (x: number) => 1 - x],
   ] as const)('beside the %s jamb: points shaded and lit as the hand-worked shadow says', (_side, shading, a, mirror) => {
-    const sun = sunFor(a, 0.2);
+    const sun = sunFromSlopes(a, 0.2);
     // [x, y, lit?] in the frame of the right-hand case (mirrored for the left one).
     const points: Array<[number, number, 0 | 1]> = [
       [0.9, 0.7, 0], // edge at y = 0.7 is x = 0.45
@@ -53,7 +47,7 @@ describe('an overhang over the next bay, its shadow thrown across the glass', ()
     ['right', right, 0.5],
     ['left', left, -0.5],
   ] as const)('beside the %s jamb: the whole glass is 0.872 sunlit (area worked by hand)', (_side, shading, a) => {
-    const sun = sunFor(a, 0.2);
+    const sun = sunFromSlopes(a, 0.2);
     expect(Math.abs(sunlitFraction(window, shading, sun.altitude, sun.azimuth, 180) - 0.872)).toBeLessThan(1e-9);
   });
 });

@@ -1,7 +1,7 @@
 /**
  * Edges of src/core/shading/sunlit.ts that its mutation run (2026-12-04, 85.3 %) found unchecked: a
- * single point of the glass behind a skyline, the refusals of a window or device given as `null` or
- * as a number or a string (a script or a JSON file can send one), a fin shortened to exactly nothing, and the unit in
+ * single point of the glass behind a skyline, the refusals of a window, a device or the shading set
+ * given as `null` or as a number or a string (a script or a JSON file can send one), a fin shortened to exactly nothing, and the unit in
  * the prepared function's refusal. The expected values follow from the documented conventions
  * (docs/conventions.md, window shading geometry: a skyline hides the sun below its elevation; a fin's
  * extensions may shorten it down to no length but not beyond).
