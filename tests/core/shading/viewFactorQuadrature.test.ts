@@ -214,6 +214,9 @@ describe('the cache answers only for the same window', () => {
   }
   const pairs: [string, Case, Case][] = [
     ['width 12 × height 3 and width 1 × height 23 (the key separates its fields)', { name: '', window: { width: 12, height: 3 }, shading: { overhang }, azimuth: 180 }, { name: '', window: { width: 1, height: 23 }, shading: { overhang }, azimuth: 180 }],
+    // Width alone and height alone, so that a key missing either one fails (the pair above changes both).
+    ['width 1 and width 2.5, the same height', { name: '', window: { width: 1, height: 1 }, shading: { overhang }, azimuth: 180 }, { name: '', window: { width: 2.5, height: 1 }, shading: { overhang }, azimuth: 180 }],
+    ['height 1 and height 1.8, the same width', { name: '', window: { width: 1, height: 1 }, shading: { overhang }, azimuth: 180 }, { name: '', window: { width: 1, height: 1.8 }, shading: { overhang }, azimuth: 180 }],
     ['reveal 0.2 and reveal 0.4', { name: '', window: { width: 1, height: 1 }, shading: { revealDepth: 0.2 }, azimuth: 180 }, { name: '', window: { width: 1, height: 1 }, shading: { revealDepth: 0.4 }, azimuth: 180 }],
     ['two skylines of the same devices', { name: '', window: { width: 1, height: 1 }, shading: { overhang, skyline: [10, 20] }, azimuth: 180 }, { name: '', window: { width: 1, height: 1 }, shading: { overhang, skyline: [10, 25] }, azimuth: 180 }],
     ['a skyline seen facing south and facing east', { name: '', window: { width: 1, height: 1 }, shading: { overhang, skyline: [10, 20, 30, 0] }, azimuth: 180 }, { name: '', window: { width: 1, height: 1 }, shading: { overhang, skyline: [10, 20, 30, 0] }, azimuth: 90 }],
