@@ -67,6 +67,18 @@ async function setField(page: Page, id: string, value: string): Promise<void> {
   await page.fill(`#${id}`, value);
 }
 
+/**
+ * Presses a run button with the status line emptied first, so that a wait for this run's words
+ * cannot be met by the previous run's status (a bad option after a comparison that "Wrote … options"
+ * once passed `waitForStatus(page, /option/)` before the pane had checked anything).
+ */
+async function startRun(page: Page, button: string): Promise<void> {
+  await page.evaluate(() => {
+    document.getElementById('status')!.textContent = '';
+  });
+  await page.click(button);
+}
+
 async function waitForStatus(page: Page, pattern: RegExp): Promise<string> {
   await page.waitForFunction((src) => new RegExp(src).test(document.getElementById('status')?.textContent ?? ''), pattern.source, { timeout: 90_000 });
   return (await page.textContent('#status')) ?? '';
@@ -171,7 +183,7 @@ describe('the task pane in Chromium with a fake Excel host', () => {
   test("the demo window's year is written to a new sheet in blocks under 5 MB, and matches the core", async () => {
     const page = await openPane();
     await enterDemoWindow(page);
-    await page.click('#run-year');
+    await startRun(page, '#run-year');
     const status = await waitForStatus(page, /Wrote|refused|Fix|Stopped/);
     expect(status).toMatch(/^Wrote "Demo west hourly"/);
 
@@ -278,22 +290,22 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     await page.evaluate(() => (window as never as { __excelHost: { addUserSheet(n: string, v: unknown[][]): void } }).__excelHost.addUserSheet('Window A hourly', [['my own notes', 42]]));
     const before = await host.eval<string>(page, 'host.snapshot("Window A hourly")');
 
-    await page.click('#run-year');
+    await startRun(page, '#run-year');
     await waitForStatus(page, /^Wrote/);
     // The user's sheet kept its name and cells; ours got a free variant, remembered as ours.
     expect(await host.sheetNames(page)).toEqual(['Window A hourly', 'Window A hourly (2)']);
     expect(await host.eval<string>(page, 'host.snapshot("Window A hourly")')).toBe(before);
 
     // Running again proposes "Window A hourly" again — taken by the user's sheet → another free name, no question.
-    await page.click('#run-year');
+    await startRun(page, '#run-year');
     await waitForStatus(page, /Wrote "Window A hourly \(3\)"/);
     expect(await page.isHidden('#confirm-backdrop')).toBe(true);
 
     // Rename the window so that its proposed sheet is one of ours: the pane asks first.
     await setField(page, 'name', 'Window A B');
-    await page.click('#run-year');
+    await startRun(page, '#run-year');
     await waitForStatus(page, /Wrote "Window A B hourly"/);
-    await page.click('#run-year');
+    await startRun(page, '#run-year');
     await page.waitForSelector('#confirm-backdrop:not([hidden])');
     expect(await page.textContent('#confirm-text')).toContain('"Window A B hourly" holds an earlier Sunpane result');
     await page.screenshot({ path: path.join(ARTIFACTS, 'pane-confirm.png') });
@@ -302,12 +314,12 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     const namesAfterCancel = await host.sheetNames(page);
     expect(namesAfterCancel).toEqual(['Window A hourly', 'Window A hourly (2)', 'Window A hourly (3)', 'Window A B hourly']);
 
-    await page.click('#run-year');
+    await startRun(page, '#run-year');
     await page.waitForSelector('#confirm-backdrop:not([hidden])');
     await page.click('#confirm-keep');
     await waitForStatus(page, /Wrote "Window A B hourly \(2\)"/);
 
-    await page.click('#run-year');
+    await startRun(page, '#run-year');
     await page.waitForSelector('#confirm-backdrop:not([hidden])');
     // The safe choice has the focus: Enter keeps both.
     expect(await page.evaluate(() => document.activeElement?.id)).toBe('confirm-keep');
@@ -316,7 +328,7 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     expect((await host.sheetNames(page)).filter((n) => n.startsWith('Window A B'))).toHaveLength(3);
 
     // Replacing takes a deliberate move: Tab to "Replace it" (focus stays inside the dialog), then Enter.
-    await page.click('#run-year');
+    await startRun(page, '#run-year');
     await page.waitForSelector('#confirm-backdrop:not([hidden])');
     await page.keyboard.press('Tab');
     expect(await page.evaluate(() => document.activeElement?.id)).toBe('confirm-replace');
@@ -346,7 +358,7 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     });
     await page.click('#tab-schedule');
     expect(await page.textContent('#schedule-help')).toContain('Overhang projection [m]');
-    await page.click('#run-schedule');
+    await startRun(page, '#run-schedule');
     await waitForStatus(page, /Wrote|problem/);
     const rows = await host.read(page, 'Schedule results', 'A6:I9');
     expect(rows[0]).toEqual(['Window', 'Faces (°)', 'Glass area (m²)', 'Solar gain (kWh/yr)', 'Per glass area (kWh/m²·yr)', 'Peak gain (W)', 'Peak at (hour ending)', 'Mean sunlit fraction, sun on the wall (0-1)', 'Weather missing (h)']);
@@ -379,7 +391,7 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     // A table with a blank width and an SHGC of 1.4.
     const sheetsBefore = await host.sheetNames(page);
     await page.fill('#schedule-table', 'BadList');
-    await page.click('#run-schedule');
+    await startRun(page, '#run-schedule');
     await waitForStatus(page, /problem/);
     const problems = await page.$$eval('#schedule-problems li', (lis) => lis.map((li) => li.textContent));
     expect(problems).toEqual([
@@ -389,7 +401,7 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     expect(await host.sheetNames(page)).toEqual(sheetsBefore);
 
     await page.fill('#schedule-table', 'NoSuchTable');
-    await page.click('#run-schedule');
+    await startRun(page, '#run-schedule');
     expect(await waitForStatus(page, /table/)).toContain('Excel table name: "NoSuchTable" is not allowed');
     await page.close();
   });
@@ -403,7 +415,7 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     await page.fill('#opt-3-label', 'Deep set-back');
     await page.fill('#opt-3-setBack', '0.3');
     await page.screenshot({ path: path.join(ARTIFACTS, 'pane-options.png'), fullPage: true });
-    await page.click('#run-compare');
+    await startRun(page, '#run-compare');
     await waitForStatus(page, /Wrote|refused|Fix|option/);
     const rows = await host.read(page, 'Window A options', 'A8:G12');
     expect(rows[0]).toEqual(['Shading option', 'Solar gain (kWh/yr)', 'Peak gain (W)', 'Cut vs no shading (%)', 'Beam cut by shading (%)', 'Diffuse cut by shading (%)', 'Shaded share, sun on the wall (0-1)']);
@@ -446,8 +458,8 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     // A bad option value is named with the option, and nothing is written.
     await page.fill('#opt-1-overhangDepth', '-1');
     const sheets = await host.sheetNames(page);
-    await page.click('#run-compare');
-    await waitForStatus(page, /option/);
+    await startRun(page, '#run-compare');
+    expect(await waitForStatus(page, /option/)).toBe('An option has a value the calculation cannot use; nothing was written.');
     expect(await page.textContent('#options-msg')).toBe('Option 2 "Deep overhang", Overhang projection (m): -1 is not allowed: must be a number from 0 to 100 m');
     expect(await host.sheetNames(page)).toEqual(sheets);
     await page.close();
@@ -468,7 +480,7 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     await page.setViewportSize({ width: 350, height: 900 });
     await page.click('#tab-schedule');
     await page.fill('#schedule-table', 'RoomList');
-    await page.click('#run-schedule');
+    await startRun(page, '#run-schedule');
     const status = await waitForStatus(page, /Wrote|problem|refused/);
     await page.screenshot({ path: path.join(ARTIFACTS, 'pane-schedule-load-350.png') });
     const rows = await host.read(page, 'Schedule results', 'A6:K8');
@@ -490,7 +502,7 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     await page.selectOption('#roomConstruction', 'medium');
     await page.setViewportSize({ width: 350, height: 900 });
     await page.click('#tab-options');
-    await page.click('#run-compare');
+    await startRun(page, '#run-compare');
     const status = await waitForStatus(page, /Wrote|refused|Fix|option/);
     await page.screenshot({ path: path.join(ARTIFACTS, 'pane-options-load-350.png'), fullPage: true });
     const rows = await host.read(page, 'Window A options', 'A8:J12');
@@ -519,7 +531,7 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     await page.click('#tab-window');
     await page.selectOption('#roomConstruction', '');
     await page.click('#tab-options');
-    await page.click('#run-compare');
+    await startRun(page, '#run-compare');
     // The earlier comparison is the pane's own: it asks, and keeping both writes "Window A options (2)".
     await page.click('#confirm-keep');
     const plain = await waitForStatus(page, /Wrote "Window A options \(2\)"|refused|Fix/);
@@ -551,7 +563,7 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     expect(await page.textContent('#shgc-msg')).toBe('SHGC at normal incidence: 1.4 is not allowed: must be a number from 0 to 1');
     expect(await page.textContent('#latitude-msg')).toBe(inUserWords(expected((s) => (s.site.latitude = 'north' as never)), 'Latitude'));
     expect(await page.getAttribute('#shgc', 'aria-invalid')).toBe('true');
-    await page.click('#run-year');
+    await startRun(page, '#run-year');
     expect(await waitForStatus(page, /Fix/)).toBe('Fix the marked boxes on the Window tab first.');
     expect(await host.sheetNames(page)).toEqual([]);
 
@@ -566,7 +578,7 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     await setField(page, 'dniAddress', 'Weather!A1:A100');
     await setField(page, 'dhiAddress', 'Weather!B1:B100');
     await setField(page, 'year', String(YEAR));
-    await page.click('#run-year');
+    await startRun(page, '#run-year');
     await waitForStatus(page, /weather columns cannot be used/);
     expect(await page.textContent('#dniAddress-msg')).toBe(
       `The weather columns cannot be used: expected 8760 hourly rows for ${YEAR} (one per hour, the first ending at 01:00 on 1 January; a typical year of 8760 or a leap-year file of 8784 is also fitted), found 100, row 1 to row 100; or give the rows their time stamps`,
@@ -599,7 +611,7 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     // IANA database): the hourly sheet is stamped on the clock, each stamp as Node's Intl gives the zone's
     // clock reading for the hour (its middle, then the half hour on, as an hour-ending row is stamped).
     await setField(page, 'daylightSavingShift', '');
-    await page.click('#run-year');
+    await startRun(page, '#run-year');
     // (the status still says the weather columns could not be used: wait for this run's own words)
     expect(await waitForStatus(page, /^Wrote|refused|Fix|Stopped/)).toMatch(/^Wrote "Window A hourly"/);
     const stamps = await host.read(page, 'Window A hourly', 'A5:A8765');
@@ -639,7 +651,7 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     const page = await openPane();
     await setField(page, 'year', String(YEAR));
     await host.eval(page, '(host.state.syncDelayMs = 300)');
-    await page.click('#run-year');
+    await startRun(page, '#run-year');
     await page.waitForFunction(() => /Writing rows: \d+ of 8760/.test(document.getElementById('progress-text')?.textContent ?? ''), undefined, { timeout: 60_000 });
     await page.screenshot({ path: path.join(ARTIFACTS, 'pane-progress.png') });
     await page.click('#cancel');
@@ -670,7 +682,7 @@ describe('the task pane in Chromium with a fake Excel host', () => {
       watch.observe(text, { childList: true, characterData: true, subtree: true });
     });
     const callsBefore = await host.eval<number>(page, 'host.state.calls.length');
-    await page.click('#run-compare');
+    await startRun(page, '#run-compare');
     expect(await waitForStatus(page, /Stopped/)).toBe('Stopped: nothing was written.');
     expect(await host.sheetNames(page)).toEqual([]);
     const ops = await host.eval<string[]>(page, `host.state.calls.slice(${callsBefore}).map(function (c) { return c.op; })`);
@@ -679,7 +691,7 @@ describe('the task pane in Chromium with a fake Excel host', () => {
 
     // To the end: Cancel is switched off while the sheet is written, and the whole table arrives.
     await host.eval(page, '(host.state.syncDelayMs = 150)');
-    await page.click('#run-compare');
+    await startRun(page, '#run-compare');
     await page.waitForFunction(() => /^Writing the comparison/.test(document.getElementById('progress-text')?.textContent ?? ''), undefined, { timeout: 90_000 });
     expect(await page.isDisabled('#cancel')).toBe(true);
     expect(await waitForStatus(page, /^Wrote/)).toMatch(/^Wrote "Window A options" comparing 10 options: least solar gain with "[^"]+", [\d,]+ kWh\/yr \(\d+ % below no shading\); cooling load: no room given — gains only\.$/);
@@ -698,19 +710,19 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     const notes = await host.eval<string>(page, 'host.snapshot("Notes")');
     // the fourth block of hourly rows is refused
     await host.eval(page, "(host.state.failOp = { op: 'range.values', after: 5 })");
-    await page.click('#run-year');
+    await startRun(page, '#run-year');
     expect(await waitForStatus(page, /refused/)).toMatch(/^Excel refused a request while writing "Window A hourly", so the half-written sheet was removed and nothing else changed\. Excel said: GeneralException: /);
     expect(await host.sheetNames(page)).toEqual(['Notes']);
     // the comparison's table cannot be made
     await host.eval(page, "(host.state.failOp = { op: 'tables.add' })");
     await page.click('#tab-options');
-    await page.click('#run-compare');
+    await startRun(page, '#run-compare');
     expect(await waitForStatus(page, /writing "Window A options"/)).toMatch(/^Excel refused a request while writing "Window A options", so the half-written sheet was removed/);
     expect(await host.sheetNames(page)).toEqual(['Notes']);
     expect(await host.eval<string>(page, 'host.snapshot("Notes")')).toBe(notes);
     expect(await host.eval<unknown[]>(page, 'host.tables()')).toEqual([]);
     // once Excel takes the requests again, the same run writes as usual
-    await page.click('#run-compare');
+    await startRun(page, '#run-compare');
     expect(await waitForStatus(page, /^Wrote/)).toMatch(/^Wrote "Window A options" comparing 3 options: /);
     await page.close();
   });
@@ -730,7 +742,7 @@ describe('the task pane in Chromium with a fake Excel host', () => {
       await setField(page, 'timeAddress', `Weather!A1:A${hours + 1}`);
       await setField(page, 'dniAddress', `Weather!B1:B${hours + 1}`);
       await setField(page, 'dhiAddress', `Weather!C1:C${hours + 1}`);
-      await page.click('#run-year');
+      await startRun(page, '#run-year');
       const status = await waitForStatus(page, /Wrote|refused|Fix|cannot|Stopped/);
       if (!/^Wrote/.test(status)) throw new Error(`${dateSystem} workbook: ${status} ${await page.textContent('#dniAddress-msg')} ${await page.textContent('#form-msg')}`);
       expect(status).toMatch(/^Wrote "Window A hourly"/);
@@ -764,7 +776,7 @@ describe('the task pane in Chromium with a fake Excel host', () => {
       await setField(page, 'name', name);
       await setField(page, 'daylightSavingStart', start);
       await setField(page, 'daylightSavingEnd', end);
-      await page.click('#run-year');
+      await startRun(page, '#run-year');
       const status = await waitForStatus(page, new RegExp(`^Wrote "${sheet}"|refused|Fix|Stopped|cannot`));
       if (!status.startsWith(`Wrote "${sheet}"`)) throw new Error(`${start} – ${end}: ${status} ${await page.textContent('#daylightSavingStart-msg')} ${await page.textContent('#daylightSavingEnd-msg')}`);
       return (await host.read(page, sheet, `A6:A${YEAR % 4 === 0 ? 8789 : 8765}`)).map((r) => r[0] as number);
@@ -837,7 +849,7 @@ describe('the task pane in Chromium with a fake Excel host', () => {
   test('the largest table, a leap year of 8784 hourly rows, goes in requests under the 5 MB the stand-in enforces', async () => {
     const page = await openPane();
     await setField(page, 'year', '2024');
-    await page.click('#run-year');
+    await startRun(page, '#run-year');
     await waitForStatus(page, /^Wrote/);
     const syncs = await host.eval<{ bytes: number; refused?: boolean; valueRows: number[] }[]>(page, 'host.state.syncs');
     expect(syncs.some((x) => x.refused)).toBe(false);
@@ -853,7 +865,7 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     await setField(page, 'year', String(YEAR));
     await page.evaluate(() => (window as never as { __excelHost: { addUserSheet(n: string, v: unknown[][]): void } }).__excelHost.addUserSheet('Window A hourly', [['my own workings', 7]]));
     const before = await host.eval<string>(page, 'host.snapshot("Window A hourly")');
-    await page.click('#run-year');
+    await startRun(page, '#run-year');
     expect(await waitForStatus(page, /^Wrote/)).toMatch(/^Wrote "Window A hourly \(2\)"/);
     expect(await page.isHidden('#confirm-backdrop')).toBe(true);
     expect(await host.eval<string>(page, 'host.snapshot("Window A hourly")')).toBe(before);
