@@ -118,7 +118,12 @@ const TRIAL_ALTITUDES: readonly number[] = (() => {
   for (let x = 20; x <= 90; x += 2) a.push(x);
   return a;
 })();
-/** Days tried: near perihelion and aphelion (the model and the limits scale with different E0 formulas). */
+/**
+ * Days tried: near perihelion and aphelion (the model and the limits scale with different E0
+ * formulas). The ratio of the two is not largest on either (ln E0/Sa is 0.00162 near day 252 against
+ * 0.00108 on day 185), so a pair at the beam's edge (τb between about 0.0011 and 0.0016) passes here
+ * and is refused on the days it fails, at the sun asked for ({@link ashraeClearSky}), in the same words.
+ */
 const TRIAL_DAYS = [3, 185];
 
 /**

@@ -43,9 +43,9 @@ function byHand(beta: number, n: number, tb: number, td: number) {
 /**
  * The refusal of a pair states the component past its limit, its value, the sun and the limit:
  * they must be the model's and the limit's at that sun, on one of the two days tried (perihelion
- * and aphelion, where the two E0 formulas differ most).
+ * and aphelion, where the two E0 formulas differ most) or on the day asked for.
  */
-function expectStated(err: SunpaneError, tb: number, td: number, component: 'dni' | 'dhi' | 'ghi') {
+function expectStated(err: SunpaneError, tb: number, td: number, component: 'dni' | 'dhi' | 'ghi', days = [3, 185]) {
   const words = { dni: 'a direct normal irradiance', dhi: 'a diffuse horizontal irradiance', ghi: 'a global horizontal irradiance' }[component];
   expect(err.argument).toBe('tauD');
   expect(err.message.startsWith(`tauD = ${td} is not allowed: must give, with tauB = ${tb}, a clear sky within the physically possible limits (Long & Shi 2008) at every sun altitude (the model gives ${words} of `)).toBe(true);
@@ -55,7 +55,7 @@ function expectStated(err: SunpaneError, tb: number, td: number, component: 'dni
   const [value, limit] = [Number(m![1]), Number(m![4])];
   expect(value).toBeGreaterThanOrEqual(limit); // one decimal: a pair at the edge can print both the same
   const beta = m![3] === undefined ? 0 : Number(m![3]);
-  const matches = [3, 185].some((n) => {
+  const matches = days.some((n) => {
     const h = byHand(beta, n, tb, td);
     return Math.abs(h[component] - value) <= 0.051 && Math.abs(h.limit[component] - limit) <= 0.051;
   });
@@ -93,6 +93,34 @@ describe('ASHRAE τb/τd pairs past the physically possible limits', () => {
     expect(err.message).toContain('with the sun 7.59° high');
   });
 
+  test('a pair at the edge of the global limit that passes every trial altitude is refused at a sun between two of them', () => {
+    // τb 0.02, τd 1.1706 on day 3: the global passes its limit between the trial altitudes 16° and 16.5°.
+    for (const beta of [16, 16.5]) expect(byHand(beta, 3, 0.02, 1.1706).ghi).toBeLessThan(byHand(beta, 3, 0.02, 1.1706).limit.ghi);
+    const at = byHand(16.28, 3, 0.02, 1.1706);
+    expect(at.ghi).toBeGreaterThan(at.limit.ghi);
+    expect(at.dni).toBeLessThan(at.limit.dni);
+    expect(at.dhi).toBeLessThan(at.limit.dhi);
+    expect(isAcceptedClearSkyPair(0.02, 1.1706)).toBe(true);
+    expect(ashraeClearSky(30, 3, 0.02, 1.1706).ghi).toBeGreaterThan(0);
+    const err = refusal(() => ashraeClearSky(16.28, 3, 0.02, 1.1706));
+    expectStated(err, 0.02, 1.1706, 'ghi');
+    expect(err.message).toContain('with the sun 16.28° high');
+  });
+
+  test('a beam that passes the extraterrestrial value only between the two trial days is refused on the day it does', () => {
+    // The model's E0 (Eq. 4) over Spencer's is largest near day 252, not on either trial day:
+    // ln(E0/Sa) is 0.00162 there, 0.00108 on day 185 and negative on day 3. With τb 0.0013 the
+    // beam stays within Sa at both trial days (sun overhead, m = 1) but not on day 252 at 60°.
+    for (const n of [3, 185]) expect(byHand(90, n, 0.0013, 2).dni).toBeLessThan(spencer(n));
+    const at = byHand(60, 252, 0.0013, 2);
+    expect(at.dni).toBeGreaterThan(at.limit.dni);
+    expect(isAcceptedClearSkyPair(0.0013, 2)).toBe(true);
+    expect(ashraeClearSky(60, 185, 0.0013, 2).dni).toBeGreaterThan(0);
+    const err = refusal(() => ashraeClearSky(60, 252, 0.0013, 2));
+    expectStated(err, 0.0013, 2, 'dni', [252]);
+    expect(err.message).toContain('with the sun 60° high');
+  });
+
   test('a bad pair right after a good one is still judged, whichever of τb and τd changed', () => {
     for (let k = 0; k < 2; k++) {
       expect(() => ashraeClearSky(30, 100, 0.4, 2.3)).not.toThrow();
@@ -122,10 +150,16 @@ describe('ASHRAE τb/τd pairs past the physically possible limits', () => {
         }
         if (!thrown) accepted++;
         // asked twice: cold, and with the pair the last one judged (accepted or not)
-        for (let k = 0; k < 2; k++) if (isAcceptedClearSkyPair(tb, td) === thrown) differ.push(`${tb}/${td}`);
+        for (let k = 0; k < 2; k++) if (isAcceptedClearSkyPair(tb, td) !== !thrown) differ.push(`${tb}/${td}`);
       }
     }
     expect(differ).toEqual([]);
+    // an accepted pair that is no longer the last one judged, and a bad pair sharing τd with the last good one
+    requireClearSkyPair(0.4, 2.3);
+    requireClearSkyPair(0.3, 2);
+    expect(isAcceptedClearSkyPair(0.4, 2.3)).toBe(true);
+    expect(isAcceptedClearSkyPair(0.001, 2)).toBe(false);
+    expect(isAcceptedClearSkyPair(0.3, 0.5)).toBe(false);
     // both verdicts occur on the grid (τd 0.01 is refused at every τb, τb 0.4 with τd 2.3 passes, above)
     expect(accepted).toBeGreaterThan(0);
     expect(accepted).toBeLessThan(18 * 31);
