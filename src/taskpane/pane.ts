@@ -226,6 +226,10 @@ export function createPane(doc: Document, host: PaneHost): void {
   /** What the last weather check had to say (problems within the limit, notes), shown under the form. */
   let weatherLines: string[] = [];
   async function withSheetData(values: FormValues): Promise<{ spec: WindowSpec; data: SheetData; dateSystem: DateSystem } | undefined> {
+    // The run checks the form itself (below); a check still pending from the last edit would come
+    // after the run's own messages and wipe those about the sheet's ranges.
+    if (checkTimer) clearTimeout(checkTimer);
+    checkTimer = undefined;
     weatherLines = [];
     // The workbook's date system first: the daylight-saving boxes' serials and the weather's serial
     // stamps are read, and the pane's date-times written, in it.
