@@ -81,9 +81,9 @@ async function startRun(page: Page, button: string): Promise<void> {
 
 /**
  * The message beside a box once the form's live check (250 ms after the last edit) has said words
- * containing `expected`, or what it says after 10 s. When a test fills two boxes, a check can run between the two fills
- * (a busy machine) and show a message about the half-edited form; waiting only for a non-empty
- * message would read that one.
+ * containing `expected`, or what it says after 10 s. When a test fills two boxes, a check can run
+ * between the two fills (a busy machine) and show a message about the half-edited form; waiting only
+ * for a non-empty message would read that one.
  */
 async function settledMessage(page: Page, id: string, expected: string): Promise<string | null> {
   await page
@@ -629,7 +629,6 @@ describe('the task pane in Chromium with a fake Excel host', () => {
     // clock reading for the hour (its middle, then the half hour on, as an hour-ending row is stamped).
     await setField(page, 'daylightSavingShift', '');
     await startRun(page, '#run-year');
-    // (the status still says the weather columns could not be used: wait for this run's own words)
     expect(await waitForStatus(page, /^Wrote|refused|Fix|Stopped/)).toMatch(/^Wrote "Window A hourly"/);
     const stamps = await host.read(page, 'Window A hourly', 'A5:A8765');
     expect(stamps[0][0]).toBe('Hour ending (local clock time)');
